@@ -1,0 +1,50 @@
+package rules
+
+import "github.com/tremie-dev/tremie/schema"
+
+// Profile holds a project's thresholds and severities. The zero overrides
+// mean every rule runs with its documented defaults.
+type Profile struct {
+	Name string
+	// Values overrides parameters: Values[ruleID][param] in model units.
+	Values map[string]map[string]float64
+	// Severities overrides a rule's default severity.
+	Severities map[string]Severity
+	// Off lists rules switched off for the project.
+	Off map[string]bool
+	// SanitarySeal, by purpose, in metres; read by the sanitary-seal rule.
+	SanitarySeal map[schema.Purpose]schema.Length
+}
+
+// DefaultProfile is the profile with every default in force.
+func DefaultProfile() *Profile { return &Profile{Name: "defaults"} }
+
+func (p *Profile) value(r *Rule, name string, u schema.Units) float64 {
+	if v, ok := p.Values[r.ID][name]; ok {
+		return v
+	}
+	for _, prm := range r.Params {
+		if prm.Name != name {
+			continue
+		}
+		if u.Imperial() && prm.DefaultFt != 0 {
+			switch prm.Kind {
+			case LengthParam:
+				return float64(schema.LengthFrom(prm.DefaultFt, schema.Feet))
+			case DiameterParam:
+				return float64(schema.DiameterFrom(prm.DefaultFt, schema.Inches))
+			}
+		}
+		return prm.Default
+	}
+	panic("rules: rule " + r.ID + " has no parameter " + name)
+}
+
+func (p *Profile) severity(r *Rule) Severity {
+	if s, ok := p.Severities[r.ID]; ok {
+		return s
+	}
+	return r.Severity
+}
+
+func (p *Profile) disabled(r *Rule) bool { return p.Off[r.ID] }
