@@ -1,0 +1,47 @@
+package schema
+
+import (
+	"fmt"
+	"strings"
+)
+
+// Error is one problem in a well file, with its position. Line and Col are
+// 1-based; Col is 0 when only the line is known.
+type Error struct {
+	File string
+	Line int
+	Col  int
+	Key  string // dotted key path, e.g. "fill[2].bottom"; "" if none
+	Msg  string
+}
+
+func (e *Error) Error() string {
+	pos := e.File
+	if e.Line > 0 {
+		pos += fmt.Sprintf(":%d", e.Line)
+		if e.Col > 0 {
+			pos += fmt.Sprintf(":%d", e.Col)
+		}
+	}
+	return pos + ": " + e.Msg
+}
+
+// ErrorList is every problem found in one file, in line order. Load returns
+// one whenever a file is rejected, so a user fixes all at once.
+type ErrorList []*Error
+
+func (l ErrorList) Error() string {
+	parts := make([]string, len(l))
+	for i, e := range l {
+		parts[i] = e.Error()
+	}
+	return strings.Join(parts, "\n")
+}
+
+// First is the first error, for callers that report one line.
+func (l ErrorList) First() *Error {
+	if len(l) == 0 {
+		return nil
+	}
+	return l[0]
+}

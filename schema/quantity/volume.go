@@ -1,0 +1,147 @@
+package quantity
+
+import (
+	"fmt"
+	"sort"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// Slice is a depth range over which a region's cross-section is constant.
+type Slice struct {
+	schema.Interval
+	Area float64 // open area, square metres
+}
+
+// Volume is the slice's volume.
+func (s Slice) Volume() schema.Volume { return schema.Volume(s.Area * float64(s.Thickness())) }
+
+// boundaries returns every depth in [top, bottom] at which a hole
+// diameter, casing or string section starts or ends, with top and bottom,
+// sorted and without repeats.
+func boundaries(w *schema.Well, top, bottom schema.Length) []schema.Length {
+	zs := []schema.Length{top, bottom}
+	add := func(iv schema.Interval) {
+		for _, z := range []schema.Length{iv.Top, iv.Bottom} {
+			if z > top && z < bottom {
+				zs = append(zs, z)
+			}
+		}
+	}
+	for _, b := range w.Boreholes {
+		add(b.Interval)
+	}
+	for _, c := range w.Casings {
+		add(c.Interval)
+	}
+	for _, s := range w.Strings {
+		for _, sec := range s.Sections {
+			add(sec.Interval)
+		}
+	}
+	sort.Slice(zs, func(i, j int) bool { return zs[i] < zs[j] })
+	out := zs[:1]
+	for _, z := range zs[1:] {
+		if z != out[len(out)-1] {
+			out = append(out, z)
+		}
+	}
+	return out
+}
+
+// Slices splits [top, bottom] of a region into constant cross-sections,
+// top down.
+func Slices(w *schema.Well, r Region, top, bottom schema.Length) ([]Slice, error) {
+	if !(top < bottom) {
+		if top == bottom {
+			return nil, nil
+		}
+		return nil, fmt.Errorf("interval top %.3f m is below its bottom %.3f m", float64(top), float64(bottom))
+	}
+	zs := boundaries(w, top, bottom)
+	out := make([]Slice, 0, len(zs)-1)
+	for i := 0; i+1 < len(zs); i++ {
+		mid := (zs[i] + zs[i+1]) / 2
+		a, err := At(w, mid).Area(r)
+		if err != nil {
+			return nil, err
+		}
+		out = append(out, Slice{Interval: schema.Interval{Top: zs[i], Bottom: zs[i+1]}, Area: a})
+	}
+	return out, nil
+}
+
+// AnnularVolume is the volume a fill interval should take: its region's
+// open area integrated from the fill's top to its bottom.
+func AnnularVolume(w *schema.Well, f schema.Fill) (schema.Volume, error) {
+	sl, err := Slices(w, RegionOf(f), f.Top, f.Bottom)
+	if err != nil {
+		return 0, err
+	}
+	var v schema.Volume
+	for _, s := range sl {
+		v += s.Volume()
+	}
+	return v, nil
+}
+
+// RiseTop is the depth the top of a fill should reach once volume v has
+// gone in above its bottom, filling upward through the actual
+// cross-sections. The rise may pass the fill's recorded top; it stops at
+// the top of the region (the shallowest depth where the region still
+// exists, never above ground), and reached reports whether v fitted below
+// there.
+func RiseTop(w *schema.Well, f schema.Fill, v schema.Volume) (top schema.Length, reached bool, err error) {
+	if v <= 0 {
+		return f.Bottom, true, nil
+	}
+	// Walk up slice by slice, from the fill's bottom to the highest depth
+	// the geometry still defines (ground, or the casing's top).
+	ceiling := schema.Length(0)
+	if f.Top < ceiling {
+		ceiling = f.Top
+	}
+	zs := boundaries(w, ceiling, f.Bottom)
+	left := float64(v)
+	for i := len(zs) - 1; i > 0; i-- {
+		lo, hi := zs[i], zs[i-1]
+		a, aerr := At(w, (lo+hi)/2).Area(RegionOf(f))
+		if aerr != nil {
+			if hi >= f.Top {
+				// within the interval itself the geometry must hold
+				return lo, false, aerr
+			}
+			return lo, false, nil // above the interval: the region ends here
+		}
+		room := a * float64(lo-hi)
+		if left <= room {
+			if a == 0 {
+				return lo, true, nil
+			}
+			return lo - schema.Length(left/a), true, nil
+		}
+		left -= room
+	}
+	return zs[0], false, nil
+}
+
+// VolumePerLength is a volume per unit length of pipe or hole: cubic
+// metres per metre (an area, in square metres).
+type VolumePerLength float64
+
+// GallonsPerFoot is US gallons per foot.
+func (v VolumePerLength) GallonsPerFoot() float64 {
+	return float64(v) * schema.MetresPerFoot * 1000 / schema.LitresPerUSGallon
+}
+
+// CubicFeetPerFoot is cubic feet per foot (square feet).
+func (v VolumePerLength) CubicFeetPerFoot() float64 {
+	return float64(v) / (schema.MetresPerFoot * schema.MetresPerFoot)
+}
+
+// LitresPerMetre is litres per metre.
+func (v VolumePerLength) LitresPerMetre() float64 { return float64(v) * 1000 }
+
+// InsideVolumePerLength is the volume inside a pipe per unit length, from
+// its inside diameter: the casing volume used for purging.
+func InsideVolumePerLength(p schema.Pipe) VolumePerLength { return VolumePerLength(circle(p.ID)) }

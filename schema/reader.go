@@ -1,0 +1,349 @@
+package schema
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strings"
+	"time"
+)
+
+// reader walks the generic TOML tree, converting values to model types
+// and collecting every error with its position.
+type reader struct {
+	file string
+	pos  map[string]keyPos
+	errs ErrorList
+}
+
+func (r *reader) errAt(path string, format string, args ...any) {
+	p, ok := r.pos[path]
+	for q := path; !ok && q != ""; q = parentPath(q) {
+		p, ok = r.pos[q]
+	}
+	r.errs = append(r.errs, &Error{File: r.file, Line: p.line, Col: p.col, Key: path, Msg: fmt.Sprintf(format, args...)})
+}
+
+// table is one TOML table being read; it remembers which keys were used so
+// that the rest can be reported as unknown.
+type table struct {
+	r    *reader
+	path string
+	m    map[string]any
+	used map[string]bool
+}
+
+func (r *reader) root(m map[string]any) *table {
+	return &table{r: r, m: m, used: map[string]bool{}}
+}
+
+func (t *table) keyPath(k string) string {
+	if t.path == "" {
+		return k
+	}
+	return t.path + "." + k
+}
+
+func (t *table) get(k string) (any, bool) {
+	t.used[k] = true
+	v, ok := t.m[k]
+	return v, ok
+}
+
+// done reports every key of the table that no reader asked for.
+func (t *table) done() {
+	if t == nil {
+		return
+	}
+	var unknown []string
+	for k := range t.m {
+		if !t.used[k] {
+			unknown = append(unknown, k)
+		}
+	}
+	sort.Strings(unknown)
+	for _, k := range unknown {
+		where := "at top level"
+		if t.path != "" {
+			where = "in [" + stripIndex(t.path) + "]"
+		}
+		t.r.errAt(t.keyPath(k), "unknown key %q %s", k, where)
+	}
+}
+
+func stripIndex(p string) string {
+	var b strings.Builder
+	depth := 0
+	for _, c := range p {
+		switch {
+		case c == '[':
+			depth++
+		case c == ']':
+			depth--
+		case depth == 0:
+			b.WriteRune(c)
+		}
+	}
+	return b.String()
+}
+
+func typeName(v any) string {
+	switch v.(type) {
+	case string:
+		return "a string"
+	case int64:
+		return "an integer"
+	case float64:
+		return "a float"
+	case bool:
+		return "a boolean"
+	case time.Time:
+		return "a date"
+	case []any, []map[string]any:
+		return "an array"
+	case map[string]any:
+		return "a table"
+	}
+	return fmt.Sprintf("%T", v)
+}
+
+func (t *table) str(k string) string {
+	v, ok := t.get(k)
+	if !ok {
+		return ""
+	}
+	s, ok := v.(string)
+	if !ok {
+		t.r.errAt(t.keyPath(k), "%s must be a string, not %s", k, typeName(v))
+	}
+	return s
+}
+
+func (t *table) reqStr(k string) string {
+	if _, ok := t.m[k]; !ok {
+		t.r.errAt(t.path, "missing required key %q in [%s]", k, stripIndex(t.path))
+		t.used[k] = true
+		return ""
+	}
+	s := t.str(k)
+	if strings.TrimSpace(s) == "" {
+		t.r.errAt(t.keyPath(k), "%s must not be empty", k)
+	}
+	return s
+}
+
+// oneOf reads a string that must be one of the allowed values ("" allowed
+// when absent).
+func (t *table) oneOf(k string, allowed ...string) string {
+	s := t.str(k)
+	if s == "" {
+		return ""
+	}
+	for _, a := range allowed {
+		if s == a {
+			return s
+		}
+	}
+	t.r.errAt(t.keyPath(k), "%s = %q is not one of: %s", k, s, strings.Join(allowed, ", "))
+	return ""
+}
+
+// num reads a finite number (integer or float).
+func (t *table) num(k string) (float64, bool) {
+	v, ok := t.get(k)
+	if !ok {
+		return 0, false
+	}
+	var f float64
+	switch x := v.(type) {
+	case int64:
+		f = float64(x)
+	case float64:
+		f = x
+	default:
+		t.r.errAt(t.keyPath(k), "%s must be a number, not %s", k, typeName(v))
+		return 0, false
+	}
+	if math.IsNaN(f) || math.IsInf(f, 0) {
+		t.r.errAt(t.keyPath(k), "%s must be a finite number, not %v", k, f)
+		return 0, false
+	}
+	return f, true
+}
+
+func (t *table) reqNum(k string) float64 {
+	if _, ok := t.m[k]; !ok {
+		t.r.errAt(t.path, "missing required key %q in [%s]", k, stripIndex(t.path))
+		t.used[k] = true
+		return 0
+	}
+	f, _ := t.num(k)
+	return f
+}
+
+// positive reads a number that must be > 0 when present.
+func (t *table) positive(k string) (float64, bool) {
+	f, ok := t.num(k)
+	if ok && f <= 0 {
+		t.r.errAt(t.keyPath(k), "%s must be positive, not %v", k, f)
+		return 0, false
+	}
+	return f, ok
+}
+
+func (t *table) nonNegative(k string) (float64, bool) {
+	f, ok := t.num(k)
+	if ok && f < 0 {
+		t.r.errAt(t.keyPath(k), "%s must not be negative, not %v", k, f)
+		return 0, false
+	}
+	return f, ok
+}
+
+func (t *table) integer(k string) int {
+	v, ok := t.get(k)
+	if !ok {
+		return 0
+	}
+	n, ok := v.(int64)
+	if !ok {
+		t.r.errAt(t.keyPath(k), "%s must be an integer, not %s", k, typeName(v))
+		return 0
+	}
+	if n < 0 || n > 1_000_000 {
+		t.r.errAt(t.keyPath(k), "%s = %d is out of range", k, n)
+		return 0
+	}
+	return int(n)
+}
+
+func (t *table) date(k string) Date {
+	v, ok := t.get(k)
+	if !ok {
+		return Date{}
+	}
+	tm, ok := v.(time.Time)
+	if !ok {
+		t.r.errAt(t.keyPath(k), "%s must be a date such as 2026-03-14, not %s", k, typeName(v))
+		return Date{}
+	}
+	return Date{Year: tm.Year(), Month: tm.Month(), Day: tm.Day()}
+}
+
+// instant reads a date or date-time; hasTime is false for a bare date.
+func (t *table) instant(k string) (time.Time, bool) {
+	v, ok := t.get(k)
+	if !ok {
+		return time.Time{}, false
+	}
+	tm, ok := v.(time.Time)
+	if !ok {
+		t.r.errAt(t.keyPath(k), "%s must be a date or date-time, not %s", k, typeName(v))
+		return time.Time{}, false
+	}
+	hasTime := tm.Hour() != 0 || tm.Minute() != 0 || tm.Second() != 0
+	return time.Date(tm.Year(), tm.Month(), tm.Day(), tm.Hour(), tm.Minute(), tm.Second(), 0, time.UTC), hasTime
+}
+
+func (t *table) strings(k string) []string {
+	v, ok := t.get(k)
+	if !ok {
+		return nil
+	}
+	arr, ok := v.([]any)
+	if !ok {
+		if s, isStr := v.(string); isStr {
+			return []string{s}
+		}
+		t.r.errAt(t.keyPath(k), "%s must be an array of strings, not %s", k, typeName(v))
+		return nil
+	}
+	out := make([]string, 0, len(arr))
+	for _, e := range arr {
+		s, ok := e.(string)
+		if !ok {
+			t.r.errAt(t.keyPath(k), "%s must hold only strings, found %s", k, typeName(e))
+			return nil
+		}
+		out = append(out, s)
+	}
+	return out
+}
+
+func (t *table) numbers(k string) []float64 {
+	v, ok := t.get(k)
+	if !ok {
+		return nil
+	}
+	arr, ok := v.([]any)
+	if !ok {
+		t.r.errAt(t.keyPath(k), "%s must be an array of numbers, not %s", k, typeName(v))
+		return nil
+	}
+	out := make([]float64, 0, len(arr))
+	for _, e := range arr {
+		var f float64
+		switch x := e.(type) {
+		case int64:
+			f = float64(x)
+		case float64:
+			f = x
+		default:
+			t.r.errAt(t.keyPath(k), "%s must hold only numbers, found %s", k, typeName(e))
+			return nil
+		}
+		if math.IsNaN(f) || math.IsInf(f, 0) {
+			t.r.errAt(t.keyPath(k), "%s must hold finite numbers, found %v", k, f)
+			return nil
+		}
+		out = append(out, f)
+	}
+	return out
+}
+
+// sub returns a sub-table, or nil when absent.
+func (t *table) sub(k string) *table {
+	v, ok := t.get(k)
+	if !ok {
+		return nil
+	}
+	m, ok := v.(map[string]any)
+	if !ok {
+		t.r.errAt(t.keyPath(k), "%s must be a table ([%s]), not %s", k, stripIndex(t.keyPath(k)), typeName(v))
+		return nil
+	}
+	return &table{r: t.r, path: t.keyPath(k), m: m, used: map[string]bool{}}
+}
+
+// list returns the entries of an array of tables ([[k]]).
+func (t *table) list(k string) []*table {
+	v, ok := t.get(k)
+	if !ok {
+		return nil
+	}
+	var maps []map[string]any
+	switch x := v.(type) {
+	case []map[string]any:
+		maps = x
+	case []any:
+		for _, e := range x {
+			m, ok := e.(map[string]any)
+			if !ok {
+				t.r.errAt(t.keyPath(k), "%s must be an array of tables ([[%s]]), found %s", k, stripIndex(t.keyPath(k)), typeName(e))
+				return nil
+			}
+			maps = append(maps, m)
+		}
+	case map[string]any:
+		t.r.errAt(t.keyPath(k), "%s must be written [[%s]] (an array of tables), not [%s]", k, stripIndex(t.keyPath(k)), stripIndex(t.keyPath(k)))
+		return nil
+	default:
+		t.r.errAt(t.keyPath(k), "%s must be an array of tables ([[%s]]), not %s", k, stripIndex(t.keyPath(k)), typeName(v))
+		return nil
+	}
+	out := make([]*table, len(maps))
+	for i, m := range maps {
+		out[i] = &table{r: t.r, path: fmt.Sprintf("%s[%d]", t.keyPath(k), i), m: m, used: map[string]bool{}}
+	}
+	return out
+}
