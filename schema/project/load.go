@@ -1,0 +1,207 @@
+package project
+
+import (
+	"errors"
+	"fmt"
+	"io/fs"
+	"os"
+	"path/filepath"
+	"regexp"
+	"strconv"
+	"strings"
+	"time"
+
+	"github.com/BurntSushi/toml"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// ErrNoProject is returned (wrapped) by Load when the directory has no
+// project.toml; callers that accept a bare directory of wells use Default.
+var ErrNoProject = errors.New("no " + FileName)
+
+// fileData is the file's shape; every key the format knows is here, so
+// anything else is reported as unknown.
+type fileData struct {
+	Project struct {
+		Name             string `toml:"name"`
+		Client           string `toml:"client"`
+		Site             string `toml:"site"`
+		Units            string `toml:"units"`
+		Datum            string `toml:"datum"`
+		CoordinateSystem string `toml:"coordinate_system"`
+		Page             string `toml:"page"`
+		Landscape        bool   `toml:"landscape"`
+		Profile          string `toml:"profile"`
+		Logo             string `toml:"logo"`
+		Wells            string `toml:"wells"`
+		Output           string `toml:"output"`
+
+		// title-block fields
+		Consultant string    `toml:"consultant"`
+		PreparedBy string    `toml:"prepared_by"`
+		CheckedBy  string    `toml:"checked_by"`
+		ApprovedBy string    `toml:"approved_by"`
+		Report     string    `toml:"report"`
+		Job        string    `toml:"job"`
+		Revision   string    `toml:"revision"`
+		Issued     any       `toml:"issued"`
+	} `toml:"project"`
+}
+
+// Load reads dir/project.toml (dir may also be the file itself) and the
+// logo it names. Errors carry the file and line.
+func Load(dir string) (*Project, error) {
+	file := dir
+	if st, err := os.Stat(dir); err == nil && st.IsDir() {
+		file = filepath.Join(dir, FileName)
+	} else {
+		dir = filepath.Dir(dir)
+	}
+	data, err := os.ReadFile(file)
+	if err != nil {
+		if errors.Is(err, fs.ErrNotExist) {
+			return nil, fmt.Errorf("%s: %w", file, ErrNoProject)
+		}
+		return nil, &schema.Error{File: file, Msg: fmt.Sprintf("cannot read: %v", unwrapPath(err))}
+	}
+	return Parse(dir, file, data)
+}
+
+// Parse reads a project file's bytes; dir is the project root that
+// relative paths are joined to.
+func Parse(dir, file string, data []byte) (*Project, error) {
+	lines := keyLines(data)
+	var fd fileData
+	md, err := toml.Decode(string(data), &fd)
+	if err != nil {
+		return nil, decodeError(file, lines, err)
+	}
+	if und := md.Undecoded(); len(und) > 0 {
+		k := und[0].String()
+		msg := fmt.Sprintf("unknown key %q", k)
+		if len(und[0]) == 1 {
+			msg = fmt.Sprintf("unknown table or key %q (a project file has only a [project] table)", k)
+		}
+		return nil, &schema.Error{File: file, Line: lines[k], Key: k, Msg: msg}
+	}
+	bad := func(key, format string, args ...any) error {
+		return &schema.Error{File: file, Line: lineOf(lines, key), Key: key, Msg: fmt.Sprintf(format, args...)}
+	}
+	if !md.IsDefined("project") {
+		return nil, &schema.Error{File: file, Line: 1, Msg: "missing [project] table"}
+	}
+	pr := fd.Project
+	if strings.TrimSpace(pr.Name) == "" {
+		return nil, bad("project", "[project] needs a name (name = \"...\")")
+	}
+	p := &Project{
+		Dir:              dir,
+		File:             file,
+		Name:             pr.Name,
+		Client:           pr.Client,
+		Site:             pr.Site,
+		Datum:            pr.Datum,
+		CoordinateSystem: pr.CoordinateSystem,
+		Page:             pr.Page,
+		Landscape:        pr.Landscape,
+		Profile:          pr.Profile,
+		LogoPath:         pr.Logo,
+		Wells:            pr.Wells,
+		Keys:             lines,
+	}
+	switch schema.DepthUnit(pr.Units) {
+	case "", schema.Feet, schema.Metres:
+		p.Units = schema.DepthUnit(pr.Units)
+	default:
+		return nil, bad("project.units", "units must be \"ft\" or \"m\", not %q", pr.Units)
+	}
+	if md.IsDefined("project", "wells") && strings.TrimSpace(pr.Wells) == "" {
+		return nil, bad("project.wells", "wells must name a directory or a glob, e.g. \"wells\" or \"wells/*.toml\"")
+	}
+	if p.Wells == "" {
+		p.Wells = DefaultWells
+	}
+	out := pr.Output
+	if md.IsDefined("project", "output") && strings.TrimSpace(out) == "" {
+		return nil, bad("project.output", "output must name a directory, e.g. \"out\"")
+	}
+	if out == "" {
+		out = DefaultOutput
+	}
+	p.Output = p.Path(out)
+	if pr.Profile != "" {
+		if st, err := os.Stat(p.ProfilePath()); err != nil || st.IsDir() {
+			return nil, bad("project.profile", "rule profile %s not found", p.ProfilePath())
+		}
+	}
+	tb := fd.Project
+	p.TitleBlock = TitleBlock{
+		Consultant:   tb.Consultant,
+		PreparedBy:   tb.PreparedBy,
+		CheckedBy:    tb.CheckedBy,
+		ApprovedBy:   tb.ApprovedBy,
+		ReportNumber: tb.Report,
+		JobNumber:    tb.Job,
+		Revision:     tb.Revision,
+	}
+	if tb.Issued != nil {
+		t, ok := tb.Issued.(time.Time)
+		if name, _ := t.Zone(); !ok || name != "date-local" { // BurntSushi's zone for a TOML local date
+			return nil, bad("project.issued", "issued must be a date such as 2026-03-14, without quotes")
+		}
+		p.TitleBlock.Issued = schema.Date{Year: t.Year(), Month: t.Month(), Day: t.Day()}
+	}
+	if pr.Logo != "" {
+		logo, err := LoadLogo(p.Path(pr.Logo))
+		if err != nil {
+			return nil, &schema.Error{File: file, Line: lineOf(lines, "project.logo"), Key: "project.logo", Msg: err.Error()}
+		}
+		p.Logo = logo
+	}
+	return p, nil
+}
+
+var lineInMsg = regexp.MustCompile(`line (\d+)`)
+
+// decodeError turns a TOML syntax or type error into an Error with a line.
+func decodeError(file string, lines map[string]int, err error) error {
+	var pe toml.ParseError
+	if errors.As(err, &pe) {
+		msg := pe.Message
+		if pe.LastKey != "" && pe.Position.Line == 0 {
+			return &schema.Error{File: file, Line: lineOf(lines, pe.LastKey), Key: pe.LastKey, Msg: msg}
+		}
+		return &schema.Error{File: file, Line: pe.Position.Line, Key: pe.LastKey, Msg: msg}
+	}
+	msg := strings.TrimPrefix(err.Error(), "toml: ")
+	line := 0
+	if m := lineInMsg.FindStringSubmatch(msg); m != nil {
+		line, _ = strconv.Atoi(m[1])
+		msg = strings.TrimSpace(strings.TrimPrefix(msg[strings.Index(msg, m[0])+len(m[0]):], ":"))
+	}
+	return &schema.Error{File: file, Line: line, Msg: msg}
+}
+
+// lineOf is the line of a key, or of its table, or 1.
+func lineOf(lines map[string]int, key string) int {
+	for k := key; k != ""; {
+		if l, ok := lines[k]; ok {
+			return l
+		}
+		i := strings.LastIndexByte(k, '.')
+		if i < 0 {
+			break
+		}
+		k = k[:i]
+	}
+	return 1
+}
+
+func unwrapPath(err error) error {
+	var pe *fs.PathError
+	if errors.As(err, &pe) {
+		return pe.Err
+	}
+	return err
+}

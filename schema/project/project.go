@@ -1,0 +1,95 @@
+// Package project reads a project's project.toml: the settings shared by
+// every well of one site (names, units, page template, rule profile,
+// title-block fields, logo, where the wells are and where outputs go).
+// It knows nothing of rules, layout or files other than its own and the
+// logo it names.
+package project
+
+import (
+	"path/filepath"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// FileName is the project file at a project's root.
+const FileName = "project.toml"
+
+// Defaults for keys the project file leaves out.
+const (
+	DefaultWells  = "wells"
+	DefaultOutput = "out"
+)
+
+// Project is one project file, resolved: paths are joined to Dir.
+type Project struct {
+	Dir  string // the project's root directory
+	File string // path of project.toml
+
+	Name   string
+	Client string
+	Site   string
+
+	// Units is the depth unit of project-wide tables (the construction
+	// summary and the book). "" means: the unit every well shares, or
+	// metres when they differ.
+	Units schema.DepthUnit
+
+	// Datum and CoordinateSystem fill a well's elevation datum and
+	// location system when the well leaves them blank.
+	Datum            string
+	CoordinateSystem string
+
+	Page      string // page template name, "" for the default
+	Landscape bool
+
+	Profile string // path of the rule profile, "" for the defaults
+
+	TitleBlock TitleBlock
+
+	LogoPath string // "" when none
+	Logo     *Logo  // nil when none
+
+	Wells  string // glob or directory of well files, as written
+	Output string // output directory, resolved
+
+	// Keys maps each key path written in the file (e.g. "project.name")
+	// to its line, for messages that name a setting.
+	Keys map[string]int
+}
+
+// TitleBlock holds the title-block fields printed on every sheet.
+type TitleBlock struct {
+	Consultant   string
+	PreparedBy   string
+	CheckedBy    string // also the default of a well's checked_by
+	ApprovedBy   string
+	ReportNumber string
+	JobNumber    string
+	Revision     string
+	Issued       schema.Date // issue date of the set of sheets
+}
+
+// Logo is a checked logo image.
+type Logo struct {
+	Data          []byte
+	Format        string // "png" or "jpeg"
+	Width, Height int    // pixels
+}
+
+// Path joins a project-relative path to the project directory; absolute
+// paths are kept.
+func (p *Project) Path(rel string) string {
+	if rel == "" || filepath.IsAbs(rel) {
+		return rel
+	}
+	return filepath.Join(p.Dir, rel)
+}
+
+// ProfilePath is the rule profile's path, or "" for the defaults.
+func (p *Project) ProfilePath() string { return p.Path(p.Profile) }
+
+// Default returns the project a directory without project.toml gets:
+// every default in force.
+func Default(dir string) *Project {
+	return &Project{Dir: dir, Wells: DefaultWells, Output: filepath.Join(dir, DefaultOutput), Keys: map[string]int{}}
+}
