@@ -38,14 +38,14 @@ type fileData struct {
 		Output           string `toml:"output"`
 
 		// title-block fields
-		Consultant string    `toml:"consultant"`
-		PreparedBy string    `toml:"prepared_by"`
-		CheckedBy  string    `toml:"checked_by"`
-		ApprovedBy string    `toml:"approved_by"`
-		Report     string    `toml:"report"`
-		Job        string    `toml:"job"`
-		Revision   string    `toml:"revision"`
-		Issued     any       `toml:"issued"`
+		Consultant string `toml:"consultant"`
+		PreparedBy string `toml:"prepared_by"`
+		CheckedBy  string `toml:"checked_by"`
+		ApprovedBy string `toml:"approved_by"`
+		Report     string `toml:"report"`
+		Job        string `toml:"job"`
+		Revision   string `toml:"revision"`
+		Issued     any    `toml:"issued"`
 	} `toml:"project"`
 }
 
