@@ -1,0 +1,134 @@
+package quantity
+
+import (
+	"fmt"
+	"math"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// Report is the quantities of one well: a row per fill interval and the
+// volume per length inside each pipe.
+type Report struct {
+	Well  *schema.Well
+	Rows  []Row
+	Pipes []PipeVolume
+}
+
+// Row is one fill interval's arithmetic. Volumes are in cubic metres like
+// every model volume; format them with FormatVolume.
+type Row struct {
+	Index int         // index of the fill in Well.Fills
+	Fill  schema.Fill // the fill itself
+	// Calculated is the annular volume of the interval; Err says why it
+	// could not be computed (then every figure below that needs it is 0).
+	Calculated schema.Volume
+	Err        error
+	// Yield is the volume of one bag in force (HasYield false when the
+	// material has none, e.g. native backfill).
+	Yield    Yield
+	HasYield bool
+	// BagsNeeded is Calculated / Yield, rounded up; BagsExact unrounded.
+	BagsNeeded int
+	BagsExact  float64
+	// BagsPlaced is the recorded bag count (0 if none or given as a volume).
+	BagsPlaced float64
+	// Placed is the volume placed: the recorded volume, or bags x yield;
+	// Recorded is false when the file gives no amount (a planned well).
+	Placed   schema.Volume
+	Recorded bool
+	// Ratio is Placed / Calculated; 0 when either is unknown.
+	Ratio float64
+	Tags  []TagCheck
+}
+
+// TagCheck compares one tag with the top the bags should have reached.
+type TagCheck struct {
+	Tag schema.Tag
+	// Expected is the depth the top should stand at after Tag.AfterBags
+	// bags, filling upward from the interval's bottom. Reached is false
+	// when that much material would overflow the region (Expected is then
+	// the region's top); Err when the geometry fails.
+	Expected schema.Length
+	Reached  bool
+	Err      error
+}
+
+// Off is the tag's depth less the expected one: positive when the tag is
+// deeper than the bags should have left the top (material lost or a wider
+// hole), negative when shallower (a bridge, or a narrower hole).
+func (t TagCheck) Off() schema.Length { return t.Tag.Depth - t.Expected }
+
+// PipeVolume is the volume per length inside one casing or string section.
+type PipeVolume struct {
+	Name     string // casing name, or string name
+	Kind     string // casing kind, or section kind (riser, screen, sump)
+	Path     string
+	Interval schema.Interval
+	Pipe     schema.Pipe
+	Inside   VolumePerLength
+}
+
+// Compute works out every fill's quantities with the given yields (nil
+// for DefaultYields). It never fails as a whole: a fill whose geometry is
+// inconsistent carries its error in Row.Err.
+func Compute(w *schema.Well, y *Yields) *Report {
+	if y == nil {
+		y = DefaultYields()
+	}
+	r := &Report{Well: w, Rows: make([]Row, 0, len(w.Fills))}
+	for i, f := range w.Fills {
+		r.Rows = append(r.Rows, row(w, y, i, f))
+	}
+	for i, c := range w.Casings {
+		r.Pipes = append(r.Pipes, PipeVolume{Name: casingName(c), Kind: string(c.Kind), Path: pathOr(c.Path, fmt.Sprintf("casing[%d]", i)),
+			Interval: c.Interval, Pipe: c.Pipe, Inside: InsideVolumePerLength(c.Pipe)})
+	}
+	for si, s := range w.Strings {
+		for ki, sec := range s.Sections {
+			r.Pipes = append(r.Pipes, PipeVolume{Name: stringName(s), Kind: string(sec.Kind), Path: pathOr(sec.Path, fmt.Sprintf("string[%d].section[%d]", si, ki)),
+				Interval: sec.Interval, Pipe: sec.Pipe, Inside: InsideVolumePerLength(sec.Pipe)})
+		}
+	}
+	return r
+}
+
+func row(w *schema.Well, y *Yields, i int, f schema.Fill) Row {
+	r := Row{Index: i, Fill: f, BagsPlaced: f.Bags, Recorded: f.Recorded()}
+	r.Calculated, r.Err = AnnularVolume(w, f)
+	if r.Err != nil {
+		r.Err = fmt.Errorf("%s: %w", pathOr(f.Path, fmt.Sprintf("fill[%d]", i)), r.Err)
+		r.Calculated = 0
+	}
+	r.Yield, r.HasYield = y.For(f)
+	if r.HasYield && r.Yield.Volume > 0 && r.Err == nil {
+		r.BagsExact = float64(r.Calculated / r.Yield.Volume)
+		r.BagsNeeded = bagsUp(r.BagsExact)
+	}
+	switch {
+	case f.Placed > 0:
+		r.Placed = f.Placed
+	case f.Bags > 0 && r.HasYield:
+		r.Placed = schema.Volume(f.Bags) * r.Yield.Volume
+	}
+	if r.Placed > 0 && r.Calculated > 0 {
+		r.Ratio = float64(r.Placed / r.Calculated)
+	}
+	if r.HasYield && r.Yield.Volume > 0 {
+		for _, t := range f.Tags {
+			tc := TagCheck{Tag: t}
+			tc.Expected, tc.Reached, tc.Err = RiseTop(w, f, schema.Volume(t.AfterBags)*r.Yield.Volume)
+			r.Tags = append(r.Tags, tc)
+		}
+	}
+	return r
+}
+
+// bagsUp rounds a bag count up, forgiving the last part in a million that
+// float arithmetic leaves on an exact count (10.0000000001 is 10 bags).
+func bagsUp(n float64) int {
+	if n <= 0 || math.IsNaN(n) || math.IsInf(n, 0) {
+		return 0
+	}
+	return int(math.Ceil(n - 1e-6))
+}
