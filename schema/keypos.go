@@ -7,7 +7,7 @@ import (
 
 // keyPos is where a key sits in a file: its line and the column its value
 // starts at.
-type keyPos struct{ line, col int }
+type keyPos struct{ line, col, keyCol int }
 
 // scanKeyPositions maps every key path in a TOML text, with array-of-table
 // indices ("string[0].section[1].top"), to its position. The TOML library
@@ -42,7 +42,8 @@ func scanKeyPositions(src string) map[string]keyPos {
 			idx := counts[base]
 			counts[base] = idx + 1
 			current = base + "[" + strconv.Itoa(idx) + "]"
-			out[current] = keyPos{lineNo, strings.Index(line, "[[") + 1}
+			c := strings.Index(line, "[[") + 1
+			out[current] = keyPos{lineNo, c, c}
 			continue
 		}
 		if trimmed[0] == '[' {
@@ -51,7 +52,8 @@ func scanKeyPositions(src string) map[string]keyPos {
 				continue
 			}
 			current = resolveTable(cleanKey(trimmed[1:end]), counts)
-			out[current] = keyPos{lineNo, strings.Index(line, "[") + 1}
+			c := strings.Index(line, "[") + 1
+			out[current] = keyPos{lineNo, c, c}
 			continue
 		}
 		eq := keyEquals(line)
@@ -67,7 +69,8 @@ func scanKeyPositions(src string) map[string]keyPos {
 		for col <= len(line) && (line[col-1] == ' ' || line[col-1] == '\t') {
 			col++
 		}
-		out[path] = keyPos{lineNo, col}
+		keyCol := len(line) - len(strings.TrimLeft(line, " \t")) + 1
+		out[path] = keyPos{lineNo, col, keyCol}
 		rest := line[eq+1:]
 		for _, q := range []string{`"""`, `'''`} {
 			if strings.Count(rest, q)%2 == 1 {

@@ -414,9 +414,6 @@ func (r *reader) fill(t *table, w *Well) Fill {
 	if hasBags && hasVol {
 		r.errAt(t.keyPath("volume"), "give bags or volume placed, not both")
 	}
-	if hasMass && !hasBags {
-		r.errAt(t.keyPath("bag_mass"), "bag_mass without bags")
-	}
 	f.Bags = bags
 	if hasMass {
 		f.BagMass = MassFrom(mass, u.Mass)

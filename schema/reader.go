@@ -16,12 +16,27 @@ type reader struct {
 	errs ErrorList
 }
 
+// errAt records an error at the value of a key path (or its nearest
+// enclosing table).
 func (r *reader) errAt(path string, format string, args ...any) {
+	r.record(path, false, format, args...)
+}
+
+// errAtKey records an error at the key itself, for unknown keys.
+func (r *reader) errAtKey(path string, format string, args ...any) {
+	r.record(path, true, format, args...)
+}
+
+func (r *reader) record(path string, atKey bool, format string, args ...any) {
 	p, ok := r.pos[path]
 	for q := path; !ok && q != ""; q = parentPath(q) {
 		p, ok = r.pos[q]
 	}
-	r.errs = append(r.errs, &Error{File: r.file, Line: p.line, Col: p.col, Key: path, Msg: fmt.Sprintf(format, args...)})
+	col := p.col
+	if atKey {
+		col = p.keyCol
+	}
+	r.errs = append(r.errs, &Error{File: r.file, Line: p.line, Col: col, Key: path, Msg: fmt.Sprintf(format, args...)})
 }
 
 // table is one TOML table being read; it remembers which keys were used so
@@ -67,7 +82,7 @@ func (t *table) done() {
 		if t.path != "" {
 			where = "in [" + stripIndex(t.path) + "]"
 		}
-		t.r.errAt(t.keyPath(k), "unknown key %q %s", k, where)
+		t.r.errAtKey(t.keyPath(k), "unknown key %q %s", k, where)
 	}
 }
 

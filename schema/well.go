@@ -468,13 +468,24 @@ type Waiver struct {
 	Pos Pos
 }
 
-// StickUp is the height of the riser top above ground (positive), taken
-// from the highest string top; 0 when flush or no string.
+// StickUp is the height of the measuring point's pipe above ground: the
+// highest well-string top, or for a well with no string (an open-hole rock
+// well) the highest outer-casing top. It is negative when a flush-mount
+// riser ends below ground, and 0 when there is no pipe at all.
 func (w *Well) StickUp() Length {
+	first := true
 	var h Length
+	consider := func(top Length) {
+		if first || -top > h {
+			h, first = -top, false
+		}
+	}
 	for _, s := range w.Strings {
-		if -s.Top() > h {
-			h = -s.Top()
+		consider(s.Top())
+	}
+	if len(w.Strings) == 0 {
+		for _, c := range w.Casings {
+			consider(c.Top)
 		}
 	}
 	return h

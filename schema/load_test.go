@@ -1,0 +1,256 @@
+package schema
+
+import (
+	"errors"
+	"math"
+	"os"
+	"path/filepath"
+	"regexp"
+	"strconv"
+	"strings"
+	"testing"
+)
+
+// Each file in testdata/bad states the first error it must produce on its
+// first line: "# expect: LINE:COL message" (COL may be empty).
+func TestBadFilesNameTheirLine(t *testing.T) {
+	files, err := filepath.Glob("../testdata/bad/*.toml")
+	if err != nil || len(files) == 0 {
+		t.Fatalf("no bad fixtures: %v", err)
+	}
+	re := regexp.MustCompile(`^# expect: (\d+):(\d*) (.+)$`)
+	for _, f := range files {
+		t.Run(filepath.Base(f), func(t *testing.T) {
+			data, err := os.ReadFile(f)
+			if err != nil {
+				t.Fatal(err)
+			}
+			first := strings.SplitN(string(data), "\n", 2)[0]
+			m := re.FindStringSubmatch(first)
+			if m == nil {
+				t.Fatalf("fixture lacks an expect line: %q", first)
+			}
+			_, err = LoadFile(f)
+			var list ErrorList
+			if !errors.As(err, &list) || len(list) == 0 {
+				t.Fatalf("want an ErrorList, got %v", err)
+			}
+			for _, e := range list {
+				wantLine, _ := strconv.Atoi(m[1])
+				if e.Line != wantLine || !strings.Contains(e.Msg, m[3]) {
+					continue
+				}
+				if m[2] != "" {
+					wantCol, _ := strconv.Atoi(m[2])
+					if e.Col != wantCol {
+						t.Errorf("column: got %d want %d (%s)", e.Col, wantCol, e)
+					}
+				}
+				if e.File != f {
+					t.Errorf("file: got %q want %q", e.File, f)
+				}
+				return
+			}
+			t.Errorf("no error at line %s containing %q; got:\n%v", m[1], m[3], err)
+		})
+	}
+}
+
+func near(a, b, tol float64) bool { return math.Abs(a-b) <= tol }
+
+func TestPipeDimensions(t *testing.T) {
+	cases := []struct {
+		size, sched  string
+		od, wall, id float64 // inches
+	}{
+		{"2", "40", 2.375, 0.154, 2.067}, // ASTM D1785 (from memory): 2-in Sch 40 OD 2.375, wall 0.154, ID 2.067
+		{"2", "80", 2.375, 0.218, 1.939}, // ASTM D1785 (from memory): 2-in Sch 80 wall 0.218
+		{"4", "40", 4.500, 0.237, 4.026}, // ASTM D1785 (from memory): 4-in Sch 40 OD 4.500, wall 0.237
+		{"6", "40", 6.625, 0.280, 6.065}, // ASTM D1785 (from memory): 6-in Sch 40 OD 6.625, wall 0.280
+	}
+	for _, c := range cases {
+		p := Pipe{Size: c.size, Schedule: c.sched}
+		if err := resolvePipe(&p, 0, 0, false, false, Inches); err != nil {
+			t.Fatal(err)
+		}
+		if !near(p.OD.Inches(), c.od, 1e-9) || !near(p.Wall().Inches(), c.wall, 1e-9) || !near(p.ID.Inches(), c.id, 1e-9) {
+			t.Errorf("%s-in Sch %s: OD %.4f wall %.4f ID %.4f", c.size, c.sched, p.OD.Inches(), p.Wall().Inches(), p.ID.Inches())
+		}
+	}
+	// SDR: wall = OD / SDR by definition of the standard dimension ratio
+	// (ASTM F480 / D2241 define SDR = average OD / minimum wall).
+	p := Pipe{Size: "4", SDR: 21}
+	if err := resolvePipe(&p, 0, 0, false, false, Inches); err != nil {
+		t.Fatal(err)
+	}
+	if !near(p.Wall().Inches(), 4.5/21, 1e-9) {
+		t.Errorf("SDR 21 wall %.4f", p.Wall().Inches())
+	}
+	if s, err := NominalSize("DN50"); err != nil || s != "2" {
+		t.Errorf("DN50 -> %q %v", s, err)
+	}
+}
+
+func TestSlotNumbers(t *testing.T) {
+	// common practice: slot number = slot width in thousandths of an inch;
+	// 10-slot = 0.010 in = 0.254 mm, 20-slot = 0.020 in = 0.508 mm.
+	src := `[units]
+depth = "ft"
+[well]
+id = "S"
+purpose = "monitoring"
+total_depth = 30
+[[borehole]]
+top = 0
+bottom = 30
+diameter = 8.25
+[[string]]
+[[string.section]]
+kind = "riser"
+top = -2
+bottom = 10
+size = "2"
+schedule = "40"
+[[string.section]]
+kind = "screen"
+top = 10
+bottom = 20
+slot_number = 10
+[[string.section]]
+kind = "screen"
+top = 20
+bottom = 30
+slot_number = 20
+`
+	w, err := Load("slots.toml", []byte(src))
+	if err != nil {
+		t.Fatal(err)
+	}
+	scr := w.Screens()
+	if len(scr) != 2 {
+		t.Fatalf("screens: %d", len(scr))
+	}
+	if !near(float64(scr[0].Section.Slot), 0.254, 1e-12) || !near(float64(scr[1].Section.Slot), 0.508, 1e-12) {
+		t.Errorf("slots %v %v mm", scr[0].Section.Slot, scr[1].Section.Slot)
+	}
+	if !near(scr[1].Section.SlotNumber(), 20, 1e-9) {
+		t.Errorf("slot number %v", scr[1].Section.SlotNumber())
+	}
+	// The screen inherits the riser's pipe when it gives none.
+	if !near(scr[0].Section.Pipe.OD.Inches(), 2.375, 1e-12) {
+		t.Errorf("inherited OD %v", scr[0].Section.Pipe.OD.Inches())
+	}
+}
+
+func TestExactConversions(t *testing.T) {
+	// NIST SP 811 appendix B: 1 ft = 0.3048 m, 1 in = 25.4 mm exactly.
+	if LengthFrom(1, Feet) != 0.3048 || DiameterFrom(1, Inches) != 25.4 {
+		t.Fatal("ft or in factor")
+	}
+	// NIST Handbook 44 appendix C: 1 US gal = 231 in^3 = 3.785411784 L.
+	in3 := math.Pow(0.0254, 3)
+	if !near(float64(VolumeFrom(1, USGallons)), 231*in3, 1e-15) {
+		t.Errorf("gal = %v m3, want %v", float64(VolumeFrom(1, USGallons)), 231*in3)
+	}
+	// NIST Handbook 44 appendix C: 1 ft^3 = 7.48052 US gal.
+	if !near(VolumeFrom(1, CubicFeet).In(USGallons), 7.48052, 5e-6) {
+		t.Errorf("ft3 = %v gal", VolumeFrom(1, CubicFeet).In(USGallons))
+	}
+	// Round trip in the file's units is exact to a few ulps.
+	if v := LengthFrom(25, Feet).In(Feet); !near(v, 25, 1e-12) {
+		t.Errorf("25 ft round trip %v", v)
+	}
+}
+
+func TestGradation(t *testing.T) {
+	// ASTM E11 (from memory): No. 20 = 0.850 mm, No. 40 = 0.425 mm.
+	lo, hi, err := ParseGradation("20/40")
+	if err != nil || lo != 0.425 || hi != 0.850 {
+		t.Errorf("20/40 -> %v %v %v", lo, hi, err)
+	}
+	// ASTM E11 (from memory): No. 8 = 2.36 mm, No. 16 = 1.18 mm.
+	if lo, hi, err := ParseGradation("#8x#16"); err != nil || lo != 1.18 || hi != 2.36 {
+		t.Errorf("8x16 -> %v %v %v", lo, hi, err)
+	}
+	if _, _, err := ParseGradation("coarse"); err == nil {
+		t.Error("want an error for a non-range")
+	}
+}
+
+func TestUSCS(t *testing.T) {
+	// ASTM D2487 group and dual symbols.
+	for _, s := range []string{"SP", "SP-SM", "CL-ML", "GW-GC", "PT", "CH"} {
+		if !ValidUSCS(s) {
+			t.Errorf("%s rejected", s)
+		}
+	}
+	for _, s := range []string{"SX", "SP-SP", "SP-SM-ML", "", "sand"} {
+		if ValidUSCS(s) {
+			t.Errorf("%q accepted", s)
+		}
+	}
+}
+
+func TestMetricWellAndReferences(t *testing.T) {
+	w, err := LoadFile("../testdata/good/metric-piezometer.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if w.Units.Diameter != Millimetres || w.Units.Mass != Kilograms {
+		t.Errorf("units %+v", w.Units)
+	}
+	// 0.5 mm slot kept in mm.
+	if s := w.Screens()[0].Section; s.Slot != 0.5 || s.ScreenType != ContinuousWrap {
+		t.Errorf("screen %+v", s)
+	}
+	// A level from the measuring point converts with MP - ground = 0.90 m.
+	if d := float64(w.WaterLevels[0].Depth); !near(d, 4.35-0.90, 1e-9) {
+		t.Errorf("water level below ground %v", d)
+	}
+	if !w.WaterLevels[0].Measured.IsZero() && w.WaterLevels[0].HasTime {
+		t.Error("a bare date has no time")
+	}
+	if w.Fills[0].BagMass != 25 || w.Fills[0].Tags[0].Depth != 8.5 {
+		t.Errorf("fill %+v", w.Fills[0])
+	}
+	if got := w.Line("fill[0].tag[0].depth"); got != 44 {
+		t.Errorf("tag depth line %d", got)
+	}
+}
+
+func TestDemoWellsLoad(t *testing.T) {
+	files, _ := filepath.Glob("../cmd/tremie/demo/wells/*.toml")
+	if len(files) < 6 {
+		t.Fatalf("want at least six demo wells, have %d", len(files))
+	}
+	for _, f := range files {
+		if _, err := LoadFile(f); err != nil {
+			t.Errorf("%v", err)
+		}
+	}
+}
+
+func TestKeyPositionsNested(t *testing.T) {
+	src := "[units]\ndepth = \"ft\"\n[[string]]\nname = \"a\"\n[[string.section]]\ntop = 1\n[[string]]\nname = \"b\"\n[[string.section]]\ntop = 2\n[[string.section]]\ntop = 3\n"
+	pos := scanKeyPositions(src)
+	want := map[string]int{"string[0].name": 4, "string[0].section[0].top": 6, "string[1].section[0].top": 10, "string[1].section[1].top": 12}
+	for k, line := range want {
+		if pos[k].line != line {
+			t.Errorf("%s: line %d want %d", k, pos[k].line, line)
+		}
+	}
+}
+
+func FuzzLoad(f *testing.F) {
+	for _, p := range []string{"../testdata/good/metric-piezometer.toml", "../cmd/tremie/demo/wells/NW-1.toml"} {
+		if b, err := os.ReadFile(p); err == nil {
+			f.Add(b)
+		}
+	}
+	f.Fuzz(func(t *testing.T, data []byte) {
+		w, err := Load("fuzz.toml", data)
+		if err == nil && w == nil {
+			t.Fatal("nil well without error")
+		}
+	})
+}

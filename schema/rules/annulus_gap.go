@@ -1,0 +1,77 @@
+package rules
+
+import "github.com/tremie-dev/tremie/schema"
+
+func init() {
+	register(&Rule{
+		ID:    "ANNULUS-GAP",
+		Title: "Annular fill is complete from the bottom of the hole to the surface",
+		Doc: "Every depth of the borehole annulus, from the bottom of the hole to ground surface (or to the " +
+			"bottom of a flush-mount vault), must hold a recorded fill: an unfilled stretch is a void that can " +
+			"collapse or carry water between zones, and an unrecorded one cannot be shown to be sealed. Open-hole " +
+			"intervals have no annulus and are skipped. The annulus inside an outer casing (fills with `within`) " +
+			"must be filled wherever a pipe runs inside that casing.",
+		Severity: Error,
+		Source:   "US EPA, RCRA Ground-Water Monitoring: Draft Technical Guidance (1992): the annulus is filled and sealed from the pack to the surface (from memory)",
+		Run:      runAnnulusGap,
+	})
+}
+
+func runAnnulusGap(p *Pass) {
+	w := p.Well
+	top0 := schema.Length(0)
+	if v := w.Surface.Vault; v != nil && v.Depth > 0 {
+		top0 = v.Depth
+	}
+	var open []schema.Interval
+	for _, o := range w.OpenHoles {
+		open = append(open, o.Interval)
+	}
+	if w.TotalDepth > top0 {
+		expected := subtract([]schema.Interval{{Top: top0, Bottom: w.TotalDepth}}, open)
+		p.reportGaps(boreholeAnnulus, expected)
+	}
+	for _, c := range w.Casings {
+		var expected []schema.Interval
+		for _, seg := range segments(w) {
+			if _, inner, ok := crossSectionAt(w, mid(seg)).Inside(c.Name); ok && len(inner) > 0 {
+				expected = append(expected, seg)
+			}
+		}
+		p.reportGaps(c.Name, expected)
+	}
+}
+
+func (p *Pass) reportGaps(annulus string, expected []schema.Interval) {
+	fs := annulusFills(p.Well, annulus)
+	for _, gap := range subtract(expected, intervalsOf(fs)) {
+		path, between := "well.total_depth", ""
+		above, onTop := fillAbove(fs, gap.Top, nil)
+		below := fillBelow(fs, gap.Bottom)
+		switch {
+		case above != nil && onTop:
+			path = key(above.Path, "bottom")
+		case below != nil:
+			path = key(below.Path, "top")
+		}
+		switch {
+		case above != nil && onTop && below != nil:
+			between = " between " + material(above.Material) + " above and " + material(below.Material) + " below"
+		case below != nil:
+			between = " above " + p.fillLabel(below)
+		case above != nil && onTop:
+			between = " below " + p.fillLabel(above)
+		}
+		p.Reportf(path, depths(gap), "no fill is recorded in %s at %s%s", annulusLabel(annulus), p.span(gap), between)
+	}
+}
+
+// fillBelow returns the fill whose top is at depth d, or nil.
+func fillBelow(fs []*schema.Fill, d schema.Length) *schema.Fill {
+	for _, f := range fs {
+		if f.Top >= d-eps && f.Top <= d+eps {
+			return f
+		}
+	}
+	return nil
+}

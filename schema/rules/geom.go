@@ -1,0 +1,369 @@
+package rules
+
+// Shared geometry for the rules. Any rule file in this package may use
+// these; keep them small and free of reporting.
+//
+//   eps                   depth tolerance for "meets" and "overlaps"
+//   annulusFills(w, name) the fills of one annulus, top down
+//   runs(fs, keep)        maximal contiguous runs of the fills keep accepts
+//   fillAbove(fs, d, ...) the nearest fill resting on depth d
+//   covered / subtract / union / overlap   interval set arithmetic
+//   pipes(w) / crossSectionAt(w, d)        what stands in the hole at d
+//   segments(w)           elementary depth ranges between every boundary
+//   annulusOfDepth(w, d)  which annulus a screen at d is packed in
+
+import (
+	"sort"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// eps is the depth tolerance: far below anything written to 0.01 ft, and
+// above the rounding of a foot-to-metre conversion.
+const eps schema.Length = 1e-6
+
+// boreholeAnnulus names the annulus between the borehole wall and the
+// outermost pipe (a Fill with Within == "").
+const boreholeAnnulus = ""
+
+// annulusFills returns the fills placed in the named annulus ("" for the
+// borehole annulus, else a casing's name), sorted top down.
+func annulusFills(w *schema.Well, within string) []*schema.Fill {
+	var out []*schema.Fill
+	for i := range w.Fills {
+		if w.Fills[i].Within == within {
+			out = append(out, &w.Fills[i])
+		}
+	}
+	sort.SliceStable(out, func(i, j int) bool {
+		if out[i].Top != out[j].Top {
+			return out[i].Top < out[j].Top
+		}
+		return out[i].Bottom < out[j].Bottom
+	})
+	return out
+}
+
+// annulusNames lists the annuli that have fills: "" first, then casing
+// names in file order.
+func annulusNames(w *schema.Well) []string {
+	out := []string{boreholeAnnulus}
+	for _, c := range w.Casings {
+		for _, f := range w.Fills {
+			if f.Within == c.Name {
+				out = append(out, c.Name)
+				break
+			}
+		}
+	}
+	return out
+}
+
+// run is a contiguous stack of fills of one kind, top down.
+type run struct {
+	schema.Interval
+	Fills []*schema.Fill
+}
+
+// runs groups fills (sorted top down) into maximal contiguous runs of the
+// fills keep accepts.
+func runs(fs []*schema.Fill, keep func(*schema.Fill) bool) []run {
+	var out []run
+	for _, f := range fs {
+		if !keep(f) {
+			continue
+		}
+		if n := len(out); n > 0 && f.Top <= out[n-1].Bottom+eps {
+			if f.Bottom > out[n-1].Bottom {
+				out[n-1].Bottom = f.Bottom
+			}
+			out[n-1].Fills = append(out[n-1].Fills, f)
+			continue
+		}
+		out = append(out, run{Interval: f.Interval, Fills: []*schema.Fill{f}})
+	}
+	return out
+}
+
+// isPack accepts filter pack and fine sand.
+func isPack(f *schema.Fill) bool { return f.Material.Group() == schema.PackGroup }
+
+// isFilterPack accepts filter pack only.
+func isFilterPack(f *schema.Fill) bool { return f.Material == schema.FilterPack }
+
+// isBentoniteSeal accepts bentonite chips, pellets and granular bentonite.
+func isBentoniteSeal(f *schema.Fill) bool { return f.Material.Group() == schema.SealGroup }
+
+// fillAbove returns the fill nearest above depth d (the one whose bottom
+// is deepest while not below d), skipping those skip accepts, and whether
+// it rests on d (its bottom within eps of d).
+func fillAbove(fs []*schema.Fill, d schema.Length, skip func(*schema.Fill) bool) (*schema.Fill, bool) {
+	var best *schema.Fill
+	for _, f := range fs {
+		if skip != nil && skip(f) {
+			continue
+		}
+		if f.Bottom > d+eps {
+			continue
+		}
+		if best == nil || f.Bottom > best.Bottom {
+			best = f
+		}
+	}
+	if best == nil {
+		return nil, false
+	}
+	return best, best.Bottom >= d-eps
+}
+
+// union merges intervals into a sorted set of disjoint ones.
+func union(ivs []schema.Interval) []schema.Interval {
+	s := append([]schema.Interval(nil), ivs...)
+	sort.Slice(s, func(i, j int) bool { return s[i].Top < s[j].Top })
+	var out []schema.Interval
+	for _, iv := range s {
+		if n := len(out); n > 0 && iv.Top <= out[n-1].Bottom+eps {
+			if iv.Bottom > out[n-1].Bottom {
+				out[n-1].Bottom = iv.Bottom
+			}
+			continue
+		}
+		out = append(out, iv)
+	}
+	return out
+}
+
+// subtract returns the parts of base not covered by cut, dropping slivers
+// thinner than eps.
+func subtract(base, cut []schema.Interval) []schema.Interval {
+	cut = union(cut)
+	var out []schema.Interval
+	for _, b := range union(base) {
+		cur := b.Top
+		for _, c := range cut {
+			if c.Bottom <= cur || c.Top >= b.Bottom {
+				continue
+			}
+			if c.Top > cur+eps {
+				out = append(out, schema.Interval{Top: cur, Bottom: c.Top})
+			}
+			if c.Bottom > cur {
+				cur = c.Bottom
+			}
+		}
+		if b.Bottom > cur+eps {
+			out = append(out, schema.Interval{Top: cur, Bottom: b.Bottom})
+		}
+	}
+	return out
+}
+
+// overlap is the shared part of two intervals, and whether it is thicker
+// than eps.
+func overlap(a, b schema.Interval) (schema.Interval, bool) {
+	iv := schema.Interval{Top: max(a.Top, b.Top), Bottom: min(a.Bottom, b.Bottom)}
+	return iv, iv.Bottom-iv.Top > eps
+}
+
+// intervalsOf returns the intervals of fills.
+func intervalsOf(fs []*schema.Fill) []schema.Interval {
+	out := make([]schema.Interval, len(fs))
+	for i, f := range fs {
+		out[i] = f.Interval
+	}
+	return out
+}
+
+// thickness sums the thickness of a set of disjoint intervals.
+func thickness(ivs []schema.Interval) schema.Length {
+	var t schema.Length
+	for _, iv := range union(ivs) {
+		t += iv.Thickness()
+	}
+	return t
+}
+
+// pipe is one length of pipe standing in the hole: an outer casing or a
+// section of a well string.
+type pipe struct {
+	schema.Interval
+	OD, ID  schema.Diameter
+	Casing  *schema.Casing  // set for an outer casing
+	String  *schema.String  // set for a string section
+	Section *schema.Section // set for a string section
+	Path    string
+}
+
+// Label names the pipe for messages: `casing "surface"` or
+// `string "main" screen`.
+func (p pipe) Label() string {
+	if p.Casing != nil {
+		return "casing \"" + p.Casing.Name + "\""
+	}
+	return "string \"" + p.String.Name + "\" " + string(p.Section.Kind)
+}
+
+// pipes lists every casing and string section.
+func pipes(w *schema.Well) []pipe {
+	var out []pipe
+	for i := range w.Casings {
+		c := &w.Casings[i]
+		out = append(out, pipe{Interval: c.Interval, OD: c.Pipe.OD, ID: c.Pipe.ID, Casing: c, Path: c.Path})
+	}
+	for i := range w.Strings {
+		s := &w.Strings[i]
+		for j := range s.Sections {
+			sec := &s.Sections[j]
+			out = append(out, pipe{Interval: sec.Interval, OD: sec.Pipe.OD, ID: sec.Pipe.ID, String: s, Section: sec, Path: sec.Path})
+		}
+	}
+	return out
+}
+
+// crossSection is what stands in the hole at one depth: the borehole
+// diameter (if a section covers it), the outer casings present from the
+// outermost in, and the string sections present, which run inside the
+// innermost casing side by side.
+type crossSection struct {
+	Hole    schema.Diameter
+	HasHole bool
+	Casings []pipe
+	Strings []pipe
+}
+
+// crossSectionAt describes depth d. Call it at a depth strictly inside a
+// segment, so that no boundary is ambiguous.
+func crossSectionAt(w *schema.Well, d schema.Length) crossSection {
+	var cs crossSection
+	if b, ok := w.BoreholeAt(d); ok {
+		cs.Hole, cs.HasHole = b.Diameter, true
+	}
+	for _, p := range pipes(w) {
+		if !p.Contains(d) {
+			continue
+		}
+		if p.Casing != nil {
+			cs.Casings = append(cs.Casings, p)
+		} else {
+			cs.Strings = append(cs.Strings, p)
+		}
+	}
+	sort.SliceStable(cs.Casings, func(i, j int) bool { return cs.Casings[i].OD > cs.Casings[j].OD })
+	return cs
+}
+
+// Outermost returns the pipes that touch the borehole annulus: the
+// outermost casing, or else every string side by side.
+func (cs crossSection) Outermost() []pipe {
+	if len(cs.Casings) > 0 {
+		return cs.Casings[:1]
+	}
+	return cs.Strings
+}
+
+// Inside returns the pipes directly inside the named casing, and that
+// casing, or false when it is not present.
+func (cs crossSection) Inside(name string) (pipe, []pipe, bool) {
+	for i, c := range cs.Casings {
+		if c.Casing.Name != name {
+			continue
+		}
+		if i+1 < len(cs.Casings) {
+			return c, cs.Casings[i+1 : i+2], true
+		}
+		return c, cs.Strings, true
+	}
+	return pipe{}, nil, false
+}
+
+// sumOD adds the outside diameters of pipes standing side by side.
+func sumOD(ps []pipe) schema.Diameter {
+	var s schema.Diameter
+	for _, p := range ps {
+		s += p.OD
+	}
+	return s
+}
+
+// segments splits 0..total depth at every boundary of every borehole
+// section, pipe, fill and open hole; each segment is uniform inside.
+func segments(w *schema.Well) []schema.Interval {
+	cuts := []schema.Length{0, w.TotalDepth}
+	add := func(iv schema.Interval) { cuts = append(cuts, iv.Top, iv.Bottom) }
+	for _, b := range w.Boreholes {
+		add(b.Interval)
+	}
+	for _, p := range pipes(w) {
+		add(p.Interval)
+	}
+	for _, f := range w.Fills {
+		add(f.Interval)
+	}
+	for _, o := range w.OpenHoles {
+		add(o.Interval)
+	}
+	sort.Slice(cuts, func(i, j int) bool { return cuts[i] < cuts[j] })
+	var out []schema.Interval
+	for i := 1; i < len(cuts); i++ {
+		top, bottom := max(cuts[i-1], 0), min(cuts[i], w.TotalDepth)
+		if bottom-top > eps {
+			out = append(out, schema.Interval{Top: top, Bottom: bottom})
+		}
+	}
+	return out
+}
+
+// mid is the middle of an interval.
+func mid(iv schema.Interval) schema.Length { return (iv.Top + iv.Bottom) / 2 }
+
+// annulusAt names the annulus just outside a string at depth d: the
+// innermost casing present there, or the borehole annulus.
+func annulusAt(w *schema.Well, d schema.Length) string {
+	cs := crossSectionAt(w, d)
+	if n := len(cs.Casings); n > 0 {
+		return cs.Casings[n-1].Casing.Name
+	}
+	return boreholeAnnulus
+}
+
+// inOpenHole reports whether depth d lies in a declared open-hole interval.
+func inOpenHole(w *schema.Well, d schema.Length) bool {
+	for _, o := range w.OpenHoles {
+		if d > o.Top && d < o.Bottom {
+			return true
+		}
+	}
+	return false
+}
+
+// spanTracker merges consecutive offending segments per key into one
+// interval, so a rule reports each fault once with its whole depth range.
+type spanTracker struct {
+	order []string
+	spans map[string][]schema.Interval
+}
+
+func (t *spanTracker) add(key string, iv schema.Interval) {
+	if t.spans == nil {
+		t.spans = map[string][]schema.Interval{}
+	}
+	if _, ok := t.spans[key]; !ok {
+		t.order = append(t.order, key)
+	}
+	s := t.spans[key]
+	if n := len(s); n > 0 && iv.Top <= s[n-1].Bottom+eps {
+		s[n-1].Bottom = max(s[n-1].Bottom, iv.Bottom)
+	} else {
+		s = append(s, iv)
+	}
+	t.spans[key] = s
+}
+
+// each calls fn for every key in first-seen order and each merged span.
+func (t *spanTracker) each(fn func(key string, iv schema.Interval)) {
+	for _, k := range t.order {
+		for _, iv := range t.spans[k] {
+			fn(k, iv)
+		}
+	}
+}

@@ -1,0 +1,106 @@
+package rules
+
+import "github.com/tremie-dev/tremie/schema"
+
+// sanitarySealSource is where the default sanitary-seal depths come from.
+const sanitarySealSource = "California DWR Bulletin 74-81, section 9 (from memory): annular seal at least 50 ft deep for " +
+	"community water supply and industrial wells, 20 ft for individual domestic, agricultural and monitoring wells"
+
+// sanitarySealFt is the default minimum seal depth in feet for each
+// purpose. Piezometers and recovery wells are taken as monitoring wells
+// and injection wells as industrial ones: our mapping, not DWR's.
+var sanitarySealFt = []struct {
+	purpose schema.Purpose
+	ft      float64
+	source  string
+}{
+	{schema.Monitoring, 20, "DWR 74-81 §9: monitoring, 20 ft"},
+	{schema.Piezometer, 20, "taken as a monitoring well (DWR 74-81 §9: 20 ft)"},
+	{schema.Recovery, 20, "taken as a monitoring well (DWR 74-81 §9: 20 ft)"},
+	{schema.Domestic, 20, "DWR 74-81 §9: individual domestic, 20 ft"},
+	{schema.Irrigation, 20, "DWR 74-81 §9: agricultural, 20 ft"},
+	{schema.PublicSupply, 50, "DWR 74-81 §9: community water supply, 50 ft"},
+	{schema.Industrial, 50, "DWR 74-81 §9: industrial, 50 ft"},
+	{schema.Injection, 50, "taken as an industrial well (DWR 74-81 §9: 50 ft)"},
+}
+
+func sanitarySealParams() []Param {
+	var out []Param
+	for _, s := range sanitarySealFt {
+		out = append(out, Param{
+			Name: string(s.purpose), Kind: LengthParam,
+			Default: float64(schema.LengthFrom(s.ft, schema.Feet)), DefaultFt: s.ft,
+			Doc:    "minimum sanitary-seal depth for a " + string(s.purpose) + " well (usually set in [sanitary_seal])",
+			Source: s.source,
+		})
+	}
+	return out
+}
+
+func init() {
+	register(&Rule{
+		ID:    "SANITARY-SEAL-DEPTH",
+		Title: "The sanitary seal reaches the depth the well's use requires",
+		Doc: "The annular (sanitary) seal keeps surface water and shallow groundwater from running down the " +
+			"outside of the casing. Counted from the surface (or the vault floor) down through the borehole " +
+			"annulus, the unbroken run of concrete, grout and bentonite must reach the minimum depth for the " +
+			"well's purpose, set per project in the profile's [sanitary_seal] table. Where the pack of a " +
+			"shallow well starts above that depth the seal cannot reach it: this is then a warning that a " +
+			"variance from the local agency is needed (record it as a waiver).",
+		Severity: Error,
+		Source:   sanitarySealSource,
+		Params:   sanitarySealParams(),
+		Run:      runSanitarySealDepth,
+	})
+}
+
+func runSanitarySealDepth(p *Pass) {
+	w := p.Well
+	if w.Purpose == "" {
+		return
+	}
+	required, ok := p.profile.SanitarySeal[w.Purpose]
+	if !ok {
+		required = p.Length(string(w.Purpose))
+	}
+	if required <= 0 {
+		return
+	}
+	top0 := schema.Length(0)
+	if v := w.Surface.Vault; v != nil && v.Depth > 0 {
+		top0 = v.Depth
+	}
+	fs := annulusFills(w, boreholeAnnulus)
+	var seal schema.Length
+	var first *schema.Fill
+	if len(fs) > 0 && fs[0].Top <= top0+eps && fs[0].Material.IsSeal() {
+		first = fs[0]
+		for _, r := range runs(fs, func(f *schema.Fill) bool { return f.Material.IsSeal() }) {
+			if r.Top <= top0+eps {
+				seal = r.Bottom
+				break
+			}
+		}
+	}
+	if seal >= required-eps {
+		return
+	}
+	path := "well.purpose"
+	if first != nil {
+		path = key(first.Path, "top")
+	}
+	var packTop schema.Length = -1
+	if rs := runs(fs, isPack); len(rs) > 0 {
+		packTop = rs[0].Top
+	}
+	if packTop >= 0 && packTop < required && seal >= packTop-eps {
+		p.ReportSeverity(p.capped(Warning), path, []schema.Length{seal, required},
+			"the sanitary seal reaches %s, down to the pack at %s; a %s well needs %s: a variance from the local agency is needed", p.D(seal), p.D(packTop), w.Purpose, p.D(required))
+		return
+	}
+	if first == nil {
+		p.Reportf(path, []schema.Length{0, required}, "no sanitary seal starts at the surface of the borehole annulus; a %s well needs one at least %s deep", w.Purpose, p.D(required))
+		return
+	}
+	p.Reportf(path, []schema.Length{seal, required}, "the sanitary seal reaches %s; a %s well needs at least %s", p.D(seal), w.Purpose, p.D(required))
+}

@@ -1,0 +1,43 @@
+package rules
+
+import "github.com/tremie-dev/tremie/schema"
+
+func init() {
+	register(&Rule{
+		ID:    "SEAL-ABOVE-PACK",
+		Title: "A bentonite seal lies directly on the filter pack",
+		Doc: "The annulus is filled bottom up: filter pack, optional fine sand, a bentonite seal (chips, " +
+			"pellets or granular bentonite), then grout or backfill, then the surface seal. The bentonite seal " +
+			"keeps grout out of the pack and the screened zone cut off from the water above. Grout, concrete or " +
+			"backfill placed directly on the pack (or fine sand), or nothing at all above it, leaves the pack " +
+			"without a seal.",
+		Severity: Error,
+		Source: "US Army Corps of Engineers TI 814-01 (1998): a bentonite seal above the filter pack; US EPA, RCRA " +
+			"Ground-Water Monitoring: Draft Technical Guidance (1992): pack, fine sand, seal, grout",
+		Run: runSealAbovePack,
+	})
+}
+
+func runSealAbovePack(p *Pass) {
+	for _, name := range annulusNames(p.Well) {
+		fs := annulusFills(p.Well, name)
+		for _, st := range runs(fs, isPack) {
+			top := st.Fills[0]
+			if st.Top <= eps {
+				p.Reportf(key(top.Path, "top"), []schema.Length{st.Top}, "%s reaches ground surface: nothing seals the pack at %s", p.fillLabel(top), p.span(st.Interval))
+				continue
+			}
+			above, touching := fillAbove(fs, st.Top, isPack)
+			switch {
+			case above == nil:
+				p.Reportf(key(top.Path, "top"), []schema.Length{st.Top}, "nothing is placed above the pack at %s: no bentonite seal", p.span(st.Interval))
+			case isBentoniteSeal(above):
+				// sealed; its thickness is SEAL-THICKNESS's business
+			case touching:
+				p.Reportf(key(above.Path, "bottom"), []schema.Length{st.Top}, "%s rests directly on the pack (top at %s): no bentonite seal above the pack at %s", p.fillLabel(above), p.D(st.Top), p.span(st.Interval))
+			default:
+				p.Reportf(key(above.Path, "bottom"), []schema.Length{above.Bottom, st.Top}, "the first fill above the pack at %s is %s, with nothing recorded between: no bentonite seal", p.span(st.Interval), p.fillLabel(above))
+			}
+		}
+	}
+}
