@@ -6,6 +6,13 @@ import "github.com/tremie-dev/tremie/schema"
 // mean every rule runs with its documented defaults.
 type Profile struct {
 	Name string
+	// File is the profile's path, "" for the defaults.
+	File string
+	// Source names the local code or authority the thresholds follow.
+	Source string
+	// Units is the depth unit the profile file wrote its values in; the
+	// values below are already converted to model units.
+	Units schema.DepthUnit
 	// Values overrides parameters: Values[ruleID][param] in model units.
 	Values map[string]map[string]float64
 	// Severities overrides a rule's default severity.

@@ -1,0 +1,391 @@
+package rules
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"os"
+	"sort"
+	"strings"
+
+	"github.com/BurntSushi/toml"
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// LoadProfile reads a rule profile (see PROFILE.md). Like a well file it
+// is strict: an unknown table, rule, parameter or purpose is an error with
+// its line, and a rejected profile yields a schema.ErrorList.
+func LoadProfile(path string) (*Profile, error) {
+	data, err := os.ReadFile(path)
+	if err != nil {
+		var pe *os.PathError
+		if errors.As(err, &pe) {
+			err = pe.Err
+		}
+		return nil, schema.ErrorList{{File: path, Msg: fmt.Sprintf("cannot read profile: %v", err)}}
+	}
+	return ParseProfile(path, data)
+}
+
+// ParseProfile reads a profile's bytes; name is used in error positions.
+func ParseProfile(name string, data []byte) (*Profile, error) {
+	var raw map[string]any
+	if _, err := toml.Decode(string(data), &raw); err != nil {
+		var pe toml.ParseError
+		if errors.As(err, &pe) {
+			return nil, schema.ErrorList{{File: name, Line: pe.Position.Line, Col: pe.Position.Col, Msg: "TOML syntax: " + pe.Message}}
+		}
+		return nil, schema.ErrorList{{File: name, Msg: "TOML: " + err.Error()}}
+	}
+	pr := &profileReader{file: name, pos: scanProfileKeys(string(data))}
+	prof := pr.read(raw)
+	if len(pr.errs) > 0 {
+		sort.SliceStable(pr.errs, func(i, j int) bool {
+			if pr.errs[i].Line != pr.errs[j].Line {
+				return pr.errs[i].Line < pr.errs[j].Line
+			}
+			return pr.errs[i].Col < pr.errs[j].Col
+		})
+		return nil, pr.errs
+	}
+	return prof, nil
+}
+
+type profileReader struct {
+	file string
+	pos  map[string][2]int // key path -> line, column
+	errs schema.ErrorList
+}
+
+func (r *profileReader) errAt(path, format string, args ...any) {
+	lc, ok := r.pos[path]
+	for p := path; !ok && p != ""; {
+		i := strings.LastIndex(p, ".")
+		if i < 0 {
+			break
+		}
+		p = p[:i]
+		lc, ok = r.pos[p]
+	}
+	r.errs = append(r.errs, &schema.Error{File: r.file, Line: lc[0], Col: lc[1], Key: path, Msg: fmt.Sprintf(format, args...)})
+}
+
+// tableOf returns v as a table, or reports that path should be one.
+func (r *profileReader) tableOf(path string, v any) (map[string]any, bool) {
+	m, ok := v.(map[string]any)
+	if !ok {
+		r.errAt(path, "%s must be a table, as [%s]", path, path)
+	}
+	return m, ok
+}
+
+// number reads a finite, non-negative number.
+func (r *profileReader) number(path string, v any) (float64, bool) {
+	var f float64
+	switch n := v.(type) {
+	case int64:
+		f = float64(n)
+	case float64:
+		f = n
+	default:
+		r.errAt(path, "%s must be a number, not %s", path, tomlType(v))
+		return 0, false
+	}
+	if math.IsNaN(f) || math.IsInf(f, 0) {
+		r.errAt(path, "%s must be a finite number", path)
+		return 0, false
+	}
+	if f < 0 {
+		r.errAt(path, "%s = %v must not be negative", path, f)
+		return 0, false
+	}
+	return f, true
+}
+
+func (r *profileReader) read(raw map[string]any) *Profile {
+	prof := &Profile{
+		Name:         "unnamed profile",
+		File:         r.file,
+		Values:       map[string]map[string]float64{},
+		Severities:   map[string]Severity{},
+		Off:          map[string]bool{},
+		SanitarySeal: map[schema.Purpose]schema.Length{},
+	}
+	if v, ok := raw["profile"]; ok {
+		if m, ok := r.tableOf("profile", v); ok {
+			r.header(prof, m)
+		}
+	}
+	numbers := r.hasNumbers(raw)
+	if numbers && prof.Units == "" {
+		r.errAt("profile", "give units = \"ft\" or \"m\" in [profile]: the profile sets thresholds")
+	}
+	if v, ok := raw["rule"]; ok {
+		if m, ok := r.tableOf("rule", v); ok {
+			for _, id := range sortedKeys(m) {
+				r.rule(prof, id, m[id])
+			}
+		}
+	}
+	if v, ok := raw["sanitary_seal"]; ok {
+		if m, ok := r.tableOf("sanitary_seal", v); ok {
+			r.sanitarySeal(prof, m)
+		}
+	}
+	for _, k := range sortedKeys(raw) {
+		switch k {
+		case "profile", "rule", "sanitary_seal":
+		default:
+			r.errAt(k, "unknown key %q at top level (expected [profile], [rule.RULE-ID] or [sanitary_seal])", k)
+		}
+	}
+	return prof
+}
+
+func (r *profileReader) header(prof *Profile, m map[string]any) {
+	for _, k := range sortedKeys(m) {
+		path := "profile." + k
+		switch k {
+		case "name", "source":
+			s, ok := m[k].(string)
+			if !ok {
+				r.errAt(path, "%s must be a string, not %s", path, tomlType(m[k]))
+				continue
+			}
+			if k == "name" {
+				prof.Name = s
+			} else {
+				prof.Source = s
+			}
+		case "units":
+			s, _ := m[k].(string)
+			if s != "ft" && s != "m" {
+				r.errAt(path, "units must be \"ft\" or \"m\" (got %v)", m[k])
+				continue
+			}
+			prof.Units = schema.DepthUnit(s)
+		default:
+			r.errAt(path, "unknown key %q in [profile] (expected name, units, source)", k)
+		}
+	}
+}
+
+// hasNumbers reports whether any threshold is set, so that units matter.
+func (r *profileReader) hasNumbers(raw map[string]any) bool {
+	if m, ok := raw["sanitary_seal"].(map[string]any); ok && len(m) > 0 {
+		return true
+	}
+	rules, _ := raw["rule"].(map[string]any)
+	for _, v := range rules {
+		if m, ok := v.(map[string]any); ok {
+			for k := range m {
+				if k != "severity" {
+					return true
+				}
+			}
+		}
+	}
+	return false
+}
+
+func (r *profileReader) rule(prof *Profile, id string, v any) {
+	path := "rule." + id
+	m, ok := r.tableOf(path, v)
+	if !ok {
+		return
+	}
+	rl, ok := Lookup(id)
+	if !ok {
+		r.errAt(path, "unknown rule %q (tremie rules lists them)", id)
+		return
+	}
+	for _, k := range sortedKeys(m) {
+		kp := path + "." + k
+		if k == "severity" {
+			switch m[k] {
+			case "error":
+				prof.Severities[id] = Error
+			case "warning":
+				prof.Severities[id] = Warning
+			case "off":
+				prof.Off[id] = true
+			default:
+				r.errAt(kp, "severity must be \"error\", \"warning\" or \"off\" (got %v)", m[k])
+			}
+			continue
+		}
+		prm, ok := rl.param(k)
+		if !ok {
+			r.errAt(kp, "rule %s has no parameter %q%s", id, k, rl.paramList())
+			continue
+		}
+		f, ok := r.number(kp, m[k])
+		if !ok {
+			continue
+		}
+		if prm.Kind == RatioParam && prm.Name == "min_retained" && f > 1 {
+			r.errAt(kp, "%s is a fraction from 0 to 1 (0.9 = 90 %%)", kp)
+			continue
+		}
+		if prof.Values[id] == nil {
+			prof.Values[id] = map[string]float64{}
+		}
+		prof.Values[id][k] = prof.toModel(prm.Kind, f)
+	}
+}
+
+func (r *profileReader) sanitarySeal(prof *Profile, m map[string]any) {
+	rl, _ := Lookup("SANITARY-SEAL-DEPTH")
+	for _, k := range sortedKeys(m) {
+		kp := "sanitary_seal." + k
+		known := false
+		for _, p := range schema.Purposes {
+			known = known || string(p) == k
+		}
+		if !known {
+			var names []string
+			for _, p := range schema.Purposes {
+				names = append(names, string(p))
+			}
+			r.errAt(kp, "unknown purpose %q in [sanitary_seal] (one of: %s)", k, strings.Join(names, ", "))
+			continue
+		}
+		if rl != nil {
+			if _, dup := prof.Values[rl.ID][k]; dup {
+				r.errAt(kp, "the %s seal depth is set twice: here and in [rule.%s]", k, rl.ID)
+				continue
+			}
+		}
+		if f, ok := r.number(kp, m[k]); ok {
+			prof.SanitarySeal[schema.Purpose(k)] = schema.Length(prof.toModel(LengthParam, f))
+		}
+	}
+}
+
+// toModel converts a profile value to model units: lengths from the
+// profile's depth unit to metres, diameters from inches (ft profiles) or
+// millimetres (m profiles).
+func (p *Profile) toModel(kind ParamKind, v float64) float64 {
+	switch kind {
+	case LengthParam:
+		return float64(schema.LengthFrom(v, p.Units))
+	case DiameterParam:
+		if p.Units == schema.Feet {
+			return float64(schema.DiameterFrom(v, schema.Inches))
+		}
+		return v
+	}
+	return v
+}
+
+func (rl *Rule) param(name string) (Param, bool) {
+	for _, p := range rl.Params {
+		if p.Name == name {
+			return p, true
+		}
+	}
+	return Param{}, false
+}
+
+func (rl *Rule) paramList() string {
+	if len(rl.Params) == 0 {
+		return " (it takes only severity)"
+	}
+	var names []string
+	for _, p := range rl.Params {
+		names = append(names, p.Name)
+	}
+	return " (it takes severity, " + strings.Join(names, ", ") + ")"
+}
+
+func sortedKeys(m map[string]any) []string {
+	out := make([]string, 0, len(m))
+	for k := range m {
+		out = append(out, k)
+	}
+	sort.Strings(out)
+	return out
+}
+
+func tomlType(v any) string {
+	switch v.(type) {
+	case string:
+		return "a string"
+	case bool:
+		return "a boolean"
+	case int64, float64:
+		return "a number"
+	case map[string]any:
+		return "a table"
+	case []any, []map[string]any:
+		return "an array"
+	}
+	return fmt.Sprintf("%T", v)
+}
+
+// scanProfileKeys maps each key path of a profile ("rule.SEAL-THICKNESS.min")
+// and each table header ("rule.SEAL-THICKNESS") to its line and the column
+// of its value. The TOML library keeps positions private; a profile has no
+// arrays of tables or multi-line strings worth tracking, so a line scan is
+// enough for files the parser has accepted.
+func scanProfileKeys(src string) map[string][2]int {
+	out := map[string][2]int{}
+	current := ""
+	for i, line := range strings.Split(src, "\n") {
+		t := strings.TrimSpace(line)
+		if t == "" || t[0] == '#' {
+			continue
+		}
+		if t[0] == '[' {
+			end := strings.Index(t, "]")
+			if end < 0 {
+				continue
+			}
+			current = cleanTOMLKey(strings.Trim(t[:end], "[]"))
+			out[current] = [2]int{i + 1, strings.Index(line, "[") + 1}
+			continue
+		}
+		eq := equalsOutsideQuotes(line)
+		if eq < 0 {
+			continue
+		}
+		k := cleanTOMLKey(line[:eq])
+		if current != "" {
+			k = current + "." + k
+		}
+		col := eq + 2
+		for col <= len(line) && (line[col-1] == ' ' || line[col-1] == '\t') {
+			col++
+		}
+		out[k] = [2]int{i + 1, col}
+	}
+	return out
+}
+
+func equalsOutsideQuotes(line string) int {
+	var quote byte
+	for i := 0; i < len(line); i++ {
+		c := line[i]
+		switch {
+		case quote != 0:
+			if c == quote {
+				quote = 0
+			}
+		case c == '"' || c == '\'':
+			quote = c
+		case c == '=':
+			return i
+		case c == '#':
+			return -1
+		}
+	}
+	return -1
+}
+
+func cleanTOMLKey(k string) string {
+	parts := strings.Split(strings.TrimSpace(k), ".")
+	for i, p := range parts {
+		parts[i] = strings.Trim(strings.TrimSpace(p), `"'`)
+	}
+	return strings.Join(parts, ".")
+}
