@@ -1,0 +1,224 @@
+package incremental
+
+import (
+	"encoding/json"
+	"errors"
+	"fmt"
+	"io/fs"
+	"os"
+	"path/filepath"
+	"slices"
+	"sort"
+	"sync"
+
+	"github.com/tremie-dev/tremie/render/out"
+)
+
+// FileName is the cache file in the output directory.
+const FileName = ".tremie-cache.json"
+
+// format is the cache file's layout version; a different one is ignored.
+const format = 1
+
+// Cache is the record of the last run in one output directory. Its methods
+// are safe for concurrent use by a batch's workers.
+type Cache struct {
+	dir string
+
+	mu      sync.Mutex
+	entries map[string]entry
+	orphans map[string]bool // outputs no well claims any more
+	dirty   bool
+}
+
+// entry is what was drawn for one well.
+type entry struct {
+	Hash    string   `json:"hash"`
+	Outputs []string `json:"outputs"` // relative to the output directory, sorted
+}
+
+type fileData struct {
+	Format  int              `json:"format"`
+	Wells   map[string]entry `json:"wells"`
+	Orphans []string         `json:"orphans,omitempty"`
+}
+
+// Load reads the cache of an output directory. A missing file gives an
+// empty cache. A damaged or foreign one also gives an empty, usable cache
+// (everything is drawn again) together with an error to print as a
+// warning.
+func Load(outdir string) (*Cache, error) {
+	c := &Cache{dir: outdir, entries: map[string]entry{}, orphans: map[string]bool{}}
+	path := filepath.Join(outdir, FileName)
+	data, err := os.ReadFile(path)
+	if errors.Is(err, fs.ErrNotExist) {
+		return c, nil
+	}
+	if err != nil {
+		return c, fmt.Errorf("cache %s: %w (drawing every well)", path, err)
+	}
+	var fd fileData
+	if err := json.Unmarshal(data, &fd); err != nil {
+		c.dirty = true
+		return c, fmt.Errorf("cache %s is damaged (%v); drawing every well", path, err)
+	}
+	if fd.Format != format {
+		c.dirty = true
+		return c, nil
+	}
+	for k, e := range fd.Wells {
+		c.entries[k] = e
+	}
+	for _, o := range fd.Orphans {
+		c.orphans[o] = true
+	}
+	return c, nil
+}
+
+// Dir is the output directory.
+func (c *Cache) Dir() string { return c.dir }
+
+// Fresh reports whether the well under key was last drawn from inputs
+// with this hash into exactly these outputs (relative to the output
+// directory), and every one of them is still there.
+func (c *Cache) Fresh(key, hash string, outputs []string) bool {
+	c.mu.Lock()
+	e, ok := c.entries[key]
+	c.mu.Unlock()
+	if !ok || e.Hash != hash || !slices.Equal(e.Outputs, sorted(outputs)) {
+		return false
+	}
+	for _, o := range e.Outputs {
+		if _, err := os.Stat(filepath.Join(c.dir, filepath.FromSlash(o))); err != nil {
+			return false
+		}
+	}
+	return true
+}
+
+// Record notes that the well under key was drawn from inputs with this
+// hash into these outputs. Outputs it had before and no longer has become
+// orphans, reported by Stale.
+func (c *Cache) Record(key, hash string, outputs []string) {
+	outs := sorted(outputs)
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	for _, o := range c.entries[key].Outputs {
+		if !slices.Contains(outs, o) {
+			c.orphans[o] = true
+		}
+	}
+	for _, o := range outs {
+		delete(c.orphans, o)
+	}
+	c.entries[key] = entry{Hash: hash, Outputs: outs}
+	c.dirty = true
+}
+
+// Forget drops a well's record, so that it is drawn next time; call it
+// when drawing a well failed. Its outputs stay recorded as orphans only
+// if they exist.
+func (c *Cache) Forget(key string) {
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	if e, ok := c.entries[key]; ok {
+		for _, o := range e.Outputs {
+			c.orphans[o] = true
+		}
+		delete(c.entries, key)
+		c.dirty = true
+	}
+}
+
+// Stale returns, sorted, the outputs still on disk that belong to no
+// present well: those of wells whose keys are not in present, and those a
+// well produced once under another name. Nothing is deleted. Records of
+// absent wells whose outputs are all gone are dropped.
+func (c *Cache) Stale(present []string) []string {
+	here := make(map[string]bool, len(present))
+	for _, k := range present {
+		here[k] = true
+	}
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	claimed := map[string]bool{}
+	for k, e := range c.entries {
+		if here[k] {
+			for _, o := range e.Outputs {
+				claimed[o] = true
+			}
+		}
+	}
+	var out []string
+	seen := map[string]bool{}
+	consider := func(o string) bool {
+		if claimed[o] || seen[o] {
+			return false
+		}
+		if _, err := os.Stat(filepath.Join(c.dir, filepath.FromSlash(o))); err != nil {
+			return false
+		}
+		seen[o] = true
+		out = append(out, o)
+		return true
+	}
+	for k, e := range c.entries {
+		if here[k] {
+			continue
+		}
+		alive := false
+		for _, o := range e.Outputs {
+			if consider(o) || seen[o] {
+				alive = true
+			}
+		}
+		if !alive {
+			delete(c.entries, k)
+			c.dirty = true
+		}
+	}
+	for o := range c.orphans {
+		if !consider(o) && !seen[o] {
+			delete(c.orphans, o)
+			c.dirty = true
+		}
+	}
+	sort.Strings(out)
+	return out
+}
+
+// Save writes the cache atomically if anything changed, creating the
+// output directory if needed.
+func (c *Cache) Save() error {
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	if !c.dirty {
+		return nil
+	}
+	fd := fileData{Format: format, Wells: c.entries}
+	for o := range c.orphans {
+		fd.Orphans = append(fd.Orphans, o)
+	}
+	sort.Strings(fd.Orphans)
+	data, err := json.MarshalIndent(fd, "", "  ") // map keys come sorted
+	if err != nil {
+		return fmt.Errorf("cache: %w", err)
+	}
+	if err := os.MkdirAll(c.dir, 0o755); err != nil {
+		return fmt.Errorf("cache: %w", err)
+	}
+	if err := out.WriteFileAtomic(filepath.Join(c.dir, FileName), append(data, '\n')); err != nil {
+		return fmt.Errorf("cache: %w", err)
+	}
+	c.dirty = false
+	return nil
+}
+
+func sorted(s []string) []string {
+	out := make([]string, len(s))
+	for i, v := range s {
+		out[i] = filepath.ToSlash(v)
+	}
+	sort.Strings(out)
+	return out
+}
