@@ -64,7 +64,9 @@ type PanicError struct {
 	Stack string
 }
 
-func (e *PanicError) Error() string { return fmt.Sprintf("internal error: %v (please report)", e.Value) }
+func (e *PanicError) Error() string {
+	return fmt.Sprintf("internal error: %v (please report)", e.Value)
+}
 
 // Run calls fn on every item and returns the results in input order with
 // their summary.

@@ -12,8 +12,8 @@ import (
 
 	"github.com/tremie-dev/tremie/cmd/internal/batch"
 	"github.com/tremie-dev/tremie/cmd/internal/synth"
-	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/project"
 	"github.com/tremie-dev/tremie/schema/rules"
