@@ -34,6 +34,9 @@ func (y Yield) Scaled(m schema.Mass) Yield {
 	}
 	y.Volume = schema.Volume(float64(y.Volume) * float64(m) / float64(y.BagMass))
 	y.BagMass = m
+	if y.Note != "" {
+		y.Note += "; scaled to this bag's mass"
+	}
 	return y
 }
 

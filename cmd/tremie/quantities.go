@@ -1,0 +1,603 @@
+package main
+
+import (
+	"encoding/csv"
+	"encoding/json"
+	"flag"
+	"fmt"
+	"io"
+	"math"
+	"sort"
+	"strconv"
+	"strings"
+	"text/tabwriter"
+
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+func init() {
+	register(&command{
+		name:    "quantities",
+		summary: "annular volumes, bags needed and placed, ratios, project totals",
+		run:     runQuantities,
+	})
+}
+
+// quantitiesCaution goes with every quantities report.
+const quantitiesCaution = "Figures and checks support, and never replace, the review of a licensed professional and " +
+	"the governing local well code. Yields marked common practice or from memory are defaults: set them from the " +
+	"product sheets (--yields FILE); rule thresholds are defaults to be set to the local rules."
+
+// reconcileRuleIDs are the checks of placed amounts and tags that the
+// quantities report repeats under each well.
+var reconcileRuleIDs = map[string]bool{"PLACED-VOLUME-LOW": true, "PLACED-VOLUME-HIGH": true, "TAG-EXPECTED-TOP": true, "TAG-FINAL-TOP": true}
+
+// wellQuantities is one readable well's report and its reconciliation
+// findings.
+type wellQuantities struct {
+	File     string
+	Report   *quantity.Report
+	Findings []rules.Finding
+}
+
+func runQuantities(args []string, stdout, stderr io.Writer) int {
+	fset := flag.NewFlagSet("quantities", flag.ContinueOnError)
+	fset.SetOutput(stderr)
+	format := fset.String("format", "text", "output format: text, json or csv")
+	contingency := fset.Float64("contingency", 0, "percentage added to the project totals when ordering")
+	yieldsFile := fset.String("yields", "", "TOML file with a [yields] table overriding the default yields")
+	fset.Usage = func() {
+		fmt.Fprintln(stderr, "usage: tremie quantities [--format text|json|csv] [--contingency PCT] [--yields FILE] FILE|DIR...")
+		fset.PrintDefaults()
+	}
+	paths, err := parseInterspersed(fset, args)
+	if err != nil {
+		return exitUsage
+	}
+	switch *format {
+	case "text", "json", "csv":
+	default:
+		fmt.Fprintf(stderr, "tremie quantities: unknown format %q (text, json or csv)\n", *format)
+		return exitUsage
+	}
+	if *contingency < 0 || *contingency > 1000 || math.IsNaN(*contingency) {
+		fmt.Fprintf(stderr, "tremie quantities: --contingency %v is not a percentage between 0 and 1000\n", *contingency)
+		return exitUsage
+	}
+	if len(paths) == 0 {
+		fset.Usage()
+		return exitUsage
+	}
+	yields := quantity.DefaultYields()
+	if *yieldsFile != "" {
+		if yields, err = quantity.LoadYields(*yieldsFile); err != nil {
+			fmt.Fprintf(stderr, "tremie quantities: %v\n", err)
+			return exitInput
+		}
+	}
+
+	code := exitOK
+	files, errs := schema.FindWells(paths)
+	for _, e := range errs {
+		fmt.Fprintf(stderr, "tremie quantities: %v\n", e)
+		code = exitInput
+	}
+	var wells []wellQuantities
+	for _, f := range files {
+		w, err := schema.LoadFile(f)
+		if err != nil {
+			fmt.Fprintln(stderr, err)
+			code = exitInput
+			continue
+		}
+		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields)}
+		for _, fd := range rules.Check(w, nil) {
+			if reconcileRuleIDs[fd.Rule] {
+				wq.Findings = append(wq.Findings, fd)
+			}
+		}
+		for _, r := range wq.Report.Rows {
+			if r.Err != nil {
+				fmt.Fprintf(stderr, "%s: %v\n", f, r.Err)
+				if code == exitOK {
+					code = exitFindings
+				}
+			}
+		}
+		wells = append(wells, wq)
+	}
+	if len(files) == 0 && len(errs) == 0 {
+		fmt.Fprintln(stderr, "tremie quantities: no well files found")
+		return exitInput
+	}
+	totals := projectTotals(wells, *contingency)
+	var werr error
+	switch *format {
+	case "json":
+		werr = writeQuantitiesJSON(stdout, wells, totals, *contingency)
+	case "csv":
+		werr = writeQuantitiesCSV(stdout, wells, totals)
+	default:
+		werr = writeQuantitiesText(stdout, wells, totals, *contingency)
+	}
+	if werr != nil {
+		fmt.Fprintf(stderr, "tremie quantities: writing the report: %v\n", werr)
+		return exitOutput
+	}
+	return code
+}
+
+// parseInterspersed parses flags that may come before, between or after
+// the file arguments.
+func parseInterspersed(fset *flag.FlagSet, args []string) ([]string, error) {
+	var paths []string
+	for {
+		if err := fset.Parse(args); err != nil {
+			return nil, err
+		}
+		rest := fset.Args()
+		if len(rest) == 0 {
+			return paths, nil
+		}
+		if rest[0] == "--" {
+			return append(paths, rest[1:]...), nil
+		}
+		paths = append(paths, rest[0])
+		args = rest[1:]
+	}
+}
+
+// total is one material line of the project order: one material with one
+// bag (the same yield per bag and bag mass) across the wells.
+type total struct {
+	Material   schema.Material
+	Yield      quantity.Yield
+	HasYield   bool
+	Units      schema.Units // the first well's, for display
+	Calculated schema.Volume
+	BagsNeeded int // the sum of each interval's bags, each rounded up
+	BagsOrder  int // ceil(BagsNeeded x (1 + contingency))
+	BagsPlaced float64
+	Intervals  int
+}
+
+// projectTotals sums each material over the wells, one line per material
+// and bag. Bags to order are the sum of each interval's bags (each rounded
+// up, since an opened bag rarely travels to the next well) plus the
+// contingency, rounded up: never fewer than the intervals need.
+func projectTotals(wells []wellQuantities, contingency float64) []*total {
+	type key struct {
+		m       schema.Material
+		y, mass float64
+	}
+	byKey := map[key]*total{}
+	var order []*total
+	for _, wq := range wells {
+		for _, r := range wq.Report.Rows {
+			if r.Err != nil {
+				continue
+			}
+			k := key{m: r.Fill.Material}
+			if r.HasYield {
+				k.y, k.mass = float64(r.Yield.Volume), float64(r.Yield.BagMass)
+			}
+			t := byKey[k]
+			if t == nil {
+				t = &total{Material: r.Fill.Material, Yield: r.Yield, HasYield: r.HasYield, Units: wq.Report.Well.Units}
+				byKey[k] = t
+				order = append(order, t)
+			}
+			t.Calculated += r.Calculated
+			t.BagsNeeded += r.BagsNeeded
+			t.BagsPlaced += r.BagsPlaced
+			t.Intervals++
+		}
+	}
+	rank := map[schema.Material]int{}
+	for i, m := range schema.Materials {
+		rank[m] = i
+	}
+	sort.SliceStable(order, func(i, j int) bool {
+		a, b := order[i], order[j]
+		if a.Material != b.Material {
+			return rank[a.Material] < rank[b.Material]
+		}
+		if a.Yield.BagMass != b.Yield.BagMass {
+			return a.Yield.BagMass < b.Yield.BagMass
+		}
+		return a.Yield.Volume < b.Yield.Volume
+	})
+	for _, t := range order {
+		if t.HasYield {
+			t.BagsOrder = ceilBags(float64(t.BagsNeeded) * (1 + contingency/100))
+		}
+	}
+	return order
+}
+
+// ceilBags rounds a bag count up, forgiving float noise on exact counts.
+func ceilBags(n float64) int {
+	if n <= 0 {
+		return 0
+	}
+	return int(math.Ceil(n - 1e-6))
+}
+
+// --- text ---
+
+func writeQuantitiesText(w io.Writer, wells []wellQuantities, totals []*total, contingency float64) error {
+	ew := &errWriter{w: w}
+	for i, wq := range wells {
+		if i > 0 {
+			fmt.Fprintln(ew)
+		}
+		writeWellText(ew, wq)
+	}
+	if len(wells) > 0 {
+		fmt.Fprintln(ew)
+		writeTotalsText(ew, totals, contingency)
+	}
+	fmt.Fprintln(ew)
+	fmt.Fprintln(ew, quantitiesCaution)
+	return ew.err
+}
+
+func writeWellText(w io.Writer, wq wellQuantities) {
+	r := wq.Report
+	u := r.Well.Units
+	p, s := quantity.VolumeUnits(u)
+	fmt.Fprintf(w, "%s  %s\n", r.Well.ID, wq.File)
+	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
+	fmt.Fprintf(tw, "  #\tmaterial\tinterval %s\tcalculated %s\t%s\tyield %s per bag\tbags needed\tbags placed\tplaced %s\tratio\n", u.Depth, p, s, p, p)
+	for _, row := range r.Rows {
+		f := row.Fill
+		iv := schema.TrimFloat(f.Top.In(u.Depth), 2) + "–" + schema.TrimFloat(f.Bottom.In(u.Depth), 2)
+		mat := string(f.Material)
+		if f.Within != "" {
+			mat += " (in " + f.Within + ")"
+		}
+		if row.Err != nil {
+			fmt.Fprintf(tw, "  %d\t%s\t%s\tcannot compute: %v\t\t\t\t\t\t\n", row.Index+1, mat, iv, row.Err)
+			continue
+		}
+		yield, needed := "-", "-"
+		if row.HasYield {
+			yield = quantity.Number(row.Yield.Volume.In(p)) + " / " + quantity.FormatBag(row.Yield.BagMass, u)
+			needed = strconv.Itoa(row.BagsNeeded)
+		}
+		placedBags, placed, ratio := "-", "-", "-"
+		if f.Bags > 0 {
+			placedBags = schema.TrimFloat(f.Bags, 2)
+		} else if f.Placed > 0 {
+			placedBags = "(volume)"
+		}
+		if row.Placed > 0 {
+			placed = quantity.Number(row.Placed.In(p))
+		}
+		if row.Ratio > 0 {
+			ratio = fmt.Sprintf("%.2f", row.Ratio)
+		}
+		fmt.Fprintf(tw, "  %d\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", row.Index+1, mat, iv,
+			quantity.Number(row.Calculated.In(p)), quantity.Number(row.Calculated.In(s)), yield, needed, placedBags, placed, ratio)
+	}
+	tw.Flush()
+	for _, row := range r.Rows {
+		for _, tc := range row.Tags {
+			if tc.Err != nil {
+				continue
+			}
+			note := ""
+			if !tc.Reached {
+				note = " (more than the annulus holds to there)"
+			}
+			fmt.Fprintf(w, "  tag, fill %d: after %s bags tagged %s, expected %s%s\n", row.Index+1,
+				schema.TrimFloat(tc.Tag.AfterBags, 2), u.FormatDepth(tc.Tag.Depth), u.FormatDepth(tc.Expected), note)
+		}
+	}
+	if len(r.Pipes) > 0 {
+		var parts []string
+		for _, pv := range r.Pipes {
+			if pv.Pipe.ID <= 0 {
+				continue
+			}
+			name := pv.Name
+			if pv.Kind != pv.Name {
+				name += " " + pv.Kind
+			}
+			parts = append(parts, name+" "+quantity.FormatPerLength(pv.Inside, u))
+		}
+		if len(parts) > 0 {
+			fmt.Fprintf(w, "  volume inside: %s\n", strings.Join(parts, "; "))
+		}
+	}
+	for _, note := range yieldNotes(r) {
+		fmt.Fprintf(w, "  yield: %s\n", note)
+	}
+	for _, fd := range wq.Findings {
+		fmt.Fprintf(w, "  %s %s (line %d): %s\n", fd.Label(), fd.Rule, fd.Line, fd.Message)
+	}
+}
+
+// yieldNotes lists each yield used in a well once, with its basis.
+func yieldNotes(r *quantity.Report) []string {
+	u := r.Well.Units
+	seen := map[string]bool{}
+	var out []string
+	for _, row := range r.Rows {
+		if !row.HasYield || row.Err != nil {
+			continue
+		}
+		s := fmt.Sprintf("%s %s", row.Fill.Material, quantity.FormatYield(row.Yield, u))
+		if row.Yield.Note != "" {
+			s += ": " + row.Yield.Note
+		}
+		if !seen[s] {
+			seen[s] = true
+			out = append(out, s)
+		}
+	}
+	return out
+}
+
+func writeTotalsText(w io.Writer, totals []*total, contingency float64) {
+	fmt.Fprintf(w, "Project totals (bags to order include a %s %% contingency)\n", schema.TrimFloat(contingency, 2))
+	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
+	fmt.Fprintln(tw, "  material\tyield\tintervals\tcalculated\tbags needed\tbags to order\tbags placed")
+	for _, t := range totals {
+		bag, needed, order := "-", "-", "-"
+		if t.HasYield {
+			bag = quantity.FormatYield(t.Yield, t.Units)
+			needed, order = strconv.Itoa(t.BagsNeeded), strconv.Itoa(t.BagsOrder)
+		}
+		placed := "-"
+		if t.BagsPlaced > 0 {
+			placed = schema.TrimFloat(t.BagsPlaced, 2)
+		}
+		fmt.Fprintf(tw, "  %s\t%s\t%d\t%s\t%s\t%s\t%s\n", t.Material, bag, t.Intervals, quantity.FormatVolume(t.Calculated, t.Units), needed, order, placed)
+	}
+	tw.Flush()
+}
+
+// errWriter keeps the first write error so a report is written without
+// checking every line.
+type errWriter struct {
+	w   io.Writer
+	err error
+}
+
+func (e *errWriter) Write(p []byte) (int, error) {
+	if e.err != nil {
+		return len(p), nil
+	}
+	n, err := e.w.Write(p)
+	e.err = err
+	return n, err
+}
+
+// --- json ---
+
+type jsonQuantities struct {
+	Caution     string          `json:"caution"`
+	Contingency float64         `json:"contingency_pct"`
+	Wells       []jsonWell      `json:"wells"`
+	Totals      []jsonTotal     `json:"totals"`
+	Findings    []rules.Finding `json:"findings"`
+}
+
+type jsonWell struct {
+	File        string     `json:"file"`
+	Well        string     `json:"well"`
+	DepthUnit   string     `json:"depth_unit"`
+	VolumeUnit  string     `json:"volume_unit"`
+	VolumeUnit2 string     `json:"volume_unit_2"`
+	MassUnit    string     `json:"mass_unit"`
+	Fills       []jsonFill `json:"fills"`
+	Pipes       []jsonPipe `json:"pipes"`
+}
+
+type jsonFill struct {
+	Index       int       `json:"index"` // 0-based, as in the key paths
+	Path        string    `json:"path"`
+	Material    string    `json:"material"`
+	Within      string    `json:"within,omitempty"`
+	Top         float64   `json:"top"`
+	Bottom      float64   `json:"bottom"`
+	Calculated  float64   `json:"calculated"`
+	Calculated2 float64   `json:"calculated_2"`
+	Yield       *float64  `json:"yield,omitempty"`
+	BagMass     *float64  `json:"bag_mass,omitempty"`
+	YieldBasis  string    `json:"yield_basis,omitempty"`
+	BagsExact   *float64  `json:"bags_exact,omitempty"`
+	BagsNeeded  *int      `json:"bags_needed,omitempty"`
+	BagsPlaced  *float64  `json:"bags_placed,omitempty"`
+	Placed      *float64  `json:"placed,omitempty"`
+	Ratio       *float64  `json:"ratio,omitempty"`
+	Tags        []jsonTag `json:"tags,omitempty"`
+	Error       string    `json:"error,omitempty"`
+}
+
+type jsonTag struct {
+	AfterBags float64 `json:"after_bags"`
+	Depth     float64 `json:"depth"`
+	Expected  float64 `json:"expected"`
+	Reached   bool    `json:"reached"`
+}
+
+type jsonPipe struct {
+	Name   string  `json:"name"`
+	Kind   string  `json:"kind"`
+	Path   string  `json:"path"`
+	Top    float64 `json:"top"`
+	Bottom float64 `json:"bottom"`
+	// Inside is the volume per length: US gal/ft for a file in feet, L/m
+	// for one in metres (see unit).
+	Inside float64 `json:"inside"`
+	Unit   string  `json:"unit"`
+}
+
+type jsonTotal struct {
+	Material   string   `json:"material"`
+	Yield      *float64 `json:"yield,omitempty"`
+	BagMass    *float64 `json:"bag_mass,omitempty"`
+	MassUnit   string   `json:"mass_unit"`
+	YieldBasis string   `json:"yield_basis,omitempty"`
+	VolumeUnit string   `json:"volume_unit"`
+	Calculated float64  `json:"calculated"`
+	Intervals  int      `json:"intervals"`
+	BagsNeeded *int     `json:"bags_needed,omitempty"`
+	BagsOrder  *int     `json:"bags_to_order,omitempty"`
+	BagsPlaced float64  `json:"bags_placed"`
+}
+
+// r4 rounds to 4 decimals: stable output with no false precision.
+func r4(v float64) float64 { return math.Round(v*1e4) / 1e4 }
+
+func ptr[T any](v T) *T { return &v }
+
+func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*total, contingency float64) error {
+	out := jsonQuantities{Caution: quantitiesCaution, Contingency: contingency, Wells: []jsonWell{}, Totals: []jsonTotal{}, Findings: []rules.Finding{}}
+	for _, wq := range wells {
+		r := wq.Report
+		u := r.Well.Units
+		p, s := quantity.VolumeUnits(u)
+		mu := quantity.MassUnit(u)
+		jw := jsonWell{File: wq.File, Well: r.Well.ID, DepthUnit: string(u.Depth), VolumeUnit: string(p), VolumeUnit2: string(s), MassUnit: string(mu),
+			Fills: []jsonFill{}, Pipes: []jsonPipe{}}
+		for _, row := range r.Rows {
+			f := row.Fill
+			jf := jsonFill{Index: row.Index, Path: f.Path, Material: string(f.Material), Within: f.Within,
+				Top: r4(f.Top.In(u.Depth)), Bottom: r4(f.Bottom.In(u.Depth))}
+			if row.Err != nil {
+				jf.Error = row.Err.Error()
+				jw.Fills = append(jw.Fills, jf)
+				continue
+			}
+			jf.Calculated, jf.Calculated2 = r4(row.Calculated.In(p)), r4(row.Calculated.In(s))
+			if row.HasYield {
+				jf.Yield = ptr(r4(row.Yield.Volume.In(p)))
+				if row.Yield.BagMass > 0 {
+					jf.BagMass = ptr(r4(row.Yield.BagMass.In(mu)))
+				}
+				jf.YieldBasis = string(row.Yield.Basis)
+				jf.BagsExact = ptr(r4(row.BagsExact))
+				jf.BagsNeeded = ptr(row.BagsNeeded)
+			}
+			if f.Bags > 0 {
+				jf.BagsPlaced = ptr(f.Bags)
+			}
+			if row.Placed > 0 {
+				jf.Placed = ptr(r4(row.Placed.In(p)))
+			}
+			if row.Ratio > 0 {
+				jf.Ratio = ptr(r4(row.Ratio))
+			}
+			for _, tc := range row.Tags {
+				if tc.Err == nil {
+					jf.Tags = append(jf.Tags, jsonTag{AfterBags: tc.Tag.AfterBags, Depth: r4(tc.Tag.Depth.In(u.Depth)), Expected: r4(tc.Expected.In(u.Depth)), Reached: tc.Reached})
+				}
+			}
+			jw.Fills = append(jw.Fills, jf)
+		}
+		for _, pv := range r.Pipes {
+			jp := jsonPipe{Name: pv.Name, Kind: pv.Kind, Path: pv.Path, Top: r4(pv.Interval.Top.In(u.Depth)), Bottom: r4(pv.Interval.Bottom.In(u.Depth))}
+			if u.Imperial() {
+				jp.Inside, jp.Unit = r4(pv.Inside.GallonsPerFoot()), "gal/ft"
+			} else {
+				jp.Inside, jp.Unit = r4(pv.Inside.LitresPerMetre()), "L/m"
+			}
+			jw.Pipes = append(jw.Pipes, jp)
+		}
+		out.Wells = append(out.Wells, jw)
+		out.Findings = append(out.Findings, wq.Findings...)
+	}
+	for _, t := range totals {
+		p, _ := quantity.VolumeUnits(t.Units)
+		mu := quantity.MassUnit(t.Units)
+		jt := jsonTotal{Material: string(t.Material), MassUnit: string(mu), VolumeUnit: string(p), Calculated: r4(t.Calculated.In(p)),
+			Intervals: t.Intervals, BagsPlaced: t.BagsPlaced}
+		if t.HasYield {
+			jt.Yield = ptr(r4(t.Yield.Volume.In(p)))
+			if t.Yield.BagMass > 0 {
+				jt.BagMass = ptr(r4(t.Yield.BagMass.In(mu)))
+			}
+			jt.YieldBasis = string(t.Yield.Basis)
+			jt.BagsNeeded, jt.BagsOrder = ptr(t.BagsNeeded), ptr(t.BagsOrder)
+		}
+		out.Totals = append(out.Totals, jt)
+	}
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	return enc.Encode(out)
+}
+
+// --- csv ---
+
+var quantitiesCSVHeader = []string{"kind", "file", "well", "fill", "material", "within", "top", "bottom", "depth_unit",
+	"calculated", "volume_unit", "yield", "yield_basis", "bag_mass", "mass_unit", "bags_needed", "bags_to_order", "bags_placed", "placed", "ratio", "note"}
+
+func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*total) error {
+	cw := csv.NewWriter(w)
+	cw.Write(quantitiesCSVHeader)
+	num := func(v float64) string { return strconv.FormatFloat(r4(v), 'f', -1, 64) }
+	for _, wq := range wells {
+		r := wq.Report
+		u := r.Well.Units
+		p, _ := quantity.VolumeUnits(u)
+		mu := quantity.MassUnit(u)
+		for _, row := range r.Rows {
+			f := row.Fill
+			rec := make([]string, len(quantitiesCSVHeader))
+			rec[0], rec[1], rec[2], rec[3], rec[4], rec[5] = "interval", wq.File, r.Well.ID, strconv.Itoa(row.Index+1), string(f.Material), f.Within
+			rec[6], rec[7], rec[8] = num(f.Top.In(u.Depth)), num(f.Bottom.In(u.Depth)), string(u.Depth)
+			rec[10], rec[14] = string(p), string(mu)
+			if row.Err != nil {
+				rec[20] = row.Err.Error()
+				cw.Write(rec)
+				continue
+			}
+			rec[9] = num(row.Calculated.In(p))
+			if row.HasYield {
+				rec[11], rec[12] = num(row.Yield.Volume.In(p)), string(row.Yield.Basis)
+				if row.Yield.BagMass > 0 {
+					rec[13] = num(row.Yield.BagMass.In(mu))
+				}
+				rec[15] = strconv.Itoa(row.BagsNeeded)
+			}
+			if f.Bags > 0 {
+				rec[17] = num(f.Bags)
+			}
+			if row.Placed > 0 {
+				rec[18] = num(row.Placed.In(p))
+			}
+			if row.Ratio > 0 {
+				rec[19] = num(row.Ratio)
+			}
+			cw.Write(rec)
+		}
+	}
+	for _, t := range totals {
+		p, _ := quantity.VolumeUnits(t.Units)
+		mu := quantity.MassUnit(t.Units)
+		rec := make([]string, len(quantitiesCSVHeader))
+		rec[0], rec[4], rec[20] = "total", string(t.Material), fmt.Sprintf("%d intervals", t.Intervals)
+		rec[9], rec[10], rec[14] = num(t.Calculated.In(p)), string(p), string(mu)
+		if t.HasYield {
+			rec[11], rec[12] = num(t.Yield.Volume.In(p)), string(t.Yield.Basis)
+			if t.Yield.BagMass > 0 {
+				rec[13] = num(t.Yield.BagMass.In(mu))
+			}
+			rec[15], rec[16] = strconv.Itoa(t.BagsNeeded), strconv.Itoa(t.BagsOrder)
+		}
+		if t.BagsPlaced > 0 {
+			rec[17] = num(t.BagsPlaced)
+		}
+		cw.Write(rec)
+	}
+	caution := make([]string, len(quantitiesCSVHeader))
+	caution[0], caution[20] = "caution", quantitiesCaution
+	cw.Write(caution)
+	cw.Flush()
+	return cw.Error()
+}

@@ -1,0 +1,263 @@
+package main
+
+import (
+	"bytes"
+	"encoding/csv"
+	"encoding/json"
+	"math"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+// wellTOML is a planned well in feet: an 8.25-in hole to 30 ft around
+// 2-in Sch 40 PVC (OD 2.375 in, ASTM D1785) to 30 ft; pack 20-30 ft,
+// chips 17-20 ft, neat cement 0-17 ft. By hand, the annulus is pi/4
+// (8.25^2 - 2.375^2) / 144 = 0.34046 ft2/ft = 2.547 US gal/ft:
+//
+//	pack  10 ft: 3.4046 ft3 (25.47 gal) / 0.5 ft3 per 50-lb bag = 6.81 -> 7
+//	chips  3 ft: 1.0214 ft3 / 0.65 ft3 per 50-lb bag = 1.57 -> 2
+//	grout 17 ft: 5.7878 ft3 / 1.18 ft3 per 94-lb sack = 4.90 -> 5
+const wellTOML = `[units]
+depth = "ft"
+
+[well]
+id = "PL-1"
+purpose = "monitoring"
+status = "planned"
+total_depth = 30.0
+
+[[borehole]]
+top = 0.0
+bottom = 30.0
+diameter = 8.25
+
+[[string]]
+name = "PL-1"
+
+[[string.section]]
+kind = "riser"
+top = -2.5
+bottom = 20.0
+material = "PVC"
+size = "2"
+schedule = "40"
+
+[[string.section]]
+kind = "screen"
+top = 20.0
+bottom = 30.0
+slot_number = 10
+
+[[fill]]
+top = 20.0
+bottom = 30.0
+material = "filter-pack"
+
+[[fill]]
+top = 17.0
+bottom = 20.0
+material = "bentonite-chips"
+
+[[fill]]
+top = 0.0
+bottom = 17.0
+material = "neat-cement"
+`
+
+func writeFile(t *testing.T, dir, name, body string) string {
+	t.Helper()
+	p := filepath.Join(dir, name)
+	if err := os.WriteFile(p, []byte(body), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	return p
+}
+
+func runQ(args ...string) (int, string, string) {
+	var out, errb bytes.Buffer
+	code := run(append([]string{"quantities"}, args...), &out, &errb)
+	return code, out.String(), errb.String()
+}
+
+type qJSON struct {
+	Caution string `json:"caution"`
+	Wells   []struct {
+		Well       string `json:"well"`
+		VolumeUnit string `json:"volume_unit"`
+		Unit2      string `json:"volume_unit_2"`
+		Fills      []struct {
+			Material    string   `json:"material"`
+			Calculated  float64  `json:"calculated"`
+			Calculated2 float64  `json:"calculated_2"`
+			BagsNeeded  *int     `json:"bags_needed"`
+			Ratio       *float64 `json:"ratio"`
+		} `json:"fills"`
+		Pipes []struct {
+			Inside float64 `json:"inside"`
+			Unit   string  `json:"unit"`
+		} `json:"pipes"`
+	} `json:"wells"`
+	Totals []struct {
+		Material   string `json:"material"`
+		BagsNeeded *int   `json:"bags_needed"`
+		BagsOrder  *int   `json:"bags_to_order"`
+	} `json:"totals"`
+}
+
+func TestQuantitiesPlannedJSON(t *testing.T) {
+	dir := t.TempDir()
+	writeFile(t, dir, "PL-1.toml", wellTOML)
+	writeFile(t, dir, "PL-2.toml", strings.Replace(wellTOML, `"PL-1"`, `"PL-2"`, 1))
+	code, out, errs := runQ("--format", "json", "--contingency", "10", dir)
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	var q qJSON
+	if err := json.Unmarshal([]byte(out), &q); err != nil {
+		t.Fatal(err)
+	}
+	if len(q.Wells) != 2 || q.Caution == "" {
+		t.Fatalf("wells %d, caution %q", len(q.Wells), q.Caution)
+	}
+	w := q.Wells[0]
+	if w.VolumeUnit != "ft3" || w.Unit2 != "gal" {
+		t.Errorf("units %s %s, want ft3 gal for a file in feet", w.VolumeUnit, w.Unit2)
+	}
+	pack := w.Fills[0]
+	// 0.3405 ft2/ft and 2.547 gal/ft over 10 ft (worked annulus above)
+	if math.Abs(pack.Calculated-3.405) > 0.001 || math.Abs(pack.Calculated2-25.47) > 0.01 {
+		t.Errorf("pack %.4f ft3 %.3f gal, want 3.405 ft3 25.47 gal", pack.Calculated, pack.Calculated2)
+	}
+	for i, want := range []int{7, 2, 5} {
+		if f := w.Fills[i]; f.BagsNeeded == nil || *f.BagsNeeded != want || f.Ratio != nil {
+			t.Errorf("fill %d (%s): bags %v ratio %v, want %d and no ratio", i, f.Material, f.BagsNeeded, f.Ratio, want)
+		}
+	}
+	// ID 2.067 in (ASTM D1785): pi/4 2.067^2 / 144 x 7.48052 = 0.1743 gal/ft
+	if p := w.Pipes[0]; p.Unit != "gal/ft" || math.Abs(p.Inside-0.1743) > 0.0001 {
+		t.Errorf("riser inside %v %s", p.Inside, p.Unit)
+	}
+	// totals: two wells x (7, 2, 5) = 14, 4, 10; +10 % -> 15.4, 4.4, 11 ->
+	// 16, 5, 11 bags to order
+	want := map[string][2]int{"filter-pack": {14, 16}, "bentonite-chips": {4, 5}, "neat-cement": {10, 11}}
+	if len(q.Totals) != 3 {
+		t.Fatalf("%d totals", len(q.Totals))
+	}
+	for _, tot := range q.Totals {
+		w := want[tot.Material]
+		if tot.BagsNeeded == nil || *tot.BagsNeeded != w[0] || *tot.BagsOrder != w[1] {
+			t.Errorf("%s: needed %v order %v, want %v", tot.Material, tot.BagsNeeded, tot.BagsOrder, w)
+		}
+	}
+}
+
+// The demo project's bridged pack (MW-3: 5 bags in a 28-41 ft pack that
+// should take 4.457 ft3 = 12 x 0.34046 + 1 x 0.37122, 8.9 bags) is called
+// out, with its tags.
+func TestQuantitiesDemo(t *testing.T) {
+	code, out, errs := runQ(filepath.Join("demo", "wells"))
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	for _, s := range []string{"MW-3", "4.457", "0.56", "PLACED-VOLUME-LOW", "possible bridge", "expected 36.68 ft", "Project totals", "licensed professional"} {
+		if !strings.Contains(out, s) {
+			t.Errorf("output lacks %q", s)
+		}
+	}
+	// same input, same bytes
+	_, again, _ := runQ(filepath.Join("demo", "wells"))
+	if again != out {
+		t.Error("two runs differ")
+	}
+}
+
+func TestQuantitiesCSVMetric(t *testing.T) {
+	dir := t.TempDir()
+	// 200-mm hole, 60.325-mm OD pipe: pi/4 (0.2^2 - 0.060325^2) = 28.558 L/m;
+	// a pack over 3 m is 85.673 L = 0.0857 m3
+	metric := strings.NewReplacer(`depth = "ft"`, `depth = "m"`, "diameter = 8.25", "diameter = 200",
+		"bottom = 30.0", "bottom = 10.0", "top = 20.0", "top = 7.0", "bottom = 20.0", "bottom = 7.0",
+		"top = 17.0", "top = 5.0", "bottom = 17.0", "bottom = 5.0", "total_depth = 30.0", "total_depth = 10.0",
+		"top = -2.5", "top = -0.5").Replace(wellTOML)
+	writeFile(t, dir, "M-1.toml", metric)
+	code, out, errs := runQ(filepath.Join(dir, "M-1.toml"), "--format", "csv")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	recs, err := csv.NewReader(strings.NewReader(out)).ReadAll()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(recs) != 1+3+3+1 {
+		t.Fatalf("%d records", len(recs))
+	}
+	head := recs[0]
+	col := func(name string) int {
+		for i, h := range head {
+			if h == name {
+				return i
+			}
+		}
+		t.Fatalf("no column %s", name)
+		return -1
+	}
+	pack := recs[1]
+	if pack[col("volume_unit")] != "L" || pack[col("calculated")] != "85.6733" {
+		t.Errorf("pack row %v", pack)
+	}
+	// a 25-kg bag is not given, so the 50-lb reference bag holds:
+	// 85.673 L / (0.5 ft3 = 14.158 L) = 6.05 -> 7 bags
+	if pack[col("bags_needed")] != "7" {
+		t.Errorf("pack bags %s, want 7", pack[col("bags_needed")])
+	}
+	if last := recs[len(recs)-1]; last[0] != "caution" {
+		t.Errorf("last record %v", last)
+	}
+}
+
+// A bad file is reported with its position and the others still come out.
+func TestQuantitiesBadFile(t *testing.T) {
+	dir := t.TempDir()
+	writeFile(t, dir, "A.toml", wellTOML)
+	writeFile(t, dir, "B.toml", strings.Replace(wellTOML, "bottom = 17.0", "botom = 17.0", 1))
+	code, out, errs := runQ(dir, filepath.Join(dir, "missing.toml"))
+	if code != exitInput {
+		t.Errorf("exit %d, want %d", code, exitInput)
+	}
+	if !strings.Contains(errs, "B.toml:") || !strings.Contains(errs, "botom") || !strings.Contains(errs, "missing.toml") {
+		t.Errorf("stderr: %s", errs)
+	}
+	if !strings.Contains(out, "PL-1") {
+		t.Errorf("good well missing from output:\n%s", out)
+	}
+}
+
+func TestQuantitiesYieldsFile(t *testing.T) {
+	dir := t.TempDir()
+	w := writeFile(t, dir, "PL-1.toml", wellTOML)
+	// 3.4046 ft3 / 0.45 = 7.57 -> 8 bags
+	y := writeFile(t, dir, "site.yields.toml", "[yields.filter-pack]\nyield = 0.45\nbag_mass = 50\n")
+	code, out, errs := runQ("--yields", y, w, "--format", "json")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	var q qJSON
+	json.Unmarshal([]byte(out), &q)
+	if n := q.Wells[0].Fills[0].BagsNeeded; n == nil || *n != 8 {
+		t.Errorf("bags with 0.45 ft3 yield: %v, want 8", n)
+	}
+	bad := writeFile(t, dir, "bad.yields.toml", "[yields.filter-pack]\nyeild = 0.45\n")
+	if code, _, errs := runQ("--yields", bad, w); code != exitInput || !strings.Contains(errs, "bad.yields.toml:2") {
+		t.Errorf("bad yields: exit %d, %s", code, errs)
+	}
+}
+
+func TestQuantitiesUsage(t *testing.T) {
+	for _, args := range [][]string{{}, {"--format", "xml", "x"}, {"--contingency", "-5", "x"}, {"--nope", "x"}} {
+		if code, _, _ := runQ(args...); code != exitUsage {
+			t.Errorf("%v: exit %d, want %d", args, code, exitUsage)
+		}
+	}
+}
