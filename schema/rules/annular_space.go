@@ -13,8 +13,9 @@ func init() {
 		Title: "Enough annular space where pack or seal is placed",
 		Doc: "Filter pack, bentonite and grout need room to fall or be tremied into place around the pipe " +
 			"without bridging. Where one of them is placed, the radial space between the borehole wall (or an " +
-			"outer casing's bore) and the pipe inside must be at least the minimum. For nested strings side by " +
-			"side, n pipes across the hole leave n+1 spaces: the space is (hole - sum of ODs) / (n+1).",
+			"outer casing's bore) and the pipe inside must be at least the minimum. Nested strings count as one " +
+			"bundle of pipes side by side, centred: the space is (hole - sum of their ODs) / 2; the space between " +
+			"the strings themselves is not checked.",
 		Severity: Error,
 		Source: "common practice; many monitoring-well codes ask for a hole at least 4 in larger than the casing " +
 			"OD, i.e. 2 in of annular space (e.g. ASTM D5092, from memory)",
@@ -58,7 +59,7 @@ func runAnnularSpace(p *Pass) {
 				if !cs.HasHole {
 					continue
 				}
-				outerD, outer, inner = cs.Hole, p.Dia(cs.Hole)+" hole", cs.Outermost()
+				outerD, outer, inner = cs.Hole, "a "+p.Dia(cs.Hole)+" hole", cs.Outermost()
 			} else {
 				c, in, ok := cs.Inside(name)
 				if !ok {
@@ -69,7 +70,7 @@ func runAnnularSpace(p *Pass) {
 			if len(inner) == 0 {
 				continue // no pipe inside: the fill fills the hole, not an annulus
 			}
-			space := (outerD - sumOD(inner)) / schema.Diameter(len(inner)+1)
+			space := (outerD - sumOD(inner)) / 2
 			if space <= 0 || space >= minSpace-1e-9 {
 				continue // a pipe that does not fit is PIPE-FITS-HOLE's or CASING-CLEARANCE's finding
 			}
@@ -82,9 +83,9 @@ func runAnnularSpace(p *Pass) {
 		f := faults[k]
 		var ods []string
 		for _, q := range f.inner {
-			ods = append(ods, q.Label()+" OD "+p.Dia(q.OD))
+			ods = append(ods, q.Label()+" (OD "+p.Dia(q.OD)+")")
 		}
-		p.Reportf(f.fill.Path, depths(iv), "annular space for %s at %s is %s (%s in a %s); at least %s is needed",
-			material(f.fill.Material), p.span(iv), p.Dia(f.space), strings.Join(ods, ", "), f.outer, p.Dia(minSpace))
+		p.Reportf(f.fill.Path, depths(iv), "annular space for %s at %s is %s: %s in %s; at least %s is needed",
+			material(f.fill.Material), p.span(iv), p.Dia(f.space), strings.Join(ods, " and "), f.outer, p.Dia(minSpace))
 	})
 }

@@ -50,8 +50,8 @@ func runElevationStickup(p *Pass) {
 		}
 	}
 	if diff := surveyed + best; abs(diff) > tol+eps {
-		p.Reportf("elevation.measuring_point", []schema.Length{best}, "measuring point minus ground is %s, but the riser top stands %s above ground (top = %s): they differ by %s, more than %s",
-			p.D(surveyed), p.D(-best), p.D(best), p.D(abs(diff)), p.D(tol))
+		p.Reportf("elevation.measuring_point", []schema.Length{best}, "measuring point minus ground is %s, but the riser top is %s: they differ by %s, more than %s",
+			p.D(surveyed), p.level(best), p.D(abs(diff)), p.D(tol))
 	}
 }
 

@@ -238,13 +238,18 @@ func crossSectionAt(w *schema.Well, d schema.Length) crossSection {
 	if b, ok := w.BoreholeAt(d); ok {
 		cs.Hole, cs.HasHole = b.Diameter, true
 	}
+	seen := map[*schema.String]bool{}
 	for _, p := range pipes(w) {
 		if !p.Contains(d) {
 			continue
 		}
-		if p.Casing != nil {
+		switch {
+		case p.Casing != nil:
 			cs.Casings = append(cs.Casings, p)
-		} else {
+		case !seen[p.String]:
+			// one pipe per string: overlapping sections of one string are
+			// STRING-CONTINUOUS's finding, not a second pipe
+			seen[p.String] = true
 			cs.Strings = append(cs.Strings, p)
 		}
 	}

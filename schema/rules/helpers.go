@@ -9,6 +9,7 @@ package rules
 //   material(m)         "bentonite chips" for schema.BentoniteChips
 //   annulusLabel(name)  "the borehole annulus" / `the annulus inside casing "surface"`
 //   key(path, k)        path + "." + k
+//   p.level(d)          "15 ft below ground" / "3 ft above ground"
 
 import (
 	"fmt"
@@ -58,3 +59,12 @@ func (p *Pass) fillLabel(f *schema.Fill) string {
 
 // pct formats a fraction as a whole percentage.
 func pct(f float64) string { return fmt.Sprintf("%.0f %%", f*100) }
+
+// level writes a depth as below or above ground, for heights that may be
+// negative (riser tops, water levels).
+func (p *Pass) level(d schema.Length) string {
+	if d < 0 {
+		return p.D(-d) + " above ground"
+	}
+	return p.D(d) + " below ground"
+}

@@ -32,10 +32,10 @@ func runWaterLevelInWell(p *Pass) {
 		k := key(wl.Path, "depth")
 		switch {
 		case wl.Depth > w.TotalDepth+eps:
-			p.Reportf(k, []schema.Length{wl.Depth}, "the %s water level at %s below ground is deeper than the well (total depth %s)", wl.Kind, p.D(wl.Depth), p.D(w.TotalDepth))
+			p.Reportf(k, []schema.Length{wl.Depth}, "the %s water level at %s is deeper than the well (total depth %s)", wl.Kind, p.level(wl.Depth), p.D(w.TotalDepth))
 		case wl.Depth < top-eps:
-			p.ReportSeverity(p.capped(Warning), k, []schema.Length{wl.Depth}, "the %s water level at %s below ground is above the top of the riser (%s): a flowing well, or a sign or reference error",
-				wl.Kind, p.D(wl.Depth), p.D(top))
+			p.ReportSeverity(p.capped(Warning), k, []schema.Length{wl.Depth}, "the %s water level at %s is above the top of the riser (%s): a flowing well, or a sign or reference error",
+				wl.Kind, p.level(wl.Depth), p.level(top))
 		}
 	}
 }
