@@ -581,7 +581,7 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*total) er
 		p, _ := quantity.VolumeUnits(t.Units)
 		mu := quantity.MassUnit(t.Units)
 		rec := make([]string, len(quantitiesCSVHeader))
-		rec[0], rec[4], rec[20] = "total", string(t.Material), fmt.Sprintf("%d intervals", t.Intervals)
+		rec[0], rec[4], rec[20] = "total", string(t.Material), countOf(t.Intervals, "interval")
 		rec[9], rec[10], rec[14] = num(t.Calculated.In(p)), string(p), string(mu)
 		if t.HasYield {
 			rec[11], rec[12] = num(t.Yield.Volume.In(p)), string(t.Yield.Basis)
@@ -600,4 +600,12 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*total) er
 	cw.Write(caution)
 	cw.Flush()
 	return cw.Error()
+}
+
+// countOf is "1 interval" or "3 intervals".
+func countOf(n int, word string) string {
+	if n == 1 {
+		return "1 " + word
+	}
+	return strconv.Itoa(n) + " " + word + "s"
 }

@@ -146,6 +146,8 @@ func TestParseYieldsErrors(t *testing.T) {
 		{"[yields]\nvolume = \"cups\"\n", 2, "volume unit"},
 		{"[yields]\nfilter-pack = { bag_mass = 50 }\n", 2, "no yield"},
 		{"[yields]\nfilter-pack = { yield = \"a lot\" }\n", 2, "positive"},
+		{"[yields.filter-pack]\nyield = nan\n", 2, "positive"},
+		{"[yields.filter-pack]\nyield = 0.5\nbag_mass = inf\n", 3, "positive"},
 		{"[yields]\nvolume = = 1\n", 2, ""},
 	} {
 		_, err := ParseYields("y.toml", []byte(c.src))

@@ -3,6 +3,7 @@ package quantity
 import (
 	"errors"
 	"fmt"
+	"math"
 	"os"
 	"sort"
 	"strings"
@@ -119,7 +120,7 @@ func parseYields(name string, data []byte) (*Yields, bool, error) {
 			switch ek {
 			case "yield", "bag_mass":
 				n, ok := number(v)
-				if !ok || n <= 0 {
+				if !ok || !(n > 0) || math.IsInf(n, 0) {
 					return nil, true, errAt(path+"."+ek, "%s must be a positive number, not %v", ek, v)
 				}
 				if ek == "yield" {
