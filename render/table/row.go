@@ -1,0 +1,330 @@
+// Package table builds a project's construction summary: one row per
+// well with its location, elevations, depth, casing, screen, annular
+// fill, latest water level and check status, in the project's depth unit.
+// Writers turn it into CSV, Markdown or XLSX; the columns are defined
+// once (columns.go) and every writer reads them.
+package table
+
+import (
+	"sort"
+	"strings"
+
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+// Caution closes every table: figures support, never replace, review.
+const Caution = "Caution: these figures and checks support, and never replace, the review of a licensed professional and the governing local well code; rule thresholds are defaults to be set to the local rules."
+
+// Status is a well's check status.
+type Status string
+
+const (
+	Clean      Status = "clean"
+	Warnings   Status = "warnings"
+	Errors     Status = "errors"
+	Waived     Status = "waived" // every finding is waived
+	Unreadable Status = "unreadable"
+)
+
+// Entry is one well as the table receives it.
+type Entry struct {
+	File     string
+	Well     *schema.Well // nil when the file could not be read
+	Findings []rules.Finding
+	Err      error // why the file could not be read
+}
+
+// Row is one well's line of the summary, lengths in the table's unit.
+type Row struct {
+	File    string
+	ID      string
+	Purpose string
+
+	Easting, Northing   *float64 // as written
+	Latitude, Longitude *float64
+	System              string
+
+	Ground, MeasuringPoint *float64 // elevations
+	Datum                  string
+	TotalDepth             *float64
+
+	CasingSize, CasingMaterial string
+
+	Screens                         int
+	ScreenTop, ScreenBottom         *float64 // depths
+	ScreenTopElev, ScreenBottomElev *float64 // elevations
+	Slot                            *float64 // in inches (ft tables) or mm (m tables); nil when none or mixed
+	SlotText                        string   // every slot, when they differ
+
+	Pack, Seal, Grout string // intervals "top–bottom; ..."
+
+	WaterDepth *float64
+	WaterDate  string
+	WaterElev  *float64
+	WaterKind  string
+
+	Status                   Status
+	Errors, Warnings, Waived int
+	Problem                  string // the load error of an unreadable file
+}
+
+// Table is the summary of a project.
+type Table struct {
+	Units schema.DepthUnit
+	Rows  []Row
+}
+
+// Build makes the table in the given unit; "" takes the unit every
+// readable well shares, or metres when they differ.
+func Build(entries []Entry, units schema.DepthUnit) *Table {
+	if units == "" {
+		units = sharedUnit(entries)
+	}
+	t := &Table{Units: units}
+	for _, e := range entries {
+		t.Rows = append(t.Rows, rowOf(e, units))
+	}
+	return t
+}
+
+func sharedUnit(entries []Entry) schema.DepthUnit {
+	var u schema.DepthUnit
+	for _, e := range entries {
+		if e.Well == nil {
+			continue
+		}
+		if u == "" {
+			u = e.Well.Units.Depth
+		} else if u != e.Well.Units.Depth {
+			return schema.Metres
+		}
+	}
+	if u == "" {
+		return schema.Metres
+	}
+	return u
+}
+
+func rowOf(e Entry, u schema.DepthUnit) Row {
+	w := e.Well
+	if w == nil {
+		r := Row{File: e.File, Status: Unreadable}
+		if e.Err != nil {
+			r.Problem = firstLine(e.Err.Error())
+		}
+		return r
+	}
+	r := Row{
+		File:      e.File,
+		ID:        w.ID,
+		Purpose:   string(w.Purpose),
+		Easting:   w.Location.Easting,
+		Northing:  w.Location.Northing,
+		Latitude:  w.Location.Latitude,
+		Longitude: w.Location.Longitude,
+		System:    w.Location.System,
+		Datum:     w.Elevation.Datum,
+	}
+	in := func(l schema.Length) *float64 { v := l.In(u); return &v }
+	if w.TotalDepth > 0 {
+		r.TotalDepth = in(w.TotalDepth)
+	}
+	ground := w.Elevation.Ground
+	elev := func(depth schema.Length) *float64 {
+		if ground == nil {
+			return nil
+		}
+		return in(*ground - depth)
+	}
+	if ground != nil {
+		r.Ground = in(*ground)
+	}
+	if mp := w.Elevation.MeasuringPoint; mp != nil {
+		r.MeasuringPoint = in(*mp)
+	}
+	r.CasingSize, r.CasingMaterial = casing(w)
+	screens(w, &r, in, elev)
+	r.Pack, r.Seal, r.Grout = fills(w, u)
+	if wl, ok := latestLevel(w); ok {
+		r.WaterDepth = in(wl.Depth)
+		r.WaterElev = elev(wl.Depth)
+		r.WaterKind = string(wl.Kind)
+		if !wl.Measured.IsZero() {
+			r.WaterDate = wl.Measured.Format("2006-01-02")
+		}
+	}
+	r.Status, r.Errors, r.Warnings, r.Waived = status(e.Findings)
+	return r
+}
+
+// casing describes the riser of each string: "2 in Sch 40", "PVC".
+func casing(w *schema.Well) (size, material string) {
+	var sizes, mats []string
+	for _, s := range w.Strings {
+		if len(s.Sections) == 0 {
+			continue
+		}
+		p := s.Sections[0].Pipe
+		sizes = append(sizes, pipeSize(p))
+		mats = append(mats, p.Material)
+	}
+	return joinDistinct(sizes), joinDistinct(mats)
+}
+
+func pipeSize(p schema.Pipe) string {
+	s := p.Size
+	if s != "" && !strings.HasPrefix(strings.ToUpper(s), "DN") {
+		s += " in"
+	}
+	switch {
+	case p.Schedule != "":
+		s += " Sch " + p.Schedule
+	case p.SDR > 0:
+		s += " SDR " + schema.TrimFloat(p.SDR, 1)
+	}
+	if s == "" && p.OD > 0 {
+		s = "OD " + schema.TrimFloat(float64(p.OD), 1) + " mm"
+	}
+	return strings.TrimSpace(s)
+}
+
+func screens(w *schema.Well, r *Row, in func(schema.Length) *float64, elev func(schema.Length) *float64) {
+	scr := w.Screens()
+	r.Screens = len(scr)
+	if len(scr) == 0 {
+		return
+	}
+	top, bot := scr[0].Section.Top, scr[0].Section.Bottom
+	var slots []string
+	slotSet := map[schema.Diameter]bool{}
+	for _, s := range scr {
+		top = min(top, s.Section.Top)
+		bot = max(bot, s.Section.Bottom)
+		if s.Section.Slot > 0 && !slotSet[s.Section.Slot] {
+			slotSet[s.Section.Slot] = true
+			slots = append(slots, slotText(s.Section, w.Units))
+		}
+	}
+	r.ScreenTop, r.ScreenBottom = in(top), in(bot)
+	r.ScreenTopElev, r.ScreenBottomElev = elev(top), elev(bot)
+	if len(slotSet) == 1 {
+		for d := range slotSet {
+			v := d.Inches()
+			if w.Units.Diameter == schema.Millimetres {
+				v = float64(d)
+			}
+			r.Slot = &v
+		}
+	}
+	r.SlotText = strings.Join(slots, "; ")
+}
+
+// slotText is "0.010 in (10-slot)" or "0.25 mm".
+func slotText(s schema.Section, u schema.Units) string {
+	if u.Diameter == schema.Millimetres {
+		return schema.TrimFloat(float64(s.Slot), 2) + " mm"
+	}
+	return schema.TrimFloat(s.Slot.Inches(), 3) + " in (" + schema.TrimFloat(s.SlotNumber(), 0) + "-slot)"
+}
+
+// fills lists the pack, seal and grout intervals top down; grout includes
+// the concrete surface seal, named when the column mixes materials.
+func fills(w *schema.Well, u schema.DepthUnit) (pack, seal, grout string) {
+	var groups [3][]schema.Fill
+	for _, f := range w.Fills {
+		switch f.Material.Group() {
+		case schema.PackGroup:
+			groups[0] = append(groups[0], f)
+		case schema.SealGroup:
+			groups[1] = append(groups[1], f)
+		case schema.GroutGroup, schema.ConcreteGroup:
+			groups[2] = append(groups[2], f)
+		}
+	}
+	out := [3]string{}
+	for g, fs := range groups {
+		sort.SliceStable(fs, func(i, j int) bool { return fs[i].Top < fs[j].Top })
+		mixed := false
+		for _, f := range fs {
+			mixed = mixed || f.Material != fs[0].Material
+		}
+		var parts []string
+		for _, f := range fs {
+			s := interval(f.Top, f.Bottom, u)
+			if mixed {
+				s += " " + string(f.Material)
+			}
+			parts = append(parts, s)
+		}
+		out[g] = strings.Join(parts, "; ")
+	}
+	return out[0], out[1], out[2]
+}
+
+func interval(top, bot schema.Length, u schema.DepthUnit) string {
+	return schema.TrimFloat(top.In(u), 2) + "–" + schema.TrimFloat(bot.In(u), 2)
+}
+
+// latestLevel is the latest static level, or the latest of any kind when
+// none is static.
+func latestLevel(w *schema.Well) (schema.WaterLevel, bool) {
+	var best schema.WaterLevel
+	found, static := false, false
+	for _, l := range w.WaterLevels {
+		isStatic := l.Kind == schema.Static || l.Kind == ""
+		switch {
+		case !found, isStatic && !static, isStatic == static && l.Measured.After(best.Measured):
+			best, found, static = l, true, isStatic
+		}
+	}
+	return best, found
+}
+
+func status(fs []rules.Finding) (s Status, errs, warns, waived int) {
+	for _, f := range fs {
+		switch {
+		case f.Waived:
+			waived++
+		case f.Severity == rules.Error:
+			errs++
+		default:
+			warns++
+		}
+	}
+	switch {
+	case errs > 0:
+		return Errors, errs, warns, waived
+	case warns > 0:
+		return Warnings, errs, warns, waived
+	case waived > 0:
+		return Waived, errs, warns, waived
+	}
+	return Clean, 0, 0, 0
+}
+
+func joinDistinct(v []string) string {
+	var out []string
+	for _, s := range v {
+		if s != "" && !contains(out, s) {
+			out = append(out, s)
+		}
+	}
+	return strings.Join(out, "; ")
+}
+
+func contains(v []string, s string) bool {
+	for _, x := range v {
+		if x == s {
+			return true
+		}
+	}
+	return false
+}
+
+func firstLine(s string) string {
+	if i := strings.IndexByte(s, '\n'); i >= 0 {
+		return s[:i]
+	}
+	return s
+}

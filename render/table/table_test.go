@@ -1,0 +1,357 @@
+package table
+
+import (
+	"bytes"
+	"encoding/csv"
+	"errors"
+	"io/fs"
+	"math"
+	"sort"
+	"strconv"
+	"strings"
+	"testing"
+	"time"
+
+	"github.com/BurntSushi/toml"
+	"github.com/xuri/excelize/v2"
+
+	"github.com/tremie-dev/tremie/cmd/tremie/demo"
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+// source is one well file: its text and, independently of package
+// schema, its raw TOML as BurntSushi/toml decodes it.
+type source struct {
+	name string
+	text []byte
+	raw  map[string]any
+}
+
+func sources(t *testing.T) []source {
+	t.Helper()
+	var out []source
+	names, _ := fs.Glob(demo.FS, "wells/*.toml")
+	for _, n := range names {
+		b, _ := demo.FS.ReadFile(n)
+		out = append(out, source{name: n, text: b})
+	}
+	out = append(out, source{name: "PZ-9.toml", text: []byte(metricWell)})
+	for i := range out {
+		if _, err := toml.Decode(string(out[i].text), &out[i].raw); err != nil {
+			t.Fatal(err)
+		}
+	}
+	return out
+}
+
+func entries(t *testing.T, src []source) []Entry {
+	var es []Entry
+	for _, s := range src {
+		w, err := schema.Load(s.name, s.text)
+		if err != nil {
+			t.Fatal(err)
+		}
+		es = append(es, Entry{File: s.name, Well: w, Findings: rules.Check(w, nil)})
+	}
+	return es
+}
+
+func num(m map[string]any, k string) (float64, bool) {
+	switch v := m[k].(type) {
+	case float64:
+		return v, true
+	case int64:
+		return float64(v), true
+	}
+	return 0, false
+}
+
+func sub(m map[string]any, k string) map[string]any { v, _ := m[k].(map[string]any); return v }
+
+func list(m map[string]any, k string) []map[string]any { v, _ := m[k].([]map[string]any); return v }
+
+// expected computes a row's numbers from the raw file, in feet: depths
+// and elevations as written, converted with 1 ft = 0.3048 m exactly
+// (NIST SP 811); elevations of depths are ground minus depth, and a
+// water level read from the measuring point is MP elevation minus the
+// reading (common practice).
+func expected(s source) map[string]float64 {
+	toFt := 1.0
+	if sub(s.raw, "units")["depth"] == "m" {
+		toFt = 1 / 0.3048
+	}
+	out := map[string]float64{}
+	el := sub(s.raw, "elevation")
+	ground, hasGround := num(el, "ground")
+	mp, hasMP := num(el, "measuring_point")
+	if hasGround {
+		out["Ground elev. (ft)"] = ground * toFt
+	}
+	if hasMP {
+		out["MP elev. (ft)"] = mp * toFt
+	}
+	td, _ := num(sub(s.raw, "well"), "total_depth")
+	out["Total depth (ft)"] = td * toFt
+	top, bot := math.Inf(1), math.Inf(-1)
+	for _, st := range list(s.raw, "string") {
+		for _, sec := range list(st, "section") {
+			if sec["kind"] == "screen" {
+				a, _ := num(sec, "top")
+				b, _ := num(sec, "bottom")
+				top, bot = math.Min(top, a), math.Max(bot, b)
+			}
+		}
+	}
+	if !math.IsInf(top, 0) {
+		out["Screen top (ft)"], out["Screen bottom (ft)"] = top*toFt, bot*toFt
+		if hasGround {
+			out["Screen top elev. (ft)"], out["Screen bottom elev. (ft)"] = (ground-top)*toFt, (ground-bot)*toFt
+		}
+	}
+	// The latest static reading (dates in these files sort as text).
+	var latest map[string]any
+	latestAt := ""
+	for _, wl := range list(s.raw, "water_level") {
+		kind, _ := wl["kind"].(string)
+		if kind != "" && kind != "static" {
+			continue
+		}
+		at := ""
+		if tm, ok := wl["measured"].(time.Time); ok {
+			at = tm.Format("2006-01-02T15:04:05")
+		}
+		if latest == nil || at > latestAt {
+			latest, latestAt = wl, at
+		}
+	}
+	if latest != nil {
+		d, _ := num(latest, "depth")
+		if latest["reference"] == "measuring-point" {
+			out["Water level elev. (ft)"] = (mp - d) * toFt
+			out["Water level (ft)"] = (d - (mp - ground)) * toFt
+		} else {
+			out["Water level elev. (ft)"] = (ground - d) * toFt
+			out["Water level (ft)"] = d * toFt
+		}
+	}
+	return out
+}
+
+func TestCSVNumbersEqualTheWellFiles(t *testing.T) {
+	src := sources(t)
+	tb := Build(entries(t, src), schema.Feet)
+	var buf bytes.Buffer
+	if err := tb.CSV(&buf); err != nil {
+		t.Fatal(err)
+	}
+	recs, err := csv.NewReader(&buf).ReadAll() // encoding/csv checks the record lengths
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(recs) != len(src)+2 || !strings.HasPrefix(recs[len(recs)-1][0], "Caution:") {
+		t.Fatalf("%d records; last %q", len(recs), recs[len(recs)-1][0])
+	}
+	col := map[string]int{}
+	for i, h := range recs[0] {
+		col[h] = i
+	}
+	checked := 0
+	for i, s := range src {
+		rec := recs[i+1]
+		for h, want := range expected(s) {
+			j, ok := col[h]
+			if !ok {
+				t.Fatalf("no column %q in %v", h, recs[0])
+			}
+			got, err := strconv.ParseFloat(rec[j], 64)
+			// Two decimals are printed.
+			if err != nil || math.Abs(got-want) > 0.005+1e-9 {
+				t.Errorf("%s %s = %q, want %.4f", s.name, h, rec[j], want)
+			}
+			checked++
+		}
+		if id := sub(s.raw, "well")["id"]; rec[col["Well"]] != id {
+			t.Errorf("%s: id %q", s.name, rec[col["Well"]])
+		}
+	}
+	if checked < 6*len(src) {
+		t.Errorf("only %d numbers checked", checked)
+	}
+}
+
+func TestXLSXNumbersEqualTheWellFiles(t *testing.T) {
+	src := sources(t)
+	tb := Build(entries(t, src), schema.Feet)
+	data, err := tb.XLSX("test", time.Date(2026, 6, 15, 0, 0, 0, 0, time.UTC))
+	if err != nil {
+		t.Fatal(err)
+	}
+	f, err := excelize.OpenReader(bytes.NewReader(data), excelize.Options{RawCellValue: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	rows, err := f.GetRows("Summary")
+	if err != nil {
+		t.Fatal(err)
+	}
+	col := map[string]int{}
+	for i, h := range rows[0] {
+		col[h] = i
+	}
+	for i, s := range src {
+		for h, want := range expected(s) {
+			cell, _ := excelize.CoordinatesToCellName(col[h]+1, i+2)
+			if typ, _ := f.GetCellType("Summary", cell); typ != excelize.CellTypeNumber && typ != excelize.CellTypeUnset {
+				t.Errorf("%s %s: cell type %v, want a number", s.name, h, typ)
+			}
+			v, _ := f.GetCellValue("Summary", cell)
+			got, err := strconv.ParseFloat(v, 64)
+			// Full precision is stored; only the rounding of the
+			// inputs' conversions separates them.
+			if err != nil || math.Abs(got-want) > 1e-9 {
+				t.Errorf("%s %s = %q, want %v", s.name, h, v, want)
+			}
+		}
+	}
+	props, _ := f.GetDocProps()
+	if props.Created != "2026-06-15T00:00:00Z" || props.Modified != props.Created {
+		t.Errorf("doc dates %q %q", props.Created, props.Modified)
+	}
+	again, _ := tb.XLSX("test", time.Date(2026, 6, 15, 0, 0, 0, 0, time.UTC))
+	if !bytes.Equal(data, again) {
+		t.Error("XLSX bytes differ between two runs")
+	}
+}
+
+func TestTextColumns(t *testing.T) {
+	w, err := schema.Load("PZ-9.toml", []byte(metricWell))
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := Build([]Entry{{Well: w}}, "").Rows[0]
+	if r.CasingSize != "DN50 SDR 11" || r.CasingMaterial != "PVC" {
+		t.Errorf("casing %q %q", r.CasingSize, r.CasingMaterial)
+	}
+	if r.Slot == nil || math.Abs(*r.Slot-0.5) > 1e-12 || r.SlotText != "0.5 mm" {
+		t.Errorf("slot %v %q", r.Slot, r.SlotText)
+	}
+	if r.Pack != "9.4–14.5" || r.Seal != "8.4–9.4" || r.Grout != "0–8.4" {
+		t.Errorf("fills %q | %q | %q", r.Pack, r.Seal, r.Grout)
+	}
+	// The later of the two readings: 122.12 - 4.31 = 117.81 m.
+	if r.WaterDate != "2026-05-02" || r.WaterElev == nil || math.Abs(*r.WaterElev-117.81) > 1e-9 {
+		t.Errorf("water %q %v", r.WaterDate, r.WaterElev)
+	}
+}
+
+func mustRead(t *testing.T, name string) []byte {
+	b, err := demo.FS.ReadFile(name)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return b
+}
+
+func TestStatusAndUnreadable(t *testing.T) {
+	w, _ := schema.Load("PZ-9.toml", []byte(metricWell))
+	cases := []struct {
+		fs   []rules.Finding
+		want Status
+	}{
+		{nil, Clean},
+		{[]rules.Finding{{Severity: rules.Warning}}, Warnings},
+		{[]rules.Finding{{Severity: rules.Error, Waived: true}}, Waived},
+		{[]rules.Finding{{Severity: rules.Error, Waived: true}, {Severity: rules.Warning}}, Warnings},
+		{[]rules.Finding{{Severity: rules.Warning}, {Severity: rules.Error}}, Errors},
+	}
+	for i, c := range cases {
+		if got := Build([]Entry{{Well: w, Findings: c.fs}}, "").Rows[0].Status; got != c.want {
+			t.Errorf("case %d: %s, want %s", i, got, c.want)
+		}
+	}
+	tb := Build([]Entry{{File: "bad.toml", Err: errors.New("bad.toml:3:1: TOML syntax: x\nmore")}, {Well: w}}, "")
+	if tb.Units != schema.Metres {
+		t.Errorf("units %q: the only readable well is in metres", tb.Units)
+	}
+	var md bytes.Buffer
+	tb.Markdown(&md)
+	lines := strings.Split(md.String(), "\n")
+	if !strings.Contains(lines[2], "unreadable: bad.toml:3:1: TOML syntax: x |") || !strings.HasPrefix(lines[3], "| PZ-9 |") {
+		t.Errorf("markdown:\n%s", md.String())
+	}
+	if !strings.Contains(lines[1], "---:|") || !strings.Contains(md.String(), Caution) {
+		t.Errorf("markdown header/caution:\n%s", md.String())
+	}
+}
+
+func TestMixedUnitsDefaultToMetres(t *testing.T) {
+	src := sources(t)
+	tb := Build(entries(t, src), "")
+	units := map[schema.DepthUnit]bool{}
+	for _, e := range entries(t, src) {
+		units[e.Well.Units.Depth] = true
+	}
+	if len(units) != 2 || tb.Units != schema.Metres {
+		t.Errorf("units %v → %q", units, tb.Units)
+	}
+	h := tb.Header()
+	sort.Strings(h)
+	if i := sort.SearchStrings(h, "Total depth (m)"); i == len(h) || h[i] != "Total depth (m)" {
+		t.Errorf("header %v", h)
+	}
+}
+
+// metricWell is an invented piezometer written in metres, with a sump
+// and a reading from the measuring point.
+const metricWell = `[units]
+depth = "m"
+[well]
+id = "PZ-9"
+purpose = "piezometer"
+total_depth = 14.5
+[elevation]
+ground = 121.37
+measuring_point = 122.12
+[[borehole]]
+top = 0.0
+bottom = 14.5
+diameter = 200
+[[string]]
+[[string.section]]
+kind = "riser"
+top = -0.75
+bottom = 10.0
+material = "PVC"
+size = "DN50"
+sdr = 11
+[[string.section]]
+kind = "screen"
+top = 10.0
+bottom = 13.0
+slot = 0.5
+[[string.section]]
+kind = "sump"
+top = 13.0
+bottom = 14.5
+[[fill]]
+top = 9.4
+bottom = 14.5
+material = "filter-pack"
+[[fill]]
+top = 8.4
+bottom = 9.4
+material = "bentonite-pellets"
+[[fill]]
+top = 0.0
+bottom = 8.4
+material = "bentonite-grout"
+[[water_level]]
+depth = 4.31
+reference = "measuring-point"
+measured = 2026-05-02
+[[water_level]]
+depth = 4.02
+reference = "measuring-point"
+measured = 2026-04-01
+`
