@@ -1,77 +1,12 @@
 package rules
 
 import (
-	"bufio"
-	"bytes"
-	"fmt"
-	"os"
 	"path/filepath"
-	"sort"
 	"strings"
 	"testing"
 
 	"github.com/tremie-dev/tremie/schema"
 )
-
-// reconcileRules are the rules whose fixtures this file runs (a shared
-// harness that runs every rule's fixtures checks them again; harmless).
-var reconcileRules = []string{"PLACED-VOLUME-LOW", "PLACED-VOLUME-HIGH", "TAG-EXPECTED-TOP", "TAG-FINAL-TOP"}
-
-// Each fixture's "# want RULE-ID" comments are the lines the rule must
-// flag, and the only ones; the hand arithmetic is in each fixture's header.
-func TestReconcileFixtures(t *testing.T) {
-	for _, id := range reconcileRules {
-		r, ok := Lookup(id)
-		if !ok {
-			t.Fatalf("rule %s not registered", id)
-		}
-		for _, name := range []string{"pass.toml", "fail.toml"} {
-			path := filepath.Join("testdata", id, name)
-			data, err := os.ReadFile(path)
-			if err != nil {
-				t.Fatal(err)
-			}
-			w, err := schema.Load(path, data)
-			if err != nil {
-				t.Fatalf("%s: %v", path, err)
-			}
-			want := reconcileWants(data, id)
-			if name == "fail.toml" && len(want) == 0 {
-				t.Errorf("%s: no # want line", path)
-			}
-			var got []int
-			for _, f := range Check(w, nil) {
-				if f.Rule == id {
-					got = append(got, f.Line)
-				}
-			}
-			sort.Ints(got)
-			if fmt.Sprint(got) != fmt.Sprint(want) {
-				t.Errorf("%s: %s flagged lines %v, want %v", path, r.ID, got, want)
-				for _, f := range Check(w, nil) {
-					if f.Rule == id {
-						t.Logf("  %d: %s", f.Line, f.Message)
-					}
-				}
-			}
-		}
-	}
-}
-
-func reconcileWants(data []byte, id string) []int {
-	var out []int
-	sc := bufio.NewScanner(bytes.NewReader(data))
-	for n := 1; sc.Scan(); n++ {
-		if i := strings.Index(sc.Text(), "# want "); i >= 0 {
-			for _, w := range strings.Fields(sc.Text()[i+len("# want "):]) {
-				if w == id {
-					out = append(out, n)
-				}
-			}
-		}
-	}
-	return out
-}
 
 // A pack that took about half its volume is called a possible bridge,
 // naming the interval, and each tag out of tolerance names the expected
