@@ -1,0 +1,423 @@
+package out
+
+import (
+	"bytes"
+	"fmt"
+	"image"
+	"image/color"
+	_ "image/jpeg" // Image items may hold JPEG bytes
+	_ "image/png"
+	"math"
+	"strings"
+	"unicode"
+
+	"github.com/tdewolff/canvas"
+
+	"github.com/tremie-dev/tremie/render/draw"
+)
+
+const (
+	mmPerPt   = 25.4 / 72
+	hairline  = 0.25 // points, for a stroke colour with no width (see draw.Style)
+	maxPoints = 1e6  // a page coordinate beyond this (≈ 350 m) is a layout bug
+)
+
+// painter translates one page's items into calls on a canvas renderer.
+type painter struct {
+	r      canvas.Renderer
+	height float64 // page height, points
+	fonts  *fontSet
+	err    error
+}
+
+// paintPage draws every item of p on r; it reports the first item that
+// cannot be drawn (a non-finite number, undecodable image bytes) and draws
+// the rest.
+func paintPage(r canvas.Renderer, p *draw.Page, fonts *fontSet) error {
+	pt := &painter{r: r, height: p.Height, fonts: fonts}
+	pt.items(p.Items, nil, "")
+	return pt.err
+}
+
+func (p *painter) fail(path string, format string, args ...any) {
+	if p.err == nil {
+		p.err = fmt.Errorf("item %s: %s", path, fmt.Sprintf(format, args...))
+	}
+}
+
+// items draws a list under an optional clip rectangle (in points).
+func (p *painter) items(items []draw.Item, clip *draw.Rect, prefix string) {
+	for i, it := range items {
+		path := fmt.Sprint(i)
+		if prefix != "" {
+			path = prefix + "." + path
+		}
+		switch it := it.(type) {
+		case draw.Box:
+			if !finite(it.X, it.Y, it.W, it.H) {
+				p.fail(path, "box %q has a non-finite coordinate", it.Role)
+				continue
+			}
+			r := normRect(it.Rect)
+			p.path(rectPath(p.rect(r)), it.Style, clip)
+		case draw.Shape:
+			if len(it.Points) < 2 {
+				continue
+			}
+			cp := &canvas.Path{}
+			for j, pt := range it.Points {
+				if !finite(pt.X, pt.Y) {
+					p.fail(path, "shape %q point %d is not finite", it.Role, j)
+					cp = nil
+					break
+				}
+				q := p.pos(pt.X, pt.Y)
+				if j == 0 {
+					cp.MoveTo(q.X, q.Y)
+				} else {
+					cp.LineTo(q.X, q.Y)
+				}
+			}
+			if cp == nil {
+				continue
+			}
+			if it.Closed {
+				cp.Close()
+			}
+			p.path(cp, it.Style, clip)
+		case draw.Circle:
+			if !finite(it.Center.X, it.Center.Y, it.R) {
+				p.fail(path, "circle %q is not finite", it.Role)
+				continue
+			}
+			if it.R <= 0 {
+				continue
+			}
+			c := p.pos(it.Center.X, it.Center.Y)
+			p.path(canvas.Circle(it.R*mmPerPt).Translate(c.X, c.Y), it.Style, clip)
+		case draw.Text:
+			if !finite(it.At.X, it.At.Y, it.Size, it.Rotate) {
+				p.fail(path, "text %q is not finite", it.Role)
+				continue
+			}
+			p.text(it, clip, path)
+		case draw.Image:
+			if !finite(it.X, it.Y, it.W, it.H) {
+				p.fail(path, "image %q has a non-finite coordinate", it.Role)
+				continue
+			}
+			p.image(it, clip, path)
+		case draw.Clip:
+			if !finite(it.X, it.Y, it.W, it.H) {
+				p.fail(path, "clip has a non-finite coordinate")
+				continue
+			}
+			r := normRect(it.Rect)
+			if clip != nil {
+				r = intersect(r, *clip)
+			}
+			if r.W <= 0 || r.H <= 0 {
+				continue
+			}
+			p.items(it.Items, &r, path)
+		case nil:
+		default:
+			p.fail(path, "unknown item type %T", it)
+		}
+	}
+}
+
+// pos converts a page point to canvas millimetres.
+func (p *painter) pos(x, y float64) canvas.Point {
+	return canvas.Point{X: x * mmPerPt, Y: (p.height - y) * mmPerPt}
+}
+
+// rect converts a page rectangle to canvas millimetres.
+func (p *painter) rect(r draw.Rect) canvas.Rect {
+	return canvas.Rect{
+		X0: r.X * mmPerPt, Y0: (p.height - r.Bottom()) * mmPerPt,
+		X1: r.Right() * mmPerPt, Y1: (p.height - r.Y) * mmPerPt,
+	}
+}
+
+func rectPath(r canvas.Rect) *canvas.Path {
+	return canvas.Rectangle(r.W(), r.H()).Translate(r.X0, r.Y0)
+}
+
+// path draws a filled and/or stroked outline. An open shape with a fill is
+// filled as if closed, as SVG and PDF both do.
+func (p *painter) path(cp *canvas.Path, s draw.Style, clip *draw.Rect) {
+	fill := !s.Fill.None()
+	stroke := !s.Stroke.None()
+	if !fill && !stroke {
+		return
+	}
+	st := canvas.DefaultStyle
+	st.Fill = canvas.Paint{}
+	if fill {
+		st.Fill = canvas.Paint{Color: rgba(s.Fill)}
+	}
+	width := s.StrokeWidth
+	if width <= 0 {
+		width = hairline
+	}
+	if stroke {
+		st.Stroke = canvas.Paint{Color: rgba(s.Stroke)}
+		st.StrokeWidth = width * mmPerPt
+		st.Dashes = dashes(s.Dash)
+	}
+	if clip == nil {
+		p.r.RenderPath(cp, st, canvas.Identity)
+		return
+	}
+
+	cr := p.rect(*clip)
+	// A miter can reach several half-widths past a corner (limit 4).
+	reach := 0.0
+	if stroke {
+		reach = 2 * st.StrokeWidth
+	}
+	b := cp.FastBounds().Expand(reach)
+	switch {
+	case cr.Contains(b):
+		p.r.RenderPath(cp, st, canvas.Identity)
+		return
+	case !cr.Overlaps(b):
+		return
+	}
+	clipPath := rectPath(cr)
+	if fill {
+		fs := canvas.DefaultStyle
+		fs.Fill = st.Fill
+		area := cp
+		if !cp.Closed() {
+			area = cp.Copy()
+			area.Close()
+		}
+		if part := area.And(clipPath); !part.Empty() {
+			p.r.RenderPath(part, fs, canvas.Identity)
+		}
+	}
+	if stroke {
+		outline := cp
+		if len(st.Dashes) > 0 {
+			outline = outline.Dash(0, st.Dashes...)
+		}
+		outline = outline.Stroke(st.StrokeWidth, canvas.ButtCap, canvas.MiterJoin, canvas.Tolerance)
+		ss := canvas.DefaultStyle
+		ss.Fill = st.Stroke
+		if part := outline.And(clipPath); !part.Empty() {
+			p.r.RenderPath(part, ss, canvas.Identity)
+		}
+	}
+}
+
+// dashes converts a dash pattern to millimetres, dropping one that would
+// draw nothing or never end (no positive length).
+func dashes(d []float64) []float64 {
+	if len(d) == 0 {
+		return nil
+	}
+	out := make([]float64, 0, len(d))
+	total := 0.0
+	for _, v := range d {
+		if !finite(v) || v < 0 {
+			return nil
+		}
+		out = append(out, v*mmPerPt)
+		total += v
+	}
+	if total <= 0 {
+		return nil
+	}
+	return out
+}
+
+func (p *painter) text(t draw.Text, clip *draw.Rect, path string) {
+	s := cleanText(t.S)
+	if strings.TrimSpace(s) == "" || t.Size <= 0 {
+		return
+	}
+	cf, err := p.fonts.font(t.Font)
+	if err != nil {
+		p.fail(path, "%v", err)
+		return
+	}
+	col := t.Color
+	if col.None() {
+		col = draw.Black
+	}
+	face := cf.Face(t.Size, rgba(col))
+	// The anchor shift uses the same measure layout used, so a centred or
+	// right-aligned label lands where layout put it.
+	w := draw.TextWidth(t.Font, t.Size, s)
+	shift := 0.0
+	switch t.Anchor {
+	case draw.Middle:
+		shift = -w / 2
+	case draw.End:
+		shift = -w
+	}
+	at := p.pos(t.At.X, t.At.Y)
+	m := canvas.Identity.Translate(at.X, at.Y).Rotate(t.Rotate).Translate(shift*mmPerPt, 0)
+
+	if clip != nil {
+		asc, desc := draw.Ascent(t.Font, t.Size), draw.Descent(t.Font, t.Size)
+		box := canvas.Rect{X0: 0, Y0: -desc * mmPerPt, X1: w * mmPerPt, Y1: asc * mmPerPt}.Transform(m)
+		cr := p.rect(*clip)
+		switch {
+		case cr.Contains(box):
+		case !cr.Overlaps(box):
+			return
+		default:
+			// Cut glyph outlines: the visible part stays exact, at the cost
+			// of this one label not being searchable text.
+			outline, _, err := face.ToPath(s)
+			if err != nil {
+				p.fail(path, "text %q: %v", t.Role, err)
+				return
+			}
+			st := canvas.DefaultStyle
+			st.Fill = canvas.Paint{Color: rgba(col)}
+			if part := outline.Transform(m).And(rectPath(cr)); !part.Empty() {
+				p.r.RenderPath(part, st, canvas.Identity)
+			}
+			return
+		}
+	}
+	p.r.RenderText(canvas.NewTextLine(face, s, canvas.Left), m)
+}
+
+// cleanText makes a one-line string: line and paragraph breaks and other
+// control characters become spaces, since a Text is a single line.
+func cleanText(s string) string {
+	if !strings.ContainsFunc(s, isBreakOrControl) {
+		return s
+	}
+	return strings.Map(func(r rune) rune {
+		if isBreakOrControl(r) {
+			return ' '
+		}
+		return r
+	}, s)
+}
+
+func isBreakOrControl(r rune) bool {
+	return unicode.IsControl(r) || r == '\u2028' || r == '\u2029'
+}
+
+func (p *painter) image(im draw.Image, clip *draw.Rect, path string) {
+	r := normRect(im.Rect)
+	if r.W <= 0 || r.H <= 0 {
+		return
+	}
+	img, _, err := image.Decode(bytes.NewReader(im.Data))
+	if err != nil {
+		p.fail(path, "image %q: %v", im.Role, err)
+		return
+	}
+	if clip != nil {
+		v := intersect(r, *clip)
+		if v.W <= 0 || v.H <= 0 {
+			return
+		}
+		if v != r {
+			img, r = cropImage(img, r, v)
+			if img == nil {
+				return
+			}
+		}
+	}
+	b := img.Bounds()
+	if b.Empty() {
+		return
+	}
+	bl := p.pos(r.X, r.Bottom())
+	m := canvas.Identity.Translate(bl.X, bl.Y).Scale(r.W*mmPerPt/float64(b.Dx()), r.H*mmPerPt/float64(b.Dy()))
+	p.r.RenderImage(img, m)
+}
+
+// rgba converts to canvas's premultiplied colour.
+func rgba(c draw.Color) color.RGBA {
+	a := uint32(c.A)
+	return color.RGBA{
+		R: uint8(uint32(c.R) * a / 255),
+		G: uint8(uint32(c.G) * a / 255),
+		B: uint8(uint32(c.B) * a / 255),
+		A: c.A,
+	}
+}
+
+func finite(vs ...float64) bool {
+	for _, v := range vs {
+		if math.IsNaN(v) || math.IsInf(v, 0) || math.Abs(v) > maxPoints {
+			return false
+		}
+	}
+	return true
+}
+
+// normRect turns a rectangle with a negative width or height around.
+func normRect(r draw.Rect) draw.Rect {
+	if r.W < 0 {
+		r.X, r.W = r.X+r.W, -r.W
+	}
+	if r.H < 0 {
+		r.Y, r.H = r.Y+r.H, -r.H
+	}
+	return r
+}
+
+func intersect(a, b draw.Rect) draw.Rect {
+	x0, y0 := math.Max(a.X, b.X), math.Max(a.Y, b.Y)
+	x1, y1 := math.Min(a.Right(), b.Right()), math.Min(a.Bottom(), b.Bottom())
+	if x1 < x0 {
+		x1 = x0
+	}
+	if y1 < y0 {
+		y1 = y0
+	}
+	return draw.Rect{X: x0, Y: y0, W: x1 - x0, H: y1 - y0}
+}
+
+// cropImage cuts the part of img (placed at r) that lies in v. Pixels are
+// cut whole; a coarse image is first enlarged, nearest neighbour, so that
+// the cut lands within about 0.1 pt of v, up to 4 megapixels.
+func cropImage(img image.Image, r, v draw.Rect) (image.Image, draw.Rect) {
+	const finePt, maxPx = 0.1, 4_000_000
+	b := img.Bounds()
+	sx, sy := float64(b.Dx())/r.W, float64(b.Dy())/r.H // pixels per point
+	kx := math.Max(1, math.Ceil(1/(sx*finePt)))
+	ky := math.Max(1, math.Ceil(1/(sy*finePt)))
+	fx, fy := sx*kx, sy*ky // fine pixels per point
+	crop := image.Rect(
+		int(math.Floor((v.X-r.X)*fx)), int(math.Floor((v.Y-r.Y)*fy)),
+		int(math.Ceil((v.Right()-r.X)*fx)), int(math.Ceil((v.Bottom()-r.Y)*fy)),
+	).Intersect(image.Rect(0, 0, int(float64(b.Dx())*kx), int(float64(b.Dy())*ky)))
+	if crop.Empty() {
+		return nil, r
+	}
+	if float64(crop.Dx())*float64(crop.Dy()) > maxPx && (kx > 1 || ky > 1) {
+		// Too large: fall back to whole source pixels.
+		kx, ky = 1, 1
+		fx, fy = sx, sy
+		crop = image.Rect(
+			int(math.Floor((v.X-r.X)*fx)), int(math.Floor((v.Y-r.Y)*fy)),
+			int(math.Ceil((v.Right()-r.X)*fx)), int(math.Ceil((v.Bottom()-r.Y)*fy)),
+		).Intersect(image.Rect(0, 0, b.Dx(), b.Dy()))
+	}
+	// A fresh image at the origin: renderers assume bounds start at 0.
+	dst := image.NewRGBA(image.Rect(0, 0, crop.Dx(), crop.Dy()))
+	for y := 0; y < crop.Dy(); y++ {
+		srcY := b.Min.Y + int(float64(crop.Min.Y+y)/ky)
+		for x := 0; x < crop.Dx(); x++ {
+			srcX := b.Min.X + int(float64(crop.Min.X+x)/kx)
+			dst.Set(x, y, img.At(srcX, srcY))
+		}
+	}
+	placed := draw.Rect{
+		X: r.X + float64(crop.Min.X)/fx, Y: r.Y + float64(crop.Min.Y)/fy,
+		W: float64(crop.Dx()) / fx, H: float64(crop.Dy()) / fy,
+	}
+	return dst, placed
+}

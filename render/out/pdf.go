@@ -1,0 +1,51 @@
+package out
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+
+	"github.com/tdewolff/canvas"
+	"github.com/tdewolff/canvas/renderers/pdf"
+
+	"github.com/tremie-dev/tremie/render/draw"
+)
+
+// PDF writes every page of doc into one PDF. Text is real text in
+// embedded, subset TrueType faces with a Unicode map, so it can be
+// searched and copied. The creation date is doc.Date.
+func PDF(doc *draw.Document) ([]byte, error) {
+	if doc == nil || len(doc.Pages) == 0 {
+		return nil, errors.New("pdf: the document has no pages")
+	}
+	info, err := newPDFInfo(doc)
+	if err != nil {
+		return nil, fmt.Errorf("pdf: %w", err)
+	}
+	pages := make([]*draw.Page, len(doc.Pages))
+	for i := range doc.Pages {
+		if pages[i], err = pageOf(doc, i); err != nil {
+			return nil, fmt.Errorf("pdf: %w", err)
+		}
+	}
+	var buf bytes.Buffer
+	opts := pdf.Options{Compress: true, SubsetFonts: true, ImageEncoding: canvas.Lossless}
+	r := pdf.New(&buf, pages[0].Width*mmPerPt, pages[0].Height*mmPerPt, &opts)
+	fonts := &fontSet{}
+	for i, p := range pages {
+		if i > 0 {
+			r.NewPage(p.Width*mmPerPt, p.Height*mmPerPt)
+		}
+		if err := paintPage(pdfRenderer{r}, p, fonts); err != nil {
+			return nil, fmt.Errorf("pdf page %d: %w", i+1, err)
+		}
+	}
+	if err := r.Close(); err != nil {
+		return nil, fmt.Errorf("pdf: %w", err)
+	}
+	out, err := fixPDF(buf.Bytes(), info.object())
+	if err != nil {
+		return nil, fmt.Errorf("pdf: %w", err)
+	}
+	return out, nil
+}

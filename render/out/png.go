@@ -1,0 +1,52 @@
+package out
+
+import (
+	"bytes"
+	"fmt"
+	"image"
+	imagedraw "image/draw"
+	"image/png"
+	"math"
+
+	"github.com/tdewolff/canvas"
+	"github.com/tdewolff/canvas/renderers/rasterizer"
+
+	"github.com/tremie-dev/tremie/render/draw"
+)
+
+// maxPixels bounds a raster so a mistaken dpi cannot exhaust memory:
+// 100 megapixels is a Tabloid sheet at about 550 dpi.
+const maxPixels = 100_000_000
+
+// PixelSize is the size in pixels of a page rasterised at dpi: each side
+// in inches times dpi, rounded to the nearest pixel.
+func PixelSize(p *draw.Page, dpi float64) (w, h int) {
+	return int(p.Width/72*dpi + 0.5), int(p.Height/72*dpi + 0.5)
+}
+
+// PNG rasterises page i (0-based) of doc at dpi on a white ground.
+func PNG(doc *draw.Document, i int, dpi float64) ([]byte, error) {
+	p, err := pageOf(doc, i)
+	if err != nil {
+		return nil, fmt.Errorf("png: %w", err)
+	}
+	if math.IsNaN(dpi) || dpi <= 0 || dpi > 2400 {
+		return nil, fmt.Errorf("png: resolution %g dpi is outside 0–2400", dpi)
+	}
+	w, h := PixelSize(p, dpi)
+	if w < 1 || h < 1 || float64(w)*float64(h) > maxPixels {
+		return nil, fmt.Errorf("png page %d: %d × %d pixels at %g dpi is outside 1 pixel to %d megapixels", i+1, w, h, dpi, maxPixels/1_000_000)
+	}
+	img := image.NewRGBA(image.Rect(0, 0, w, h))
+	imagedraw.Draw(img, img.Bounds(), image.White, image.Point{}, imagedraw.Src)
+	r := rasterizer.FromImage(img, canvas.DPI(dpi), canvas.DefaultColorSpace)
+	if err := paintPage(r, p, &fontSet{}); err != nil {
+		return nil, fmt.Errorf("png page %d: %w", i+1, err)
+	}
+	r.Close()
+	var buf bytes.Buffer
+	if err := png.Encode(&buf, img); err != nil {
+		return nil, fmt.Errorf("png page %d: encode: %w", i+1, err)
+	}
+	return buf.Bytes(), nil
+}

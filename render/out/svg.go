@@ -1,0 +1,114 @@
+package out
+
+import (
+	"bytes"
+	"encoding/base64"
+	"encoding/xml"
+	"fmt"
+	"regexp"
+	"sort"
+
+	"github.com/tdewolff/canvas/renderers/svg"
+
+	"github.com/tremie-dev/tremie/render/draw"
+)
+
+// SVG writes page i (0-based) of doc as a self-contained SVG: text stays
+// text, set in the embedded faces, which travel inside the file as
+// base64 font data. Sizes are in millimetres.
+func SVG(doc *draw.Document, i int) ([]byte, error) {
+	p, err := pageOf(doc, i)
+	if err != nil {
+		return nil, fmt.Errorf("svg: %w", err)
+	}
+	var buf bytes.Buffer
+	opts := svg.DefaultOptions
+	// Whole faces: canvas's own SVG subsetting is off by default upstream
+	// (its glyph tables are not yet rewritten fully), and a viewer must
+	// find every glyph the text names.
+	opts.EmbedFonts = true
+	opts.SubsetFonts = true
+	r := svg.New(&buf, p.Width*mmPerPt, p.Height*mmPerPt, &opts)
+	if err := paintPage(r, p, &fontSet{}); err != nil {
+		return nil, fmt.Errorf("svg page %d: %w", i+1, err)
+	}
+	if err := r.Close(); err != nil {
+		return nil, fmt.Errorf("svg page %d: %w", i+1, err)
+	}
+	b, err := pinSVGFonts(buf.Bytes())
+	if err != nil {
+		return nil, fmt.Errorf("svg page %d: %w", i+1, err)
+	}
+	return addTitle(sortFontFaces(b), doc.Title), nil
+}
+
+var svgFontRE = regexp.MustCompile(`(src:url\('data:type/opentype;base64,)([A-Za-z0-9+/=]+)('\))`)
+
+// pinSVGFonts pins the date inside each embedded font (see pinFontDate).
+func pinSVGFonts(b []byte) ([]byte, error) {
+	var err error
+	out := svgFontRE.ReplaceAllFunc(b, func(m []byte) []byte {
+		parts := svgFontRE.FindSubmatch(m)
+		ttf, derr := base64.StdEncoding.DecodeString(string(parts[2]))
+		if derr == nil {
+			ttf, derr = pinFontDate(ttf)
+		}
+		if derr != nil {
+			if err == nil {
+				err = fmt.Errorf("embedded font: %w", derr)
+			}
+			return m
+		}
+		var r bytes.Buffer
+		r.Write(parts[1])
+		r.WriteString(base64.StdEncoding.EncodeToString(ttf))
+		r.Write(parts[3])
+		return r.Bytes()
+	})
+	return out, err
+}
+
+// sortFontFaces puts the @font-face rules canvas writes in a fixed order:
+// it emits them from a map, whose order changes from run to run.
+func sortFontFaces(b []byte) []byte {
+	const open, rule, closing = "<style>", "\n@font-face", "\n</style>"
+	start := bytes.LastIndex(b, []byte(open+rule))
+	if start < 0 {
+		return b
+	}
+	body := b[start+len(open):]
+	end := bytes.Index(body, []byte(closing))
+	if end < 0 {
+		return b
+	}
+	rules := bytes.Split(body[:end], []byte(rule))[1:]
+	sort.Slice(rules, func(i, j int) bool { return bytes.Compare(rules[i], rules[j]) < 0 })
+	var out bytes.Buffer
+	out.Write(b[:start+len(open)])
+	for _, r := range rules {
+		out.WriteString(rule)
+		out.Write(r)
+	}
+	out.Write(body[end:])
+	return out.Bytes()
+}
+
+// addTitle puts the document title in a <title> element, the SVG way to
+// name a drawing for viewers and screen readers.
+func addTitle(b []byte, title string) []byte {
+	if title == "" {
+		return b
+	}
+	at := bytes.IndexByte(b, '>')
+	if at < 0 {
+		return b
+	}
+	var t bytes.Buffer
+	t.WriteString("<title>")
+	xml.EscapeText(&t, []byte(cleanText(title)))
+	t.WriteString("</title>")
+	out := make([]byte, 0, len(b)+t.Len())
+	out = append(out, b[:at+1]...)
+	out = append(out, t.Bytes()...)
+	return append(out, b[at+1:]...)
+}
