@@ -18,8 +18,8 @@ import (
 	"testing"
 
 	"github.com/pdfcpu/pdfcpu/pkg/api"
-	"github.com/pdfcpu/pdfcpu/pkg/pdfcpu/types"
 	"github.com/pdfcpu/pdfcpu/pkg/pdfcpu/model"
+	"github.com/pdfcpu/pdfcpu/pkg/pdfcpu/types"
 	"golang.org/x/image/font"
 	"golang.org/x/image/font/sfnt"
 	"golang.org/x/image/math/fixed"
@@ -267,7 +267,7 @@ func TestPNGSize(t *testing.T) {
 		dpi  float64
 		w, h int
 	}{
-		{0, 72, 612, 792},   // Letter 8.5 × 11 in at 72 dpi
+		{0, 72, 612, 792},    // Letter 8.5 × 11 in at 72 dpi
 		{0, 150, 1275, 1650}, // 8.5 × 150, 11 × 150
 		{1, 100, 1169, 826},  // A4 landscape 842 × 595 pt: 11.694 × 8.264 in
 	}

@@ -93,4 +93,3 @@ func (in *pdfInfo) object() []byte {
 	b.WriteString(">>\nendobj\n")
 	return b.Bytes()
 }
-
