@@ -1,0 +1,454 @@
+package main
+
+import (
+	"errors"
+	"flag"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"strconv"
+	"strings"
+	"time"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/out"
+	"github.com/tremie-dev/tremie/render/sheet"
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/project"
+	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+func init() {
+	register(&command{
+		name:    "render",
+		summary: "draw well files as scaled construction-log sheets (SVG, PDF, PNG)",
+		run:     runRender,
+	})
+}
+
+// renderOptions are what every well of one run is drawn with.
+type renderOptions struct {
+	outDir  string
+	formats []string // svg, pdf, png
+	page    sheet.Page
+	pageSet bool // --page or --landscape given: wins over a project's page
+	scale   *sheet.Scale
+	strict  bool
+	profile *rules.Profile
+	yields  *quantity.Yields
+	dpi     float64
+	date    string // from SOURCE_DATE_EPOCH, "" for the well's own date
+	// names maps a well file to its output base name, made safe and unique
+	// by assignNames; a file missing from it gets its sanitised ID.
+	names map[string]string
+	// projects maps a well file to the project it was found in, for the
+	// project's names, page, logo and title block.
+	projects map[string]*project.Project
+}
+
+// renderResult is what became of one well.
+type renderResult struct {
+	Path     string
+	WellID   string
+	Sheets   int
+	Outputs  []string
+	Findings []rules.Finding
+	Blocking bool // unwaived error findings: drawn, marked not final
+	Refused  bool // --strict and Blocking: nothing written
+}
+
+// renderError carries the exit code a failure maps to.
+type renderError struct {
+	code int
+	err  error
+}
+
+func (e *renderError) Error() string { return e.err.Error() }
+func (e *renderError) Unwrap() error { return e.err }
+
+func inputErr(err error) error  { return &renderError{code: exitInput, err: err} }
+func outputErr(err error) error { return &renderError{code: exitOutput, err: err} }
+
+// renderWell loads, checks, quantifies, lays out and writes one well. It
+// shares nothing mutable, so wells may be rendered in parallel.
+func renderWell(path string, opts renderOptions) (renderResult, error) {
+	res := renderResult{Path: path}
+	w, err := schema.LoadFile(path)
+	if err != nil {
+		return res, inputErr(err)
+	}
+	prj := opts.projects[path]
+	project.Apply(prj, w)
+	res.WellID = w.ID
+	res.Findings = rules.Check(w, opts.profile)
+	res.Blocking = rules.Blocking(res.Findings)
+	if res.Blocking && opts.strict {
+		res.Refused = true
+		return res, nil
+	}
+	in := sheet.Inputs{Findings: res.Findings, Quantities: quantity.Compute(w, opts.yields)}
+	page := opts.page
+	if prj != nil {
+		in.TitleBlock = prj.TitleBlock
+		if prj.Logo != nil {
+			in.Logo = prj.Logo.Data
+		}
+		if !opts.pageSet {
+			if p, ok := pageNamed(prj.Page); ok {
+				page = p
+			}
+			if prj.Landscape {
+				page = page.Landscape()
+			}
+		}
+	}
+	doc, err := sheet.Layout(w, in, sheet.Options{Page: page, Scale: opts.scale, Date: opts.date})
+	if err != nil {
+		return res, inputErr(fmt.Errorf("%s: %w", path, err))
+	}
+	res.Sheets = len(doc.Pages)
+	base := opts.names[path]
+	if base == "" {
+		base = safeName(w.ID)
+	}
+	for _, f := range opts.formats {
+		files, err := encode(doc, f, opts.dpi)
+		if err != nil {
+			return res, outputErr(fmt.Errorf("%s: %w", path, err))
+		}
+		for i, data := range files {
+			name := base + "." + f
+			if len(files) > 1 {
+				name = fmt.Sprintf("%s-sheet%d.%s", base, i+1, f)
+			}
+			dst := filepath.Join(opts.outDir, name)
+			if err := out.WriteFileAtomic(dst, data); err != nil {
+				return res, outputErr(err)
+			}
+			res.Outputs = append(res.Outputs, dst)
+		}
+	}
+	return res, nil
+}
+
+// encode writes a document in one format: one PDF for all sheets, one
+// SVG or PNG per sheet.
+func encode(doc *draw.Document, format string, dpi float64) ([][]byte, error) {
+	if format == "pdf" {
+		b, err := out.PDF(doc)
+		if err != nil {
+			return nil, fmt.Errorf("pdf: %w", err)
+		}
+		return [][]byte{b}, nil
+	}
+	var files [][]byte
+	for i := range doc.Pages {
+		var b []byte
+		var err error
+		if format == "svg" {
+			b, err = out.SVG(doc, i)
+		} else {
+			b, err = out.PNG(doc, i, dpi)
+		}
+		if err != nil {
+			return nil, fmt.Errorf("%s sheet %d: %w", format, i+1, err)
+		}
+		files = append(files, b)
+	}
+	return files, nil
+}
+
+// safeName makes a well ID a file name that stays in its directory:
+// only [A-Za-z0-9._-], runs of other characters made one '-', no leading
+// dot or dash, at most 80 bytes; "well" when nothing is left.
+func safeName(id string) string {
+	var b strings.Builder
+	lastSep := false
+	for _, r := range id {
+		ok := r < 128 && (r >= 'a' && r <= 'z' || r >= 'A' && r <= 'Z' || r >= '0' && r <= '9' || r == '.' || r == '_' || r == '-')
+		if !ok {
+			r = '-'
+		}
+		sep := r == '-' || r == '.'
+		if sep && lastSep {
+			continue // collapse "..", "-.", "--": no ".." survives
+		}
+		b.WriteRune(r)
+		lastSep = sep
+	}
+	s := strings.Trim(b.String(), ".-")
+	if len(s) > 80 {
+		s = strings.TrimRight(s[:80], ".-")
+	}
+	if s == "" {
+		s = "well"
+	}
+	return s
+}
+
+// assignNames gives each file a unique output base name in input order:
+// the first well to claim a name keeps it, later ones get -2, -3, ...
+// Names are compared without case, for case-insensitive file systems.
+func assignNames(files, ids []string) map[string]string {
+	taken := map[string]bool{}
+	out := make(map[string]string, len(files))
+	for i, f := range files {
+		base := safeName(ids[i])
+		name := base
+		for n := 2; taken[strings.ToLower(name)]; n++ {
+			name = fmt.Sprintf("%s-%d", base, n)
+		}
+		taken[strings.ToLower(name)] = true
+		out[f] = name
+	}
+	return out
+}
+
+// pageNamed is a page template by name, portrait.
+func pageNamed(name string) (sheet.Page, bool) {
+	switch strings.ToLower(name) {
+	case "", "letter":
+		return sheet.Letter, true
+	case "tabloid", "ansi-b", "ledger":
+		return sheet.Tabloid, true
+	case "a4":
+		return sheet.A4, true
+	case "a3":
+		return sheet.A3, true
+	}
+	return sheet.Page{}, false
+}
+
+// sourceDate is SOURCE_DATE_EPOCH as RFC 3339, for repeatable builds.
+func sourceDate() (string, error) {
+	v := os.Getenv("SOURCE_DATE_EPOCH")
+	if v == "" {
+		return "", nil
+	}
+	n, err := strconv.ParseInt(v, 10, 64)
+	if err != nil || n < 0 {
+		return "", fmt.Errorf("SOURCE_DATE_EPOCH=%q is not a count of seconds", v)
+	}
+	return time.Unix(n, 0).UTC().Format(time.RFC3339), nil
+}
+
+func runRender(args []string, stdout, stderr io.Writer) int {
+	fset := flag.NewFlagSet("render", flag.ContinueOnError)
+	fset.SetOutput(stderr)
+	outDir := fset.String("o", "", "output directory (default: a project's output directory)")
+	formats := fset.String("format", "svg,pdf,png", "comma-separated output formats: svg, pdf, png")
+	pageName := fset.String("page", "", "page size: letter, tabloid, a4 or a3 (default letter, or the project's)")
+	landscape := fset.Bool("landscape", false, "turn the page to landscape")
+	scaleText := fset.String("scale", "", "vertical scale, such as 1in=5ft or 1:50 (default: automatic)")
+	strict := fset.Bool("strict", false, "refuse to draw a well with unwaived error findings")
+	profilePath := fset.String("profile", "", "rule profile TOML (default: the project's, else the defaults)")
+	yieldsPath := fset.String("yields", "", "TOML file with a [yields] table overriding the default yields")
+	dpi := fset.Float64("dpi", 150, "PNG resolution in dots per inch")
+	fset.Usage = func() {
+		fmt.Fprintln(stderr, "usage: tremie render FILE|DIR... -o OUTDIR [--format svg,pdf,png] [--page letter|tabloid|a4|a3] [--landscape] [--scale S] [--strict] [--profile FILE]")
+		fset.PrintDefaults()
+	}
+	paths, err := parseInterleaved(fset, args)
+	if err != nil {
+		return exitUsage
+	}
+	if len(paths) == 0 {
+		fmt.Fprintln(stderr, "tremie render: name at least one well file or directory")
+		fset.Usage()
+		return exitUsage
+	}
+	opts := renderOptions{outDir: *outDir, strict: *strict, dpi: *dpi, projects: map[string]*project.Project{}}
+	if !(opts.dpi >= 10 && opts.dpi <= 1200) {
+		fmt.Fprintf(stderr, "tremie render: --dpi %g is outside 10–1200\n", *dpi)
+		return exitUsage
+	}
+	for _, f := range strings.Split(*formats, ",") {
+		f = strings.ToLower(strings.TrimSpace(f))
+		if f != "svg" && f != "pdf" && f != "png" {
+			fmt.Fprintf(stderr, "tremie render: unknown format %q (svg, pdf, png)\n", f)
+			return exitUsage
+		}
+		if !contains(opts.formats, f) {
+			opts.formats = append(opts.formats, f)
+		}
+	}
+	opts.page = sheet.Letter
+	if *pageName != "" {
+		p, ok := pageNamed(*pageName)
+		if !ok {
+			fmt.Fprintf(stderr, "tremie render: unknown page %q (letter, tabloid, a4, a3)\n", *pageName)
+			return exitUsage
+		}
+		opts.page, opts.pageSet = p, true
+	}
+	if *landscape {
+		opts.page, opts.pageSet = opts.page.Landscape(), true
+	}
+	if *scaleText != "" {
+		s, err := sheet.ParseScale(*scaleText)
+		if err != nil {
+			fmt.Fprintf(stderr, "tremie render: --scale: %v\n", err)
+			return exitUsage
+		}
+		opts.scale = &s
+	}
+	if opts.date, err = sourceDate(); err != nil {
+		fmt.Fprintf(stderr, "tremie render: %v\n", err)
+		return exitUsage
+	}
+	if *yieldsPath != "" {
+		if opts.yields, err = quantity.LoadYields(*yieldsPath); err != nil {
+			fmt.Fprintf(stderr, "tremie render: %v\n", err)
+			return exitInput
+		}
+	}
+	code := exitOK
+	files, prjProfile, errs := collectRenderInputs(paths, &opts)
+	for _, e := range errs {
+		fmt.Fprintf(stderr, "tremie render: %v\n", e)
+		code = exitInput
+	}
+	profile := *profilePath
+	if profile == "" {
+		profile = prjProfile
+	}
+	if profile != "" {
+		if opts.profile, err = rules.LoadProfile(profile); err != nil {
+			for _, e := range schemaErrors(profile, err) {
+				fmt.Fprintln(stderr, e)
+			}
+			return exitInput
+		}
+	}
+	if opts.outDir == "" {
+		fmt.Fprintln(stderr, "tremie render: name the output directory with -o OUTDIR")
+		return exitUsage
+	}
+	if len(files) == 0 {
+		if code == exitOK {
+			fmt.Fprintf(stderr, "tremie render: no well files found in %s\n", strings.Join(paths, ", "))
+		}
+		return exitInput
+	}
+	if err := os.MkdirAll(opts.outDir, 0o755); err != nil {
+		fmt.Fprintf(stderr, "tremie render: %v\n", err)
+		return exitOutput
+	}
+
+	// Names first, in input order, so collisions resolve the same way
+	// however the wells are then drawn.
+	ids := make([]string, len(files))
+	for i, f := range files {
+		if w, err := schema.LoadFile(f); err == nil {
+			ids[i] = w.ID
+		}
+	}
+	opts.names = assignNames(files, ids)
+
+	for _, f := range files {
+		res, err := renderWell(f, opts)
+		if err != nil {
+			var re *renderError
+			c := exitInput
+			if errors.As(err, &re) {
+				c = re.code
+			}
+			for _, e := range schemaErrors(f, err) {
+				fmt.Fprintln(stderr, e)
+			}
+			code = worse(code, c)
+			continue
+		}
+		switch {
+		case res.Refused:
+			fmt.Fprintf(stderr, "tremie render: %s (%s): refused under --strict: unwaived error findings (run tremie check %s)\n", f, res.WellID, f)
+			code = worse(code, exitFindings)
+		default:
+			mark := ""
+			if res.Blocking {
+				mark = " — NOT FINAL: error findings drawn on the sheet"
+				code = worse(code, exitFindings)
+			}
+			fmt.Fprintf(stdout, "%s: %s, %d %s → %s%s\n", f, res.WellID, res.Sheets, plural(res.Sheets, "sheet", "sheets"), strings.Join(res.Outputs, ", "), mark)
+		}
+	}
+	fmt.Fprintln(stdout, "Sheets support, and never replace, the review of a licensed professional and the governing local well code.")
+	return code
+}
+
+// collectRenderInputs expands the arguments: a project directory gives
+// its well files (with the project, its output directory and profile);
+// other directories and files are searched as tremie check does.
+func collectRenderInputs(paths []string, opts *renderOptions) (files []string, profile string, errs []error) {
+	seen := map[string]bool{}
+	add := func(f string, p *project.Project) {
+		if !seen[f] {
+			seen[f] = true
+			files = append(files, f)
+			if p != nil {
+				opts.projects[f] = p
+			}
+		}
+	}
+	for _, a := range paths {
+		if st, err := os.Stat(a); err == nil && st.IsDir() {
+			if _, err := os.Stat(filepath.Join(a, project.FileName)); err == nil {
+				p, err := project.Load(a)
+				if err != nil {
+					errs = append(errs, err)
+					continue
+				}
+				wf, err := p.WellFiles()
+				if err != nil {
+					errs = append(errs, err)
+					continue
+				}
+				for _, f := range wf {
+					add(f, p)
+				}
+				if opts.outDir == "" {
+					opts.outDir = p.Output
+				}
+				if profile == "" {
+					profile = p.ProfilePath()
+				}
+				continue
+			}
+		}
+		found, ferrs := schema.FindWells([]string{a})
+		errs = append(errs, ferrs...)
+		for _, f := range found {
+			add(f, nil)
+		}
+	}
+	return files, profile, errs
+}
+
+// worse keeps the more serious exit code: input and output failures over
+// findings over clean.
+func worse(a, b int) int {
+	rank := map[int]int{exitOK: 0, exitFindings: 1, exitInput: 2, exitOutput: 3}
+	if rank[b] > rank[a] {
+		return b
+	}
+	return a
+}
+
+func contains(list []string, s string) bool {
+	for _, x := range list {
+		if x == s {
+			return true
+		}
+	}
+	return false
+}
+
+func plural(n int, one, many string) string {
+	if n == 1 {
+		return one
+	}
+	return many
+}
+

@@ -1,0 +1,150 @@
+package sheet
+
+import (
+	"fmt"
+	"strings"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// sheetCount is the number of pages: the drawings, and a notes sheet when
+// the notes and findings did not fit the band.
+func (l *layout) sheetCount() int {
+	n := len(l.sheets)
+	if len(l.bandPlan.overflow) > 0 {
+		n++
+	}
+	return n
+}
+
+// number is the printed number of page i (0-based) and the set's total.
+func (l *layout) number(i int) (n, m int) {
+	m = l.opt.SheetTotal
+	if m <= 0 {
+		m = l.opt.SheetOffset + l.sheetCount()
+	}
+	return l.opt.SheetOffset + i + 1, m
+}
+
+// page draws page i.
+func (l *layout) page(i int) *draw.Page {
+	pg := &draw.Page{Width: l.pg.Width, Height: l.pg.Height}
+	n, m := l.number(i)
+	if i >= len(l.sheets) {
+		l.notesSheet(pg, n, m)
+		return pg
+	}
+	sp := l.sheets[i]
+	first, last := i == 0, i == len(l.sheets)-1
+	sub := fmt.Sprintf("%s to %s", l.depth(max(sp.Top, 0)), l.depth(sp.Bottom))
+	if len(l.sheets) == 1 {
+		sub = "0 to " + l.depth(sp.Bottom) + " below ground"
+	}
+	pg.Add(l.headerItems(n, m, joinNonEmpty(" · ", upperFirst(strings.ReplaceAll(string(l.w.Purpose), "-", " "))+" well", sub))...)
+
+	p := l.painter(sp, first, last)
+	pg.Add(l.bodyFrame()...)
+	pg.Add(p.lithology()...)
+	pg.Add(p.depthAxis()...)
+	pg.Add(p.elevationAxis()...)
+	pg.Add(p.well()...)
+	pg.Add(p.totalDepth()...)
+	pg.Add(p.calloutItems(p.calloutsFor(l.callouts()))...)
+	pg.Add(l.matchLines(p, i)...)
+
+	pg.Add(l.legendItems(sortedSymbols(p.used))...)
+	pg.Add(l.amountItems()...)
+	more := ""
+	if len(l.bandPlan.overflow) > 0 {
+		nn, _ := l.number(len(l.sheets))
+		more = fmt.Sprintf("Notes and findings continue on sheet %d.", nn)
+	}
+	nr := draw.Rect{X: l.band.X + l.bandPlan.legendW + l.bandPlan.amountW, Y: l.band.Y, W: l.bandPlan.noteW, H: l.band.H}
+	pg.Add(l.noteItems(l.bandPlan.notes, nr, more)...)
+	pg.Add(l.cautionItems()...)
+	return pg
+}
+
+// notesSheet carries the notes and findings that did not fit the band.
+func (l *layout) notesSheet(pg *draw.Page, n, m int) {
+	pg.Add(l.headerItems(n, m, "Notes and check findings, continued")...)
+	r := draw.Rect{X: l.content.X, Y: l.header.Bottom() + 6, W: l.bandPlan.noteW, H: l.caution.Y - 6 - l.header.Bottom() - 6}
+	pg.Add(l.noteItems(l.bandPlan.overflow, r, "")...)
+	pg.Add(l.cautionItems()...)
+}
+
+func (l *layout) cautionItems() []draw.Item {
+	var b textBlock
+	b.add(Caution, draw.Italic, sizeTiny, l.caution.W)
+	return b.items(l.caution.X, l.caution.Y+2, ink, "caution")
+}
+
+// bodyFrame draws the body's frame, column separators and heads.
+func (l *layout) bodyFrame() []draw.Item {
+	b := l.body
+	c := l.cols
+	items := []draw.Item{box(b, ink, 0.8, draw.Color{}, "body"), line(b.X, l.plot.Y, b.Right(), l.plot.Y, 0.6, ink, "")}
+	for _, x := range []float64{c.elev.X, c.lith.X, c.uscs.X, c.desc.X, c.well.X, c.call.X} {
+		items = append(items, line(x, b.Y, x, b.Bottom(), 0.4, ink, ""))
+	}
+	datum := l.w.Elevation.Datum
+	heads := []struct {
+		col  xRange
+		a, b string
+	}{
+		{c.depth, "DEPTH", string(l.u.Depth) + " bgs"},
+		{c.elev, "ELEV.", strings.TrimSpace(string(l.u.Depth) + " " + datum)},
+		{c.lith, "LITH.", ""},
+		{c.uscs, "USCS", ""},
+		{c.desc, "DESCRIPTION", ""},
+		{c.well, "WELL CONSTRUCTION", fmt.Sprintf("widths ×%s", schema.TrimFloat(l.hz.exaggerationFor(l.scale), 1))},
+		{c.call, "COMPONENTS", ""},
+	}
+	for _, h := range heads {
+		y := b.Y + 9
+		if h.b == "" {
+			y = b.Y + 13
+		}
+		items = append(items, text(h.col.Center(), y, fit(h.a, draw.Bold, sizeTiny, h.col.W-3), draw.Bold, sizeTiny, draw.Middle, ink, "column-head"))
+		if h.b != "" {
+			items = append(items, text(h.col.Center(), b.Y+17, fit(h.b, draw.Regular, sizeTiny, h.col.W-3), draw.Regular, sizeTiny, draw.Middle, grey, "column-head"))
+		}
+	}
+	return items
+}
+
+// totalDepth labels the bottom of the hole in the depth column.
+func (p *painter) totalDepth() []draw.Item {
+	td := p.l.w.TotalDepth
+	if !p.visible(td) || td <= 0 {
+		return nil
+	}
+	y := p.y(td)
+	col := p.l.cols.well
+	return []draw.Item{
+		line(col.X+3, y, col.X+12, y, 0.8, ink, ""),
+		text(col.X+3, y+8, "TD "+p.l.depth(td), draw.Bold, sizeSmall, draw.Start, ink, "total-depth"),
+	}
+}
+
+// matchLines mark where a sheet continues: the depth, repeated on both
+// sheets, and the sheet it continues on or from.
+func (l *layout) matchLines(p *painter, i int) []draw.Item {
+	var items []draw.Item
+	st := draw.Style{Stroke: ink, StrokeWidth: 0.8, Dash: []float64{6, 2, 1.5, 2}}
+	b := l.body
+	if i > 0 {
+		y := p.y(p.sp.Top)
+		prev, _ := l.number(i - 1)
+		items = append(items, draw.Shape{Style: st, Points: []draw.Point{{X: b.X, Y: y}, {X: b.Right(), Y: y}}, Role: "matchline:top"},
+			text(l.cols.desc.X+4, y-4, fmt.Sprintf("MATCH LINE %s — continued from sheet %d", l.depth(p.sp.Top), prev), draw.Bold, sizeSmall, draw.Start, ink, "matchline-text"))
+	}
+	if i < len(l.sheets)-1 {
+		y := p.y(p.sp.Bottom)
+		next, _ := l.number(i + 1)
+		items = append(items, draw.Shape{Style: st, Points: []draw.Point{{X: b.X, Y: y}, {X: b.Right(), Y: y}}, Role: "matchline:bottom"},
+			text(l.cols.desc.X+4, y+9, fmt.Sprintf("MATCH LINE %s — continued on sheet %d", l.depth(p.sp.Bottom), next), draw.Bold, sizeSmall, draw.Start, ink, "matchline-text"))
+	}
+	return items
+}

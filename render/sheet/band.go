@@ -1,0 +1,317 @@
+package sheet
+
+import (
+	"fmt"
+	"sort"
+	"strings"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+// bandPlan sizes the strip under the drawing: the legend, the table of
+// amounts and the notes with the check's findings.
+type bandPlan struct {
+	height                  float64
+	legendW, amountW, noteW float64
+	notes                   []noteBlock // what fits in the band
+	overflow                []noteBlock // continued on a notes sheet
+}
+
+// noteBlock is one note or finding, wrapped.
+type noteBlock struct {
+	heading bool
+	block   textBlock
+	color   draw.Color
+}
+
+const (
+	bandHeadH  = 12.0
+	bandPad    = 4.0
+	legendRowH = 11.0
+	swatchW    = 18.0
+	swatchH    = 9.0
+)
+
+func (l *layout) hasAmounts() bool { return l.in.Quantities != nil && len(l.in.Quantities.Rows) > 0 }
+
+// legendFor paints the whole range once, without keeping the drawing,
+// to learn which symbols it uses.
+func (l *layout) legendFor(sp span) []symbol {
+	// A scale is needed to paint; any will do for the set of symbols.
+	saved := l.scale
+	if l.scale.Ratio == 0 {
+		l.scale = Metric(100)
+	}
+	p := l.painter(sp, true, true)
+	p.lithology()
+	p.well()
+	l.scale = saved
+	return sortedSymbols(p.used)
+}
+
+func sortedSymbols(m map[string]symbol) []symbol {
+	out := make([]symbol, 0, len(m))
+	for _, s := range m {
+		out = append(out, s)
+	}
+	sort.Slice(out, func(i, j int) bool {
+		if out[i].order != out[j].order {
+			return out[i].order < out[j].order
+		}
+		return out[i].label < out[j].label
+	})
+	return out
+}
+
+// planBand fixes the band's widths and height from its contents.
+func (l *layout) planBand(legend []symbol) bandPlan {
+	W := l.content.W
+	bp := bandPlan{legendW: W * 0.40, noteW: W * 0.60}
+	if l.hasAmounts() {
+		bp = bandPlan{legendW: W * 0.33, amountW: W * 0.31, noteW: W * 0.36}
+	}
+	h := l.legendHeight(legend, bp.legendW)
+	if bp.amountW > 0 {
+		h = max(h, l.amountsHeight(bp.amountW))
+	}
+	notes := l.noteBlocks(bp.noteW - 2*bandPad)
+	nh := bandHeadH + bandPad
+	for _, n := range notes {
+		nh += n.block.height() + 1.5
+	}
+	limit := l.content.H * 0.34
+	bp.height = max(h, min(nh, limit), 60)
+	if nh > bp.height {
+		// Keep what fits; the rest goes on a notes sheet after the
+		// drawings, and the band says so.
+		used := bandHeadH + bandPad + lineGap(sizeSmall) + 2
+		for i, n := range notes {
+			if used+n.block.height()+1.5 > bp.height {
+				bp.notes, bp.overflow = notes[:i], notes[i:]
+				break
+			}
+			used += n.block.height() + 1.5
+		}
+	} else {
+		bp.notes = notes
+	}
+	return bp
+}
+
+// noteBlocks are the notes area's contents: the well's notes, then the
+// check's findings, errors first.
+func (l *layout) noteBlocks(width float64) []noteBlock {
+	var out []noteBlock
+	head := func(s string, c draw.Color) {
+		var b textBlock
+		b.add(s, draw.Bold, sizeSmall, width)
+		out = append(out, noteBlock{heading: true, block: b, color: c})
+	}
+	body := func(s string, font draw.FontStyle, c draw.Color) {
+		var b textBlock
+		b.add(s, font, sizeSmall, width)
+		out = append(out, noteBlock{block: b, color: c})
+	}
+	for i, n := range l.w.Notes {
+		body(fmt.Sprintf("%d. %s", i+1, n), draw.Regular, ink)
+	}
+	body(fmt.Sprintf("%d. Depths are below ground surface; elevations above %s. Diameters are drawn to their own scale, wider than the depth scale (see horizontal exaggeration).", len(l.w.Notes)+1, datumOr(l.w.Elevation.Datum)), draw.Regular, ink)
+	fs := append([]rules.Finding(nil), l.in.Findings...)
+	if len(fs) == 0 {
+		return out
+	}
+	rank := func(f rules.Finding) int {
+		switch {
+		case f.Blocking():
+			return 0
+		case f.Waived:
+			return 2
+		}
+		return 1
+	}
+	sort.SliceStable(fs, func(i, j int) bool { return rank(fs[i]) < rank(fs[j]) })
+	ne, nw, nv := 0, 0, 0
+	for _, f := range fs {
+		switch rank(f) {
+		case 0:
+			ne++
+		case 1:
+			nw++
+		default:
+			nv++
+		}
+	}
+	c := ink
+	if ne > 0 {
+		c = alarm
+	}
+	head(fmt.Sprintf("CHECK FINDINGS: %d %s, %d %s, %d waived", ne, plural(ne, "error", "errors"), nw, plural(nw, "warning", "warnings"), nv), c)
+	for _, f := range fs {
+		label := strings.ToUpper(f.Label())
+		s := fmt.Sprintf("%s %s (line %d): %s", label, f.Rule, f.Line, f.Message)
+		if f.Waived && f.Waiver != nil {
+			s += fmt.Sprintf(" Waived: %s (%s", f.Waiver.Reason, f.Waiver.ApprovedBy)
+			if f.Waiver.Date != "" {
+				s += ", " + f.Waiver.Date
+			}
+			s += ")."
+		}
+		col := ink
+		if f.Blocking() {
+			col = alarm
+		} else if f.Waived {
+			col = grey
+		}
+		body(s, draw.Regular, col)
+	}
+	return out
+}
+
+func datumOr(d string) string {
+	if d == "" {
+		return "the survey datum"
+	}
+	return d
+}
+
+// legendHeight is the height of a legend of these symbols in width w.
+func (l *layout) legendHeight(syms []symbol, w float64) float64 {
+	cols := legendCols(w)
+	rows := (len(syms) + cols - 1) / cols
+	return bandHeadH + bandPad + float64(rows)*legendRowH + bandPad
+}
+
+func legendCols(w float64) int {
+	if w >= 200 {
+		return 2
+	}
+	return 1
+}
+
+// legendItems draws the symbols of one sheet in the band's first box.
+func (l *layout) legendItems(syms []symbol) []draw.Item {
+	b := l.band
+	r := draw.Rect{X: b.X, Y: b.Y, W: l.bandPlan.legendW, H: b.H}
+	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, ""),
+		text(r.X+bandPad, r.Y+9, "LEGEND", draw.Bold, sizeHeading, draw.Start, ink, "")}
+	cols := legendCols(r.W)
+	cw := (r.W - 2*bandPad) / float64(cols)
+	rows := (len(syms) + cols - 1) / cols
+	for i, s := range syms {
+		c, k := i/max(rows, 1), i%max(rows, 1)
+		x := r.X + bandPad + float64(c)*cw
+		y := r.Y + bandHeadH + bandPad + float64(k)*legendRowH
+		sw := draw.Rect{X: x, Y: y, W: swatchW, H: swatchH}
+		items = append(items, draw.Clip{Rect: sw, Items: s.swatch(sw)}, box(sw, ink, 0.4, draw.Color{}, "legend:"+s.key))
+		items = append(items, text(x+swatchW+4, y+swatchH/2+draw.CapHeight(draw.Regular, sizeSmall)/2, fit(s.label, draw.Regular, sizeSmall, cw-swatchW-8), draw.Regular, sizeSmall, draw.Start, ink, "legend-label"))
+	}
+	return items
+}
+
+// amount table columns, as fractions of the box.
+var amountCols = []struct {
+	head string
+	frac float64
+}{{"Interval", 0.2}, {"Material", 0.24}, {"Calculated", 0.22}, {"Placed", 0.24}, {"Placed ÷ calc.", 0.10}}
+
+func (l *layout) amountRows() [][]string {
+	var rows [][]string
+	for _, r := range l.in.Quantities.Rows {
+		name := materialName(r.Fill.Material)
+		if r.Fill.Gradation != "" {
+			name += " " + r.Fill.Gradation
+		}
+		rows = append(rows, []string{l.interval(r.Fill.Interval), name, l.calculated(r), l.placed(r), ratio(r)})
+	}
+	return rows
+}
+
+func (l *layout) amountCells(row []string, w float64, font draw.FontStyle) ([][]string, float64) {
+	cells := make([][]string, len(row))
+	n := 1
+	for i, s := range row {
+		cells[i] = draw.Wrap(font, sizeTiny, s, amountCols[i].frac*w-3)
+		n = max(n, len(cells[i]))
+	}
+	return cells, float64(n)*lineGap(sizeTiny) + 2
+}
+
+func (l *layout) amountsHeight(w float64) float64 {
+	inner := w - 2*bandPad
+	_, hh := l.amountCells(amountHead(), inner, draw.Bold)
+	h := bandHeadH + bandPad + hh
+	for _, r := range l.amountRows() {
+		_, rh := l.amountCells(r, inner, draw.Regular)
+		h += rh
+	}
+	return h + lineGap(sizeTiny)*2 + bandPad
+}
+
+func amountHead() []string {
+	h := make([]string, len(amountCols))
+	for i, c := range amountCols {
+		h[i] = c.head
+	}
+	return h
+}
+
+// amountItems draws the table of calculated and placed amounts.
+func (l *layout) amountItems() []draw.Item {
+	if l.bandPlan.amountW == 0 {
+		return nil
+	}
+	b := l.band
+	r := draw.Rect{X: b.X + l.bandPlan.legendW, Y: b.Y, W: l.bandPlan.amountW, H: b.H}
+	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, ""),
+		text(r.X+bandPad, r.Y+9, "AMOUNTS PER FILL INTERVAL", draw.Bold, sizeHeading, draw.Start, ink, "")}
+	inner := r.W - 2*bandPad
+	y := r.Y + bandHeadH + bandPad
+	drawRow := func(row []string, font draw.FontStyle, role string) {
+		cells, rh := l.amountCells(row, inner, font)
+		x := r.X + bandPad
+		for i, c := range cells {
+			ty := y + draw.Ascent(font, sizeTiny)
+			for _, s := range c {
+				items = append(items, text(x, ty, s, font, sizeTiny, draw.Start, ink, role))
+				ty += lineGap(sizeTiny)
+			}
+			x += amountCols[i].frac * inner
+		}
+		y += rh
+		items = append(items, line(r.X+bandPad, y-1, r.Right()-bandPad, y-1, 0.3, lightGrey, ""))
+	}
+	drawRow(amountHead(), draw.Bold, "amounts-head")
+	for _, row := range l.amountRows() {
+		drawRow(row, draw.Regular, "amounts-row")
+	}
+	var foot textBlock
+	foot.add("Calculated: annulus between the recorded hole (or casing bore) and pipe outside diameters; bags at the yields in force.", draw.Italic, sizeTiny, inner)
+	items = append(items, foot.items(r.X+bandPad, y+1, grey, "amounts-note")...)
+	return items
+}
+
+// noteItems draws the notes and findings box.
+func (l *layout) noteItems(blocks []noteBlock, r draw.Rect, more string) []draw.Item {
+	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, ""),
+		text(r.X+bandPad, r.Y+9, "NOTES", draw.Bold, sizeHeading, draw.Start, ink, "")}
+	y := r.Y + bandHeadH + bandPad
+	for _, n := range blocks {
+		if n.heading {
+			y += 2
+		}
+		role := "note"
+		if n.color == alarm || n.heading {
+			role = "finding"
+		}
+		if !n.heading && strings.Contains(n.block.lines[0].s, " (line ") {
+			role = "finding"
+		}
+		items = append(items, n.block.items(r.X+bandPad, y, n.color, role)...)
+		y += n.block.height() + 1.5
+	}
+	if more != "" {
+		items = append(items, text(r.X+bandPad, y+lineGap(sizeSmall)-2, more, draw.Italic, sizeSmall, draw.Start, alarm, "notes-continued"))
+	}
+	return items
+}

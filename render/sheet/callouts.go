@@ -1,0 +1,384 @@
+package sheet
+
+import (
+	"fmt"
+	"sort"
+	"strings"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// callout labels one component: a bold title, lines of specification,
+// and the point on the drawing its leader reaches.
+type callout struct {
+	key     string          // the drawn component's role, e.g. "interval:fill[2]"
+	iv      schema.Interval // the component's extent; Top == Bottom for a point
+	anchorX func(d schema.Length) float64
+	title   string
+	lines   []string
+	rank    int // tie-break among equal depths: outer things first
+}
+
+// callouts lists every component of the well with its words.
+func (l *layout) callouts() []callout {
+	w := l.w
+	h := l.hz
+	var cs []callout
+	add := func(c callout) { cs = append(cs, c) }
+	named := len(w.Strings) > 1
+
+	// Surface completion.
+	if pc := w.Surface.Protective; pc != nil {
+		lines := []string{joinNonEmpty(" ", l.diameter(pc.Diameter), pc.Material), l.interval(pc.Interval)}
+		if w.Surface.Lock != "" {
+			lines = append(lines, "lock: "+w.Surface.Lock)
+		}
+		r := float64(pc.Diameter) / 2 * h.ppmm
+		add(callout{key: "protective", iv: schema.Interval{Top: pc.Top, Bottom: min(pc.Bottom, 0)}, anchorX: fixed(h.cx + r), title: "Protective casing", lines: lines, rank: 0})
+	}
+	if v := w.Surface.Vault; v != nil && w.Surface.Kind != schema.StickUp {
+		lines := []string{fmt.Sprintf("%s diameter, %s deep", l.diameter(v.Diameter), l.depth(v.Depth))}
+		if v.Cover != "" {
+			lines = append(lines, v.Cover)
+		}
+		if w.Surface.Lock != "" {
+			lines = append(lines, "lock: "+w.Surface.Lock)
+		}
+		if w.Surface.Drainage != "" {
+			lines = append(lines, "drainage: "+w.Surface.Drainage)
+		}
+		r := float64(v.Diameter) / 2 * h.ppmm
+		add(callout{key: "vault", iv: schema.Interval{Top: 0, Bottom: v.Depth}, anchorX: fixed(h.cx + r), title: "Flush-mount vault", lines: lines, rank: 0})
+	}
+	if pd := w.Surface.Pad; pd != nil {
+		if iv, ok := padInterval(w.Surface); ok {
+			du := l.u.Depth
+			lines := []string{fmt.Sprintf("%s × %s × %s %s thick", schema.TrimFloat(pd.Length.In(du), 2), schema.TrimFloat(pd.Width.In(du), 2), schema.TrimFloat(pd.Thickness.In(du), 2), du)}
+			if w.Surface.Bollards > 0 {
+				lines = append(lines, fmt.Sprintf("%d guard %s", w.Surface.Bollards, plural(w.Surface.Bollards, "post", "posts")))
+			}
+			half := min(float64(pd.Length)*1000/2*h.ppmm, l.cols.well.W/2-6)
+			add(callout{key: "pad", iv: iv, anchorX: fixed(h.cx + half), title: "Concrete pad", lines: lines, rank: 1})
+		}
+	}
+
+	// Outer casings.
+	for i, c := range w.Casings {
+		r := float64(od(c.Pipe)) / 2 * h.ppmm
+		title := strings.TrimSpace(string(c.Kind) + " casing")
+		if c.Name != "" && c.Name != string(c.Kind) {
+			title += " (" + c.Name + ")"
+		}
+		add(callout{key: "casing:" + pathOr(c.Path, "casing", i), iv: c.Interval, anchorX: fixed(h.cx + r), title: upperFirst(title),
+			lines: []string{l.pipeSpec(c.Pipe), l.pipeSizes(c.Pipe), l.interval(c.Interval)}, rank: 2})
+		if len(c.Centralizers) > 0 {
+			add(l.centralizerCallout("centralizer:"+pathOr(c.Path, "casing", i), h.cx, od(c.Pipe), c.Centralizers, title))
+		}
+	}
+
+	// Well strings.
+	for si, s := range w.Strings {
+		x := h.strX[si]
+		suffix := ""
+		if named {
+			suffix = " — " + stringName(s)
+		}
+		if len(s.Sections) > 0 {
+			top := s.Sections[0]
+			rt := float64(od(top.Pipe)) / 2 * h.ppmm
+			var lines []string
+			if su := -top.Top; su > 0 {
+				lines = append(lines, fmt.Sprintf("top of riser, %s above ground", l.depth(su)))
+			} else {
+				lines = append(lines, fmt.Sprintf("top of riser, %s below ground", l.depth(top.Top)))
+			}
+			if mp := w.Elevation.MeasuringPoint; mp != nil && si == 0 {
+				lines = append(lines, fmt.Sprintf("elev. %s %s", l.depth(*mp), w.Elevation.Datum))
+			}
+			if s.TopCap != "" {
+				lines = append(lines, "cap: "+s.TopCap)
+			}
+			add(callout{key: "mp:" + stringName(s), iv: schema.Interval{Top: top.Top, Bottom: top.Top}, anchorX: fixed(x + rt), title: "Measuring point" + suffix, lines: lines, rank: 3})
+		}
+		for k, sec := range s.Sections {
+			r := float64(od(sec.Pipe)) / 2 * h.ppmm
+			role := string(sec.Kind) + ":" + stringName(s) + fmt.Sprintf("[%d]", k)
+			var lines []string
+			switch sec.Kind {
+			case schema.ScreenSection:
+				t := string(sec.ScreenType)
+				if t == "" {
+					t = string(schema.Slotted)
+				}
+				lines = []string{l.pipeSpec(sec.Pipe), l.slot(sec) + ", " + t, l.interval(sec.Interval)}
+			default:
+				lines = []string{l.pipeSpec(sec.Pipe), l.pipeSizes(sec.Pipe), l.interval(sec.Interval)}
+			}
+			add(callout{key: role, iv: sec.Interval, anchorX: fixed(x + r), title: upperFirst(string(sec.Kind)) + suffix, lines: lines, rank: 4})
+		}
+		if s.BottomCap != "" && len(s.Sections) > 0 {
+			b := s.Sections[len(s.Sections)-1]
+			r := float64(od(b.Pipe)) / 2 * h.ppmm
+			add(callout{key: "bottomcap:" + stringName(s), iv: schema.Interval{Top: b.Bottom, Bottom: b.Bottom}, anchorX: fixed(x + r), title: "Bottom cap" + suffix,
+				lines: []string{s.BottomCap + " at " + l.depth(b.Bottom)}, rank: 5})
+		}
+		if len(s.Centralizers) > 0 {
+			add(l.centralizerCallout("centralizer:"+stringName(s), x, stringOD(s), s.Centralizers, suffix))
+		}
+	}
+
+	// Annular fills.
+	for i, f := range w.Fills {
+		title := materialName(f.Material)
+		if f.Gradation != "" {
+			title += " " + f.Gradation
+		}
+		var lines []string
+		if f.Product != "" {
+			lines = append(lines, f.Product)
+		}
+		where := l.interval(f.Interval)
+		if f.Method != "" {
+			where += ", " + string(f.Method)
+		}
+		if f.Within != "" {
+			where += ", inside " + f.Within
+		}
+		lines = append(lines, where)
+		if r, ok := l.amountRow(i); ok {
+			lines = append(lines, "calc. "+l.calculated(r))
+			lines = append(lines, "placed "+l.placed(r)+ratioSuffix(ratio(r)))
+		}
+		fi := f
+		add(callout{key: "interval:" + pathOr(f.Path, "fill", i), iv: f.Interval, anchorX: func(d schema.Length) float64 { return l.annulusX(fi, d) }, title: title, lines: lines, rank: 6})
+	}
+
+	// Boreholes and open hole.
+	for i, b := range w.Boreholes {
+		r := float64(b.Diameter) / 2 * h.ppmm
+		lines := []string{l.diameter(b.Diameter) + " diameter"}
+		if b.Method != "" {
+			lines = append(lines, b.Method)
+		} else if w.Drilling.Method != "" {
+			lines = append(lines, w.Drilling.Method)
+		}
+		lines = append(lines, l.interval(b.Interval))
+		add(callout{key: "borehole:" + pathOr(b.Path, "borehole", i), iv: b.Interval, anchorX: fixed(h.cx + r), title: "Borehole", lines: lines, rank: 7})
+	}
+	for i, o := range w.OpenHoles {
+		d := holeAt(w, (o.Top+o.Bottom)/2)
+		r := float64(d) / 2 * h.ppmm
+		add(callout{key: "openhole:" + pathOr(o.Path, "open_hole", i), iv: o.Interval, anchorX: fixed(h.cx + r + 1.6), title: "Open hole",
+			lines: []string{l.diameter(d) + " diameter, uncased", l.interval(o.Interval)}, rank: 7})
+	}
+
+	// Water levels.
+	x := h.cx
+	if len(h.strX) > 0 {
+		x = h.strX[0]
+	}
+	for i, wl := range w.WaterLevels {
+		title := map[schema.LevelKind]string{schema.FirstEncountered: "Water first encountered", schema.Pumping: "Pumping water level"}[wl.Kind]
+		if title == "" {
+			title = "Static water level"
+		}
+		line := l.depth(wl.Depth) + " below ground"
+		if wl.Reference == schema.FromMeasuringPoint {
+			line += fmt.Sprintf(" (%s below MP)", l.depth(wl.Written))
+		}
+		lines := []string{line}
+		if !wl.Measured.IsZero() {
+			if wl.HasTime {
+				lines = append(lines, wl.Measured.Format("2006-01-02 15:04"))
+			} else {
+				lines = append(lines, wl.Measured.Format("2006-01-02"))
+			}
+		}
+		xi := x + float64(i%3-1)*3.5 + 3.5
+		add(callout{key: "water:" + pathOr(wl.Path, "water_level", i), iv: schema.Interval{Top: wl.Depth, Bottom: wl.Depth}, anchorX: fixed(xi), title: title, lines: lines, rank: 8})
+	}
+	return cs
+}
+
+func ratioSuffix(r string) string {
+	if r == "—" {
+		return ""
+	}
+	return ", " + r + " of calc."
+}
+
+func (l *layout) centralizerCallout(key string, x float64, d schema.Diameter, at []schema.Length, of string) callout {
+	ds := make([]string, len(at))
+	for i, z := range at {
+		ds[i] = schema.TrimFloat(z.In(l.u.Depth), 2)
+	}
+	first := at[0]
+	r := float64(d) / 2 * l.hz.ppmm
+	hole := float64(holeAt(l.w, first)) / 2 * l.hz.ppmm
+	tip := x + r + max(hole-r-0.8, 2)
+	title := "Centralizers"
+	if len(at) == 1 {
+		title = "Centralizer"
+	}
+	if strings.HasPrefix(of, " — ") {
+		title += of
+	}
+	return callout{key: key, iv: schema.Interval{Top: first, Bottom: first}, anchorX: fixed(tip), title: title,
+		lines: []string{"at " + strings.Join(ds, ", ") + " " + string(l.u.Depth)}, rank: 5}
+}
+
+func fixed(x float64) func(schema.Length) float64 { return func(schema.Length) float64 { return x } }
+
+func upperFirst(s string) string {
+	if s == "" {
+		return s
+	}
+	return strings.ToUpper(s[:1]) + s[1:]
+}
+
+// annulusX is the middle of a fill's annulus on the right of the well at
+// a depth: between the outermost pipe standing in its region and the
+// hole wall (or the casing bore it was placed in).
+func (l *layout) annulusX(f schema.Fill, d schema.Length) float64 {
+	h := l.hz
+	outer := float64(holeAt(l.w, d)) / 2 * h.ppmm
+	limit := schema.Diameter(1e9)
+	if f.Within != "" {
+		for _, c := range l.w.Casings {
+			if casingName(c) == f.Within && c.Contains(d) {
+				outer = float64(id(c.Pipe)) / 2 * h.ppmm
+				limit = id(c.Pipe)
+			}
+		}
+	}
+	inner := 0.0
+	for _, c := range l.w.Casings {
+		if c.Contains(d) && od(c.Pipe) < limit {
+			inner = max(inner, float64(od(c.Pipe))/2*h.ppmm)
+		}
+	}
+	for si, s := range l.w.Strings {
+		for _, sec := range s.Sections {
+			if sec.Contains(d) {
+				inner = max(inner, h.strX[si]-h.cx+float64(od(sec.Pipe))/2*h.ppmm)
+			}
+		}
+	}
+	if outer <= inner {
+		return h.cx + inner
+	}
+	return h.cx + (inner+outer)/2
+}
+
+// Callout geometry.
+const (
+	calloutGap  = 2.0
+	leaderLane  = 14.0 // between the well column and the label text
+	calloutPadX = 2.0
+)
+
+// placedCallout is a label with its final box.
+type placedCallout struct {
+	c       callout
+	block   textBlock
+	anchorY float64
+	anchorX float64
+	box     draw.Rect
+}
+
+// calloutsFor places the callouts visible on a sheet. It returns them in
+// depth order with their boxes, compacting every label to one line when
+// the full ones do not fit the column.
+func (p *painter) calloutsFor(all []callout) []placedCallout {
+	l := p.l
+	var vis []placedCallout
+	for _, c := range all {
+		t, b := max(c.iv.Top, p.dlo), min(c.iv.Bottom, p.dhi)
+		if c.iv.Top == c.iv.Bottom {
+			if !p.visible(c.iv.Top) {
+				continue
+			}
+			t, b = c.iv.Top, c.iv.Top
+		} else if !(b > t) {
+			continue
+		}
+		d := (t + b) / 2
+		vis = append(vis, placedCallout{c: c, anchorY: p.y(d), anchorX: c.anchorX(d)})
+	}
+	sort.SliceStable(vis, func(i, j int) bool {
+		if vis[i].anchorY != vis[j].anchorY {
+			return vis[i].anchorY < vis[j].anchorY
+		}
+		return vis[i].c.rank < vis[j].c.rank
+	})
+	// Leaders that would start at one height from different points are
+	// told apart by moving the later anchor down a little (the anchor,
+	// not the label: labels are placed below).
+	for i := 1; i < len(vis); i++ {
+		if vis[i].anchorY-vis[i-1].anchorY < 2.5 {
+			if ny := vis[i-1].anchorY + 2.5; p.anchorFits(vis[i].c, ny) {
+				vis[i].anchorY = ny
+			}
+		}
+	}
+	col := l.cols.call
+	textX := col.X + leaderLane
+	width := col.Right() - textX - calloutPadX
+	y0, y1 := p.clipY()
+	lo, hi := y0+1, y1-1
+	for _, compact := range []bool{false, true} {
+		targets := make([]float64, len(vis))
+		heights := make([]float64, len(vis))
+		for i := range vis {
+			var b textBlock
+			if compact {
+				b.lines = []textLine{{s: fit(vis[i].c.title+": "+strings.Join(vis[i].c.lines, "; "), draw.Regular, sizeSmall, width), font: draw.Regular, size: sizeSmall}}
+			} else {
+				b.add(vis[i].c.title, draw.Bold, sizeSmall, width)
+				for _, s := range vis[i].c.lines {
+					b.add(s, draw.Regular, sizeSmall, width)
+				}
+			}
+			vis[i].block = b
+			heights[i] = b.height() + 1
+			targets[i] = vis[i].anchorY - lineGap(sizeSmall)/2
+		}
+		tops, ok := place(targets, heights, calloutGap, lo, hi)
+		for i := range vis {
+			vis[i].box = draw.Rect{X: textX - 1, Y: tops[i], W: width + 2, H: heights[i]}
+		}
+		if ok {
+			break
+		}
+	}
+	return vis
+}
+
+// anchorFits reports whether page y lies on the visible part of a
+// component, so an anchor moved there still points at it.
+func (p *painter) anchorFits(c callout, y float64) bool {
+	if c.iv.Top == c.iv.Bottom {
+		return false
+	}
+	y0, y1, ok := p.vis(c.iv.Top, c.iv.Bottom)
+	return ok && y > y0+0.5 && y < y1-0.5
+}
+
+// calloutItems draws placed callouts: white ground, text and a leader
+// from the component to the label's first line.
+func (p *painter) calloutItems(pcs []placedCallout) []draw.Item {
+	l := p.l
+	knee := l.cols.well.Right() + 2
+	var items []draw.Item
+	for _, pc := range pcs {
+		b := pc.box
+		items = append(items, box(b, draw.Color{}, 0, draw.White, "callout:"+pc.c.key))
+		items = append(items, pc.block.items(b.X+1, b.Y, ink, "callout-text")...)
+		ly := b.Y + lineGap(sizeSmall)*0.55
+		items = append(items,
+			draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.45}, Points: []draw.Point{{X: pc.anchorX, Y: pc.anchorY}, {X: knee, Y: pc.anchorY}, {X: b.X - 4, Y: ly}, {X: b.X - 0.5, Y: ly}}, Role: "leader:" + pc.c.key},
+			draw.Circle{Style: draw.Style{Fill: ink}, Center: draw.Point{X: pc.anchorX, Y: pc.anchorY}, R: 0.9})
+	}
+	return items
+}

@@ -1,0 +1,147 @@
+package sheet
+
+import (
+	"fmt"
+	"strings"
+
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
+)
+
+// Words for numbers on the sheet, in the file's units.
+
+func (l *layout) depth(d schema.Length) string { return l.u.FormatDepth(d) }
+
+func (l *layout) interval(iv schema.Interval) string { return l.u.FormatInterval(iv.Top, iv.Bottom) }
+
+func (l *layout) diameter(d schema.Diameter) string { return l.u.FormatDiameter(d) }
+
+// volume writes a volume in the well's primary report unit, as printed.
+func (l *layout) volume(v schema.Volume) string {
+	p, _ := quantity.VolumeUnits(l.u)
+	return quantity.Number(v.In(p)) + " " + unitText(p)
+}
+
+func unitText(u schema.VolumeUnit) string {
+	switch u {
+	case schema.CubicFeet:
+		return "ft³"
+	case schema.CubicMetres:
+		return "m³"
+	}
+	return string(u)
+}
+
+// pipeSpec writes a pipe as a drafter labels it: "2-in Sch 40 PVC,
+// flush-threaded".
+func (l *layout) pipeSpec(p schema.Pipe) string {
+	var parts []string
+	switch s := strings.TrimSpace(p.Size); {
+	case s == "":
+		if p.OD > 0 {
+			parts = append(parts, "OD "+l.diameter(p.OD))
+		}
+	case strings.HasPrefix(strings.ToUpper(s), "DN"):
+		parts = append(parts, strings.ToUpper(s))
+	default:
+		parts = append(parts, strings.TrimSuffix(strings.TrimSuffix(s, "in"), "\"")+"-in")
+	}
+	if p.Schedule != "" {
+		parts = append(parts, "Sch "+p.Schedule)
+	}
+	if p.SDR > 0 {
+		parts = append(parts, "SDR "+schema.TrimFloat(p.SDR, 1))
+	}
+	if p.Material != "" {
+		parts = append(parts, p.Material)
+	}
+	s := strings.Join(parts, " ")
+	if p.Joint != "" {
+		s += ", " + p.Joint
+	}
+	return s
+}
+
+// pipeSizes writes the resolved diameters.
+func (l *layout) pipeSizes(p schema.Pipe) string {
+	switch {
+	case p.OD > 0 && p.ID > 0:
+		return fmt.Sprintf("OD %s, ID %s", l.diameter(p.OD), l.diameter(p.ID))
+	case p.OD > 0:
+		return "OD " + l.diameter(p.OD)
+	}
+	return "diameter not recorded"
+}
+
+// slot writes a screen's slot: "0.010-in slot (10-slot)" or "0.25-mm slot".
+func (l *layout) slot(sec schema.Section) string {
+	if sec.Slot <= 0 {
+		return "slot not recorded"
+	}
+	if l.u.Diameter == schema.Millimetres {
+		return fmt.Sprintf("%s-mm slot", schema.TrimFloat(float64(sec.Slot), 2))
+	}
+	return fmt.Sprintf("%.3f-in slot (%s-slot)", sec.Slot.Inches(), schema.TrimFloat(sec.SlotNumber(), 1))
+}
+
+// materialName is a fill class in words: "Filter pack", "Bentonite chips".
+func materialName(m schema.Material) string {
+	s := strings.ReplaceAll(string(m), "-", " ")
+	if s == "" {
+		return "Fill"
+	}
+	return strings.ToUpper(s[:1]) + s[1:]
+}
+
+// amountRow finds the quantity row of fill i.
+func (l *layout) amountRow(i int) (quantity.Row, bool) {
+	if l.in.Quantities == nil {
+		return quantity.Row{}, false
+	}
+	for _, r := range l.in.Quantities.Rows {
+		if r.Index == i {
+			return r, true
+		}
+	}
+	return quantity.Row{}, false
+}
+
+// calculated writes a row's calculated amount: "4.86 ft³ (10 bags)".
+func (l *layout) calculated(r quantity.Row) string {
+	if r.Err != nil || r.Calculated <= 0 {
+		return "—"
+	}
+	s := l.volume(r.Calculated)
+	if r.HasYield && r.BagsNeeded > 0 {
+		s += fmt.Sprintf(" (%d %s)", r.BagsNeeded, plural(r.BagsNeeded, "bag", "bags"))
+	}
+	return s
+}
+
+// placed writes a row's placed amount: "9 bags = 4.5 ft³".
+func (l *layout) placed(r quantity.Row) string {
+	if !r.Recorded {
+		return "not recorded"
+	}
+	switch {
+	case r.BagsPlaced > 0 && r.Placed > 0:
+		return fmt.Sprintf("%s %s = %s", schema.TrimFloat(r.BagsPlaced, 1), plural(int(r.BagsPlaced+0.5), "bag", "bags"), l.volume(r.Placed))
+	case r.BagsPlaced > 0:
+		return fmt.Sprintf("%s %s", schema.TrimFloat(r.BagsPlaced, 1), plural(int(r.BagsPlaced+0.5), "bag", "bags"))
+	}
+	return l.volume(r.Placed)
+}
+
+func ratio(r quantity.Row) string {
+	if r.Ratio <= 0 {
+		return "—"
+	}
+	return fmt.Sprintf("%.2f", r.Ratio)
+}
+
+func plural(n int, one, many string) string {
+	if n == 1 {
+		return one
+	}
+	return many
+}

@@ -1,0 +1,234 @@
+package sheet
+
+import (
+	"fmt"
+	"math"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+// span is the depth range one sheet draws.
+type span struct{ Top, Bottom schema.Length }
+
+// layout is the plan of one well's sheets: the page regions, the scale,
+// the sheets' depth ranges and the pieces every sheet shares.
+type layout struct {
+	w   *schema.Well
+	in  Inputs
+	opt Options
+	pg  Page
+	u   schema.Units
+
+	content draw.Rect // the page inside its margin
+	header  draw.Rect // title block
+	body    draw.Rect // column heads and the scaled columns
+	plot    draw.Rect // the scaled part of the body
+	band    draw.Rect // legend, amounts, notes and findings
+	caution draw.Rect
+
+	cols     columnRects
+	scale    Scale
+	fitsOne  bool // the automatic scale fit the well on one sheet
+	hz       hgeom
+	top, bot schema.Length // depth range drawn
+	sheets   []span
+	blocking bool
+	title    titleBlock
+	bandPlan bandPlan
+}
+
+// columnRects are the x ranges of the body's columns.
+type columnRects struct {
+	depth, elev, lith, uscs, desc, well, call xRange
+}
+
+type xRange struct{ X, W float64 }
+
+func (r xRange) Right() float64  { return r.X + r.W }
+func (r xRange) Center() float64 { return r.X + r.W/2 }
+
+// Vertical padding of the scaled area: room for the top cap and the
+// total-depth label, so that nothing at the ends of the range is cut.
+const (
+	plotPadTop    = 16.0
+	plotPadBottom = 12.0
+	columnHeadH   = 22.0
+	maxSheets     = 400
+)
+
+func newLayout(w *schema.Well, in Inputs, opt Options, pg Page) *layout {
+	l := &layout{w: w, in: in, opt: opt, pg: pg, u: w.Units}
+	if l.u.Depth == "" {
+		l.u = schema.DefaultUnits(schema.Feet)
+	}
+	l.content = draw.Rect{X: pg.Margin, Y: pg.Margin, W: pg.Width - 2*pg.Margin, H: pg.Height - 2*pg.Margin}
+	l.blocking = rules.Blocking(in.Findings)
+	return l
+}
+
+// plan fixes everything but the drawing of each sheet.
+func (l *layout) plan() error {
+	l.top, l.bot = l.depthRange()
+	if !(l.bot > l.top) || math.IsInf(float64(l.bot-l.top), 0) || math.IsNaN(float64(l.bot-l.top)) {
+		return fmt.Errorf("nothing to draw: total depth %s", l.u.FormatDepth(l.w.TotalDepth))
+	}
+
+	l.title = l.titleFields()
+	hh := l.title.height(l.content.W)
+	l.header = draw.Rect{X: l.content.X, Y: l.content.Y, W: l.content.W, H: hh}
+
+	cautionLines := draw.Wrap(draw.Italic, sizeTiny, Caution, l.content.W)
+	ch := float64(len(cautionLines))*lineGap(sizeTiny) + 4
+	l.caution = draw.Rect{X: l.content.X, Y: l.content.Bottom() - ch, W: l.content.W, H: ch}
+
+	l.layColumns()
+	l.hz = l.horizontal()
+
+	// The band is sized for the whole well's legend, so every sheet has
+	// the same body and the depth per sheet is constant.
+	l.bandPlan = l.planBand(l.legendFor(span{l.top, l.bot}))
+	bh := l.bandPlan.height
+	l.band = draw.Rect{X: l.content.X, Y: l.caution.Y - 4 - bh, W: l.content.W, H: bh}
+	l.body = draw.Rect{X: l.content.X, Y: l.header.Bottom() + 6, W: l.content.W}
+	l.body.H = l.band.Y - 6 - l.body.Y
+	if l.body.H < 160 {
+		return fmt.Errorf("page %q leaves %.0f pt for the drawing after the title block and notes; use a larger page", l.pg.Name, l.body.H)
+	}
+	l.plot = draw.Rect{X: l.body.X, Y: l.body.Y + columnHeadH, W: l.body.W, H: l.body.H - columnHeadH}
+
+	usable := l.plot.H - plotPadTop - plotPadBottom
+	if l.opt.Scale != nil {
+		if !(l.opt.Scale.Ratio > 0) || math.IsInf(l.opt.Scale.Ratio, 0) {
+			return fmt.Errorf("scale %v is not usable", *l.opt.Scale)
+		}
+		l.scale = *l.opt.Scale
+		l.fitsOne = l.scale.Points(l.bot-l.top) <= usable
+	} else {
+		l.scale, l.fitsOne = autoScale(l.u.Imperial(), l.bot-l.top, usable)
+	}
+	per := schema.Length(usable / l.scale.PointsPerMetre())
+	if n := float64((l.bot - l.top) / per); n > maxSheets {
+		return fmt.Errorf("at %s the well needs %.0f sheets (more than %d); choose a smaller scale", l.scale, math.Ceil(n), maxSheets)
+	}
+	l.scaleFields()
+	l.sheets = paginate(l.top, l.bot, per, schema.LengthFrom(l.majorStep(), l.u.Depth))
+	return nil
+}
+
+// depthRange is the depth range the sheets must show: from the highest
+// thing above ground (or the ground) to the deepest thing drawn.
+func (l *layout) depthRange() (top, bot schema.Length) {
+	w := l.w
+	bot = w.TotalDepth
+	consider := func(iv schema.Interval) {
+		top = min(top, iv.Top)
+		bot = max(bot, iv.Bottom)
+	}
+	for _, b := range w.Boreholes {
+		consider(b.Interval)
+	}
+	for _, c := range w.Casings {
+		consider(c.Interval)
+	}
+	for _, s := range w.Strings {
+		for _, sec := range s.Sections {
+			consider(sec.Interval)
+		}
+	}
+	for _, f := range w.Fills {
+		consider(f.Interval)
+	}
+	for _, o := range w.OpenHoles {
+		consider(o.Interval)
+	}
+	for _, ly := range w.Lithology {
+		consider(ly.Interval)
+	}
+	if p := w.Surface.Protective; p != nil {
+		consider(p.Interval)
+	}
+	if p := w.Surface.Pad; p != nil && w.Surface.Kind != schema.FlushMount {
+		top = min(top, -p.Thickness)
+	}
+	for _, wl := range w.WaterLevels {
+		bot = max(bot, wl.Depth)
+		top = min(top, wl.Depth)
+	}
+	return top, bot
+}
+
+// layColumns divides the body width by the page's column fractions.
+func (l *layout) layColumns() {
+	f := l.pg.columns()
+	x := l.content.X
+	next := func(frac float64) xRange {
+		r := xRange{X: x, W: frac * l.content.W}
+		x += r.W
+		return r
+	}
+	l.cols.depth = next(f.Depth)
+	l.cols.elev = next(f.Elevation)
+	l.cols.lith = next(f.Lithology)
+	l.cols.uscs = next(f.USCS)
+	l.cols.desc = next(f.Description)
+	l.cols.well = next(f.Well)
+	l.cols.call = next(f.Callouts)
+}
+
+// majorStep is the depth-axis tick interval in the file's depth unit:
+// the smallest of 1, 2, 5 x 10^k that leaves at least 36 pt between ticks.
+func (l *layout) majorStep() float64 {
+	perUnit := l.scale.Points(schema.LengthFrom(1, l.u.Depth))
+	return niceStep(36 / perUnit)
+}
+
+// niceStep is the smallest 1, 2 or 5 x 10^k at least v.
+func niceStep(v float64) float64 {
+	if !(v > 0) || math.IsInf(v, 0) {
+		return 1
+	}
+	p := math.Pow(10, math.Floor(math.Log10(v)))
+	for _, m := range []float64{1, 2, 5, 10} {
+		if m*p >= v*(1-1e-9) {
+			return m * p
+		}
+	}
+	return 10 * p
+}
+
+// paginate cuts [top, bot] into sheets of at most per metres each, ending
+// each sheet but the last on a round depth (a multiple of step, the
+// depth-axis tick interval) so that match lines fall on ticks.
+func paginate(top, bot, per, step schema.Length) []span {
+	if bot-top <= per {
+		return []span{{top, bot}}
+	}
+	var out []span
+	s := top
+	for s < bot {
+		e := s + per
+		if e >= bot {
+			out = append(out, span{s, bot})
+			break
+		}
+		// Round the match depth down to a tick when that still leaves the
+		// sheet at least half full.
+		if r := roundDown(e, step); r > s+per/2 {
+			e = r
+		}
+		out = append(out, span{s, e})
+		s = e
+	}
+	return out
+}
+
+// roundDown is the largest multiple of step not above v (with a little
+// tolerance, so 150 ft stays 150 ft after conversion to metres and back).
+func roundDown(v, step schema.Length) schema.Length {
+	if step <= 0 {
+		return v
+	}
+	return schema.Length(math.Floor(float64(v/step)+1e-9)) * step
+}

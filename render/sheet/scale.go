@@ -1,0 +1,111 @@
+package sheet
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// Scale is a vertical drawing scale: Ratio real lengths per paper length.
+// An imperial scale "1 in = 5 ft" is the ratio 60; a metric "1:50" is 50.
+type Scale struct {
+	Ratio    float64
+	Imperial bool // written as "1 in = N ft" rather than "1:N"
+}
+
+const pointsPerMetre = 72 / 0.0254 // 1 in = 72 pt = 0.0254 m exactly
+
+// PointsPerMetre is how many page points one metre of depth takes.
+func (s Scale) PointsPerMetre() float64 { return pointsPerMetre / s.Ratio }
+
+// Points is the drawn length of a depth interval.
+func (s Scale) Points(l schema.Length) float64 { return float64(l) * s.PointsPerMetre() }
+
+// FeetPerInch is the imperial reading of the scale.
+func (s Scale) FeetPerInch() float64 { return s.Ratio / 12 }
+
+// String writes the scale as a drafter states it: "1 in = 5 ft" or "1:50".
+func (s Scale) String() string {
+	if s.Imperial {
+		return fmt.Sprintf("1 in = %s ft", schema.TrimFloat(s.FeetPerInch(), 2))
+	}
+	return "1:" + schema.TrimFloat(s.Ratio, 1)
+}
+
+// Imperial makes the scale 1 in = ft feet.
+func Imperial(ft float64) Scale { return Scale{Ratio: ft * 12, Imperial: true} }
+
+// Metric makes the scale 1:n.
+func Metric(n float64) Scale { return Scale{Ratio: n} }
+
+// ParseScale reads "1in=5ft", "1 in = 5 ft", "1\"=5'" or "1:50".
+func ParseScale(s string) (Scale, error) {
+	t := strings.ToLower(strings.ReplaceAll(s, " ", ""))
+	if a, b, ok := strings.Cut(t, ":"); ok {
+		if a != "1" {
+			return Scale{}, fmt.Errorf("scale %q: a metric scale is written 1:N, such as 1:50", s)
+		}
+		n, err := strconv.ParseFloat(b, 64)
+		if err != nil || !(n > 0) || math.IsInf(n, 0) {
+			return Scale{}, fmt.Errorf("scale %q: %q is not a positive number", s, b)
+		}
+		return Metric(n), nil
+	}
+	a, b, ok := strings.Cut(t, "=")
+	if !ok {
+		return Scale{}, fmt.Errorf("scale %q: write it as 1in=5ft or 1:50", s)
+	}
+	a = strings.TrimSuffix(strings.TrimSuffix(a, "in"), "\"")
+	b = strings.TrimSuffix(strings.TrimSuffix(b, "ft"), "'")
+	in, err1 := strconv.ParseFloat(a, 64)
+	ft, err2 := strconv.ParseFloat(b, 64)
+	if err1 != nil || err2 != nil || !(in > 0) || !(ft > 0) || math.IsInf(in, 0) || math.IsInf(ft, 0) {
+		return Scale{}, fmt.Errorf("scale %q: write it as 1in=5ft (paper inches = real feet)", s)
+	}
+	return Imperial(ft / in), nil
+}
+
+// Round scales, most detailed first. Automatic scaling walks these and
+// stops at the last readable one (index readable); past it the well goes
+// on over several sheets rather than shrinking further.
+var (
+	imperialSteps    = []float64{1, 2, 5, 10, 20, 50, 100, 200, 500} // ft per in
+	metricSteps      = []float64{20, 50, 100, 200, 500, 1000, 2000}  // 1:N
+	imperialReadable = 20.0                                          // 1 in = 20 ft: a 1-ft interval is 3.6 pt
+	metricReadable   = 200.0                                         // 1:200: a 0.5-m interval is 7 pt
+)
+
+// candidates lists the automatic scales for the units, most detailed
+// first, ending at the readable limit.
+func candidates(imperial bool) []Scale {
+	var out []Scale
+	if imperial {
+		for _, ft := range imperialSteps {
+			if ft <= imperialReadable {
+				out = append(out, Imperial(ft))
+			}
+		}
+		return out
+	}
+	for _, n := range metricSteps {
+		if n <= metricReadable {
+			out = append(out, Metric(n))
+		}
+	}
+	return out
+}
+
+// autoScale picks the most detailed round scale at which a depth span
+// fits the body height, or the readable limit when none does.
+func autoScale(imperial bool, span schema.Length, body float64) (Scale, bool) {
+	cs := candidates(imperial)
+	for _, s := range cs {
+		if s.Points(span) <= body {
+			return s, true
+		}
+	}
+	return cs[len(cs)-1], false
+}

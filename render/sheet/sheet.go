@@ -1,0 +1,102 @@
+// Package sheet lays out one well as scaled construction-log sheets: a
+// device-independent draw.Document whose items carry Role strings that
+// tests read ("interval:fill[2]", "screen:main[1]", "callout:fill[2]",
+// "legend:filter-pack", ...). It reads the typed well model, the check's
+// findings and the quantity report; it knows nothing of files or output
+// formats (package render/out writes the document).
+package sheet
+
+import (
+	"fmt"
+	"time"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/project"
+	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+// Inputs is what the sheet shows besides the well itself.
+type Inputs struct {
+	Findings   []rules.Finding
+	Quantities *quantity.Report // nil: no amounts table
+	TitleBlock project.TitleBlock
+	Logo       []byte // the client's or consultant's logo, PNG or JPEG; nil for none
+}
+
+// Options are the drafting choices.
+type Options struct {
+	Page  Page   // zero value: US Letter, portrait
+	Scale *Scale // nil: automatic
+	// SheetOffset is the number of sheets before this well's in a set, and
+	// SheetTotal the set's size (0: this well's own sheet count), for
+	// "sheet n of m" in a bound book.
+	SheetOffset int
+	SheetTotal  int
+	// Date is the document date written by backends (RFC 3339); "" takes
+	// the well's completed or drilled date. Never the clock.
+	Date string
+}
+
+// Caution is printed on every sheet.
+const Caution = "Figures and checks support, and never replace, the review of a licensed professional and the governing local well code; rule thresholds are defaults to be set to the local rules."
+
+// NotFinal is the stamp of a sheet whose well has unwaived error findings.
+const NotFinal = "NOT FINAL — check findings"
+
+// Layout draws a well on one or more sheets.
+func Layout(w *schema.Well, in Inputs, opt Options) (*draw.Document, error) {
+	if w == nil {
+		return nil, fmt.Errorf("sheet: no well")
+	}
+	pg := opt.Page
+	if pg.Width == 0 {
+		pg = Letter
+	}
+	if err := pg.check(); err != nil {
+		return nil, err
+	}
+	l := newLayout(w, in, opt, pg)
+	if err := l.plan(); err != nil {
+		return nil, fmt.Errorf("sheet %s: %w", w.ID, err)
+	}
+	doc := &draw.Document{
+		Title:   fmt.Sprintf("%s well construction log", w.ID),
+		Subject: joinNonEmpty(" · ", w.Project, w.Site),
+		Author:  joinNonEmpty(", ", in.TitleBlock.Consultant, w.LoggedBy),
+		Date:    documentDate(w, opt.Date),
+	}
+	for i := range l.sheets {
+		doc.Pages = append(doc.Pages, l.page(i))
+	}
+	return doc, nil
+}
+
+// documentDate is the given date, or the well's completed (else drilled)
+// date at midnight UTC, or "".
+func documentDate(w *schema.Well, given string) string {
+	if given != "" {
+		return given
+	}
+	for _, d := range []schema.Date{w.Completed, w.Drilled} {
+		if !d.IsZero() {
+			return d.Time().Format(time.RFC3339)
+		}
+	}
+	return ""
+}
+
+func joinNonEmpty(sep string, parts ...string) string {
+	out := ""
+	for _, p := range parts {
+		if p == "" {
+			continue
+		}
+		if out != "" {
+			out += sep
+		}
+		out += p
+	}
+	return out
+}

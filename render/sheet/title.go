@@ -1,0 +1,235 @@
+package sheet
+
+import (
+	"bytes"
+	"fmt"
+	"image"
+	_ "image/jpeg" // logo formats the project accepts
+	_ "image/png"
+	"strings"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// field is one title-block cell.
+type field struct {
+	label, value string
+	scaleBar     bool // draw the vertical scale bar beside the value
+}
+
+// titleBlock is the grid of fields under the title row.
+type titleBlock struct {
+	rows [][]field
+}
+
+const (
+	titleRowH    = 30.0
+	fieldLabelH  = 8.0
+	fieldMaxLine = 3
+)
+
+func (l *layout) titleFields() titleBlock {
+	w := l.w
+	tb := l.in.TitleBlock
+	dash := func(s string) string {
+		if strings.TrimSpace(s) == "" {
+			return "—"
+		}
+		return s
+	}
+	purpose := upperFirst(strings.ReplaceAll(string(w.Purpose), "-", " "))
+	if w.Status != "" {
+		purpose += " (" + w.Status + ")"
+	}
+	elev := func(v *schema.Length) string {
+		if v == nil {
+			return "not surveyed"
+		}
+		s := l.depth(*v)
+		if w.Elevation.Datum != "" {
+			s += " " + w.Elevation.Datum
+		}
+		return s
+	}
+	ground := elev(w.Elevation.Ground)
+	if !w.Elevation.Surveyed.IsZero() && w.Elevation.Ground != nil {
+		ground += ", surveyed " + w.Elevation.Surveyed.String()
+	}
+	contractor := w.Drilling.Contractor
+	if w.Drilling.Licence != "" {
+		contractor = joinNonEmpty(", ", contractor, "licence "+w.Drilling.Licence)
+	}
+	volUnit := "ft³"
+	if !l.u.Imperial() {
+		volUnit = "L"
+	}
+	units := fmt.Sprintf("depth %s below ground; diameter %s; volume %s", l.u.Depth, l.u.Diameter, volUnit)
+	rows := [][]field{
+		{{label: "Project", value: dash(w.Project)}, {label: "Client", value: dash(w.Client)}, {label: "Site", value: dash(w.Site)}, {label: "Purpose", value: dash(purpose)}, {label: "Permit", value: dash(w.Permit)}},
+		{{label: "Location", value: dash(w.Location.Description)}, {label: "Coordinates", value: l.coordinates()}, {label: "Ground elevation", value: ground}, {label: "Measuring point elevation", value: elev(w.Elevation.MeasuringPoint)}, {label: "Total depth", value: l.depth(w.TotalDepth)}},
+		{{label: "Drilled", value: dash(w.Drilled.String())}, {label: "Completed", value: dash(w.Completed.String())}, {label: "Drilling contractor", value: dash(contractor)}, {label: "Drilling method", value: dash(w.Drilling.Method)}, {label: "Driller", value: dash(w.Drilling.Driller)}},
+		{{label: "Logged by", value: dash(w.LoggedBy)}, {label: "Checked by", value: dash(w.CheckedBy)}, {label: "Vertical scale", value: "", scaleBar: true}, {label: "Horizontal exaggeration", value: ""}, {label: "Units", value: units}},
+	}
+	if tb.Consultant != "" || tb.ReportNumber != "" || tb.JobNumber != "" || tb.Revision != "" || !tb.Issued.IsZero() || tb.PreparedBy != "" || tb.ApprovedBy != "" {
+		rows = append(rows, []field{{label: "Prepared by", value: dash(joinNonEmpty(", ", tb.Consultant, tb.PreparedBy))}, {label: "Approved by", value: dash(tb.ApprovedBy)},
+			{label: "Report", value: dash(joinNonEmpty(" · job ", tb.ReportNumber, tb.JobNumber))}, {label: "Revision", value: dash(tb.Revision)}, {label: "Issued", value: dash(tb.Issued.String())}})
+	}
+	return titleBlock{rows: rows}
+}
+
+// coordinates writes the location's coordinates with their system.
+func (l *layout) coordinates() string {
+	loc := l.w.Location
+	var parts []string
+	if loc.Easting != nil && loc.Northing != nil {
+		parts = append(parts, fmt.Sprintf("E %s, N %s", schema.TrimFloat(*loc.Easting, 3), schema.TrimFloat(*loc.Northing, 3)))
+	}
+	if loc.Latitude != nil && loc.Longitude != nil {
+		parts = append(parts, fmt.Sprintf("%s°, %s°", schema.TrimFloat(*loc.Latitude, 6), schema.TrimFloat(*loc.Longitude, 6)))
+	}
+	if len(parts) == 0 {
+		return "not recorded"
+	}
+	s := strings.Join(parts, "; ")
+	if loc.System != "" {
+		s += " (" + loc.System + ")"
+	}
+	return s
+}
+
+// fill completes the fields known only once the scale is fixed.
+func (l *layout) scaleFields() {
+	for r := range l.title.rows {
+		for c := range l.title.rows[r] {
+			f := &l.title.rows[r][c]
+			switch f.label {
+			case "Vertical scale":
+				f.value = l.scale.String()
+			case "Horizontal exaggeration":
+				f.value = fmt.Sprintf("×%s (diameters at 1:%s)", schema.TrimFloat(l.hz.exaggerationFor(l.scale), 1), schema.TrimFloat(l.hz.ratio, 1))
+			}
+		}
+	}
+}
+
+func (tb titleBlock) cellLines(f field, cw float64) []string {
+	ls := draw.Wrap(draw.Regular, sizeBody, f.value, cw-6)
+	if len(ls) > fieldMaxLine {
+		ls = ls[:fieldMaxLine]
+		ls[fieldMaxLine-1] = fit(ls[fieldMaxLine-1]+" …", draw.Regular, sizeBody, cw-6)
+	}
+	if len(ls) == 0 {
+		ls = []string{""}
+	}
+	return ls
+}
+
+// rowHeight is the height of a row of cells in a block of width w: room
+// for the tallest wrapped value (the scale values are short).
+func (tb titleBlock) rowHeight(row []field, w float64) float64 {
+	cw := w / float64(len(row))
+	n := 1
+	for _, f := range row {
+		if f.scaleBar {
+			continue
+		}
+		n = max(n, len(tb.cellLines(f, cw)))
+	}
+	return fieldLabelH + float64(n)*lineGap(sizeBody) + 3
+}
+
+func (tb titleBlock) height(w float64) float64 {
+	h := titleRowH
+	for _, r := range tb.rows {
+		h += tb.rowHeight(r, w)
+	}
+	return h
+}
+
+// header draws the title block of sheet n (1-based) of m.
+func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
+	r := l.header
+	var items []draw.Item
+	items = append(items, box(r, ink, 0.9, draw.Color{}, "titleblock"))
+	x := r.X + 6
+	// Logo, fitted into the title row keeping its aspect.
+	if len(l.in.Logo) > 0 {
+		if cfg, _, err := image.DecodeConfig(bytes.NewReader(l.in.Logo)); err == nil && cfg.Width > 0 && cfg.Height > 0 {
+			hgt := titleRowH - 8
+			wid := hgt * float64(cfg.Width) / float64(cfg.Height)
+			if wid > 90 {
+				wid, hgt = 90, 90*float64(cfg.Height)/float64(cfg.Width)
+			}
+			items = append(items, draw.Image{Rect: draw.Rect{X: x, Y: r.Y + (titleRowH-hgt)/2, W: wid, H: hgt}, Data: l.in.Logo, Role: "logo"})
+			x += wid + 8
+		}
+	}
+	id := l.w.ID
+	if id == "" {
+		id = "(no well ID)"
+	}
+	idW := min(draw.TextWidth(draw.Bold, sizeTitle, id), r.W*0.4)
+	items = append(items, text(x, r.Y+20, fit(id, draw.Bold, sizeTitle, r.W*0.4), draw.Bold, sizeTitle, draw.Start, ink, "well-id"))
+	items = append(items, text(x+idW+8, r.Y+13, "WELL CONSTRUCTION LOG", draw.Bold, sizeHeading, draw.Start, ink, ""),
+		text(x+idW+8, r.Y+22, fit(subtitle, draw.Regular, sizeSmall, r.W*0.35), draw.Regular, sizeSmall, draw.Start, grey, ""))
+	// Sheet number, boxed at the right.
+	sheetW := 74.0
+	sb := draw.Rect{X: r.Right() - sheetW, Y: r.Y, W: sheetW, H: titleRowH}
+	items = append(items, box(sb, ink, 0.6, draw.Color{}, ""),
+		text(sb.X+sheetW/2, sb.Y+9, "SHEET", draw.Regular, sizeTiny, draw.Middle, grey, ""),
+		text(sb.X+sheetW/2, sb.Y+23, fmt.Sprintf("%d of %d", n, m), draw.Bold, 11, draw.Middle, ink, "sheet-number"))
+	if l.blocking {
+		st := draw.Rect{X: sb.X - 170, Y: r.Y + 4, W: 162, H: titleRowH - 8}
+		items = append(items, box(st, alarm, 1.6, draw.RGB(253, 238, 228), "stamp:not-final"),
+			text(st.X+st.W/2, st.Y+st.H/2+draw.CapHeight(draw.Bold, 10)/2, NotFinal, draw.Bold, 10, draw.Middle, alarm, "stamp-text"))
+	}
+	// The grid.
+	y := r.Y + titleRowH
+	for _, row := range l.title.rows {
+		rh := l.title.rowHeight(row, r.W)
+		cw := r.W / float64(len(row))
+		items = append(items, line(r.X, y, r.Right(), y, 0.5, ink, ""))
+		for c, f := range row {
+			cx := r.X + float64(c)*cw
+			if c > 0 {
+				items = append(items, line(cx, y, cx, y+rh, 0.4, ink, ""))
+			}
+			items = append(items, text(cx+3, y+6.6, strings.ToUpper(f.label), draw.Regular, sizeTiny-0.0, draw.Start, grey, ""))
+			ty := y + fieldLabelH + draw.Ascent(draw.Regular, sizeBody)
+			for _, s := range l.title.cellLines(f, cw) {
+				items = append(items, text(cx+3, ty, s, draw.Regular, sizeBody, draw.Start, ink, "field:"+f.label))
+				ty += lineGap(sizeBody)
+			}
+			if f.scaleBar {
+				items = append(items, l.scaleBar(cx+3+draw.TextWidth(draw.Regular, sizeBody, f.value)+8, y+fieldLabelH+2, cx+cw-6)...)
+			}
+		}
+		y += rh
+	}
+	return items
+}
+
+// scaleBar draws a bar of a round length at the vertical scale, in
+// alternate black and white halves, between x0 and at most x1.
+func (l *layout) scaleBar(x0, y, x1 float64) []draw.Item {
+	perUnit := l.scale.Points(schema.LengthFrom(1, l.u.Depth))
+	room := x1 - x0 - 12
+	if room < 20 {
+		return nil
+	}
+	// The largest 1, 2 or 5 x 10^k that fits.
+	length := niceStep(room / perUnit)
+	for length*perUnit > room {
+		length = niceStep(length * 0.45)
+	}
+	w := length * perUnit
+	half := w / 2
+	items := []draw.Item{
+		box(draw.Rect{X: x0, Y: y, W: half, H: 3}, ink, 0.4, ink, "scalebar"),
+		box(draw.Rect{X: x0 + half, Y: y, W: half, H: 3}, ink, 0.4, draw.White, "scalebar"),
+		text(x0, y+10, "0", draw.Regular, sizeTiny, draw.Middle, ink, ""),
+		text(x0+w, y+10, schema.TrimFloat(length, 2)+" "+string(l.u.Depth), draw.Regular, sizeTiny, draw.Middle, ink, "scalebar-length"),
+	}
+	return items
+}

@@ -1,0 +1,666 @@
+package sheet
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strings"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// Drawn minimum wall thicknesses: a 2-in Sch 40 wall at 1:10 would be a
+// hairline, so walls are thickened inward (outside diameters, and so the
+// annulus, stay to scale).
+const (
+	minWall       = 1.6
+	minScreenWall = 3.2
+)
+
+// well paints the well column of one sheet.
+func (p *painter) well() []draw.Item {
+	l := p.l
+	w := l.w
+	h := l.hz
+	var items []draw.Item
+
+	// 1. The hole: white ground, so fills and pipes stand on paper.
+	for i, b := range w.Boreholes {
+		y0, y1, ok := p.vis(b.Top, b.Bottom)
+		if !ok {
+			continue
+		}
+		r := float64(b.Diameter) / 2 * h.ppmm
+		items = append(items, box(draw.Rect{X: h.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, draw.Color{}, 0, draw.White, "borehole:"+pathOr(b.Path, "borehole", i)))
+	}
+	// 2. Concrete pad below the protective casing and vault.
+	items = append(items, p.pad()...)
+	// 3. Annular fills in the borehole annulus.
+	for i, f := range w.Fills {
+		if f.Within == "" {
+			items = append(items, p.fillInHole(i, f)...)
+		}
+	}
+	// 4. Outer casings, outermost first, each followed by what was placed
+	// in its bore.
+	order := make([]int, len(w.Casings))
+	for i := range order {
+		order[i] = i
+	}
+	sort.SliceStable(order, func(a, b int) bool { return od(w.Casings[order[a]].Pipe) > od(w.Casings[order[b]].Pipe) })
+	for _, ci := range order {
+		c := w.Casings[ci]
+		items = append(items, p.pipe("casing:"+pathOr(c.Path, "casing", ci), h.cx, c.Interval, c.Pipe, nil)...)
+		for i, f := range w.Fills {
+			if f.Within != "" && f.Within == casingName(c) {
+				items = append(items, p.fillInCasing(i, f, c)...)
+			}
+		}
+	}
+	// 5. Open hole: a rough wall.
+	for i, o := range w.OpenHoles {
+		items = append(items, p.openHole(i, o)...)
+	}
+	// 6. Well strings.
+	for si, s := range w.Strings {
+		x := h.strX[si]
+		for k := range s.Sections {
+			sec := &s.Sections[k]
+			items = append(items, p.pipe(string(sec.Kind)+":"+stringName(s)+fmt.Sprintf("[%d]", k), x, sec.Interval, sec.Pipe, sec)...)
+		}
+		items = append(items, p.caps(si, s, x)...)
+		items = append(items, p.centralizers("centralizer:"+stringName(s), x, stringOD(s), s.Centralizers)...)
+	}
+	for ci, c := range w.Casings {
+		items = append(items, p.centralizers("centralizer:"+pathOr(c.Path, "casing", ci), h.cx, od(c.Pipe), c.Centralizers)...)
+	}
+	// 7. Surface completion.
+	items = append(items, p.protective()...)
+	items = append(items, p.vault()...)
+	// 8. Hole walls on top, so every fill ends on a clean edge.
+	items = append(items, p.holeWalls()...)
+	items = append(items, p.ground()...)
+	items = append(items, p.waterLevels()...)
+
+	y0, y1 := p.clipY()
+	col := l.cols.well
+	return []draw.Item{draw.Clip{Rect: draw.Rect{X: col.X, Y: y0, W: col.W, H: y1 - y0}, Items: items}}
+}
+
+func pathOr(path, kind string, i int) string {
+	if path != "" {
+		return path
+	}
+	return fmt.Sprintf("%s[%d]", kind, i)
+}
+
+func casingName(c schema.Casing) string {
+	if c.Name != "" {
+		return c.Name
+	}
+	return string(c.Kind)
+}
+
+func stringName(s schema.String) string {
+	if s.Name != "" {
+		return s.Name
+	}
+	return "main"
+}
+
+// fillInHole paints a fill across the borehole, piece by piece where the
+// hole changes diameter; pipes drawn later cover their part.
+func (p *painter) fillInHole(i int, f schema.Fill) []draw.Item {
+	var items []draw.Item
+	sym := materialSymbol(f.Material)
+	role := "interval:" + pathOr(f.Path, "fill", i)
+	for _, b := range p.l.w.Boreholes {
+		t, bt := max(f.Top, b.Top), min(f.Bottom, b.Bottom)
+		y0, y1, ok := p.vis(t, bt)
+		if !ok {
+			continue
+		}
+		r := float64(b.Diameter) / 2 * p.l.hz.ppmm
+		items = append(items, p.paint(sym, draw.Rect{X: p.l.hz.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, role)...)
+	}
+	return items
+}
+
+// fillInCasing paints a fill inside an outer casing's bore.
+func (p *painter) fillInCasing(i int, f schema.Fill, c schema.Casing) []draw.Item {
+	t, b := max(f.Top, c.Top), min(f.Bottom, c.Bottom)
+	y0, y1, ok := p.vis(t, b)
+	if !ok {
+		return nil
+	}
+	r := float64(id(c.Pipe)) / 2 * p.l.hz.ppmm
+	return p.paint(materialSymbol(f.Material), draw.Rect{X: p.l.hz.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, "interval:"+pathOr(f.Path, "fill", i))
+}
+
+// pipeLook is how a pipe material is drawn.
+type pipeLook int
+
+const (
+	plastic pipeLook = iota
+	steel
+	stainless
+)
+
+func lookOf(material string) pipeLook {
+	m := strings.ToLower(material)
+	switch {
+	case strings.Contains(m, "stainless"):
+		return stainless
+	case strings.Contains(m, "steel"), strings.Contains(m, "iron"):
+		return steel
+	}
+	return plastic
+}
+
+func pipeSymbol(look pipeLook) symbol {
+	var fill draw.Color
+	var label string
+	switch look {
+	case steel:
+		fill, label = ink, "Steel pipe wall"
+	case stainless:
+		fill, label = draw.RGB(130, 130, 130), "Stainless-steel pipe wall"
+	default:
+		fill, label = draw.White, "Plastic pipe wall (PVC, HDPE)"
+	}
+	sw := func(r draw.Rect) []draw.Item {
+		wall := r.W / 4
+		return []draw.Item{
+			box(draw.Rect{X: r.X, Y: r.Y, W: wall, H: r.H}, ink, 0.4, fill, ""),
+			box(draw.Rect{X: r.Right() - wall, Y: r.Y, W: wall, H: r.H}, ink, 0.4, fill, ""),
+		}
+	}
+	return symbol{key: fmt.Sprintf("pipe:%d", look), label: label, order: 200 + int(look), paint: sw, swatch: sw}
+}
+
+func wallFill(look pipeLook) draw.Color {
+	switch look {
+	case steel:
+		return ink
+	case stainless:
+		return draw.RGB(130, 130, 130)
+	}
+	return draw.White
+}
+
+// pipe paints one casing or string section: its bore cleared, its walls,
+// and for a screen its openings. The role box is the outside diameter.
+func (p *painter) pipe(role string, x float64, iv schema.Interval, pp schema.Pipe, sec *schema.Section) []draw.Item {
+	y0, y1, ok := p.vis(iv.Top, iv.Bottom)
+	if !ok {
+		return nil
+	}
+	h := p.l.hz
+	ro := float64(od(pp)) / 2 * h.ppmm
+	wall := float64(od(pp)-id(pp)) / 2 * h.ppmm
+	screen := sec != nil && sec.Kind == schema.ScreenSection
+	if screen {
+		wall = max(wall, minScreenWall)
+	} else {
+		wall = max(wall, minWall)
+	}
+	wall = min(wall, ro*0.45)
+	look := lookOf(pp.Material)
+	ht := y1 - y0
+	left := draw.Rect{X: x - ro, Y: y0, W: wall, H: ht}
+	right := draw.Rect{X: x + ro - wall, Y: y0, W: wall, H: ht}
+	items := []draw.Item{box(draw.Rect{X: x - ro + wall, Y: y0, W: 2 * (ro - wall), H: ht}, draw.Color{}, 0, draw.White, "bore:"+role)}
+	switch {
+	case screen && sec.ScreenType == schema.ContinuousWrap:
+		p.use(screenSymbol(schema.ContinuousWrap))
+		items = append(items, wrapWall(left)...)
+		items = append(items, wrapWall(right)...)
+	case screen:
+		p.use(screenSymbol(schema.Slotted))
+		items = append(items, slottedWall(left, look)...)
+		items = append(items, slottedWall(right, look)...)
+		if sec.ScreenType == schema.Prepacked {
+			p.use(screenSymbol(schema.Prepacked))
+			items = append(items, prepackSleeve(left, right)...)
+		}
+	default:
+		p.use(pipeSymbol(look))
+		items = append(items, box(left, draw.Color{}, 0, wallFill(look), ""), box(right, draw.Color{}, 0, wallFill(look), ""))
+	}
+	// Outline: the outside diameter, and the bore's edges.
+	items = append(items,
+		box(draw.Rect{X: x - ro, Y: y0, W: 2 * ro, H: ht}, ink, 0.5, draw.Color{}, role),
+		line(left.Right(), y0, left.Right(), y1, 0.3, ink, ""),
+		line(right.X, y0, right.X, y1, 0.3, ink, ""))
+	return items
+}
+
+func screenSymbol(t schema.ScreenType) symbol {
+	var sw func(r draw.Rect) []draw.Item
+	label := ""
+	switch t {
+	case schema.ContinuousWrap:
+		label = "Continuous-wrap screen"
+		sw = func(r draw.Rect) []draw.Item {
+			return append(wrapWall(draw.Rect{X: r.X, Y: r.Y, W: r.W / 3, H: r.H}), wrapWall(draw.Rect{X: r.Right() - r.W/3, Y: r.Y, W: r.W / 3, H: r.H})...)
+		}
+	case schema.Prepacked:
+		label = "Prepacked screen sleeve"
+		sw = func(r draw.Rect) []draw.Item {
+			a := draw.Rect{X: r.X + 2, Y: r.Y, W: r.W / 4, H: r.H}
+			b := draw.Rect{X: r.Right() - 2 - r.W/4, Y: r.Y, W: r.W / 4, H: r.H}
+			return append(append(slottedWall(a, plastic), slottedWall(b, plastic)...), prepackSleeve(a, b)...)
+		}
+	default:
+		label = "Slotted screen"
+		sw = func(r draw.Rect) []draw.Item {
+			return append(slottedWall(draw.Rect{X: r.X, Y: r.Y, W: r.W / 3, H: r.H}, plastic), slottedWall(draw.Rect{X: r.Right() - r.W/3, Y: r.Y, W: r.W / 3, H: r.H}, plastic)...)
+		}
+	}
+	return symbol{key: "screen:" + string(t), label: label, order: 210, paint: sw, swatch: sw}
+}
+
+// slottedWall is a solid wall cut by horizontal slots: dark wall, paper
+// slots, so the openings read in black-and-white print.
+func slottedWall(r draw.Rect, look pipeLook) []draw.Item {
+	wallC, slotC := ink, draw.White
+	if look == stainless {
+		wallC = draw.RGB(90, 90, 90)
+	}
+	items := []draw.Item{box(r, draw.Color{}, 0, wallC, "")}
+	for y := r.Y + 1.2; y < r.Bottom()-0.6; y += 2.4 {
+		items = append(items, box(draw.Rect{X: r.X + r.W*0.18, Y: y, W: r.W * 0.64, H: 0.9}, draw.Color{}, 0, slotC, ""))
+	}
+	return items
+}
+
+// wrapWall is a continuous-wrap screen: fine horizontal wire turns over
+// vertical rods, with open paper between the turns.
+func wrapWall(r draw.Rect) []draw.Item {
+	items := []draw.Item{box(r, draw.Color{}, 0, draw.White, "")}
+	for y := r.Y + 0.5; y < r.Bottom(); y += 1.3 {
+		items = append(items, line(r.X, y, r.Right(), y, 0.55, ink, ""))
+	}
+	items = append(items, line(r.X+0.4, r.Y, r.X+0.4, r.Bottom(), 0.5, ink, ""), line(r.Right()-0.4, r.Y, r.Right()-0.4, r.Bottom(), 0.5, ink, ""))
+	return items
+}
+
+// prepackSleeve is the pack sleeve around a prepacked screen, drawn as a
+// dashed outline outside the walls.
+func prepackSleeve(left, right draw.Rect) []draw.Item {
+	st := draw.Style{Stroke: ink, StrokeWidth: 0.5, Dash: []float64{1.2, 1.2}}
+	return []draw.Item{
+		draw.Shape{Style: st, Points: []draw.Point{{X: left.X - 1.5, Y: left.Y}, {X: left.X - 1.5, Y: left.Bottom()}}},
+		draw.Shape{Style: st, Points: []draw.Point{{X: right.Right() + 1.5, Y: right.Y}, {X: right.Right() + 1.5, Y: right.Bottom()}}},
+	}
+}
+
+// caps paints a string's top cap (and the measuring point) and bottom cap.
+func (p *painter) caps(si int, s schema.String, x float64) []draw.Item {
+	if len(s.Sections) == 0 {
+		return nil
+	}
+	var items []draw.Item
+	h := p.l.hz
+	top, bot := s.Sections[0], s.Sections[len(s.Sections)-1]
+	rt := float64(od(top.Pipe)) / 2 * h.ppmm
+	if p.visible(top.Top) {
+		y := p.y(top.Top)
+		if s.TopCap != "" {
+			items = append(items, box(draw.Rect{X: x - rt - 0.8, Y: y - 2.6, W: 2*rt + 1.6, H: 2.6}, ink, 0.4, grey, "topcap:"+stringName(s)))
+			p.use(capSymbol())
+		}
+	}
+	rb := float64(od(bot.Pipe)) / 2 * h.ppmm
+	if s.BottomCap != "" && p.visible(bot.Bottom) {
+		y := p.y(bot.Bottom)
+		items = append(items, box(draw.Rect{X: x - rb, Y: y - 2.8, W: 2 * rb, H: 2.8}, ink, 0.4, ink, "bottomcap:"+stringName(s)))
+		p.use(capSymbol())
+	}
+	return items
+}
+
+func capSymbol() symbol {
+	sw := func(r draw.Rect) []draw.Item {
+		return []draw.Item{box(draw.Rect{X: r.X + 2, Y: r.Y + r.H/2 - 1.5, W: r.W - 4, H: 3}, ink, 0.4, ink, "")}
+	}
+	return symbol{key: "cap", label: "Cap or plug", order: 220, paint: sw, swatch: sw}
+}
+
+// centralizers are bow springs from the pipe toward the hole wall.
+func (p *painter) centralizers(role string, x float64, d schema.Diameter, at []schema.Length) []draw.Item {
+	var items []draw.Item
+	r := float64(d) / 2 * p.l.hz.ppmm
+	for _, z := range at {
+		if !p.visible(z) {
+			continue
+		}
+		hole := float64(holeAt(p.l.w, z)) / 2 * p.l.hz.ppmm
+		reach := max(hole-r-0.8, 2.0)
+		y := p.y(z)
+		for _, side := range []float64{-1, 1} {
+			x0 := x + side*r
+			items = append(items, draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.7},
+				Points: []draw.Point{{X: x0, Y: y - 4}, {X: x0 + side*reach, Y: y}, {X: x0, Y: y + 4}}, Role: role})
+		}
+		p.use(centralizerSymbol())
+	}
+	return items
+}
+
+func centralizerSymbol() symbol {
+	sw := func(r draw.Rect) []draw.Item {
+		x := r.X + r.W/2 - 2
+		y := r.Y + r.H/2
+		return []draw.Item{
+			line(x, r.Y, x, r.Bottom(), 0.5, ink, ""),
+			draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.7}, Points: []draw.Point{{X: x, Y: y - 4}, {X: x + 5, Y: y}, {X: x, Y: y + 4}}},
+		}
+	}
+	return symbol{key: "centralizer", label: "Centralizer", order: 230, paint: sw, swatch: sw}
+}
+
+// holeAt is the borehole diameter at a depth, 0 if none.
+func holeAt(w *schema.Well, z schema.Length) schema.Diameter {
+	if b, ok := w.BoreholeAt(z); ok {
+		return b.Diameter
+	}
+	return 0
+}
+
+// openHole paints an uncased interval: paper inside, rough walls drawn
+// with the other hole walls.
+func (p *painter) openHole(i int, o schema.OpenHole) []draw.Item {
+	y0, y1, ok := p.vis(o.Top, o.Bottom)
+	if !ok {
+		return nil
+	}
+	d := holeAt(p.l.w, (o.Top+o.Bottom)/2)
+	r := float64(d) / 2 * p.l.hz.ppmm
+	p.use(openHoleSymbol())
+	return []draw.Item{box(draw.Rect{X: p.l.hz.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, draw.Color{}, 0, draw.White, "openhole:"+pathOr(o.Path, "open_hole", i))}
+}
+
+func openHoleSymbol() symbol {
+	sw := func(r draw.Rect) []draw.Item {
+		return []draw.Item{roughWall(r.X+3, r.Y, r.Bottom(), -1), roughWall(r.Right()-3, r.Y, r.Bottom(), 1)}
+	}
+	return symbol{key: "openhole", label: "Open hole (uncased rock)", order: 240, paint: sw, swatch: sw}
+}
+
+// roughWall is a jagged vertical line: a rock wall. The teeth follow the
+// page y so that two sheets of one wall join without a step.
+func roughWall(x, y0, y1, side float64) draw.Shape {
+	const tooth = 3.0
+	pts := []draw.Point{{X: x, Y: y0}}
+	start := math.Ceil(y0/tooth) * tooth
+	k := int(start / tooth)
+	for y := start; y < y1; y += tooth {
+		off := 0.0
+		if k%2 == 0 {
+			off = side * 1.6
+		}
+		pts = append(pts, draw.Point{X: x + off, Y: y})
+		k++
+	}
+	pts = append(pts, draw.Point{X: x, Y: y1})
+	return draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.8}, Points: pts}
+}
+
+// holeWalls draws the borehole walls: straight where drilled and cased or
+// filled, rough along open hole, with steps where the diameter changes.
+func (p *painter) holeWalls() []draw.Item {
+	w := p.l.w
+	h := p.l.hz
+	var items []draw.Item
+	wallStyle := draw.Style{Stroke: ink, StrokeWidth: 0.7}
+	prevR := 0.0
+	prevBottom := schema.Length(math.Inf(-1))
+	for _, b := range w.Boreholes {
+		r := float64(b.Diameter) / 2 * h.ppmm
+		for _, seg := range splitByOpenHole(w, b.Interval) {
+			y0, y1, ok := p.vis(seg.iv.Top, seg.iv.Bottom)
+			if !ok {
+				continue
+			}
+			if seg.open {
+				items = append(items, roughWall(h.cx-r, y0, y1, -1), roughWall(h.cx+r, y0, y1, 1))
+				continue
+			}
+			for _, x := range []float64{h.cx - r, h.cx + r} {
+				items = append(items, draw.Shape{Style: wallStyle, Points: []draw.Point{{X: x, Y: y0}, {X: x, Y: y1}}})
+			}
+		}
+		// A step in diameter, or the hole's bottom.
+		if b.Top == prevBottom && prevR != r && p.visible(b.Top) {
+			y := p.y(b.Top)
+			lo, hi := min(prevR, r), max(prevR, r)
+			items = append(items, line(h.cx-hi, y, h.cx-lo, y, 0.7, ink, ""), line(h.cx+lo, y, h.cx+hi, y, 0.7, ink, ""))
+		}
+		prevR, prevBottom = r, b.Bottom
+	}
+	if n := len(w.Boreholes); n > 0 {
+		b := w.Boreholes[n-1]
+		if p.visible(b.Bottom) {
+			r := float64(b.Diameter) / 2 * h.ppmm
+			y := p.y(b.Bottom)
+			items = append(items, line(h.cx-r, y, h.cx+r, y, 0.7, ink, "hole-bottom"))
+		}
+	}
+	return items
+}
+
+type wallSeg struct {
+	iv   schema.Interval
+	open bool
+}
+
+// splitByOpenHole cuts an interval into the parts inside and outside the
+// well's open-hole intervals.
+func splitByOpenHole(w *schema.Well, iv schema.Interval) []wallSeg {
+	cuts := []schema.Length{iv.Top, iv.Bottom}
+	for _, o := range w.OpenHoles {
+		for _, z := range []schema.Length{o.Top, o.Bottom} {
+			if z > iv.Top && z < iv.Bottom {
+				cuts = append(cuts, z)
+			}
+		}
+	}
+	sort.Slice(cuts, func(i, j int) bool { return cuts[i] < cuts[j] })
+	var out []wallSeg
+	for i := 0; i+1 < len(cuts); i++ {
+		seg := schema.Interval{Top: cuts[i], Bottom: cuts[i+1]}
+		if !(seg.Bottom > seg.Top) {
+			continue
+		}
+		mid := (seg.Top + seg.Bottom) / 2
+		open := false
+		for _, o := range w.OpenHoles {
+			if o.Contains(mid) {
+				open = true
+			}
+		}
+		out = append(out, wallSeg{seg, open})
+	}
+	return out
+}
+
+// padInterval is where the concrete pad stands: on grade around a
+// stick-up, flush with the ground around a vault.
+func padInterval(s schema.Surface) (schema.Interval, bool) {
+	if s.Pad == nil || s.Pad.Thickness <= 0 {
+		return schema.Interval{}, false
+	}
+	if s.Kind == schema.FlushMount {
+		return schema.Interval{Top: 0, Bottom: s.Pad.Thickness}, true
+	}
+	return schema.Interval{Top: -s.Pad.Thickness, Bottom: 0}, true
+}
+
+// pad paints the concrete pad to the horizontal scale, cut with break
+// marks where it is wider than the column.
+func (p *painter) pad() []draw.Item {
+	s := p.l.w.Surface
+	iv, ok := padInterval(s)
+	if !ok {
+		return nil
+	}
+	y0, y1, vis := p.vis(iv.Top, iv.Bottom)
+	if !vis {
+		return nil
+	}
+	h := p.l.hz
+	col := p.l.cols.well
+	half := float64(s.Pad.Length) * 1000 / 2 * h.ppmm
+	limit := col.W/2 - 6
+	broken := half > limit
+	if broken {
+		half = limit
+	}
+	r := draw.Rect{X: h.cx - half, Y: y0, W: 2 * half, H: y1 - y0}
+	items := p.paint(materialSymbol(schema.Concrete), r, "pad")
+	items = append(items, box(r, ink, 0.5, draw.Color{}, ""))
+	if broken {
+		for _, x := range []float64{r.X, r.Right()} {
+			items = append(items, draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.6, Fill: draw.White}, Closed: true,
+				Points: []draw.Point{{X: x - 1.5, Y: y0 - 2}, {X: x + 1.5, Y: y0 + (y1-y0)*0.4}, {X: x - 1.5, Y: y0 + (y1-y0)*0.6}, {X: x + 1.5, Y: y1 + 2}}, Role: "pad-break"})
+		}
+	}
+	return items
+}
+
+// protective paints a stick-up's protective casing with its lid.
+func (p *painter) protective() []draw.Item {
+	pc := p.l.w.Surface.Protective
+	if pc == nil {
+		return nil
+	}
+	y0, y1, ok := p.vis(pc.Top, pc.Bottom)
+	if !ok {
+		return nil
+	}
+	h := p.l.hz
+	r := float64(pc.Diameter) / 2 * h.ppmm
+	wall := 2.0
+	look := lookOf(pc.Material)
+	if pc.Material == "" {
+		look = steel
+	}
+	p.use(pipeSymbol(look))
+	items := []draw.Item{
+		box(draw.Rect{X: h.cx - r, Y: y0, W: wall, H: y1 - y0}, ink, 0.3, wallFill(look), ""),
+		box(draw.Rect{X: h.cx + r - wall, Y: y0, W: wall, H: y1 - y0}, ink, 0.3, wallFill(look), ""),
+		box(draw.Rect{X: h.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, draw.Color{}, 0, draw.Color{}, "protective"),
+	}
+	if p.visible(pc.Top) {
+		items = append(items, box(draw.Rect{X: h.cx - r - 1.2, Y: y0 - 2.4, W: 2*r + 2.4, H: 2.4}, ink, 0.4, wallFill(look), "protective-lid"))
+	}
+	return items
+}
+
+// vault paints a flush-mount road box: walls from the ground to its
+// depth and a lid flush with the ground.
+func (p *painter) vault() []draw.Item {
+	v := p.l.w.Surface.Vault
+	if v == nil || p.l.w.Surface.Kind == schema.StickUp {
+		return nil
+	}
+	y0, y1, ok := p.vis(0, max(v.Depth, 0.01))
+	if !ok {
+		return nil
+	}
+	h := p.l.hz
+	r := float64(v.Diameter) / 2 * h.ppmm
+	p.use(pipeSymbol(steel))
+	return []draw.Item{
+		box(draw.Rect{X: h.cx - r + 2, Y: y0, W: 2*r - 4, H: y1 - y0}, draw.Color{}, 0, draw.White, ""),
+		box(draw.Rect{X: h.cx - r, Y: y0, W: 2, H: y1 - y0}, ink, 0.3, ink, ""),
+		box(draw.Rect{X: h.cx + r - 2, Y: y0, W: 2, H: y1 - y0}, ink, 0.3, ink, ""),
+		box(draw.Rect{X: h.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, draw.Color{}, 0, draw.Color{}, "vault"),
+		box(draw.Rect{X: h.cx - r - 1, Y: y0, W: 2*r + 2, H: 2}, ink, 0.3, ink, "vault-lid"),
+	}
+}
+
+// ground draws the ground line across the well column, broken where the
+// hole, pad or vault meets it, with short hatching below.
+func (p *painter) ground() []draw.Item {
+	if !p.visible(0) {
+		return nil
+	}
+	l := p.l
+	col := l.cols.well
+	y := p.y(0)
+	gap := float64(holeAt(l.w, 0.001)) / 2 * l.hz.ppmm
+	if v := l.w.Surface.Vault; v != nil {
+		gap = max(gap, float64(v.Diameter)/2*l.hz.ppmm)
+	}
+	if pc := l.w.Surface.Protective; pc != nil {
+		gap = max(gap, float64(pc.Diameter)/2*l.hz.ppmm)
+	}
+	if l.w.Surface.Pad != nil {
+		half := float64(l.w.Surface.Pad.Length) * 1000 / 2 * l.hz.ppmm
+		gap = max(gap, min(half, col.W/2-6))
+	}
+	xl, xr := l.hz.cx-gap, l.hz.cx+gap
+	items := []draw.Item{
+		line(col.X, y, xl, y, 1.1, ink, "ground"),
+		line(xr, y, col.Right(), y, 1.1, ink, "ground"),
+	}
+	for x := col.X + 2; x < col.Right()-2; x += 4 {
+		if x > xl-3 && x < xr {
+			continue
+		}
+		items = append(items, line(x, y+0.6, x+2.6, y+3.2, 0.4, ink, ""))
+	}
+	return items
+}
+
+// waterLevels marks each reading with an inverted triangle in the bore:
+// filled for a static level, open for first encountered, dashed for
+// pumping.
+func (p *painter) waterLevels() []draw.Item {
+	l := p.l
+	var items []draw.Item
+	x := l.hz.cx
+	if len(l.hz.strX) > 0 {
+		x = l.hz.strX[0]
+	}
+	for i, wl := range l.w.WaterLevels {
+		if !p.visible(wl.Depth) {
+			continue
+		}
+		y := p.y(wl.Depth)
+		xi := x + float64(i%3-1)*3.5 // readings close together stay apart
+		items = append(items, waterMark(xi, y, wl.Kind, "water:"+pathOr(wl.Path, "water_level", i))...)
+		p.use(waterSymbol(wl.Kind))
+	}
+	return items
+}
+
+func waterMark(x, y float64, kind schema.LevelKind, role string) []draw.Item {
+	st := draw.Style{Stroke: waterBlue, StrokeWidth: 0.6, Fill: waterBlue}
+	switch kind {
+	case schema.FirstEncountered:
+		st.Fill = draw.White
+	case schema.Pumping:
+		st.Fill = draw.White
+		st.Dash = []float64{0.8, 0.8}
+	}
+	return []draw.Item{
+		draw.Shape{Style: st, Closed: true, Points: []draw.Point{{X: x - 3, Y: y - 4.5}, {X: x + 3, Y: y - 4.5}, {X: x, Y: y}}, Role: role},
+		line(x-3.5, y, x+3.5, y, 0.6, waterBlue, ""),
+		line(x-2.2, y+1.3, x+2.2, y+1.3, 0.5, waterBlue, ""),
+		line(x-1, y+2.6, x+1, y+2.6, 0.5, waterBlue, ""),
+	}
+}
+
+func waterSymbol(kind schema.LevelKind) symbol {
+	label := map[schema.LevelKind]string{schema.FirstEncountered: "Water first encountered", schema.Pumping: "Pumping water level"}[kind]
+	if label == "" {
+		label = "Static water level"
+		kind = schema.Static
+	}
+	sw := func(r draw.Rect) []draw.Item { return waterMark(r.X+r.W/2, r.Y+r.H*0.6, kind, "") }
+	return symbol{key: "water:" + string(kind), label: label, order: 250, paint: sw, swatch: sw}
+}
