@@ -30,10 +30,6 @@ const quantitiesCaution = "Figures and checks support, and never replace, the re
 	"the governing local well code. Yields marked common practice or from memory are defaults: set them from the " +
 	"product sheets (--yields FILE); rule thresholds are defaults to be set to the local rules."
 
-// reconcileRuleIDs are the checks of placed amounts and tags that the
-// quantities report repeats under each well.
-var reconcileRuleIDs = map[string]bool{"PLACED-VOLUME-LOW": true, "PLACED-VOLUME-HIGH": true, "TAG-EXPECTED-TOP": true, "TAG-FINAL-TOP": true}
-
 // wellQuantities is one readable well's report and its reconciliation
 // findings.
 type wellQuantities struct {
@@ -92,12 +88,8 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 			code = exitInput
 			continue
 		}
-		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields)}
-		for _, fd := range rules.Check(w, nil) {
-			if reconcileRuleIDs[fd.Rule] {
-				wq.Findings = append(wq.Findings, fd)
-			}
-		}
+		// the checks of placed amounts and tags, with the same yields
+		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields), Findings: rules.CheckReconcile(w, nil, yields)}
 		for _, r := range wq.Report.Rows {
 			if r.Err != nil {
 				fmt.Fprintf(stderr, "%s: %v\n", f, r.Err)

@@ -5,6 +5,7 @@ package rules
 
 import (
 	"fmt"
+	"sort"
 
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/quantity"
@@ -15,9 +16,55 @@ const reconcileSources = "US EPA, RCRA Ground-Water Monitoring: Draft Technical 
 	"the volumes of filter pack and seal placed and explain any significant discrepancy; California DWR Bulletin " +
 	"74-90: check the depth of the top of the filter pack and verify its volume, to detect bridging"
 
-// quantities computes the well's quantities with the built-in yields; a
-// fill's own yield key overrides them.
-func quantities(p *Pass) *quantity.Report { return quantity.Compute(p.Well, quantity.DefaultYields()) }
+// ReconcileRules are the IDs of the reconciliation rules, sorted.
+var ReconcileRules = []string{"PLACED-VOLUME-HIGH", "PLACED-VOLUME-LOW", "TAG-EXPECTED-TOP", "TAG-FINAL-TOP"}
+
+// reconcileRun is the body of a reconciliation rule that needs the well's
+// quantities.
+type reconcileRun func(p *Pass, q *quantity.Report)
+
+// reconcileRuns maps a rule ID to its body, so that CheckReconcile can run
+// it with other yields.
+var reconcileRuns = map[string]reconcileRun{}
+
+// reconciling records a rule's body and makes its Run, which computes the
+// quantities with the built-in yields (a fill's own yield key overrides
+// them).
+func reconciling(id string, run reconcileRun) func(*Pass) {
+	reconcileRuns[id] = run
+	return func(p *Pass) { run(p, quantity.Compute(p.Well, nil)) }
+}
+
+// CheckReconcile runs only the reconciliation rules on a well, with the
+// quantities computed from the given yields (nil for the built-in ones),
+// the profile's thresholds (nil for the defaults) and the well's waivers.
+// The findings are sorted by line, then rule. It is Check for a report of
+// quantities made with a project's yields.
+func CheckReconcile(w *schema.Well, prof *Profile, y *quantity.Yields) []Finding {
+	if prof == nil {
+		prof = DefaultProfile()
+	}
+	var out []Finding
+	for _, id := range ReconcileRules {
+		r, ok := Lookup(id)
+		if !ok {
+			continue
+		}
+		rc := *r
+		if run, ok := reconcileRuns[id]; ok {
+			rc.Run = func(p *Pass) { run(p, quantity.Compute(p.Well, y)) }
+		}
+		runOne(&rc, w, prof, &out)
+	}
+	applyWaivers(w, out)
+	sort.SliceStable(out, func(i, j int) bool {
+		if out[i].Line != out[j].Line {
+			return out[i].Line < out[j].Line
+		}
+		return out[i].Rule < out[j].Rule
+	})
+	return out
+}
 
 // placedText says how much went in: "5 x 50-lb bag = 2.500 ft3 (18.70 gal)"
 // or "5.000 ft3 (37.40 gal)" for a recorded volume.

@@ -21,7 +21,7 @@ func init() {
 			Doc:    "largest accepted difference between a tag and the expected top",
 			Source: "common practice: 0.5 ft (0.15 m), the resolution of a weighted tape on a soft top",
 		}},
-		Run: runTagExpectedTop,
+		Run: reconciling("TAG-EXPECTED-TOP", runTagExpectedTop),
 	})
 	register(&Rule{
 		ID:    "TAG-FINAL-TOP",
@@ -40,10 +40,10 @@ func init() {
 	})
 }
 
-func runTagExpectedTop(p *Pass) {
+func runTagExpectedTop(p *Pass, q *quantity.Report) {
 	tol := p.Length("tolerance")
 	u := p.Well.Units
-	for _, r := range quantities(p).Rows {
+	for _, r := range q.Rows {
 		if r.Err != nil {
 			continue
 		}

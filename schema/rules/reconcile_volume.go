@@ -20,7 +20,7 @@ func init() {
 			Doc:    "lowest acceptable ratio of placed to calculated volume",
 			Source: "common practice: 80 %, to allow for yields quoted loosely and for compaction",
 		}},
-		Run: runPlacedVolumeLow,
+		Run: reconciling("PLACED-VOLUME-LOW", runPlacedVolumeLow),
 	})
 	register(&Rule{
 		ID:    "PLACED-VOLUME-HIGH",
@@ -36,13 +36,13 @@ func init() {
 			Doc:    "highest acceptable ratio of placed to calculated volume",
 			Source: "common practice: 150 %, since augered and mud-rotary holes commonly take more than their nominal size",
 		}},
-		Run: runPlacedVolumeHigh,
+		Run: reconciling("PLACED-VOLUME-HIGH", runPlacedVolumeHigh),
 	})
 }
 
-func runPlacedVolumeLow(p *Pass) {
+func runPlacedVolumeLow(p *Pass, q *quantity.Report) {
 	limit := p.Param("min_ratio")
-	for _, r := range quantities(p).Rows {
+	for _, r := range q.Rows {
 		if r.Ratio <= 0 || r.Ratio >= limit {
 			continue
 		}
@@ -53,9 +53,9 @@ func runPlacedVolumeLow(p *Pass) {
 	}
 }
 
-func runPlacedVolumeHigh(p *Pass) {
+func runPlacedVolumeHigh(p *Pass, q *quantity.Report) {
 	limit := p.Param("max_ratio")
-	for _, r := range quantities(p).Rows {
+	for _, r := range q.Rows {
 		if r.Ratio <= limit {
 			continue
 		}
