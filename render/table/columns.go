@@ -10,7 +10,8 @@ import (
 // text. A nil number with empty text is a blank cell.
 type Cell struct {
 	Num    *float64
-	Digits int // decimals shown; -1 = as few as represent the value exactly
+	Digits int  // decimals shown; -1 = as few as represent the value exactly
+	Fixed  bool // keep trailing zeros (a slot of 0.010 in)
 	Text   string
 }
 
@@ -21,6 +22,9 @@ func (c Cell) String() string {
 	}
 	if c.Digits < 0 {
 		return strconv.FormatFloat(*c.Num, 'f', -1, 64)
+	}
+	if c.Fixed {
+		return strconv.FormatFloat(*c.Num, 'f', c.Digits, 64)
 	}
 	return schema.TrimFloat(*c.Num, c.Digits)
 }
@@ -79,7 +83,7 @@ func (t *Table) Columns() []Column {
 			if slotUnit == "mm" {
 				d = 2
 			}
-			return Cell{Num: r.Slot, Digits: d}
+			return Cell{Num: r.Slot, Digits: d, Fixed: true}
 		}},
 		{"Filter pack", u, text(func(r Row) string { return r.Pack })},
 		{"Seal", u, text(func(r Row) string { return r.Seal })},

@@ -255,6 +255,9 @@ func fills(w *schema.Well, u schema.DepthUnit) (pack, seal, grout string) {
 			if mixed {
 				s += " " + string(f.Material)
 			}
+			if f.Within != "" {
+				s += " (in " + f.Within + ")"
+			}
 			parts = append(parts, s)
 		}
 		out[g] = strings.Join(parts, "; ")

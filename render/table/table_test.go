@@ -236,6 +236,9 @@ func TestTextColumns(t *testing.T) {
 	if r.Slot == nil || math.Abs(*r.Slot-0.5) > 1e-12 || r.SlotText != "0.5 mm" {
 		t.Errorf("slot %v %q", r.Slot, r.SlotText)
 	}
+	if c := (Cell{Num: r.Slot, Digits: 2, Fixed: true}); c.String() != "0.50" {
+		t.Errorf("slot cell %q", c.String())
+	}
 	if r.Pack != "9.4–14.5" || r.Seal != "8.4–9.4" || r.Grout != "0–8.4" {
 		t.Errorf("fills %q | %q | %q", r.Pack, r.Seal, r.Grout)
 	}

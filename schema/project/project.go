@@ -6,6 +6,7 @@
 package project
 
 import (
+	"os"
 	"path/filepath"
 
 	"github.com/tremie-dev/tremie/schema"
@@ -89,7 +90,12 @@ func (p *Project) Path(rel string) string {
 func (p *Project) ProfilePath() string { return p.Path(p.Profile) }
 
 // Default returns the project a directory without project.toml gets:
-// every default in force.
+// every default in force, the wells in its wells/ folder or, when it has
+// none, in the directory itself.
 func Default(dir string) *Project {
-	return &Project{Dir: dir, Wells: DefaultWells, Output: filepath.Join(dir, DefaultOutput), Keys: map[string]int{}}
+	wells := DefaultWells
+	if st, err := os.Stat(filepath.Join(dir, DefaultWells)); err != nil || !st.IsDir() {
+		wells = "."
+	}
+	return &Project{Dir: dir, Wells: wells, Output: filepath.Join(dir, DefaultOutput), Keys: map[string]int{}}
 }
