@@ -30,7 +30,7 @@ func sanitarySealParams() []Param {
 		out = append(out, Param{
 			Name: string(s.purpose), Kind: LengthParam,
 			Default: float64(schema.LengthFrom(s.ft, schema.Feet)), DefaultFt: s.ft,
-			Doc:    "minimum sanitary-seal depth for a " + string(s.purpose) + " well (usually set in [sanitary_seal])",
+			Doc:    "minimum sanitary-seal depth of " + string(s.purpose) + " wells, usually set as [sanitary_seal] " + string(s.purpose),
 			Source: s.source,
 		})
 	}

@@ -1,0 +1,102 @@
+package main
+
+import (
+	"flag"
+	"fmt"
+	"io"
+	"strings"
+
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+func init() {
+	register(&command{
+		name:    "rules",
+		summary: "list the rules tremie check applies, with sources and default thresholds",
+		run:     runRules,
+	})
+}
+
+func runRules(args []string, stdout, stderr io.Writer) int {
+	fset := flag.NewFlagSet("rules", flag.ContinueOnError)
+	fset.SetOutput(stderr)
+	fset.Usage = func() { fmt.Fprintln(stderr, "usage: tremie rules [RULE-ID...]") }
+	if err := fset.Parse(args); err != nil {
+		return exitUsage
+	}
+	list := rules.All()
+	if fset.NArg() > 0 {
+		list = nil
+		for _, id := range fset.Args() {
+			r, ok := rules.Lookup(strings.ToUpper(id))
+			if !ok {
+				fmt.Fprintf(stderr, "tremie rules: no rule %q (tremie rules lists them)\n", id)
+				return exitUsage
+			}
+			list = append(list, r)
+		}
+	}
+	var b strings.Builder
+	wrap(&b, "Rules of practice applied by tremie check. Thresholds are defaults, each with its source: "+
+		"set them to the governing local well code in a profile (tremie check --profile FILE; see schema/rules/PROFILE.md).", "")
+	wrap(&b, checkCaution, "")
+	for _, r := range list {
+		writeRule(&b, r)
+	}
+	if _, err := io.WriteString(stdout, b.String()); err != nil {
+		fmt.Fprintf(stderr, "tremie rules: %v\n", err)
+		return exitOutput
+	}
+	return exitOK
+}
+
+func writeRule(b *strings.Builder, r *rules.Rule) {
+	fmt.Fprintf(b, "\n%s  %s  %s\n", r.ID, r.Severity, r.Title)
+	wrap(b, r.Doc, "    ")
+	wrap(b, "source: "+r.Source, "    ")
+	for _, p := range r.Params {
+		wrap(b, fmt.Sprintf("%s = %s", p.Name, paramDefault(p)), "    param ")
+		wrap(b, p.Doc+"; source: "+p.Source, "          ")
+	}
+}
+
+// paramDefault writes a parameter's default as the two unit systems see
+// it: "2 ft (wells in ft), 0.6 m (wells in m)".
+func paramDefault(p rules.Param) string {
+	switch p.Kind {
+	case rules.LengthParam:
+		ft := p.DefaultFt
+		if ft == 0 {
+			ft = schema.Length(p.Default).Feet()
+		}
+		return fmt.Sprintf("%s ft (wells in ft), %s m (wells in m)", schema.TrimFloat(ft, 3), schema.TrimFloat(p.Default, 3))
+	case rules.DiameterParam:
+		in := p.DefaultFt
+		if in == 0 {
+			in = schema.Diameter(p.Default).Inches()
+		}
+		return fmt.Sprintf("%s in (wells in ft), %s mm (wells in m)", schema.TrimFloat(in, 3), schema.TrimFloat(p.Default, 1))
+	}
+	return schema.TrimFloat(p.Default, 3)
+}
+
+// wrap writes text in lines of at most 78 columns, the first prefixed
+// with lead and the rest indented to match.
+func wrap(b *strings.Builder, text, lead string) {
+	indent := strings.Repeat(" ", len(lead))
+	line := lead
+	empty := true
+	for _, word := range strings.Fields(text) {
+		if !empty && len(line)+1+len(word) > 78 {
+			b.WriteString(line + "\n")
+			line, empty = indent, true
+		}
+		if !empty {
+			line += " "
+		}
+		line += word
+		empty = false
+	}
+	b.WriteString(line + "\n")
+}
