@@ -92,7 +92,7 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields), Findings: rules.CheckReconcile(w, nil, yields)}
 		for _, r := range wq.Report.Rows {
 			if r.Err != nil {
-				fmt.Fprintf(stderr, "%s: %v\n", f, r.Err)
+				fmt.Fprintf(stderr, "%s:%d: %v\n", f, w.Line(r.Fill.Path), r.Err)
 				if code == exitOK {
 					code = exitFindings
 				}
@@ -251,7 +251,7 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 			mat += " (in " + f.Within + ")"
 		}
 		if row.Err != nil {
-			fmt.Fprintf(tw, "  %d\t%s\t%s\tcannot compute: %v\t\t\t\t\t\t\n", row.Index+1, mat, iv, row.Err)
+			fmt.Fprintf(tw, "  %d\t%s\t%s\t(error)\t-\t-\t-\t-\t-\t-\n", row.Index+1, mat, iv)
 			continue
 		}
 		yield, needed := "-", "-"
@@ -276,6 +276,9 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 	}
 	tw.Flush()
 	for _, row := range r.Rows {
+		if row.Err != nil {
+			fmt.Fprintf(w, "  fill %d cannot be computed: %v\n", row.Index+1, row.Err)
+		}
 		for _, tc := range row.Tags {
 			if tc.Err != nil {
 				continue
@@ -335,6 +338,10 @@ func yieldNotes(r *quantity.Report) []string {
 
 func writeTotalsText(w io.Writer, totals []*total, contingency float64) {
 	fmt.Fprintf(w, "Project totals (bags to order include a %s %% contingency)\n", schema.TrimFloat(contingency, 2))
+	if len(totals) == 0 {
+		fmt.Fprintln(w, "  no interval could be computed")
+		return
+	}
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	fmt.Fprintln(tw, "  material\tyield\tintervals\tcalculated\tbags needed\tbags to order\tbags placed")
 	for _, t := range totals {

@@ -261,3 +261,24 @@ func TestQuantitiesUsage(t *testing.T) {
 		}
 	}
 }
+
+// An interval whose geometry fails (a fill below the recorded hole) is
+// reported with its file and line, exit 1, and the rest is still
+// computed.
+func TestQuantitiesGeometryError(t *testing.T) {
+	dir := t.TempDir()
+	body := strings.Replace(wellTOML, "[[fill]]\ntop = 20.0\nbottom = 30.0", "[[fill]]\ntop = 20.0\nbottom = 35.0", 1)
+	body = strings.Replace(body, "total_depth = 30.0", "total_depth = 35.0", 1)
+	p := writeFile(t, dir, "G.toml", body)
+	code, out, errs := runQ(p)
+	if code != exitFindings {
+		t.Errorf("exit %d, want %d", code, exitFindings)
+	}
+	// the pack is the first [[fill]], on line 32 of wellTOML
+	if !strings.Contains(errs, "G.toml:32: fill[0]: at 30–35 ft: no borehole section") {
+		t.Errorf("stderr: %s", errs)
+	}
+	if !strings.Contains(out, "bentonite-chips") || !strings.Contains(out, "cannot be computed") {
+		t.Errorf("output:\n%s", out)
+	}
+}

@@ -26,6 +26,7 @@ type CrossSection struct {
 	Depth schema.Length
 	Hole  schema.Diameter // borehole diameter; 0 if no borehole section covers the depth
 	Pipes []Pipe          // casings first (outermost first), then string sections
+	units schema.Units    // the well's, for messages
 }
 
 // At returns the cross-section at depth z. Boundaries belong to neither
@@ -33,7 +34,7 @@ type CrossSection struct {
 // boundaries; At itself treats a pipe as present when top <= z < bottom,
 // and the hole at z is the deepest borehole section that contains it.
 func At(w *schema.Well, z schema.Length) CrossSection {
-	cs := CrossSection{Depth: z}
+	cs := CrossSection{Depth: z, units: w.Units}
 	if b, ok := w.BoreholeAt(z); ok {
 		cs.Hole = b.Diameter
 	}
@@ -98,7 +99,8 @@ func RegionOf(f schema.Fill) Region { return Region{Within: f.Within} }
 // Area returns the open area of a region in the cross-section, in square
 // metres: the borehole (or the named casing's bore) less the outside areas
 // of the pipes standing directly in it. It fails when the region is absent
-// at this depth or what stands in it is wider than it.
+// at this depth or what stands in it is wider than it; the error does not
+// repeat the depth, which the caller names.
 func (cs CrossSection) Area(r Region) (float64, error) {
 	outer := cs.Hole
 	what := "the borehole"
@@ -113,13 +115,13 @@ func (cs CrossSection) Area(r Region) (float64, error) {
 			}
 		}
 		if in == -2 {
-			return 0, fmt.Errorf("casing %q does not reach depth %.3f m", r.Within, float64(cs.Depth))
+			return 0, fmt.Errorf("casing %q is not there", r.Within)
 		}
 		if outer <= 0 {
 			return 0, fmt.Errorf("casing %q has no inside diameter", r.Within)
 		}
 	} else if outer <= 0 {
-		return 0, fmt.Errorf("no borehole section covers depth %.3f m", float64(cs.Depth))
+		return 0, fmt.Errorf("no borehole section covers it")
 	}
 	area := circle(outer)
 	var inside []string
@@ -131,10 +133,10 @@ func (cs CrossSection) Area(r Region) (float64, error) {
 			return 0, fmt.Errorf("%s has no outside diameter", p.Path)
 		}
 		area -= circle(p.OD)
-		inside = append(inside, p.Path)
+		inside = append(inside, p.Name)
 	}
 	if area < -1e-12 {
-		return 0, fmt.Errorf("at depth %.3f m the pipes in %s (%s) take more than its %.1f mm bore", float64(cs.Depth), what, strings.Join(inside, ", "), float64(outer))
+		return 0, fmt.Errorf("the pipes in %s (%s) take more than its %s bore", what, strings.Join(inside, ", "), cs.units.FormatDiameter(outer))
 	}
 	return math.Max(area, 0), nil
 }

@@ -56,7 +56,7 @@ func Slices(w *schema.Well, r Region, top, bottom schema.Length) ([]Slice, error
 		if top == bottom {
 			return nil, nil
 		}
-		return nil, fmt.Errorf("interval top %.3f m is below its bottom %.3f m", float64(top), float64(bottom))
+		return nil, fmt.Errorf("top %s is below bottom %s", w.Units.FormatDepth(top), w.Units.FormatDepth(bottom))
 	}
 	zs := boundaries(w, top, bottom)
 	out := make([]Slice, 0, len(zs)-1)
@@ -64,7 +64,7 @@ func Slices(w *schema.Well, r Region, top, bottom schema.Length) ([]Slice, error
 		mid := (zs[i] + zs[i+1]) / 2
 		a, err := At(w, mid).Area(r)
 		if err != nil {
-			return nil, err
+			return nil, fmt.Errorf("at %s: %w", w.Units.FormatInterval(zs[i], zs[i+1]), err)
 		}
 		out = append(out, Slice{Interval: schema.Interval{Top: zs[i], Bottom: zs[i+1]}, Area: a})
 	}
@@ -109,7 +109,7 @@ func RiseTop(w *schema.Well, f schema.Fill, v schema.Volume) (top schema.Length,
 		if aerr != nil {
 			if hi >= f.Top {
 				// within the interval itself the geometry must hold
-				return lo, false, aerr
+				return lo, false, fmt.Errorf("at %s: %w", w.Units.FormatInterval(hi, lo), aerr)
 			}
 			return lo, false, nil // above the interval: the region ends here
 		}
