@@ -3,6 +3,7 @@ package quantity
 import (
 	"testing"
 
+	"github.com/tremie-dev/tremie/cmd/tremie/demo"
 	"github.com/tremie-dev/tremie/schema"
 )
 
@@ -126,8 +127,17 @@ func TestFormat(t *testing.T) {
 	}
 }
 
+// BenchmarkCompute: one typical well, the demo's MW-1 (five fills, two
+// tags, a riser and a screen in an 8.25-in hole).
 func BenchmarkCompute(b *testing.B) {
-	w := typical()
+	data, err := demo.FS.ReadFile("wells/MW-1.toml")
+	if err != nil {
+		b.Fatal(err)
+	}
+	w, err := schema.Load("MW-1.toml", data)
+	if err != nil {
+		b.Fatal(err)
+	}
 	y := DefaultYields()
 	b.ReportAllocs()
 	for b.Loop() {

@@ -40,7 +40,7 @@ func At(w *schema.Well, z schema.Length) CrossSection {
 	}
 	for i, c := range w.Casings {
 		if c.Top <= z && z < c.Bottom {
-			cs.Pipes = append(cs.Pipes, Pipe{Name: casingName(c), Path: pathOr(c.Path, fmt.Sprintf("casing[%d]", i)), Casing: true, OD: c.Pipe.OD, ID: c.Pipe.ID, In: -1})
+			cs.Pipes = append(cs.Pipes, Pipe{Name: casingName(c), Path: casingPath(c, i), Casing: true, OD: c.Pipe.OD, ID: c.Pipe.ID, In: -1})
 		}
 	}
 	// Outermost casing first, so that each casing's container is found
@@ -52,7 +52,7 @@ func At(w *schema.Well, z schema.Length) CrossSection {
 	for si, s := range w.Strings {
 		for ki, sec := range s.Sections {
 			if sec.Top <= z && z < sec.Bottom {
-				p := Pipe{Name: stringName(s) + " " + string(sec.Kind), Path: pathOr(sec.Path, fmt.Sprintf("string[%d].section[%d]", si, ki)), OD: sec.Pipe.OD, ID: sec.Pipe.ID}
+				p := Pipe{Name: stringName(s) + " " + string(sec.Kind), Path: sectionPath(sec, si, ki), OD: sec.Pipe.OD, ID: sec.Pipe.ID}
 				p.In = container(cs.Pipes, p.OD)
 				cs.Pipes = append(cs.Pipes, p)
 				break // a string has one section at a depth
@@ -166,4 +166,20 @@ func pathOr(p, def string) string {
 		return p
 	}
 	return def
+}
+
+// casingPath and sectionPath are the key paths, made up only for wells
+// built in code (the loader sets Path).
+func casingPath(c schema.Casing, i int) string {
+	if c.Path != "" {
+		return c.Path
+	}
+	return fmt.Sprintf("casing[%d]", i)
+}
+
+func sectionPath(sec schema.Section, si, ki int) string {
+	if sec.Path != "" {
+		return sec.Path
+	}
+	return fmt.Sprintf("string[%d].section[%d]", si, ki)
 }
