@@ -44,8 +44,9 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 	format := fset.String("format", "text", "output format: text, json or csv")
 	contingency := fset.Float64("contingency", 0, "percentage added to the project totals when ordering")
 	yieldsFile := fset.String("yields", "", "TOML file with a [yields] table overriding the default yields")
+	profileFile := fset.String("profile", "", "rule profile TOML setting the reconciliation thresholds")
 	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie quantities [--format text|json|csv] [--contingency PCT] [--yields FILE] FILE|DIR...")
+		fmt.Fprintln(stderr, "usage: tremie quantities [--format text|json|csv] [--contingency PCT] [--yields FILE] [--profile FILE] FILE|DIR...")
 		fset.PrintDefaults()
 	}
 	paths, err := parseInterspersed(fset, args)
@@ -73,6 +74,13 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 			return exitInput
 		}
 	}
+	var prof *rules.Profile
+	if *profileFile != "" {
+		if prof, err = rules.LoadProfile(*profileFile); err != nil {
+			fmt.Fprintf(stderr, "tremie quantities: %v\n", err)
+			return exitInput
+		}
+	}
 
 	code := exitOK
 	files, errs := schema.FindWells(paths)
@@ -89,7 +97,7 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 			continue
 		}
 		// the checks of placed amounts and tags, with the same yields
-		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields), Findings: rules.CheckReconcile(w, nil, yields)}
+		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields), Findings: rules.CheckReconcile(w, prof, yields)}
 		for _, r := range wq.Report.Rows {
 			if r.Err != nil {
 				fmt.Fprintf(stderr, "%s:%d: %v\n", f, w.Line(r.Fill.Path), r.Err)

@@ -282,3 +282,20 @@ func TestQuantitiesGeometryError(t *testing.T) {
 		t.Errorf("output:\n%s", out)
 	}
 }
+
+// A profile sets the reconciliation thresholds: with min_ratio 0.5 the
+// MW-3 pack (56 %) is no longer low; its tags still are.
+func TestQuantitiesProfile(t *testing.T) {
+	dir := t.TempDir()
+	prof := writeFile(t, dir, "site.profile.toml", "[profile]\nname = \"lenient\"\nunits = \"ft\"\n\n[rule.PLACED-VOLUME-LOW]\nmin_ratio = 0.5\n")
+	code, out, errs := runQ("--profile", prof, filepath.Join("demo", "wells", "MW-3.toml"))
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	if strings.Contains(out, "PLACED-VOLUME-LOW") || !strings.Contains(out, "TAG-EXPECTED-TOP") {
+		t.Errorf("output:\n%s", out)
+	}
+	if code, _, _ := runQ("--profile", filepath.Join(dir, "none.toml"), dir); code != exitInput {
+		t.Errorf("missing profile: exit %d", code)
+	}
+}
