@@ -59,7 +59,7 @@ func runAnnularSpace(p *Pass) {
 				if !cs.HasHole {
 					continue
 				}
-				outerD, outer, inner = cs.Hole, "a "+p.Dia(cs.Hole)+" hole", cs.Outermost()
+				outerD, outer, inner = cs.Hole, "the "+p.Dia(cs.Hole)+" hole", cs.Outermost()
 			} else {
 				c, in, ok := cs.Inside(name)
 				if !ok {
@@ -83,7 +83,7 @@ func runAnnularSpace(p *Pass) {
 		f := faults[k]
 		var ods []string
 		for _, q := range f.inner {
-			ods = append(ods, q.Label()+" (OD "+p.Dia(q.OD)+")")
+			ods = append(ods, q.Owner()+" (OD "+p.Dia(q.OD)+")")
 		}
 		p.Reportf(f.fill.Path, depths(iv), "annular space for %s at %s is %s: %s in %s; at least %s is needed",
 			material(f.fill.Material), p.span(iv), p.Dia(f.space), strings.Join(ods, " and "), f.outer, p.Dia(minSpace))

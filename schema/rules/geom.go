@@ -203,6 +203,15 @@ func (p pipe) Label() string {
 	return "string \"" + p.String.Name + "\" " + string(p.Section.Kind)
 }
 
+// Owner names the casing or string the pipe belongs to, without the
+// section kind: `string "main"`.
+func (p pipe) Owner() string {
+	if p.Casing != nil {
+		return p.Label()
+	}
+	return "string \"" + p.String.Name + "\""
+}
+
 // pipes lists every casing and string section.
 func pipes(w *schema.Well) []pipe {
 	var out []pipe

@@ -464,3 +464,15 @@ func FuzzCheck(f *testing.F) {
 		}
 	})
 }
+
+// BenchmarkCheck runs every rule on the nested-well fixture, the
+// busiest geometry (two strings, six fills).
+func BenchmarkCheck(b *testing.B) {
+	w, err := schema.LoadFile(filepath.Join("testdata", "NESTED-SEAL", "pass.toml"))
+	if err != nil {
+		b.Fatal(err)
+	}
+	for b.Loop() {
+		Check(w, nil)
+	}
+}
