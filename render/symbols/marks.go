@@ -1,0 +1,183 @@
+package symbols
+
+import (
+	"math"
+
+	"github.com/tremie-dev/tremie/render/draw"
+)
+
+// A pen collects the marks of a pattern as drawing primitives, dropping
+// what falls outside the target rectangle and cutting lines to it, so the
+// backends see few items that cross the edge.
+type pen struct {
+	r     draw.Rect
+	items []draw.Item
+}
+
+const (
+	markWidth = 0.4 // points: the usual pattern stroke
+	boldWidth = 0.7
+)
+
+func stroke(w float64) draw.Style { return draw.Style{Stroke: ink, StrokeWidth: w} }
+
+// line draws a segment, cut to the rectangle (Liang–Barsky).
+func (p *pen) line(x0, y0, x1, y1, w float64) {
+	p.lineStyled(x0, y0, x1, y1, stroke(w))
+}
+
+func (p *pen) lineStyled(x0, y0, x1, y1 float64, st draw.Style) {
+	a, b, ok := clipSegment(p.r, x0, y0, x1, y1)
+	if !ok {
+		return
+	}
+	p.items = append(p.items, draw.Shape{Style: st, Points: []draw.Point{a, b}})
+}
+
+// dot draws a filled disc.
+func (p *pen) dot(x, y, r float64) {
+	if !p.touches(x-r, y-r, 2*r, 2*r) {
+		return
+	}
+	p.items = append(p.items, draw.Circle{Style: draw.Style{Fill: ink}, Center: draw.Point{X: x, Y: y}, R: r})
+}
+
+// ring draws a circle outline.
+func (p *pen) ring(x, y, r, w float64) {
+	if !p.touches(x-r-w, y-r-w, 2*(r+w), 2*(r+w)) {
+		return
+	}
+	p.items = append(p.items, draw.Circle{Style: stroke(w), Center: draw.Point{X: x, Y: y}, R: r})
+}
+
+// poly draws a closed polygon, filled with ink or outlined.
+func (p *pen) poly(filled bool, pts ...draw.Point) {
+	minX, minY, maxX, maxY := math.Inf(1), math.Inf(1), math.Inf(-1), math.Inf(-1)
+	for _, q := range pts {
+		minX, minY = math.Min(minX, q.X), math.Min(minY, q.Y)
+		maxX, maxY = math.Max(maxX, q.X), math.Max(maxY, q.Y)
+	}
+	if !p.touches(minX-1, minY-1, maxX-minX+2, maxY-minY+2) {
+		return
+	}
+	st := stroke(markWidth)
+	if filled {
+		st = draw.Style{Fill: ink}
+	}
+	p.items = append(p.items, draw.Shape{Style: st, Points: pts, Closed: true})
+}
+
+// polyline draws an open polyline, cut to the rectangle piece by piece.
+func (p *pen) polyline(w float64, pts ...draw.Point) {
+	for i := 1; i < len(pts); i++ {
+		p.line(pts[i-1].X, pts[i-1].Y, pts[i].X, pts[i].Y, w)
+	}
+}
+
+func (p *pen) touches(x, y, w, h float64) bool {
+	return p.r.Intersects(draw.Rect{X: x, Y: y, W: w, H: h})
+}
+
+// clipSegment cuts a segment to r (Liang–Barsky); ok is false when none
+// of it lies inside.
+func clipSegment(r draw.Rect, x0, y0, x1, y1 float64) (a, b draw.Point, ok bool) {
+	dx, dy := x1-x0, y1-y0
+	t0, t1 := 0.0, 1.0
+	for _, e := range [4][2]float64{
+		{-dx, x0 - r.X}, {dx, r.Right() - x0},
+		{-dy, y0 - r.Y}, {dy, r.Bottom() - y0},
+	} {
+		pp, q := e[0], e[1]
+		if pp == 0 {
+			if q < 0 {
+				return a, b, false
+			}
+			continue
+		}
+		t := q / pp
+		if pp < 0 {
+			if t > t1 {
+				return a, b, false
+			}
+			t0 = math.Max(t0, t)
+		} else {
+			if t < t0 {
+				return a, b, false
+			}
+			t1 = math.Min(t1, t)
+		}
+	}
+	if t1-t0 < 1e-9 {
+		return a, b, false
+	}
+	return draw.Point{X: x0 + t0*dx, Y: y0 + t0*dy}, draw.Point{X: x0 + t1*dx, Y: y0 + t1*dy}, true
+}
+
+// tiles calls fn for every cell of a w × h grid fixed to the page origin
+// that may put marks in r; i and j number the cell's column and row, so a
+// motif can stagger odd rows or vary by cell, the same on every sheet.
+// margin is how far (points) a cell's marks reach beyond the cell.
+func tiles(r draw.Rect, w, h, margin float64, fn func(x, y float64, i, j int)) {
+	i0 := int(math.Floor((r.X - margin) / w))
+	i1 := int(math.Floor((r.Right() + margin) / w))
+	j0 := int(math.Floor((r.Y - margin) / h))
+	j1 := int(math.Floor((r.Bottom() + margin) / h))
+	for j := j0; j <= j1; j++ {
+		for i := i0; i <= i1; i++ {
+			fn(float64(i)*w, float64(j)*h, i, j)
+		}
+	}
+}
+
+// rows calls fn for every row of height h, fixed to the page origin, that
+// meets r: for motifs that run the full width.
+func rows(r draw.Rect, h float64, fn func(y float64)) {
+	for j := int(math.Floor(r.Y / h)); float64(j)*h <= r.Bottom(); j++ {
+		fn(float64(j) * h)
+	}
+}
+
+// stagger is half a cell for odd rows: brick-like offsets.
+func stagger(j int, w float64) float64 {
+	if j&1 != 0 {
+		return w / 2
+	}
+	return 0
+}
+
+// hatch draws parallel lines at angle degrees (counter-clockwise from the
+// x axis, as seen on the page) spaced apart, on a family of lines fixed
+// to the page origin. dash, if set, dashes them.
+func (p *pen) hatch(angle, spacing, w float64, dash []float64) {
+	a := angle * math.Pi / 180
+	// Direction on the page (y down, so counter-clockwise is -y).
+	dx, dy := math.Cos(a), -math.Sin(a)
+	nx, ny := -dy, dx // unit normal
+	// Range of offsets n·q over the rectangle's corners.
+	lo, hi := math.Inf(1), math.Inf(-1)
+	for _, c := range [4]draw.Point{{X: p.r.X, Y: p.r.Y}, {X: p.r.Right(), Y: p.r.Y}, {X: p.r.X, Y: p.r.Bottom()}, {X: p.r.Right(), Y: p.r.Bottom()}} {
+		o := nx*c.X + ny*c.Y
+		lo, hi = math.Min(lo, o), math.Max(hi, o)
+	}
+	reach := math.Hypot(p.r.W, p.r.H) + 1
+	st := stroke(w)
+	st.Dash = dash
+	for k := math.Ceil(lo / spacing); k*spacing <= hi; k++ {
+		o := k * spacing
+		// The point of the line nearest the rectangle's centre.
+		cx, cy := p.r.X+p.r.W/2, p.r.Y+p.r.H/2
+		t := o - (nx*cx + ny*cy)
+		px, py := cx+nx*t, cy+ny*t
+		p.lineStyled(px-dx*reach, py-dy*reach, px+dx*reach, py+dy*reach, st)
+	}
+}
+
+// hash gives a small deterministic pseudo-random value in [0, 1) for a
+// cell, for motifs that should not look machine-regular.
+func hash(i, j, salt int) float64 {
+	h := uint32(i)*73856093 ^ uint32(j)*19349663 ^ uint32(salt)*83492791
+	h ^= h >> 13
+	h *= 0x5bd1e995
+	h ^= h >> 15
+	return float64(h%1000) / 1000
+}

@@ -1,0 +1,81 @@
+package symbols
+
+import (
+	"math"
+
+	"github.com/tremie-dev/tremie/render/draw"
+)
+
+// Kind is what a symbol depicts; the legend groups by it.
+type Kind int
+
+const (
+	Lithology Kind = iota // a soil or rock class
+	Material              // an annular fill material
+	WellPart              // a drawn part of the well
+)
+
+func (k Kind) String() string {
+	switch k {
+	case Lithology:
+		return "lithology"
+	case Material:
+		return "material"
+	default:
+		return "well part"
+	}
+}
+
+// Symbol is one entry of the table: how a class is painted and named.
+type Symbol struct {
+	ID   string // stable key, e.g. "fill:filter-pack", "soil:SP", "rock:shale"; the legend deduplicates on it
+	Name string // legend words, e.g. "Filter pack"
+	Code string // the ASTM D2487 group symbol for a soil, else ""
+	Kind Kind
+	Fill draw.Color // ground colour under the marks; zero for a part drawn as marks alone
+
+	marks  func(p *pen)                  // the pattern, laid on the page grid
+	paint  func(r draw.Rect) []draw.Item // overrides the ground+marks painting (dual soils)
+	swatch func(r draw.Rect) []draw.Item // overrides the legend swatch (well parts)
+}
+
+// Paint fills r with the symbol: the ground colour, then the marks,
+// clipped exactly to r. The marks sit on a grid fixed to the page, so
+// touching rectangles of one symbol join seamlessly.
+func (s Symbol) Paint(r draw.Rect) []draw.Item {
+	if !(r.W > 0 && r.H > 0) || math.IsInf(r.W, 0) || math.IsInf(r.H, 0) {
+		return nil
+	}
+	if s.paint != nil {
+		return s.paint(r)
+	}
+	var items []draw.Item
+	if !s.Fill.None() {
+		items = append(items, draw.Box{Rect: r, Style: draw.Style{Fill: s.Fill}, Role: "symbol " + s.ID})
+	}
+	if s.marks != nil {
+		p := &pen{r: r}
+		s.marks(p)
+		if len(p.items) > 0 {
+			items = append(items, draw.Clip{Rect: r, Items: p.items})
+		}
+	}
+	return items
+}
+
+// Swatch is the symbol as the legend shows it in r: the pattern in a thin
+// frame, or for a well part a small picture of the part.
+func (s Symbol) Swatch(r draw.Rect) []draw.Item {
+	if !(r.W > 0 && r.H > 0) {
+		return nil
+	}
+	if s.swatch != nil {
+		return s.swatch(r)
+	}
+	items := s.Paint(r)
+	return append(items, frame(r))
+}
+
+func frame(r draw.Rect) draw.Item {
+	return draw.Box{Rect: r, Style: draw.Style{Stroke: frameInk, StrokeWidth: 0.5}, Role: "swatch frame"}
+}
