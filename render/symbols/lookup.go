@@ -103,16 +103,16 @@ func MustPart(id string) Symbol {
 	return s
 }
 
-// All lists every symbol of the table in legend order: soils, rocks,
-// materials, well parts, then the two fallbacks. Dual soils are made on
-// demand and not listed.
+// All lists every symbol of the table in legend order: soils, rocks and
+// the unclassified fallback, materials and their fallback, well parts.
+// Dual soils are made on demand and not listed.
 func All() []Symbol {
 	var out []Symbol
 	out = append(out, soilSymbols...)
-	out = append(out, rockSymbols[:len(rockSymbols)-1]...)
+	out = append(out, rockSymbols...)
 	out = append(out, materialSymbols...)
-	out = append(out, partSymbols...)
-	return append(out, unclassifiedRow, unknownMaterial)
+	out = append(out, unknownMaterial)
+	return append(out, partSymbols...)
 }
 
 // ByID returns a symbol by its ID, including dual soils ("soil:SP-SM").

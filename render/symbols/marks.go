@@ -147,28 +147,42 @@ func stagger(j int, w float64) float64 {
 
 // hatch draws parallel lines at angle degrees (counter-clockwise from the
 // x axis, as seen on the page) spaced apart, on a family of lines fixed
-// to the page origin. dash, if set, dashes them.
+// to the page origin. dash, if set ({on, off} in points), dashes them
+// with the dashes also fixed to the page, so they too run on across
+// touching rectangles.
 func (p *pen) hatch(angle, spacing, w float64, dash []float64) {
 	a := angle * math.Pi / 180
 	// Direction on the page (y down, so counter-clockwise is -y).
 	dx, dy := math.Cos(a), -math.Sin(a)
 	nx, ny := -dy, dx // unit normal
-	// Range of offsets n·q over the rectangle's corners.
+	corners := [4]draw.Point{{X: p.r.X, Y: p.r.Y}, {X: p.r.Right(), Y: p.r.Y}, {X: p.r.X, Y: p.r.Bottom()}, {X: p.r.Right(), Y: p.r.Bottom()}}
+	// Ranges over the rectangle of the offset across the lines and of
+	// the position along them.
 	lo, hi := math.Inf(1), math.Inf(-1)
-	for _, c := range [4]draw.Point{{X: p.r.X, Y: p.r.Y}, {X: p.r.Right(), Y: p.r.Y}, {X: p.r.X, Y: p.r.Bottom()}, {X: p.r.Right(), Y: p.r.Bottom()}} {
+	tlo, thi := math.Inf(1), math.Inf(-1)
+	for _, c := range corners {
 		o := nx*c.X + ny*c.Y
 		lo, hi = math.Min(lo, o), math.Max(hi, o)
+		t := dx*c.X + dy*c.Y
+		tlo, thi = math.Min(tlo, t), math.Max(thi, t)
 	}
-	reach := math.Hypot(p.r.W, p.r.H) + 1
 	st := stroke(w)
-	st.Dash = dash
 	for k := math.Ceil(lo / spacing); k*spacing <= hi; k++ {
 		o := k * spacing
-		// The point of the line nearest the rectangle's centre.
-		cx, cy := p.r.X+p.r.W/2, p.r.Y+p.r.H/2
-		t := o - (nx*cx + ny*cy)
-		px, py := cx+nx*t, cy+ny*t
-		p.lineStyled(px-dx*reach, py-dy*reach, px+dx*reach, py+dy*reach, st)
+		// Points on the line are (nx, ny)·o + (dx, dy)·t.
+		at := func(t float64) (float64, float64) { return nx*o + dx*t, ny*o + dy*t }
+		if len(dash) != 2 {
+			x0, y0 := at(tlo - 1)
+			x1, y1 := at(thi + 1)
+			p.lineStyled(x0, y0, x1, y1, st)
+			continue
+		}
+		period := dash[0] + dash[1]
+		for t := math.Floor(tlo/period) * period; t <= thi; t += period {
+			x0, y0 := at(t)
+			x1, y1 := at(t + dash[0])
+			p.lineStyled(x0, y0, x1, y1, st)
+		}
 	}
 }
 

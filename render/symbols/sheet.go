@@ -24,10 +24,16 @@ func SymbolSheet(width, height float64) []*draw.Page {
 		page.Add(draw.Text{At: draw.Point{X: margin, Y: margin}, S: fmt.Sprintf("tremie symbol set — sheet %d", len(pages)), Size: 12, Font: draw.Bold, Color: draw.Black})
 		y, col = margin+16, 0
 	}
-	list := All()
-	for _, code := range SheetExamples {
-		if s, ok := ForUSCS(code); ok {
-			list = append(list, s)
+	// Dual soils follow the single groups.
+	var list []Symbol
+	for _, s := range All() {
+		list = append(list, s)
+		if s.ID == soilSymbols[len(soilSymbols)-1].ID {
+			for _, code := range SheetExamples {
+				if d, ok := ForUSCS(code); ok {
+					list = append(list, d)
+				}
+			}
 		}
 	}
 	newPage()

@@ -30,7 +30,7 @@ var materialSymbols = []Symbol{
 }
 
 // unknownMaterial stands in for a material the table does not know.
-var unknownMaterial = Symbol{ID: "fill:unknown", Name: "Fill, material not recognised", Kind: Material, Fill: groundUnknown, marks: unclassified}
+var unknownMaterial = Symbol{ID: "fill:unknown", Name: "Fill, material not recognised", Kind: Material, Fill: groundUnknown, marks: unrecognisedFill}
 
 // Soils: the ASTM D2487 groups with their group names.
 var soilSymbols = []Symbol{
@@ -430,3 +430,6 @@ func madeGround(p *pen) {
 
 // unclassified: sparse dashed diagonals, a pattern that claims nothing.
 func unclassified(p *pen) { p.hatch(135, 5, markWidth, []float64{2, 2}) }
+
+// unrecognisedFill: the same, leaning the other way, for a fill material.
+func unrecognisedFill(p *pen) { p.hatch(45, 5, markWidth, []float64{2, 2}) }
