@@ -59,7 +59,7 @@ func (p *painter) items(items []draw.Item, clip *draw.Rect, prefix string) {
 				continue
 			}
 			r := normRect(it.Rect)
-			p.path(rectPath(p.rect(r)), it.Style, clip)
+			p.path(rectPath(p.rect(r)), it.Style, clip, true)
 		case draw.Shape:
 			if len(it.Points) < 2 {
 				continue
@@ -84,7 +84,7 @@ func (p *painter) items(items []draw.Item, clip *draw.Rect, prefix string) {
 			if it.Closed {
 				cp.Close()
 			}
-			p.path(cp, it.Style, clip)
+			p.path(cp, it.Style, clip, it.Closed || len(it.Points) > 2)
 		case draw.Circle:
 			if !finite(it.Center.X, it.Center.Y, it.R) {
 				p.fail(path, "circle %q is not finite", it.Role)
@@ -94,7 +94,7 @@ func (p *painter) items(items []draw.Item, clip *draw.Rect, prefix string) {
 				continue
 			}
 			c := p.pos(it.Center.X, it.Center.Y)
-			p.path(canvas.Circle(it.R*mmPerPt).Translate(c.X, c.Y), it.Style, clip)
+			p.path(canvas.Circle(it.R*mmPerPt).Translate(c.X, c.Y), it.Style, clip, false)
 		case draw.Text:
 			if !finite(it.At.X, it.At.Y, it.Size, it.Rotate) {
 				p.fail(path, "text %q is not finite", it.Role)
@@ -145,8 +145,9 @@ func rectPath(r canvas.Rect) *canvas.Path {
 }
 
 // path draws a filled and/or stroked outline. An open shape with a fill is
-// filled as if closed, as SVG and PDF both do.
-func (p *painter) path(cp *canvas.Path, s draw.Style, clip *draw.Rect) {
+// filled as if closed, as SVG and PDF both do. joins says the outline has
+// corners, where a miter reaches further than half the stroke width.
+func (p *painter) path(cp *canvas.Path, s draw.Style, clip *draw.Rect, joins bool) {
 	fill := !s.Fill.None()
 	stroke := !s.Stroke.None()
 	if !fill && !stroke {
@@ -172,10 +173,14 @@ func (p *painter) path(cp *canvas.Path, s draw.Style, clip *draw.Rect) {
 	}
 
 	cr := p.rect(*clip)
-	// A miter can reach several half-widths past a corner (limit 4).
+	// A stroke reaches half its width past the outline, and a miter up to
+	// its limit (4) times that past a corner.
 	reach := 0.0
 	if stroke {
-		reach = 2 * st.StrokeWidth
+		reach = st.StrokeWidth / 2
+		if joins {
+			reach = 2 * st.StrokeWidth
+		}
 	}
 	b := cp.FastBounds().Expand(reach)
 	switch {
