@@ -129,8 +129,43 @@ func renderWell(path string, opts renderOptions) (renderResult, error) {
 			}
 			res.Outputs = append(res.Outputs, dst)
 		}
+		if f != "pdf" {
+			removeStaleSheets(opts.outDir, base, f, len(files))
+		}
 	}
 	return res, nil
+}
+
+// removeStaleSheets deletes this well's sheet files left by an earlier
+// run that drew it on a different number of sheets, so the directory
+// never holds a mix: base.ext when there are now several sheets, and
+// base-sheetN.ext beyond the count (all of them when there is one).
+func removeStaleSheets(dir, base, ext string, n int) {
+	entries, err := os.ReadDir(dir)
+	if err != nil {
+		return
+	}
+	prefix, suffix := base+"-sheet", "."+ext
+	for _, e := range entries {
+		name := e.Name()
+		if e.IsDir() {
+			continue
+		}
+		if name == base+suffix && n > 1 {
+			os.Remove(filepath.Join(dir, name))
+			continue
+		}
+		if !strings.HasPrefix(name, prefix) || !strings.HasSuffix(name, suffix) {
+			continue
+		}
+		k, err := strconv.Atoi(name[len(prefix) : len(name)-len(suffix)])
+		if err != nil || k < 1 || strconv.Itoa(k) != name[len(prefix):len(name)-len(suffix)] {
+			continue
+		}
+		if n == 1 || k > n {
+			os.Remove(filepath.Join(dir, name))
+		}
+	}
 }
 
 // encode writes a document in one format: one PDF for all sheets, one
@@ -451,4 +486,3 @@ func plural(n int, one, many string) string {
 	}
 	return many
 }
-

@@ -31,6 +31,7 @@ const (
 	legendRowH = 11.0
 	swatchW    = 18.0
 	swatchH    = 9.0
+	legendColW = 104.0
 )
 
 func (l *layout) hasAmounts() bool { return l.in.Quantities != nil && len(l.in.Quantities.Rows) > 0 }
@@ -64,39 +65,58 @@ func sortedSymbols(m map[string]symbol) []symbol {
 	return out
 }
 
-// planBand fixes the band's widths and height from its contents.
+// planBand fixes the band's widths and height from its contents: it
+// tries a few ways of sharing the width between the legend (one to three
+// columns of symbols), the amounts table and the notes, and keeps the
+// lowest band.
 func (l *layout) planBand(legend []symbol) bandPlan {
 	W := l.content.W
-	bp := bandPlan{legendW: W * 0.40, noteW: W * 0.60}
+	limit := l.content.H * 0.3
+	var best bandPlan
+	bestH := 0.0
+	amountW := 0.0
 	if l.hasAmounts() {
-		bp = bandPlan{legendW: W * 0.33, amountW: W * 0.31, noteW: W * 0.36}
+		amountW = min(max(W*0.31, 180), 230)
 	}
-	h := l.legendHeight(legend, bp.legendW)
-	if bp.amountW > 0 {
-		h = max(h, l.amountsHeight(bp.amountW))
-	}
-	notes := l.noteBlocks(bp.noteW - 2*bandPad)
-	nh := bandHeadH + bandPad
-	for _, n := range notes {
-		nh += n.block.height() + 1.5
-	}
-	limit := l.content.H * 0.34
-	bp.height = max(h, min(nh, limit), 60)
-	if nh > bp.height {
-		// Keep what fits; the rest goes on a notes sheet after the
-		// drawings, and the band says so.
-		used := bandHeadH + bandPad + lineGap(sizeSmall) + 2
-		for i, n := range notes {
-			if used+n.block.height()+1.5 > bp.height {
-				bp.notes, bp.overflow = notes[:i], notes[i:]
-				break
-			}
-			used += n.block.height() + 1.5
+	for cols := 1; cols <= 3; cols++ {
+		lw := float64(cols)*legendColW + 2*bandPad
+		nw := W - lw - amountW
+		if nw < 150 {
+			continue
 		}
-	} else {
+		bp := bandPlan{legendW: lw, amountW: amountW, noteW: nw}
+		h := l.legendHeight(legend, lw)
+		if amountW > 0 {
+			h = max(h, l.amountsHeight(amountW))
+		}
+		notes := l.noteBlocks(nw - 2*bandPad)
+		nh := bandHeadH + bandPad
+		for _, n := range notes {
+			nh += n.block.height() + 1.5
+		}
+		bp.height = max(h, min(nh, limit), 60)
 		bp.notes = notes
+		if nh > bp.height {
+			// Keep what fits; the rest goes on a notes sheet after the
+			// drawings, and the band says so.
+			used := bandHeadH + bandPad + lineGap(sizeSmall) + 2
+			for i, n := range notes {
+				if used+n.block.height()+1.5 > bp.height {
+					bp.notes, bp.overflow = notes[:i], notes[i:]
+					break
+				}
+				used += n.block.height() + 1.5
+			}
+		}
+		score := bp.height
+		if len(bp.overflow) > 0 {
+			score += 1000 // a notes sheet only when nothing else fits
+		}
+		if bestH == 0 || score < bestH {
+			best, bestH = bp, score
+		}
 	}
-	return bp
+	return best
 }
 
 // noteBlocks are the notes area's contents: the well's notes, then the
@@ -182,12 +202,7 @@ func (l *layout) legendHeight(syms []symbol, w float64) float64 {
 	return bandHeadH + bandPad + float64(rows)*legendRowH + bandPad
 }
 
-func legendCols(w float64) int {
-	if w >= 200 {
-		return 2
-	}
-	return 1
-}
+func legendCols(w float64) int { return max(1, int((w-2*bandPad)/legendColW+1e-9)) }
 
 // legendItems draws the symbols of one sheet in the band's first box.
 func (l *layout) legendItems(syms []symbol) []draw.Item {
@@ -213,7 +228,7 @@ func (l *layout) legendItems(syms []symbol) []draw.Item {
 var amountCols = []struct {
 	head string
 	frac float64
-}{{"Interval", 0.2}, {"Material", 0.24}, {"Calculated", 0.22}, {"Placed", 0.24}, {"Placed ÷ calc.", 0.10}}
+}{{"Interval", 0.19}, {"Material", 0.22}, {"Calculated", 0.23}, {"Placed", 0.24}, {"Ratio", 0.12}}
 
 func (l *layout) amountRows() [][]string {
 	var rows [][]string

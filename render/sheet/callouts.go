@@ -17,7 +17,42 @@ type callout struct {
 	anchorX func(d schema.Length) float64
 	title   string
 	lines   []string
-	rank    int // tie-break among equal depths: outer things first
+	minor   map[int]bool // lines dropped first when labels must shrink
+	rank    int          // tie-break among equal depths: outer things first
+}
+
+// Label forms, fullest first; a crowded sheet shrinks its tallest labels
+// one form at a time until they all fit.
+const (
+	formFull      = iota // bold title line, then one line per item
+	formParagraph        // run-in bold title, items in one paragraph
+	formShort            // paragraph without the minor items
+	formLine             // one line, cut with an ellipsis
+	formCount
+)
+
+func (c callout) block(form int, width float64) textBlock {
+	var b textBlock
+	switch form {
+	case formFull:
+		b.add(c.title, draw.Bold, sizeSmall, width)
+		for _, s := range c.lines {
+			b.add(s, draw.Regular, sizeSmall, width)
+		}
+	case formParagraph, formShort:
+		var keep []string
+		for i, s := range c.lines {
+			if form == formParagraph || !c.minor[i] {
+				keep = append(keep, s)
+			}
+		}
+		b.addLead(c.title+":", strings.Join(keep, "; "), sizeSmall, width)
+	default:
+		lead := c.title + ":"
+		rest := fit(" "+strings.Join(c.lines, "; "), draw.Regular, sizeSmall, width-draw.TextWidth(draw.Bold, sizeSmall, lead))
+		b.lines = []textLine{{lead: lead, s: rest, font: draw.Regular, size: sizeSmall}}
+	}
+	return b
 }
 
 // callouts lists every component of the well with its words.
@@ -63,15 +98,29 @@ func (l *layout) callouts() []callout {
 		}
 	}
 
-	// Outer casings.
+	// Outer casings; with no well string, the highest casing top is the
+	// measuring point.
+	mpCasing := -1
+	if len(w.Strings) == 0 {
+		for i, c := range w.Casings {
+			if mpCasing < 0 || c.Top < w.Casings[mpCasing].Top {
+				mpCasing = i
+			}
+		}
+	}
 	for i, c := range w.Casings {
+		if i == mpCasing {
+			r := float64(od(c.Pipe)) / 2 * h.ppmm
+			add(callout{key: "mp:" + pathOr(c.Path, "casing", i), iv: schema.Interval{Top: c.Top, Bottom: c.Top}, anchorX: fixed(h.cx + r), title: "Measuring point",
+				lines: l.mpLines("casing", c.Top, ""), rank: 3})
+		}
 		r := float64(od(c.Pipe)) / 2 * h.ppmm
 		title := strings.TrimSpace(string(c.Kind) + " casing")
 		if c.Name != "" && c.Name != string(c.Kind) {
 			title += " (" + c.Name + ")"
 		}
 		add(callout{key: "casing:" + pathOr(c.Path, "casing", i), iv: c.Interval, anchorX: fixed(h.cx + r), title: upperFirst(title),
-			lines: []string{l.pipeSpec(c.Pipe), l.pipeSizes(c.Pipe), l.interval(c.Interval)}, rank: 2})
+			lines: []string{l.pipeSpec(c.Pipe), l.pipeSizes(c.Pipe), l.interval(c.Interval)}, minor: map[int]bool{1: true}, rank: 2})
 		if len(c.Centralizers) > 0 {
 			add(l.centralizerCallout("centralizer:"+pathOr(c.Path, "casing", i), h.cx, od(c.Pipe), c.Centralizers, title))
 		}
@@ -87,17 +136,13 @@ func (l *layout) callouts() []callout {
 		if len(s.Sections) > 0 {
 			top := s.Sections[0]
 			rt := float64(od(top.Pipe)) / 2 * h.ppmm
-			var lines []string
-			if su := -top.Top; su > 0 {
-				lines = append(lines, fmt.Sprintf("top of riser, %s above ground", l.depth(su)))
-			} else {
-				lines = append(lines, fmt.Sprintf("top of riser, %s below ground", l.depth(top.Top)))
-			}
-			if mp := w.Elevation.MeasuringPoint; mp != nil && si == 0 {
-				lines = append(lines, fmt.Sprintf("elev. %s %s", l.depth(*mp), w.Elevation.Datum))
-			}
-			if s.TopCap != "" {
-				lines = append(lines, "cap: "+s.TopCap)
+			mpElev := si == 0
+			lines := l.mpLines("riser", top.Top, s.TopCap)
+			if !mpElev && w.Elevation.MeasuringPoint != nil {
+				lines = lines[:1]
+				if s.TopCap != "" {
+					lines = append(lines, "cap: "+s.TopCap)
+				}
 			}
 			add(callout{key: "mp:" + stringName(s), iv: schema.Interval{Top: top.Top, Bottom: top.Top}, anchorX: fixed(x + rt), title: "Measuring point" + suffix, lines: lines, rank: 3})
 		}
@@ -105,6 +150,7 @@ func (l *layout) callouts() []callout {
 			r := float64(od(sec.Pipe)) / 2 * h.ppmm
 			role := string(sec.Kind) + ":" + stringName(s) + fmt.Sprintf("[%d]", k)
 			var lines []string
+			var minor map[int]bool
 			switch sec.Kind {
 			case schema.ScreenSection:
 				t := string(sec.ScreenType)
@@ -114,8 +160,9 @@ func (l *layout) callouts() []callout {
 				lines = []string{l.pipeSpec(sec.Pipe), l.slot(sec) + ", " + t, l.interval(sec.Interval)}
 			default:
 				lines = []string{l.pipeSpec(sec.Pipe), l.pipeSizes(sec.Pipe), l.interval(sec.Interval)}
+				minor = map[int]bool{1: true}
 			}
-			add(callout{key: role, iv: sec.Interval, anchorX: fixed(x + r), title: upperFirst(string(sec.Kind)) + suffix, lines: lines, rank: 4})
+			add(callout{key: role, iv: sec.Interval, anchorX: fixed(x + r), title: upperFirst(string(sec.Kind)) + suffix, lines: lines, minor: minor, rank: 4})
 		}
 		if s.BottomCap != "" && len(s.Sections) > 0 {
 			b := s.Sections[len(s.Sections)-1]
@@ -135,8 +182,10 @@ func (l *layout) callouts() []callout {
 			title += " " + f.Gradation
 		}
 		var lines []string
+		minor := map[int]bool{}
 		if f.Product != "" {
 			lines = append(lines, f.Product)
+			minor[0] = true
 		}
 		where := l.interval(f.Interval)
 		if f.Method != "" {
@@ -151,20 +200,19 @@ func (l *layout) callouts() []callout {
 			lines = append(lines, "placed "+l.placed(r)+ratioSuffix(ratio(r)))
 		}
 		fi := f
-		add(callout{key: "interval:" + pathOr(f.Path, "fill", i), iv: f.Interval, anchorX: func(d schema.Length) float64 { return l.annulusX(fi, d) }, title: title, lines: lines, rank: 6})
+		add(callout{key: "interval:" + pathOr(f.Path, "fill", i), iv: f.Interval, anchorX: func(d schema.Length) float64 { return l.annulusX(fi, d) }, title: title, lines: lines, minor: minor, rank: 6})
 	}
 
 	// Boreholes and open hole.
 	for i, b := range w.Boreholes {
 		r := float64(b.Diameter) / 2 * h.ppmm
-		lines := []string{l.diameter(b.Diameter) + " diameter"}
+		lines := []string{l.diameter(b.Diameter) + " diameter", l.interval(b.Interval)}
 		if b.Method != "" {
 			lines = append(lines, b.Method)
 		} else if w.Drilling.Method != "" {
 			lines = append(lines, w.Drilling.Method)
 		}
-		lines = append(lines, l.interval(b.Interval))
-		add(callout{key: "borehole:" + pathOr(b.Path, "borehole", i), iv: b.Interval, anchorX: fixed(h.cx + r), title: "Borehole", lines: lines, rank: 7})
+		add(callout{key: "borehole:" + pathOr(b.Path, "borehole", i), iv: b.Interval, anchorX: fixed(h.cx + r), title: "Borehole", lines: lines, minor: map[int]bool{2: true}, rank: 7})
 	}
 	for i, o := range w.OpenHoles {
 		d := holeAt(w, (o.Top+o.Bottom)/2)
@@ -327,32 +375,40 @@ func (p *painter) calloutsFor(all []callout) []placedCallout {
 	width := col.Right() - textX - calloutPadX
 	y0, y1 := p.clipY()
 	lo, hi := y0+1, y1-1
-	for _, compact := range []bool{false, true} {
-		targets := make([]float64, len(vis))
-		heights := make([]float64, len(vis))
-		for i := range vis {
-			var b textBlock
-			if compact {
-				b.lines = []textLine{{s: fit(vis[i].c.title+": "+strings.Join(vis[i].c.lines, "; "), draw.Regular, sizeSmall, width), font: draw.Regular, size: sizeSmall}}
-			} else {
-				b.add(vis[i].c.title, draw.Bold, sizeSmall, width)
-				for _, s := range vis[i].c.lines {
-					b.add(s, draw.Regular, sizeSmall, width)
-				}
-			}
-			vis[i].block = b
-			heights[i] = b.height() + 1
-			targets[i] = vis[i].anchorY - lineGap(sizeSmall)/2
-		}
+	forms := make([]int, len(vis))
+	targets := make([]float64, len(vis))
+	heights := make([]float64, len(vis))
+	for i := range vis {
+		vis[i].block = vis[i].c.block(formFull, width)
+		heights[i] = vis[i].block.height() + 1
+		targets[i] = vis[i].anchorY - lineGap(sizeSmall)/2
+	}
+	for {
 		tops, ok := place(targets, heights, calloutGap, lo, hi)
 		for i := range vis {
 			vis[i].box = draw.Rect{X: textX - 1, Y: tops[i], W: width + 2, H: heights[i]}
 		}
 		if ok {
-			break
+			return vis
 		}
+		// Shrink one label: every label goes to the next form before any
+		// goes further, tallest first, so the sheet reads evenly.
+		k := -1
+		for i := range vis {
+			if forms[i] >= formCount-1 {
+				continue
+			}
+			if k < 0 || forms[i] < forms[k] || forms[i] == forms[k] && heights[i] > heights[k] {
+				k = i
+			}
+		}
+		if k < 0 {
+			return vis // one line each and still too many: they run on past the column
+		}
+		forms[k]++
+		vis[k].block = vis[k].c.block(forms[k], width)
+		heights[k] = vis[k].block.height() + 1
 	}
-	return vis
 }
 
 // anchorFits reports whether page y lies on the visible part of a
@@ -381,4 +437,21 @@ func (p *painter) calloutItems(pcs []placedCallout) []draw.Item {
 			draw.Circle{Style: draw.Style{Fill: ink}, Center: draw.Point{X: pc.anchorX, Y: pc.anchorY}, R: 0.9})
 	}
 	return items
+}
+
+// mpLines describes a measuring point at the top of a pipe.
+func (l *layout) mpLines(pipe string, top schema.Length, topCap string) []string {
+	var lines []string
+	if su := -top; su > 0 {
+		lines = append(lines, fmt.Sprintf("top of %s, %s above ground", pipe, l.depth(su)))
+	} else {
+		lines = append(lines, fmt.Sprintf("top of %s, %s below ground", pipe, l.depth(top)))
+	}
+	if mp := l.w.Elevation.MeasuringPoint; mp != nil {
+		lines = append(lines, strings.TrimSpace(fmt.Sprintf("elev. %s %s", l.depth(*mp), l.w.Elevation.Datum)))
+	}
+	if topCap != "" {
+		lines = append(lines, "cap: "+topCap)
+	}
+	return lines
 }

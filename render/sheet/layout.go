@@ -232,3 +232,17 @@ func roundDown(v, step schema.Length) schema.Length {
 	}
 	return schema.Length(math.Floor(float64(v/step)+1e-9)) * step
 }
+
+// niceFloor is the largest 1, 2 or 5 x 10^k not above v.
+func niceFloor(v float64) float64 {
+	if !(v > 0) || math.IsInf(v, 0) {
+		return 1
+	}
+	p := math.Pow(10, math.Floor(math.Log10(v)))
+	for _, m := range []float64{5, 2, 1} {
+		if m*p <= v*(1+1e-9) {
+			return m * p
+		}
+	}
+	return p
+}

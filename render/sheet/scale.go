@@ -74,8 +74,8 @@ func ParseScale(s string) (Scale, error) {
 var (
 	imperialSteps    = []float64{1, 2, 5, 10, 20, 50, 100, 200, 500} // ft per in
 	metricSteps      = []float64{20, 50, 100, 200, 500, 1000, 2000}  // 1:N
-	imperialReadable = 20.0                                          // 1 in = 20 ft: a 1-ft interval is 3.6 pt
-	metricReadable   = 200.0                                         // 1:200: a 0.5-m interval is 7 pt
+	imperialReadable = 50.0                                          // 1 in = 50 ft: a 2-ft seal is 2.9 pt
+	metricReadable   = 500.0                                         // 1:500: a 1-m seal is 5.7 pt
 )
 
 // candidates lists the automatic scales for the units, most detailed

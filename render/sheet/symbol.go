@@ -1,8 +1,7 @@
 package sheet
 
 import (
-	"fmt"
-	"math"
+		"math"
 	"strings"
 
 	"github.com/tremie-dev/tremie/render/draw"
@@ -56,7 +55,7 @@ func layerSymbol(ly schema.Layer) symbol {
 	p := func(r draw.Rect) []draw.Item { return hatch(r, angle, space, draw.RGB(245, 240, 225)) }
 	label := name
 	if ly.USCS != "" {
-		label = fmt.Sprintf("%s (ASTM D2487)", ly.USCS)
+		label = ly.USCS + " soil"
 	}
 	return symbol{key: "lith:" + name, label: label, order: 10, paint: p, swatch: p}
 }

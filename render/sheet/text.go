@@ -1,6 +1,8 @@
 package sheet
 
 import (
+	"strings"
+
 	"github.com/tremie-dev/tremie/render/draw"
 )
 
@@ -36,9 +38,38 @@ type textBlock struct {
 }
 
 type textLine struct {
+	lead string // set in bold before s, for a label's run-in title
 	s    string
 	font draw.FontStyle
 	size float64
+}
+
+// addLead wraps a paragraph that opens with a bold run-in lead: the
+// first line holds the lead and as many words as fit after it.
+func (b *textBlock) addLead(lead, s string, size, width float64) {
+	lw := draw.TextWidth(draw.Bold, size, lead)
+	words := strings.Fields(s)
+	first := ""
+	k := 0
+	for k < len(words) {
+		try := strings.TrimSpace(first + " " + words[k])
+		if lw+draw.TextWidth(draw.Regular, size, " "+try) > width && first != "" {
+			break
+		}
+		if lw+draw.TextWidth(draw.Regular, size, " "+try) > width {
+			break
+		}
+		first = try
+		k++
+	}
+	if first != "" {
+		first = " " + first
+	}
+	b.lines = append(b.lines, textLine{lead: lead, s: first, font: draw.Regular, size: size})
+	b.width = max(b.width, lw+draw.TextWidth(draw.Regular, size, first))
+	if k < len(words) {
+		b.add(strings.Join(words[k:], " "), draw.Regular, size, width)
+	}
 }
 
 // add wraps s into the block at width.
@@ -65,9 +96,16 @@ func (b *textBlock) height() float64 {
 func (b *textBlock) items(x, y float64, color draw.Color, role string) []draw.Item {
 	var out []draw.Item
 	for _, l := range b.lines {
+		base := y + draw.Ascent(l.font, l.size)
 		y += lineGap(l.size)
-		out = append(out, draw.Text{At: draw.Point{X: x, Y: y - lineGap(l.size) + draw.Ascent(l.font, l.size)},
-			S: l.s, Size: l.size, Font: l.font, Color: color, Role: role})
+		lx := x
+		if l.lead != "" {
+			out = append(out, draw.Text{At: draw.Point{X: x, Y: base}, S: l.lead, Size: l.size, Font: draw.Bold, Color: color, Role: role})
+			lx += draw.TextWidth(draw.Bold, l.size, l.lead)
+		}
+		if l.s != "" {
+			out = append(out, draw.Text{At: draw.Point{X: lx, Y: base}, S: l.s, Size: l.size, Font: l.font, Color: color, Role: role})
+		}
 	}
 	return out
 }

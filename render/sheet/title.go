@@ -6,6 +6,7 @@ import (
 	"image"
 	_ "image/jpeg" // logo formats the project accepts
 	_ "image/png"
+	"sort"
 	"strings"
 
 	"github.com/tremie-dev/tremie/render/draw"
@@ -24,7 +25,7 @@ type titleBlock struct {
 }
 
 const (
-	titleRowH    = 30.0
+	titleRowH    = 28.0
 	fieldLabelH  = 8.0
 	fieldMaxLine = 3
 )
@@ -113,6 +114,41 @@ func (l *layout) scaleFields() {
 	}
 }
 
+// cellWidths shares a row's width among its cells: a cell that needs
+// less than an equal share gets what it needs, and the others share the
+// rest equally (max-min fair), so short values leave room for long ones.
+func (tb titleBlock) cellWidths(row []field, w float64) []float64 {
+	need := make([]float64, len(row))
+	idx := make([]int, len(row))
+	for i, f := range row {
+		// The scale fields are filled in once the scale is chosen; size
+		// them for their longest values so the block's height is known
+		// before.
+		v := f.value
+		switch f.label {
+		case "Vertical scale":
+			v = "1 in = 100 ft  0 ——— 100 ft"
+		case "Horizontal exaggeration":
+			v = "×100 (diameters at 1:100)"
+		}
+		need[i] = max(draw.TextWidth(draw.Regular, sizeTiny, strings.ToUpper(f.label)), draw.TextWidth(draw.Regular, sizeBody, v)) + 10
+		idx[i] = i
+	}
+	sort.SliceStable(idx, func(a, b int) bool { return need[idx[a]] < need[idx[b]] })
+	out := make([]float64, len(row))
+	rest, k := w, float64(len(row))
+	for _, i := range idx {
+		out[i] = min(need[i], rest/k)
+		rest -= out[i]
+		k--
+	}
+	// Hand what is left over to every cell alike.
+	for i := range out {
+		out[i] += rest / float64(len(row))
+	}
+	return out
+}
+
 func (tb titleBlock) cellLines(f field, cw float64) []string {
 	ls := draw.Wrap(draw.Regular, sizeBody, f.value, cw-6)
 	if len(ls) > fieldMaxLine {
@@ -128,13 +164,13 @@ func (tb titleBlock) cellLines(f field, cw float64) []string {
 // rowHeight is the height of a row of cells in a block of width w: room
 // for the tallest wrapped value (the scale values are short).
 func (tb titleBlock) rowHeight(row []field, w float64) float64 {
-	cw := w / float64(len(row))
+	cws := tb.cellWidths(row, w)
 	n := 1
-	for _, f := range row {
+	for i, f := range row {
 		if f.scaleBar {
 			continue
 		}
-		n = max(n, len(tb.cellLines(f, cw)))
+		n = max(n, len(tb.cellLines(f, cws[i])))
 	}
 	return fieldLabelH + float64(n)*lineGap(sizeBody) + 3
 }
@@ -188,10 +224,14 @@ func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
 	y := r.Y + titleRowH
 	for _, row := range l.title.rows {
 		rh := l.title.rowHeight(row, r.W)
-		cw := r.W / float64(len(row))
+		cws := l.title.cellWidths(row, r.W)
 		items = append(items, line(r.X, y, r.Right(), y, 0.5, ink, ""))
+		cx := r.X
 		for c, f := range row {
-			cx := r.X + float64(c)*cw
+			cw := cws[c]
+			if c > 0 {
+				cx += cws[c-1]
+			}
 			if c > 0 {
 				items = append(items, line(cx, y, cx, y+rh, 0.4, ink, ""))
 			}
@@ -202,7 +242,7 @@ func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
 				ty += lineGap(sizeBody)
 			}
 			if f.scaleBar {
-				items = append(items, l.scaleBar(cx+3+draw.TextWidth(draw.Regular, sizeBody, f.value)+8, y+fieldLabelH+2, cx+cw-6)...)
+				items = append(items, l.scaleBar(cx+3+draw.TextWidth(draw.Regular, sizeBody, f.value)+8, y+fieldLabelH+draw.Ascent(draw.Regular, sizeBody), cx+cw-4)...)
 			}
 		}
 		y += rh
@@ -211,25 +251,24 @@ func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
 }
 
 // scaleBar draws a bar of a round length at the vertical scale, in
-// alternate black and white halves, between x0 and at most x1.
+// alternate black and white halves, on the baseline y between x0 and at
+// most x1: "0 ▬▭ 10 ft".
 func (l *layout) scaleBar(x0, y, x1 float64) []draw.Item {
 	perUnit := l.scale.Points(schema.LengthFrom(1, l.u.Depth))
-	room := x1 - x0 - 12
-	if room < 20 {
+	zeroW := draw.TextWidth(draw.Regular, sizeTiny, "0") + 2
+	room := x1 - x0 - zeroW - draw.TextWidth(draw.Regular, sizeTiny, " 1000 ft")
+	if room < 12 {
 		return nil
 	}
-	// The largest 1, 2 or 5 x 10^k that fits.
-	length := niceStep(room / perUnit)
-	for length*perUnit > room {
-		length = niceStep(length * 0.45)
-	}
+	length := niceFloor(room / perUnit)
 	w := length * perUnit
+	bx := x0 + zeroW
 	half := w / 2
-	items := []draw.Item{
-		box(draw.Rect{X: x0, Y: y, W: half, H: 3}, ink, 0.4, ink, "scalebar"),
-		box(draw.Rect{X: x0 + half, Y: y, W: half, H: 3}, ink, 0.4, draw.White, "scalebar"),
-		text(x0, y+10, "0", draw.Regular, sizeTiny, draw.Middle, ink, ""),
-		text(x0+w, y+10, schema.TrimFloat(length, 2)+" "+string(l.u.Depth), draw.Regular, sizeTiny, draw.Middle, ink, "scalebar-length"),
+	by := y - 4.2
+	return []draw.Item{
+		text(x0, y, "0", draw.Regular, sizeTiny, draw.Start, ink, ""),
+		box(draw.Rect{X: bx, Y: by, W: half, H: 3.4}, ink, 0.4, ink, "scalebar"),
+		box(draw.Rect{X: bx + half, Y: by, W: half, H: 3.4}, ink, 0.4, draw.White, "scalebar"),
+		text(bx+w+2, y, schema.TrimFloat(length, 2)+" "+string(l.u.Depth), draw.Regular, sizeTiny, draw.Start, ink, "scalebar-length"),
 	}
-	return items
 }

@@ -163,11 +163,11 @@ func pipeSymbol(look pipeLook) symbol {
 	var label string
 	switch look {
 	case steel:
-		fill, label = ink, "Steel pipe wall"
+		fill, label = ink, "Steel pipe"
 	case stainless:
-		fill, label = draw.RGB(130, 130, 130), "Stainless-steel pipe wall"
+		fill, label = draw.RGB(130, 130, 130), "Stainless pipe"
 	default:
-		fill, label = draw.White, "Plastic pipe wall (PVC, HDPE)"
+		fill, label = draw.White, "PVC or plastic pipe"
 	}
 	sw := func(r draw.Rect) []draw.Item {
 		wall := r.W / 4
@@ -246,7 +246,7 @@ func screenSymbol(t schema.ScreenType) symbol {
 			return append(wrapWall(draw.Rect{X: r.X, Y: r.Y, W: r.W / 3, H: r.H}), wrapWall(draw.Rect{X: r.Right() - r.W/3, Y: r.Y, W: r.W / 3, H: r.H})...)
 		}
 	case schema.Prepacked:
-		label = "Prepacked screen sleeve"
+		label = "Prepacked screen"
 		sw = func(r draw.Rect) []draw.Item {
 			a := draw.Rect{X: r.X + 2, Y: r.Y, W: r.W / 4, H: r.H}
 			b := draw.Rect{X: r.Right() - 2 - r.W/4, Y: r.Y, W: r.W / 4, H: r.H}
@@ -386,7 +386,7 @@ func openHoleSymbol() symbol {
 	sw := func(r draw.Rect) []draw.Item {
 		return []draw.Item{roughWall(r.X+3, r.Y, r.Bottom(), -1), roughWall(r.Right()-3, r.Y, r.Bottom(), 1)}
 	}
-	return symbol{key: "openhole", label: "Open hole (uncased rock)", order: 240, paint: sw, swatch: sw}
+	return symbol{key: "openhole", label: "Open hole, rock", order: 240, paint: sw, swatch: sw}
 }
 
 // roughWall is a jagged vertical line: a rock wall. The teeth follow the
@@ -656,7 +656,7 @@ func waterMark(x, y float64, kind schema.LevelKind, role string) []draw.Item {
 }
 
 func waterSymbol(kind schema.LevelKind) symbol {
-	label := map[schema.LevelKind]string{schema.FirstEncountered: "Water first encountered", schema.Pumping: "Pumping water level"}[kind]
+	label := map[schema.LevelKind]string{schema.FirstEncountered: "Water first found", schema.Pumping: "Pumping water level"}[kind]
 	if label == "" {
 		label = "Static water level"
 		kind = schema.Static
