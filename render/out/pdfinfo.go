@@ -51,9 +51,8 @@ func pdfDate(s string) (string, error) {
 	}
 	d := t.Format("D:20060102150405")
 	_, off := t.Zone()
-	if off == 0 {
-		return d + "Z", nil
-	}
+	// UTC is written +00'00' rather than Z: both are allowed, and the
+	// signed form is what every reader (and pdfcpu) writes and expects.
 	sign := '+'
 	if off < 0 {
 		sign, off = '-', -off
