@@ -594,3 +594,22 @@ func TestWriteFileAtomic(t *testing.T) {
 		t.Errorf("missing directory: %v", err)
 	}
 }
+
+// TestPDFDate checks the PDF date form of ISO 32000-1, 7.9.4:
+// D:YYYYMMDDHHmmSS then the offset from UT as +HH'mm' or -HH'mm'.
+func TestPDFDate(t *testing.T) {
+	for in, want := range map[string]string{
+		"2024-05-17T09:30:00Z":      "D:20240517093000+00'00'",
+		"2024-05-17T09:30:00+05:30": "D:20240517093000+05'30'",
+		"2024-12-31T23:59:59-03:00": "D:20241231235959-03'00'",
+		"2024-05-17":                "D:20240517000000+00'00'",
+	} {
+		got, err := pdfDate(in)
+		if err != nil || got != want {
+			t.Errorf("pdfDate(%q) = %q, %v; want %q", in, got, err, want)
+		}
+	}
+	if _, err := pdfDate("17/05/2024"); err == nil {
+		t.Error("a non-RFC 3339 date was accepted")
+	}
+}
