@@ -45,7 +45,8 @@ func PNG(doc *draw.Document, i int, dpi float64) ([]byte, error) {
 	}
 	r.Close()
 	var buf bytes.Buffer
-	if err := png.Encode(&buf, img); err != nil {
+	enc := png.Encoder{CompressionLevel: png.BestSpeed}
+	if err := enc.Encode(&buf, img); err != nil {
 		return nil, fmt.Errorf("png page %d: encode: %w", i+1, err)
 	}
 	return buf.Bytes(), nil
