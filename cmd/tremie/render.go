@@ -18,6 +18,7 @@ import (
 	"github.com/tremie-dev/tremie/schema/project"
 	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
+	"github.com/tremie-dev/tremie/templates"
 )
 
 func init() {
@@ -32,14 +33,18 @@ func init() {
 type renderOptions struct {
 	outDir  string
 	formats []string // svg, pdf, png
-	page    sheet.Page
-	pageSet bool // --page or --landscape given: wins over a project's page
-	scale   *sheet.Scale
-	strict  bool
-	profile *rules.Profile
-	yields  *quantity.Yields
-	dpi     float64
-	date    string // from SOURCE_DATE_EPOCH, "" for the well's own date
+	// pageName and landscape are the page template (--page, --landscape);
+	// pageSet is true when either was given, and then wins over a
+	// project's page.
+	pageName  string
+	landscape bool
+	pageSet   bool
+	scale     *sheet.Scale
+	strict    bool
+	profile   *rules.Profile
+	yields    *quantity.Yields
+	dpi       float64
+	date      string // from SOURCE_DATE_EPOCH, "" for the well's own date
 	// names maps a well file to its output base name, made safe and unique
 	// by assignNames; a file missing from it gets its sanitised ID.
 	names map[string]string
@@ -89,20 +94,19 @@ func renderWell(path string, opts renderOptions) (renderResult, error) {
 		return res, nil
 	}
 	in := sheet.Inputs{Findings: res.Findings, Quantities: quantity.Compute(w, opts.yields)}
-	page := opts.page
+	name, landscape := opts.pageName, opts.landscape
 	if prj != nil {
 		in.TitleBlock = prj.TitleBlock
 		if prj.Logo != nil {
 			in.Logo = prj.Logo.Data
 		}
 		if !opts.pageSet {
-			if p, ok := pageNamed(prj.Page); ok {
-				page = p
-			}
-			if prj.Landscape {
-				page = page.Landscape()
-			}
+			name, landscape = prj.Page, prj.Landscape
 		}
+	}
+	page, err := pageFor(name, landscape)
+	if err != nil {
+		return res, inputErr(fmt.Errorf("%s: %w", path, err))
 	}
 	doc, err := sheet.Layout(w, in, sheet.Options{Page: page, Scale: opts.scale, Date: opts.date})
 	if err != nil {
@@ -241,19 +245,17 @@ func assignNames(files, ids []string) map[string]string {
 	return out
 }
 
-// pageNamed is a page template by name, portrait.
-func pageNamed(name string) (sheet.Page, bool) {
-	switch strings.ToLower(name) {
-	case "", "letter":
-		return sheet.Letter, true
-	case "tabloid", "ansi-b", "ledger":
-		return sheet.Tabloid, true
-	case "a4":
-		return sheet.A4, true
-	case "a3":
-		return sheet.A3, true
+// pageFor is a page template by name ("" for letter), turned when
+// landscape.
+func pageFor(name string, landscape bool) (sheet.Page, error) {
+	if name == "" {
+		name = "letter"
 	}
-	return sheet.Page{}, false
+	t, err := templates.Load(name, landscape)
+	if err != nil {
+		return sheet.Page{}, err
+	}
+	return sheet.FromTemplate(t), nil
 }
 
 // sourceDate is SOURCE_DATE_EPOCH as RFC 3339, for repeatable builds.
@@ -309,17 +311,11 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 			opts.formats = append(opts.formats, f)
 		}
 	}
-	opts.page = sheet.Letter
-	if *pageName != "" {
-		p, ok := pageNamed(*pageName)
-		if !ok {
-			fmt.Fprintf(stderr, "tremie render: unknown page %q (letter, tabloid, a4, a3)\n", *pageName)
-			return exitUsage
-		}
-		opts.page, opts.pageSet = p, true
-	}
-	if *landscape {
-		opts.page, opts.pageSet = opts.page.Landscape(), true
+	opts.pageName, opts.landscape = *pageName, *landscape
+	opts.pageSet = *pageName != "" || *landscape
+	if _, err := pageFor(*pageName, *landscape); err != nil {
+		fmt.Fprintf(stderr, "tremie render: --page: %v\n", err)
+		return exitUsage
 	}
 	if *scaleText != "" {
 		s, err := sheet.ParseScale(*scaleText)
@@ -455,10 +451,36 @@ func collectRenderInputs(paths []string, opts *renderOptions) (files []string, p
 		found, ferrs := schema.FindWells([]string{a})
 		errs = append(errs, ferrs...)
 		for _, f := range found {
-			add(f, nil)
+			p, err := enclosingProject(f)
+			if err != nil {
+				errs = append(errs, err)
+			}
+			add(f, p)
 		}
 	}
 	return files, profile, errs
+}
+
+// enclosingProject finds the project a well file belongs to: a
+// project.toml in its directory or up to three directories above. None
+// is not an error; an unreadable one is.
+func enclosingProject(file string) (*project.Project, error) {
+	dir := filepath.Dir(file)
+	for i := 0; i < 4; i++ {
+		if _, err := os.Stat(filepath.Join(dir, project.FileName)); err == nil {
+			p, err := project.Load(dir)
+			if err != nil {
+				return nil, err
+			}
+			return p, nil
+		}
+		parent := filepath.Dir(dir)
+		if parent == dir {
+			break
+		}
+		dir = parent
+	}
+	return nil, nil
 }
 
 // worse keeps the more serious exit code: input and output failures over

@@ -60,8 +60,7 @@ func (l *layout) page(i int) *draw.Page {
 		nn, _ := l.number(len(l.sheets))
 		more = fmt.Sprintf("Notes and findings continue on sheet %d.", nn)
 	}
-	nr := draw.Rect{X: l.band.X + l.bandPlan.legendW + l.bandPlan.amountW, Y: l.band.Y, W: l.bandPlan.noteW, H: l.band.H}
-	pg.Add(l.noteItems(l.bandPlan.notes, nr, more)...)
+	pg.Add(l.noteItems(l.bandPlan.notes, l.bandPlan.noteR, more)...)
 	pg.Add(l.cautionItems()...)
 	return pg
 }

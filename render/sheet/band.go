@@ -14,6 +14,8 @@ import (
 type bandPlan struct {
 	height                  float64
 	legendW, amountW, noteW float64
+	// The three boxes, placed once the band's position is known.
+	legendR, amountR, noteR draw.Rect
 	notes                   []noteBlock // what fits in the band
 	overflow                []noteBlock // continued on a notes sheet
 }
@@ -70,6 +72,9 @@ func sortedSymbols(m map[string]symbol) []symbol {
 // columns of symbols), the amounts table and the notes, and keeps the
 // lowest band.
 func (l *layout) planBand(legend []symbol) bandPlan {
+	if l.pg.LegendRight > 0 {
+		return l.planSideBand(legend)
+	}
 	W := l.content.W
 	limit := l.content.H * 0.3
 	var best bandPlan
@@ -117,6 +122,53 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 		}
 	}
 	return best
+}
+
+// planSideBand stacks the legend, the amounts and the notes in a column
+// on the right of the body (a landscape page): the notes take what the
+// other two leave, and continue on a notes sheet if they need more.
+func (l *layout) planSideBand(legend []symbol) bandPlan {
+	w := l.pg.LegendRight
+	bp := bandPlan{legendW: w, noteW: w}
+	top := l.legendHeight(legend, w)
+	if l.hasAmounts() {
+		bp.amountW = w
+		top += l.amountsHeight(w)
+	}
+	avail := l.caution.Y - 4 - (l.header.Bottom() + 6) - top
+	bp.height = top
+	notes := l.noteBlocks(w - 2*bandPad)
+	used := bandHeadH + bandPad + lineGap(sizeSmall) + 2
+	bp.notes = notes
+	for i, n := range notes {
+		if used+n.block.height()+1.5 > avail {
+			bp.notes, bp.overflow = notes[:i], notes[i:]
+			break
+		}
+		used += n.block.height() + 1.5
+	}
+	return bp
+}
+
+// placeBand fixes the boxes' rectangles within the band.
+func (l *layout) placeBand() {
+	bp := &l.bandPlan
+	b := l.band
+	if l.pg.LegendRight > 0 {
+		lh := l.legendHeight(l.legendAll, b.W)
+		bp.legendR = draw.Rect{X: b.X, Y: b.Y, W: b.W, H: lh}
+		y := b.Y + lh
+		if bp.amountW > 0 {
+			ah := l.amountsHeight(b.W)
+			bp.amountR = draw.Rect{X: b.X, Y: y, W: b.W, H: ah}
+			y += ah
+		}
+		bp.noteR = draw.Rect{X: b.X, Y: y, W: b.W, H: b.Bottom() - y}
+		return
+	}
+	bp.legendR = draw.Rect{X: b.X, Y: b.Y, W: bp.legendW, H: b.H}
+	bp.amountR = draw.Rect{X: b.X + bp.legendW, Y: b.Y, W: bp.amountW, H: b.H}
+	bp.noteR = draw.Rect{X: b.X + bp.legendW + bp.amountW, Y: b.Y, W: bp.noteW, H: b.H}
 }
 
 // noteBlocks are the notes area's contents: the well's notes, then the
@@ -195,31 +247,68 @@ func datumOr(d string) string {
 	return d
 }
 
+// legendLayout places legend entries in columns of width w: each entry's
+// label wrapped to at most two lines, column-major, rows as tall as their
+// labels. It returns each entry's top-left offset and the total height.
+func legendLayout(syms []symbol, w float64) (pos []draw.Point, labels [][]string, height float64) {
+	cols := legendCols(w)
+	cw := (w - 2*bandPad) / float64(cols)
+	labels = make([][]string, len(syms))
+	heights := make([]float64, len(syms))
+	for i, s := range syms {
+		ls := draw.Wrap(draw.Regular, sizeSmall, s.label, cw-swatchW-8)
+		if len(ls) > 2 {
+			ls = []string{ls[0], fit(strings.Join(ls[1:], " "), draw.Regular, sizeSmall, cw-swatchW-8)}
+		}
+		labels[i] = ls
+		heights[i] = max(legendRowH, float64(len(ls))*lineGap(sizeSmall)+3)
+	}
+	// Fill columns top to bottom, moving on once a column holds its share
+	// of the total height.
+	total := 0.0
+	for _, h := range heights {
+		total += h
+	}
+	share := total / float64(cols)
+	pos = make([]draw.Point, len(syms))
+	c, y := 0, 0.0
+	for i, h := range heights {
+		if y > 0 && y+h/2 > share && c < cols-1 {
+			c, y = c+1, 0
+		}
+		pos[i] = draw.Point{X: bandPad + float64(c)*cw, Y: bandHeadH + bandPad + y}
+		y += h
+		height = max(height, bandHeadH+bandPad+y+bandPad)
+	}
+	return pos, labels, max(height, bandHeadH+2*bandPad)
+}
+
 // legendHeight is the height of a legend of these symbols in width w.
 func (l *layout) legendHeight(syms []symbol, w float64) float64 {
-	cols := legendCols(w)
-	rows := (len(syms) + cols - 1) / cols
-	return bandHeadH + bandPad + float64(rows)*legendRowH + bandPad
+	_, _, h := legendLayout(syms, w)
+	return h
 }
 
 func legendCols(w float64) int { return max(1, int((w-2*bandPad)/legendColW+1e-9)) }
 
 // legendItems draws the symbols of one sheet in the band's first box.
 func (l *layout) legendItems(syms []symbol) []draw.Item {
-	b := l.band
-	r := draw.Rect{X: b.X, Y: b.Y, W: l.bandPlan.legendW, H: b.H}
+	r := l.bandPlan.legendR
 	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, ""),
 		text(r.X+bandPad, r.Y+9, "LEGEND", draw.Bold, sizeHeading, draw.Start, ink, "")}
-	cols := legendCols(r.W)
-	cw := (r.W - 2*bandPad) / float64(cols)
-	rows := (len(syms) + cols - 1) / cols
+	pos, labels, _ := legendLayout(syms, r.W)
 	for i, s := range syms {
-		c, k := i/max(rows, 1), i%max(rows, 1)
-		x := r.X + bandPad + float64(c)*cw
-		y := r.Y + bandHeadH + bandPad + float64(k)*legendRowH
+		x, y := r.X+pos[i].X, r.Y+pos[i].Y
 		sw := draw.Rect{X: x, Y: y, W: swatchW, H: swatchH}
 		items = append(items, draw.Clip{Rect: sw, Items: s.swatch(sw)}, box(sw, ink, 0.4, draw.Color{}, "legend:"+s.key))
-		items = append(items, text(x+swatchW+4, y+swatchH/2+draw.CapHeight(draw.Regular, sizeSmall)/2, fit(s.label, draw.Regular, sizeSmall, cw-swatchW-8), draw.Regular, sizeSmall, draw.Start, ink, "legend-label"))
+		ty := y + swatchH/2 + draw.CapHeight(draw.Regular, sizeSmall)/2
+		if len(labels[i]) > 1 {
+			ty = y + draw.Ascent(draw.Regular, sizeSmall) - 0.5
+		}
+		for _, ln := range labels[i] {
+			items = append(items, text(x+swatchW+4, ty, ln, draw.Regular, sizeSmall, draw.Start, ink, "legend-label"))
+			ty += lineGap(sizeSmall)
+		}
 	}
 	return items
 }
@@ -260,7 +349,14 @@ func (l *layout) amountsHeight(w float64) float64 {
 		_, rh := l.amountCells(r, inner, draw.Regular)
 		h += rh
 	}
-	return h + lineGap(sizeTiny)*2 + bandPad
+	foot := amountsFoot(inner)
+	return h + 1 + foot.height() + bandPad
+}
+
+func amountsFoot(width float64) textBlock {
+	var foot textBlock
+	foot.add("Calculated: annulus between the recorded hole (or casing bore) and pipe outside diameters; bags at the yields in force.", draw.Italic, sizeTiny, width)
+	return foot
 }
 
 func amountHead() []string {
@@ -276,8 +372,7 @@ func (l *layout) amountItems() []draw.Item {
 	if l.bandPlan.amountW == 0 {
 		return nil
 	}
-	b := l.band
-	r := draw.Rect{X: b.X + l.bandPlan.legendW, Y: b.Y, W: l.bandPlan.amountW, H: b.H}
+	r := l.bandPlan.amountR
 	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, ""),
 		text(r.X+bandPad, r.Y+9, "AMOUNTS PER FILL INTERVAL", draw.Bold, sizeHeading, draw.Start, ink, "")}
 	inner := r.W - 2*bandPad
@@ -300,8 +395,7 @@ func (l *layout) amountItems() []draw.Item {
 	for _, row := range l.amountRows() {
 		drawRow(row, draw.Regular, "amounts-row")
 	}
-	var foot textBlock
-	foot.add("Calculated: annulus between the recorded hole (or casing bore) and pipe outside diameters; bags at the yields in force.", draw.Italic, sizeTiny, inner)
+	foot := amountsFoot(inner)
 	items = append(items, foot.items(r.X+bandPad, y+1, grey, "amounts-note")...)
 	return items
 }

@@ -28,15 +28,16 @@ type layout struct {
 	band    draw.Rect // legend, amounts, notes and findings
 	caution draw.Rect
 
-	cols     columnRects
-	scale    Scale
-	fitsOne  bool // the automatic scale fit the well on one sheet
-	hz       hgeom
-	top, bot schema.Length // depth range drawn
-	sheets   []span
-	blocking bool
-	title    titleBlock
-	bandPlan bandPlan
+	cols      columnRects
+	scale     Scale
+	fitsOne   bool // the automatic scale fit the well on one sheet
+	hz        hgeom
+	top, bot  schema.Length // depth range drawn
+	sheets    []span
+	blocking  bool
+	title     titleBlock
+	bandPlan  bandPlan
+	legendAll []symbol // every symbol the well's sheets use
 }
 
 // columnRects are the x ranges of the body's columns.
@@ -83,16 +84,27 @@ func (l *layout) plan() error {
 	ch := float64(len(cautionLines))*lineGap(sizeTiny) + 4
 	l.caution = draw.Rect{X: l.content.X, Y: l.content.Bottom() - ch, W: l.content.W, H: ch}
 
-	l.layColumns()
+	bodyW := l.content.W
+	if l.pg.LegendRight > 0 {
+		bodyW -= l.pg.LegendRight + 6
+	}
+	l.layColumns(bodyW)
 	l.hz = l.horizontal()
 
 	// The band is sized for the whole well's legend, so every sheet has
 	// the same body and the depth per sheet is constant.
-	l.bandPlan = l.planBand(l.legendFor(span{l.top, l.bot}))
-	bh := l.bandPlan.height
-	l.band = draw.Rect{X: l.content.X, Y: l.caution.Y - 4 - bh, W: l.content.W, H: bh}
-	l.body = draw.Rect{X: l.content.X, Y: l.header.Bottom() + 6, W: l.content.W}
-	l.body.H = l.band.Y - 6 - l.body.Y
+	l.legendAll = l.legendFor(span{l.top, l.bot})
+	l.bandPlan = l.planBand(l.legendAll)
+	l.body = draw.Rect{X: l.content.X, Y: l.header.Bottom() + 6, W: bodyW}
+	if l.pg.LegendRight > 0 {
+		l.band = draw.Rect{X: l.content.Right() - l.pg.LegendRight, Y: l.body.Y, W: l.pg.LegendRight, H: l.caution.Y - 4 - l.body.Y}
+		l.body.H = l.band.H
+	} else {
+		bh := l.bandPlan.height
+		l.band = draw.Rect{X: l.content.X, Y: l.caution.Y - 4 - bh, W: l.content.W, H: bh}
+		l.body.H = l.band.Y - 6 - l.body.Y
+	}
+	l.placeBand()
 	if l.body.H < 160 {
 		return fmt.Errorf("page %q leaves %.0f pt for the drawing after the title block and notes; use a larger page", l.pg.Name, l.body.H)
 	}
@@ -160,11 +172,11 @@ func (l *layout) depthRange() (top, bot schema.Length) {
 }
 
 // layColumns divides the body width by the page's column fractions.
-func (l *layout) layColumns() {
+func (l *layout) layColumns(width float64) {
 	f := l.pg.columns()
 	x := l.content.X
 	next := func(frac float64) xRange {
-		r := xRange{X: x, W: frac * l.content.W}
+		r := xRange{X: x, W: frac * width}
 		x += r.W
 		return r
 	}

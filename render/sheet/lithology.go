@@ -40,8 +40,12 @@ func (p *painter) lithology() []draw.Item {
 		}
 		h := y1 - y0
 		label := describe(ly)
-		if sym != "" && h >= 8 && draw.TextWidth(draw.Bold, sizeSmall, sym) <= uc.W-2 {
-			clipped = append(clipped, text(uc.Center(), (y0+y1)/2+draw.CapHeight(draw.Bold, sizeSmall)/2, sym, draw.Bold, sizeSmall, draw.Middle, ink, "uscs:"+pathOr(ly.Path, "lithology", i)))
+		size := sizeSmall
+		if draw.TextWidth(draw.Bold, size, sym) > uc.W-2 {
+			size = sizeTiny
+		}
+		if sym != "" && h >= 8 && draw.TextWidth(draw.Bold, size, sym) <= uc.W-2 {
+			clipped = append(clipped, text(uc.Center(), (y0+y1)/2+draw.CapHeight(draw.Bold, size)/2, sym, draw.Bold, size, draw.Middle, ink, "uscs:"+pathOr(ly.Path, "lithology", i)))
 		} else if ly.USCS != "" {
 			label = ly.USCS + ": " + label
 		}

@@ -1,6 +1,10 @@
 package sheet
 
-import "fmt"
+import (
+	"fmt"
+
+	"github.com/tremie-dev/tremie/templates"
+)
 
 // Page is a sheet size with its margin, in points. Column fractions give
 // the share of the body width each column takes.
@@ -9,6 +13,10 @@ type Page struct {
 	Width, Height float64
 	Margin        float64
 	Columns       Columns
+	// LegendRight, when above zero, is the width of a column on the right
+	// holding the legend, amounts and notes (a landscape sheet); else they
+	// take a band under the drawing.
+	LegendRight float64
 }
 
 // Columns are the body's column widths as fractions of the content width;
@@ -25,16 +33,32 @@ var (
 	A3      = Page{Name: "a3", Width: 841.89, Height: 1190.55, Margin: 32}
 )
 
-// Landscape turns the page.
+// Landscape turns the page; the legend moves to a column on the right.
 func (p Page) Landscape() Page {
 	if p.Width < p.Height {
 		p.Width, p.Height = p.Height, p.Width
+	}
+	if p.LegendRight == 0 {
+		p.LegendRight = min(p.Width*0.27, 240)
+	}
+	p.Columns = Columns{}
+	return p
+}
+
+// FromTemplate makes a page from a page template's size, margin, columns
+// and legend side.
+func FromTemplate(t *templates.Template) Page {
+	p := Page{Name: t.Name, Width: t.Width, Height: t.Height, Margin: t.Margin,
+		Columns: Columns{Depth: t.Columns.Depth, Elevation: t.Columns.Elevation, Lithology: t.Columns.Lithology, USCS: t.Columns.USCS,
+			Description: t.Columns.Description, Well: t.Columns.Well, Callouts: t.Columns.Callouts}}
+	if t.Legend.Side == "right" {
+		p.LegendRight = t.Legend.Size
 	}
 	return p
 }
 
 func (p Page) check() error {
-	if p.Width < 300 || p.Height < 300 || p.Margin < 0 || p.Margin > 72 {
+	if p.Width < 300 || p.Height < 300 || p.Margin < 0 || p.Margin > 72 || p.LegendRight < 0 || p.LegendRight > p.Width/2 {
 		return fmt.Errorf("sheet: page %q of %.0f x %.0f pt with margin %.0f is not usable", p.Name, p.Width, p.Height, p.Margin)
 	}
 	return nil

@@ -4,9 +4,9 @@ import (
 	"fmt"
 	"math"
 	"sort"
-	"strings"
 
 	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/symbols"
 	"github.com/tremie-dev/tremie/schema"
 )
 
@@ -138,57 +138,6 @@ func (p *painter) fillInCasing(i int, f schema.Fill, c schema.Casing) []draw.Ite
 	return p.paint(materialSymbol(f.Material), draw.Rect{X: p.l.hz.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, "interval:"+pathOr(f.Path, "fill", i))
 }
 
-// pipeLook is how a pipe material is drawn.
-type pipeLook int
-
-const (
-	plastic pipeLook = iota
-	steel
-	stainless
-)
-
-func lookOf(material string) pipeLook {
-	m := strings.ToLower(material)
-	switch {
-	case strings.Contains(m, "stainless"):
-		return stainless
-	case strings.Contains(m, "steel"), strings.Contains(m, "iron"):
-		return steel
-	}
-	return plastic
-}
-
-func pipeSymbol(look pipeLook) symbol {
-	var fill draw.Color
-	var label string
-	switch look {
-	case steel:
-		fill, label = ink, "Steel pipe"
-	case stainless:
-		fill, label = draw.RGB(130, 130, 130), "Stainless pipe"
-	default:
-		fill, label = draw.White, "PVC or plastic pipe"
-	}
-	sw := func(r draw.Rect) []draw.Item {
-		wall := r.W / 4
-		return []draw.Item{
-			box(draw.Rect{X: r.X, Y: r.Y, W: wall, H: r.H}, ink, 0.4, fill, ""),
-			box(draw.Rect{X: r.Right() - wall, Y: r.Y, W: wall, H: r.H}, ink, 0.4, fill, ""),
-		}
-	}
-	return symbol{key: fmt.Sprintf("pipe:%d", look), label: label, order: 200 + int(look), paint: sw, swatch: sw}
-}
-
-func wallFill(look pipeLook) draw.Color {
-	switch look {
-	case steel:
-		return ink
-	case stainless:
-		return draw.RGB(130, 130, 130)
-	}
-	return draw.White
-}
-
 // pipe paints one casing or string section: its bore cleared, its walls,
 // and for a screen its openings. The role box is the outside diameter.
 func (p *painter) pipe(role string, x float64, iv schema.Interval, pp schema.Pipe, sec *schema.Section) []draw.Item {
@@ -206,27 +155,23 @@ func (p *painter) pipe(role string, x float64, iv schema.Interval, pp schema.Pip
 		wall = max(wall, minWall)
 	}
 	wall = min(wall, ro*0.45)
-	look := lookOf(pp.Material)
 	ht := y1 - y0
 	left := draw.Rect{X: x - ro, Y: y0, W: wall, H: ht}
 	right := draw.Rect{X: x + ro - wall, Y: y0, W: wall, H: ht}
 	items := []draw.Item{box(draw.Rect{X: x - ro + wall, Y: y0, W: 2 * (ro - wall), H: ht}, draw.Color{}, 0, draw.White, "bore:"+role)}
-	switch {
-	case screen && sec.ScreenType == schema.ContinuousWrap:
-		p.use(screenSymbol(schema.ContinuousWrap))
-		items = append(items, wrapWall(left)...)
-		items = append(items, wrapWall(right)...)
-	case screen:
-		p.use(screenSymbol(schema.Slotted))
-		items = append(items, slottedWall(left, look)...)
-		items = append(items, slottedWall(right, look)...)
-		if sec.ScreenType == schema.Prepacked {
-			p.use(screenSymbol(schema.Prepacked))
-			items = append(items, prepackSleeve(left, right)...)
+	part := symbols.Casing
+	if screen {
+		part = symbols.ScreenSlotted
+		if sec.ScreenType == schema.ContinuousWrap {
+			part = symbols.ScreenWrap
 		}
-	default:
-		p.use(pipeSymbol(look))
-		items = append(items, box(left, draw.Color{}, 0, wallFill(look), ""), box(right, draw.Color{}, 0, wallFill(look), ""))
+	}
+	sym := p.use(partSymbol(part))
+	items = append(items, sym.paint(left)...)
+	items = append(items, sym.paint(right)...)
+	if screen && sec.ScreenType == schema.Prepacked {
+		p.use(prepackSymbol())
+		items = append(items, prepackSleeve(left, right)...)
 	}
 	// Outline: the outside diameter, and the bore's edges.
 	items = append(items,
@@ -236,54 +181,17 @@ func (p *painter) pipe(role string, x float64, iv schema.Interval, pp schema.Pip
 	return items
 }
 
-func screenSymbol(t schema.ScreenType) symbol {
-	var sw func(r draw.Rect) []draw.Item
-	label := ""
-	switch t {
-	case schema.ContinuousWrap:
-		label = "Continuous-wrap screen"
-		sw = func(r draw.Rect) []draw.Item {
-			return append(wrapWall(draw.Rect{X: r.X, Y: r.Y, W: r.W / 3, H: r.H}), wrapWall(draw.Rect{X: r.Right() - r.W/3, Y: r.Y, W: r.W / 3, H: r.H})...)
-		}
-	case schema.Prepacked:
-		label = "Prepacked screen"
-		sw = func(r draw.Rect) []draw.Item {
-			a := draw.Rect{X: r.X + 2, Y: r.Y, W: r.W / 4, H: r.H}
-			b := draw.Rect{X: r.Right() - 2 - r.W/4, Y: r.Y, W: r.W / 4, H: r.H}
-			return append(append(slottedWall(a, plastic), slottedWall(b, plastic)...), prepackSleeve(a, b)...)
-		}
-	default:
-		label = "Slotted screen"
-		sw = func(r draw.Rect) []draw.Item {
-			return append(slottedWall(draw.Rect{X: r.X, Y: r.Y, W: r.W / 3, H: r.H}, plastic), slottedWall(draw.Rect{X: r.Right() - r.W/3, Y: r.Y, W: r.W / 3, H: r.H}, plastic)...)
-		}
+// prepackSymbol is the sleeve of a prepacked screen, which the shared
+// table has no entry for: slotted walls inside a dashed sleeve.
+func prepackSymbol() symbol {
+	sw := func(r draw.Rect) []draw.Item {
+		slotted := partSymbol(symbols.ScreenSlotted)
+		a := draw.Rect{X: r.X + 3, Y: r.Y, W: 2.5, H: r.H}
+		b := draw.Rect{X: r.Right() - 5.5, Y: r.Y, W: 2.5, H: r.H}
+		items := append(slotted.paint(a), slotted.paint(b)...)
+		return append(items, prepackSleeve(a, b)...)
 	}
-	return symbol{key: "screen:" + string(t), label: label, order: 210, paint: sw, swatch: sw}
-}
-
-// slottedWall is a solid wall cut by horizontal slots: dark wall, paper
-// slots, so the openings read in black-and-white print.
-func slottedWall(r draw.Rect, look pipeLook) []draw.Item {
-	wallC, slotC := ink, draw.White
-	if look == stainless {
-		wallC = draw.RGB(90, 90, 90)
-	}
-	items := []draw.Item{box(r, draw.Color{}, 0, wallC, "")}
-	for y := r.Y + 1.2; y < r.Bottom()-0.6; y += 2.4 {
-		items = append(items, box(draw.Rect{X: r.X + r.W*0.18, Y: y, W: r.W * 0.64, H: 0.9}, draw.Color{}, 0, slotC, ""))
-	}
-	return items
-}
-
-// wrapWall is a continuous-wrap screen: fine horizontal wire turns over
-// vertical rods, with open paper between the turns.
-func wrapWall(r draw.Rect) []draw.Item {
-	items := []draw.Item{box(r, draw.Color{}, 0, draw.White, "")}
-	for y := r.Y + 0.5; y < r.Bottom(); y += 1.3 {
-		items = append(items, line(r.X, y, r.Right(), y, 0.55, ink, ""))
-	}
-	items = append(items, line(r.X+0.4, r.Y, r.X+0.4, r.Bottom(), 0.5, ink, ""), line(r.Right()-0.4, r.Y, r.Right()-0.4, r.Bottom(), 0.5, ink, ""))
-	return items
+	return symbol{key: "sheet:prepacked", label: "Prepacked screen sleeve", order: 30000, paint: sw, swatch: sw}
 }
 
 // prepackSleeve is the pack sleeve around a prepacked screen, drawn as a
@@ -296,7 +204,7 @@ func prepackSleeve(left, right draw.Rect) []draw.Item {
 	}
 }
 
-// caps paints a string's top cap (and the measuring point) and bottom cap.
+// caps paints a string's top cap and bottom cap.
 func (p *painter) caps(si int, s schema.String, x float64) []draw.Item {
 	if len(s.Sections) == 0 {
 		return nil
@@ -304,34 +212,30 @@ func (p *painter) caps(si int, s schema.String, x float64) []draw.Item {
 	var items []draw.Item
 	h := p.l.hz
 	top, bot := s.Sections[0], s.Sections[len(s.Sections)-1]
+	capSym := partSymbol(symbols.Cap)
 	rt := float64(od(top.Pipe)) / 2 * h.ppmm
-	if p.visible(top.Top) {
+	if s.TopCap != "" && p.visible(top.Top) {
 		y := p.y(top.Top)
-		if s.TopCap != "" {
-			items = append(items, box(draw.Rect{X: x - rt - 0.8, Y: y - 2.6, W: 2*rt + 1.6, H: 2.6}, ink, 0.4, grey, "topcap:"+stringName(s)))
-			p.use(capSymbol())
-		}
+		r := draw.Rect{X: x - rt - 0.8, Y: y - 2.8, W: 2*rt + 1.6, H: 2.8}
+		items = append(items, box(r, draw.Color{}, 0, draw.Color{}, "topcap:"+stringName(s)))
+		items = append(items, p.use(capSym).paint(r)...)
 	}
 	rb := float64(od(bot.Pipe)) / 2 * h.ppmm
 	if s.BottomCap != "" && p.visible(bot.Bottom) {
 		y := p.y(bot.Bottom)
-		items = append(items, box(draw.Rect{X: x - rb, Y: y - 2.8, W: 2 * rb, H: 2.8}, ink, 0.4, ink, "bottomcap:"+stringName(s)))
-		p.use(capSymbol())
+		r := draw.Rect{X: x - rb, Y: y - 3, W: 2 * rb, H: 3}
+		items = append(items, box(r, draw.Color{}, 0, draw.Color{}, "bottomcap:"+stringName(s)))
+		items = append(items, p.use(capSym).paint(r)...)
 	}
 	return items
 }
 
-func capSymbol() symbol {
-	sw := func(r draw.Rect) []draw.Item {
-		return []draw.Item{box(draw.Rect{X: r.X + 2, Y: r.Y + r.H/2 - 1.5, W: r.W - 4, H: 3}, ink, 0.4, ink, "")}
-	}
-	return symbol{key: "cap", label: "Cap or plug", order: 220, paint: sw, swatch: sw}
-}
-
-// centralizers are bow springs from the pipe toward the hole wall.
+// centralizers are the table's bow springs around the pipe, reaching to
+// just inside the hole wall.
 func (p *painter) centralizers(role string, x float64, d schema.Diameter, at []schema.Length) []draw.Item {
 	var items []draw.Item
 	r := float64(d) / 2 * p.l.hz.ppmm
+	sym := partSymbol(symbols.Centralizer)
 	for _, z := range at {
 		if !p.visible(z) {
 			continue
@@ -339,26 +243,14 @@ func (p *painter) centralizers(role string, x float64, d schema.Diameter, at []s
 		hole := float64(holeAt(p.l.w, z)) / 2 * p.l.hz.ppmm
 		reach := max(hole-r-0.8, 2.0)
 		y := p.y(z)
-		for _, side := range []float64{-1, 1} {
-			x0 := x + side*r
-			items = append(items, draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.7},
-				Points: []draw.Point{{X: x0, Y: y - 4}, {X: x0 + side*reach, Y: y}, {X: x0, Y: y + 4}}, Role: role})
-		}
-		p.use(centralizerSymbol())
+		// The collars span the box's inner 56 %, the bows bulge 22 % beyond:
+		// size the box so the collars meet the pipe and the bows the reach.
+		bw := max(2*(r+reach), 2*r/0.56)
+		rect := draw.Rect{X: x - bw/2, Y: y - 5, W: bw, H: 10}
+		items = append(items, box(rect, draw.Color{}, 0, draw.Color{}, role))
+		items = append(items, p.use(sym).paint(rect)...)
 	}
 	return items
-}
-
-func centralizerSymbol() symbol {
-	sw := func(r draw.Rect) []draw.Item {
-		x := r.X + r.W/2 - 2
-		y := r.Y + r.H/2
-		return []draw.Item{
-			line(x, r.Y, x, r.Bottom(), 0.5, ink, ""),
-			draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.7}, Points: []draw.Point{{X: x, Y: y - 4}, {X: x + 5, Y: y}, {X: x, Y: y + 4}}},
-		}
-	}
-	return symbol{key: "centralizer", label: "Centralizer", order: 230, paint: sw, swatch: sw}
 }
 
 // holeAt is the borehole diameter at a depth, 0 if none.
@@ -378,34 +270,12 @@ func (p *painter) openHole(i int, o schema.OpenHole) []draw.Item {
 	}
 	d := holeAt(p.l.w, (o.Top+o.Bottom)/2)
 	r := float64(d) / 2 * p.l.hz.ppmm
-	p.use(openHoleSymbol())
 	return []draw.Item{box(draw.Rect{X: p.l.hz.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, draw.Color{}, 0, draw.White, "openhole:"+pathOr(o.Path, "open_hole", i))}
 }
 
-func openHoleSymbol() symbol {
-	sw := func(r draw.Rect) []draw.Item {
-		return []draw.Item{roughWall(r.X+3, r.Y, r.Bottom(), -1), roughWall(r.Right()-3, r.Y, r.Bottom(), 1)}
-	}
-	return symbol{key: "openhole", label: "Open hole, rock", order: 240, paint: sw, swatch: sw}
-}
-
-// roughWall is a jagged vertical line: a rock wall. The teeth follow the
-// page y so that two sheets of one wall join without a step.
-func roughWall(x, y0, y1, side float64) draw.Shape {
-	const tooth = 3.0
-	pts := []draw.Point{{X: x, Y: y0}}
-	start := math.Ceil(y0/tooth) * tooth
-	k := int(start / tooth)
-	for y := start; y < y1; y += tooth {
-		off := 0.0
-		if k%2 == 0 {
-			off = side * 1.6
-		}
-		pts = append(pts, draw.Point{X: x + off, Y: y})
-		k++
-	}
-	pts = append(pts, draw.Point{X: x, Y: y1})
-	return draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.8}, Points: pts}
+// roughWall is the table's open-hole wall in a strip centred on x.
+func (p *painter) roughWall(x, y0, y1 float64) []draw.Item {
+	return p.use(partSymbol(symbols.OpenHole)).paint(draw.Rect{X: x - 1.8, Y: y0, W: 3.6, H: y1 - y0})
 }
 
 // holeWalls draws the borehole walls: straight where drilled and cased or
@@ -425,7 +295,8 @@ func (p *painter) holeWalls() []draw.Item {
 				continue
 			}
 			if seg.open {
-				items = append(items, roughWall(h.cx-r, y0, y1, -1), roughWall(h.cx+r, y0, y1, 1))
+				items = append(items, p.roughWall(h.cx-r, y0, y1)...)
+				items = append(items, p.roughWall(h.cx+r, y0, y1)...)
 				continue
 			}
 			for _, x := range []float64{h.cx - r, h.cx + r} {
@@ -543,18 +414,13 @@ func (p *painter) protective() []draw.Item {
 	h := p.l.hz
 	r := float64(pc.Diameter) / 2 * h.ppmm
 	wall := 2.0
-	look := lookOf(pc.Material)
-	if pc.Material == "" {
-		look = steel
-	}
-	p.use(pipeSymbol(look))
-	items := []draw.Item{
-		box(draw.Rect{X: h.cx - r, Y: y0, W: wall, H: y1 - y0}, ink, 0.3, wallFill(look), ""),
-		box(draw.Rect{X: h.cx + r - wall, Y: y0, W: wall, H: y1 - y0}, ink, 0.3, wallFill(look), ""),
-		box(draw.Rect{X: h.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, draw.Color{}, 0, draw.Color{}, "protective"),
-	}
+	sym := p.use(partSymbol(symbols.Casing))
+	items := append(sym.paint(draw.Rect{X: h.cx - r, Y: y0, W: wall, H: y1 - y0}), sym.paint(draw.Rect{X: h.cx + r - wall, Y: y0, W: wall, H: y1 - y0})...)
+	items = append(items, box(draw.Rect{X: h.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, draw.Color{}, 0, draw.Color{}, "protective"))
 	if p.visible(pc.Top) {
-		items = append(items, box(draw.Rect{X: h.cx - r - 1.2, Y: y0 - 2.4, W: 2*r + 2.4, H: 2.4}, ink, 0.4, wallFill(look), "protective-lid"))
+		lid := draw.Rect{X: h.cx - r - 1.2, Y: y0 - 2.4, W: 2*r + 2.4, H: 2.4}
+		items = append(items, box(lid, draw.Color{}, 0, draw.Color{}, "protective-lid"))
+		items = append(items, p.use(partSymbol(symbols.Cap)).paint(lid)...)
 	}
 	return items
 }
@@ -572,14 +438,13 @@ func (p *painter) vault() []draw.Item {
 	}
 	h := p.l.hz
 	r := float64(v.Diameter) / 2 * h.ppmm
-	p.use(pipeSymbol(steel))
-	return []draw.Item{
-		box(draw.Rect{X: h.cx - r + 2, Y: y0, W: 2*r - 4, H: y1 - y0}, draw.Color{}, 0, draw.White, ""),
-		box(draw.Rect{X: h.cx - r, Y: y0, W: 2, H: y1 - y0}, ink, 0.3, ink, ""),
-		box(draw.Rect{X: h.cx + r - 2, Y: y0, W: 2, H: y1 - y0}, ink, 0.3, ink, ""),
-		box(draw.Rect{X: h.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, draw.Color{}, 0, draw.Color{}, "vault"),
-		box(draw.Rect{X: h.cx - r - 1, Y: y0, W: 2*r + 2, H: 2}, ink, 0.3, ink, "vault-lid"),
-	}
+	sym := p.use(partSymbol(symbols.Casing))
+	items := []draw.Item{box(draw.Rect{X: h.cx - r + 2, Y: y0, W: 2*r - 4, H: y1 - y0}, draw.Color{}, 0, draw.White, "")}
+	items = append(items, sym.paint(draw.Rect{X: h.cx - r, Y: y0, W: 2, H: y1 - y0})...)
+	items = append(items, sym.paint(draw.Rect{X: h.cx + r - 2, Y: y0, W: 2, H: y1 - y0})...)
+	lid := draw.Rect{X: h.cx - r - 1, Y: y0, W: 2*r + 2, H: 2}
+	items = append(items, box(draw.Rect{X: h.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, draw.Color{}, 0, draw.Color{}, "vault"), box(lid, draw.Color{}, 0, draw.Color{}, "vault-lid"))
+	return append(items, p.use(partSymbol(symbols.Cap)).paint(lid)...)
 }
 
 // ground draws the ground line across the well column, broken where the
@@ -631,36 +496,10 @@ func (p *painter) waterLevels() []draw.Item {
 			continue
 		}
 		y := p.y(wl.Depth)
-		xi := x + float64(i%3-1)*3.5 // readings close together stay apart
-		items = append(items, waterMark(xi, y, wl.Kind, "water:"+pathOr(wl.Path, "water_level", i))...)
-		p.use(waterSymbol(wl.Kind))
+		xi := x + float64(i%3-1)*3.5                       // readings close together stay apart
+		mark := draw.Rect{X: xi - 4, Y: y - 4, W: 8, H: 8} // the table's mark has its apex at the box's centre
+		items = append(items, box(mark, draw.Color{}, 0, draw.Color{}, "water:"+pathOr(wl.Path, "water_level", i)))
+		items = append(items, p.use(partSymbol(symbols.WaterLevel)).paint(mark)...)
 	}
 	return items
-}
-
-func waterMark(x, y float64, kind schema.LevelKind, role string) []draw.Item {
-	st := draw.Style{Stroke: waterBlue, StrokeWidth: 0.6, Fill: waterBlue}
-	switch kind {
-	case schema.FirstEncountered:
-		st.Fill = draw.White
-	case schema.Pumping:
-		st.Fill = draw.White
-		st.Dash = []float64{0.8, 0.8}
-	}
-	return []draw.Item{
-		draw.Shape{Style: st, Closed: true, Points: []draw.Point{{X: x - 3, Y: y - 4.5}, {X: x + 3, Y: y - 4.5}, {X: x, Y: y}}, Role: role},
-		line(x-3.5, y, x+3.5, y, 0.6, waterBlue, ""),
-		line(x-2.2, y+1.3, x+2.2, y+1.3, 0.5, waterBlue, ""),
-		line(x-1, y+2.6, x+1, y+2.6, 0.5, waterBlue, ""),
-	}
-}
-
-func waterSymbol(kind schema.LevelKind) symbol {
-	label := map[schema.LevelKind]string{schema.FirstEncountered: "Water first found", schema.Pumping: "Pumping water level"}[kind]
-	if label == "" {
-		label = "Static water level"
-		kind = schema.Static
-	}
-	sw := func(r draw.Rect) []draw.Item { return waterMark(r.X+r.W/2, r.Y+r.H*0.6, kind, "") }
-	return symbol{key: "water:" + string(kind), label: label, order: 250, paint: sw, swatch: sw}
 }
