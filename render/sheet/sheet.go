@@ -67,7 +67,7 @@ func Layout(w *schema.Well, in Inputs, opt Options) (*draw.Document, error) {
 		Author:  joinNonEmpty(", ", in.TitleBlock.Consultant, w.LoggedBy),
 		Date:    documentDate(w, opt.Date),
 	}
-	for i := range l.sheets {
+	for i := 0; i < l.sheetCount(); i++ {
 		doc.Pages = append(doc.Pages, l.page(i))
 	}
 	return doc, nil

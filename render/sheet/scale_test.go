@@ -1,0 +1,144 @@
+package sheet
+
+import (
+	"math"
+	"testing"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+func TestParseScale(t *testing.T) {
+	cases := []struct {
+		in   string
+		want Scale
+	}{
+		{"1in=5ft", Imperial(5)},
+		{"1 in = 20 ft", Imperial(20)},
+		{`1"=10'`, Imperial(10)},
+		{"2in=10ft", Imperial(5)},
+		{"1:50", Metric(50)},
+		{"1:200", Metric(200)},
+	}
+	for _, c := range cases {
+		got, err := ParseScale(c.in)
+		if err != nil || got != c.want {
+			t.Errorf("ParseScale(%q) = %v, %v; want %v", c.in, got, err, c.want)
+		}
+	}
+	for _, bad := range []string{"", "1in", "5ft", "0in=5ft", "1in=-5ft", "2:50", "1:0", "1:x", "1in=Infft", "1:NaN"} {
+		if _, err := ParseScale(bad); err == nil {
+			t.Errorf("ParseScale(%q) accepted", bad)
+		}
+	}
+}
+
+// 1 in = 72 pt (PostScript point, as in PDF: ISO 32000-1, 8.3.2.3), so
+// at 1 in = 5 ft a 10-ft interval is 2 in = 144 pt; at 1:50 one metre is
+// 20 mm = 56.69 pt.
+func TestScalePoints(t *testing.T) {
+	if got := Imperial(5).Points(ft(10)); math.Abs(got-144) > 1e-9 {
+		t.Errorf("10 ft at 1 in = 5 ft = %.4f pt, want 144", got)
+	}
+	if got := Metric(50).Points(1); math.Abs(got-20/25.4*72) > 1e-9 {
+		t.Errorf("1 m at 1:50 = %.4f pt, want %.4f", got, 20/25.4*72)
+	}
+	if s := Imperial(5).String(); s != "1 in = 5 ft" {
+		t.Errorf("String = %q", s)
+	}
+}
+
+// The layout draws a 10-ft fill at 1 in = 5 ft 144 pt tall (within
+// 0.5 pt), read from the page items themselves.
+func TestLayoutDrawsToScale(t *testing.T) {
+	w := simpleWell(30)
+	s := Imperial(5)
+	doc := layoutOf(t, w, Inputs{}, Options{Scale: &s})
+	p := doc.Pages[0]
+	// fill[0] is the pack, from screenTop-2 = 17 ft to 30 ft: 13 ft.
+	total := 0.0
+	for _, b := range boxes(p, "interval:fill[0]") {
+		total += b.H
+	}
+	if want := 13.0 / 5 * 72; math.Abs(total-want) > 0.5 {
+		t.Errorf("13-ft pack drawn %.2f pt tall, want %.2f", total, want)
+	}
+	// The screen, 10 ft long.
+	sc := boxes(p, "screen:main[1]")
+	if len(sc) != 1 || math.Abs(sc[0].H-144) > 0.5 {
+		t.Fatalf("10-ft screen boxes %v, want one 144 pt tall", sc)
+	}
+}
+
+// Widths are proportional among themselves: with a hole that steps from
+// 10 in to 6 in around a 2-in riser (OD 2.375 in), the two annulus widths
+// keep the ratio (10 - 2.375) / (6 - 2.375), and the holes 10 : 6.
+func TestAnnulusWidthsKeepDiameterRatio(t *testing.T) {
+	w := simpleWell(40)
+	w.Boreholes = []schema.BoreholeSection{
+		{Interval: schema.Interval{Top: 0, Bottom: ft(20)}, Diameter: in(10), Path: "borehole[0]"},
+		{Interval: schema.Interval{Top: ft(20), Bottom: ft(40)}, Diameter: in(6), Path: "borehole[1]"},
+	}
+	doc := layoutOf(t, w, Inputs{}, Options{})
+	p := doc.Pages[0]
+	h0, h1 := boxes(p, "borehole:borehole[0]"), boxes(p, "borehole:borehole[1]")
+	riser := boxes(p, "riser:main[0]")
+	if len(h0) != 1 || len(h1) != 1 || len(riser) != 1 {
+		t.Fatalf("found %d, %d hole boxes and %d riser boxes", len(h0), len(h1), len(riser))
+	}
+	if got, want := h0[0].W/h1[0].W, 10.0/6; math.Abs(got-want) > 1e-6 {
+		t.Errorf("hole widths ratio %.6f, want %.6f", got, want)
+	}
+	a0 := (h0[0].W - riser[0].W) / 2
+	a1 := (h1[0].W - riser[0].W) / 2
+	if got, want := a0/a1, (10-2.375)/(6-2.375); math.Abs(got-want) > 1e-6 {
+		t.Errorf("annulus ratio %.6f, want %.6f", got, want)
+	}
+	// And the riser is centred in the hole.
+	if c0, cr := h0[0].X+h0[0].W/2, riser[0].X+riser[0].W/2; math.Abs(c0-cr) > 1e-9 {
+		t.Errorf("riser centre %.3f, hole centre %.3f", cr, c0)
+	}
+}
+
+// The automatic scale is the most detailed round scale at which the well
+// fits one sheet: the layout's own body must hold the well at the chosen
+// scale and must not at the next more detailed one.
+func TestAutomaticScaleIsLargestThatFits(t *testing.T) {
+	for _, td := range []float64{8, 25, 36, 60, 140} {
+		w := simpleWell(td)
+		l := newLayout(w, Inputs{}, Options{}, Letter)
+		if err := l.plan(); err != nil {
+			t.Fatal(err)
+		}
+		usable := l.plot.H - plotPadTop - plotPadBottom
+		span := l.bot - l.top
+		if len(l.sheets) != 1 || l.scale.Points(span) > usable {
+			t.Errorf("%g-ft well: scale %v, %d sheets; span %.1f pt in %.1f pt", td, l.scale, len(l.sheets), l.scale.Points(span), usable)
+			continue
+		}
+		cs := candidates(true)
+		for i, c := range cs {
+			if c == l.scale && i > 0 && cs[i-1].Points(span) <= usable {
+				t.Errorf("%g-ft well: chose %v but %v fits", td, l.scale, cs[i-1])
+			}
+		}
+	}
+}
+
+func TestMetricScaleNames(t *testing.T) {
+	w := simpleWell(30)
+	w.Units = schema.DefaultUnits(schema.Metres)
+	l := newLayout(w, Inputs{}, Options{}, A4)
+	if err := l.plan(); err != nil {
+		t.Fatal(err)
+	}
+	if l.scale.Imperial {
+		t.Fatalf("a well in metres got %v", l.scale)
+	}
+	ok := false
+	for _, n := range metricSteps {
+		ok = ok || l.scale.Ratio == n
+	}
+	if !ok {
+		t.Errorf("scale %v is not a round metric scale", l.scale)
+	}
+}
