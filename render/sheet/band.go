@@ -223,6 +223,9 @@ func (l *layout) noteBlocks(width float64) []noteBlock {
 		label := strings.ToUpper(f.Label())
 		s := fmt.Sprintf("%s %s (line %d): %s", label, f.Rule, f.Line, f.Message)
 		if f.Waived && f.Waiver != nil {
+			if !strings.HasSuffix(s, ".") {
+				s += "."
+			}
 			s += fmt.Sprintf(" Waived: %s (%s", f.Waiver.Reason, f.Waiver.ApprovedBy)
 			if f.Waiver.Date != "" {
 				s += ", " + f.Waiver.Date

@@ -178,8 +178,11 @@ func (l *layout) callouts() []callout {
 	// Annular fills.
 	for i, f := range w.Fills {
 		title := materialName(f.Material)
-		if f.Gradation != "" {
+		switch {
+		case f.Gradation != "":
 			title += " " + f.Gradation
+		case f.GrainMin > 0 && f.GrainMax > 0:
+			title += fmt.Sprintf(" %s–%s mm", schema.TrimFloat(float64(f.GrainMin), 2), schema.TrimFloat(float64(f.GrainMax), 2))
 		}
 		var lines []string
 		minor := map[int]bool{}
@@ -197,7 +200,9 @@ func (l *layout) callouts() []callout {
 		lines = append(lines, where)
 		if r, ok := l.amountRow(i); ok {
 			lines = append(lines, "calc. "+l.calculated(r))
-			lines = append(lines, "placed "+l.placed(r)+ratioSuffix(ratio(r)))
+			if r.Recorded {
+				lines = append(lines, "placed "+l.placed(r)+ratioSuffix(ratio(r)))
+			}
 		}
 		fi := f
 		add(callout{key: "interval:" + pathOr(f.Path, "fill", i), iv: f.Interval, anchorX: func(d schema.Length) float64 { return l.annulusX(fi, d) }, title: title, lines: lines, minor: minor, rank: 6})

@@ -80,7 +80,7 @@ func (p *painter) lithology() []draw.Item {
 	// Ground line across the log columns.
 	if p.visible(0) {
 		y := p.y(0)
-		out = append(out, line(lc.X, y, dc.Right(), y, 1.1, ink, "ground"))
+		out = append(out, line(lc.X, y, dc.X+5, y, 1.1, ink, "ground"))
 	}
 	return append(out, items...)
 }
