@@ -41,11 +41,10 @@ func (l *layout) hasAmounts() bool { return l.in.Quantities != nil && len(l.in.Q
 // legendFor paints the whole range once, without keeping the drawing,
 // to learn which symbols it uses.
 func (l *layout) legendFor(sp span) []symbol {
-	// A scale is needed to paint; any will do for the set of symbols.
+	// A scale is needed to paint; any will do for the set of symbols, and
+	// a very small one paints the fewest marks.
 	saved := l.scale
-	if l.scale.Ratio == 0 {
-		l.scale = Metric(100)
-	}
+	l.scale = Metric(1e6)
 	p := l.painter(sp, true, true)
 	p.lithology()
 	p.well()

@@ -216,3 +216,57 @@ func TestManyFindingsContinueOnNotesSheet(t *testing.T) {
 		t.Errorf("continuation note %q", got)
 	}
 }
+
+// Odd or incomplete wells lay out or fail with an error; none panics.
+func TestOddWellsDoNotPanic(t *testing.T) {
+	odd := map[string]func(w *schema.Well){
+		"no borehole":          func(w *schema.Well) { w.Boreholes = nil },
+		"no string":            func(w *schema.Well) { w.Strings = nil },
+		"empty string":         func(w *schema.Well) { w.Strings[0].Sections = nil },
+		"no diameters":         func(w *schema.Well) { w.Strings[0].Sections[0].Pipe = schema.Pipe{} },
+		"fill within nothing":  func(w *schema.Well) { w.Fills[0].Within = "nowhere" },
+		"zero total depth":     func(w *schema.Well) { *w = schema.Well{ID: "Z"} },
+		"centralizer off hole": func(w *schema.Well) { w.Strings[0].Centralizers = []schema.Length{ft(500)} },
+		"huge depth":           func(w *schema.Well) { w.TotalDepth = ft(1e7) },
+		"nested three":         func(w *schema.Well) { w.Strings = append(w.Strings, w.Strings[0], w.Strings[0]) },
+		"surface everything": func(w *schema.Well) {
+			w.Surface = schema.Surface{Kind: schema.StickUp, Protective: &schema.Protective{Interval: schema.Interval{Top: ft(-3), Bottom: ft(2)}, Diameter: in(6)},
+				Vault: &schema.Vault{Diameter: in(8), Depth: ft(1)}, Pad: &schema.Pad{Length: ft(40), Width: ft(4), Thickness: ft(0.5)}}
+		},
+		"open hole no borehole": func(w *schema.Well) { w.OpenHoles = []schema.OpenHole{{Interval: schema.Interval{Top: ft(5), Bottom: ft(50)}}} },
+	}
+	for name, mutate := range odd {
+		t.Run(name, func(t *testing.T) {
+			w := simpleWell(30)
+			mutate(w)
+			doc, err := Layout(w, Inputs{}, Options{})
+			if err == nil && (doc == nil || len(doc.Pages) == 0) {
+				t.Error("no error and no pages")
+			}
+		})
+	}
+	if _, err := Layout(nil, Inputs{}, Options{}); err == nil {
+		t.Error("a nil well laid out")
+	}
+	bad := Page{Name: "stamp", Width: 100, Height: 100}
+	if _, err := Layout(simpleWell(30), Inputs{}, Options{Page: bad}); err == nil {
+		t.Error("a 100-pt page accepted")
+	}
+}
+
+func BenchmarkLayoutDeepWell(b *testing.B) {
+	w := deepWell()
+	for b.Loop() {
+		if _, err := Layout(w, Inputs{}, Options{}); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+// BenchmarkLayoutDemo loads, checks, quantifies and lays out the seven
+// demo wells.
+func BenchmarkLayoutDemo(b *testing.B) {
+	for b.Loop() {
+		demoDocs(b)
+	}
+}
