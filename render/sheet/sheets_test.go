@@ -233,7 +233,9 @@ func TestOddWellsDoNotPanic(t *testing.T) {
 			w.Surface = schema.Surface{Kind: schema.StickUp, Protective: &schema.Protective{Interval: schema.Interval{Top: ft(-3), Bottom: ft(2)}, Diameter: in(6)},
 				Vault: &schema.Vault{Diameter: in(8), Depth: ft(1)}, Pad: &schema.Pad{Length: ft(40), Width: ft(4), Thickness: ft(0.5)}}
 		},
-		"open hole no borehole": func(w *schema.Well) { w.OpenHoles = []schema.OpenHole{{Interval: schema.Interval{Top: ft(5), Bottom: ft(50)}}} },
+		"open hole no borehole": func(w *schema.Well) {
+			w.OpenHoles = []schema.OpenHole{{Interval: schema.Interval{Top: ft(5), Bottom: ft(50)}}}
+		},
 	}
 	for name, mutate := range odd {
 		t.Run(name, func(t *testing.T) {
