@@ -256,7 +256,7 @@ func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
 func (l *layout) scaleBar(x0, y, x1 float64) []draw.Item {
 	perUnit := l.scale.Points(schema.LengthFrom(1, l.u.Depth))
 	zeroW := draw.TextWidth(draw.Regular, sizeTiny, "0") + 2
-	room := x1 - x0 - zeroW - draw.TextWidth(draw.Regular, sizeTiny, " 1000 ft")
+	room := min(x1-x0-zeroW-draw.TextWidth(draw.Regular, sizeTiny, " 1000 ft"), 100)
 	if room < 12 {
 		return nil
 	}
