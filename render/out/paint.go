@@ -190,7 +190,6 @@ func (p *painter) path(cp *canvas.Path, s draw.Style, clip *draw.Rect, joins boo
 	case !cr.Overlaps(b):
 		return
 	}
-	clipPath := rectPath(cr)
 	if fill {
 		fs := canvas.DefaultStyle
 		fs.Fill = st.Fill
@@ -199,7 +198,7 @@ func (p *painter) path(cp *canvas.Path, s draw.Style, clip *draw.Rect, joins boo
 			area = cp.Copy()
 			area.Close()
 		}
-		if part := area.And(clipPath); !part.Empty() {
+		if part := clipToRect(area, cr); !part.Empty() {
 			p.r.RenderPath(part, fs, canvas.Identity)
 		}
 	}
@@ -211,7 +210,7 @@ func (p *painter) path(cp *canvas.Path, s draw.Style, clip *draw.Rect, joins boo
 		outline = outline.Stroke(st.StrokeWidth, canvas.ButtCap, canvas.MiterJoin, canvas.Tolerance)
 		ss := canvas.DefaultStyle
 		ss.Fill = st.Stroke
-		if part := outline.And(clipPath); !part.Empty() {
+		if part := clipToRect(outline, cr); !part.Empty() {
 			p.r.RenderPath(part, ss, canvas.Identity)
 		}
 	}
@@ -284,7 +283,7 @@ func (p *painter) text(t draw.Text, clip *draw.Rect, path string) {
 			}
 			st := canvas.DefaultStyle
 			st.Fill = canvas.Paint{Color: rgba(col)}
-			if part := outline.Transform(m).And(rectPath(cr)); !part.Empty() {
+			if part := clipToRect(outline.Transform(m), cr); !part.Empty() {
 				p.r.RenderPath(part, st, canvas.Identity)
 			}
 			return
