@@ -1,0 +1,201 @@
+package book
+
+import (
+	"bytes"
+	"io/fs"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"strconv"
+	"strings"
+	"testing"
+	"time"
+
+	"github.com/pdfcpu/pdfcpu/pkg/api"
+	"github.com/pdfcpu/pdfcpu/pkg/pdfcpu/model"
+
+	"github.com/tremie-dev/tremie/cmd/tremie/demo"
+	"github.com/tremie-dev/tremie/render/out"
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/table"
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/project"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+// demoInput binds the demo project, plus one file that cannot be read.
+func demoInput(t *testing.T) (Input, []int) {
+	t.Helper()
+	pt, err := demo.FS.ReadFile("project.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := project.Parse(".", "project.toml", pt)
+	if err != nil {
+		t.Fatal(err)
+	}
+	names, _ := fs.Glob(demo.FS, "wells/*.toml")
+	var entries []table.Entry
+	var wells []Well
+	var pages []int
+	for _, n := range names {
+		data, _ := demo.FS.ReadFile(n)
+		w, err := schema.Load(n, data)
+		if err != nil {
+			t.Fatal(err)
+		}
+		project.Apply(p, w)
+		fds := rules.Check(w, nil)
+		doc := stubSheets(w, 1+len(wells)%2)
+		pdf, err := out.PDF(doc)
+		if err != nil {
+			t.Fatal(err)
+		}
+		entries = append(entries, table.Entry{File: n, Well: w, Findings: fds})
+		wells = append(wells, Well{ID: w.ID, File: n, Findings: fds, Sheets: pdf})
+		pages = append(pages, len(doc.Pages))
+	}
+	bad := "wells/ZZ-9.toml"
+	entries = append(entries, table.Entry{File: bad, Err: &schema.Error{File: bad, Line: 3, Msg: "TOML syntax: unterminated string"}})
+	wells = append(wells, Well{File: bad, Problem: "wells/ZZ-9.toml:3: TOML syntax: unterminated string"})
+	pages = append(pages, 0)
+	in := Input{Project: p, Date: time.Date(2026, 6, 15, 0, 0, 0, 0, time.UTC), Table: table.Build(entries, p.Units), Wells: wells}
+	return in, pages
+}
+
+// stubSheets stands in for a well's laid-out sheets (package
+// render/sheet): n letter pages through the real PDF backend.
+func stubSheets(w *schema.Well, n int) *draw.Document {
+	doc := &draw.Document{Title: w.ID, Date: "2026-06-15T00:00:00Z"}
+	for i := 0; i < n; i++ {
+		pg := &draw.Page{Width: 612, Height: 792}
+		pg.Add(draw.Box{Style: draw.Style{Stroke: draw.Black, StrokeWidth: 1}, Rect: draw.Rect{X: 28, Y: 28, W: 556, H: 736}})
+		pg.Add(draw.Text{At: draw.Point{X: 40, Y: 60}, S: w.ID + " sheet " + strconv.Itoa(i+1) + " — 2 in ± 0.1°", Size: 14})
+		doc.Pages = append(doc.Pages, pg)
+	}
+	return doc
+}
+
+func TestBookValidatesWithBookmarksPerWell(t *testing.T) {
+	in, pages := demoInput(t)
+	pdf, err := Build(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	// pdfcpu's validator, in its strict mode.
+	conf := model.NewDefaultConfiguration()
+	conf.ValidationMode = model.ValidationStrict
+	if err := api.Validate(bytes.NewReader(pdf), conf); err != nil {
+		t.Fatalf("pdfcpu validation: %v", err)
+	}
+	bms, err := api.Bookmarks(bytes.NewReader(pdf), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	top := map[string]int{}
+	var wellMarks []string
+	for _, b := range bms {
+		top[b.Title] = b.PageFrom
+		if b.Title == "Well sheets" {
+			for _, k := range b.Kids {
+				wellMarks = append(wellMarks, k.Title)
+			}
+		}
+	}
+	var drawn []string
+	sheets := 0
+	for i, w := range in.Wells {
+		if w.Sheets != nil {
+			drawn = append(drawn, w.ID)
+			sheets += pages[i]
+		}
+	}
+	if strings.Join(wellMarks, " ") != strings.Join(drawn, " ") {
+		t.Errorf("well bookmarks %v, want %v", wellMarks, drawn)
+	}
+	if top["Cover"] != 1 || top["Contents"] != 2 || top["Construction summary"] <= 2 || top["Findings and waivers"] < top["Construction summary"] {
+		t.Errorf("outline %v", top)
+	}
+	// cover + contents + table pages + sheets: the sheets begin right
+	// after the tables, and nothing follows the last sheet.
+	n, err := api.PageCount(bytes.NewReader(pdf), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	contentsPages := top["Construction summary"] - 2
+	tablePages := top["Well sheets"] - top["Construction summary"]
+	if n != 1+contentsPages+tablePages+sheets || contentsPages != 1 || tablePages < 2 {
+		t.Errorf("%d pages; contents %d, tables %d, sheets %d", n, contentsPages, tablePages, sheets)
+	}
+}
+
+func TestBookIsDeterministic(t *testing.T) {
+	in, _ := demoInput(t)
+	a, err := Build(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, _ := Build(in)
+	if !bytes.Equal(a, b) {
+		t.Fatal("two builds differ")
+	}
+	if !bytes.Contains(a, []byte("/CreationDate(D:20260615000000+00'00')")) {
+		t.Error("creation date not pinned to the input date")
+	}
+	in.Date = in.Date.AddDate(0, 0, 1)
+	c, _ := Build(in)
+	if bytes.Equal(a, c) {
+		t.Error("a different date gave the same bytes")
+	}
+}
+
+// TestBookText reads the book back with poppler's pdftotext, where
+// installed: the caution is on the cover and after the findings, the
+// contents name every well, and non-ASCII text survives the UTF-8 font.
+func TestBookText(t *testing.T) {
+	bin, err := exec.LookPath("pdftotext")
+	if err != nil {
+		t.Skip("pdftotext not installed")
+	}
+	in, _ := demoInput(t)
+	in.Project.Client = "Brennick Valley Water Authority — Ångström Division ±µ°"
+	pdf, err := Build(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	path := filepath.Join(t.TempDir(), "book.pdf")
+	os.WriteFile(path, pdf, 0o644)
+	page := func(first, last int) string {
+		out, err := exec.Command(bin, "-f", itoa(first), "-l", itoa(last), "-layout", path, "-").Output()
+		if err != nil {
+			t.Fatal(err)
+		}
+		return strings.Join(strings.Fields(string(out)), " ")
+	}
+	caution := strings.Join(strings.Fields(Caution), " ")
+	if c := page(1, 1); !strings.Contains(c, caution) || !strings.Contains(c, "Ångström Division ±µ°") {
+		t.Errorf("cover:\n%s", c)
+	}
+	contents := page(2, 2)
+	for _, w := range in.Wells {
+		if !strings.Contains(contents, w.Name()) {
+			t.Errorf("contents lack %s:\n%s", w.Name(), contents)
+		}
+	}
+	if !strings.Contains(contents, "not drawn") {
+		t.Errorf("contents do not say the unreadable file was not drawn:\n%s", contents)
+	}
+	bms, _ := api.Bookmarks(bytes.NewReader(pdf), nil)
+	var sheetsAt int
+	for _, b := range bms {
+		if b.Title == "Well sheets" {
+			sheetsAt = b.PageFrom
+		}
+	}
+	tables := page(3, sheetsAt-1)
+	if !strings.Contains(tables, caution) || !strings.Contains(tables, "Findings and waivers") || !strings.Contains(tables, "MW-3") {
+		t.Errorf("tables:\n%s", tables)
+	}
+}
+
+func itoa(n int) string { return strconv.Itoa(n) }

@@ -1,0 +1,131 @@
+package book
+
+import (
+	"bytes"
+	"fmt"
+	"strconv"
+	"strings"
+
+	"github.com/go-pdf/fpdf"
+
+	"github.com/tremie-dev/tremie/render/table"
+)
+
+// summaryColumns are the summary table's columns the book prints (the
+// coordinates stay in the CSV and XLSX: they do not fit a page), with
+// their relative widths.
+var summaryColumns = []struct {
+	header string
+	width  float64
+}{
+	{"Well", 1.1}, {"Purpose", 1.3}, {"Ground elev.", 1.1}, {"MP elev.", 1}, {"Total depth", 0.9},
+	{"Casing size", 1.3}, {"Casing material", 1.1}, {"Screen top", 0.9}, {"Screen bottom", 1},
+	{"Screen top elev.", 1}, {"Screen bottom elev.", 1}, {"Slot", 1}, {"Filter pack", 2},
+	{"Seal", 1.8}, {"Grout", 2}, {"Water level", 0.9}, {"Water level date", 1.45},
+	{"Water level elev.", 1}, {"Check status", 1.3},
+}
+
+// typesetTables sets the summary and the findings on landscape pages
+// numbered from first, and returns the PDF, its page count and the page
+// (1-based, within it) where the findings begin.
+func typesetTables(in Input, first int) ([]byte, int, int, error) {
+	f := newDoc(in, true)
+	footer(f, in, first)
+
+	cols := in.Table.Columns()
+	byHeader := map[string]table.Column{}
+	for _, c := range cols {
+		byHeader[c.Header] = c
+	}
+	var gc []gridCol
+	var picked []table.Column
+	for _, sc := range summaryColumns {
+		c, ok := byHeader[sc.header]
+		if !ok {
+			continue
+		}
+		numeric := false
+		for _, r := range in.Table.Rows {
+			numeric = numeric || c.Value(r).Num != nil
+		}
+		gc = append(gc, gridCol{title: c.Title(), width: sc.width, right: numeric})
+		picked = append(picked, c)
+	}
+	g := newGrid(f, fmt.Sprintf("Construction summary (depths below ground and elevations in %s)", in.Table.Units), gc, 6)
+	g.page(false)
+	for _, r := range in.Table.Rows {
+		cells := make([]string, len(picked))
+		for i, c := range picked {
+			cells[i] = c.Value(r).String()
+		}
+		if r.ID == "" {
+			cells[0] = r.File
+		}
+		g.row(cells)
+	}
+
+	findingsAt := f.PageNo() + 1
+	fg := newGrid(f, "Findings and waivers", []gridCol{
+		{title: "Well", width: 1.2}, {title: "Rule", width: 2.4}, {title: "Status", width: 0.9},
+		{title: "Line", width: 0.6, right: true}, {title: "Finding", width: 7}, {title: "Waiver", width: 3.2},
+	}, 7)
+	fg.intro = tally(in)
+	fg.page(false)
+	for _, w := range in.Wells {
+		if w.Problem != "" && w.Sheets == nil {
+			fg.row([]string{w.Name(), "—", "not drawn", "", w.Problem, ""})
+		}
+		for _, fd := range w.Findings {
+			waiver := ""
+			if fd.Waiver != nil {
+				waiver = strings.TrimSuffix(fd.Waiver.Reason+" — "+fd.Waiver.ApprovedBy+", "+fd.Waiver.Date, ", ")
+			}
+			fg.row([]string{w.Name(), fd.Rule, fd.Label(), strconv.Itoa(fd.Line), fd.Message, waiver})
+		}
+	}
+	if f.GetY()+20 > fg.bottom {
+		fg.page(true)
+	}
+	f.Ln(3)
+	f.SetFont(family, "I", 8)
+	f.MultiCell(0, 4, in.Caution, "", "L", false)
+
+	var buf bytes.Buffer
+	if err := f.Output(&buf); err != nil {
+		return nil, 0, 0, fmt.Errorf("book: tables: %w", err)
+	}
+	return buf.Bytes(), f.PageNo(), findingsAt, nil
+}
+
+// tally counts the wells by check status.
+func tally(in Input) string {
+	counts := map[table.Status]int{}
+	for _, r := range in.Table.Rows {
+		counts[r.Status]++
+	}
+	var parts []string
+	for _, s := range []table.Status{table.Clean, table.Warnings, table.Errors, table.Waived, table.Unreadable} {
+		if counts[s] > 0 {
+			parts = append(parts, fmt.Sprintf("%d %s", counts[s], s))
+		}
+	}
+	return fmt.Sprintf("%d wells: %s.", len(in.Table.Rows), strings.Join(parts, ", ")) + " Wells without findings are not listed. A waived finding is listed with its waiver and no longer fails the check."
+}
+
+// footer numbers pages from first and names the project.
+func footer(f *fpdf.Fpdf, in Input, first int) {
+	f.SetFooterFunc(func() {
+		_, h := f.GetPageSize()
+		f.SetXY(14, h-10)
+		f.SetFont(family, "", 7)
+		f.SetTextColor(90, 90, 90)
+		left := in.Project.Name
+		if r := in.Project.TitleBlock.ReportNumber; r != "" {
+			left += " · " + r
+		}
+		f.CellFormat(0, 4, left, "", 0, "L", false, 0, "")
+		f.SetX(14)
+		f.CellFormat(0, 4, fmt.Sprintf("page %d", first+f.PageNo()-1), "", 0, "R", false, 0, "")
+		f.SetTextColor(0, 0, 0)
+	})
+}
