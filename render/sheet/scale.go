@@ -72,10 +72,10 @@ func ParseScale(s string) (Scale, error) {
 // stops at the last readable one (index readable); past it the well goes
 // on over several sheets rather than shrinking further.
 var (
-	imperialSteps    = []float64{1, 2, 5, 10, 20, 50, 100, 200, 500} // ft per in
-	metricSteps      = []float64{20, 50, 100, 200, 500, 1000, 2000}  // 1:N
-	imperialReadable = 50.0                                          // 1 in = 50 ft: a 2-ft seal is 2.9 pt
-	metricReadable   = 500.0                                         // 1:500: a 1-m seal is 5.7 pt
+	imperialSteps    = []float64{1, 2, 5, 10, 20, 30, 40, 50, 100, 200, 500} // ft per in: 1-2-5 steps plus the 30 and 40 of the engineer's scale (common practice)
+	metricSteps      = []float64{20, 50, 100, 200, 500, 1000, 2000}          // 1:N
+	imperialReadable = 50.0                                                  // 1 in = 50 ft: a 2-ft seal is 2.9 pt
+	metricReadable   = 500.0                                                 // 1:500: a 1-m seal is 5.7 pt
 )
 
 // candidates lists the automatic scales for the units, most detailed
