@@ -15,8 +15,8 @@ import (
 	"github.com/pdfcpu/pdfcpu/pkg/pdfcpu/model"
 
 	"github.com/tremie-dev/tremie/cmd/tremie/demo"
-	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/table"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/project"
