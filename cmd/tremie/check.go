@@ -5,6 +5,7 @@ import (
 	"errors"
 	"flag"
 	"fmt"
+	"github.com/tremie-dev/tremie/cmd/internal/batch"
 	"io"
 	"strings"
 
@@ -140,28 +141,41 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	if !ok {
 		return exitUsage
 	}
+	in, findErrs := collectInputs(opts.paths)
+	files := in.files
+	for _, e := range findErrs {
+		fmt.Fprintf(stderr, "tremie check: %v\n", e)
+	}
+	profile := opts.profile
+	if profile == "" {
+		profile = in.profile
+	}
 	var prof *rules.Profile
-	if opts.profile != "" {
-		p, err := rules.LoadProfile(opts.profile)
+	if profile != "" {
+		p, err := rules.LoadProfile(profile)
 		if err != nil {
-			for _, e := range schemaErrors(opts.profile, err) {
+			for _, e := range schemaErrors(profile, err) {
 				fmt.Fprintln(stderr, e)
 			}
 			return exitInput
 		}
 		prof = p
 	}
-	files, findErrs := schema.FindWells(opts.paths)
-	for _, e := range findErrs {
-		fmt.Fprintf(stderr, "tremie check: %v\n", e)
-	}
 	if len(files) == 0 && len(findErrs) == 0 {
 		fmt.Fprintf(stderr, "tremie check: no well files found in %s\n", strings.Join(opts.paths, ", "))
 		return exitInput
 	}
-	results := make([]fileResult, len(files))
-	for i, f := range files {
-		results[i] = checkFile(f, prof)
+	// Every file on its own worker; results come back in input order, so
+	// the report is the same on every run.
+	res, _ := batch.Run(files, batch.Options{Progress: batch.Terminal(), Label: "checking"}, func(_ int, f string) (fileResult, batch.Outcome, error) {
+		return checkFile(f, prof), batch.Done, nil
+	})
+	results := make([]fileResult, len(res))
+	for i, r := range res {
+		results[i] = r.Value
+		if r.Err != nil { // a panic caught by the runner
+			results[i] = fileResult{Path: files[i], Errors: []*schema.Error{{File: files[i], Msg: r.Err.Error()}}}
+		}
 	}
 	for _, r := range results {
 		for _, e := range r.Errors {

@@ -148,7 +148,7 @@ func TestCheckBadFileAmongGood(t *testing.T) {
 	put(t, dir, "a/OK-1.toml", sealedWell)
 	put(t, dir, "b/BAD-1.toml", unsealedWell)
 	put(t, dir, "c/TYPO.toml", strings.Replace(sealedWell, "bottom = 36.0\ndiameter", "botom = 36.0\ndiameter", 1))
-	put(t, dir, "project.toml", "[project]\nname = \"x\"\n")
+	put(t, dir, "project.toml", "[project]\nname = \"x\"\nwells = \".\"\n")
 	put(t, dir, "county.profile.toml", "[profile]\nname = \"x\"\n")
 	code, out, errb := runTremie("check", dir)
 	if code != exitInput {

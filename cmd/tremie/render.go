@@ -336,7 +336,12 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 		}
 	}
 	code := exitOK
-	files, prjProfile, errs := collectRenderInputs(paths, &opts)
+	in, errs := collectInputs(paths)
+	files, prjProfile := in.files, in.profile
+	opts.projects = in.projects
+	if opts.outDir == "" {
+		opts.outDir = in.outDir
+	}
 	for _, e := range errs {
 		fmt.Fprintf(stderr, "tremie render: %v\n", e)
 		code = exitInput
@@ -407,80 +412,6 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	}
 	fmt.Fprintln(stdout, "Sheets support, and never replace, the review of a licensed professional and the governing local well code.")
 	return code
-}
-
-// collectRenderInputs expands the arguments: a project directory gives
-// its well files (with the project, its output directory and profile);
-// other directories and files are searched as tremie check does.
-func collectRenderInputs(paths []string, opts *renderOptions) (files []string, profile string, errs []error) {
-	seen := map[string]bool{}
-	add := func(f string, p *project.Project) {
-		if !seen[f] {
-			seen[f] = true
-			files = append(files, f)
-			if p != nil {
-				opts.projects[f] = p
-			}
-		}
-	}
-	for _, a := range paths {
-		if st, err := os.Stat(a); err == nil && st.IsDir() {
-			if _, err := os.Stat(filepath.Join(a, project.FileName)); err == nil {
-				p, err := project.Load(a)
-				if err != nil {
-					errs = append(errs, err)
-					continue
-				}
-				wf, err := p.WellFiles()
-				if err != nil {
-					errs = append(errs, err)
-					continue
-				}
-				for _, f := range wf {
-					add(f, p)
-				}
-				if opts.outDir == "" {
-					opts.outDir = p.Output
-				}
-				if profile == "" {
-					profile = p.ProfilePath()
-				}
-				continue
-			}
-		}
-		found, ferrs := schema.FindWells([]string{a})
-		errs = append(errs, ferrs...)
-		for _, f := range found {
-			p, err := enclosingProject(f)
-			if err != nil {
-				errs = append(errs, err)
-			}
-			add(f, p)
-		}
-	}
-	return files, profile, errs
-}
-
-// enclosingProject finds the project a well file belongs to: a
-// project.toml in its directory or up to three directories above. None
-// is not an error; an unreadable one is.
-func enclosingProject(file string) (*project.Project, error) {
-	dir := filepath.Dir(file)
-	for i := 0; i < 4; i++ {
-		if _, err := os.Stat(filepath.Join(dir, project.FileName)); err == nil {
-			p, err := project.Load(dir)
-			if err != nil {
-				return nil, err
-			}
-			return p, nil
-		}
-		parent := filepath.Dir(dir)
-		if parent == dir {
-			break
-		}
-		dir = parent
-	}
-	return nil, nil
 }
 
 // worse keeps the more serious exit code: input and output failures over
