@@ -80,12 +80,14 @@ func (c *Cache) Dir() string { return c.dir }
 
 // Fresh reports whether the well under key was last drawn from inputs
 // with this hash into exactly these outputs (relative to the output
-// directory), and every one of them is still there.
+// directory), and every one of them is still there. With nil outputs
+// (names known only after layout, e.g. one file per sheet) the outputs
+// recorded last time are checked instead.
 func (c *Cache) Fresh(key, hash string, outputs []string) bool {
 	c.mu.Lock()
 	e, ok := c.entries[key]
 	c.mu.Unlock()
-	if !ok || e.Hash != hash || !slices.Equal(e.Outputs, sorted(outputs)) {
+	if !ok || e.Hash != hash || (outputs != nil && !slices.Equal(e.Outputs, sorted(outputs))) {
 		return false
 	}
 	for _, o := range e.Outputs {

@@ -164,6 +164,21 @@ func TestProjectSettingRedrawsAll(t *testing.T) {
 	}
 }
 
+func TestFreshWithRecordedOutputs(t *testing.T) {
+	dir := t.TempDir()
+	c, _ := Load(dir)
+	os.WriteFile(filepath.Join(dir, "a-sheet1.svg"), nil, 0o644)
+	os.WriteFile(filepath.Join(dir, "a-sheet2.svg"), nil, 0o644)
+	c.Record("a.toml", "h", []string{"a-sheet2.svg", "a-sheet1.svg"})
+	if !c.Fresh("a.toml", "h", nil) || c.Fresh("a.toml", "other", nil) || c.Fresh("a.toml", "h", []string{"a.svg"}) {
+		t.Error("Fresh with nil outputs must check the recorded ones and the hash")
+	}
+	os.Remove(filepath.Join(dir, "a-sheet2.svg"))
+	if c.Fresh("a.toml", "h", nil) {
+		t.Error("a recorded output is gone")
+	}
+}
+
 func TestMissingOutputIsRedrawn(t *testing.T) {
 	dir := newProject(t, 3)
 	renderProject(t, dir, false)

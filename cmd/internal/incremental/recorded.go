@@ -1,0 +1,26 @@
+package incremental
+
+import (
+	"os"
+	"path/filepath"
+	"slices"
+)
+
+// Recorded returns the outputs recorded for key when they were drawn from
+// the same hash and are all still on disk. It serves callers that learn a
+// well's outputs only by drawing it (a multi-sheet well has one file per
+// sheet), where Fresh needs them beforehand.
+func (c *Cache) Recorded(key, hash string) ([]string, bool) {
+	c.mu.Lock()
+	e, ok := c.entries[key]
+	c.mu.Unlock()
+	if !ok || e.Hash != hash || len(e.Outputs) == 0 {
+		return nil, false
+	}
+	for _, o := range e.Outputs {
+		if _, err := os.Stat(filepath.Join(c.dir, filepath.FromSlash(o))); err != nil {
+			return nil, false
+		}
+	}
+	return slices.Clone(e.Outputs), true
+}

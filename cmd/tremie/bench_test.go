@@ -1,0 +1,275 @@
+package main
+
+import (
+	"fmt"
+	"os"
+	"path/filepath"
+	"runtime"
+	"sync"
+	"sync/atomic"
+	"testing"
+	"time"
+
+	"github.com/tremie-dev/tremie/cmd/internal/batch"
+	"github.com/tremie-dev/tremie/cmd/internal/incremental"
+	"github.com/tremie-dev/tremie/cmd/internal/synth"
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/out"
+	"github.com/tremie-dev/tremie/render/sheet"
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/project"
+	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+// wellsPerSecond reports the benchmark's throughput in wells.
+func wellsPerSecond(b *testing.B, wellsPerOp int) {
+	b.ReportMetric(float64(wellsPerOp*b.N)/b.Elapsed().Seconds(), "wells/s")
+}
+
+// BenchmarkLoadAndCheckOneWell: parse a typical synthetic well and run
+// every rule on it.
+func BenchmarkLoadAndCheckOneWell(b *testing.B) {
+	text := synth.Well(1)
+	for b.Loop() {
+		w, err := schema.Load("w.toml", text)
+		if err != nil {
+			b.Fatal(err)
+		}
+		rules.Check(w, nil)
+	}
+	wellsPerSecond(b, 1)
+}
+
+// BenchmarkCheckParallel: the same across every CPU, as check runs a
+// project.
+func BenchmarkCheckParallel(b *testing.B) {
+	texts := make([][]byte, 64)
+	for i := range texts {
+		texts[i] = synth.Well(i)
+	}
+	var n atomic.Int64
+	b.RunParallel(func(pb *testing.PB) {
+		for pb.Next() {
+			i := n.Add(1)
+			w, err := schema.Load("w.toml", texts[i%64])
+			if err != nil {
+				b.Fatal(err)
+			}
+			rules.Check(w, nil)
+		}
+	})
+	wellsPerSecond(b, 1)
+}
+
+func typicalDoc(b *testing.B) *sheetDoc {
+	b.Helper()
+	w, err := schema.Load("w.toml", synth.Well(1))
+	if err != nil {
+		b.Fatal(err)
+	}
+	fs := rules.Check(w, nil)
+	page, _ := pageFor("letter", false)
+	in := sheet.Inputs{Findings: fs, Quantities: quantity.Compute(w, nil)}
+	doc, err := sheet.Layout(w, in, sheet.Options{Page: page, Date: "2026-01-01T00:00:00Z"})
+	if err != nil {
+		b.Fatal(err)
+	}
+	return &sheetDoc{w: w, in: in, page: page, doc: doc}
+}
+
+type sheetDoc struct {
+	w    *schema.Well
+	in   sheet.Inputs
+	page sheet.Page
+	doc  *draw.Document
+}
+
+func BenchmarkLayoutOneWell(b *testing.B) {
+	d := typicalDoc(b)
+	for b.Loop() {
+		if _, err := sheet.Layout(d.w, d.in, sheet.Options{Page: d.page}); err != nil {
+			b.Fatal(err)
+		}
+	}
+	wellsPerSecond(b, 1)
+}
+
+func BenchmarkSVGOneWell(b *testing.B) {
+	d := typicalDoc(b)
+	for b.Loop() {
+		if _, err := out.SVG(d.doc, 0); err != nil {
+			b.Fatal(err)
+		}
+	}
+	wellsPerSecond(b, 1)
+}
+
+func BenchmarkPDFOneWell(b *testing.B) {
+	d := typicalDoc(b)
+	for b.Loop() {
+		if _, err := out.PDF(d.doc); err != nil {
+			b.Fatal(err)
+		}
+	}
+	wellsPerSecond(b, 1)
+}
+
+func BenchmarkPNGOneWell(b *testing.B) {
+	d := typicalDoc(b)
+	for b.Loop() {
+		if _, err := out.PNG(d.doc, 0, 150); err != nil {
+			b.Fatal(err)
+		}
+	}
+	wellsPerSecond(b, 1)
+}
+
+// BenchmarkSVGAndPDFOneWell is the target's unit: lay out one typical
+// well and write it as SVG and PDF, one well at a time.
+func BenchmarkSVGAndPDFOneWell(b *testing.B) {
+	d := typicalDoc(b)
+	for b.Loop() {
+		doc, err := sheet.Layout(d.w, d.in, sheet.Options{Page: d.page, Date: "2026-01-01T00:00:00Z"})
+		if err != nil {
+			b.Fatal(err)
+		}
+		if _, err := out.SVG(doc, 0); err != nil {
+			b.Fatal(err)
+		}
+		if _, err := out.PDF(doc); err != nil {
+			b.Fatal(err)
+		}
+	}
+	wellsPerSecond(b, 1)
+}
+
+// renderIncremental is the project render loop with the cache: what
+// tremie render PROJECT_DIR does once the batch runner and the cache are
+// wired in. It draws SVG and PDF through renderWell.
+func renderIncremental(b *testing.B, dir string, force bool) batch.Summary {
+	p, err := project.Load(dir)
+	if err != nil {
+		b.Fatal(err)
+	}
+	files, err := p.WellFiles()
+	if err != nil {
+		b.Fatal(err)
+	}
+	cache, _ := incremental.Load(p.Output)
+	base := incremental.NewBase(incremental.Shared{Version: Version, Settings: p.Settings(), Template: []byte(p.Page), Options: []string{"svg", "pdf"}})
+	os.MkdirAll(p.Output, 0o755)
+	projects := map[string]*project.Project{}
+	for _, f := range files {
+		projects[f] = p
+	}
+	opts := renderOptions{outDir: p.Output, formats: []string{"svg", "pdf"}, dpi: 150, projects: projects, date: "2026-01-01T00:00:00Z"}
+	_, sum := batch.Run(files, batch.Options{}, func(i int, f string) (struct{}, batch.Outcome, error) {
+		key := p.Key(f)
+		data, err := os.ReadFile(f)
+		if err != nil {
+			cache.Forget(key)
+			return struct{}{}, batch.Done, err
+		}
+		hash := base.Well(data)
+		if !force && cache.Fresh(key, hash, nil) {
+			return struct{}{}, batch.Skipped, nil
+		}
+		res, err := renderWell(f, opts)
+		if err != nil {
+			cache.Forget(key)
+			return struct{}{}, batch.Done, err
+		}
+		var outs []string
+		for _, o := range res.Outputs {
+			rel, _ := filepath.Rel(p.Output, o)
+			outs = append(outs, rel)
+		}
+		cache.Record(key, hash, outs)
+		return struct{}{}, batch.Done, nil
+	})
+	var present []string
+	for _, f := range files {
+		present = append(present, p.Key(f))
+	}
+	cache.Stale(present)
+	if err := cache.Save(); err != nil {
+		b.Fatal(err)
+	}
+	if sum.Failed > 0 {
+		b.Fatalf("%d wells failed", sum.Failed)
+	}
+	return sum
+}
+
+// peakHeap samples the heap while fn runs and reports its peak, in MB:
+// runtime.MemStats.HeapInuse, the live heap the process holds.
+func peakHeap(b *testing.B, fn func()) {
+	var peak atomic.Uint64
+	stop := make(chan struct{})
+	var wg sync.WaitGroup
+	wg.Add(1)
+	go func() {
+		defer wg.Done()
+		var ms runtime.MemStats
+		for {
+			runtime.ReadMemStats(&ms)
+			if ms.HeapInuse > peak.Load() {
+				peak.Store(ms.HeapInuse)
+			}
+			select {
+			case <-stop:
+				return
+			case <-time.After(20 * time.Millisecond):
+			}
+		}
+	}()
+	fn()
+	close(stop)
+	wg.Wait()
+	b.ReportMetric(float64(peak.Load())/1e6, "peak-heap-MB")
+}
+
+func benchProject(b *testing.B, n int, warm bool) {
+	dir := b.TempDir()
+	if err := synth.Project(dir, n); err != nil {
+		b.Fatal(err)
+	}
+	if warm {
+		renderIncremental(b, dir, false)
+	}
+	b.ResetTimer()
+	peakHeap(b, func() {
+		for i := 0; i < b.N; i++ {
+			sum := renderIncremental(b, dir, !warm)
+			if warm && sum.Skipped != n || !warm && sum.Done != n {
+				b.Fatalf("summary %+v", sum)
+			}
+		}
+	})
+	wellsPerSecond(b, n)
+}
+
+func BenchmarkProject100Cold(b *testing.B)  { benchProject(b, 100, false) }
+func BenchmarkProject100Warm(b *testing.B)  { benchProject(b, 100, true) }
+func BenchmarkProject1000Cold(b *testing.B) { benchProject(b, 1000, false) }
+func BenchmarkProject1000Warm(b *testing.B) { benchProject(b, 1000, true) }
+
+// TestWriteSynthProject writes a synthetic project for measuring the
+// real binary (see BENCHMARKS.md): TREMIE_SYNTH_DIR=DIR TREMIE_SYNTH_N=1000.
+// It does nothing unless the variable is set.
+func TestWriteSynthProject(t *testing.T) {
+	dir := os.Getenv("TREMIE_SYNTH_DIR")
+	if dir == "" {
+		t.Skip("TREMIE_SYNTH_DIR not set")
+	}
+	n := 1000
+	if s := os.Getenv("TREMIE_SYNTH_N"); s != "" {
+		if _, err := fmt.Sscan(s, &n); err != nil {
+			t.Fatal(err)
+		}
+	}
+	if err := synth.Project(dir, n); err != nil {
+		t.Fatal(err)
+	}
+}
