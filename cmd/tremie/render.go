@@ -4,6 +4,7 @@ import (
 	"errors"
 	"flag"
 	"fmt"
+	"github.com/tremie-dev/tremie/cmd/internal/batch"
 	"io"
 	"os"
 	"path/filepath"
@@ -283,6 +284,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	profilePath := fset.String("profile", "", "rule profile TOML (default: the project's, else the defaults)")
 	yieldsPath := fset.String("yields", "", "TOML file with a [yields] table overriding the default yields")
 	dpi := fset.Float64("dpi", 150, "PNG resolution in dots per inch")
+	force := fset.Bool("force", false, "redraw every well, even those unchanged since the last run")
 	fset.Usage = func() {
 		fmt.Fprintln(stderr, "usage: tremie render FILE|DIR... -o OUTDIR [--format svg,pdf,png] [--page letter|tabloid|a4|a3] [--landscape] [--scale S] [--strict] [--profile FILE]")
 		fset.PrintDefaults()
@@ -383,33 +385,54 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	}
 	opts.names = assignNames(files, ids)
 
-	for _, f := range files {
-		res, err := renderWell(f, opts)
-		if err != nil {
+	var profileBytes, yieldsBytes []byte
+	if profile != "" {
+		profileBytes, _ = os.ReadFile(profile)
+	}
+	if *yieldsPath != "" {
+		yieldsBytes, _ = os.ReadFile(*yieldsPath)
+	}
+	results, sum, cache, stale, cacheErr := renderRun(files, opts, *force, profileBytes, yieldsBytes)
+	if cacheErr != nil {
+		fmt.Fprintf(stderr, "tremie render: %v\n", cacheErr)
+	}
+	for i, r := range results {
+		f, res := files[i], r.Value
+		if r.Err != nil {
 			var re *renderError
 			c := exitInput
-			if errors.As(err, &re) {
+			if errors.As(r.Err, &re) {
 				c = re.code
 			}
-			for _, e := range schemaErrors(f, err) {
+			for _, e := range schemaErrors(f, r.Err) {
 				fmt.Fprintln(stderr, e)
 			}
 			code = worse(code, c)
 			continue
 		}
+		mark := ""
+		if res.Blocking {
+			mark = " — NOT FINAL: error findings drawn on the sheet"
+			code = worse(code, exitFindings)
+		}
 		switch {
 		case res.Refused:
 			fmt.Fprintf(stderr, "tremie render: %s (%s): refused under --strict: unwaived error findings (run tremie check %s)\n", f, res.WellID, f)
 			code = worse(code, exitFindings)
+		case r.Outcome == batch.Skipped:
+			fmt.Fprintf(stdout, "%s: %s, unchanged since the last run (--force redraws)%s\n", f, res.WellID, mark)
 		default:
-			mark := ""
-			if res.Blocking {
-				mark = " — NOT FINAL: error findings drawn on the sheet"
-				code = worse(code, exitFindings)
-			}
 			fmt.Fprintf(stdout, "%s: %s, %d %s → %s%s\n", f, res.WellID, res.Sheets, plural(res.Sheets, "sheet", "sheets"), strings.Join(res.Outputs, ", "), mark)
 		}
 	}
+	for _, o := range stale {
+		fmt.Fprintf(stderr, "tremie render: stale output %s: its well is no longer in the input (not deleted)\n", filepath.Join(opts.outDir, o))
+	}
+	if err := cache.Save(); err != nil {
+		fmt.Fprintf(stderr, "tremie render: %v\n", err)
+		code = worse(code, exitOutput)
+	}
+	fmt.Fprintf(stdout, "%d rendered, %d unchanged, %d failed\n", sum.Done, sum.Skipped, sum.Failed)
 	fmt.Fprintln(stdout, "Sheets support, and never replace, the review of a licensed professional and the governing local well code.")
 	return code
 }
