@@ -9,6 +9,7 @@ import (
 	"path/filepath"
 
 	"github.com/tremie-dev/tremie/cmd/tremie/demo"
+	"github.com/tremie-dev/tremie/render/out"
 )
 
 func init() {
@@ -96,33 +97,9 @@ func writeDemo(dir string) error {
 		if err != nil {
 			return fmt.Errorf("reading embedded %s: %w", path, err)
 		}
-		return writeAtomic(target, data)
+		if err := os.MkdirAll(filepath.Dir(target), 0o755); err != nil {
+			return fmt.Errorf("creating %s: %w", filepath.Dir(target), err)
+		}
+		return out.WriteFileAtomic(target, data)
 	})
-}
-
-// writeAtomic writes data to a temporary file beside path and renames it,
-// so that no reader ever sees half a file.
-func writeAtomic(path string, data []byte) error {
-	if err := os.MkdirAll(filepath.Dir(path), 0o755); err != nil {
-		return fmt.Errorf("creating %s: %w", filepath.Dir(path), err)
-	}
-	tmp, err := os.CreateTemp(filepath.Dir(path), "."+filepath.Base(path)+".tmp-*")
-	if err != nil {
-		return fmt.Errorf("writing %s: %w", path, err)
-	}
-	name := tmp.Name()
-	if _, err := tmp.Write(data); err != nil {
-		tmp.Close()
-		os.Remove(name)
-		return fmt.Errorf("writing %s: %w", path, err)
-	}
-	if err := tmp.Close(); err != nil {
-		os.Remove(name)
-		return fmt.Errorf("writing %s: %w", path, err)
-	}
-	if err := os.Rename(name, path); err != nil {
-		os.Remove(name)
-		return fmt.Errorf("writing %s: %w", path, err)
-	}
-	return nil
 }
