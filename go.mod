@@ -10,7 +10,6 @@ require (
 	github.com/tdewolff/canvas v0.0.0-20250728095813-50d4cb1eee71
 	github.com/xuri/excelize/v2 v2.11.1
 	golang.org/x/image v0.48.0
-	golang.org/x/sync v0.25.0
 	golang.org/x/term v0.48.0
 )
 
