@@ -17,6 +17,7 @@ type inputs struct {
 	// profile and outDir come from the first project named, for commands
 	// that were not given them.
 	profile string
+	yields  string
 	outDir  string
 }
 
@@ -60,6 +61,9 @@ func collectInputs(paths []string) (inputs, []error) {
 				}
 				if in.profile == "" {
 					in.profile = p.ProfilePath()
+				}
+				if in.yields == "" {
+					in.yields = p.YieldsPath()
 				}
 				continue
 			}

@@ -5,6 +5,7 @@ import (
 	"encoding/json"
 	"flag"
 	"fmt"
+	"github.com/tremie-dev/tremie/schema/project"
 	"io"
 	"math"
 	"sort"
@@ -67,6 +68,15 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 		fset.Usage()
 		return exitUsage
 	}
+	// A project directory names its wells, profile and yields file; the
+	// flags win over the project's.
+	in, errs := collectInputs(paths)
+	if *yieldsFile == "" {
+		*yieldsFile = in.yields
+	}
+	if *profileFile == "" {
+		*profileFile = in.profile
+	}
 	yields := quantity.DefaultYields()
 	if *yieldsFile != "" {
 		if yields, err = quantity.LoadYields(*yieldsFile); err != nil {
@@ -83,7 +93,7 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 	}
 
 	code := exitOK
-	files, errs := schema.FindWells(paths)
+	files := in.files
 	for _, e := range errs {
 		fmt.Fprintf(stderr, "tremie quantities: %v\n", e)
 		code = exitInput
@@ -96,6 +106,7 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 			code = exitInput
 			continue
 		}
+		project.Apply(in.projects[f], w)
 		// the checks of placed amounts and tags, with the same yields
 		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields), Findings: rules.CheckReconcile(w, prof, yields)}
 		for _, r := range wq.Report.Rows {

@@ -331,12 +331,6 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie render: %v\n", err)
 		return exitUsage
 	}
-	if *yieldsPath != "" {
-		if opts.yields, err = quantity.LoadYields(*yieldsPath); err != nil {
-			fmt.Fprintf(stderr, "tremie render: %v\n", err)
-			return exitInput
-		}
-	}
 	code := exitOK
 	in, errs := collectInputs(paths)
 	files, prjProfile := in.files, in.profile
@@ -347,6 +341,15 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	for _, e := range errs {
 		fmt.Fprintf(stderr, "tremie render: %v\n", e)
 		code = exitInput
+	}
+	if *yieldsPath == "" {
+		*yieldsPath = in.yields
+	}
+	if *yieldsPath != "" {
+		if opts.yields, err = quantity.LoadYields(*yieldsPath); err != nil {
+			fmt.Fprintf(stderr, "tremie render: %v\n", err)
+			return exitInput
+		}
 	}
 	profile := *profilePath
 	if profile == "" {

@@ -33,6 +33,7 @@ type fileData struct {
 		Page             string `toml:"page"`
 		Landscape        bool   `toml:"landscape"`
 		Profile          string `toml:"profile"`
+		Yields           string `toml:"yields"`
 		Logo             string `toml:"logo"`
 		Wells            string `toml:"wells"`
 		Output           string `toml:"output"`
@@ -106,6 +107,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 		Page:             pr.Page,
 		Landscape:        pr.Landscape,
 		Profile:          pr.Profile,
+		Yields:           pr.Yields,
 		LogoPath:         pr.Logo,
 		Wells:            pr.Wells,
 		Keys:             lines,
@@ -133,6 +135,11 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 	if pr.Profile != "" {
 		if st, err := os.Stat(p.ProfilePath()); err != nil || st.IsDir() {
 			return nil, bad("project.profile", "rule profile %s not found", p.ProfilePath())
+		}
+	}
+	if pr.Yields != "" {
+		if st, err := os.Stat(p.YieldsPath()); err != nil || st.IsDir() {
+			return nil, bad("project.yields", "yields file %s not found", p.YieldsPath())
 		}
 	}
 	tb := fd.Project

@@ -44,6 +44,7 @@ type Project struct {
 	Landscape bool
 
 	Profile string // path of the rule profile, "" for the defaults
+	Yields  string // path of a [yields] table file, "" for the default yields
 
 	TitleBlock TitleBlock
 
@@ -88,6 +89,9 @@ func (p *Project) Path(rel string) string {
 
 // ProfilePath is the rule profile's path, or "" for the defaults.
 func (p *Project) ProfilePath() string { return p.Path(p.Profile) }
+
+// YieldsPath is the yields file's path, or "" for the default yields.
+func (p *Project) YieldsPath() string { return p.Path(p.Yields) }
 
 // Default returns the project a directory without project.toml gets:
 // every default in force, the wells in its wells/ folder or, when it has

@@ -22,6 +22,7 @@ func (p *Project) Settings() []byte {
 	line("page", p.Page)
 	line("landscape", fmt.Sprint(p.Landscape))
 	line("profile", p.Profile)
+	line("yields", p.Yields)
 	line("logo", p.LogoPath)
 	tb := p.TitleBlock
 	line("consultant", tb.Consultant)

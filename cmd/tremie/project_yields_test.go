@@ -1,0 +1,39 @@
+package main
+
+import (
+	"os"
+	"path/filepath"
+	"regexp"
+	"strings"
+	"testing"
+)
+
+// A project's yields file reaches the quantities: with 0.45 ft3 per 50-lb
+// bag of filter sand (a supplier figure in this invented project) MW-1's
+// pack of 4.457 ft3 needs ceil(4.457 / 0.45) = 10 bags, not the 9 of the
+// 0.5 ft3 default (common practice).
+func TestProjectYieldsFile(t *testing.T) {
+	dir := t.TempDir()
+	if err := writeDemo(dir); err != nil {
+		t.Fatal(err)
+	}
+	put(t, dir, "site.yields.toml", "[yields]\nvolume = \"ft3\"\nmass = \"lb\"\n[yields.filter-pack]\nyield = 0.45\nbag_mass = 50\nnote = \"supplier sheet\"\n")
+	prj := filepath.Join(dir, "project.toml")
+	data, _ := os.ReadFile(prj)
+	if err := os.WriteFile(prj, append(data, []byte("yields = \"site.yields.toml\"\n")...), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	_, out, errb := runTremie("quantities", dir)
+	row := regexp.MustCompile(`(?m)^MW-1 .*\n.*\n\s+1\s+filter-pack\s+23–36\s+4\.457\s+\S+\s+0\.450 / 50-lb bag\s+10\s+9\s`)
+	if !row.MatchString(out) {
+		t.Errorf("MW-1's pack row does not use the project's yield:\n%s\n%s", out[:min(len(out), 1500)], errb)
+	}
+	// A yields file the project names but that is missing is an error with its line.
+	if err := os.Remove(filepath.Join(dir, "site.yields.toml")); err != nil {
+		t.Fatal(err)
+	}
+	code, _, errb := runTremie("quantities", dir)
+	if code != exitInput || !strings.Contains(errb, "project.toml:") || !strings.Contains(errb, "yields file") {
+		t.Errorf("exit %d, stderr %q", code, errb)
+	}
+}
