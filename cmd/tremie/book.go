@@ -61,7 +61,7 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 			return bw, batch.Skipped, nil
 		}
 		bw.ID = e.Well.ID
-		in := sheet.Inputs{Findings: e.Findings, Quantities: quantity.Compute(e.Well, nil), TitleBlock: p.TitleBlock, Logo: logo}
+		in := sheet.Inputs{Findings: e.Findings, Quantities: quantity.Compute(e.Well, pw.yields), TitleBlock: p.TitleBlock, Logo: logo}
 		doc, err := sheet.Layout(e.Well, in, sheet.Options{Page: page, Date: date.Format("2006-01-02T15:04:05Z07:00")})
 		if err != nil {
 			bw.Problem = err.Error()

@@ -5,6 +5,7 @@ import (
 	"errors"
 	"flag"
 	"fmt"
+	"github.com/tremie-dev/tremie/schema/quantity"
 	"io"
 	"os"
 	"path/filepath"
@@ -101,6 +102,7 @@ func writeOutput(path string, data []byte) error {
 type projectWells struct {
 	proj    *project.Project
 	prof    *rules.Profile
+	yields  *quantity.Yields // the project's yields file, nil for the defaults
 	entries []table.Entry
 }
 
@@ -128,6 +130,14 @@ func loadProjectWells(dir string, stderr io.Writer) (*projectWells, int) {
 			return nil, exitInput
 		}
 		pw.prof = prof
+	}
+	if path := p.YieldsPath(); path != "" {
+		y, err := quantity.LoadYields(path)
+		if err != nil {
+			fmt.Fprintln(stderr, err)
+			return nil, exitInput
+		}
+		pw.yields = y
 	}
 	files, err := p.WellFiles()
 	if err != nil {
