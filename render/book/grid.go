@@ -1,6 +1,8 @@
 package book
 
 import (
+	"strings"
+
 	"github.com/go-pdf/fpdf"
 )
 
@@ -28,15 +30,57 @@ type grid struct {
 func newGrid(f *fpdf.Fpdf, heading string, cols []gridCol, size float64) *grid {
 	pw, ph := f.GetPageSize()
 	l, _, r, b := f.GetMargins()
+	g := &grid{f: f, cols: cols, size: size, lineH: size * 0.3528 * 1.25, heading: heading, bottom: ph - b - 8}
+	g.widths = fitWidths(f, cols, size, pw-l-r)
+	return g
+}
+
+// fitWidths shares the text width among the columns by their relative
+// widths, but gives every column at least the width of the longest word of
+// its title, so that no header breaks inside a word ("Scree/n top").
+func fitWidths(f *fpdf.Fpdf, cols []gridCol, size, avail float64) []float64 {
+	f.SetFont(family, "B", size)
+	minW := make([]float64, len(cols))
 	total := 0.0
-	for _, c := range cols {
+	for i, c := range cols {
+		for _, word := range strings.Fields(c.title) {
+			// SplitText, which breaks the cells, also keeps fpdf's cell
+			// margin clear on both sides of the 1.6 mm padding.
+			if w := f.GetStringWidth(word) + 1.6 + 2*f.GetCellMargin() + 0.2; w > minW[i] {
+				minW[i] = w
+			}
+		}
 		total += c.width
 	}
-	g := &grid{f: f, cols: cols, size: size, lineH: size * 0.3528 * 1.25, heading: heading, bottom: ph - b - 8}
-	for _, c := range cols {
-		g.widths = append(g.widths, c.width/total*(pw-l-r))
+	widths := make([]float64, len(cols))
+	// Columns whose share is below their minimum take the minimum; the rest
+	// share what is left in proportion, repeated until stable.
+	fixed := make([]bool, len(cols))
+	for changed := true; changed; {
+		changed = false
+		left, weight := avail, 0.0
+		for i, c := range cols {
+			if fixed[i] {
+				left -= minW[i]
+			} else {
+				weight += c.width
+			}
+		}
+		for i, c := range cols {
+			if fixed[i] {
+				widths[i] = minW[i]
+				continue
+			}
+			widths[i] = 0
+			if weight > 0 {
+				widths[i] = c.width / weight * left
+			}
+			if widths[i] < minW[i] {
+				fixed[i], changed = true, true
+			}
+		}
 	}
-	return g
+	return widths
 }
 
 // page starts a page with the heading and the column header.
