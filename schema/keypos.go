@@ -15,75 +15,108 @@ type keyPos struct{ line, col, keyCol int }
 // needs to be right for files the parser has already accepted.
 func scanKeyPositions(src string) map[string]keyPos {
 	out := map[string]keyPos{}
+	scanKeys(src, func(path string, p keyPos) { out[path] = p })
+	return out
+}
+
+// scanKeyLines is scanKeyPositions with lines only: what a well that loads
+// cleanly keeps (Well.Keys). Columns are needed only to report an error.
+func scanKeyLines(src string) map[string]int {
+	out := make(map[string]int, strings.Count(src, "=")+8)
+	scanKeys(src, func(path string, p keyPos) { out[path] = p.line })
+	return out
+}
+
+// scanKeys calls visit for every table header and key of a TOML text, in
+// file order, with its path and position.
+func scanKeys(src string, visit func(path string, p keyPos)) {
 	counts := map[string]int{} // array-table path (with parent indices) -> entries
 	current := ""
-	lines := strings.Split(src, "\n")
 	inMulti := ""
-	for i, raw := range lines {
-		lineNo := i + 1
-		line := raw
-		if inMulti != "" {
-			if strings.Contains(line, inMulti) {
-				inMulti = ""
-			}
-			continue
+	lineNo := 0
+	for rest := src; ; {
+		var line string
+		nl := strings.IndexByte(rest, '\n')
+		if nl < 0 {
+			line = rest
+		} else {
+			line, rest = rest[:nl], rest[nl+1:]
 		}
-		trimmed := strings.TrimSpace(line)
-		if trimmed == "" || trimmed[0] == '#' {
-			continue
+		lineNo++
+		scanLine(line, lineNo, &current, &inMulti, counts, visit)
+		if nl < 0 {
+			return
 		}
-		if strings.HasPrefix(trimmed, "[[") {
-			end := strings.Index(trimmed, "]]")
-			if end < 0 {
-				continue
-			}
-			name := cleanKey(trimmed[2:end])
-			base := resolveTable(name, counts)
-			idx := counts[base]
-			counts[base] = idx + 1
-			current = base + "[" + strconv.Itoa(idx) + "]"
-			c := strings.Index(line, "[[") + 1
-			out[current] = keyPos{lineNo, c, c}
-			continue
+	}
+}
+
+// scanLine handles one line of scanKeys.
+func scanLine(line string, lineNo int, current, inMulti *string, counts map[string]int, visit func(string, keyPos)) {
+	if *inMulti != "" {
+		if strings.Contains(line, *inMulti) {
+			*inMulti = ""
 		}
-		if trimmed[0] == '[' {
-			end := strings.Index(trimmed, "]")
-			if end < 0 {
-				continue
-			}
-			current = resolveTable(cleanKey(trimmed[1:end]), counts)
-			c := strings.Index(line, "[") + 1
-			out[current] = keyPos{lineNo, c, c}
-			continue
+		return
+	}
+	trimmed := strings.TrimSpace(line)
+	if trimmed == "" || trimmed[0] == '#' {
+		return
+	}
+	if strings.HasPrefix(trimmed, "[[") {
+		end := strings.Index(trimmed, "]]")
+		if end < 0 {
+			return
 		}
-		eq := keyEquals(line)
-		if eq < 0 {
-			continue
+		name := cleanKey(trimmed[2:end])
+		base := resolveTable(name, counts)
+		idx := counts[base]
+		counts[base] = idx + 1
+		*current = base + "[" + strconv.Itoa(idx) + "]"
+		c := strings.Index(line, "[[") + 1
+		visit(*current, keyPos{lineNo, c, c})
+		return
+	}
+	if trimmed[0] == '[' {
+		end := strings.IndexByte(trimmed, ']')
+		if end < 0 {
+			return
 		}
-		key := cleanKey(line[:eq])
-		path := key
-		if current != "" {
-			path = current + "." + key
-		}
-		col := eq + 2
-		for col <= len(line) && (line[col-1] == ' ' || line[col-1] == '\t') {
-			col++
-		}
-		keyCol := len(line) - len(strings.TrimLeft(line, " \t")) + 1
-		out[path] = keyPos{lineNo, col, keyCol}
-		rest := line[eq+1:]
+		*current = resolveTable(cleanKey(trimmed[1:end]), counts)
+		c := strings.IndexByte(line, '[') + 1
+		visit(*current, keyPos{lineNo, c, c})
+		return
+	}
+	eq := keyEquals(line)
+	if eq < 0 {
+		return
+	}
+	key := cleanKey(line[:eq])
+	path := key
+	if *current != "" {
+		path = *current + "." + key
+	}
+	col := eq + 2
+	for col <= len(line) && (line[col-1] == ' ' || line[col-1] == '\t') {
+		col++
+	}
+	keyCol := len(line) - len(strings.TrimLeft(line, " \t")) + 1
+	visit(path, keyPos{lineNo, col, keyCol})
+	value := line[eq+1:]
+	if strings.Contains(value, `"""`) || strings.Contains(value, `'''`) {
 		for _, q := range []string{`"""`, `'''`} {
-			if strings.Count(rest, q)%2 == 1 {
-				inMulti = q
+			if strings.Count(value, q)%2 == 1 {
+				*inMulti = q
 			}
 		}
 	}
-	return out
 }
 
 // resolveTable turns a dotted table name into a path with the current index
 // of every array table along it: "string.section" -> "string[1].section".
 func resolveTable(name string, counts map[string]int) string {
+	if strings.IndexByte(name, '.') < 0 {
+		return name // a top-level table has no parent to index
+	}
 	parts := strings.Split(name, ".")
 	path := ""
 	for i, p := range parts {
@@ -122,7 +155,11 @@ func keyEquals(line string) int {
 }
 
 func cleanKey(k string) string {
-	parts := strings.Split(strings.TrimSpace(k), ".")
+	k = strings.TrimSpace(k)
+	if strings.IndexAny(k, `."'`) < 0 {
+		return k // a bare key: nothing to split or unquote
+	}
+	parts := strings.Split(k, ".")
 	for i, p := range parts {
 		p = strings.TrimSpace(p)
 		p = strings.Trim(p, `"'`)

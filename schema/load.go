@@ -29,24 +29,28 @@ func unwrapPathError(err error) error {
 
 // Load parses a well file's bytes; name is used in positions.
 func Load(name string, data []byte) (*Well, error) {
-	var raw map[string]any
-	if _, err := toml.Decode(string(data), &raw); err != nil {
+	// Decoding into a bare interface hands over the parser's own tree;
+	// a map[string]any target would be copied key by key.
+	src := string(data)
+	var tree any
+	if _, err := toml.Decode(src, &tree); err != nil {
 		var pe toml.ParseError
 		if errors.As(err, &pe) {
 			return nil, ErrorList{{File: name, Line: pe.Position.Line, Col: pe.Position.Col, Msg: "TOML syntax: " + pe.Message}}
 		}
 		return nil, ErrorList{{File: name, Msg: "TOML: " + err.Error()}}
 	}
-	r := &reader{file: name, pos: scanKeyPositions(string(data))}
+	raw, _ := tree.(map[string]any)
+	if raw == nil {
+		raw = map[string]any{}
+	}
+	r := &reader{file: name, src: src, lines: scanKeyLines(src)}
 	w := r.well(r.root(raw))
 	if len(r.errs) > 0 {
 		sortErrors(r.errs)
 		return nil, r.errs
 	}
-	w.Keys = make(map[string]int, len(r.pos))
-	for k, p := range r.pos {
-		w.Keys[k] = p.line
-	}
+	w.Keys = r.lines
 	return w, nil
 }
 
@@ -59,14 +63,14 @@ func sortErrors(l ErrorList) {
 }
 
 func (r *reader) at(path string) Pos {
-	p, ok := r.pos[path]
+	line, ok := r.lines[path]
 	for q := path; !ok && q != ""; q = parentPath(q) {
-		p, ok = r.pos[q]
+		line, ok = r.lines[q]
 	}
-	if p.line == 0 {
-		p.line = 1
+	if line == 0 {
+		line = 1
 	}
-	return Pos{File: r.file, Line: p.line}
+	return Pos{File: r.file, Line: line}
 }
 
 func (r *reader) well(root *table) *Well {
@@ -76,7 +80,7 @@ func (r *reader) well(root *table) *Well {
 	wt := root.sub("well")
 	if wt == nil {
 		r.errAt("", "missing required table [well]")
-		wt = &table{r: r, path: "well", m: map[string]any{}, used: map[string]bool{}}
+		wt = &table{r: r, path: "well", m: map[string]any{}}
 	}
 	w.ID = wt.reqStr("id")
 	w.Project = wt.str("project")

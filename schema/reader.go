@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strconv"
 	"strings"
 	"time"
 )
@@ -11,9 +12,11 @@ import (
 // reader walks the generic TOML tree, converting values to model types
 // and collecting every error with its position.
 type reader struct {
-	file string
-	pos  map[string]keyPos
-	errs ErrorList
+	file  string
+	src   string
+	lines map[string]int    // key path -> line, for every key
+	pos   map[string]keyPos // with columns; scanned on the first error
+	errs  ErrorList
 }
 
 // errAt records an error at the value of a key path (or its nearest
@@ -28,6 +31,9 @@ func (r *reader) errAtKey(path string, format string, args ...any) {
 }
 
 func (r *reader) record(path string, atKey bool, format string, args ...any) {
+	if r.pos == nil {
+		r.pos = scanKeyPositions(r.src)
+	}
 	p, ok := r.pos[path]
 	for q := path; !ok && q != ""; q = parentPath(q) {
 		p, ok = r.pos[q]
@@ -45,11 +51,24 @@ type table struct {
 	r    *reader
 	path string
 	m    map[string]any
-	used map[string]bool
+	used []string // keys asked for; a table has few, so a slice beats a map
 }
 
 func (r *reader) root(m map[string]any) *table {
-	return &table{r: r, m: m, used: map[string]bool{}}
+	return &table{r: r, m: m}
+}
+
+// use marks a key as read.
+func (t *table) use(k string) { t.used = append(t.used, k) }
+
+// isUsed reports whether a key was read.
+func (t *table) isUsed(k string) bool {
+	for _, u := range t.used {
+		if u == k {
+			return true
+		}
+	}
+	return false
 }
 
 func (t *table) keyPath(k string) string {
@@ -60,7 +79,7 @@ func (t *table) keyPath(k string) string {
 }
 
 func (t *table) get(k string) (any, bool) {
-	t.used[k] = true
+	t.use(k)
 	v, ok := t.m[k]
 	return v, ok
 }
@@ -72,7 +91,7 @@ func (t *table) done() {
 	}
 	var unknown []string
 	for k := range t.m {
-		if !t.used[k] {
+		if !t.isUsed(k) {
 			unknown = append(unknown, k)
 		}
 	}
@@ -137,7 +156,7 @@ func (t *table) str(k string) string {
 func (t *table) reqStr(k string) string {
 	if _, ok := t.m[k]; !ok {
 		t.r.errAt(t.path, "missing required key %q in [%s]", k, stripIndex(t.path))
-		t.used[k] = true
+		t.use(k)
 		return ""
 	}
 	s := t.str(k)
@@ -189,7 +208,7 @@ func (t *table) num(k string) (float64, bool) {
 func (t *table) reqNum(k string) float64 {
 	if _, ok := t.m[k]; !ok {
 		t.r.errAt(t.path, "missing required key %q in [%s]", k, stripIndex(t.path))
-		t.used[k] = true
+		t.use(k)
 		return 0
 	}
 	f, _ := t.num(k)
@@ -327,7 +346,7 @@ func (t *table) sub(k string) *table {
 		t.r.errAt(t.keyPath(k), "%s must be a table ([%s]), not %s", k, stripIndex(t.keyPath(k)), typeName(v))
 		return nil
 	}
-	return &table{r: t.r, path: t.keyPath(k), m: m, used: map[string]bool{}}
+	return &table{r: t.r, path: t.keyPath(k), m: m}
 }
 
 // list returns the entries of an array of tables ([[k]]).
@@ -357,8 +376,11 @@ func (t *table) list(k string) []*table {
 		return nil
 	}
 	out := make([]*table, len(maps))
+	tables := make([]table, len(maps))
+	base := t.keyPath(k)
 	for i, m := range maps {
-		out[i] = &table{r: t.r, path: fmt.Sprintf("%s[%d]", t.keyPath(k), i), m: m, used: map[string]bool{}}
+		tables[i] = table{r: t.r, path: base + "[" + strconv.Itoa(i) + "]", m: m}
+		out[i] = &tables[i]
 	}
 	return out
 }

@@ -10,6 +10,8 @@ import (
 	"testing"
 	"time"
 
+	"github.com/BurntSushi/toml"
+
 	"github.com/tremie-dev/tremie/cmd/internal/batch"
 	"github.com/tremie-dev/tremie/cmd/internal/incremental"
 	"github.com/tremie-dev/tremie/cmd/internal/synth"
@@ -272,4 +274,29 @@ func TestWriteSynthProject(t *testing.T) {
 	if err := synth.Project(dir, n); err != nil {
 		t.Fatal(err)
 	}
+}
+
+// BenchmarkDecodeOneWell: the TOML parser alone on a typical well, the
+// floor under BenchmarkLoadAndCheckOneWell.
+func BenchmarkDecodeOneWell(b *testing.B) {
+	text := string(synth.Well(1))
+	for b.Loop() {
+		var raw any
+		if _, err := toml.Decode(text, &raw); err != nil {
+			b.Fatal(err)
+		}
+	}
+	wellsPerSecond(b, 1)
+}
+
+// BenchmarkCheckOneWell: the rules alone on a loaded typical well.
+func BenchmarkCheckOneWell(b *testing.B) {
+	w, err := schema.Load("w.toml", synth.Well(1))
+	if err != nil {
+		b.Fatal(err)
+	}
+	for b.Loop() {
+		rules.Check(w, nil)
+	}
+	wellsPerSecond(b, 1)
 }
