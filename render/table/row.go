@@ -158,7 +158,9 @@ func rowOf(e Entry, u schema.DepthUnit) Row {
 	return r
 }
 
-// casing describes the riser of each string: "2 in Sch 40", "PVC".
+// casing describes the riser of each string: "2 in Sch 40", "PVC"; a
+// well with no string (an open-hole rock well) is described by its outer
+// casing, which is then the well's casing.
 func casing(w *schema.Well) (size, material string) {
 	var sizes, mats []string
 	for _, s := range w.Strings {
@@ -168,6 +170,12 @@ func casing(w *schema.Well) (size, material string) {
 		p := s.Sections[0].Pipe
 		sizes = append(sizes, pipeSize(p))
 		mats = append(mats, p.Material)
+	}
+	if len(w.Strings) == 0 {
+		for _, c := range w.Casings {
+			sizes = append(sizes, pipeSize(c.Pipe))
+			mats = append(mats, c.Pipe.Material)
+		}
 	}
 	return joinDistinct(sizes), joinDistinct(mats)
 }
