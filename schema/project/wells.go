@@ -2,7 +2,6 @@ package project
 
 import (
 	"fmt"
-	"io/fs"
 	"os"
 	"path/filepath"
 	"sort"
@@ -18,24 +17,11 @@ func (p *Project) WellFiles() ([]string, error) {
 	pattern := p.Path(p.Wells)
 	var files []string
 	if st, err := os.Stat(pattern); err == nil && st.IsDir() {
-		err := filepath.WalkDir(pattern, func(path string, d fs.DirEntry, err error) error {
-			if err != nil {
-				return err
-			}
-			if d.IsDir() {
-				if path != pattern && strings.HasPrefix(d.Name(), ".") {
-					return filepath.SkipDir
-				}
-				return nil
-			}
-			if isWellFile(path) {
-				files = append(files, path)
-			}
-			return nil
-		})
-		if err != nil {
-			return nil, fmt.Errorf("listing wells in %s: %w", pattern, err)
+		found, errs := schema.FindWells([]string{pattern})
+		if len(errs) > 0 {
+			return nil, fmt.Errorf("listing wells in %s: %w", pattern, errs[0])
 		}
+		files = found
 	} else {
 		m, err := filepath.Glob(pattern)
 		if err != nil {
