@@ -105,31 +105,3 @@ func resolvePipe(p *Pipe, od, id float64, hasOD, hasID bool, u DiameterUnit) err
 
 // Known reports whether the pipe's diameters are known.
 func (p Pipe) Known() bool { return p.OD > 0 }
-
-// Describe writes a pipe as a callout reads it: "2-in Sch 40 PVC, flush-threaded".
-func (p Pipe) Describe(u Units) string {
-	var parts []string
-	if p.Size != "" {
-		size := p.Size
-		if !strings.HasPrefix(strings.ToUpper(size), "DN") {
-			size += "-in"
-		}
-		parts = append(parts, size)
-	} else if p.OD > 0 {
-		parts = append(parts, u.FormatDiameter(p.OD)+" OD")
-	}
-	if p.Schedule != "" {
-		parts = append(parts, "Sch "+p.Schedule)
-	}
-	if p.SDR > 0 {
-		parts = append(parts, "SDR "+TrimFloat(p.SDR, 1))
-	}
-	if p.Material != "" {
-		parts = append(parts, p.Material)
-	}
-	s := strings.Join(parts, " ")
-	if p.Joint != "" {
-		s += ", " + p.Joint
-	}
-	return s
-}
