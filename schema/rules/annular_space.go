@@ -39,12 +39,14 @@ func runAnnularSpace(p *Pass) {
 	}
 	faults := map[string]fault{}
 	var t spanTracker
-	for _, seg := range segments(w) {
+	names := annulusNames(w)
+	segs, sections := p.segments()
+	for i, seg := range segs {
 		d := mid(seg)
-		cs := crossSectionAt(w, d)
-		for _, name := range annulusNames(w) {
+		cs := sections[i]
+		for _, name := range names {
 			var f *schema.Fill
-			for _, g := range annulusFills(w, name) {
+			for _, g := range p.annulusFills(name) {
 				if g.Contains(d) && (isPack(g) || g.Material.IsSeal()) {
 					f = g
 				}
@@ -53,19 +55,19 @@ func runAnnularSpace(p *Pass) {
 				continue
 			}
 			var outerD schema.Diameter
-			var outer string
+			var casing pipe // the outer casing, unless name is the borehole annulus
 			var inner []pipe
 			if name == boreholeAnnulus {
 				if !cs.HasHole {
 					continue
 				}
-				outerD, outer, inner = cs.Hole, "the "+p.Dia(cs.Hole)+" hole", cs.Outermost()
+				outerD, inner = cs.Hole, cs.Outermost()
 			} else {
 				c, in, ok := cs.Inside(name)
 				if !ok {
 					continue
 				}
-				outerD, outer, inner = c.ID, c.Label()+" (ID "+p.Dia(c.ID)+")", in
+				outerD, casing, inner = c.ID, c, in
 			}
 			if len(inner) == 0 {
 				continue // no pipe inside: the fill fills the hole, not an annulus
@@ -73,6 +75,10 @@ func runAnnularSpace(p *Pass) {
 			space := (outerD - sumOD(inner)) / 2
 			if space <= 0 || space >= minSpace-1e-9 {
 				continue // a pipe that does not fit is PIPE-FITS-HOLE's or CASING-CLEARANCE's finding
+			}
+			outer := "the " + p.Dia(cs.Hole) + " hole"
+			if name != boreholeAnnulus {
+				outer = casing.Label() + " (ID " + p.Dia(casing.ID) + ")"
 			}
 			k := fmt.Sprintf("%s|%.4f", f.Path, float64(space))
 			faults[k] = fault{f, space, outer, inner}

@@ -33,8 +33,9 @@ func runAnnulusGap(p *Pass) {
 	}
 	for _, c := range w.Casings {
 		var expected []schema.Interval
-		for _, seg := range segments(w) {
-			if _, inner, ok := crossSectionAt(w, mid(seg)).Inside(c.Name); ok && len(inner) > 0 {
+		segs, sections := p.segments()
+		for i, seg := range segs {
+			if _, inner, ok := sections[i].Inside(c.Name); ok && len(inner) > 0 {
 				expected = append(expected, seg)
 			}
 		}
@@ -43,7 +44,7 @@ func runAnnulusGap(p *Pass) {
 }
 
 func (p *Pass) reportGaps(annulus string, expected []schema.Interval) {
-	fs := annulusFills(p.Well, annulus)
+	fs := p.annulusFills(annulus)
 	for _, gap := range subtract(expected, intervalsOf(fs)) {
 		path, between := "well.total_depth", ""
 		above, onTop := fillAbove(fs, gap.Top, nil)

@@ -21,15 +21,15 @@ func init() {
 }
 
 func runCasingClearance(p *Pass) {
-	w := p.Well
 	var t spanTracker
 	type fault struct {
 		outer pipe
 		inner []pipe
 	}
 	faults := map[string]fault{}
-	for _, seg := range segments(w) {
-		cs := crossSectionAt(w, mid(seg))
+	segs, sections := p.segments()
+	for i, seg := range segs {
+		cs := sections[i]
 		for _, c := range cs.Casings {
 			outer, inner, _ := cs.Inside(c.Casing.Name)
 			if len(inner) == 0 || outer.ID == 0 || sumOD(inner) < outer.ID {

@@ -14,7 +14,7 @@ func init() {
 
 func runFillOverlap(p *Pass) {
 	for _, name := range annulusNames(p.Well) {
-		fs := annulusFills(p.Well, name)
+		fs := p.annulusFills(name)
 		for i := 0; i < len(fs); i++ {
 			for j := i + 1; j < len(fs); j++ {
 				iv, ok := overlap(fs[i].Interval, fs[j].Interval)

@@ -22,7 +22,7 @@ func runFillSequence(p *Pass) {
 	w := p.Well
 	screens := w.Screens()
 	for _, name := range annulusNames(w) {
-		fs := annulusFills(w, name)
+		fs := p.annulusFills(name)
 		for _, st := range runs(fs, isPack) {
 			for _, f := range st.Fills {
 				if f.Material != schema.FineSand {

@@ -22,7 +22,7 @@ func init() {
 func runFineSandThickness(p *Pass) {
 	lo, hi := p.Length("min"), p.Length("max")
 	for _, name := range annulusNames(p.Well) {
-		for _, r := range runs(annulusFills(p.Well, name), func(f *schema.Fill) bool { return f.Material == schema.FineSand }) {
+		for _, r := range runs(p.annulusFills(name), func(f *schema.Fill) bool { return f.Material == schema.FineSand }) {
 			t := r.Thickness()
 			switch {
 			case t < lo-eps:

@@ -13,6 +13,8 @@ package rules
 //   annulusOfDepth(w, d)  which annulus a screen at d is packed in
 
 import (
+	"cmp"
+	"slices"
 	"sort"
 
 	"github.com/tremie-dev/tremie/schema"
@@ -35,11 +37,11 @@ func annulusFills(w *schema.Well, within string) []*schema.Fill {
 			out = append(out, &w.Fills[i])
 		}
 	}
-	sort.SliceStable(out, func(i, j int) bool {
-		if out[i].Top != out[j].Top {
-			return out[i].Top < out[j].Top
+	slices.SortStableFunc(out, func(a, b *schema.Fill) int {
+		if c := cmp.Compare(a.Top, b.Top); c != 0 {
+			return c
 		}
-		return out[i].Bottom < out[j].Bottom
+		return cmp.Compare(a.Bottom, b.Bottom)
 	})
 	return out
 }
@@ -216,17 +218,23 @@ func (p pipe) Owner() string {
 func pipes(w *schema.Well) []pipe {
 	var out []pipe
 	for i := range w.Casings {
-		c := &w.Casings[i]
-		out = append(out, pipe{Interval: c.Interval, OD: c.Pipe.OD, ID: c.Pipe.ID, Casing: c, Path: c.Path})
+		out = append(out, casingPipe(&w.Casings[i]))
 	}
 	for i := range w.Strings {
 		s := &w.Strings[i]
 		for j := range s.Sections {
-			sec := &s.Sections[j]
-			out = append(out, pipe{Interval: sec.Interval, OD: sec.Pipe.OD, ID: sec.Pipe.ID, String: s, Section: sec, Path: sec.Path})
+			out = append(out, sectionPipe(s, &s.Sections[j]))
 		}
 	}
 	return out
+}
+
+func casingPipe(c *schema.Casing) pipe {
+	return pipe{Interval: c.Interval, OD: c.Pipe.OD, ID: c.Pipe.ID, Casing: c, Path: c.Path}
+}
+
+func sectionPipe(s *schema.String, sec *schema.Section) pipe {
+	return pipe{Interval: sec.Interval, OD: sec.Pipe.OD, ID: sec.Pipe.ID, String: s, Section: sec, Path: sec.Path}
 }
 
 // crossSection is what stands in the hole at one depth: the borehole
@@ -247,22 +255,25 @@ func crossSectionAt(w *schema.Well, d schema.Length) crossSection {
 	if b, ok := w.BoreholeAt(d); ok {
 		cs.Hole, cs.HasHole = b.Diameter, true
 	}
-	seen := map[*schema.String]bool{}
-	for _, p := range pipes(w) {
-		if !p.Contains(d) {
-			continue
-		}
-		switch {
-		case p.Casing != nil:
-			cs.Casings = append(cs.Casings, p)
-		case !seen[p.String]:
-			// one pipe per string: overlapping sections of one string are
-			// STRING-CONTINUOUS's finding, not a second pipe
-			seen[p.String] = true
-			cs.Strings = append(cs.Strings, p)
+	for i := range w.Casings {
+		if c := &w.Casings[i]; c.Contains(d) {
+			cs.Casings = append(cs.Casings, casingPipe(c))
 		}
 	}
-	sort.SliceStable(cs.Casings, func(i, j int) bool { return cs.Casings[i].OD > cs.Casings[j].OD })
+	for i := range w.Strings {
+		s := &w.Strings[i]
+		for j := range s.Sections {
+			if sec := &s.Sections[j]; sec.Contains(d) {
+				// one pipe per string: overlapping sections of one string
+				// are STRING-CONTINUOUS's finding, not a second pipe
+				cs.Strings = append(cs.Strings, sectionPipe(s, sec))
+				break
+			}
+		}
+	}
+	if len(cs.Casings) > 1 {
+		slices.SortStableFunc(cs.Casings, func(a, b pipe) int { return cmp.Compare(b.OD, a.OD) })
+	}
 	return cs
 }
 
@@ -270,7 +281,7 @@ func crossSectionAt(w *schema.Well, d schema.Length) crossSection {
 // outermost casing, or else every string side by side.
 func (cs crossSection) Outermost() []pipe {
 	if len(cs.Casings) > 0 {
-		return cs.Casings[:1]
+		return cs.Casings[:1:1]
 	}
 	return cs.Strings
 }
@@ -283,7 +294,7 @@ func (cs crossSection) Inside(name string) (pipe, []pipe, bool) {
 			continue
 		}
 		if i+1 < len(cs.Casings) {
-			return c, cs.Casings[i+1 : i+2], true
+			return c, cs.Casings[i+1 : i+2 : i+2], true
 		}
 		return c, cs.Strings, true
 	}
@@ -302,13 +313,19 @@ func sumOD(ps []pipe) schema.Diameter {
 // segments splits 0..total depth at every boundary of every borehole
 // section, pipe, fill and open hole; each segment is uniform inside.
 func segments(w *schema.Well) []schema.Interval {
-	cuts := []schema.Length{0, w.TotalDepth}
+	cuts := make([]schema.Length, 0, 2+2*(len(w.Boreholes)+len(w.Casings)+len(w.Fills)+len(w.OpenHoles)+8))
+	cuts = append(cuts, 0, w.TotalDepth)
 	add := func(iv schema.Interval) { cuts = append(cuts, iv.Top, iv.Bottom) }
 	for _, b := range w.Boreholes {
 		add(b.Interval)
 	}
-	for _, p := range pipes(w) {
-		add(p.Interval)
+	for _, c := range w.Casings {
+		add(c.Interval)
+	}
+	for _, s := range w.Strings {
+		for _, sec := range s.Sections {
+			add(sec.Interval)
+		}
 	}
 	for _, f := range w.Fills {
 		add(f.Interval)
@@ -316,7 +333,7 @@ func segments(w *schema.Well) []schema.Interval {
 	for _, o := range w.OpenHoles {
 		add(o.Interval)
 	}
-	sort.Slice(cuts, func(i, j int) bool { return cuts[i] < cuts[j] })
+	slices.Sort(cuts)
 	var out []schema.Interval
 	for i := 1; i < len(cuts); i++ {
 		top, bottom := max(cuts[i-1], 0), min(cuts[i], w.TotalDepth)

@@ -26,7 +26,7 @@ func runOpenHoleBelowCasing(p *Pass) {
 				p.span(o.Interval), overlapping.Label(), p.D(overlapping.Bottom))
 		case above == nil:
 			p.Reportf(key(o.Path, "top"), []schema.Length{o.Top}, "no casing stands above the open hole at %s", p.span(o.Interval))
-		case !groutedAtFoot(w, *above):
+		case !groutedAtFoot(p, *above):
 			p.Reportf(key(o.Path, "top"), []schema.Length{above.Bottom, o.Top}, "%s above the open hole at %s is not grouted or sealed at its foot (%s)",
 				above.Label(), p.span(o.Interval), p.D(above.Bottom))
 		}
@@ -50,7 +50,8 @@ func pipeAbove(w *schema.Well, open schema.Interval) (above, overlapping *pipe) 
 
 // groutedAtFoot reports whether the annulus outside a pipe holds grout,
 // bentonite or concrete just above the pipe's bottom.
-func groutedAtFoot(w *schema.Well, q pipe) bool {
+func groutedAtFoot(p *Pass, q pipe) bool {
+	w := p.Well
 	d := q.Bottom - 0.01 // 1 cm above the foot
 	if d <= q.Top {
 		d = mid(q.Interval)
@@ -65,7 +66,7 @@ func groutedAtFoot(w *schema.Well, q pipe) bool {
 	if q.Casing == nil && len(cs.Casings) > 0 {
 		outside = cs.Casings[len(cs.Casings)-1].Casing.Name
 	}
-	for _, f := range annulusFills(w, outside) {
+	for _, f := range p.annulusFills(outside) {
 		if f.Contains(d) && f.Material.IsSeal() {
 			return true
 		}

@@ -22,7 +22,7 @@ func init() {
 
 func runPackAboveMax(p *Pass) {
 	maxAbove := p.Length("max")
-	forEachTopScreen(p.Well, isPack, func(sc schema.StringSection, pack run) {
+	forEachTopScreen(p, isPack, func(sc schema.StringSection, pack run) {
 		h := sc.Section.Top - pack.Top
 		if h > maxAbove+eps {
 			p.Reportf(key(pack.Fills[0].Path, "top"), []schema.Length{pack.Top, sc.Section.Top},

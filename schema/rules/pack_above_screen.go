@@ -23,7 +23,7 @@ func init() {
 
 func runPackAboveScreen(p *Pass) {
 	minAbove := p.Length("min")
-	forEachTopScreen(p.Well, isFilterPack, func(sc schema.StringSection, pack run) {
+	forEachTopScreen(p, isFilterPack, func(sc schema.StringSection, pack run) {
 		h := sc.Section.Top - pack.Top
 		if h < minAbove-eps {
 			p.Reportf(key(pack.Fills[0].Path, "top"), []schema.Length{pack.Top, sc.Section.Top},
@@ -36,12 +36,13 @@ func runPackAboveScreen(p *Pass) {
 // forEachTopScreen calls fn for each screen whose top lies in a run of the
 // fills keep accepts, in the annulus around the screen, unless another
 // screen above it lies in the same run (then that one is measured).
-func forEachTopScreen(w *schema.Well, keep func(*schema.Fill) bool, fn func(schema.StringSection, run)) {
+func forEachTopScreen(p *Pass, keep func(*schema.Fill) bool, fn func(schema.StringSection, run)) {
+	w := p.Well
 	screens := w.Screens()
 	for _, sc := range screens {
 		sec := sc.Section
 		name := annulusAt(w, mid(sec.Interval))
-		for _, r := range runs(annulusFills(w, name), keep) {
+		for _, r := range runs(p.annulusFills(name), keep) {
 			if sec.Top < r.Top-eps || sec.Top > r.Bottom+eps {
 				continue
 			}

@@ -21,7 +21,7 @@ func runPackCoversScreen(p *Pass) {
 		sec := sc.Section
 		name := annulusAt(w, mid(sec.Interval))
 		var packs []schema.Interval
-		for _, f := range annulusFills(w, name) {
+		for _, f := range p.annulusFills(name) {
 			if isFilterPack(f) {
 				packs = append(packs, f.Interval)
 			}

@@ -21,15 +21,15 @@ func init() {
 }
 
 func runPipeFitsHole(p *Pass) {
-	w := p.Well
 	var t spanTracker
 	type fault struct {
 		pipes []pipe
 		hole  schema.Diameter
 	}
 	faults := map[string]fault{}
-	for _, seg := range segments(w) {
-		cs := crossSectionAt(w, mid(seg))
+	segs, sections := p.segments()
+	for i, seg := range segs {
+		cs := sections[i]
 		out := cs.Outermost()
 		if !cs.HasHole || len(out) == 0 || sumOD(out) == 0 || sumOD(out) < cs.Hole {
 			continue

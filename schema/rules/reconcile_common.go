@@ -23,16 +23,12 @@ var ReconcileRules = []string{"PLACED-VOLUME-HIGH", "PLACED-VOLUME-LOW", "TAG-EX
 // quantities.
 type reconcileRun func(p *Pass, q *quantity.Report)
 
-// reconcileRuns maps a rule ID to its body, so that CheckReconcile can run
-// it with other yields.
-var reconcileRuns = map[string]reconcileRun{}
-
-// reconciling records a rule's body and makes its Run, which computes the
-// quantities with the built-in yields (a fill's own yield key overrides
-// them).
-func reconciling(id string, run reconcileRun) func(*Pass) {
-	reconcileRuns[id] = run
-	return func(p *Pass) { run(p, quantity.Compute(p.Well, nil)) }
+// reconciling makes a rule's Run from its body. The quantities are those of
+// the check's yields (the built-in ones under Check, the given ones under
+// CheckReconcile; a fill's own yield key overrides them), computed once
+// for all the reconciliation rules.
+func reconciling(run reconcileRun) func(*Pass) {
+	return func(p *Pass) { run(p, p.quantities()) }
 }
 
 // CheckReconcile runs only the reconciliation rules on a well, with the
@@ -45,16 +41,13 @@ func CheckReconcile(w *schema.Well, prof *Profile, y *quantity.Yields) []Finding
 		prof = DefaultProfile()
 	}
 	var out []Finding
+	sh := &shared{yields: y}
 	for _, id := range ReconcileRules {
 		r, ok := Lookup(id)
 		if !ok {
 			continue
 		}
-		rc := *r
-		if run, ok := reconcileRuns[id]; ok {
-			rc.Run = func(p *Pass) { run(p, quantity.Compute(p.Well, y)) }
-		}
-		runOne(&rc, w, prof, &out)
+		runOne(r, w, prof, sh, &out)
 	}
 	applyWaivers(w, out)
 	sort.SliceStable(out, func(i, j int) bool {

@@ -21,7 +21,7 @@ func init() {
 			Doc:    "largest accepted difference between a tag and the expected top",
 			Source: "common practice: 0.5 ft (0.15 m), the resolution of a weighted tape on a soft top",
 		}},
-		Run: reconciling("TAG-EXPECTED-TOP", runTagExpectedTop),
+		Run: reconciling(runTagExpectedTop),
 	})
 	register(&Rule{
 		ID:    "TAG-FINAL-TOP",

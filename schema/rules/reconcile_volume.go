@@ -20,7 +20,7 @@ func init() {
 			Doc:    "lowest acceptable ratio of placed to calculated volume",
 			Source: "common practice: 80 %, to allow for yields quoted loosely and for compaction",
 		}},
-		Run: reconciling("PLACED-VOLUME-LOW", runPlacedVolumeLow),
+		Run: reconciling(runPlacedVolumeLow),
 	})
 	register(&Rule{
 		ID:    "PLACED-VOLUME-HIGH",
@@ -36,7 +36,7 @@ func init() {
 			Doc:    "highest acceptable ratio of placed to calculated volume",
 			Source: "common practice: 150 %, since augered and mud-rotary holes commonly take more than their nominal size",
 		}},
-		Run: reconciling("PLACED-VOLUME-HIGH", runPlacedVolumeHigh),
+		Run: reconciling(runPlacedVolumeHigh),
 	})
 }
 

@@ -7,6 +7,7 @@ package rules
 import (
 	"fmt"
 	"sort"
+	"sync"
 
 	"github.com/tremie-dev/tremie/schema"
 )
@@ -103,6 +104,7 @@ type Pass struct {
 	Rule    *Rule
 	profile *Profile
 	out     *[]Finding
+	shared  *shared // derived data shared by the rules of one Check
 }
 
 // Param returns the value of the rule's named parameter in model units,
@@ -171,6 +173,18 @@ func All() []*Rule {
 	return out
 }
 
+// sorted is All(), kept for Check; rules register only from init.
+var sorted struct {
+	once  sync.Once
+	rules []*Rule
+}
+
+// sortedRules returns every rule sorted by ID, sorted once.
+func sortedRules() []*Rule {
+	sorted.once.Do(func() { sorted.rules = All() })
+	return sorted.rules
+}
+
 // Lookup finds a rule by ID.
 func Lookup(id string) (*Rule, bool) {
 	for _, r := range registry {
@@ -190,8 +204,9 @@ func Check(w *schema.Well, prof *Profile) []Finding {
 		prof = DefaultProfile()
 	}
 	var out []Finding
-	for _, r := range All() {
-		runOne(r, w, prof, &out)
+	sh := &shared{}
+	for _, r := range sortedRules() {
+		runOne(r, w, prof, sh, &out)
 	}
 	applyWaivers(w, out)
 	sort.SliceStable(out, func(i, j int) bool {
@@ -206,14 +221,14 @@ func Check(w *schema.Well, prof *Profile) []Finding {
 	return out
 }
 
-func runOne(r *Rule, w *schema.Well, prof *Profile, out *[]Finding) {
+func runOne(r *Rule, w *schema.Well, prof *Profile, sh *shared, out *[]Finding) {
 	defer func() {
 		if e := recover(); e != nil {
 			*out = append(*out, Finding{Rule: r.ID, Severity: Error, Level: "error", File: w.Pos.File, Line: 1, WellID: w.ID,
 				Message: fmt.Sprintf("internal error in rule %s: %v (please report)", r.ID, e)})
 		}
 	}()
-	r.Run(&Pass{Well: w, Rule: r, profile: prof, out: out})
+	r.Run(&Pass{Well: w, Rule: r, profile: prof, out: out, shared: sh})
 }
 
 func applyWaivers(w *schema.Well, fs []Finding) {

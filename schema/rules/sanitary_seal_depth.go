@@ -70,7 +70,7 @@ func runSanitarySealDepth(p *Pass) {
 	if v := w.Surface.Vault; v != nil && v.Depth > 0 {
 		top0 = v.Depth
 	}
-	fs := annulusFills(w, boreholeAnnulus)
+	fs := p.annulusFills(boreholeAnnulus)
 	var seal schema.Length
 	var first *schema.Fill
 	if len(fs) > 0 && fs[0].Top <= top0+eps && fs[0].Material.IsSeal() {

@@ -20,7 +20,7 @@ func init() {
 
 func runSealAbovePack(p *Pass) {
 	for _, name := range annulusNames(p.Well) {
-		fs := annulusFills(p.Well, name)
+		fs := p.annulusFills(name)
 		for _, st := range runs(fs, isPack) {
 			top := st.Fills[0]
 			if st.Top <= eps {

@@ -21,7 +21,7 @@ func init() {
 func runSealThickness(p *Pass) {
 	minSeal := p.Length("min")
 	for _, name := range annulusNames(p.Well) {
-		fs := annulusFills(p.Well, name)
+		fs := p.annulusFills(name)
 		seals := runs(fs, isBentoniteSeal)
 		for _, st := range runs(fs, isPack) {
 			for _, s := range seals {

@@ -18,45 +18,48 @@ func init() {
 func runWithinTotalDepth(p *Pass) {
 	w := p.Well
 	td := w.TotalDepth
-	check := func(path, what string, bottom schema.Length) {
+	// what names the value; built only for a finding, since most values pass
+	check := func(path, k string, bottom schema.Length, what func() string) {
 		if bottom > td+eps {
-			p.Reportf(path, []schema.Length{td, bottom}, "%s reaches %s, below the total depth of %s", what, p.D(bottom), p.D(td))
+			p.Reportf(key(path, k), []schema.Length{td, bottom}, "%s reaches %s, below the total depth of %s", what(), p.D(bottom), p.D(td))
 		}
 	}
 	for _, b := range w.Boreholes {
-		check(key(b.Path, "bottom"), "borehole section "+p.span(b.Interval), b.Bottom)
+		check(b.Path, "bottom", b.Bottom, func() string { return "borehole section " + p.span(b.Interval) })
 	}
 	for _, c := range w.Casings {
-		check(key(c.Path, "bottom"), "casing \""+c.Name+"\"", c.Bottom)
+		check(c.Path, "bottom", c.Bottom, func() string { return "casing \"" + c.Name + "\"" })
 		for _, d := range c.Centralizers {
-			check(key(c.Path, "centralizers"), "a centralizer on casing \""+c.Name+"\"", d)
+			check(c.Path, "centralizers", d, func() string { return "a centralizer on casing \"" + c.Name + "\"" })
 		}
 	}
 	for _, s := range w.Strings {
 		for _, sec := range s.Sections {
-			check(key(sec.Path, "bottom"), "string \""+s.Name+"\" "+string(sec.Kind)+" "+p.span(sec.Interval), sec.Bottom)
+			check(sec.Path, "bottom", sec.Bottom, func() string {
+				return "string \"" + s.Name + "\" " + string(sec.Kind) + " " + p.span(sec.Interval)
+			})
 		}
 		for _, d := range s.Centralizers {
-			check(key(s.Path, "centralizers"), "a centralizer on string \""+s.Name+"\"", d)
+			check(s.Path, "centralizers", d, func() string { return "a centralizer on string \"" + s.Name + "\"" })
 		}
 	}
 	for i := range w.Fills {
 		f := &w.Fills[i]
-		check(key(f.Path, "bottom"), p.fillLabel(f), f.Bottom)
+		check(f.Path, "bottom", f.Bottom, func() string { return p.fillLabel(f) })
 		for _, t := range f.Tags {
-			check(key(t.Path, "depth"), "a tag of "+material(f.Material), t.Depth)
+			check(t.Path, "depth", t.Depth, func() string { return "a tag of " + material(f.Material) })
 		}
 	}
 	for _, o := range w.OpenHoles {
-		check(key(o.Path, "bottom"), "open hole "+p.span(o.Interval), o.Bottom)
+		check(o.Path, "bottom", o.Bottom, func() string { return "open hole " + p.span(o.Interval) })
 	}
 	for _, l := range w.Lithology {
-		check(key(l.Path, "bottom"), "lithology layer "+p.span(l.Interval), l.Bottom)
+		check(l.Path, "bottom", l.Bottom, func() string { return "lithology layer " + p.span(l.Interval) })
 	}
 	if v := w.Surface.Vault; v != nil {
-		check("surface.vault.depth", "the vault", v.Depth)
+		check("surface.vault", "depth", v.Depth, func() string { return "the vault" })
 	}
 	if pc := w.Surface.Protective; pc != nil {
-		check("surface.protective.bottom", "the protective casing", pc.Bottom)
+		check("surface.protective", "bottom", pc.Bottom, func() string { return "the protective casing" })
 	}
 }
