@@ -95,6 +95,8 @@ func (p *painter) items(items []draw.Item, clip *draw.Rect, prefix string) {
 			}
 			c := p.pos(it.Center.X, it.Center.Y)
 			p.path(canvas.Circle(it.R*mmPerPt).Translate(c.X, c.Y), it.Style, clip, false)
+		case draw.Path:
+			p.compound(it, clip, path)
 		case draw.Text:
 			if !finite(it.At.X, it.At.Y, it.Size, it.Rotate) {
 				p.fail(path, "text %q is not finite", it.Role)
@@ -148,12 +150,23 @@ func rectPath(r canvas.Rect) *canvas.Path {
 // filled as if closed, as SVG and PDF both do. joins says the outline has
 // corners, where a miter reaches further than half the stroke width.
 func (p *painter) path(cp *canvas.Path, s draw.Style, clip *draw.Rect, joins bool) {
-	fill := !s.Fill.None()
-	stroke := !s.Stroke.None()
+	st, fill, stroke := p.style(s)
 	if !fill && !stroke {
 		return
 	}
-	st := canvas.DefaultStyle
+	if clip == nil {
+		p.r.RenderPath(cp, st, canvas.Identity)
+		return
+	}
+	p.clipped(cp, st, fill, stroke, clip, joins)
+}
+
+// style converts a draw style to canvas's, saying whether it fills and
+// whether it strokes.
+func (p *painter) style(s draw.Style) (st canvas.Style, fill, stroke bool) {
+	fill = !s.Fill.None()
+	stroke = !s.Stroke.None()
+	st = canvas.DefaultStyle
 	st.Fill = canvas.Paint{}
 	if fill {
 		st.Fill = canvas.Paint{Color: rgba(s.Fill)}
@@ -167,11 +180,11 @@ func (p *painter) path(cp *canvas.Path, s draw.Style, clip *draw.Rect, joins boo
 		st.StrokeWidth = width * mmPerPt
 		st.Dashes = dashes(s.Dash)
 	}
-	if clip == nil {
-		p.r.RenderPath(cp, st, canvas.Identity)
-		return
-	}
+	return st, fill, stroke
+}
 
+// clipped draws a path cut exactly to the clip rectangle.
+func (p *painter) clipped(cp *canvas.Path, st canvas.Style, fill, stroke bool, clip *draw.Rect, joins bool) {
 	cr := p.rect(*clip)
 	// A stroke reaches half its width past the outline, and a miter up to
 	// its limit (4) times that past a corner.

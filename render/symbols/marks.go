@@ -8,10 +8,12 @@ import (
 
 // A pen collects the marks of a pattern as drawing primitives, dropping
 // what falls outside the target rectangle and cutting lines to it, so the
-// backends see few items that cross the edge.
+// backends see few items that cross the edge. Marks of one style gather
+// into one draw.Path (see batch), so a pattern costs a backend a few
+// paths, not one per mark.
 type pen struct {
 	r     draw.Rect
-	items []draw.Item
+	items []draw.Item // *draw.Path while drawing; see done
 }
 
 const (
@@ -31,7 +33,7 @@ func (p *pen) lineStyled(x0, y0, x1, y1 float64, st draw.Style) {
 	if !ok {
 		return
 	}
-	p.items = append(p.items, draw.Shape{Style: st, Points: []draw.Point{a, b}})
+	p.batch(st, draw.Subpath{Points: []draw.Point{a, b}}, nil)
 }
 
 // dot draws a filled disc.
@@ -39,7 +41,7 @@ func (p *pen) dot(x, y, r float64) {
 	if !p.touches(x-r, y-r, 2*r, 2*r) {
 		return
 	}
-	p.items = append(p.items, draw.Circle{Style: draw.Style{Fill: ink}, Center: draw.Point{X: x, Y: y}, R: r})
+	p.batch(draw.Style{Fill: ink}, draw.Subpath{}, &draw.Disc{Center: draw.Point{X: x, Y: y}, R: r})
 }
 
 // ring draws a circle outline.
@@ -47,7 +49,7 @@ func (p *pen) ring(x, y, r, w float64) {
 	if !p.touches(x-r-w, y-r-w, 2*(r+w), 2*(r+w)) {
 		return
 	}
-	p.items = append(p.items, draw.Circle{Style: stroke(w), Center: draw.Point{X: x, Y: y}, R: r})
+	p.batch(stroke(w), draw.Subpath{}, &draw.Disc{Center: draw.Point{X: x, Y: y}, R: r})
 }
 
 // poly draws a closed polygon, filled with ink or outlined.
@@ -64,7 +66,7 @@ func (p *pen) poly(filled bool, pts ...draw.Point) {
 	if filled {
 		st = draw.Style{Fill: ink}
 	}
-	p.items = append(p.items, draw.Shape{Style: st, Points: pts, Closed: true})
+	p.batch(st, draw.Subpath{Points: pts, Closed: true}, nil)
 }
 
 // polyline draws an open polyline, cut to the rectangle piece by piece.
@@ -72,6 +74,73 @@ func (p *pen) polyline(w float64, pts ...draw.Point) {
 	for i := 1; i < len(pts); i++ {
 		p.line(pts[i-1].X, pts[i-1].Y, pts[i].X, pts[i].Y, w)
 	}
+}
+
+// batch adds a subpath (or, with d set, a circle) to the path of its
+// style. It may join a path drawn earlier than other marks only when
+// those are all of the same opaque colours, since reordering such marks
+// changes no pixel; otherwise it starts a new path, keeping the order.
+func (p *pen) batch(st draw.Style, sub draw.Subpath, d *draw.Disc) {
+	for i := len(p.items) - 1; i >= 0; i-- {
+		g, ok := p.items[i].(*draw.Path)
+		if !ok || !sameInk(g.Style, st) {
+			break
+		}
+		if sameStyle(g.Style, st) {
+			if d != nil {
+				g.Circles = append(g.Circles, *d)
+			} else {
+				g.Subpaths = append(g.Subpaths, sub)
+			}
+			return
+		}
+	}
+	g := &draw.Path{Style: st}
+	if d != nil {
+		g.Circles = []draw.Disc{*d}
+	} else {
+		g.Subpaths = []draw.Subpath{sub}
+	}
+	p.items = append(p.items, g)
+}
+
+// done returns the marks as items, the gathered paths as values.
+func (p *pen) done() []draw.Item {
+	for i, it := range p.items {
+		if g, ok := it.(*draw.Path); ok {
+			p.items[i] = *g
+		}
+	}
+	return p.items
+}
+
+// sameInk: both styles paint only one and the same opaque colour.
+func sameInk(a, b draw.Style) bool {
+	ca, cb := inkOf(a), inkOf(b)
+	return ca == cb && ca.A == 255
+}
+
+// inkOf is a style's one colour, or none when it paints two different ones.
+func inkOf(s draw.Style) draw.Color {
+	switch {
+	case s.Fill.None():
+		return s.Stroke
+	case s.Stroke.None() || s.Stroke == s.Fill:
+		return s.Fill
+	}
+	return draw.Color{}
+}
+
+func sameStyle(a, b draw.Style) bool {
+	if a.Stroke != b.Stroke || a.Fill != b.Fill || a.StrokeWidth != b.StrokeWidth || len(a.Dash) != len(b.Dash) {
+		return false
+	}
+	for i := range a.Dash {
+		if a.Dash[i] != b.Dash[i] {
+			return false
+		}
+	}
+	return true
 }
 
 func (p *pen) touches(x, y, w, h float64) bool {

@@ -56,8 +56,8 @@ func (s Symbol) Paint(r draw.Rect) []draw.Item {
 	if s.marks != nil {
 		p := &pen{r: r}
 		s.marks(p)
-		if len(p.items) > 0 {
-			items = append(items, draw.Clip{Rect: r, Items: p.items})
+		if marks := p.done(); len(marks) > 0 {
+			items = append(items, draw.Clip{Rect: r, Items: marks})
 		}
 	}
 	return items
