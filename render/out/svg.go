@@ -5,7 +5,6 @@ import (
 	"encoding/base64"
 	"encoding/xml"
 	"fmt"
-	"regexp"
 	"sort"
 
 	"github.com/tdewolff/canvas/renderers/svg"
@@ -42,30 +41,43 @@ func SVG(doc *draw.Document, i int) ([]byte, error) {
 	return addTitle(sortFontFaces(b), doc.Title), nil
 }
 
-var svgFontRE = regexp.MustCompile(`(src:url\('data:type/opentype;base64,)([A-Za-z0-9+/=]+)('\))`)
+// svgFontData opens and svgFontEnd closes each embedded font canvas writes.
+var svgFontData, svgFontEnd = []byte("src:url('data:type/opentype;base64,"), []byte("')")
 
 // pinSVGFonts pins the date inside each embedded font (see pinFontDate).
+// It scans for the few font URLs directly: the document is mostly path
+// data, which a pattern match would read character by character.
 func pinSVGFonts(b []byte) ([]byte, error) {
-	var err error
-	out := svgFontRE.ReplaceAllFunc(b, func(m []byte) []byte {
-		parts := svgFontRE.FindSubmatch(m)
-		ttf, derr := base64.StdEncoding.DecodeString(string(parts[2]))
-		if derr == nil {
-			ttf, derr = pinFontDate(ttf)
+	var out []byte
+	rest := b
+	for {
+		at := bytes.Index(rest, svgFontData)
+		if at < 0 {
+			break
 		}
-		if derr != nil {
-			if err == nil {
-				err = fmt.Errorf("embedded font: %w", derr)
-			}
-			return m
+		start := at + len(svgFontData)
+		n := bytes.Index(rest[start:], svgFontEnd)
+		if n < 0 {
+			break
 		}
-		var r bytes.Buffer
-		r.Write(parts[1])
-		r.WriteString(base64.StdEncoding.EncodeToString(ttf))
-		r.Write(parts[3])
-		return r.Bytes()
-	})
-	return out, err
+		ttf, err := base64.StdEncoding.DecodeString(string(rest[start : start+n]))
+		if err == nil {
+			ttf, err = pinFontDate(ttf)
+		}
+		if err != nil {
+			return nil, fmt.Errorf("embedded font: %w", err)
+		}
+		if out == nil {
+			out = make([]byte, 0, len(b))
+		}
+		out = append(out, rest[:start]...)
+		out = base64.StdEncoding.AppendEncode(out, ttf)
+		rest = rest[start+n:]
+	}
+	if out == nil {
+		return b, nil
+	}
+	return append(out, rest...), nil
 }
 
 // sortFontFaces puts the @font-face rules canvas writes in a fixed order:
