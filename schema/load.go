@@ -73,6 +73,21 @@ func (r *reader) at(path string) Pos {
 	return Pos{File: r.file, Line: line}
 }
 
+// purposeNames and materialNames are Purposes and Materials as the strings
+// a file may give, made once rather than for every well and fill.
+var (
+	purposeNames  = stringsOf(Purposes)
+	materialNames = stringsOf(Materials)
+)
+
+func stringsOf[S ~string](l []S) []string {
+	out := make([]string, len(l))
+	for i, s := range l {
+		out[i] = string(s)
+	}
+	return out
+}
+
 func (r *reader) well(root *table) *Well {
 	w := &Well{Pos: Pos{File: r.file, Line: 1}}
 	w.Units = r.units(root.sub("units"), root)
@@ -86,10 +101,7 @@ func (r *reader) well(root *table) *Well {
 	w.Project = wt.str("project")
 	w.Client = wt.str("client")
 	w.Site = wt.str("site")
-	purposes := make([]string, len(Purposes))
-	for i, p := range Purposes {
-		purposes[i] = string(p)
-	}
+	purposes := purposeNames
 	if _, ok := wt.m["purpose"]; !ok {
 		r.errAt("well", "missing required key \"purpose\" in [well] (one of: %s)", strings.Join(purposes, ", "))
 	}
@@ -375,10 +387,7 @@ func (r *reader) fill(t *table, w *Well) Fill {
 	defer t.done()
 	u := w.Units
 	f := Fill{Interval: r.interval(t, u, false), Pos: r.at(t.path), Path: t.path}
-	names := make([]string, len(Materials))
-	for i, m := range Materials {
-		names[i] = string(m)
-	}
+	names := materialNames
 	if _, ok := t.m["material"]; !ok {
 		r.errAt(t.path, "missing required key \"material\" in [[fill]] (one of: %s)", strings.Join(names, ", "))
 	}

@@ -59,7 +59,12 @@ func (r *reader) root(m map[string]any) *table {
 }
 
 // use marks a key as read.
-func (t *table) use(k string) { t.used = append(t.used, k) }
+func (t *table) use(k string) {
+	if t.used == nil {
+		t.used = make([]string, 0, len(t.m)+4) // most keys are read once
+	}
+	t.used = append(t.used, k)
+}
 
 // isUsed reports whether a key was read.
 func (t *table) isUsed(k string) bool {
