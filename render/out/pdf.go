@@ -31,7 +31,8 @@ func PDF(doc *draw.Document) ([]byte, error) {
 	var buf bytes.Buffer
 	opts := pdf.Options{Compress: true, SubsetFonts: true, ImageEncoding: canvas.Lossless}
 	r := pdf.New(&buf, pages[0].Width*mmPerPt, pages[0].Height*mmPerPt, &opts)
-	fonts := &fontSet{}
+	fonts := takeFonts()
+	defer fonts.giveBack()
 	for i, p := range pages {
 		if i > 0 {
 			r.NewPage(p.Width*mmPerPt, p.Height*mmPerPt)

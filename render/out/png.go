@@ -40,7 +40,9 @@ func PNG(doc *draw.Document, i int, dpi float64) ([]byte, error) {
 	img := image.NewRGBA(image.Rect(0, 0, w, h))
 	imagedraw.Draw(img, img.Bounds(), image.White, image.Point{}, imagedraw.Src)
 	r := rasterizer.FromImage(img, canvas.DPI(dpi), canvas.DefaultColorSpace)
-	if err := paintPage(r, p, &fontSet{}); err != nil {
+	fonts := takeFonts()
+	defer fonts.giveBack()
+	if err := paintPage(r, p, fonts); err != nil {
 		return nil, fmt.Errorf("png page %d: %w", i+1, err)
 	}
 	r.Close()

@@ -28,7 +28,9 @@ func SVG(doc *draw.Document, i int) ([]byte, error) {
 	opts.EmbedFonts = true
 	opts.SubsetFonts = true
 	r := svg.New(&buf, p.Width*mmPerPt, p.Height*mmPerPt, &opts)
-	if err := paintPage(r, p, &fontSet{}); err != nil {
+	fonts := takeFonts()
+	defer fonts.giveBack()
+	if err := paintPage(r, p, fonts); err != nil {
 		return nil, fmt.Errorf("svg page %d: %w", i+1, err)
 	}
 	if err := r.Close(); err != nil {
