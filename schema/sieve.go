@@ -20,11 +20,15 @@ func SieveOpening(number int) (Diameter, bool) {
 	return Diameter(mm), ok
 }
 
+// gradationNoise strips what may decorate sieve numbers ("#10", "No. 20");
+// built once, a Replacer is safe for concurrent use.
+var gradationNoise = strings.NewReplacer("#", "", "No.", "", "no.", "", " ", "")
+
 // ParseGradation reads a sieve range such as "20/40", "#10/#20" or "8x16"
 // (passes the coarse sieve, held on the fine one) and returns the finest and
 // coarsest grain sizes it stands for.
 func ParseGradation(s string) (min, max Diameter, err error) {
-	t := strings.NewReplacer("#", "", "No.", "", "no.", "", " ", "").Replace(s)
+	t := gradationNoise.Replace(s)
 	var sep string
 	for _, c := range []string{"/", "x", "X", "-"} {
 		if strings.Contains(t, c) {

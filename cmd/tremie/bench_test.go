@@ -2,6 +2,7 @@ package main
 
 import (
 	"fmt"
+	"io"
 	"os"
 	"path/filepath"
 	"runtime"
@@ -299,4 +300,20 @@ func BenchmarkCheckOneWell(b *testing.B) {
 		rules.Check(w, nil)
 	}
 	wellsPerSecond(b, 1)
+}
+
+// BenchmarkCheckCommand1000: tremie check on a 1,000-well project, as the
+// command runs it (find the files, read, load and check them on every
+// core, write the report), without starting a process.
+func BenchmarkCheckCommand1000(b *testing.B) {
+	dir := b.TempDir()
+	if err := synth.Project(dir, 1000); err != nil {
+		b.Fatal(err)
+	}
+	for b.Loop() {
+		if code := runCheck([]string{dir}, io.Discard, io.Discard); code != exitOK {
+			b.Fatalf("exit %d", code)
+		}
+	}
+	wellsPerSecond(b, 1000)
 }

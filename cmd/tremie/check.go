@@ -7,6 +7,8 @@ import (
 	"fmt"
 	"github.com/tremie-dev/tremie/cmd/internal/batch"
 	"io"
+	"os"
+	"runtime/debug"
 	"strings"
 
 	"github.com/tremie-dev/tremie/schema"
@@ -165,6 +167,7 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie check: no well files found in %s\n", strings.Join(opts.paths, ", "))
 		return exitInput
 	}
+	defer lessEagerGC()()
 	// Every file on its own worker; results come back in input order, so
 	// the report is the same on every run.
 	res, _ := batch.Run(files, batch.Options{Progress: batch.Terminal(), Label: "checking"}, func(_ int, f string) (fileResult, batch.Outcome, error) {
@@ -193,6 +196,24 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 		return exitOutput
 	}
 	return checkExit(results, len(findErrs) > 0)
+}
+
+// checkGCPercent is the garbage collector's target while a batch is
+// checked. Parsing allocates about 110 KB per well that is garbage as soon
+// as the well is read, while the live heap stays a few MB, so at the
+// default (100) the collector runs every few dozen wells. At 400 it ran
+// about 13 % less CPU on 1,000 synthetic wells, with a peak RSS of 62 MB
+// instead of 37 MB (BENCHMARKS.md).
+const checkGCPercent = 400
+
+// lessEagerGC sets checkGCPercent, unless the user chose a GOGC, and
+// returns the function that restores the previous setting.
+func lessEagerGC() (restore func()) {
+	if os.Getenv("GOGC") != "" {
+		return func() {}
+	}
+	prev := debug.SetGCPercent(checkGCPercent)
+	return func() { debug.SetGCPercent(prev) }
 }
 
 // checkExit is 2 when any file could not be found, read or parsed, else 1
