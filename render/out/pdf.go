@@ -29,7 +29,8 @@ func PDF(doc *draw.Document) ([]byte, error) {
 		}
 	}
 	var buf bytes.Buffer
-	opts := pdf.Options{Compress: true, SubsetFonts: true, ImageEncoding: canvas.Lossless}
+	// Streams are compressed by fixPDF, at a level chosen per stream.
+	opts := pdf.Options{Compress: false, SubsetFonts: true, ImageEncoding: canvas.Lossless}
 	r := pdf.New(&buf, pages[0].Width*mmPerPt, pages[0].Height*mmPerPt, &opts)
 	fonts := takeFonts()
 	defer fonts.giveBack()

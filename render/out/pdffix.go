@@ -17,7 +17,8 @@ import (
 // fixPDF makes canvas's PDF output repeatable: it replaces object 2, the
 // information dictionary canvas writes with the clock's date, by info;
 // pins the date inside every embedded TrueType program (FontFile2
-// streams, see pinFontDate); and rewrites the cross-reference table and
+// streams, see pinFontDate); compresses the streams canvas leaves
+// uncompressed; and rewrites the cross-reference table and
 // trailer, adding a file identifier hashed from the content. Anything
 // unexpected in canvas's layout is an error, not a silent guess.
 func fixPDF(pdf []byte, info []byte) ([]byte, error) {
@@ -33,6 +34,7 @@ func fixPDF(pdf []byte, info []byte) ([]byte, error) {
 		return nil, err
 	}
 	replace := map[int][]byte{2: info}
+	fonts := map[int]bool{}
 	for _, span := range spans[1:] {
 		// Only dictionaries name font files; stream data is skipped.
 		if at := bytes.Index(span, []byte(">>stream\n")); at >= 0 {
@@ -40,15 +42,28 @@ func fixPDF(pdf []byte, info []byte) ([]byte, error) {
 		}
 		for _, m := range fontFileRE.FindAllSubmatch(span, -1) {
 			n, _ := strconv.Atoi(string(m[1]))
-			if n <= 0 || n >= len(offsets) || replace[n] != nil {
-				continue
+			if n > 2 && n < len(offsets) {
+				fonts[n] = true
 			}
-			obj, err := pinFontStream(spans[n])
-			if err != nil {
-				return nil, fmt.Errorf("font program object %d: %w", n, err)
-			}
-			replace[n] = obj
 		}
+	}
+	// Streams come from canvas uncompressed and are compressed here: page
+	// content at Flate's fastest level (it is most of the work, and the
+	// file grows by about a fifth), font programs at the default level,
+	// once, after their date is pinned.
+	for n := 3; n < len(spans); n++ {
+		if !bytes.Contains(spans[n], []byte(">>stream\n")) {
+			continue
+		}
+		pin, level := (func([]byte) ([]byte, error))(nil), zlib.BestSpeed
+		if fonts[n] {
+			pin, level = pinFontDate, zlib.DefaultCompression
+		}
+		obj, err := compressStream(spans[n], pin, level)
+		if err != nil {
+			return nil, fmt.Errorf("stream object %d: %w", n, err)
+		}
+		replace[n] = obj
 	}
 	return rebuild(spans, replace), nil
 }
@@ -108,18 +123,16 @@ func rebuild(spans [][]byte, replace map[int][]byte) []byte {
 
 var lengthRE = regexp.MustCompile(`/Length (\d+)`)
 
-// pinFontStream decodes a Flate-compressed font program object, pins its
-// date and encodes it again.
-func pinFontStream(obj []byte) ([]byte, error) {
+// compressStream Flate-compresses an uncompressed stream object, first
+// passing its data through pin when given; a stream that already has a
+// filter is left as it is, unless it must be pinned.
+func compressStream(obj []byte, pin func([]byte) ([]byte, error), level int) ([]byte, error) {
 	const open, closing = ">>stream\n", "\nendstream\n"
 	at := bytes.Index(obj, []byte(open))
 	if at < 0 {
 		return nil, errors.New("not a stream")
 	}
 	dict := obj[:at+2]
-	if !bytes.Contains(dict, []byte("/Filter/FlateDecode")) {
-		return nil, errors.New("font program is not Flate-compressed")
-	}
 	m := lengthRE.FindSubmatchIndex(dict)
 	if m == nil {
 		return nil, errors.New("stream has no /Length")
@@ -129,27 +142,44 @@ func pinFontStream(obj []byte) ([]byte, error) {
 	if start+length > len(obj) || !bytes.HasPrefix(obj[start+length:], []byte(closing)) {
 		return nil, errors.New("stream length does not match its data")
 	}
-	zr, err := zlib.NewReader(bytes.NewReader(obj[start : start+length]))
-	if err != nil {
-		return nil, err
+	data := obj[start : start+length]
+	if bytes.Contains(dict, []byte("/Filter")) {
+		if pin == nil {
+			return obj, nil
+		}
+		if !bytes.Contains(dict, []byte("/Filter/FlateDecode")) {
+			return nil, errors.New("stream to pin is not Flate-compressed")
+		}
+		zr, err := zlib.NewReader(bytes.NewReader(data))
+		if err != nil {
+			return nil, err
+		}
+		if data, err = io.ReadAll(zr); err != nil {
+			return nil, err
+		}
+		dict = bytes.Replace(dict, []byte("/Filter/FlateDecode"), nil, 1)
+		m = lengthRE.FindSubmatchIndex(dict)
 	}
-	ttf, err := io.ReadAll(zr)
-	if err != nil {
-		return nil, err
-	}
-	if ttf, err = pinFontDate(ttf); err != nil {
-		return nil, err
+	if pin != nil {
+		var err error
+		if data, err = pin(data); err != nil {
+			return nil, err
+		}
 	}
 	var z bytes.Buffer
-	zw := zlib.NewWriter(&z)
-	zw.Write(ttf)
+	zw, err := zlib.NewWriterLevel(&z, level)
+	if err != nil {
+		return nil, err
+	}
+	zw.Write(data)
 	zw.Close()
 
 	var out bytes.Buffer
+	out.Grow(len(obj))
 	out.Write(dict[:m[2]])
 	out.WriteString(strconv.Itoa(z.Len()))
-	out.Write(dict[m[3]:])
-	out.WriteString("stream\n")
+	out.Write(dict[m[3] : len(dict)-2])
+	out.WriteString("/Filter/FlateDecode>>stream\n")
 	out.Write(z.Bytes())
 	out.Write(obj[start+length:])
 	return out.Bytes(), nil
