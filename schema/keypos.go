@@ -34,6 +34,8 @@ func scanKeys(src string, visit func(path string, p keyPos)) {
 	current := ""
 	inMulti := ""
 	lineNo := 0
+	var paths pathArena
+	paths.Grow(len(src) + len(src)/2) // the paths of a typical well file fit
 	for rest := src; ; {
 		var line string
 		nl := strings.IndexByte(rest, '\n')
@@ -43,7 +45,7 @@ func scanKeys(src string, visit func(path string, p keyPos)) {
 			line, rest = rest[:nl], rest[nl+1:]
 		}
 		lineNo++
-		scanLine(line, lineNo, &current, &inMulti, counts, visit)
+		scanLine(line, lineNo, &current, &inMulti, counts, &paths, visit)
 		if nl < 0 {
 			return
 		}
@@ -51,7 +53,7 @@ func scanKeys(src string, visit func(path string, p keyPos)) {
 }
 
 // scanLine handles one line of scanKeys.
-func scanLine(line string, lineNo int, current, inMulti *string, counts map[string]int, visit func(string, keyPos)) {
+func scanLine(line string, lineNo int, current, inMulti *string, counts map[string]int, paths *pathArena, visit func(string, keyPos)) {
 	if *inMulti != "" {
 		if strings.Contains(line, *inMulti) {
 			*inMulti = ""
@@ -71,7 +73,7 @@ func scanLine(line string, lineNo int, current, inMulti *string, counts map[stri
 		base := resolveTable(name, counts)
 		idx := counts[base]
 		counts[base] = idx + 1
-		*current = base + "[" + strconv.Itoa(idx) + "]"
+		*current = paths.indexed(base, idx)
 		c := strings.Index(line, "[[") + 1
 		visit(*current, keyPos{lineNo, c, c})
 		return
@@ -93,7 +95,7 @@ func scanLine(line string, lineNo int, current, inMulti *string, counts map[stri
 	key := cleanKey(line[:eq])
 	path := key
 	if *current != "" {
-		path = *current + "." + key
+		path = paths.join(*current, key)
 	}
 	col := eq + 2
 	for col <= len(line) && (line[col-1] == ' ' || line[col-1] == '\t') {
@@ -109,6 +111,31 @@ func scanLine(line string, lineNo int, current, inMulti *string, counts map[stri
 			}
 		}
 	}
+}
+
+// pathArena builds the key paths of one file in a single growing buffer:
+// each path is a slice of the buffer's string, so a file's few hundred
+// paths cost a few allocations rather than one each. A strings.Builder
+// only ever appends, so a string taken from it never changes.
+type pathArena struct{ strings.Builder }
+
+// join returns table + "." + key.
+func (a *pathArena) join(table, key string) string {
+	start := a.Len()
+	a.WriteString(table)
+	a.WriteByte('.')
+	a.WriteString(key)
+	return a.String()[start:]
+}
+
+// indexed returns base + "[" + i + "]".
+func (a *pathArena) indexed(base string, i int) string {
+	start := a.Len()
+	a.WriteString(base)
+	a.WriteByte('[')
+	a.WriteString(strconv.Itoa(i))
+	a.WriteByte(']')
+	return a.String()[start:]
 }
 
 // resolveTable turns a dotted table name into a path with the current index
