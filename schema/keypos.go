@@ -15,27 +15,40 @@ type keyPos struct{ line, col, keyCol int }
 // needs to be right for files the parser has already accepted.
 func scanKeyPositions(src string) map[string]keyPos {
 	out := map[string]keyPos{}
-	scanKeys(src, func(path string, p keyPos) { out[path] = p })
+	scanKeys(src, false, func(path string, p keyPos) { out[path] = p })
 	return out
 }
 
-// scanKeyLines is scanKeyPositions with lines only: what a well that loads
-// cleanly keeps (Well.Keys). Columns are needed only to report an error.
+// scanKeyLines is scanKeyPositions with lines only, for Well.Line.
+// Columns are needed only to report an error.
 func scanKeyLines(src string) map[string]int {
 	out := make(map[string]int, strings.Count(src, "=")+8)
-	scanKeys(src, func(path string, p keyPos) { out[path] = p.line })
+	scanKeys(src, false, func(path string, p keyPos) { out[path] = p.line })
 	return out
 }
 
-// scanKeys calls visit for every table header and key of a TOML text, in
-// file order, with its path and position.
-func scanKeys(src string, visit func(path string, p keyPos)) {
+// scanHeaderLines maps the path of every table header ("fill[2]") to its
+// line: the positions the loader gives to the parts of a well. It skips
+// the work of naming every key.
+func scanHeaderLines(src string) map[string]int {
+	out := make(map[string]int, strings.Count(src, "\n[")+2)
+	scanKeys(src, true, func(path string, p keyPos) { out[path] = p.line })
+	return out
+}
+
+// scanKeys calls visit for every table header and, unless headersOnly,
+// every key of a TOML text, in file order, with its path and position.
+func scanKeys(src string, headersOnly bool, visit func(path string, p keyPos)) {
 	counts := map[string]int{} // array-table path (with parent indices) -> entries
 	current := ""
 	inMulti := ""
 	lineNo := 0
 	var paths pathArena
-	paths.Grow(len(src) + len(src)/2) // the paths of a typical well file fit
+	if headersOnly {
+		paths.Grow(len(src) / 8)
+	} else {
+		paths.Grow(len(src) + len(src)/2) // the paths of a typical well file fit
+	}
 	for rest := src; ; {
 		var line string
 		nl := strings.IndexByte(rest, '\n')
@@ -45,7 +58,7 @@ func scanKeys(src string, visit func(path string, p keyPos)) {
 			line, rest = rest[:nl], rest[nl+1:]
 		}
 		lineNo++
-		scanLine(line, lineNo, &current, &inMulti, counts, &paths, visit)
+		scanLine(line, lineNo, &current, &inMulti, counts, &paths, headersOnly, visit)
 		if nl < 0 {
 			return
 		}
@@ -53,7 +66,7 @@ func scanKeys(src string, visit func(path string, p keyPos)) {
 }
 
 // scanLine handles one line of scanKeys.
-func scanLine(line string, lineNo int, current, inMulti *string, counts map[string]int, paths *pathArena, visit func(string, keyPos)) {
+func scanLine(line string, lineNo int, current, inMulti *string, counts map[string]int, paths *pathArena, headersOnly bool, visit func(string, keyPos)) {
 	if *inMulti != "" {
 		if strings.Contains(line, *inMulti) {
 			*inMulti = ""
@@ -92,17 +105,9 @@ func scanLine(line string, lineNo int, current, inMulti *string, counts map[stri
 	if eq < 0 {
 		return
 	}
-	key := cleanKey(line[:eq])
-	path := key
-	if *current != "" {
-		path = paths.join(*current, key)
+	if !headersOnly {
+		visitKey(line, lineNo, eq, *current, paths, visit)
 	}
-	col := eq + 2
-	for col <= len(line) && (line[col-1] == ' ' || line[col-1] == '\t') {
-		col++
-	}
-	keyCol := len(line) - len(strings.TrimLeft(line, " \t")) + 1
-	visit(path, keyPos{lineNo, col, keyCol})
 	value := line[eq+1:]
 	if strings.Contains(value, `"""`) || strings.Contains(value, `'''`) {
 		for _, q := range []string{`"""`, `'''`} {
@@ -111,6 +116,21 @@ func scanLine(line string, lineNo int, current, inMulti *string, counts map[stri
 			}
 		}
 	}
+}
+
+// visitKey names the key of a key/value line whose '=' is at eq.
+func visitKey(line string, lineNo, eq int, current string, paths *pathArena, visit func(string, keyPos)) {
+	key := cleanKey(line[:eq])
+	path := key
+	if current != "" {
+		path = paths.join(current, key)
+	}
+	col := eq + 2
+	for col <= len(line) && (line[col-1] == ' ' || line[col-1] == '\t') {
+		col++
+	}
+	keyCol := len(line) - len(strings.TrimLeft(line, " \t")) + 1
+	visit(path, keyPos{lineNo, col, keyCol})
 }
 
 // pathArena builds the key paths of one file in a single growing buffer:

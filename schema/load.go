@@ -44,13 +44,13 @@ func Load(name string, data []byte) (*Well, error) {
 	if raw == nil {
 		raw = map[string]any{}
 	}
-	r := &reader{file: name, src: src, lines: scanKeyLines(src)}
+	r := &reader{file: name, src: src, heads: scanHeaderLines(src)}
 	w := r.well(r.root(raw))
 	if len(r.errs) > 0 {
 		sortErrors(r.errs)
 		return nil, r.errs
 	}
-	w.Keys = r.lines
+	w.keys = &keyIndex{src: src, lines: r.lines}
 	return w, nil
 }
 
@@ -62,7 +62,15 @@ func sortErrors(l ErrorList) {
 	}
 }
 
+// at is the position of a part of the well: the line of its table header,
+// or else of the key or table nearest it.
 func (r *reader) at(path string) Pos {
+	if line, ok := r.heads[path]; ok {
+		return Pos{File: r.file, Line: line}
+	}
+	if r.lines == nil {
+		r.lines = scanKeyLines(r.src)
+	}
 	line, ok := r.lines[path]
 	for q := path; !ok && q != ""; q = parentPath(q) {
 		line, ok = r.lines[q]

@@ -14,7 +14,8 @@ import (
 type reader struct {
 	file  string
 	src   string
-	lines map[string]int    // key path -> line, for every key
+	heads map[string]int    // table header path -> line
+	lines map[string]int    // key path -> line, for every key; scanned when needed
 	pos   map[string]keyPos // with columns; scanned on the first error
 	errs  ErrorList
 }

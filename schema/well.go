@@ -5,7 +5,10 @@
 // nothing of rules, quantities or drawing.
 package schema
 
-import "time"
+import (
+	"sync"
+	"time"
+)
 
 // Pos locates a value in its source file, for findings and errors.
 type Pos struct {
@@ -47,20 +50,49 @@ type Well struct {
 	Surface     Surface
 	Waivers     []Waiver
 
-	// Keys maps a dotted key path with array indices, such as
-	// "fill[2].bottom", to its line, for findings that name a value.
-	Keys map[string]int
+	// keys locates key paths in the file text; see Line and HasKey.
+	keys *keyIndex
+}
+
+// keyIndex maps every dotted key path with array indices, such as
+// "fill[2].bottom", to its line. It is made from the file text on first
+// use, since a well that checks clean never asks; safe for concurrent use.
+type keyIndex struct {
+	once  sync.Once
+	src   string
+	lines map[string]int
+}
+
+func (k *keyIndex) get() map[string]int {
+	if k == nil {
+		return nil
+	}
+	k.once.Do(func() {
+		if k.lines == nil {
+			k.lines = scanKeyLines(k.src)
+		}
+		k.src = ""
+	})
+	return k.lines
 }
 
 // Line returns the line of a key path, or of the nearest enclosing table
 // that has one, or 1.
 func (w *Well) Line(path string) int {
+	keys := w.keys.get()
 	for p := path; p != ""; p = parentPath(p) {
-		if l, ok := w.Keys[p]; ok {
+		if l, ok := keys[p]; ok {
 			return l
 		}
 	}
 	return 1
+}
+
+// HasKey reports whether the file gives the key path itself, such as
+// "string[0].section[1].slot".
+func (w *Well) HasKey(path string) bool {
+	_, ok := w.keys.get()[path]
+	return ok
 }
 
 // At returns the position of a key path.

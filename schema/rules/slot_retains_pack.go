@@ -65,7 +65,7 @@ func runSlotRetainsPack(p *Pass) {
 				pack = f.Gradation + " " + pack
 			}
 			slotKey := key(sec.Path, "slot")
-			if _, ok := w.Keys[slotKey]; !ok {
+			if !w.HasKey(slotKey) {
 				slotKey = key(sec.Path, "slot_number")
 			}
 			if f.GrainMax <= f.GrainMin {
