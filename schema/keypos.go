@@ -101,6 +101,9 @@ func scanLine(line string, lineNo int, current, inMulti *string, counts map[stri
 		visit(*current, keyPos{lineNo, c, c})
 		return
 	}
+	if headersOnly && !strings.Contains(line, `"""`) && !strings.Contains(line, `'''`) {
+		return // a key line that opens no multi-line string changes nothing
+	}
 	eq := keyEquals(line)
 	if eq < 0 {
 		return
