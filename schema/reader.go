@@ -53,6 +53,7 @@ type table struct {
 	path string
 	m    map[string]any
 	used []string // keys asked for; a table has few, so a slice beats a map
+	buf  [8]string // used's first backing array, saving an allocation per table
 }
 
 func (r *reader) root(m map[string]any) *table {
@@ -62,7 +63,7 @@ func (r *reader) root(m map[string]any) *table {
 // use marks a key as read.
 func (t *table) use(k string) {
 	if t.used == nil {
-		t.used = make([]string, 0, len(t.m)+4) // most keys are read once
+		t.used = t.buf[:0]
 	}
 	t.used = append(t.used, k)
 }
