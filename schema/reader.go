@@ -52,7 +52,7 @@ type table struct {
 	r    *reader
 	path string
 	m    map[string]any
-	used []string // keys asked for; a table has few, so a slice beats a map
+	used []string  // keys asked for; a table has few, so a slice beats a map
 	buf  [8]string // used's first backing array, saving an allocation per table
 }
 
