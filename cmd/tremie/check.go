@@ -6,6 +6,7 @@ import (
 	"flag"
 	"fmt"
 	"github.com/tremie-dev/tremie/cmd/internal/batch"
+	"github.com/tremie-dev/tremie/schema/quantity"
 	"io"
 	"os"
 	"runtime/debug"
@@ -162,6 +163,14 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 			return exitInput
 		}
 		prof = p
+	}
+	if in.yields != "" {
+		y, err := quantity.LoadYields(in.yields)
+		if err != nil {
+			fmt.Fprintln(stderr, err)
+			return exitInput
+		}
+		prof = withYields(prof, y)
 	}
 	if len(files) == 0 && len(findErrs) == 0 {
 		fmt.Fprintf(stderr, "tremie check: no well files found in %s\n", strings.Join(opts.paths, ", "))

@@ -6,6 +6,8 @@ import (
 
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/project"
+	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
 )
 
 // inputs is what the FILE|DIR arguments of check and render expand to.
@@ -97,4 +99,19 @@ func enclosingProject(file string) (*project.Project, error) {
 		dir = parent
 	}
 	return nil, nil
+}
+
+// withYields is the profile (nil for the defaults) with the yields the
+// placement checks use, so that check, render, book and quantities compare
+// placed amounts against the same figures.
+func withYields(prof *rules.Profile, y *quantity.Yields) *rules.Profile {
+	if y == nil {
+		return prof
+	}
+	if prof == nil {
+		prof = rules.DefaultProfile()
+	}
+	cp := *prof
+	cp.Yields = y
+	return &cp
 }

@@ -37,3 +37,28 @@ func TestProjectYieldsFile(t *testing.T) {
 		t.Errorf("exit %d, stderr %q", code, errb)
 	}
 }
+
+// The placement checks of tremie check use the project's yields too: at
+// 0.3 ft3 per 50-lb bag MW-1's 9 bags make 2.7 ft3 against 4.457 ft3
+// calculated, 61 %, below the 80 % default, so MW-1 gets the bridge error it
+// does not get at the 0.5 ft3 default (common practice).
+func TestProjectYieldsReachCheck(t *testing.T) {
+	dir := t.TempDir()
+	if err := writeDemo(dir); err != nil {
+		t.Fatal(err)
+	}
+	_, before, _ := runTremie("check", dir)
+	if strings.Contains(before, "MW-1.toml:72: error PLACED-VOLUME-LOW") {
+		t.Fatalf("MW-1 flagged at the default yields:\n%s", before)
+	}
+	put(t, dir, "site.yields.toml", "[yields]\n[yields.filter-pack]\nyield = 0.3\nbag_mass = 50\n")
+	prj := filepath.Join(dir, "project.toml")
+	data, _ := os.ReadFile(prj)
+	if err := os.WriteFile(prj, append(data, []byte("yields = \"site.yields.toml\"\n")...), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	_, after, errb := runTremie("check", dir)
+	if !strings.Contains(after, "MW-1.toml:72: error PLACED-VOLUME-LOW") {
+		t.Errorf("MW-1 not flagged with the project's yields:\n%s\n%s", after, errb)
+	}
+}

@@ -363,6 +363,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 			return exitInput
 		}
 	}
+	opts.profile = withYields(opts.profile, opts.yields)
 	if opts.outDir == "" {
 		fmt.Fprintln(stderr, "tremie render: name the output directory with -o OUTDIR")
 		return exitUsage

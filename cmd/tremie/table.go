@@ -138,6 +138,7 @@ func loadProjectWells(dir string, stderr io.Writer) (*projectWells, int) {
 			return nil, exitInput
 		}
 		pw.yields = y
+		pw.prof = withYields(pw.prof, y)
 	}
 	files, err := p.WellFiles()
 	if err != nil {

@@ -1,6 +1,9 @@
 package rules
 
-import "github.com/tremie-dev/tremie/schema"
+import (
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
+)
 
 // Profile holds a project's thresholds and severities. The zero overrides
 // mean every rule runs with its documented defaults.
@@ -19,6 +22,9 @@ type Profile struct {
 	Severities map[string]Severity
 	// Off lists rules switched off for the project.
 	Off map[string]bool
+	// Yields are the material yields the placement checks compare placed
+	// amounts with (a project's yields file); nil for the built-in ones.
+	Yields *quantity.Yields
 	// SanitarySeal, by purpose, in metres; read by the sanitary-seal rule.
 	SanitarySeal map[schema.Purpose]schema.Length
 }

@@ -204,7 +204,7 @@ func Check(w *schema.Well, prof *Profile) []Finding {
 		prof = DefaultProfile()
 	}
 	var out []Finding
-	sh := &shared{}
+	sh := &shared{yields: prof.Yields}
 	for _, r := range sortedRules() {
 		runOne(r, w, prof, sh, &out)
 	}
