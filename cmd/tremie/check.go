@@ -8,8 +8,6 @@ import (
 	"github.com/tremie-dev/tremie/cmd/internal/batch"
 	"github.com/tremie-dev/tremie/schema/quantity"
 	"io"
-	"os"
-	"runtime/debug"
 	"strings"
 
 	"github.com/tremie-dev/tremie/schema"
@@ -205,24 +203,6 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 		return exitOutput
 	}
 	return checkExit(results, len(findErrs) > 0)
-}
-
-// checkGCPercent is the garbage collector's target while a batch is
-// checked. Parsing allocates about 110 KB per well that is garbage as soon
-// as the well is read, while the live heap stays a few MB, so at the
-// default (100) the collector runs every few dozen wells. At 400 it ran
-// about 13 % less CPU on 1,000 synthetic wells, with a peak RSS of 62 MB
-// instead of 37 MB (BENCHMARKS.md).
-const checkGCPercent = 400
-
-// lessEagerGC sets checkGCPercent, unless the user chose a GOGC, and
-// returns the function that restores the previous setting.
-func lessEagerGC() (restore func()) {
-	if os.Getenv("GOGC") != "" {
-		return func() {}
-	}
-	prev := debug.SetGCPercent(checkGCPercent)
-	return func() { debug.SetGCPercent(prev) }
 }
 
 // checkExit is 2 when any file could not be found, read or parsed, else 1

@@ -25,6 +25,7 @@ type renderJob struct {
 // force). A skipped well is still loaded and checked, which is cheap, so
 // that the exit code always reflects the check.
 func renderRun(files []string, opts renderOptions, force bool, profileBytes, yieldsBytes []byte) ([]batch.Result[renderResult], batch.Summary, *incremental.Cache, []string, error) {
+	defer lessEagerGC()()
 	cache, cacheErr := incremental.Load(opts.outDir)
 	bases := map[*project.Project]incremental.Base{}
 	jobs := make([]renderJob, len(files))
