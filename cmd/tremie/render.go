@@ -286,7 +286,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	dpi := fset.Float64("dpi", 150, "PNG resolution in dots per inch")
 	force := fset.Bool("force", false, "redraw every well, even those unchanged since the last run")
 	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie render FILE|DIR... -o OUTDIR [--format svg,pdf,png] [--page letter|tabloid|a4|a3] [--landscape] [--scale S] [--strict] [--profile FILE]")
+		fmt.Fprintln(stderr, "usage: tremie render FILE|DIR... -o OUTDIR [--format svg,pdf,png] [--page letter|tabloid|a4|a3] [--landscape] [--scale S] [--strict] [--force] [--profile FILE] [--yields FILE] [--dpi N]")
 		fset.PrintDefaults()
 	}
 	paths, err := parseInterleaved(fset, args)
