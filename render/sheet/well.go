@@ -482,8 +482,8 @@ func (p *painter) ground() []draw.Item {
 }
 
 // waterLevels marks each reading with an inverted triangle in the bore:
-// filled for a static level, open for first encountered, dashed for
-// pumping.
+// the first-encountered mark for water met while drilling, the level mark
+// for static and pumping readings (the callout names which).
 func (p *painter) waterLevels() []draw.Item {
 	l := p.l
 	var items []draw.Item
@@ -499,7 +499,11 @@ func (p *painter) waterLevels() []draw.Item {
 		xi := x + float64(i%3-1)*3.5                       // readings close together stay apart
 		mark := draw.Rect{X: xi - 4, Y: y - 4, W: 8, H: 8} // the table's mark has its apex at the box's centre
 		items = append(items, box(mark, draw.Color{}, 0, draw.Color{}, "water:"+pathOr(wl.Path, "water_level", i)))
-		items = append(items, p.use(partSymbol(symbols.WaterLevel)).paint(mark)...)
+		id := symbols.WaterLevel
+		if wl.Kind == schema.FirstEncountered {
+			id = symbols.FirstWater
+		}
+		items = append(items, p.use(partSymbol(id)).paint(mark)...)
 	}
 	return items
 }

@@ -90,6 +90,7 @@ const (
 	ScreenWrap    = "part:screen-wrap"
 	OpenHole      = "part:open-hole"
 	WaterLevel    = "part:water-level"
+	FirstWater    = "part:water-first"
 	Centralizer   = "part:centralizer"
 	Cap           = "part:cap"
 )

@@ -15,7 +15,8 @@ var partSymbols = []Symbol{
 	{ID: "part:screen-slotted", Name: "Screen, slotted", Kind: WellPart, Fill: partInk, marks: slots, swatch: pipeSwatch("part:screen-slotted")},
 	{ID: "part:screen-wrap", Name: "Screen, continuous wrap (wire-wound)", Kind: WellPart, Fill: draw.White, marks: wireWrap, swatch: pipeSwatch("part:screen-wrap")},
 	{ID: "part:open-hole", Name: "Open hole (uncased borehole wall)", Kind: WellPart, marks: roughWall, swatch: pipeSwatch("part:open-hole")},
-	{ID: "part:water-level", Name: "Water level", Kind: WellPart, marks: waterMark, swatch: markSwatch("part:water-level")},
+	{ID: "part:water-level", Name: "Static or pumping water level", Kind: WellPart, marks: waterMark, swatch: markSwatch("part:water-level")},
+	{ID: "part:water-first", Name: "First water encountered", Kind: WellPart, marks: firstWaterMark, swatch: markSwatch("part:water-first")},
 	{ID: "part:centralizer", Name: "Centralizer", Kind: WellPart, marks: bowSprings, swatch: centralizerSwatch},
 	{ID: "part:cap", Name: "Cap or plug", Kind: WellPart, Fill: partInk, marks: capBand, swatch: capSwatch},
 }
@@ -57,19 +58,36 @@ func roughWall(p *pen) {
 	p.polyline(0.6, pts...)
 }
 
-// waterMark: an inverted triangle whose apex sits on the level, at the
-// box's centre, with two shortening bars beneath.
+// waterMark: a filled inverted triangle whose apex sits on the level, at
+// the box's centre, with two shortening bars beneath: a level measured
+// in the finished well.
 func waterMark(p *pen) {
-	r := p.r
-	s := math.Min(r.W, r.H) / 2
-	cx, cy := r.X+r.W/2, r.Y+r.H/2
-	st := draw.Style{Stroke: waterInk, StrokeWidth: 0.6, Fill: draw.White}
-	p.items = append(p.items, draw.Shape{Style: st, Closed: true, Role: "water level mark", Points: []draw.Point{
-		{X: cx - s*0.8, Y: cy - s*0.9}, {X: cx + s*0.8, Y: cy - s*0.9}, {X: cx, Y: cy},
-	}})
+	cx, cy, s := waterTriangle(p, waterInk)
 	bar := draw.Style{Stroke: waterInk, StrokeWidth: 0.6}
 	p.lineStyled(cx-s*0.7, cy+s*0.35, cx+s*0.7, cy+s*0.35, bar)
 	p.lineStyled(cx-s*0.4, cy+s*0.7, cx+s*0.4, cy+s*0.7, bar)
+}
+
+// firstWaterMark: the same triangle left open, with one dotted bar: water
+// met while drilling, before the level settled. Open against filled and
+// one broken bar against two solid ones tell the kinds apart in black and
+// white.
+func firstWaterMark(p *pen) {
+	cx, cy, s := waterTriangle(p, draw.White)
+	p.lineStyled(cx-s*0.7, cy+s*0.45, cx+s*0.7, cy+s*0.45, draw.Style{Stroke: waterInk, StrokeWidth: 0.6, Dash: []float64{0.8, 0.6}})
+}
+
+// waterTriangle draws the inverted triangle of the water marks, apex at
+// the box's centre, and returns the centre and half-size.
+func waterTriangle(p *pen, fill draw.Color) (cx, cy, s float64) {
+	r := p.r
+	s = math.Min(r.W, r.H) / 2
+	cx, cy = r.X+r.W/2, r.Y+r.H/2
+	st := draw.Style{Stroke: waterInk, StrokeWidth: 0.6, Fill: fill}
+	p.items = append(p.items, draw.Shape{Style: st, Closed: true, Role: "water level mark", Points: []draw.Point{
+		{X: cx - s*0.8, Y: cy - s*0.9}, {X: cx + s*0.8, Y: cy - s*0.9}, {X: cx, Y: cy},
+	}})
+	return cx, cy, s
 }
 
 // bowSprings: two bows bulging out from a collar at top and bottom.

@@ -296,6 +296,35 @@ func TestScreensDifferWhenNarrow(t *testing.T) {
 	}
 }
 
+// TestWaterMarksDiffer: a first-encountered level and a static one must
+// read apart at the size drawn on a sheet (8 pt), in black and white, and
+// each must differ from every other part's mark.
+func TestWaterMarksDiffer(t *testing.T) {
+	r := draw.Rect{X: 10, Y: 10, W: 8, H: 8}
+	mask := func(id string) []bool { return inkMask(raster(t, 28, 28, 288, MustPart(id).Paint(r))) }
+	first, static := mask(FirstWater), mask(WaterLevel)
+	diff := func(a, b []bool) (d int) {
+		for k := range a {
+			if a[k] != b[k] {
+				d++
+			}
+		}
+		return d
+	}
+	area := 8 * 8 * 16 // mark pixels at 4 px per point
+	if d := diff(first, static); float64(d) < 0.08*float64(area) {
+		t.Errorf("first-encountered and static water marks differ in %d of %d pixels", d, area)
+	}
+	for _, id := range []string{Casing, ScreenSlotted, ScreenWrap, OpenHole, Centralizer, Cap} {
+		other := mask(id)
+		for _, w := range []string{FirstWater, WaterLevel} {
+			if d := diff(mask(w), other); float64(d) < 0.08*float64(area) {
+				t.Errorf("%s and %s differ in %d of %d pixels", w, id, d, area)
+			}
+		}
+	}
+}
+
 // ---- colour ----
 
 // srgbToLinear is the sRGB transfer function (IEC 61966-2-1).
@@ -442,14 +471,14 @@ func TestAllIsCompleteAndUnique(t *testing.T) {
 			t.Errorf("%s has an empty swatch", s.ID)
 		}
 	}
-	want := len(schema.Materials) + len(uscsGroups) + 6 + 7 + 2 // materials, soils, rocks, parts, fallbacks
+	want := len(schema.Materials) + len(uscsGroups) + 6 + 8 + 2 // materials, soils, rocks, parts, fallbacks
 	if len(ids) != want {
 		t.Errorf("All lists %d symbols, want %d", len(ids), want)
 	}
 	if s, ok := ByID("soil:SP-SM"); !ok || s.Code != "SP-SM" {
 		t.Errorf("ByID of a dual soil: %v %v", s.ID, ok)
 	}
-	for _, id := range []string{Casing, ScreenSlotted, ScreenWrap, OpenHole, WaterLevel, Centralizer, Cap} {
+	for _, id := range []string{Casing, ScreenSlotted, ScreenWrap, OpenHole, WaterLevel, FirstWater, Centralizer, Cap} {
 		if _, ok := Part(id); !ok {
 			t.Errorf("part %s missing", id)
 		}
