@@ -12,7 +12,7 @@ import (
 // the notes and findings did not fit the band.
 func (l *layout) sheetCount() int {
 	n := len(l.sheets)
-	if len(l.bandPlan.overflow) > 0 {
+	if len(l.bandPlan.overflow) > 0 || len(l.calloutOverflow) > 0 {
 		n++
 	}
 	return n
@@ -50,17 +50,21 @@ func (l *layout) page(i int) *draw.Page {
 	pg.Add(p.elevationAxis()...)
 	pg.Add(p.well()...)
 	pg.Add(p.totalDepth()...)
-	pg.Add(p.calloutItems(p.calloutsFor(l.callouts()))...)
+	pg.Add(p.calloutItems(l.sheetCallouts[i])...)
 	pg.Add(l.matchLines(p, i)...)
 
 	pg.Add(l.legendItems(sortedSymbols(p.used))...)
 	pg.Add(l.amountItems()...)
 	more := ""
-	if len(l.bandPlan.overflow) > 0 {
-		nn, _ := l.number(len(l.sheets))
+	nn, _ := l.number(len(l.sheets))
+	switch {
+	case len(l.bandPlan.overflow) > 0:
 		more = fmt.Sprintf("Notes and findings continue on sheet %d.", nn)
+	case len(l.calloutOverflow) > 0:
+		more = fmt.Sprintf("Component notes continue on sheet %d.", nn)
 	}
-	pg.Add(l.noteItems(l.bandPlan.notes, l.bandPlan.noteR, more)...)
+	notes := append(append([]noteBlock(nil), l.bandPlan.notes...), l.sheetNotes[i]...)
+	pg.Add(l.noteItems(notes, l.bandPlan.noteR, more)...)
 	pg.Add(l.cautionItems()...)
 	return pg
 }
@@ -69,7 +73,7 @@ func (l *layout) page(i int) *draw.Page {
 func (l *layout) notesSheet(pg *draw.Page, n, m int) {
 	pg.Add(l.headerItems(n, m, "Notes and check findings, continued")...)
 	r := draw.Rect{X: l.content.X, Y: l.header.Bottom() + 6, W: l.bandPlan.noteW, H: l.caution.Y - 6 - l.header.Bottom() - 6}
-	pg.Add(l.noteItems(l.bandPlan.overflow, r, "")...)
+	pg.Add(l.noteItems(append(append([]noteBlock(nil), l.bandPlan.overflow...), l.calloutOverflow...), r, "")...)
 	pg.Add(l.cautionItems()...)
 }
 

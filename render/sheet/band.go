@@ -25,6 +25,7 @@ type noteBlock struct {
 	heading bool
 	block   textBlock
 	color   draw.Color
+	role    string // the items' role, when not told by the text
 }
 
 const (
@@ -417,6 +418,9 @@ func (l *layout) noteItems(blocks []noteBlock, r draw.Rect, more string) []draw.
 		}
 		if !n.heading && strings.Contains(n.block.lines[0].s, " (line ") {
 			role = "finding"
+		}
+		if n.role != "" {
+			role = n.role
 		}
 		items = append(items, n.block.items(r.X+bandPad, y, n.color, role)...)
 		y += n.block.height() + 1.5

@@ -15,23 +15,41 @@ type callout struct {
 	key     string          // the drawn component's role, e.g. "interval:fill[2]"
 	iv      schema.Interval // the component's extent; Top == Bottom for a point
 	anchorX func(d schema.Length) float64
+	also    []func(d schema.Length) float64 // more points at the same depth, for a callout shared by strings
 	title   string
 	lines   []string
 	minor   map[int]bool // lines dropped first when labels must shrink
+	where   int          // the line naming the interval, kept on the label when the rest goes to the notes
 	rank    int          // tie-break among equal depths: outer things first
+	base    string       // the title without the string's name, for merging
+	of      []string     // the strings a string part's callout names
 }
 
 // Label forms, fullest first; a crowded sheet shrinks its tallest labels
-// one form at a time until they all fit.
+// one form at a time until they all fit. No form drops words: the last
+// keeps one line at the depth and sends the rest to the notes.
 const (
 	formFull      = iota // bold title line, then one line per item
 	formParagraph        // run-in bold title, items in one paragraph
-	formShort            // paragraph without the minor items
-	formLine             // one line, cut with an ellipsis
+	formShort            // paragraph, the minor items in the notes
+	formNoted            // one line, the rest in the notes
 	formCount
 )
 
-func (c callout) block(form int, width float64) textBlock {
+// noteMarkRoom is the width kept on a noted label for its reference
+// mark, measured on a mark wider than any the sheet will print.
+const noteMarkRoom = " (C000)"
+
+// block sets the label in a form. A form that leaves words off carries
+// the reference mark of the note holding them; with mark "" room is kept
+// for the widest mark, so the label's height is known before the notes
+// are numbered.
+func (c callout) block(form int, width float64, mark string) textBlock {
+	if mark == "" {
+		mark = strings.TrimSpace(noteMarkRoom)
+	} else {
+		mark = "(" + mark + ")"
+	}
 	var b textBlock
 	switch form {
 	case formFull:
@@ -46,17 +64,82 @@ func (c callout) block(form int, width float64) textBlock {
 				keep = append(keep, s)
 			}
 		}
-		b.addLead(c.title+":", strings.Join(keep, "; "), sizeSmall, width)
+		p := strings.Join(keep, "; ")
+		if c.rest(form, width) != "" {
+			p += " " + mark
+		}
+		b.addLead(c.title+":", p, sizeSmall, width)
 	default:
-		lead := c.title + ":"
-		rest := fit(" "+strings.Join(c.lines, "; "), draw.Regular, sizeSmall, width-draw.TextWidth(draw.Bold, sizeSmall, lead))
-		b.lines = []textLine{{lead: lead, s: rest, font: draw.Regular, size: sizeSmall}}
+		head, rest := c.split(width)
+		s := " " + head
+		if rest != "" {
+			s += " " + mark
+		}
+		b.lines = []textLine{{lead: c.title + ":", s: s, font: draw.Regular, size: sizeSmall}}
 	}
 	return b
 }
 
-// callouts lists every component of the well with its words.
-func (l *layout) callouts() []callout {
+// rest is what a form leaves off the label, for the notes.
+func (c callout) rest(form int, width float64) string {
+	switch form {
+	case formFull, formParagraph:
+		return ""
+	case formShort:
+		var off []string
+		for i, s := range c.lines {
+			if c.minor[i] {
+				off = append(off, s)
+			}
+		}
+		return strings.Join(off, "; ")
+	}
+	_, rest := c.split(width)
+	return rest
+}
+
+// split divides the label's words for the one-line form: the head that
+// fits one line after the title (with room for a reference mark) and the
+// rest, for the notes. The interval comes first, then the other items,
+// then the minor ones; whole items are kept on the line when they fit.
+func (c callout) split(width float64) (head, rest string) {
+	var items []string
+	if c.where >= 0 && c.where < len(c.lines) {
+		items = append(items, c.lines[c.where])
+	}
+	for _, minor := range []bool{false, true} {
+		for i, s := range c.lines {
+			if i != c.where && c.minor[i] == minor {
+				items = append(items, s)
+			}
+		}
+	}
+	room := width - draw.TextWidth(draw.Bold, sizeSmall, c.title+":") - draw.TextWidth(draw.Regular, sizeSmall, " "+noteMarkRoom)
+	fits := func(s string) bool { return draw.TextWidth(draw.Regular, sizeSmall, s) <= room }
+	k := 0
+	for k < len(items) && fits(strings.Join(items[:k+1], "; ")) {
+		k++
+	}
+	if k == 0 && len(items) > 0 {
+		// Not even the first item fits whole: as many of its words as do.
+		words := strings.Fields(items[0])
+		n := 0
+		for n < len(words) && fits(strings.Join(words[:n+1], " ")) {
+			n++
+		}
+		head = strings.TrimRight(strings.Join(words[:n], " "), ",;")
+		tail := strings.Join(words[n:], " ")
+		return head, strings.Join(append([]string{tail}, items[1:]...), "; ")
+	}
+	return strings.Join(items[:k], "; "), strings.Join(items[k:], "; ")
+}
+
+// callouts lists every component of the well with its words, one
+// callout for what several strings share.
+func (l *layout) callouts() []callout { return mergeStrings(l.rawCallouts()) }
+
+// rawCallouts lists every component of the well with its words.
+func (l *layout) rawCallouts() []callout {
 	w := l.w
 	h := l.hz
 	var cs []callout
@@ -70,7 +153,7 @@ func (l *layout) callouts() []callout {
 			lines = append(lines, "lock: "+w.Surface.Lock)
 		}
 		r := float64(pc.Diameter) / 2 * h.ppmm
-		add(callout{key: "protective", iv: schema.Interval{Top: pc.Top, Bottom: min(pc.Bottom, 0)}, anchorX: fixed(h.cx + r), title: "Protective casing", lines: lines, rank: 0})
+		add(callout{key: "protective", iv: schema.Interval{Top: pc.Top, Bottom: min(pc.Bottom, 0)}, anchorX: fixed(h.cx + r), title: "Protective casing", lines: lines, where: 1, rank: 0})
 	}
 	if v := w.Surface.Vault; v != nil && w.Surface.Kind != schema.StickUp {
 		lines := []string{fmt.Sprintf("%s diameter, %s deep", l.diameter(v.Diameter), l.depth(v.Depth))}
@@ -120,7 +203,7 @@ func (l *layout) callouts() []callout {
 			title += " (" + c.Name + ")"
 		}
 		add(callout{key: "casing:" + pathOr(c.Path, "casing", i), iv: c.Interval, anchorX: fixed(h.cx + r), title: upperFirst(title),
-			lines: []string{l.pipeSpec(c.Pipe), l.pipeSizes(c.Pipe), l.interval(c.Interval)}, minor: map[int]bool{1: true}, rank: 2})
+			lines: []string{l.pipeSpec(c.Pipe), l.pipeSizes(c.Pipe), l.interval(c.Interval)}, minor: map[int]bool{1: true}, where: 2, rank: 2})
 		if len(c.Centralizers) > 0 {
 			add(l.centralizerCallout("centralizer:"+pathOr(c.Path, "casing", i), h.cx, od(c.Pipe), c.Centralizers, title))
 		}
@@ -144,7 +227,8 @@ func (l *layout) callouts() []callout {
 					lines = append(lines, "cap: "+s.TopCap)
 				}
 			}
-			add(callout{key: "mp:" + stringName(s), iv: schema.Interval{Top: top.Top, Bottom: top.Top}, anchorX: fixed(x + rt), title: "Measuring point" + suffix, lines: lines, rank: 3})
+			add(callout{key: "mp:" + stringName(s), iv: schema.Interval{Top: top.Top, Bottom: top.Top}, anchorX: fixed(x + rt), title: "Measuring point" + suffix, lines: lines, rank: 3,
+				base: "Measuring point", of: ofString(named, s)})
 		}
 		for k, sec := range s.Sections {
 			r := float64(od(sec.Pipe)) / 2 * h.ppmm
@@ -162,13 +246,14 @@ func (l *layout) callouts() []callout {
 				lines = []string{l.pipeSpec(sec.Pipe), l.pipeSizes(sec.Pipe), l.interval(sec.Interval)}
 				minor = map[int]bool{1: true}
 			}
-			add(callout{key: role, iv: sec.Interval, anchorX: fixed(x + r), title: upperFirst(string(sec.Kind)) + suffix, lines: lines, minor: minor, rank: 4})
+			add(callout{key: role, iv: sec.Interval, anchorX: fixed(x + r), title: upperFirst(string(sec.Kind)) + suffix, lines: lines, minor: minor, where: 2, rank: 4,
+				base: upperFirst(string(sec.Kind)), of: ofString(named, s)})
 		}
 		if s.BottomCap != "" && len(s.Sections) > 0 {
 			b := s.Sections[len(s.Sections)-1]
 			r := float64(od(b.Pipe)) / 2 * h.ppmm
 			add(callout{key: "bottomcap:" + stringName(s), iv: schema.Interval{Top: b.Bottom, Bottom: b.Bottom}, anchorX: fixed(x + r), title: "Bottom cap" + suffix,
-				lines: []string{s.BottomCap + " at " + l.depth(b.Bottom)}, rank: 5})
+				lines: []string{s.BottomCap + " at " + l.depth(b.Bottom)}, rank: 5, base: "Bottom cap", of: ofString(named, s)})
 		}
 		if len(s.Centralizers) > 0 {
 			add(l.centralizerCallout("centralizer:"+stringName(s), x, stringOD(s), s.Centralizers, suffix))
@@ -197,6 +282,7 @@ func (l *layout) callouts() []callout {
 		if f.Within != "" {
 			where += ", inside " + f.Within
 		}
+		whereAt := len(lines)
 		lines = append(lines, where)
 		if r, ok := l.amountRow(i); ok {
 			lines = append(lines, "calc. "+l.calculated(r))
@@ -205,7 +291,7 @@ func (l *layout) callouts() []callout {
 			}
 		}
 		fi := f
-		add(callout{key: "interval:" + pathOr(f.Path, "fill", i), iv: f.Interval, anchorX: func(d schema.Length) float64 { return l.annulusX(fi, d) }, title: title, lines: lines, minor: minor, rank: 6})
+		add(callout{key: "interval:" + pathOr(f.Path, "fill", i), iv: f.Interval, anchorX: func(d schema.Length) float64 { return l.annulusX(fi, d) }, title: title, lines: lines, minor: minor, where: whereAt, rank: 6})
 	}
 
 	// Boreholes and open hole.
@@ -217,13 +303,13 @@ func (l *layout) callouts() []callout {
 		} else if w.Drilling.Method != "" {
 			lines = append(lines, w.Drilling.Method)
 		}
-		add(callout{key: "borehole:" + pathOr(b.Path, "borehole", i), iv: b.Interval, anchorX: fixed(h.cx + r), title: "Borehole", lines: lines, minor: map[int]bool{2: true}, rank: 7})
+		add(callout{key: "borehole:" + pathOr(b.Path, "borehole", i), iv: b.Interval, anchorX: fixed(h.cx + r), title: "Borehole", lines: lines, minor: map[int]bool{2: true}, where: 1, rank: 7})
 	}
 	for i, o := range w.OpenHoles {
 		d := holeAt(w, (o.Top+o.Bottom)/2)
 		r := float64(d) / 2 * h.ppmm
 		add(callout{key: "openhole:" + pathOr(o.Path, "open_hole", i), iv: o.Interval, anchorX: fixed(h.cx + r + 1.6), title: "Open hole",
-			lines: []string{l.diameter(d) + " diameter, uncased", l.interval(o.Interval)}, rank: 7})
+			lines: []string{l.diameter(d) + " diameter, uncased", l.interval(o.Interval)}, where: 1, rank: 7})
 	}
 
 	// Water levels.
@@ -252,6 +338,87 @@ func (l *layout) callouts() []callout {
 		add(callout{key: "water:" + pathOr(wl.Path, "water_level", i), iv: schema.Interval{Top: wl.Depth, Bottom: wl.Depth}, anchorX: fixed(xi), title: title, lines: lines, rank: 8})
 	}
 	return cs
+}
+
+func ofString(named bool, s schema.String) []string {
+	if !named {
+		return nil
+	}
+	return []string{stringName(s)}
+}
+
+// mergeStrings joins the callouts of one part of several strings that
+// stand at the same depth and say the same first thing (the measuring
+// points of a nested well, say) into one label naming every string. A
+// line not all of them share is kept, followed by the strings it is of.
+func mergeStrings(cs []callout) []callout {
+	var out []callout
+	used := make([]bool, len(cs))
+	for i, c := range cs {
+		if used[i] {
+			continue
+		}
+		if len(c.of) != 1 || len(c.lines) == 0 {
+			out = append(out, c)
+			continue
+		}
+		group := []callout{c}
+		for j := i + 1; j < len(cs); j++ {
+			d := cs[j]
+			if !used[j] && len(d.of) == 1 && d.base == c.base && d.iv == c.iv && len(d.lines) > 0 && d.lines[0] == c.lines[0] {
+				group = append(group, d)
+				used[j] = true
+			}
+		}
+		if len(group) == 1 {
+			out = append(out, c)
+			continue
+		}
+		m := c
+		m.of = nil
+		m.also = nil
+		m.lines = nil
+		m.minor = map[int]bool{}
+		var order []string
+		from := map[string][]string{}
+		minor := map[string]bool{}
+		for _, g := range group {
+			m.of = append(m.of, g.of[0])
+			if g.key != c.key {
+				m.also = append(m.also, g.anchorX)
+			}
+			for k, s := range g.lines {
+				if _, seen := from[s]; !seen {
+					order = append(order, s)
+				}
+				from[s] = append(from[s], g.of[0])
+				minor[s] = minor[s] || g.minor[k]
+			}
+		}
+		m.where = 0
+		for k, s := range order {
+			if k > 0 && s == c.lines[min(c.where, len(c.lines)-1)] {
+				m.where = k
+			}
+			if len(from[s]) < len(group) {
+				s += " (" + strings.Join(from[s], ", ") + ")"
+			}
+			if minor[order[k]] {
+				m.minor[len(m.lines)] = true
+			}
+			m.lines = append(m.lines, s)
+		}
+		m.title = pluralTitle(c.base) + " — " + strings.Join(m.of, ", ")
+		out = append(out, m)
+	}
+	return out
+}
+
+func pluralTitle(s string) string {
+	if strings.HasSuffix(s, "s") {
+		return s
+	}
+	return s + "s"
 }
 
 func ratioSuffix(r string) string {
@@ -337,12 +504,17 @@ type placedCallout struct {
 	block   textBlock
 	anchorY float64
 	anchorX float64
+	dotsX   []float64 // every point the label names, anchorX the leftmost
 	box     draw.Rect
+	form    int
+	rest    string // the words the form leaves to the notes
+	mark    string // the note's reference mark, set once notes are numbered
 }
 
 // calloutsFor places the callouts visible on a sheet. It returns them in
-// depth order with their boxes, compacting every label to one line when
-// the full ones do not fit the column.
+// depth order with their boxes, compacting labels (down to one line at
+// the depth, the rest of the words for the notes) when the full ones do
+// not fit the column.
 func (p *painter) calloutsFor(all []callout) []placedCallout {
 	l := p.l
 	var vis []placedCallout
@@ -357,7 +529,14 @@ func (p *painter) calloutsFor(all []callout) []placedCallout {
 			continue
 		}
 		d := (t + b) / 2
-		vis = append(vis, placedCallout{c: c, anchorY: p.y(d), anchorX: c.anchorX(d)})
+		pc := placedCallout{c: c, anchorY: p.y(d), anchorX: c.anchorX(d)}
+		pc.dotsX = []float64{pc.anchorX}
+		for _, f := range c.also {
+			x := f(d)
+			pc.dotsX = append(pc.dotsX, x)
+			pc.anchorX = min(pc.anchorX, x)
+		}
+		vis = append(vis, pc)
 	}
 	sort.SliceStable(vis, func(i, j int) bool {
 		if vis[i].anchorY != vis[j].anchorY {
@@ -384,7 +563,7 @@ func (p *painter) calloutsFor(all []callout) []placedCallout {
 	targets := make([]float64, len(vis))
 	heights := make([]float64, len(vis))
 	for i := range vis {
-		vis[i].block = vis[i].c.block(formFull, width)
+		vis[i].block = vis[i].c.block(formFull, width, "")
 		heights[i] = vis[i].block.height() + 1
 		targets[i] = vis[i].anchorY - lineGap(sizeSmall)/2
 	}
@@ -394,7 +573,8 @@ func (p *painter) calloutsFor(all []callout) []placedCallout {
 			vis[i].box = draw.Rect{X: textX - 1, Y: tops[i], W: width + 2, H: heights[i]}
 		}
 		if ok {
-			return vis
+			relax(vis, forms, targets, heights, width, lo, hi)
+			return finishForms(vis, width)
 		}
 		// Shrink one label: every label goes to the next form before any
 		// goes further, tallest first, so the sheet reads evenly.
@@ -408,12 +588,83 @@ func (p *painter) calloutsFor(all []callout) []placedCallout {
 			}
 		}
 		if k < 0 {
-			return vis // one line each and still too many: they run on past the column
+			return finishForms(vis, width) // one line each and still too many: they run on past the column
 		}
 		forms[k]++
-		vis[k].block = vis[k].c.block(forms[k], width)
+		vis[k].form = forms[k]
+		vis[k].block = vis[k].c.block(forms[k], width, "")
 		heights[k] = vis[k].block.height() + 1
 	}
+}
+
+// relax gives back words: the even shrinking above can leave room. It
+// first restores whole labels to the paragraph form (no note), the
+// cheapest in height first, while every label still fits; then lets
+// labels still noted keep their major items (a shorter note).
+func relax(vis []placedCallout, forms []int, targets, heights []float64, width, lo, hi float64) {
+	try := func(i, f int) bool {
+		b := vis[i].c.block(f, width, "")
+		h := heights[i]
+		heights[i] = b.height() + 1
+		tops, ok := place(targets, heights, calloutGap, lo, hi)
+		if !ok {
+			heights[i] = h
+			return false
+		}
+		forms[i], vis[i].form, vis[i].block = f, f, b
+		for k := range vis {
+			vis[k].box.Y, vis[k].box.H = tops[k], heights[k]
+		}
+		return true
+	}
+	failed := make([]bool, len(vis))
+	for {
+		k, cost := -1, 0.0
+		for i := range vis {
+			if failed[i] || vis[i].c.rest(forms[i], width) == "" {
+				continue
+			}
+			pb := vis[i].c.block(formParagraph, width, "")
+			c := pb.height() + 1 - heights[i]
+			if k < 0 || c < cost {
+				k, cost = i, c
+			}
+		}
+		if k < 0 {
+			break
+		}
+		if !try(k, formParagraph) {
+			failed[k] = true
+		}
+	}
+	for i := range vis {
+		if forms[i] == formNoted && vis[i].c.rest(formShort, width) != vis[i].c.rest(formNoted, width) {
+			try(i, formShort)
+		}
+	}
+}
+
+// finishForms records what each label's form leaves to the notes.
+func finishForms(vis []placedCallout, width float64) []placedCallout {
+	for i := range vis {
+		vis[i].rest = vis[i].c.rest(vis[i].form, width)
+	}
+	return vis
+}
+
+// numberNotes gives each label that left words off a reference mark,
+// C1, C2, ... from start in depth order, and resets its text with the
+// mark; it returns the next number.
+func numberNotes(vis []placedCallout, width float64, start int) int {
+	for i := range vis {
+		if vis[i].rest == "" {
+			continue
+		}
+		vis[i].mark = fmt.Sprintf("C%d", start)
+		start++
+		vis[i].block = vis[i].c.block(vis[i].form, width, vis[i].mark)
+	}
+	return start
 }
 
 // anchorFits reports whether page y lies on the visible part of a
@@ -439,7 +690,10 @@ func (p *painter) calloutItems(pcs []placedCallout) []draw.Item {
 		ly := b.Y + lineGap(sizeSmall)*0.55
 		items = append(items,
 			draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.45}, Points: []draw.Point{{X: pc.anchorX, Y: pc.anchorY}, {X: knee, Y: pc.anchorY}, {X: b.X - 4, Y: ly}, {X: b.X - 0.5, Y: ly}}, Role: "leader:" + pc.c.key},
-			draw.Circle{Style: draw.Style{Fill: ink}, Center: draw.Point{X: pc.anchorX, Y: pc.anchorY}, R: 0.9})
+		)
+		for _, x := range pc.dotsX {
+			items = append(items, draw.Circle{Style: draw.Style{Fill: ink}, Center: draw.Point{X: x, Y: pc.anchorY}, R: 0.9})
+		}
 	}
 	return items
 }

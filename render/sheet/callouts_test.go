@@ -76,8 +76,15 @@ func TestCalloutsDoNotOverlapAndKeepDepthOrder(t *testing.T) {
 					t.Errorf("%v sheet %d: %s (anchor %.1f) above %s (anchor %.1f)", s, pi+1, ls[i].key, ls[i].anchorY, ls[i-1].key, ls[i-1].anchorY)
 				}
 			}
-			// Within the body.
-			body := boxes(p, "body")[0]
+			// Within the body (a notes sheet has none, and no labels).
+			bodies := boxes(p, "body")
+			if len(bodies) == 0 {
+				if len(ls) > 0 {
+					t.Errorf("%v sheet %d: %d callouts on a sheet without a drawing", s, pi+1, len(ls))
+				}
+				continue
+			}
+			body := bodies[0]
 			for _, l := range ls {
 				if l.box.Y < body.Y || l.box.Bottom() > body.Bottom() {
 					t.Errorf("%v sheet %d: callout %s at %v outside the body %v", s, pi+1, l.key, l.box, body.Rect)
@@ -130,6 +137,84 @@ func TestCalloutsStayLevelWhenThereIsRoom(t *testing.T) {
 		mid := l.box.Y + lineGap(sizeSmall)/2
 		if d := mid - l.anchorY; d > 1.5 || d < -1.5 {
 			t.Errorf("callout %s displaced %.2f pt with the column empty", l.key, d)
+		}
+	}
+}
+
+// pageWords is every word printed on a document, punctuation trimmed.
+func pageWords(doc *draw.Document) map[string]bool {
+	words := map[string]bool{}
+	for _, p := range doc.Pages {
+		p.Walk(func(it draw.Item) {
+			if tx, ok := it.(draw.Text); ok {
+				for _, w := range strings.Fields(tx.S) {
+					words[strings.Trim(w, ",;:()")] = true
+				}
+			}
+		})
+	}
+	return words
+}
+
+// A crowded sheet compacts its labels but loses no word of them: every
+// word of every component's description is on the sheets, on its label
+// or in the notes its mark points to, and no label is cut with an
+// ellipsis (common practice: a drafted log states each item in full).
+func TestCrowdedCalloutsLoseNoWords(t *testing.T) {
+	type well struct {
+		name  string
+		w     *schema.Well
+		in    Inputs
+		opt   Options
+		notes bool // the sheet is crowded enough to need component notes
+	}
+	var cases []well
+	for _, s := range []Scale{Imperial(2), Imperial(5), Imperial(10)} {
+		s := s
+		cases = append(cases, well{fmt.Sprintf("thin %v", s), thinWell(), Inputs{}, Options{Scale: &s}, true})
+	}
+	nw := demoWells(t)["NW-1.toml"]
+	cases = append(cases, well{"NW-1", nw.w, nw.in, nw.opt, true})
+	for _, c := range cases {
+		doc := layoutOf(t, c.w, c.in, c.opt)
+		words := pageWords(doc)
+		pg := c.opt.Page
+		if pg.Width == 0 {
+			pg = Letter
+		}
+		l := newLayout(c.w, c.in, c.opt, pg)
+		if err := l.plan(); err != nil {
+			t.Fatal(err)
+		}
+		check := func(what, s string) {
+			for _, w := range strings.Fields(s) {
+				if w = strings.Trim(w, ",;:()"); w != "" && w != "—" && !words[w] {
+					t.Errorf("%s: %q of %s %q is on no sheet", c.name, w, what, s)
+				}
+			}
+		}
+		for _, co := range l.rawCallouts() {
+			for _, s := range co.lines {
+				check(co.key, s)
+			}
+			for _, n := range co.of {
+				check(co.key, n)
+			}
+		}
+		for _, co := range l.callouts() {
+			check(co.key, co.title)
+		}
+		marks := 0
+		for _, p := range doc.Pages {
+			for _, s := range texts(p, "callout-text") {
+				if strings.Contains(s, "…") {
+					t.Errorf("%s: a label is cut: %q", c.name, s)
+				}
+			}
+			marks += len(texts(p, "callout-note"))
+		}
+		if c.notes && marks == 0 {
+			t.Errorf("%s: crowded, yet no component notes", c.name)
 		}
 	}
 }

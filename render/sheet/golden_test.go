@@ -25,8 +25,9 @@ import (
 
 var update = flag.Bool("update", false, "rewrite the golden SVGs under testdata/golden from the current layout")
 
-// demoDocs lays out every demo well as tremie render would.
-func demoDocs(t testing.TB) map[string]*draw.Document {
+// demoWells reads every demo well with the inputs and options tremie
+// render would use, by file name.
+func demoWells(t testing.TB) map[string]demoWell {
 	t.Helper()
 	pdata, err := demo.FS.ReadFile("project.toml")
 	if err != nil {
@@ -44,7 +45,7 @@ func demoDocs(t testing.TB) map[string]*draw.Document {
 	if err != nil || len(names) < 6 {
 		t.Fatalf("demo wells: %v (%d)", err, len(names))
 	}
-	docs := map[string]*draw.Document{}
+	out := map[string]demoWell{}
 	for _, n := range names {
 		data, err := demo.FS.ReadFile(n)
 		if err != nil {
@@ -56,11 +57,27 @@ func demoDocs(t testing.TB) map[string]*draw.Document {
 		}
 		project.Apply(prj, w)
 		in := Inputs{Findings: rules.Check(w, nil), Quantities: quantity.Compute(w, nil), TitleBlock: prj.TitleBlock}
-		doc, err := Layout(w, in, Options{Page: FromTemplate(tpl)})
+		out[path.Base(n)] = demoWell{w: w, in: in, opt: Options{Page: FromTemplate(tpl)}}
+	}
+	return out
+}
+
+type demoWell struct {
+	w   *schema.Well
+	in  Inputs
+	opt Options
+}
+
+// demoDocs lays out every demo well as tremie render would.
+func demoDocs(t testing.TB) map[string]*draw.Document {
+	t.Helper()
+	docs := map[string]*draw.Document{}
+	for n, d := range demoWells(t) {
+		doc, err := Layout(d.w, d.in, d.opt)
 		if err != nil {
 			t.Fatalf("%s: %v", n, err)
 		}
-		docs[path.Base(n)] = doc
+		docs[n] = doc
 	}
 	return docs
 }

@@ -38,6 +38,10 @@ type layout struct {
 	title     titleBlock
 	bandPlan  bandPlan
 	legendAll []symbol // every symbol the well's sheets use
+
+	sheetCallouts   [][]placedCallout // each sheet's labels
+	sheetNotes      [][]noteBlock     // each sheet's component notes, in its notes box
+	calloutOverflow []noteBlock       // component notes for the notes sheet
 }
 
 // columnRects are the x ranges of the body's columns.
@@ -126,6 +130,7 @@ func (l *layout) plan() error {
 	}
 	l.scaleFields()
 	l.sheets = paginate(l.top, l.bot, per, schema.LengthFrom(l.majorStep(), l.u.Depth))
+	l.planCallouts()
 	return nil
 }
 

@@ -1,0 +1,87 @@
+package sheet
+
+import (
+	"fmt"
+
+	"github.com/tremie-dev/tremie/render/draw"
+)
+
+// Component notes: the words a crowded sheet could not keep on its
+// labels, numbered C1, C2, ... in depth order across the sheets, each
+// label carrying its note's mark. They stand in the sheet's notes box
+// after its notes and findings, and go on the notes sheet when the box
+// is full, so no label ever loses words to an ellipsis.
+
+// calloutText is the x of the labels' text and its width.
+func (l *layout) calloutText() (x, width float64) {
+	col := l.cols.call
+	x = col.X + leaderLane
+	return x, col.Right() - x - calloutPadX
+}
+
+// planCallouts places every sheet's labels, numbers their notes and
+// shares the notes between each sheet's notes box and the notes sheet.
+// It runs once the scale and the sheets are fixed; the notes take only
+// the box's free room, so nothing already placed moves.
+func (l *layout) planCallouts() {
+	all := l.callouts()
+	_, width := l.calloutText()
+	r := l.bandPlan.noteR
+	noteW := r.W - 2*bandPad
+	used := bandHeadH + bandPad + notesHeight(l.bandPlan.notes)
+	reserve := lineGap(sizeSmall) + 2 // the "continue on sheet" line
+	next := 1
+	l.sheetCallouts = make([][]placedCallout, len(l.sheets))
+	l.sheetNotes = make([][]noteBlock, len(l.sheets))
+	for i, sp := range l.sheets {
+		p := l.painter(sp, i == 0, i == len(l.sheets)-1)
+		vis := p.calloutsFor(all)
+		next = numberNotes(vis, width, next)
+		l.sheetCallouts[i] = vis
+		var entries []noteBlock
+		for _, pc := range vis {
+			if pc.rest == "" {
+				continue
+			}
+			var b textBlock
+			b.addLead(pc.mark+".", pc.c.title+", continued: "+pc.rest, sizeSmall, noteW)
+			entries = append(entries, noteBlock{block: b, color: ink, role: "callout-note"})
+		}
+		if len(entries) == 0 {
+			continue
+		}
+		head := func(s string) noteBlock {
+			var b textBlock
+			b.add(s, draw.Bold, sizeSmall, noteW)
+			return noteBlock{heading: true, block: b, color: ink, role: "callout-note-head"}
+		}
+		k := 0
+		if len(l.bandPlan.overflow) == 0 {
+			h := used + notesHeight([]noteBlock{head("COMPONENTS, CONTINUED")})
+			for k < len(entries) && h+notesHeight(entries[k:k+1]) <= r.H-reserve {
+				h += notesHeight(entries[k : k+1])
+				k++
+			}
+		}
+		if k > 0 {
+			l.sheetNotes[i] = append([]noteBlock{head("COMPONENTS, CONTINUED")}, entries[:k]...)
+		}
+		if k < len(entries) {
+			n, _ := l.number(i)
+			l.calloutOverflow = append(l.calloutOverflow, head(fmt.Sprintf("COMPONENTS ON SHEET %d, CONTINUED", n)))
+			l.calloutOverflow = append(l.calloutOverflow, entries[k:]...)
+		}
+	}
+}
+
+// notesHeight is the height noteItems gives blocks.
+func notesHeight(blocks []noteBlock) float64 {
+	h := 0.0
+	for _, n := range blocks {
+		if n.heading {
+			h += 2
+		}
+		h += n.block.height() + 1.5
+	}
+	return h
+}
