@@ -11,6 +11,7 @@ import (
 	"testing"
 
 	"github.com/tremie-dev/tremie/render/out"
+	"github.com/tremie-dev/tremie/render/symbols"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/rules"
 )
@@ -270,5 +271,35 @@ func BenchmarkLayoutDeepWell(b *testing.B) {
 func BenchmarkLayoutDemo(b *testing.B) {
 	for b.Loop() {
 		demoDocs(b)
+	}
+}
+
+// Water first met while drilling and a later static level get their own
+// marks, and the legend names exactly the kinds drawn (common practice:
+// a log tells a strike from a settled level).
+func TestWaterLevelKindsHaveTheirOwnMarks(t *testing.T) {
+	legendOf := func(kinds ...schema.LevelKind) map[string]bool {
+		w := simpleWell(30)
+		for i, k := range kinds {
+			w.WaterLevels = append(w.WaterLevels, schema.WaterLevel{Depth: ft(12 + 4*float64(i)), Kind: k, Path: fmt.Sprintf("water_level[%d]", i)})
+		}
+		doc := layoutOf(t, w, Inputs{}, Options{})
+		got := map[string]bool{}
+		for _, b := range boxes(doc.Pages[0], "legend:") {
+			got[strings.TrimPrefix(b.Role, "legend:")] = true
+		}
+		return got
+	}
+	both := legendOf(schema.FirstEncountered, schema.Static)
+	if !both[symbols.FirstWater] || !both[symbols.WaterLevel] {
+		t.Errorf("both kinds drawn, legend %v", both)
+	}
+	first := legendOf(schema.FirstEncountered)
+	if !first[symbols.FirstWater] || first[symbols.WaterLevel] {
+		t.Errorf("first water only, legend %v", first)
+	}
+	static := legendOf(schema.Static)
+	if static[symbols.FirstWater] || !static[symbols.WaterLevel] {
+		t.Errorf("static only, legend %v", static)
 	}
 }
