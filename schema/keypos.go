@@ -217,3 +217,21 @@ func cleanKey(k string) string {
 	}
 	return strings.Join(parts, ".")
 }
+
+// Position is where a key of a TOML document sits: its line, and the
+// column its value starts at (1-based).
+type Position struct{ Line, Col int }
+
+// KeyPositions maps every table header and key path of a TOML document
+// ("rule.SEAL-THICKNESS.min", "fill[2].top") to its position, for the
+// other TOML files tremie reads (rule profiles, project files), whose
+// messages must name a line as the well loader's do.
+func KeyPositions(src string) map[string]Position {
+	out := map[string]Position{}
+	scanKeys(src, false, func(path string, p keyPos) {
+		if _, seen := out[path]; !seen {
+			out[path] = Position{Line: p.line, Col: p.col}
+		}
+	})
+	return out
+}

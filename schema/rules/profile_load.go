@@ -37,7 +37,7 @@ func ParseProfile(name string, data []byte) (*Profile, error) {
 		}
 		return nil, schema.ErrorList{{File: name, Msg: "TOML: " + err.Error()}}
 	}
-	pr := &profileReader{file: name, pos: scanProfileKeys(string(data))}
+	pr := &profileReader{file: name, pos: schema.KeyPositions(string(data))}
 	prof := pr.read(raw)
 	if len(pr.errs) > 0 {
 		sort.SliceStable(pr.errs, func(i, j int) bool {
@@ -53,7 +53,7 @@ func ParseProfile(name string, data []byte) (*Profile, error) {
 
 type profileReader struct {
 	file string
-	pos  map[string][2]int // key path -> line, column
+	pos  map[string]schema.Position // key path -> line, column
 	errs schema.ErrorList
 }
 
@@ -67,7 +67,7 @@ func (r *profileReader) errAt(path, format string, args ...any) {
 		p = p[:i]
 		lc, ok = r.pos[p]
 	}
-	r.errs = append(r.errs, &schema.Error{File: r.file, Line: lc[0], Col: lc[1], Key: path, Msg: fmt.Sprintf(format, args...)})
+	r.errs = append(r.errs, &schema.Error{File: r.file, Line: lc.Line, Col: lc.Col, Key: path, Msg: fmt.Sprintf(format, args...)})
 }
 
 // tableOf returns v as a table, or reports that path should be one.
@@ -321,71 +321,4 @@ func tomlType(v any) string {
 		return "an array"
 	}
 	return fmt.Sprintf("%T", v)
-}
-
-// scanProfileKeys maps each key path of a profile ("rule.SEAL-THICKNESS.min")
-// and each table header ("rule.SEAL-THICKNESS") to its line and the column
-// of its value. The TOML library keeps positions private; a profile has no
-// arrays of tables or multi-line strings worth tracking, so a line scan is
-// enough for files the parser has accepted.
-func scanProfileKeys(src string) map[string][2]int {
-	out := map[string][2]int{}
-	current := ""
-	for i, line := range strings.Split(src, "\n") {
-		t := strings.TrimSpace(line)
-		if t == "" || t[0] == '#' {
-			continue
-		}
-		if t[0] == '[' {
-			end := strings.Index(t, "]")
-			if end < 0 {
-				continue
-			}
-			current = cleanTOMLKey(strings.Trim(t[:end], "[]"))
-			out[current] = [2]int{i + 1, strings.Index(line, "[") + 1}
-			continue
-		}
-		eq := equalsOutsideQuotes(line)
-		if eq < 0 {
-			continue
-		}
-		k := cleanTOMLKey(line[:eq])
-		if current != "" {
-			k = current + "." + k
-		}
-		col := eq + 2
-		for col <= len(line) && (line[col-1] == ' ' || line[col-1] == '\t') {
-			col++
-		}
-		out[k] = [2]int{i + 1, col}
-	}
-	return out
-}
-
-func equalsOutsideQuotes(line string) int {
-	var quote byte
-	for i := 0; i < len(line); i++ {
-		c := line[i]
-		switch {
-		case quote != 0:
-			if c == quote {
-				quote = 0
-			}
-		case c == '"' || c == '\'':
-			quote = c
-		case c == '=':
-			return i
-		case c == '#':
-			return -1
-		}
-	}
-	return -1
-}
-
-func cleanTOMLKey(k string) string {
-	parts := strings.Split(strings.TrimSpace(k), ".")
-	for i, p := range parts {
-		parts[i] = strings.Trim(strings.TrimSpace(p), `"'`)
-	}
-	return strings.Join(parts, ".")
 }
