@@ -200,48 +200,14 @@ func (l keyLines) line(key string) int {
 	return 1
 }
 
-// tableLines is a light scanner for the lines of plain tables and keys,
-// enough to point an error in a [yields] table at its line; the TOML
-// library keeps positions to itself. Inline tables are found by their
-// key's line.
+// tableLines maps the keys of a yields file to their lines with the well
+// loader's scanner (schema.KeyPositions); a key inside an inline table
+// falls back to its table's line through keyLines.line.
 func tableLines(src string) keyLines {
-	out := keyLines{}
-	current := ""
-	for i, raw := range strings.Split(src, "\n") {
-		s := strings.TrimSpace(raw)
-		if s == "" || s[0] == '#' {
-			continue
-		}
-		if s[0] == '[' {
-			end := strings.IndexByte(s, ']')
-			if end < 0 {
-				continue
-			}
-			current = cleanDotted(strings.Trim(s[1:end], "[]"))
-			if _, ok := out[current]; !ok {
-				out[current] = i + 1
-			}
-			continue
-		}
-		eq := strings.IndexByte(s, '=')
-		if eq <= 0 {
-			continue
-		}
-		key := cleanDotted(s[:eq])
-		if current != "" {
-			key = current + "." + key
-		}
-		if _, ok := out[key]; !ok {
-			out[key] = i + 1
-		}
-		// keys of an inline table on this line point here too
-		if rest := strings.TrimSpace(s[eq+1:]); strings.HasPrefix(rest, "{") {
-			for _, part := range strings.Split(strings.Trim(rest, "{} "), ",") {
-				if j := strings.IndexByte(part, '='); j > 0 {
-					out[key+"."+cleanDotted(part[:j])] = i + 1
-				}
-			}
-		}
+	pos := schema.KeyPositions(src)
+	out := make(keyLines, len(pos))
+	for k, p := range pos {
+		out[k] = p.Line
 	}
 	return out
 }
