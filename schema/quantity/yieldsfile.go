@@ -211,11 +211,3 @@ func tableLines(src string) keyLines {
 	}
 	return out
 }
-
-func cleanDotted(k string) string {
-	parts := strings.Split(strings.TrimSpace(k), ".")
-	for i, p := range parts {
-		parts[i] = strings.Trim(strings.TrimSpace(p), `"'`)
-	}
-	return strings.Join(parts, ".")
-}
