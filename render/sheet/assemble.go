@@ -8,15 +8,9 @@ import (
 	"github.com/tremie-dev/tremie/schema"
 )
 
-// sheetCount is the number of pages: the drawings, and a notes sheet when
-// the notes and findings did not fit the band.
-func (l *layout) sheetCount() int {
-	n := len(l.sheets)
-	if len(l.bandPlan.overflow) > 0 || len(l.calloutOverflow) > 0 {
-		n++
-	}
-	return n
-}
+// sheetCount is the number of pages: the drawings, and the notes sheets
+// holding what did not fit the band.
+func (l *layout) sheetCount() int { return len(l.sheets) + len(l.notesPages) }
 
 // number is the printed number of page i (0-based) and the set's total.
 func (l *layout) number(i int) (n, m int) {
@@ -32,7 +26,7 @@ func (l *layout) page(i int) *draw.Page {
 	pg := &draw.Page{Width: l.pg.Width, Height: l.pg.Height}
 	n, m := l.number(i)
 	if i >= len(l.sheets) {
-		l.notesSheet(pg, n, m)
+		l.notesSheet(pg, i-len(l.sheets), n, m)
 		return pg
 	}
 	sp := l.sheets[i]
@@ -56,7 +50,7 @@ func (l *layout) page(i int) *draw.Page {
 	pg.Add(l.legendItems(sortedSymbols(p.used))...)
 	pg.Add(l.amountItems()...)
 	more := ""
-	nn, _ := l.number(len(l.sheets))
+	nn, _ := l.number(len(l.sheets) + l.firstNotesPage())
 	switch {
 	case len(l.bandPlan.overflow) > 0:
 		more = fmt.Sprintf("Notes and findings continue on sheet %d.", nn)
@@ -67,14 +61,6 @@ func (l *layout) page(i int) *draw.Page {
 	pg.Add(l.noteItems(notes, l.bandPlan.noteR, more)...)
 	pg.Add(l.cautionItems()...)
 	return pg
-}
-
-// notesSheet carries the notes and findings that did not fit the band.
-func (l *layout) notesSheet(pg *draw.Page, n, m int) {
-	pg.Add(l.headerItems(n, m, "Notes and check findings, continued")...)
-	r := draw.Rect{X: l.content.X, Y: l.header.Bottom() + 6, W: l.bandPlan.noteW, H: l.caution.Y - 6 - l.header.Bottom() - 6}
-	pg.Add(l.noteItems(append(append([]noteBlock(nil), l.bandPlan.overflow...), l.calloutOverflow...), r, "")...)
-	pg.Add(l.cautionItems()...)
 }
 
 func (l *layout) cautionItems() []draw.Item {

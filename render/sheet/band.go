@@ -18,6 +18,10 @@ type bandPlan struct {
 	legendR, amountR, noteR draw.Rect
 	notes                   []noteBlock // what fits in the band
 	overflow                []noteBlock // continued on a notes sheet
+	// amountsIn is the number of amounts rows the band's table holds;
+	// the rest continue on a notes sheet.
+	amountsIn int
+	amountH   float64 // the amounts box's height in a side band
 }
 
 // noteBlock is one note or finding, wrapped.
@@ -83,35 +87,29 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 	if l.hasAmounts() {
 		amountW = min(max(W*0.31, 180), 230)
 	}
+	nRows := 0
+	if l.hasAmounts() {
+		nRows = len(l.in.Quantities.Rows)
+	}
 	for cols := 1; cols <= 3; cols++ {
 		lw := float64(cols)*legendColW + 2*bandPad
 		nw := W - lw - amountW
 		if nw < 150 {
 			continue
 		}
-		bp := bandPlan{legendW: lw, amountW: amountW, noteW: nw}
+		bp := bandPlan{legendW: lw, amountW: amountW, noteW: nw, amountsIn: nRows}
 		h := l.legendHeight(legend, lw)
 		if amountW > 0 {
 			h = max(h, l.amountsHeight(amountW))
 		}
 		notes := l.noteBlocks(nw - 2*bandPad)
-		nh := bandHeadH + bandPad
-		for _, n := range notes {
-			nh += n.block.height() + 1.5
-		}
+		nh := bandHeadH + bandPad + notesHeight(notes)
 		bp.height = max(h, min(nh, limit), 60)
 		bp.notes = notes
 		if nh > bp.height {
 			// Keep what fits; the rest goes on a notes sheet after the
 			// drawings, and the band says so.
-			used := bandHeadH + bandPad + lineGap(sizeSmall) + 2
-			for i, n := range notes {
-				if used+n.block.height()+1.5 > bp.height {
-					bp.notes, bp.overflow = notes[:i], notes[i:]
-					break
-				}
-				used += n.block.height() + 1.5
-			}
+			bp.notes, bp.overflow = notesThatFit(notes, bp.height-(bandHeadH+bandPad+continueLineH))
 		}
 		score := bp.height
 		if len(bp.overflow) > 0 {
@@ -125,29 +123,68 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 }
 
 // planSideBand stacks the legend, the amounts and the notes in a column
-// on the right of the body (a landscape page): the notes take what the
-// other two leave, and continue on a notes sheet if they need more.
+// on the right of the body (a landscape page), within the body's height:
+// the amounts take what the legend leaves but room for a notes box, the
+// notes what the other two leave, and what does not fit continues on a
+// notes sheet.
 func (l *layout) planSideBand(legend []symbol) bandPlan {
 	w := l.pg.LegendRight
 	bp := bandPlan{legendW: w, noteW: w}
-	top := l.legendHeight(legend, w)
+	avail := l.caution.Y - 4 - (l.header.Bottom() + 6)
+	lh := l.legendHeight(legend, w)
+	bp.height = lh
+	// A notes box holds at least its heading and the line that says
+	// where the rest continues.
+	minNotes := bandHeadH + bandPad + continueLineH + bandPad
+	rest := avail - lh - minNotes
 	if l.hasAmounts() {
 		bp.amountW = w
-		top += l.amountsHeight(w)
-	}
-	avail := l.caution.Y - 4 - (l.header.Bottom() + 6) - top
-	bp.height = top
-	notes := l.noteBlocks(w - 2*bandPad)
-	used := bandHeadH + bandPad + lineGap(sizeSmall) + 2
-	bp.notes = notes
-	for i, n := range notes {
-		if used+n.block.height()+1.5 > avail {
-			bp.notes, bp.overflow = notes[:i], notes[i:]
-			break
+		rows := l.amountRows()
+		bp.amountsIn = len(rows)
+		bp.amountH = l.amountsBoxHeight(w, rows, true, false)
+		if bp.amountH > rest {
+			bp.amountsIn = 0
+			for k := len(rows) - 1; k >= 0; k-- {
+				if h := l.amountsBoxHeight(w, rows[:k], false, true); h <= rest {
+					bp.amountsIn, bp.amountH = k, h
+					break
+				}
+			}
+			if bp.amountsIn == 0 {
+				// Not even one row fits: the whole table goes on the
+				// notes sheet, and the band keeps only its heading and
+				// the pointer to it, when there is room for that.
+				bp.amountH = l.amountsBoxHeight(w, nil, false, true)
+				if bp.amountH > rest {
+					bp.amountW, bp.amountH = 0, 0
+				}
+			}
 		}
-		used += n.block.height() + 1.5
+		bp.height += bp.amountH
+	}
+	notesAvail := avail - bp.height
+	notes := l.noteBlocks(w - 2*bandPad)
+	bp.notes = notes
+	if bandHeadH+bandPad+notesHeight(notes) > notesAvail {
+		bp.notes, bp.overflow = notesThatFit(notes, notesAvail-(bandHeadH+bandPad+continueLineH))
 	}
 	return bp
+}
+
+// notesThatFit splits blocks into the first ones that fit height h and
+// the rest.
+func notesThatFit(blocks []noteBlock, h float64) (fit, rest []noteBlock) {
+	for i := range blocks {
+		if notesHeight(blocks[:i+1]) > h {
+			return blocks[:i], blocks[i:]
+		}
+	}
+	return blocks, nil
+}
+
+// amountsOverflow reports whether amounts rows continue on a notes sheet.
+func (l *layout) amountsOverflow() bool {
+	return l.hasAmounts() && l.bandPlan.amountsIn < len(l.in.Quantities.Rows)
 }
 
 // placeBand fixes the boxes' rectangles within the band.
@@ -159,7 +196,7 @@ func (l *layout) placeBand() {
 		bp.legendR = draw.Rect{X: b.X, Y: b.Y, W: b.W, H: lh}
 		y := b.Y + lh
 		if bp.amountW > 0 {
-			ah := l.amountsHeight(b.W)
+			ah := bp.amountH
 			bp.amountR = draw.Rect{X: b.X, Y: y, W: b.W, H: ah}
 			y += ah
 		}
@@ -297,7 +334,7 @@ func legendCols(w float64) int { return max(1, int((w-2*bandPad)/legendColW+1e-9
 // legendItems draws the symbols of one sheet in the band's first box.
 func (l *layout) legendItems(syms []symbol) []draw.Item {
 	r := l.bandPlan.legendR
-	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, ""),
+	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, "band:legend"),
 		text(r.X+bandPad, r.Y+9, "LEGEND", draw.Bold, sizeHeading, draw.Start, ink, "")}
 	pos, labels, _ := legendLayout(syms, r.W)
 	for i, s := range syms {
@@ -345,15 +382,30 @@ func (l *layout) amountCells(row []string, w float64, font draw.FontStyle) ([][]
 }
 
 func (l *layout) amountsHeight(w float64) float64 {
+	return l.amountsBoxHeight(w, l.amountRows(), true, false)
+}
+
+// continueLineH is the height of a "continue on sheet" line.
+var continueLineH = lineGap(sizeSmall) + 2
+
+// amountsBoxHeight is the height amountBox gives these rows in width w,
+// with the table's foot note or a continuation line.
+func (l *layout) amountsBoxHeight(w float64, rows [][]string, foot, more bool) float64 {
 	inner := w - 2*bandPad
 	_, hh := l.amountCells(amountHead(), inner, draw.Bold)
 	h := bandHeadH + bandPad + hh
-	for _, r := range l.amountRows() {
+	for _, r := range rows {
 		_, rh := l.amountCells(r, inner, draw.Regular)
 		h += rh
 	}
-	foot := amountsFoot(inner)
-	return h + 1 + foot.height() + bandPad
+	if foot {
+		f := amountsFoot(inner)
+		h += 1 + f.height()
+	}
+	if more {
+		h += continueLineH
+	}
+	return h + bandPad
 }
 
 func amountsFoot(width float64) textBlock {
@@ -370,14 +422,26 @@ func amountHead() []string {
 	return h
 }
 
-// amountItems draws the table of calculated and placed amounts.
+// amountItems draws the band's table of calculated and placed amounts.
 func (l *layout) amountItems() []draw.Item {
 	if l.bandPlan.amountW == 0 {
 		return nil
 	}
-	r := l.bandPlan.amountR
-	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, ""),
-		text(r.X+bandPad, r.Y+9, "AMOUNTS PER FILL INTERVAL", draw.Bold, sizeHeading, draw.Start, ink, "")}
+	rows := l.amountRows()
+	more := ""
+	if k := l.bandPlan.amountsIn; k < len(rows) {
+		rows = rows[:k]
+		n, _ := l.number(len(l.sheets))
+		more = fmt.Sprintf("Amounts continue on sheet %d.", n)
+	}
+	return l.amountBox(l.bandPlan.amountR, "AMOUNTS PER FILL INTERVAL", rows, more == "", more)
+}
+
+// amountBox draws a table of amounts rows in r, ending with the table's
+// foot note or with more, the line saying where the rows continue.
+func (l *layout) amountBox(r draw.Rect, title string, rows [][]string, foot bool, more string) []draw.Item {
+	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, "band:amounts"),
+		text(r.X+bandPad, r.Y+9, title, draw.Bold, sizeHeading, draw.Start, ink, "")}
 	inner := r.W - 2*bandPad
 	y := r.Y + bandHeadH + bandPad
 	drawRow := func(row []string, font draw.FontStyle, role string) {
@@ -395,17 +459,23 @@ func (l *layout) amountItems() []draw.Item {
 		items = append(items, line(r.X+bandPad, y-1, r.Right()-bandPad, y-1, 0.3, lightGrey, ""))
 	}
 	drawRow(amountHead(), draw.Bold, "amounts-head")
-	for _, row := range l.amountRows() {
+	for _, row := range rows {
 		drawRow(row, draw.Regular, "amounts-row")
 	}
-	foot := amountsFoot(inner)
-	items = append(items, foot.items(r.X+bandPad, y+1, grey, "amounts-note")...)
+	if foot {
+		f := amountsFoot(inner)
+		items = append(items, f.items(r.X+bandPad, y+1, grey, "amounts-note")...)
+		y += 1 + f.height()
+	}
+	if more != "" {
+		items = append(items, text(r.X+bandPad, y+lineGap(sizeSmall)-2, more, draw.Italic, sizeSmall, draw.Start, alarm, "amounts-continued"))
+	}
 	return items
 }
 
 // noteItems draws the notes and findings box.
 func (l *layout) noteItems(blocks []noteBlock, r draw.Rect, more string) []draw.Item {
-	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, ""),
+	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, "band:notes"),
 		text(r.X+bandPad, r.Y+9, "NOTES", draw.Bold, sizeHeading, draw.Start, ink, "")}
 	y := r.Y + bandHeadH + bandPad
 	for _, n := range blocks {

@@ -42,6 +42,7 @@ type layout struct {
 	sheetCallouts   [][]placedCallout // each sheet's labels
 	sheetNotes      [][]noteBlock     // each sheet's component notes, in its notes box
 	calloutOverflow []noteBlock       // component notes for the notes sheet
+	notesPages      [][]sheetBox      // the notes sheets' boxes
 }
 
 // columnRects are the x ranges of the body's columns.
@@ -109,6 +110,9 @@ func (l *layout) plan() error {
 		l.body.H = l.band.Y - 6 - l.body.Y
 	}
 	l.placeBand()
+	if l.pg.LegendRight > 0 && l.bandPlan.noteR.H < bandHeadH+bandPad+continueLineH+bandPad-1e-9 {
+		return fmt.Errorf("page %q leaves no room beside the drawing for the legend of %d symbols; use a larger page or a portrait one", l.pg.Name, len(l.legendAll))
+	}
 	if l.body.H < 160 {
 		return fmt.Errorf("page %q leaves %.0f pt for the drawing after the title block and notes; use a larger page", l.pg.Name, l.body.H)
 	}
@@ -131,6 +135,7 @@ func (l *layout) plan() error {
 	l.scaleFields()
 	l.sheets = paginate(l.top, l.bot, per, schema.LengthFrom(l.majorStep(), l.u.Depth))
 	l.planCallouts()
+	l.planNotesSheets()
 	return nil
 }
 

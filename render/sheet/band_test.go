@@ -1,0 +1,211 @@
+package sheet
+
+import (
+	"fmt"
+	"strings"
+	"testing"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
+	"github.com/tremie-dev/tremie/templates"
+)
+
+// bandRoles are the roles of what the band draws: legend entries, the
+// amounts table, notes, findings and component notes.
+var bandRoles = []string{"legend:", "legend-label", "amounts-head", "amounts-row", "amounts-note", "amounts-continued",
+	"note", "finding", "callout-note", "callout-note-head", "notes-continued"}
+
+func isBandRole(role string) bool {
+	for _, r := range bandRoles {
+		if strings.HasPrefix(role, r) {
+			return true
+		}
+	}
+	return false
+}
+
+// crowdedWell has more fill intervals, notes and findings than any band
+// holds: the amounts table and the notes must both continue.
+func crowdedWell() (*schema.Well, Inputs) {
+	w := thinWell()
+	w.ID = "CR-1"
+	for i := 0; i < 12; i++ {
+		w.Notes = append(w.Notes, fmt.Sprintf("Note %d: a remark from the field long enough to wrap onto a second and a third line of the notes box.", i+1))
+	}
+	fs := rules.Check(w, nil)
+	for i := 0; i < 40; i++ {
+		fs = append(fs, rules.Finding{Rule: fmt.Sprintf("R-%02d", i), Severity: rules.Warning, Level: "warning", Line: i + 1,
+			Message: "a warning long enough to take two lines of the notes area on any sheet, or so"})
+	}
+	return w, Inputs{Findings: fs, Quantities: quantity.Compute(w, nil)}
+}
+
+// textRect is the box a text's glyphs take: its advance width and the
+// font's ascent and descent about the baseline.
+func textRect(t draw.Text) draw.Rect {
+	w := draw.TextWidth(t.Font, t.Size, t.S)
+	x := t.At.X
+	switch t.Anchor {
+	case draw.Middle:
+		x -= w / 2
+	case draw.End:
+		x -= w
+	}
+	a, d := draw.Ascent(t.Font, t.Size), draw.Descent(t.Font, t.Size)
+	if d < 0 {
+		d = -d
+	}
+	return draw.Rect{X: x, Y: t.At.Y - a, W: w, H: a + d}
+}
+
+func itemRect(it draw.Item) (draw.Rect, string, bool) {
+	switch v := it.(type) {
+	case draw.Text:
+		return textRect(v), v.Role, true
+	case draw.Box:
+		return v.Rect, v.Role, true
+	}
+	return draw.Rect{}, "", false
+}
+
+func within(in, out draw.Rect) bool {
+	const eps = 0.01
+	return in.X >= out.X-eps && in.Y >= out.Y-eps && in.Right() <= out.Right()+eps && in.Bottom() <= out.Bottom()+eps
+}
+
+// On every page size and orientation the band's contents stay inside
+// the band (on a drawing) or the notes area (on a notes sheet), inside
+// one of its boxes, and the boxes do not overlap (common practice: a
+// drafted sheet draws nothing over its frame or off its body).
+func TestBandStaysInItsRegion(t *testing.T) {
+	type well struct {
+		name string
+		w    *schema.Well
+		in   Inputs
+	}
+	var wells []well
+	for n, d := range demoWells(t) {
+		wells = append(wells, well{n, d.w, d.in})
+	}
+	cw, cin := crowdedWell()
+	wells = append(wells, well{"crowded", cw, cin})
+	for _, name := range []string{"letter", "tabloid", "a4", "a3"} {
+		for _, land := range []bool{false, true} {
+			tpl, err := templates.Load(name, land)
+			if err != nil {
+				t.Fatal(err)
+			}
+			pg := FromTemplate(tpl)
+			for _, c := range wells {
+				tag := fmt.Sprintf("%s on %s landscape=%v", c.name, name, land)
+				opt := Options{Page: pg}
+				l := newLayout(c.w, c.in, opt, pg)
+				if err := l.plan(); err != nil {
+					t.Fatalf("%s: %v", tag, err)
+				}
+				doc := layoutOf(t, c.w, c.in, opt)
+				if len(doc.Pages) != l.sheetCount() {
+					t.Fatalf("%s: %d pages, %d planned", tag, len(doc.Pages), l.sheetCount())
+				}
+				for i, p := range doc.Pages {
+					region := l.band
+					if i >= len(l.sheets) {
+						region = draw.Rect{X: l.content.X, Y: l.header.Bottom(), W: l.content.W, H: l.caution.Y - l.header.Bottom()}
+					}
+					blocks := boxes(p, "band:")
+					if len(blocks) == 0 {
+						t.Errorf("%s sheet %d: no band boxes", tag, i+1)
+					}
+					for j, b := range blocks {
+						if !within(b.Rect, region) {
+							t.Errorf("%s sheet %d: %s box %+v outside the region %+v", tag, i+1, b.Role, b.Rect, region)
+						}
+						for _, o := range blocks[j+1:] {
+							if b.Rect.Intersects(o.Rect) {
+								t.Errorf("%s sheet %d: %s %+v overlaps %s %+v", tag, i+1, b.Role, b.Rect, o.Role, o.Rect)
+							}
+						}
+					}
+					p.Walk(func(it draw.Item) {
+						r, role, ok := itemRect(it)
+						if !ok || !isBandRole(role) {
+							return
+						}
+						if !within(r, region) {
+							t.Errorf("%s sheet %d: %s %v at %+v outside the region %+v", tag, i+1, role, it, r, region)
+							return
+						}
+						in := false
+						for _, b := range blocks {
+							in = in || within(r, b.Rect)
+						}
+						if !in {
+							t.Errorf("%s sheet %d: %s %v at %+v in no band box", tag, i+1, role, it, r)
+						}
+					})
+				}
+			}
+		}
+	}
+}
+
+// What the band cannot hold continues, and nothing is lost: every
+// amounts row and every finding of the crowded well is on some sheet,
+// each once, and the drawing says where the rest is.
+func TestCrowdedBandContinues(t *testing.T) {
+	w, in := crowdedWell()
+	for _, land := range []bool{false, true} {
+		tpl, err := templates.Load("letter", land)
+		if err != nil {
+			t.Fatal(err)
+		}
+		opt := Options{Page: FromTemplate(tpl)}
+		doc := layoutOf(t, w, in, opt)
+		rows, findings := 0, map[string]int{}
+		for _, p := range doc.Pages {
+			// A row's first cell is its interval: count rows by the
+			// interval texts at the row's left edge.
+			rows += countRowStarts(p)
+			for _, s := range texts(p, "finding") {
+				if f := strings.Fields(s); len(f) > 1 && strings.HasPrefix(f[1], "R-") {
+					findings[f[1]]++
+				}
+			}
+		}
+		if rows != len(in.Quantities.Rows) {
+			t.Errorf("landscape=%v: %d amounts rows drawn, the report has %d", land, rows, len(in.Quantities.Rows))
+		}
+		for i := 0; i < 40; i++ {
+			if n := findings[fmt.Sprintf("R-%02d", i)]; n != 1 {
+				t.Errorf("landscape=%v: finding R-%02d drawn %d times", land, i, n)
+			}
+		}
+		n := len(doc.Pages)
+		for i, p := range doc.Pages {
+			if got := texts(p, "sheet-number"); len(got) != 1 || got[0] != fmt.Sprintf("%d of %d", i+1, n) {
+				t.Errorf("landscape=%v page %d: sheet number %q", land, i+1, got)
+			}
+		}
+		if land {
+			if got := strings.Join(texts(doc.Pages[0], "amounts-continued"), ""); !strings.Contains(got, "continue on sheet") {
+				t.Errorf("landscape: amounts continuation %q", got)
+			}
+		}
+	}
+}
+
+// countRowStarts counts amounts rows: the texts of role amounts-row at
+// the smallest x on the page's amounts boxes, one per row.
+func countRowStarts(p *draw.Page) int {
+	n := 0
+	for _, b := range boxes(p, "band:amounts") {
+		p.Walk(func(it draw.Item) {
+			if t, ok := it.(draw.Text); ok && t.Role == "amounts-row" && t.At.X == b.X+bandPad && within(textRect(t), b.Rect) && strings.Contains(t.S, "–") {
+				n++
+			}
+		})
+	}
+	return n
+}

@@ -1,0 +1,154 @@
+package sheet
+
+import (
+	"fmt"
+
+	"github.com/tremie-dev/tremie/render/draw"
+)
+
+// Notes sheets carry what the drawings' bands could not hold: amounts
+// rows, notes, findings and component notes. They flow, in that order,
+// down columns as wide as the band's boxes, and onto further notes
+// sheets when a sheet is full, so nothing is drawn outside the page body.
+
+// sheetBox is one box of a notes sheet: a run of amounts rows or of
+// note blocks, and where it continues when it does not end its run.
+type sheetBox struct {
+	r       draw.Rect
+	amounts [][]string // an amounts box's rows; nil for a notes box
+	notes   []noteBlock
+	foot    bool // the amounts table ends here
+	cont    int  // the box's run continues on the notes sheet of this index (-1: here, or nowhere)
+	last    bool // the run ends in this box
+}
+
+const sheetColGap = 6.0
+
+// notesArea is the part of a notes sheet the boxes fill.
+func (l *layout) notesArea() draw.Rect {
+	y := l.header.Bottom() + 6
+	return draw.Rect{X: l.content.X, Y: y, W: l.content.W, H: l.caution.Y - 6 - y}
+}
+
+// planNotesSheets flows the band's overflow onto notes sheets.
+func (l *layout) planNotesSheets() {
+	l.notesPages = nil
+	var rows [][]string
+	if l.amountsOverflow() {
+		rows = l.amountRows()[l.bandPlan.amountsIn:]
+	}
+	notes := append(append([]noteBlock(nil), l.bandPlan.overflow...), l.calloutOverflow...)
+	if len(rows) == 0 && len(notes) == 0 {
+		return
+	}
+	area := l.notesArea()
+	colW := max(l.bandPlan.noteW, l.bandPlan.amountW)
+	colW = min(colW, area.W)
+	perPage := max(1, int((area.W+sheetColGap)/(colW+sheetColGap)+1e-9))
+	page, col, y := 0, 0, area.Y
+	l.notesPages = [][]sheetBox{nil}
+	nextCol := func() {
+		col++
+		if col == perPage {
+			col, page = 0, page+1
+			l.notesPages = append(l.notesPages, nil)
+		}
+		y = area.Y
+	}
+	add := func(b sheetBox) {
+		l.notesPages[page] = append(l.notesPages[page], b)
+		y = b.r.Bottom() + sheetColGap
+	}
+	x := func() float64 { return area.X + float64(col)*(colW+sheetColGap) }
+
+	// Amounts rows: as many as fit each column, the foot under the last.
+	aw := l.bandPlan.amountW
+	for len(rows) > 0 {
+		free := area.Bottom() - y
+		if h := l.amountsBoxHeight(aw, rows, true, false); h <= free {
+			add(sheetBox{r: draw.Rect{X: x(), Y: y, W: aw, H: h}, amounts: rows, foot: true, cont: -1, last: true})
+			break
+		}
+		k := 0
+		for k < len(rows) && l.amountsBoxHeight(aw, rows[:k+1], false, true) <= free {
+			k++
+		}
+		if k == 0 && y > area.Y {
+			nextCol()
+			continue
+		}
+		k = max(k, 1) // a row taller than a column: give it one anyway
+		add(sheetBox{r: draw.Rect{X: x(), Y: y, W: aw, H: l.amountsBoxHeight(aw, rows[:k], false, true)}, amounts: rows[:k], cont: -1})
+		rows = rows[k:]
+		nextCol()
+	}
+
+	// Notes and findings: the same, with a line for where they continue.
+	for len(notes) > 0 {
+		free := area.Bottom() - y
+		head := bandHeadH + bandPad + bandPad
+		if h := head + notesHeight(notes); h <= free {
+			add(sheetBox{r: draw.Rect{X: x(), Y: y, W: colW, H: h}, notes: notes, cont: -1, last: true})
+			break
+		}
+		k := 0
+		for k < len(notes) && head+notesHeight(notes[:k+1])+continueLineH <= free {
+			k++
+		}
+		if k == 0 && y > area.Y {
+			nextCol()
+			continue
+		}
+		k = max(k, 1)
+		add(sheetBox{r: draw.Rect{X: x(), Y: y, W: colW, H: head + notesHeight(notes[:k]) + continueLineH}, notes: notes[:k], cont: -1})
+		notes = notes[k:]
+		nextCol()
+	}
+	if len(l.notesPages[len(l.notesPages)-1]) == 0 {
+		l.notesPages = l.notesPages[:len(l.notesPages)-1]
+	}
+	// A box whose run goes on in a later sheet's box says which.
+	for p, boxes := range l.notesPages {
+		for i := range boxes {
+			if boxes[i].last {
+				continue
+			}
+			if i+1 == len(boxes) {
+				boxes[i].cont = p + 1
+			}
+		}
+	}
+}
+
+// notesSheet draws notes sheet k (0-based) as page n of m.
+func (l *layout) notesSheet(pg *draw.Page, k, n, m int) {
+	pg.Add(l.headerItems(n, m, "Notes and check findings, continued")...)
+	for _, b := range l.notesPages[k] {
+		more := ""
+		if b.cont >= 0 {
+			next, _ := l.number(len(l.sheets) + b.cont)
+			more = fmt.Sprintf("Continued on sheet %d.", next)
+		} else if !b.last {
+			more = "Continued in the next column."
+		}
+		if b.amounts != nil {
+			pg.Add(l.amountBox(b.r, "AMOUNTS, CONTINUED", b.amounts, b.foot, more)...)
+			continue
+		}
+		pg.Add(l.noteItems(b.notes, b.r, more)...)
+	}
+	pg.Add(l.cautionItems()...)
+}
+
+// firstNotesPage is the index of the first notes sheet holding notes (not
+// only amounts).
+func (l *layout) firstNotesPage() int {
+	for p, boxes := range l.notesPages {
+		for _, b := range boxes {
+			if b.amounts == nil {
+				return p
+			}
+		}
+	}
+	return 0
+}
