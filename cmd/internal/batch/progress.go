@@ -12,7 +12,7 @@ import (
 
 // Terminal returns os.Stderr when it is a terminal and the CI variable is
 // unset, else nil: a progress bar is for a person watching, never for a
-// log file or a CI transcript.
+// log file or a CI log.
 func Terminal() io.Writer {
 	if os.Getenv("CI") != "" {
 		return nil
