@@ -566,3 +566,52 @@ func parentPath(p string) string {
 	}
 	return ""
 }
+
+// EachGeometryInterval calls fn with the interval of every part that
+// shapes the well's cross-section: borehole sections, outer casings and
+// the sections of every string. Between two of their boundaries the
+// cross-section is the same at every depth.
+func (w *Well) EachGeometryInterval(fn func(Interval)) {
+	for _, b := range w.Boreholes {
+		fn(b.Interval)
+	}
+	for _, c := range w.Casings {
+		fn(c.Interval)
+	}
+	for _, s := range w.Strings {
+		for _, sec := range s.Sections {
+			fn(sec.Interval)
+		}
+	}
+}
+
+// EachConstructionInterval calls fn with the interval of every part of the
+// construction: the geometry of EachGeometryInterval, the annular fills and
+// the open-hole intervals.
+func (w *Well) EachConstructionInterval(fn func(Interval)) {
+	w.EachGeometryInterval(fn)
+	for _, f := range w.Fills {
+		fn(f.Interval)
+	}
+	for _, o := range w.OpenHoles {
+		fn(o.Interval)
+	}
+}
+
+// Label is the casing's name, or its kind for a casing built without one
+// (the loader always sets a name).
+func (c Casing) Label() string {
+	if c.Name != "" {
+		return c.Name
+	}
+	return string(c.Kind)
+}
+
+// Label is the string's name, or "main" for a string built without one
+// (the loader always sets a name).
+func (s String) Label() string {
+	if s.Name != "" {
+		return s.Name
+	}
+	return "main"
+}

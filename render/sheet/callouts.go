@@ -214,7 +214,7 @@ func (l *layout) rawCallouts() []callout {
 		x := h.strX[si]
 		suffix := ""
 		if named {
-			suffix = " — " + stringName(s)
+			suffix = " — " + s.Label()
 		}
 		if len(s.Sections) > 0 {
 			top := s.Sections[0]
@@ -227,12 +227,12 @@ func (l *layout) rawCallouts() []callout {
 					lines = append(lines, "cap: "+s.TopCap)
 				}
 			}
-			add(callout{key: "mp:" + stringName(s), iv: schema.Interval{Top: top.Top, Bottom: top.Top}, anchorX: fixed(x + rt), title: "Measuring point" + suffix, lines: lines, rank: 3,
+			add(callout{key: "mp:" + s.Label(), iv: schema.Interval{Top: top.Top, Bottom: top.Top}, anchorX: fixed(x + rt), title: "Measuring point" + suffix, lines: lines, rank: 3,
 				base: "Measuring point", of: ofString(named, s)})
 		}
 		for k, sec := range s.Sections {
 			r := float64(od(sec.Pipe)) / 2 * h.ppmm
-			role := string(sec.Kind) + ":" + stringName(s) + fmt.Sprintf("[%d]", k)
+			role := string(sec.Kind) + ":" + s.Label() + fmt.Sprintf("[%d]", k)
 			var lines []string
 			var minor map[int]bool
 			switch sec.Kind {
@@ -252,11 +252,11 @@ func (l *layout) rawCallouts() []callout {
 		if s.BottomCap != "" && len(s.Sections) > 0 {
 			b := s.Sections[len(s.Sections)-1]
 			r := float64(od(b.Pipe)) / 2 * h.ppmm
-			add(callout{key: "bottomcap:" + stringName(s), iv: schema.Interval{Top: b.Bottom, Bottom: b.Bottom}, anchorX: fixed(x + r), title: "Bottom cap" + suffix,
+			add(callout{key: "bottomcap:" + s.Label(), iv: schema.Interval{Top: b.Bottom, Bottom: b.Bottom}, anchorX: fixed(x + r), title: "Bottom cap" + suffix,
 				lines: []string{s.BottomCap + " at " + l.depth(b.Bottom)}, rank: 5, base: "Bottom cap", of: ofString(named, s)})
 		}
 		if len(s.Centralizers) > 0 {
-			add(l.centralizerCallout("centralizer:"+stringName(s), x, stringOD(s), s.Centralizers, suffix))
+			add(l.centralizerCallout("centralizer:"+s.Label(), x, stringOD(s), s.Centralizers, suffix))
 		}
 	}
 
@@ -344,7 +344,7 @@ func ofString(named bool, s schema.String) []string {
 	if !named {
 		return nil
 	}
-	return []string{stringName(s)}
+	return []string{s.Label()}
 }
 
 // mergeStrings joins the callouts of one part of several strings that
@@ -466,7 +466,7 @@ func (l *layout) annulusX(f schema.Fill, d schema.Length) float64 {
 	limit := schema.Diameter(1e9)
 	if f.Within != "" {
 		for _, c := range l.w.Casings {
-			if casingName(c) == f.Within && c.Contains(d) {
+			if c.Label() == f.Within && c.Contains(d) {
 				outer = float64(id(c.Pipe)) / 2 * h.ppmm
 				limit = id(c.Pipe)
 			}

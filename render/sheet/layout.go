@@ -148,23 +148,7 @@ func (l *layout) depthRange() (top, bot schema.Length) {
 		top = min(top, iv.Top)
 		bot = max(bot, iv.Bottom)
 	}
-	for _, b := range w.Boreholes {
-		consider(b.Interval)
-	}
-	for _, c := range w.Casings {
-		consider(c.Interval)
-	}
-	for _, s := range w.Strings {
-		for _, sec := range s.Sections {
-			consider(sec.Interval)
-		}
-	}
-	for _, f := range w.Fills {
-		consider(f.Interval)
-	}
-	for _, o := range w.OpenHoles {
-		consider(o.Interval)
-	}
+	w.EachConstructionInterval(consider)
 	for _, ly := range w.Lithology {
 		consider(ly.Interval)
 	}

@@ -53,7 +53,7 @@ func (p *painter) well() []draw.Item {
 		c := w.Casings[ci]
 		items = append(items, p.pipe("casing:"+pathOr(c.Path, "casing", ci), h.cx, c.Interval, c.Pipe, nil)...)
 		for i, f := range w.Fills {
-			if f.Within != "" && f.Within == casingName(c) {
+			if f.Within != "" && f.Within == c.Label() {
 				items = append(items, p.fillInCasing(i, f, c)...)
 			}
 		}
@@ -67,10 +67,10 @@ func (p *painter) well() []draw.Item {
 		x := h.strX[si]
 		for k := range s.Sections {
 			sec := &s.Sections[k]
-			items = append(items, p.pipe(string(sec.Kind)+":"+stringName(s)+fmt.Sprintf("[%d]", k), x, sec.Interval, sec.Pipe, sec)...)
+			items = append(items, p.pipe(string(sec.Kind)+":"+s.Label()+fmt.Sprintf("[%d]", k), x, sec.Interval, sec.Pipe, sec)...)
 		}
 		items = append(items, p.caps(si, s, x)...)
-		items = append(items, p.centralizers("centralizer:"+stringName(s), x, stringOD(s), s.Centralizers)...)
+		items = append(items, p.centralizers("centralizer:"+s.Label(), x, stringOD(s), s.Centralizers)...)
 	}
 	for ci, c := range w.Casings {
 		items = append(items, p.centralizers("centralizer:"+pathOr(c.Path, "casing", ci), h.cx, od(c.Pipe), c.Centralizers)...)
@@ -93,20 +93,6 @@ func pathOr(path, kind string, i int) string {
 		return path
 	}
 	return fmt.Sprintf("%s[%d]", kind, i)
-}
-
-func casingName(c schema.Casing) string {
-	if c.Name != "" {
-		return c.Name
-	}
-	return string(c.Kind)
-}
-
-func stringName(s schema.String) string {
-	if s.Name != "" {
-		return s.Name
-	}
-	return "main"
 }
 
 // fillInHole paints a fill across the borehole, piece by piece where the
@@ -217,14 +203,14 @@ func (p *painter) caps(si int, s schema.String, x float64) []draw.Item {
 	if s.TopCap != "" && p.visible(top.Top) {
 		y := p.y(top.Top)
 		r := draw.Rect{X: x - rt - 0.8, Y: y - 2.8, W: 2*rt + 1.6, H: 2.8}
-		items = append(items, box(r, draw.Color{}, 0, draw.Color{}, "topcap:"+stringName(s)))
+		items = append(items, box(r, draw.Color{}, 0, draw.Color{}, "topcap:"+s.Label()))
 		items = append(items, p.use(capSym).paint(r)...)
 	}
 	rb := float64(od(bot.Pipe)) / 2 * h.ppmm
 	if s.BottomCap != "" && p.visible(bot.Bottom) {
 		y := p.y(bot.Bottom)
 		r := draw.Rect{X: x - rb, Y: y - 3, W: 2 * rb, H: 3}
-		items = append(items, box(r, draw.Color{}, 0, draw.Color{}, "bottomcap:"+stringName(s)))
+		items = append(items, box(r, draw.Color{}, 0, draw.Color{}, "bottomcap:"+s.Label()))
 		items = append(items, p.use(capSym).paint(r)...)
 	}
 	return items

@@ -81,12 +81,12 @@ func Compute(w *schema.Well, y *Yields) *Report {
 		r.Rows = append(r.Rows, row(w, y, i, f))
 	}
 	for i, c := range w.Casings {
-		r.Pipes = append(r.Pipes, PipeVolume{Name: casingName(c), Kind: string(c.Kind), Path: pathOr(c.Path, fmt.Sprintf("casing[%d]", i)),
+		r.Pipes = append(r.Pipes, PipeVolume{Name: c.Label(), Kind: string(c.Kind), Path: pathOr(c.Path, fmt.Sprintf("casing[%d]", i)),
 			Interval: c.Interval, Pipe: c.Pipe, Inside: InsideVolumePerLength(c.Pipe)})
 	}
 	for si, s := range w.Strings {
 		for ki, sec := range s.Sections {
-			r.Pipes = append(r.Pipes, PipeVolume{Name: stringName(s), Kind: string(sec.Kind), Path: pathOr(sec.Path, fmt.Sprintf("string[%d].section[%d]", si, ki)),
+			r.Pipes = append(r.Pipes, PipeVolume{Name: s.Label(), Kind: string(sec.Kind), Path: pathOr(sec.Path, fmt.Sprintf("string[%d].section[%d]", si, ki)),
 				Interval: sec.Interval, Pipe: sec.Pipe, Inside: InsideVolumePerLength(sec.Pipe)})
 		}
 	}

@@ -40,7 +40,7 @@ func At(w *schema.Well, z schema.Length) CrossSection {
 	}
 	for i, c := range w.Casings {
 		if c.Top <= z && z < c.Bottom {
-			cs.Pipes = append(cs.Pipes, Pipe{Name: casingName(c), Path: casingPath(c, i), Casing: true, OD: c.Pipe.OD, ID: c.Pipe.ID, In: -1})
+			cs.Pipes = append(cs.Pipes, Pipe{Name: c.Label(), Path: casingPath(c, i), Casing: true, OD: c.Pipe.OD, ID: c.Pipe.ID, In: -1})
 		}
 	}
 	// Outermost casing first, so that each casing's container is found
@@ -52,7 +52,7 @@ func At(w *schema.Well, z schema.Length) CrossSection {
 	for si, s := range w.Strings {
 		for ki, sec := range s.Sections {
 			if sec.Top <= z && z < sec.Bottom {
-				p := Pipe{Name: stringName(s) + " " + string(sec.Kind), Path: sectionPath(sec, si, ki), OD: sec.Pipe.OD, ID: sec.Pipe.ID}
+				p := Pipe{Name: s.Label() + " " + string(sec.Kind), Path: sectionPath(sec, si, ki), OD: sec.Pipe.OD, ID: sec.Pipe.ID}
 				p.In = container(cs.Pipes, p.OD)
 				cs.Pipes = append(cs.Pipes, p)
 				break // a string has one section at a depth
@@ -145,20 +145,6 @@ func (cs CrossSection) Area(r Region) (float64, error) {
 func circle(d schema.Diameter) float64 {
 	m := d.Metres()
 	return math.Pi / 4 * m * m
-}
-
-func casingName(c schema.Casing) string {
-	if c.Name != "" {
-		return c.Name
-	}
-	return string(c.Kind)
-}
-
-func stringName(s schema.String) string {
-	if s.Name != "" {
-		return s.Name
-	}
-	return "main"
 }
 
 func pathOr(p, def string) string {

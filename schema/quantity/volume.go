@@ -21,24 +21,13 @@ func (s Slice) Volume() schema.Volume { return schema.Volume(s.Area * float64(s.
 // sorted and without repeats.
 func boundaries(w *schema.Well, top, bottom schema.Length) []schema.Length {
 	zs := []schema.Length{top, bottom}
-	add := func(iv schema.Interval) {
+	w.EachGeometryInterval(func(iv schema.Interval) {
 		for _, z := range []schema.Length{iv.Top, iv.Bottom} {
 			if z > top && z < bottom {
 				zs = append(zs, z)
 			}
 		}
-	}
-	for _, b := range w.Boreholes {
-		add(b.Interval)
-	}
-	for _, c := range w.Casings {
-		add(c.Interval)
-	}
-	for _, s := range w.Strings {
-		for _, sec := range s.Sections {
-			add(sec.Interval)
-		}
-	}
+	})
 	sort.Slice(zs, func(i, j int) bool { return zs[i] < zs[j] })
 	out := zs[:1]
 	for _, z := range zs[1:] {

@@ -315,24 +315,7 @@ func sumOD(ps []pipe) schema.Diameter {
 func segments(w *schema.Well) []schema.Interval {
 	cuts := make([]schema.Length, 0, 2+2*(len(w.Boreholes)+len(w.Casings)+len(w.Fills)+len(w.OpenHoles)+8))
 	cuts = append(cuts, 0, w.TotalDepth)
-	add := func(iv schema.Interval) { cuts = append(cuts, iv.Top, iv.Bottom) }
-	for _, b := range w.Boreholes {
-		add(b.Interval)
-	}
-	for _, c := range w.Casings {
-		add(c.Interval)
-	}
-	for _, s := range w.Strings {
-		for _, sec := range s.Sections {
-			add(sec.Interval)
-		}
-	}
-	for _, f := range w.Fills {
-		add(f.Interval)
-	}
-	for _, o := range w.OpenHoles {
-		add(o.Interval)
-	}
+	w.EachConstructionInterval(func(iv schema.Interval) { cuts = append(cuts, iv.Top, iv.Bottom) })
 	slices.Sort(cuts)
 	var out []schema.Interval
 	for i := 1; i < len(cuts); i++ {
