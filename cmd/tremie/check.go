@@ -236,15 +236,9 @@ func writeCheckText(w io.Writer, results []fileResult, prof *rules.Profile) erro
 		}
 		for _, f := range r.Findings {
 			fmt.Fprintf(&b, "%s:%d: %s %s: %s\n", r.Path, f.Line, f.Label(), f.Rule, f.Message)
-			switch {
-			case f.Waived:
-				waived++
-			case f.Severity == rules.Error:
-				errs++
-			default:
-				warns++
-			}
 		}
+		t := rules.Count(r.Findings)
+		errs, warns, waived = errs+t.Errors, warns+t.Warnings, waived+t.Waived
 	}
 	profName := "default thresholds"
 	if prof != nil {

@@ -240,17 +240,8 @@ func (l *layout) noteBlocks(width float64) []noteBlock {
 		return 1
 	}
 	sort.SliceStable(fs, func(i, j int) bool { return rank(fs[i]) < rank(fs[j]) })
-	ne, nw, nv := 0, 0, 0
-	for _, f := range fs {
-		switch rank(f) {
-		case 0:
-			ne++
-		case 1:
-			nw++
-		default:
-			nv++
-		}
-	}
+	t := rules.Count(fs)
+	ne, nw, nv := t.Errors, t.Warnings, t.Waived
 	c := ink
 	if ne > 0 {
 		c = alarm

@@ -293,16 +293,8 @@ func latestLevel(w *schema.Well) (schema.WaterLevel, bool) {
 }
 
 func status(fs []rules.Finding) (s Status, errs, warns, waived int) {
-	for _, f := range fs {
-		switch {
-		case f.Waived:
-			waived++
-		case f.Severity == rules.Error:
-			errs++
-		default:
-			warns++
-		}
-	}
+	t := rules.Count(fs)
+	errs, warns, waived = t.Errors, t.Warnings, t.Waived
 	switch {
 	case errs > 0:
 		return Errors, errs, warns, waived

@@ -252,3 +252,26 @@ func Blocking(fs []Finding) bool {
 	}
 	return false
 }
+
+// Tally is how many findings of each kind a check reports.
+type Tally struct {
+	Errors   int // unwaived errors
+	Warnings int // unwaived warnings
+	Waived   int // findings a waiver covers, whatever their severity
+}
+
+// Count tallies findings the way every report prints them.
+func Count(fs []Finding) Tally {
+	var t Tally
+	for _, f := range fs {
+		switch {
+		case f.Waived:
+			t.Waived++
+		case f.Severity == Error:
+			t.Errors++
+		default:
+			t.Warnings++
+		}
+	}
+	return t
+}
