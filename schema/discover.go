@@ -1,6 +1,7 @@
 package schema
 
 import (
+	"errors"
 	"fmt"
 	"io/fs"
 	"os"
@@ -72,4 +73,14 @@ func FindWells(paths []string) ([]string, []error) {
 		}
 	}
 	return out, errs
+}
+
+// unwrapPathError drops the path from an os error whose message names it
+// already.
+func unwrapPathError(err error) error {
+	var pe *os.PathError
+	if errors.As(err, &pe) {
+		return pe.Err
+	}
+	return err
 }

@@ -45,3 +45,27 @@ func (l ErrorList) First() *Error {
 	}
 	return l[0]
 }
+
+// ReadError is the error for a file that could not be read at all. what
+// names the kind of file in the message ("profile", "yields"; "" for a
+// well file); the cause is given without the path, which the position
+// already names.
+func ReadError(path, what string, err error) *Error {
+	err = unwrapPathError(err)
+	msg := "cannot read"
+	if what != "" {
+		msg += " " + what
+	}
+	return &Error{File: path, Msg: fmt.Sprintf("%s: %v", msg, err)}
+}
+
+// LineOf is the line of a key path in a map of key lines (from
+// KeyPositions), or of its nearest enclosing table, or 1.
+func LineOf(lines map[string]int, path string) int {
+	for p := path; p != ""; p = parentPath(p) {
+		if l, ok := lines[p]; ok {
+			return l
+		}
+	}
+	return 1
+}

@@ -14,17 +14,9 @@ import (
 func LoadFile(path string) (*Well, error) {
 	data, err := os.ReadFile(path)
 	if err != nil {
-		return nil, ErrorList{{File: path, Msg: fmt.Sprintf("cannot read: %v", unwrapPathError(err))}}
+		return nil, ErrorList{ReadError(path, "", err)}
 	}
 	return Load(path, data)
-}
-
-func unwrapPathError(err error) error {
-	var pe *os.PathError
-	if errors.As(err, &pe) {
-		return pe.Err
-	}
-	return err
 }
 
 // Load parses a well file's bytes; name is used in positions.

@@ -79,13 +79,7 @@ func (k *keyIndex) get() map[string]int {
 // Line returns the line of a key path, or of the nearest enclosing table
 // that has one, or 1.
 func (w *Well) Line(path string) int {
-	keys := w.keys.get()
-	for p := path; p != ""; p = parentPath(p) {
-		if l, ok := keys[p]; ok {
-			return l
-		}
-	}
-	return 1
+	return LineOf(w.keys.get(), path)
 }
 
 // HasKey reports whether the file gives the key path itself, such as

@@ -64,7 +64,7 @@ func Load(dir string) (*Project, error) {
 		if errors.Is(err, fs.ErrNotExist) {
 			return nil, fmt.Errorf("%s: %w", file, ErrNoProject)
 		}
-		return nil, &schema.Error{File: file, Msg: fmt.Sprintf("cannot read: %v", unwrapPath(err))}
+		return nil, schema.ReadError(file, "", err)
 	}
 	return Parse(dir, file, data)
 }
@@ -87,7 +87,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 		return nil, &schema.Error{File: file, Line: lines[k], Key: k, Msg: msg}
 	}
 	bad := func(key, format string, args ...any) error {
-		return &schema.Error{File: file, Line: lineOf(lines, key), Key: key, Msg: fmt.Sprintf(format, args...)}
+		return &schema.Error{File: file, Line: schema.LineOf(lines, key), Key: key, Msg: fmt.Sprintf(format, args...)}
 	}
 	if !md.IsDefined("project") {
 		return nil, &schema.Error{File: file, Line: 1, Msg: "missing [project] table"}
@@ -162,7 +162,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 	if pr.Logo != "" {
 		logo, err := LoadLogo(p.Path(pr.Logo))
 		if err != nil {
-			return nil, &schema.Error{File: file, Line: lineOf(lines, "project.logo"), Key: "project.logo", Msg: err.Error()}
+			return nil, &schema.Error{File: file, Line: schema.LineOf(lines, "project.logo"), Key: "project.logo", Msg: err.Error()}
 		}
 		p.Logo = logo
 	}
@@ -177,7 +177,7 @@ func decodeError(file string, lines map[string]int, err error) error {
 	if errors.As(err, &pe) {
 		msg := pe.Message
 		if pe.LastKey != "" && pe.Position.Line == 0 {
-			return &schema.Error{File: file, Line: lineOf(lines, pe.LastKey), Key: pe.LastKey, Msg: msg}
+			return &schema.Error{File: file, Line: schema.LineOf(lines, pe.LastKey), Key: pe.LastKey, Msg: msg}
 		}
 		return &schema.Error{File: file, Line: pe.Position.Line, Key: pe.LastKey, Msg: msg}
 	}
@@ -188,27 +188,4 @@ func decodeError(file string, lines map[string]int, err error) error {
 		msg = strings.TrimSpace(strings.TrimPrefix(msg[strings.Index(msg, m[0])+len(m[0]):], ":"))
 	}
 	return &schema.Error{File: file, Line: line, Msg: msg}
-}
-
-// lineOf is the line of a key, or of its table, or 1.
-func lineOf(lines map[string]int, key string) int {
-	for k := key; k != ""; {
-		if l, ok := lines[k]; ok {
-			return l
-		}
-		i := strings.LastIndexByte(k, '.')
-		if i < 0 {
-			break
-		}
-		k = k[:i]
-	}
-	return 1
-}
-
-func unwrapPath(err error) error {
-	var pe *fs.PathError
-	if errors.As(err, &pe) {
-		return pe.Err
-	}
-	return err
 }

@@ -31,11 +31,7 @@ import (
 func LoadYields(path string) (*Yields, error) {
 	data, err := os.ReadFile(path)
 	if err != nil {
-		var pe *os.PathError
-		if errors.As(err, &pe) {
-			err = pe.Err
-		}
-		return nil, &schema.Error{File: path, Msg: fmt.Sprintf("cannot read yields: %v", err)}
+		return nil, schema.ReadError(path, "yields", err)
 	}
 	y, found, err := parseYields(path, data)
 	if err != nil {

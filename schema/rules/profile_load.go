@@ -18,11 +18,7 @@ import (
 func LoadProfile(path string) (*Profile, error) {
 	data, err := os.ReadFile(path)
 	if err != nil {
-		var pe *os.PathError
-		if errors.As(err, &pe) {
-			err = pe.Err
-		}
-		return nil, schema.ErrorList{{File: path, Msg: fmt.Sprintf("cannot read profile: %v", err)}}
+		return nil, schema.ErrorList{schema.ReadError(path, "profile", err)}
 	}
 	return ParseProfile(path, data)
 }
