@@ -235,3 +235,8 @@ func KeyPositions(src string) map[string]Position {
 	})
 	return out
 }
+
+// KeyLines is KeyPositions with lines only, for messages that name a line.
+func KeyLines(src string) map[string]int {
+	return scanKeyLines(src)
+}

@@ -72,7 +72,7 @@ func Load(dir string) (*Project, error) {
 // Parse reads a project file's bytes; dir is the project root that
 // relative paths are joined to.
 func Parse(dir, file string, data []byte) (*Project, error) {
-	lines := keyLines(data)
+	lines := schema.KeyLines(string(data))
 	var fd fileData
 	md, err := toml.Decode(string(data), &fd)
 	if err != nil {

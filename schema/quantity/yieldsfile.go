@@ -65,9 +65,9 @@ func parseYields(name string, data []byte) (*Yields, bool, error) {
 	if !ok {
 		return y, false, nil
 	}
-	lines := tableLines(string(data))
+	lines := schema.KeyLines(string(data))
 	errAt := func(key, format string, args ...any) *schema.Error {
-		return &schema.Error{File: name, Line: lines.line(key), Key: key, Msg: fmt.Sprintf(format, args...)}
+		return &schema.Error{File: name, Line: schema.LineOf(lines, key), Key: key, Msg: fmt.Sprintf(format, args...)}
 	}
 	t, ok := raw.(map[string]any)
 	if !ok {
@@ -176,34 +176,4 @@ func materialList() string {
 		names[i] = string(m)
 	}
 	return strings.Join(names, ", ")
-}
-
-// keyLines maps "table.key" (and "table" for a header) to its line.
-type keyLines map[string]int
-
-// line returns the line of a key, or of its nearest enclosing table, or 1.
-func (l keyLines) line(key string) int {
-	for k := key; k != ""; {
-		if n, ok := l[k]; ok {
-			return n
-		}
-		i := strings.LastIndex(k, ".")
-		if i < 0 {
-			break
-		}
-		k = k[:i]
-	}
-	return 1
-}
-
-// tableLines maps the keys of a yields file to their lines with the well
-// loader's scanner (schema.KeyPositions); a key inside an inline table
-// falls back to its table's line through keyLines.line.
-func tableLines(src string) keyLines {
-	pos := schema.KeyPositions(src)
-	out := make(keyLines, len(pos))
-	for k, p := range pos {
-		out[k] = p.Line
-	}
-	return out
 }
