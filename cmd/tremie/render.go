@@ -80,11 +80,16 @@ func outputErr(err error) error { return &renderError{code: exitOutput, err: err
 // renderWell loads, checks, quantifies, lays out and writes one well. It
 // shares nothing mutable, so wells may be rendered in parallel.
 func renderWell(path string, opts renderOptions) (renderResult, error) {
-	res := renderResult{Path: path}
 	w, err := schema.LoadFile(path)
 	if err != nil {
-		return res, inputErr(err)
+		return renderResult{Path: path}, inputErr(err)
 	}
+	return renderLoaded(path, w, opts)
+}
+
+// renderLoaded is renderWell for a well already loaded from path.
+func renderLoaded(path string, w *schema.Well, opts renderOptions) (renderResult, error) {
+	res := renderResult{Path: path}
 	prj := opts.projects[path]
 	project.Apply(prj, w)
 	res.WellID = w.ID
@@ -381,10 +386,11 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 
 	// Names first, in input order, so collisions resolve the same way
 	// however the wells are then drawn.
+	loaded := loadAll(files)
 	ids := make([]string, len(files))
-	for i, f := range files {
-		if w, err := schema.LoadFile(f); err == nil {
-			ids[i] = w.ID
+	for i, l := range loaded {
+		if l.well != nil {
+			ids[i] = l.well.ID
 		}
 	}
 	opts.names = assignNames(files, ids)
@@ -396,7 +402,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	if *yieldsPath != "" {
 		yieldsBytes, _ = os.ReadFile(*yieldsPath)
 	}
-	results, sum, cache, stale, cacheErr := renderRun(files, opts, *force, profileBytes, yieldsBytes)
+	results, sum, cache, stale, cacheErr := renderRun(files, loaded, opts, *force, profileBytes, yieldsBytes)
 	if cacheErr != nil {
 		fmt.Fprintf(stderr, "tremie render: %v\n", cacheErr)
 	}

@@ -20,11 +20,42 @@ type renderJob struct {
 	base incremental.Base
 }
 
+// loadedWell is a well file read and parsed once, before names are given
+// out; the worker that draws it takes it from there.
+type loadedWell struct {
+	data []byte
+	well *schema.Well // nil when err is set
+	err  error        // the file could not be read or parsed
+}
+
+// loadAll reads and parses every file in parallel.
+func loadAll(files []string) []loadedWell {
+	res, _ := batch.Run(files, batch.Options{}, func(_ int, f string) (loadedWell, batch.Outcome, error) {
+		data, err := os.ReadFile(f)
+		if err != nil {
+			return loadedWell{err: inputErr(schema.ErrorList{schema.ReadError(f, "", err)})}, batch.Done, nil
+		}
+		w, err := schema.Load(f, data)
+		if err != nil {
+			return loadedWell{data: data, err: inputErr(err)}, batch.Done, nil
+		}
+		return loadedWell{data: data, well: w}, batch.Done, nil
+	})
+	out := make([]loadedWell, len(res))
+	for i, r := range res {
+		out[i] = r.Value
+		if r.Err != nil { // a panic caught by the runner
+			out[i] = loadedWell{err: inputErr(r.Err)}
+		}
+	}
+	return out
+}
+
 // renderRun draws every well in parallel, skipping those whose inputs are
 // unchanged since the cache in the output directory was written (unless
 // force). A skipped well is still loaded and checked, which is cheap, so
 // that the exit code always reflects the check.
-func renderRun(files []string, opts renderOptions, force bool, profileBytes, yieldsBytes []byte) ([]batch.Result[renderResult], batch.Summary, *incremental.Cache, []string, error) {
+func renderRun(files []string, loaded []loadedWell, opts renderOptions, force bool, profileBytes, yieldsBytes []byte) ([]batch.Result[renderResult], batch.Summary, *incremental.Cache, []string, error) {
 	defer lessEagerGC()()
 	cache, cacheErr := incremental.Load(opts.outDir)
 	bases := map[*project.Project]incremental.Base{}
@@ -42,24 +73,26 @@ func renderRun(files []string, opts renderOptions, force bool, profileBytes, yie
 		}
 		jobs[i] = renderJob{path: f, key: key, base: b}
 	}
-	res, sum := batch.Run(jobs, batch.Options{Progress: batch.Terminal(), Label: "drawing"}, func(_ int, j renderJob) (renderResult, batch.Outcome, error) {
-		data, err := os.ReadFile(j.path)
-		if err != nil {
-			return renderResult{Path: j.path}, batch.Failed, inputErr(schema.ErrorList{{File: j.path, Msg: fmt.Sprintf("cannot read: %v", err)}})
+	res, sum := batch.Run(jobs, batch.Options{Progress: batch.Terminal(), Label: "drawing"}, func(i int, j renderJob) (renderResult, batch.Outcome, error) {
+		l := loaded[i]
+		loaded[i] = loadedWell{} // this worker owns it now; let it go when done
+		if l.err != nil {
+			if l.data != nil { // read but not parsed: its outputs no longer stand for it
+				cache.Forget(j.key)
+			}
+			return renderResult{Path: j.path}, batch.Failed, l.err
 		}
-		hash := j.base.Well(data)
+		hash := j.base.Well(l.data)
 		if !force {
 			if outs, ok := cache.Recorded(j.key, hash); ok {
-				r, err := checkOnly(j.path, data, opts)
-				if err == nil {
-					for _, o := range outs {
-						r.Outputs = append(r.Outputs, filepath.Join(opts.outDir, filepath.FromSlash(o)))
-					}
-					return r, batch.Skipped, nil
+				r := checkOnly(j.path, l.well, opts)
+				for _, o := range outs {
+					r.Outputs = append(r.Outputs, filepath.Join(opts.outDir, filepath.FromSlash(o)))
 				}
+				return r, batch.Skipped, nil
 			}
 		}
-		r, err := renderWell(j.path, opts)
+		r, err := renderLoaded(j.path, l.well, opts)
 		if err != nil {
 			cache.Forget(j.key)
 			return r, batch.Failed, err
@@ -87,16 +120,12 @@ func renderRun(files []string, opts renderOptions, force bool, profileBytes, yie
 	return res, sum, cache, stale, cacheErr
 }
 
-// checkOnly loads and checks a well whose sheets are up to date.
-func checkOnly(path string, data []byte, opts renderOptions) (renderResult, error) {
-	w, err := schema.Load(path, data)
-	if err != nil {
-		return renderResult{Path: path}, err
-	}
+// checkOnly checks a well whose sheets are up to date.
+func checkOnly(path string, w *schema.Well, opts renderOptions) renderResult {
 	project.Apply(opts.projects[path], w)
 	r := renderResult{Path: path, WellID: w.ID, Findings: rules.Check(w, opts.profile)}
 	r.Blocking = rules.Blocking(r.Findings)
-	return r, nil
+	return r
 }
 
 // renderShared lists everything besides the well file that changes what
