@@ -39,6 +39,9 @@ type Rule struct {
 	Source   string   // where its threshold or requirement comes from
 	Params   []Param  // thresholds a profile may set
 	Run      func(*Pass)
+	// Purposes are the well purposes the rule applies to by default; nil
+	// for every well. A well whose purpose is not given is always checked.
+	Purposes []schema.Purpose
 }
 
 // ParamKind says how a parameter is written in a profile.
@@ -60,6 +63,9 @@ type Param struct {
 	DefaultFt float64 // imperial default in feet or inches; 0 = convert Default
 	Doc       string
 	Source    string
+	ByPurpose []PurposeDefault // defaults for some purposes, each with its source
+	Fraction  bool             // a RatioParam from 0 to 1
+	Fallback  string           // with Default 0: where no value applies, that of this other parameter
 }
 
 // Finding is one thing a rule found in a well.
@@ -110,7 +116,7 @@ type Pass struct {
 // Param returns the value of the rule's named parameter in model units,
 // from the profile or the default.
 func (p *Pass) Param(name string) float64 {
-	return p.profile.value(p.Rule, name, p.Well.Units)
+	return p.profile.valueFor(p.Rule, name, p.Well.Units, p.Well.Purpose)
 }
 
 // Length returns a length parameter.
@@ -122,7 +128,7 @@ func (p *Pass) Profile() *Profile { return p.profile }
 // Reportf records a finding at a key path of the well (e.g. "fill[2].top")
 // naming the depths it concerns.
 func (p *Pass) Reportf(path string, depths []schema.Length, format string, args ...any) {
-	p.ReportSeverity(p.profile.severity(p.Rule), path, depths, format, args...)
+	p.ReportSeverity(p.profile.severityFor(p.Rule, p.Well.Purpose), path, depths, format, args...)
 }
 
 // ReportSeverity is Reportf with an explicit severity, for rules that warn
@@ -228,6 +234,9 @@ func runOne(r *Rule, w *schema.Well, prof *Profile, sh *shared, out *[]Finding) 
 				Message: fmt.Sprintf("internal error in rule %s: %v (please report)", r.ID, e)})
 		}
 	}()
+	if !prof.applies(r, w.Purpose) {
+		return
+	}
 	r.Run(&Pass{Well: w, Rule: r, profile: prof, out: out, shared: sh})
 }
 
