@@ -1,5 +1,7 @@
 package schema
 
+import "strings"
+
 // Features of the open-hole wall: fractures, bedding, foliation, veins and
 // contacts logged from an unwrapped image of the borehole wall, with their
 // orientation given directly or picked on the image as a sinusoid. The
@@ -161,4 +163,9 @@ func (w *Well) WallImageNamed(name string) (WallImage, bool) {
 		}
 	}
 	return WallImage{}, false
+}
+
+// Label is the kind in words: "water-bearing fracture", "broken zone".
+func (k FeatureKind) Label() string {
+	return strings.Replace(strings.ReplaceAll(string(k), "-", " "), "water bearing", "water-bearing", 1)
 }
