@@ -211,7 +211,7 @@ slot_number = 10
 				t.Errorf("finding %q lacks %q", f.Message, want)
 			}
 		}
-		if f.Top == nil || f.Bottom == nil {
+		if _, _, ok := f.Span(); !ok {
 			t.Errorf("finding %q names no depth", f.Message)
 		}
 	}
@@ -220,7 +220,8 @@ slot_number = 10
 	// (10 - 2.375)/2 = 3.8 in.
 	top, bottom := 1e9, -1e9
 	for _, f := range fs {
-		top, bottom = min(top, *f.Top), max(bottom, *f.Bottom)
+		a, b, _ := f.Span()
+		top, bottom = min(top, a), max(bottom, b)
 	}
 	if top != 0 || bottom != 25 {
 		t.Errorf("flagged %v–%v ft, want 0–25 ft", top, bottom)
