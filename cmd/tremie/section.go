@@ -1,6 +1,7 @@
 package main
 
 import (
+	"errors"
 	"flag"
 	"fmt"
 	"io"
@@ -8,6 +9,7 @@ import (
 	"path/filepath"
 	"strings"
 
+	"github.com/tremie-dev/tremie/render/book"
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/section"
 	"github.com/tremie-dev/tremie/schema"
@@ -109,4 +111,40 @@ func runSection(args []string, stdout, stderr io.Writer) int {
 		}
 	}
 	return status
+}
+
+// bookSections draws every section the project defines, as PDFs for the
+// book; a section that cannot be drawn is left out and its error
+// returned.
+func bookSections(pw *projectWells, date string) ([]book.Section, error) {
+	if len(pw.proj.Sections) == 0 {
+		return nil, nil
+	}
+	var wells []*schema.Well
+	for _, e := range pw.entries {
+		wells = append(wells, e.Well)
+	}
+	inputs, err := section.Select(pw.proj, wells, "", nil)
+	if err != nil {
+		return nil, err
+	}
+	tpl, err := templates.Load("tabloid", true)
+	if err != nil {
+		return nil, err
+	}
+	var secs []book.Section
+	var errs []error
+	for _, in := range inputs {
+		in.Page, in.Date = tpl, date
+		doc, err := section.Layout(in)
+		if err == nil {
+			var pdf []byte
+			if pdf, err = out.PDF(doc); err == nil {
+				secs = append(secs, book.Section{Name: in.Section.Name, Sheet: pdf})
+				continue
+			}
+		}
+		errs = append(errs, err)
+	}
+	return secs, errors.Join(errs...)
 }

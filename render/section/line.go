@@ -23,7 +23,10 @@ func (pl polyline) length() float64 {
 // project returns how far along the polyline the point's nearest point
 // lies (the chainage) and how far the point is from it (the offset). Each
 // segment is tried with the foot of the perpendicular clamped to the
-// segment; the nearest wins, the earlier on a tie.
+// segment, except that the first and last segments run on past the
+// line's ends, so a well beyond an end gets a distance before 0 or past
+// the length instead of piling up on the end point; the nearest wins,
+// the earlier on a tie.
 func (pl polyline) project(p XY) (chainage, offset float64) {
 	best := math.Inf(1)
 	var run float64
@@ -34,7 +37,12 @@ func (pl polyline) project(p XY) (chainage, offset float64) {
 		t := 0.0
 		if seg > 0 {
 			t = ((p.E-a.E)*dx + (p.N-a.N)*dy) / (seg * seg)
-			t = math.Max(0, math.Min(1, t))
+			if i > 1 {
+				t = math.Max(0, t)
+			}
+			if i < len(pl)-1 {
+				t = math.Min(1, t)
+			}
 		}
 		fx, fy := a.E+t*dx, a.N+t*dy
 		if d := math.Hypot(p.E-fx, p.N-fy); d < best {
