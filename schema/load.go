@@ -176,6 +176,7 @@ func (r *reader) well(root *table) *Well {
 	if t := root.sub("pump"); t != nil {
 		w.Pump = r.pump(t, w)
 	}
+	r.features(root, w)
 	for _, t := range root.list("waiver") {
 		wv := Waiver{Rule: t.reqStr("rule"), Reason: t.reqStr("reason"), ApprovedBy: t.reqStr("approved_by"), Date: t.date("date"), Pos: r.at(t.path)}
 		t.done()
