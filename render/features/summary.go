@@ -323,3 +323,25 @@ func norths(rows []Row) []string {
 
 // WellSubtitle is the subtitle of one well's summary.
 func WellSubtitle(w *schema.Well) string { return joinNonEmpty(" · ", w.Project, w.Site) }
+
+// WellSummary is the summary of one well's features, nil when it has
+// none; width and height are the portrait page size (0: US Letter).
+func WellSummary(file string, w *schema.Well, width, height float64, date string) *draw.Document {
+	if len(w.Features) == 0 {
+		return nil
+	}
+	return Summary(SummaryInput{Title: w.ID, Subtitle: WellSubtitle(w), Rows: Rows(file, w), Width: width, Height: height, Date: date})
+}
+
+// ProjectSummary is the summary of every listed well's features, nil
+// when fewer than two wells have any (one well's page says it all).
+func ProjectSummary(name, site string, rows []Row, width, height float64, date string) *draw.Document {
+	wells := map[string]bool{}
+	for _, r := range rows {
+		wells[r.File] = true
+	}
+	if len(wells) < 2 {
+		return nil
+	}
+	return Summary(SummaryInput{Title: name, Subtitle: site, Rows: rows, Project: true, Width: width, Height: height, Date: date})
+}
