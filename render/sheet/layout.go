@@ -38,6 +38,7 @@ type layout struct {
 	title     titleBlock
 	bandPlan  bandPlan
 	legendAll []symbol // every symbol the well's sheets use
+	parts     []part   // the supply-well parts (see part.go)
 
 	sheetCallouts   [][]placedCallout // each sheet's labels
 	sheetNotes      [][]noteBlock     // each sheet's component notes, in its notes box
@@ -71,6 +72,7 @@ func newLayout(w *schema.Well, in Inputs, opt Options, pg Page) *layout {
 	}
 	l.content = draw.Rect{X: pg.Margin, Y: pg.Margin, W: pg.Width - 2*pg.Margin, H: pg.Height - 2*pg.Margin}
 	l.blocking = rules.Blocking(in.Findings)
+	l.parts = l.supplyParts()
 	return l
 }
 
@@ -85,7 +87,7 @@ func (l *layout) plan() error {
 	hh := l.title.height(l.content.W)
 	l.header = draw.Rect{X: l.content.X, Y: l.content.Y, W: l.content.W, H: hh}
 
-	cautionLines := draw.Wrap(draw.Italic, sizeTiny, Caution, l.content.W)
+	cautionLines := draw.Wrap(draw.Italic, sizeTiny, rules.Caution(l.in.Profile), l.content.W)
 	ch := float64(len(cautionLines))*lineGap(sizeTiny) + 4
 	l.caution = draw.Rect{X: l.content.X, Y: l.content.Bottom() - ch, W: l.content.W, H: ch}
 
