@@ -35,7 +35,7 @@ func runAnnularSpace(p *Pass) {
 		fill  *schema.Fill
 		space schema.Diameter
 		outer string
-		inner []pipe
+		inner []schema.HolePipe
 	}
 	faults := map[string]fault{}
 	var t spanTracker
@@ -55,8 +55,8 @@ func runAnnularSpace(p *Pass) {
 				continue
 			}
 			var outerD schema.Diameter
-			var casing pipe // the outer casing, unless name is the borehole annulus
-			var inner []pipe
+			var casing schema.HolePipe // the outer casing, unless name is the borehole annulus
+			var inner []schema.HolePipe
 			if name == boreholeAnnulus {
 				if !cs.HasHole {
 					continue
