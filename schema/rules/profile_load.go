@@ -129,9 +129,7 @@ func (r *profileReader) read(raw map[string]any) *Profile {
 		}
 	}
 	for _, k := range sortedKeys(raw) {
-		switch k {
-		case "profile", "rule", "sanitary_seal":
-		default:
+		if ProfileFile().Key(k) == nil {
 			r.errAt(k, "unknown key %q at top level (expected [profile], [rule.RULE-ID] or [sanitary_seal])", k)
 		}
 	}
@@ -161,7 +159,7 @@ func (r *profileReader) header(prof *Profile, m map[string]any) {
 			}
 			prof.Units = schema.DepthUnit(s)
 		default:
-			r.errAt(path, "unknown key %q in [profile] (expected name, units, source)", k)
+			r.errAt(path, "unknown key %q in [profile] (expected %s)", k, strings.Join(ProfileFile().Key("profile").Table.Names(), ", "))
 		}
 	}
 }
