@@ -16,19 +16,20 @@ import (
 type ValueType int
 
 const (
-	TypeString   ValueType = iota
-	TypeNumber             // integer or float
-	TypeInteger            // integer only
-	TypeBool               // true or false
-	TypeDate               // TOML local date: 2026-03-14
-	TypeDateTime           // TOML local date-time or date: 2026-03-14T09:30:00
-	TypeStrings            // array of strings (a single string is accepted)
-	TypeNumbers            // array of numbers
-	TypeTable              // [table]
-	TypeTables             // [[array of tables]]
+	TypeString      ValueType = iota
+	TypeNumber                // integer or float
+	TypeInteger               // integer only
+	TypeBool                  // true or false
+	TypeDate                  // TOML local date: 2026-03-14
+	TypeDateTime              // TOML local date-time or date: 2026-03-14T09:30:00
+	TypeStrings               // array of strings (a single string is accepted)
+	TypeNumbers               // array of numbers
+	TypeNumberPairs           // array of [number, number] pairs
+	TypeTable                 // [table]
+	TypeTables                // [[array of tables]]
 )
 
-var typeNames = [...]string{"a string", "a number", "an integer", "a boolean", "a date", "a date or date-time", "an array of strings", "an array of numbers", "a table", "an array of tables"}
+var typeNames = [...]string{"a string", "a number", "an integer", "a boolean", "a date", "a date or date-time", "an array of strings", "an array of numbers", "an array of number pairs", "a table", "an array of tables"}
 
 func (t ValueType) String() string {
 	if int(t) < len(typeNames) {
@@ -55,6 +56,7 @@ const (
 	UnitGrain    = "mm"
 	UnitSlotNo   = "thousandths of an inch"
 	UnitDegrees  = "decimal degrees"
+	UnitAngle    = "degrees"
 )
 
 // KeySpec is one key of a table.
@@ -66,9 +68,12 @@ type KeySpec struct {
 	Enum     []string // allowed values of a string; nil for free text
 	Bound    Bound    // for numbers
 	Required bool
-	Example  any        // a realistic value; nil for tables
-	Max      float64    // for integers: the largest value accepted (0 = none)
-	Table    *TableSpec // the keys of a TypeTable or TypeTables value
+	// RequiredIf says when an otherwise optional key is required, e.g.
+	// "with dip"; "" when never.
+	RequiredIf string
+	Example    any        // a realistic value; nil for tables
+	Max        float64    // for integers: the largest value accepted (0 = none)
+	Table      *TableSpec // the keys of a TypeTable or TypeTables value
 }
 
 // TableSpec is the keys of one table, in the order the documentation and
@@ -157,7 +162,10 @@ func TOMLValue(t ValueType, v any) string {
 	case []any:
 		parts := make([]string, len(x))
 		for i, e := range x {
-			parts[i] = TOMLValue(TypeString, e)
+			parts[i] = TOMLValue(TypeNumber, e)
+			if s, ok := e.(string); ok {
+				parts[i] = strconv.Quote(s)
+			}
 		}
 		return "[" + strings.Join(parts, ", ") + "]"
 	}

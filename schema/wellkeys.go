@@ -182,6 +182,36 @@ func wellFile() *TableSpec {
 		{Name: "approved_by", Type: TypeString, Required: true, Doc: "Who approved it.", Example: "B. Reviewer, PG"},
 		{Name: "date", Type: TypeDate, Doc: "Date approved.", Example: "2026-03-21"},
 	}}
+	orientation := &TableSpec{Doc: "What every azimuth in the file is measured from; without it, true north.", Keys: []KeySpec{
+		{Name: "north", Type: TypeString, Required: true, Enum: []string{string(TrueNorth), string(MagneticNorth)}, Doc: "true or magnetic north.", Example: "magnetic"},
+		{Name: "declination", Type: TypeNumber, Unit: UnitAngle, Doc: "Magnetic declination, east positive, -90 to 90; required for magnetic, added to a magnetic azimuth to make it true.", Example: 13.5},
+	}}
+	wallImage := &TableSpec{Doc: "An unwrapped image of the open-hole wall.", Keys: joinKeys(
+		[]KeySpec{
+			{Name: "name", Type: TypeString, Doc: "What features name in image; default image-1, image-2...", Example: "optical"},
+			{Name: "file", Type: TypeString, Required: true, Doc: "PNG, JPEG or TIFF, relative to the well file.", Example: "BR-1-wall.png"},
+		},
+		interval("image", false, 40.0, 150.0),
+		[]KeySpec{
+			{Name: "left_azimuth", Type: TypeNumber, Unit: UnitAngle, Doc: "Azimuth at the image's left edge, 0 to 360; default 0.", Example: 0.0},
+			{Name: "direction", Type: TypeString, Enum: []string{"clockwise", "counterclockwise"}, Doc: "clockwise: azimuth grows to the right (default).", Example: "clockwise"},
+		})}
+	feature := &TableSpec{Doc: "A fracture, bedding plane, vein or contact logged on the open-hole wall.", Keys: []KeySpec{
+		{Name: "kind", Type: TypeString, Required: true, Enum: stringsOf(FeatureKinds), Doc: "What the feature is.", Example: "water-bearing-fracture"},
+		{Name: "depth", Type: TypeNumber, Bound: NonNegative, Unit: UnitDepth, RequiredIf: "without picks", Doc: "Depth of the trace's centre; with picks, the fitted trace's mean depth when not given.", Example: 97.0},
+		{Name: "aperture", Type: TypeNumber, Bound: Positive, Unit: UnitDiameter, Doc: "Opening.", Example: 0.1},
+		{Name: "inflow", Type: TypeNumber, Bound: NonNegative, Unit: "volume unit per minute (gpm for gal, L/min for L)", Doc: "Measured inflow.", Example: 4.5},
+		{Name: "confidence", Type: TypeString, Enum: []string{string(HighConfidence), string(MediumConfidence), string(LowConfidence)}, Doc: "How sure the logger is.", Example: "high"},
+		{Name: "note", Type: TypeString, Doc: "Free text.", Example: "iron staining"},
+		{Name: "image", Type: TypeString, Doc: "The [[wall_image]] the picks were made on.", Example: "optical"},
+		{Name: "dip", Type: TypeNumber, Unit: UnitAngle, RequiredIf: "with dip_direction", Doc: "Dip given directly, 0 to 90; with dip_direction.", Example: 35.0},
+		{Name: "dip_direction", Type: TypeNumber, Unit: UnitAngle, RequiredIf: "with dip", Doc: "Dip direction given directly, 0 to 360.", Example: 140.0},
+		{Name: "trace_high", Type: TypeNumber, Bound: NonNegative, Unit: UnitDepth, Doc: "Picks: depth of the trace's highest point.", Example: 96.6},
+		{Name: "trace_low", Type: TypeNumber, Bound: NonNegative, Unit: UnitDepth, Doc: "Picks: depth of the trace's lowest point.", Example: 97.4},
+		{Name: "low_azimuth", Type: TypeNumber, Unit: UnitAngle, Doc: "Picks: azimuth of the lowest point, 0 to 360.", Example: 128.0},
+		{Name: "points", Type: TypeNumberPairs, Doc: "Picks instead of trace_high/trace_low: 3 to 360 [azimuth, depth] pairs along the trace.", Example: []any{[]any{0.0, 96.8}, []any{120.0, 97.3}, []any{240.0, 96.7}}},
+		{Name: "caliper", Type: TypeNumber, Bound: Positive, Unit: UnitDiameter, Doc: "Hole diameter at the feature, overriding the [[borehole]] section's.", Example: 6.0},
+	}}
 	return &TableSpec{Title: "tremie well file", Doc: "One groundwater well as built (or planned): units, construction, lithology, water levels. Depths are below ground surface in the file's depth unit; a height above ground is a negative depth.", Keys: []KeySpec{
 		{Name: "units", Type: TypeTable, Required: true, Doc: units.Doc, Table: units},
 		{Name: "well", Type: TypeTable, Required: true, Doc: well.Doc, Table: well},
@@ -197,5 +227,8 @@ func wellFile() *TableSpec {
 		{Name: "water_level", Type: TypeTables, Doc: water.Doc, Table: water},
 		{Name: "surface", Type: TypeTable, Doc: surface.Doc, Table: surface},
 		{Name: "waiver", Type: TypeTables, Doc: waiver.Doc, Table: waiver},
+		{Name: "orientation", Type: TypeTable, Doc: orientation.Doc, Table: orientation},
+		{Name: "wall_image", Type: TypeTables, Doc: wallImage.Doc, Table: wallImage},
+		{Name: "feature", Type: TypeTables, Doc: feature.Doc, Table: feature},
 	}}
 }

@@ -121,6 +121,9 @@ func property(k *schema.KeySpec) map[string]any {
 		p = map[string]any{"type": []string{"string", "array"}, "items": map[string]any{"type": "string"}}
 	case schema.TypeNumbers:
 		p = map[string]any{"type": "array", "items": map[string]any{"type": "number"}}
+	case schema.TypeNumberPairs:
+		pair := map[string]any{"type": "array", "items": map[string]any{"type": "number"}, "minItems": 2, "maxItems": 2}
+		p = map[string]any{"type": "array", "items": pair}
 	}
 	switch k.Bound {
 	case schema.NonNegative:
@@ -148,6 +151,9 @@ func describe(k *schema.KeySpec) string {
 	}
 	if k.Required {
 		d += " Required."
+	}
+	if k.RequiredIf != "" {
+		d += " Required " + k.RequiredIf + "."
 	}
 	return strings.TrimSpace(d)
 }

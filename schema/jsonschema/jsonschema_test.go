@@ -206,6 +206,8 @@ func wrongValues(k *schema.KeySpec) []string {
 		return []string{"12", "[1, 2]"}
 	case schema.TypeNumbers:
 		return []string{"12.0", `["a"]`}
+	case schema.TypeNumberPairs:
+		return []string{"12.0", `[["a", 1.0], [2.0, 3.0], [4.0, 5.0]]`, "[[1.0], [2.0], [3.0]]"}
 	}
 	return nil
 }
@@ -288,7 +290,7 @@ func loadWell(src string) error { _, err := schema.Load("w.toml", []byte(src)); 
 func consistentWell(t *testing.T) string {
 	src := schema.WellFile.ExampleTOML()
 	for _, drop := range [][2]string{{"string.section", "slot_number"}, {"fill", "volume"}, {"lithology", "rock"},
-		{"casing", "sdr"}, {"casing", "od"}, {"casing", "id"}, {"string.section", "sdr"}, {"string.section", "od"}, {"string.section", "id"}} {
+		{"casing", "sdr"}, {"casing", "od"}, {"casing", "id"}, {"string.section", "sdr"}, {"string.section", "od"}, {"string.section", "id"}, {"feature", "points"}} {
 		src = dropKey(src, drop[0], drop[1])
 	}
 	return dropTable(src, "surface.vault")
