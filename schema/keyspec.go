@@ -74,6 +74,7 @@ type KeySpec struct {
 	Example    any        // a realistic value; nil for tables
 	Max        float64    // for integers: the largest value accepted (0 = none)
 	Table      *TableSpec // the keys of a TypeTable or TypeTables value
+	Alt        *KeySpec   // another form the key may take (a number instead of a table), or nil
 }
 
 // TableSpec is the keys of one table, in the order the documentation and
@@ -82,6 +83,7 @@ type TableSpec struct {
 	Title string // e.g. "well file"
 	Doc   string
 	Keys  []KeySpec
+	Other *KeySpec // the form of keys named by the user (a profile's groups), or nil: no others
 }
 
 // Key returns the spec of key name, or nil when the table has no such key.

@@ -75,6 +75,9 @@ func object(t *schema.TableSpec) map[string]any {
 		"additionalProperties": false,
 		"properties":           props,
 	}
+	if t.Other != nil {
+		o["additionalProperties"] = property(t.Other)
+	}
 	if t.Doc != "" {
 		o["description"] = t.Doc
 	}
@@ -118,7 +121,11 @@ func property(k *schema.KeySpec) map[string]any {
 	case schema.TypeDateTime:
 		p = map[string]any{"type": "string", "pattern": dateTimePattern}
 	case schema.TypeStrings:
-		p = map[string]any{"type": []string{"string", "array"}, "items": map[string]any{"type": "string"}}
+		item := map[string]any{"type": "string"}
+		if len(k.Enum) > 0 {
+			item["enum"] = k.Enum
+		}
+		p = map[string]any{"type": []string{"string", "array"}, "items": item}
 	case schema.TypeNumbers:
 		p = map[string]any{"type": "array", "items": map[string]any{"type": "number"}}
 	case schema.TypeNumberPairs:
@@ -131,6 +138,9 @@ func property(k *schema.KeySpec) map[string]any {
 	case schema.Positive:
 		p["minimum"] = 0
 		p["exclusiveMinimum"] = true // draft-04 form
+	}
+	if k.Alt != nil {
+		p = map[string]any{"anyOf": []any{p, property(k.Alt)}}
 	}
 	p["description"] = describe(k)
 	if k.Unit != "" {
