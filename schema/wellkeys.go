@@ -80,6 +80,7 @@ func wellFile() *TableSpec {
 		{Name: "latitude", Type: TypeNumber, Unit: UnitDegrees, Doc: "Latitude, -90 to 90.", Example: 45.5},
 		{Name: "longitude", Type: TypeNumber, Unit: UnitDegrees, Doc: "Longitude, -180 to 180.", Example: -120.5},
 		{Name: "system", Type: TypeString, Doc: "The coordinates' reference system, as text.", Example: "NAD83 / UTM zone 11N"},
+		{Name: "crs", Type: TypeString, Doc: "The reference system of easting/northing as an EPSG code; latitude/longitude are WGS 84 or the geographic system it names.", Example: "EPSG:32611"},
 	}}
 	elevation := &TableSpec{Doc: "Surveyed elevations above a datum.", Keys: []KeySpec{
 		{Name: "ground", Type: TypeNumber, Unit: UnitDepth, Doc: "Ground-surface elevation.", Example: 412.36},

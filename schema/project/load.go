@@ -14,6 +14,7 @@ import (
 	"github.com/BurntSushi/toml"
 
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/crs"
 )
 
 // ErrNoProject is returned (wrapped) by Load when the directory has no
@@ -31,6 +32,7 @@ type fileData struct {
 		Units            string `toml:"units" enum:"ft,m" doc:"Depth unit of the project-wide tables (summary, book); default the unit all wells share, else m. Each sheet keeps its well file's units." example:"ft"`
 		Datum            string `toml:"datum" doc:"Elevation datum for wells whose [elevation] gives none." example:"NAVD88"`
 		CoordinateSystem string `toml:"coordinate_system" doc:"Reference system for wells whose [location] gives none." example:"NAD83 / UTM zone 11N"`
+		CRS              string `toml:"crs" doc:"EPSG code of the coordinates, for wells whose [location] gives no crs (docs/import.md lists the codes)." example:"EPSG:2227"`
 		Page             string `toml:"page" doc:"Page template of every sheet: letter, tabloid, a4 or a3." example:"letter"`
 		Landscape        bool   `toml:"landscape" doc:"Print sheets in landscape." example:"false"`
 		Profile          string `toml:"profile" doc:"Path of the rule profile (relative to this file); must exist. Default: the rule defaults." example:"site.profile.toml"`
@@ -108,6 +110,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 		Site:             pr.Site,
 		Datum:            pr.Datum,
 		CoordinateSystem: pr.CoordinateSystem,
+		CRS:              pr.CRS,
 		Page:             pr.Page,
 		Landscape:        pr.Landscape,
 		Profile:          pr.Profile,
@@ -121,6 +124,11 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 		p.Units = schema.DepthUnit(pr.Units)
 	default:
 		return nil, bad("project.units", "units must be \"ft\" or \"m\", not %q", pr.Units)
+	}
+	if pr.CRS != "" {
+		if _, err := crs.Parse(pr.CRS); err != nil {
+			return nil, bad("project.crs", "%v", err)
+		}
 	}
 	if md.IsDefined("project", "wells") && strings.TrimSpace(pr.Wells) == "" {
 		return nil, bad("project.wells", "wells must name a directory or a glob, e.g. \"wells\" or \"wells/*.toml\"")
