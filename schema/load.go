@@ -153,6 +153,7 @@ func (r *reader) well(root *table) *Well {
 		w.Strings = append(w.Strings, r.wellString(t, i, w.Units))
 	}
 	r.uniqueNames(w)
+	r.checkLiners(w)
 	for _, t := range root.list("fill") {
 		w.Fills = append(w.Fills, r.fill(t, w))
 	}
@@ -163,11 +164,18 @@ func (r *reader) well(root *table) *Well {
 	for _, t := range root.list("lithology") {
 		w.Lithology = append(w.Lithology, r.layer(t, w.Units))
 	}
+	// before the water levels, which may be measured from it
+	if t := root.sub("measuring_point"); t != nil {
+		w.MeasuringPoint = r.measuringPoint(t, w)
+	}
 	for _, t := range root.list("water_level") {
 		w.WaterLevels = append(w.WaterLevels, r.waterLevel(t, w))
 	}
 	if t := root.sub("surface"); t != nil {
 		w.Surface = r.surface(t, w.Units)
+	}
+	if t := root.sub("pump"); t != nil {
+		w.Pump = r.pump(t, w)
 	}
 	r.features(root, w)
 	for _, t := range root.list("waiver") {
@@ -296,6 +304,7 @@ func (r *reader) casing(t *table, u Units) Casing {
 		r.errAt(t.path, "casing %q: give size with schedule or sdr, or od and id", c.Name)
 	}
 	c.Centralizers = r.depths(t, "centralizers", u)
+	c.DriveShoe = t.boolean("drive_shoe")
 	return c
 }
 
@@ -317,6 +326,7 @@ func (r *reader) wellString(t *table, i int, u Units) String {
 		}
 	}
 	s.Centralizers = r.depths(t, "centralizers", u)
+	s.Liner = r.liner(t)
 	var prev Pipe
 	for _, st := range t.list("section") {
 		sec := r.section(st, u, prev)

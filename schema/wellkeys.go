@@ -97,11 +97,13 @@ func wellFile() *TableSpec {
 	casing := &TableSpec{Doc: "An outer casing (surface, conductor, intermediate) the well strings run inside or below.", Keys: joinKeys(
 		[]KeySpec{
 			{Name: "name", Type: TypeString, Doc: "Name a fill's within refers to; default the kind.", Example: "surface"},
-			{Name: "kind", Type: TypeString, Enum: []string{string(SurfaceCasing), string(ConductorCasing), string(IntermediateCasing)}, Doc: "The casing's role; default surface.", Example: "surface"},
+			{Name: "kind", Type: TypeString, Enum: []string{string(SurfaceCasing), string(ConductorCasing), string(IntermediateCasing), string(ProductionCasing)}, Doc: "The casing's role; default surface.", Example: "surface"},
 		},
 		interval("casing", true, -2.0, 20.0),
 		pipeKeys(),
-		[]KeySpec{centralizers()})}
+		[]KeySpec{centralizers(),
+			{Name: "drive_shoe", Type: TypeBool, Doc: "true for a driven casing with a shoe on its bottom.", Example: false},
+		})}
 	section := &TableSpec{Doc: "One length of a well string, top down: riser, screen or sump.", Keys: joinKeys(
 		[]KeySpec{{Name: "kind", Type: TypeString, Required: true, Enum: []string{string(RiserSection), string(ScreenSection), string(SumpSection)}, Doc: "riser, screen or sump (sump, tail pipe or silt trap).", Example: "screen"}},
 		interval("section", true, 25.0, 35.0),
@@ -116,6 +118,10 @@ func wellFile() *TableSpec {
 		{Name: "top_cap", Type: TypeString, Doc: "Cap at the top of the riser.", Example: "locking expansion plug"},
 		{Name: "bottom_cap", Type: TypeString, Doc: "Cap at the bottom of the string.", Example: "threaded end plug"},
 		centralizers(),
+		{Name: "hung_in", Type: TypeString, Doc: "A liner: the name of the [[casing]] it hangs inside; its top lies within that casing.", Example: "production"},
+		{Name: "hanger", Type: TypeString, Enum: []string{string(Packer), string(Hanger)}, RequiredIf: "for a liner", Doc: "Liners: packer (holds the liner and seals the lap) or hanger (holds it, no seal).", Example: "packer"},
+		{Name: "hanger_product", Type: TypeString, Doc: "Liners: the packer's or hanger's make or description.", Example: "mechanical packer"},
+		{Name: "lap_seal", Type: TypeString, Enum: stringsOf(Materials), Doc: "Liners: the sealing material in the lap annulus, a seal or grout fill material.", Example: "neat-cement"},
 		{Name: "section", Type: TypeTables, Required: true, Doc: "The string's lengths, top down.", Table: section},
 	}}
 	tag := &TableSpec{Doc: "A weighted-tape tag of the top of the fill while it was placed.", Keys: []KeySpec{
@@ -177,6 +183,15 @@ func wellFile() *TableSpec {
 		{Name: "vault", Type: TypeTable, Doc: "Flush-mount: the vault.", Table: vault},
 		{Name: "pad", Type: TypeTable, Doc: "The concrete pad.", Table: pad},
 	}}
+	measuringPoint := &TableSpec{Doc: "The point water levels refer to; give pipe or height. Default: the highest top of the strings that reach the surface.", Keys: []KeySpec{
+		{Name: "pipe", Type: TypeString, Doc: "The name of the casing or string whose top is the measuring point.", Example: "MW-3"},
+		{Name: "height", Type: TypeNumber, Unit: UnitDepth, Doc: "Instead of pipe: the measuring point's height above ground (negative below).", Example: 2.5},
+		{Name: "description", Type: TypeString, Doc: "How the sheet names it.", Example: "top of riser, north side"},
+	}}
+	pump := &TableSpec{Doc: "The pump of a supply well.", Keys: []KeySpec{
+		{Name: "intake", Type: TypeNumber, Required: true, Bound: Positive, Unit: UnitDepth, Doc: "Depth of the pump intake (pump setting) below ground.", Example: 30.0},
+		{Name: "description", Type: TypeString, Doc: "The pump.", Example: "submersible, set on 2-in column"},
+	}}
 	waiver := &TableSpec{Doc: "A finding accepted by a named person: still reported, as waived, but no longer failing the check.", Keys: []KeySpec{
 		{Name: "rule", Type: TypeString, Required: true, Doc: "The rule ID waived (tremie rules lists them).", Example: "PACK-ABOVE-MAX"},
 		{Name: "reason", Type: TypeString, Required: true, Doc: "Why.", Example: "approved by the regulator on site"},
@@ -226,6 +241,8 @@ func wellFile() *TableSpec {
 		{Name: "open_hole", Type: TypeTables, Doc: openHole.Doc, Table: openHole},
 		{Name: "lithology", Type: TypeTables, Doc: layer.Doc, Table: layer},
 		{Name: "water_level", Type: TypeTables, Doc: water.Doc, Table: water},
+		{Name: "measuring_point", Type: TypeTable, Doc: measuringPoint.Doc, Table: measuringPoint},
+		{Name: "pump", Type: TypeTable, Doc: pump.Doc, Table: pump},
 		{Name: "surface", Type: TypeTable, Doc: surface.Doc, Table: surface},
 		{Name: "waiver", Type: TypeTables, Doc: waiver.Doc, Table: waiver},
 		{Name: "orientation", Type: TypeTable, Doc: orientation.Doc, Table: orientation},

@@ -290,7 +290,8 @@ func loadWell(src string) error { _, err := schema.Load("w.toml", []byte(src)); 
 func consistentWell(t *testing.T) string {
 	src := schema.WellFile.ExampleTOML()
 	for _, drop := range [][2]string{{"string.section", "slot_number"}, {"fill", "volume"}, {"lithology", "rock"},
-		{"casing", "sdr"}, {"casing", "od"}, {"casing", "id"}, {"string.section", "sdr"}, {"string.section", "od"}, {"string.section", "id"}, {"feature", "points"}} {
+		{"casing", "sdr"}, {"casing", "od"}, {"casing", "id"}, {"string.section", "sdr"}, {"string.section", "od"}, {"string.section", "id"}, {"feature", "points"},
+		{"string", "hung_in"}, {"string", "hanger"}, {"string", "hanger_product"}, {"string", "lap_seal"}, {"measuring_point", "height"}} {
 		src = dropKey(src, drop[0], drop[1])
 	}
 	return dropTable(src, "surface.vault")
