@@ -31,7 +31,11 @@ func specOfType(t reflect.Type) *TableSpec {
 		if e := f.Tag.Get("enum"); e != "" {
 			k.Enum = strings.Split(e, ",")
 		}
-		switch f.Type.Kind() {
+		ft := f.Type
+		if ft.Kind() == reflect.Pointer {
+			ft = ft.Elem() // an optional value
+		}
+		switch ft.Kind() {
 		case reflect.String:
 			k.Type = TypeString
 		case reflect.Bool:
@@ -42,8 +46,23 @@ func specOfType(t reflect.Type) *TableSpec {
 			k.Type = TypeInteger
 		case reflect.Struct:
 			k.Type = TypeTable
-			k.Table = specOfType(f.Type)
+			k.Table = specOfType(ft)
 			k.Table.Doc = k.Doc
+		case reflect.Slice:
+			switch el := ft.Elem(); {
+			case el.Kind() == reflect.Struct:
+				k.Type = TypeTables
+				k.Table = specOfType(el)
+				k.Table.Doc = k.Doc
+			case el.Kind() == reflect.String:
+				k.Type = TypeStrings
+			case el.Kind() == reflect.Float64:
+				k.Type = TypeNumbers
+			case el.Kind() == reflect.Array && el.Len() == 2 && el.Elem().Kind() == reflect.Float64:
+				k.Type = TypeNumberPairs
+			default:
+				panic(fmt.Sprintf("schema.SpecOf: field %s has unsupported type %s", f.Name, f.Type))
+			}
 		case reflect.Interface:
 			if f.Tag.Get("type") != "date" {
 				panic(fmt.Sprintf("schema.SpecOf: field %s of type any needs type:\"date\"", f.Name)) // a programming error, caught by every test
@@ -70,6 +89,23 @@ func exampleOf(t ValueType, s string) any {
 	case TypeInteger:
 		n, _ := strconv.Atoi(s)
 		return n
+	case TypeStrings: // "a,b"
+		var out []any
+		for _, e := range strings.Split(s, ",") {
+			out = append(out, e)
+		}
+		return out
+	case TypeNumberPairs: // "x y;x y"
+		var out []any
+		for _, pair := range strings.Split(s, ";") {
+			var p []any
+			for _, f := range strings.Fields(pair) {
+				v, _ := strconv.ParseFloat(f, 64)
+				p = append(p, v)
+			}
+			out = append(out, p)
+		}
+		return out
 	}
 	return s
 }

@@ -51,6 +51,7 @@ type fileData struct {
 		Revision   string `toml:"revision" doc:"Title block: revision." example:"0"`
 		Issued     any    `toml:"issued" type:"date" doc:"Title block: issue date of the set of sheets, a TOML date without quotes." example:"2026-06-15"`
 	} `toml:"project" required:"true" doc:"The project's settings and title-block fields."`
+	Section []sectionData `toml:"section" doc:"A cross-section that tremie section draws and tremie book binds."`
 }
 
 // File is the key table of a project file, made from fileData.
@@ -88,7 +89,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 		k := und[0].String()
 		msg := fmt.Sprintf("unknown key %q", k)
 		if len(und[0]) == 1 {
-			msg = fmt.Sprintf("unknown table or key %q (a project file has only a [project] table)", k)
+			msg = fmt.Sprintf("unknown table or key %q (a project file has a [project] table and [[section]] tables)", k)
 		}
 		return nil, &schema.Error{File: file, Line: lines[k], Key: k, Msg: msg}
 	}
@@ -170,6 +171,9 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 			return nil, bad("project.issued", "issued must be a date such as 2026-03-14, without quotes")
 		}
 		p.TitleBlock.Issued = schema.Date{Year: t.Year(), Month: t.Month(), Day: t.Day()}
+	}
+	if p.Sections, err = sections(file, lines, fd.Section, p.Units); err != nil {
+		return nil, err
 	}
 	if pr.Logo != "" {
 		logo, err := LoadLogo(p.Path(pr.Logo))
