@@ -151,6 +151,7 @@ func wellFile() *TableSpec {
 			{Name: "uscs", Type: TypeString, Doc: "ASTM D2487 group symbol (GW, GP, GM, GC, SW, SP, SM, SC, ML, CL, OL, MH, CH, OH, PT, or a dual symbol such as SP-SM).", Example: "SP"},
 			{Name: "rock", Type: TypeString, Doc: "Instead of uscs: a rock type, e.g. granite, sandstone, weathered shale.", Example: "sandstone"},
 			{Name: "description", Type: TypeString, Doc: "The log's description of the layer.", Example: "Poorly graded SAND, fine to medium, grey-brown, wet"},
+			{Name: "weathering", Type: TypeString, Doc: "With rock: the weathering grade after ISRM (1981) and BS 5930: fresh (I), slightly-weathered (II), moderately-weathered (III), highly-weathered (IV), completely-weathered (V), residual-soil (VI); the Roman numeral is accepted.", Example: "slightly-weathered"},
 			{Name: "unit", Type: TypeString, Doc: "The hydrostratigraphic unit the layer belongs to, a name of your own; cross-sections join a unit between neighbouring wells.", Example: "upper aquifer"},
 		})}
 	water := &TableSpec{Doc: "A water level.", Keys: []KeySpec{

@@ -289,7 +289,7 @@ func loadWell(src string) error { _, err := schema.Load("w.toml", []byte(src)); 
 // each pair of alternatives.
 func consistentWell(t *testing.T) string {
 	src := schema.WellFile.ExampleTOML()
-	for _, drop := range [][2]string{{"string.section", "slot_number"}, {"fill", "volume"}, {"lithology", "rock"},
+	for _, drop := range [][2]string{{"string.section", "slot_number"}, {"fill", "volume"}, {"lithology", "uscs"},
 		{"casing", "sdr"}, {"casing", "od"}, {"casing", "id"}, {"string.section", "sdr"}, {"string.section", "od"}, {"string.section", "id"}, {"feature", "points"},
 		{"string", "hung_in"}, {"string", "hanger"}, {"string", "hanger_product"}, {"string", "lap_seal"}, {"measuring_point", "height"}} {
 		src = dropKey(src, drop[0], drop[1])
