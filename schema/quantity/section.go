@@ -14,8 +14,12 @@ type Pipe struct {
 	Name   string // casing name, or "string name kind" for a section
 	Path   string // key path in the well, e.g. "casing[0]", "string[1].section[2]"
 	Casing bool   // an outer casing (a fill may be placed within it)
-	OD     schema.Diameter
-	ID     schema.Diameter
+	// Surface marks a part of the surface completion standing in the hole
+	// (the flush-mount vault, the stick-up protective casing): it takes
+	// its footprint from the annulus, and pipes inside it do not.
+	Surface bool
+	OD      schema.Diameter
+	ID      schema.Diameter
 	// In is the index in CrossSection.Pipes of the casing this pipe runs
 	// inside, or -1 when it stands in the borehole itself.
 	In int
@@ -43,6 +47,7 @@ func At(w *schema.Well, z schema.Length) CrossSection {
 			cs.Pipes = append(cs.Pipes, Pipe{Name: c.Label(), Path: casingPath(c, i), Casing: true, OD: c.Pipe.OD, ID: c.Pipe.ID, In: -1})
 		}
 	}
+	cs.Pipes = append(cs.Pipes, surfaceParts(w, z)...)
 	// Outermost casing first, so that each casing's container is found
 	// among those before it.
 	sortByODDesc(cs.Pipes)
@@ -135,10 +140,58 @@ func (cs CrossSection) Area(r Region) (float64, error) {
 		area -= circle(p.OD)
 		inside = append(inside, p.Name)
 	}
+	if area < -1e-12 && surfaceWider(cs.Pipes, in, outer) {
+		// a vault or protective casing wider than the hole stands in its
+		// own excavation: no annulus is left beside it (the pad fills it)
+		return 0, nil
+	}
 	if area < -1e-12 {
 		return 0, fmt.Errorf("the pipes in %s (%s) take more than its %s bore", what, strings.Join(inside, ", "), cs.units.FormatDiameter(outer))
 	}
 	return math.Max(area, 0), nil
+}
+
+// The surface parts' names, as fills may name them in "within".
+const (
+	VaultName      = "vault"
+	ProtectiveName = "protective casing"
+)
+
+// surfaceParts are the vault and the protective casing where they stand
+// below ground at depth z, as thin-walled pipes (the file gives one
+// diameter): the riser inside them takes nothing more from the annulus.
+func surfaceParts(w *schema.Well, z schema.Length) []Pipe {
+	var out []Pipe
+	if v := w.Surface.Vault; v != nil && v.Diameter > 0 && 0 <= z && z < v.Depth {
+		out = append(out, Pipe{Name: VaultName, Path: "surface.vault", Casing: true, Surface: true, OD: v.Diameter, ID: v.Diameter, In: -1})
+	}
+	if pc := w.Surface.Protective; pc != nil && pc.Diameter > 0 && pc.Top <= z && z < pc.Bottom {
+		out = append(out, Pipe{Name: ProtectiveName, Path: "surface.protective", Casing: true, Surface: true, OD: pc.Diameter, ID: pc.Diameter, In: -1})
+	}
+	return out
+}
+
+// surfaceIntervals are the depth ranges of the surface parts below ground.
+func surfaceIntervals(w *schema.Well) []schema.Interval {
+	var out []schema.Interval
+	if v := w.Surface.Vault; v != nil && v.Diameter > 0 && v.Depth > 0 {
+		out = append(out, schema.Interval{Top: 0, Bottom: v.Depth})
+	}
+	if pc := w.Surface.Protective; pc != nil && pc.Diameter > 0 && pc.Bottom > 0 {
+		out = append(out, schema.Interval{Top: max(pc.Top, 0), Bottom: pc.Bottom})
+	}
+	return out
+}
+
+// surfaceWider reports whether a surface part standing directly in the
+// region is at least as wide as the region's bore.
+func surfaceWider(ps []Pipe, in int, bore schema.Diameter) bool {
+	for _, p := range ps {
+		if p.Surface && p.In == in && p.OD >= bore {
+			return true
+		}
+	}
+	return false
 }
 
 // circle is the area in square metres of a circle of diameter d.

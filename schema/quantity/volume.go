@@ -21,13 +21,17 @@ func (s Slice) Volume() schema.Volume { return schema.Volume(s.Area * float64(s.
 // sorted and without repeats.
 func boundaries(w *schema.Well, top, bottom schema.Length) []schema.Length {
 	zs := []schema.Length{top, bottom}
-	w.EachGeometryInterval(func(iv schema.Interval) {
+	add := func(iv schema.Interval) {
 		for _, z := range []schema.Length{iv.Top, iv.Bottom} {
 			if z > top && z < bottom {
 				zs = append(zs, z)
 			}
 		}
-	})
+	}
+	w.EachGeometryInterval(add)
+	for _, iv := range surfaceIntervals(w) {
+		add(iv)
+	}
 	sort.Slice(zs, func(i, j int) bool { return zs[i] < zs[j] })
 	out := zs[:1]
 	for _, z := range zs[1:] {
