@@ -168,6 +168,7 @@ func (r *reader) well(root *table) *Well {
 	if t := root.sub("surface"); t != nil {
 		w.Surface = r.surface(t, w.Units)
 	}
+	r.features(root, w)
 	for _, t := range root.list("waiver") {
 		wv := Waiver{Rule: t.reqStr("rule"), Reason: t.reqStr("reason"), ApprovedBy: t.reqStr("approved_by"), Date: t.date("date"), Pos: r.at(t.path)}
 		t.done()

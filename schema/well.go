@@ -50,6 +50,12 @@ type Well struct {
 	Surface     Surface
 	Waivers     []Waiver
 
+	// Open-hole wall features and the images they were picked on
+	// (feature.go); Orientation is their azimuth reference.
+	Orientation Orientation
+	WallImages  []WallImage
+	Features    []Feature // as written
+
 	// keys locates key paths in the file text; see Line and HasKey.
 	keys *keyIndex
 }

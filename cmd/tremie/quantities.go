@@ -107,7 +107,7 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 		}
 		project.Apply(in.projects[f], w)
 		// the checks of placed amounts and tags, with the same yields
-		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields), Findings: rules.CheckReconcile(w, prof, yields)}
+		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields), Findings: rules.Run(w, rules.Select(rules.Reconciling), withYields(prof, yields))}
 		for _, r := range wq.Report.Rows {
 			if r.Err != nil {
 				fmt.Fprintf(stderr, "%s:%d: %v\n", f, w.Line(r.Fill.Path), r.Err)

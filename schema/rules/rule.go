@@ -38,7 +38,11 @@ type Rule struct {
 	Severity Severity // default severity
 	Source   string   // where its threshold or requirement comes from
 	Params   []Param  // thresholds a profile may set
-	Run      func(*Pass)
+	// Reconcile marks a rule that compares what was placed (amounts,
+	// tags) with the calculated quantities: the quantities report runs
+	// these rules alone, with the project's yields.
+	Reconcile bool
+	Run       func(*Pass)
 }
 
 // ParamKind says how a parameter is written in a profile.
@@ -61,41 +65,6 @@ type Param struct {
 	Doc       string
 	Source    string
 }
-
-// Finding is one thing a rule found in a well.
-type Finding struct {
-	Rule     string          `json:"rule"`
-	Severity Severity        `json:"-"`
-	Level    string          `json:"severity"` // "error" or "warning", from Severity
-	Waived   bool            `json:"waived"`
-	Waiver   *Waiver         `json:"waiver,omitempty"`
-	File     string          `json:"file"`
-	Line     int             `json:"line"`
-	WellID   string          `json:"well"`
-	Message  string          `json:"message"`
-	Top      *float64        `json:"top,omitempty"`    // depth named, in file units
-	Bottom   *float64        `json:"bottom,omitempty"` // depth named, in file units
-	Unit     string          `json:"unit,omitempty"`
-	Depths   []schema.Length `json:"-"`
-}
-
-// Waiver is the waiver that covers a finding.
-type Waiver struct {
-	Reason     string `json:"reason"`
-	ApprovedBy string `json:"approved_by"`
-	Date       string `json:"date,omitempty"`
-}
-
-// Label is "error", "warning" or "waived", as the check prints it.
-func (f Finding) Label() string {
-	if f.Waived {
-		return "waived"
-	}
-	return f.Severity.String()
-}
-
-// Blocking reports whether the finding is an error that no waiver covers.
-func (f Finding) Blocking() bool { return f.Severity == Error && !f.Waived }
 
 // Pass is what a rule's Run receives: the well, the thresholds in force and
 // a way to report.
@@ -134,19 +103,13 @@ func (p *Pass) ReportSeverity(sev Severity, path string, depths []schema.Length,
 	f := Finding{
 		Rule:     p.Rule.ID,
 		Severity: sev,
-		Level:    sev.String(),
 		File:     p.Well.Pos.File,
 		Line:     p.Well.Line(path),
+		Path:     path,
 		WellID:   p.Well.ID,
 		Message:  fmt.Sprintf(format, args...),
 		Depths:   depths,
-		Unit:     string(p.Well.Units.Depth),
-	}
-	if len(depths) > 0 {
-		t := depths[0].In(p.Well.Units.Depth)
-		f.Top = &t
-		b := depths[len(depths)-1].In(p.Well.Units.Depth)
-		f.Bottom = &b
+		Units:    p.Well.Units.Depth,
 	}
 	*p.out = append(*p.out, f)
 }
@@ -193,85 +156,4 @@ func Lookup(id string) (*Rule, bool) {
 		}
 	}
 	return nil, false
-}
-
-// Check runs every rule on a well with a profile (nil for the defaults),
-// applies the well's waivers and returns the findings sorted by line, then
-// rule. A panic in one rule is turned into an error finding for it, so that
-// no input stops the check.
-func Check(w *schema.Well, prof *Profile) []Finding {
-	if prof == nil {
-		prof = DefaultProfile()
-	}
-	var out []Finding
-	sh := &shared{yields: prof.Yields}
-	for _, r := range sortedRules() {
-		runOne(r, w, prof, sh, &out)
-	}
-	applyWaivers(w, out)
-	sort.SliceStable(out, func(i, j int) bool {
-		if out[i].File != out[j].File {
-			return out[i].File < out[j].File
-		}
-		if out[i].Line != out[j].Line {
-			return out[i].Line < out[j].Line
-		}
-		return out[i].Rule < out[j].Rule
-	})
-	return out
-}
-
-func runOne(r *Rule, w *schema.Well, prof *Profile, sh *shared, out *[]Finding) {
-	defer func() {
-		if e := recover(); e != nil {
-			*out = append(*out, Finding{Rule: r.ID, Severity: Error, Level: "error", File: w.Pos.File, Line: 1, WellID: w.ID,
-				Message: fmt.Sprintf("internal error in rule %s: %v (please report)", r.ID, e)})
-		}
-	}()
-	r.Run(&Pass{Well: w, Rule: r, profile: prof, out: out, shared: sh})
-}
-
-func applyWaivers(w *schema.Well, fs []Finding) {
-	for i := range fs {
-		for _, wv := range w.Waivers {
-			if wv.Rule == fs[i].Rule {
-				fs[i].Waived = true
-				fs[i].Waiver = &Waiver{Reason: wv.Reason, ApprovedBy: wv.ApprovedBy, Date: wv.Date.String()}
-				break
-			}
-		}
-	}
-}
-
-// Blocking reports whether any finding is an unwaived error.
-func Blocking(fs []Finding) bool {
-	for _, f := range fs {
-		if f.Blocking() {
-			return true
-		}
-	}
-	return false
-}
-
-// Tally is how many findings of each kind a check reports.
-type Tally struct {
-	Errors   int // unwaived errors
-	Warnings int // unwaived warnings
-	Waived   int // findings a waiver covers, whatever their severity
-}
-
-// Count tallies findings the way every report prints them.
-func Count(fs []Finding) Tally {
-	var t Tally
-	for _, f := range fs {
-		switch {
-		case f.Waived:
-			t.Waived++
-		case f.Severity == Error:
-			t.Errors++
-		default:
-			t.Warnings++
-		}
-	}
-	return t
 }
