@@ -57,6 +57,9 @@ func runOne(r *Rule, w *schema.Well, prof *Profile, sh *shared, out *[]Finding) 
 				Message: fmt.Sprintf("internal error in rule %s: %v (please report)", r.ID, e)})
 		}
 	}()
+	if !prof.applies(r, w.Purpose) {
+		return
+	}
 	r.Run(&Pass{Well: w, Rule: r, profile: prof, out: out, shared: sh})
 }
 

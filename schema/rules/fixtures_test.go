@@ -182,8 +182,13 @@ func TestRulesDocumented(t *testing.T) {
 			if p.Doc == "" || p.Source == "" {
 				t.Errorf("rule %s: parameter %s lacks a doc or source", r.ID, p.Name)
 			}
-			if p.Default <= 0 {
+			if _, ok := r.param(p.Fallback); p.Default <= 0 && len(p.ByPurpose) < len(schema.Purposes) && !ok {
 				t.Errorf("rule %s: parameter %s has no default", r.ID, p.Name)
+			}
+			for _, d := range p.ByPurpose {
+				if d.Source == "" || d.Default <= 0 || len(d.Purposes) == 0 {
+					t.Errorf("rule %s: parameter %s has a purpose default without purposes, value or source", r.ID, p.Name)
+				}
 			}
 			if p.Kind == RatioParam && p.DefaultFt != 0 {
 				t.Errorf("rule %s: ratio parameter %s cannot have a feet default", r.ID, p.Name)

@@ -43,6 +43,9 @@ type Rule struct {
 	// these rules alone, with the project's yields.
 	Reconcile bool
 	Run       func(*Pass)
+	// Purposes are the well purposes the rule applies to by default; nil
+	// for every well. A well whose purpose is not given is always checked.
+	Purposes []schema.Purpose
 }
 
 // ParamKind says how a parameter is written in a profile.
@@ -64,6 +67,9 @@ type Param struct {
 	DefaultFt float64 // imperial default in feet or inches; 0 = convert Default
 	Doc       string
 	Source    string
+	ByPurpose []PurposeDefault // defaults for some purposes, each with its source
+	Fraction  bool             // a RatioParam from 0 to 1
+	Fallback  string           // with Default 0: where no value applies, that of this other parameter
 }
 
 // Pass is what a rule's Run receives: the well, the thresholds in force and
@@ -79,7 +85,7 @@ type Pass struct {
 // Param returns the value of the rule's named parameter in model units,
 // from the profile or the default.
 func (p *Pass) Param(name string) float64 {
-	return p.profile.value(p.Rule, name, p.Well.Units)
+	return p.profile.valueFor(p.Rule, name, p.Well.Units, p.Well.Purpose)
 }
 
 // Length returns a length parameter.
@@ -91,7 +97,7 @@ func (p *Pass) Profile() *Profile { return p.profile }
 // Reportf records a finding at a key path of the well (e.g. "fill[2].top")
 // naming the depths it concerns.
 func (p *Pass) Reportf(path string, depths []schema.Length, format string, args ...any) {
-	p.ReportSeverity(p.profile.severity(p.Rule), path, depths, format, args...)
+	p.ReportSeverity(p.profile.severityFor(p.Rule, p.Well.Purpose), path, depths, format, args...)
 }
 
 // ReportSeverity is Reportf with an explicit severity, for rules that warn
