@@ -12,6 +12,7 @@ import (
 	"github.com/tremie-dev/tremie/render/sheet"
 	"github.com/tremie-dev/tremie/render/table"
 	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
 )
 
 func init() {
@@ -61,7 +62,7 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 			return bw, batch.Skipped, nil
 		}
 		bw.ID = e.Well.ID
-		in := sheet.Inputs{Findings: e.Findings, Quantities: quantity.Compute(e.Well, pw.yields), TitleBlock: p.TitleBlock, Logo: logo}
+		in := sheet.Inputs{Findings: e.Findings, Quantities: quantity.Compute(e.Well, pw.yields), TitleBlock: p.TitleBlock, Logo: logo, Profile: pw.prof}
 		doc, err := sheet.Layout(e.Well, in, sheet.Options{Page: page, Date: date.Format("2006-01-02T15:04:05Z07:00")})
 		if err != nil {
 			bw.Problem = err.Error()
@@ -90,7 +91,7 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 	}
 	pdf, err := book.Build(book.Input{
 		Project: p, Date: date, Table: table.Build(pw.entries, p.Units), Wells: wells,
-		PageWidth: w, PageHeight: h, Caution: sheet.Caution,
+		PageWidth: w, PageHeight: h, Caution: rules.Caution(pw.prof),
 	})
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie book: %v\n", err)

@@ -249,7 +249,11 @@ func writeCheckText(w io.Writer, results []fileResult, prof *rules.Profile) erro
 	if bad > 0 {
 		fmt.Fprintf(&b, "; %s could not be read", checkCount(bad, "file"))
 	}
-	b.WriteString("\n" + checkCaution + "\n")
+	caution := checkCaution
+	if !prof.IsDefault() {
+		caution = rules.Caution(prof) // names the profile, not "defaults"
+	}
+	b.WriteString("\n" + caution + "\n")
 	_, err := io.WriteString(w, b.String())
 	return err
 }

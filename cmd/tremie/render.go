@@ -99,7 +99,7 @@ func renderLoaded(path string, w *schema.Well, opts renderOptions) (renderResult
 		res.Refused = true
 		return res, nil
 	}
-	in := sheet.Inputs{Findings: res.Findings, Quantities: quantity.Compute(w, opts.yields)}
+	in := sheet.Inputs{Findings: res.Findings, Quantities: quantity.Compute(w, opts.yields), Profile: opts.profile}
 	name, landscape := opts.pageName, opts.landscape
 	if prj != nil {
 		in.TitleBlock = prj.TitleBlock
