@@ -420,8 +420,9 @@ type OpenHole struct {
 // Layer is one lithology interval.
 type Layer struct {
 	Interval
-	USCS        string // ASTM D2487 group symbol, e.g. "SP-SM"; "" for rock
-	Rock        string // rock type, e.g. "granite"; "" for soil
+	USCS        string     // ASTM D2487 group symbol, e.g. "SP-SM"; "" for rock
+	Rock        string     // rock type, e.g. "granite"; "" for soil
+	Weathering  Weathering // grade of the rock, ISRM 1981 / BS 5930; "" if not given
 	Description string
 	// Unit is the hydrostratigraphic unit the interval belongs to, a name
 	// of the user's ("upper aquifer"); cross-sections join a unit's top
