@@ -8,6 +8,7 @@ import (
 
 	"github.com/tremie-dev/tremie/cmd/internal/batch"
 	"github.com/tremie-dev/tremie/render/book"
+	"github.com/tremie-dev/tremie/render/features"
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/sheet"
 	"github.com/tremie-dev/tremie/render/table"
@@ -68,6 +69,11 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 			bw.Problem = err.Error()
 			return bw, batch.Done, err
 		}
+		// The well's feature summary follows its sheets.
+		pgW, pgH := portrait(page)
+		if fs := features.WellSummary(p.Key(e.File), e.Well, pgW, pgH, doc.Date); fs != nil {
+			doc.Pages = append(doc.Pages, fs.Pages...)
+		}
 		if bw.Sheets, err = out.PDF(doc); err != nil {
 			bw.Problem = err.Error()
 			return bw, batch.Done, err
@@ -85,12 +91,20 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 			code = worse(code, exitInput)
 		}
 	}
-	w, h := page.Width, page.Height
-	if w > h {
-		w, h = h, w
+	w, h := portrait(page)
+	if bw, err := projectFeatures(pw, w, h, date.Format("2006-01-02T15:04:05Z07:00")); err != nil {
+		fmt.Fprintf(stderr, "tremie book: project feature summary: %v\n", err)
+		code = worse(code, exitOutput)
+	} else if bw != nil {
+		wells = append(wells, *bw)
+	}
+	secs, err := bookSections(pw, date.Format("2006-01-02T15:04:05Z07:00"))
+	if err != nil {
+		fmt.Fprintf(stderr, "%s: %v\n", p.File, err)
+		code = worse(code, exitInput)
 	}
 	pdf, err := book.Build(book.Input{
-		Project: p, Date: date, Table: table.Build(pw.entries, p.Units), Wells: wells,
+		Project: p, Date: date, Table: table.Build(pw.entries, p.Units), Wells: wells, Sections: secs,
 		PageWidth: w, PageHeight: h, Caution: rules.Caution(pw.prof),
 	})
 	if err != nil {
@@ -106,4 +120,32 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 	}
 	fmt.Fprintf(stdout, "tremie book: %d wells bound into %s\n", len(wells), *outFile)
 	return code
+}
+
+// portrait is the page's portrait size, for pages that are not sheets.
+func portrait(p sheet.Page) (w, h float64) {
+	if p.Width > p.Height {
+		return p.Height, p.Width
+	}
+	return p.Width, p.Height
+}
+
+// projectFeatures is the project's feature summary as a book entry after
+// the wells, or nil when fewer than two wells have features.
+func projectFeatures(pw *projectWells, w, h float64, date string) (*book.Well, error) {
+	var rows []features.Row
+	for _, e := range pw.entries {
+		if e.Well != nil {
+			rows = append(rows, features.Rows(pw.proj.Key(e.File), e.Well)...)
+		}
+	}
+	doc := features.ProjectSummary(pw.proj.Name, pw.proj.Site, rows, w, h, date)
+	if doc == nil {
+		return nil, nil
+	}
+	pdf, err := out.PDF(doc)
+	if err != nil {
+		return nil, err
+	}
+	return &book.Well{ID: "Wall features, all wells", File: "project", Sheets: pdf}, nil
 }

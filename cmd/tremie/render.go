@@ -13,6 +13,7 @@ import (
 	"time"
 
 	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/features"
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/sheet"
 	"github.com/tremie-dev/tremie/schema"
@@ -143,7 +144,39 @@ func renderLoaded(path string, w *schema.Well, opts renderOptions) (renderResult
 			removeStaleSheets(opts.outDir, base, f, len(files))
 		}
 	}
-	return res, nil
+	outs, err := writeFeatureSummary(path, w, page, opts, base)
+	res.Outputs = append(res.Outputs, outs...)
+	return res, err
+}
+
+// writeFeatureSummary writes the well's feature summary beside its
+// sheets as BASE-features.EXT (one PNG or SVG per page, -pageN), when it
+// has features.
+func writeFeatureSummary(path string, w *schema.Well, page sheet.Page, opts renderOptions, base string) ([]string, error) {
+	pw, ph := portrait(page)
+	doc := features.WellSummary(path, w, pw, ph, opts.date)
+	if doc == nil {
+		return nil, nil
+	}
+	var outs []string
+	for _, f := range opts.formats {
+		files, err := encode(doc, f, opts.dpi)
+		if err != nil {
+			return outs, outputErr(fmt.Errorf("%s: feature summary: %w", path, err))
+		}
+		for i, data := range files {
+			name := base + "-features." + f
+			if len(files) > 1 {
+				name = fmt.Sprintf("%s-features-page%d.%s", base, i+1, f)
+			}
+			dst := filepath.Join(opts.outDir, name)
+			if err := out.WriteFileAtomic(dst, data); err != nil {
+				return outs, outputErr(err)
+			}
+			outs = append(outs, dst)
+		}
+	}
+	return outs, nil
 }
 
 // removeStaleSheets deletes this well's sheet files left by an earlier
