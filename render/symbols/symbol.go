@@ -91,8 +91,12 @@ func frame(r draw.Rect) draw.Item {
 // outside it can be seen.
 var drawable = draw.Rect{X: -1000, Y: -1000, W: 6000, H: 6000}
 
-// within is the part of r inside b.
+// within is the part of r inside b; r itself, to the bit, when it lies
+// inside already.
 func within(r, b draw.Rect) draw.Rect {
+	if r.X >= b.X && r.Y >= b.Y && r.Right() <= b.Right() && r.Bottom() <= b.Bottom() {
+		return r
+	}
 	x0, y0 := math.Max(r.X, b.X), math.Max(r.Y, b.Y)
 	x1, y1 := math.Min(r.Right(), b.Right()), math.Min(r.Bottom(), b.Bottom())
 	return draw.Rect{X: x0, Y: y0, W: x1 - x0, H: y1 - y0}
