@@ -105,6 +105,20 @@ type importer struct {
 	byID  map[string]*wellRows
 	order []*wellRows
 	errs  []error
+	// failed remembers the keys whose cells were already reported, by the
+	// cell heading their table, so the loader's "missing required key"
+	// for them is not said twice.
+	failed map[Cell]map[string]bool
+}
+
+func (im *importer) fail(head Cell, key string) {
+	if im.failed == nil {
+		im.failed = map[Cell]map[string]bool{}
+	}
+	if im.failed[head] == nil {
+		im.failed[head] = map[string]bool{}
+	}
+	im.failed[head][key] = true
 }
 
 func (im *importer) errAt(c Cell, format string, args ...any) {
@@ -203,15 +217,16 @@ func (im *importer) readWells(s *sheet) {
 			}
 			c := Cell{s.file, s.name, rowNum, ci + 1}
 			t := cols[ci]
-			v, err := tomlValue(text, typeOf(t.table, t.key))
-			if err != nil {
-				im.errAt(c, "%s: %v", s.header[ci], err)
-				continue
-			}
 			it := w.singles[t.table]
 			if it == nil {
 				it = &item{table: t.table, head: c}
 				w.singles[t.table] = it
+			}
+			v, err := tomlValue(text, typeOf(t.table, t.key))
+			if err != nil {
+				im.errAt(c, "%s: %v", s.header[ci], err)
+				im.fail(it.head, t.key)
+				continue
 			}
 			it.keys = append(it.keys, entry{t.key, v, c})
 		}
@@ -284,6 +299,7 @@ func (im *importer) readIntervals(s *sheet) {
 			v, err := tomlValue(text, typeOf(table, key))
 			if err != nil {
 				im.errAt(c, "%s: %v", s.header[ci], err)
+				im.fail(it.head, key)
 				continue
 			}
 			it.keys = append(it.keys, entry{key, v, c})
@@ -457,6 +473,11 @@ func (im *importer) build(w *wellRows) (WellFile, bool) {
 				c := w.idCell
 				if e.Line >= 1 && e.Line <= len(d.cells) && d.cells[e.Line-1].File != "" {
 					c = d.cells[e.Line-1]
+				}
+				if k, ok := strings.CutPrefix(e.Msg, "missing required key \""); ok {
+					if i := strings.IndexByte(k, '"'); i > 0 && im.failed[c][k[:i]] {
+						continue // its cell is already reported
+					}
 				}
 				im.errAt(c, "%s", e.Msg)
 			}
