@@ -23,7 +23,9 @@ func findingsOf(t *testing.T, dir string) []string {
 		Findings []map[string]any
 	}
 	if err := json.Unmarshal([]byte(out), &files); err != nil {
-		var one struct{ Files []struct{ Findings []map[string]any } }
+		var one struct {
+			Files []struct{ Findings []map[string]any }
+		}
 		if err2 := json.Unmarshal([]byte(out), &one); err2 != nil {
 			t.Fatalf("check json: %v\n%s", err, out[:min(len(out), 400)])
 		}

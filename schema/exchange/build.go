@@ -464,7 +464,7 @@ func (im *importer) build(w *wellRows) (WellFile, bool) {
 		}
 	}
 	data := []byte(d.b.String())
-	name := safeName(w.id) + ".toml"
+	name := schema.SafeFileName(w.id) + ".toml"
 	well, err := schema.Load(name, data)
 	if err != nil {
 		var list schema.ErrorList
@@ -487,34 +487,6 @@ func (im *importer) build(w *wellRows) (WellFile, bool) {
 		return WellFile{}, false
 	}
 	return WellFile{ID: w.id, Name: name, Data: data, Well: well}, true
-}
-
-// safeName makes a well ID a file name that stays in its directory: only
-// [A-Za-z0-9._-], runs of other characters one '-', no leading dot or
-// dash, at most 80 bytes; "well" when nothing is left.
-func safeName(id string) string {
-	var b strings.Builder
-	lastSep := false
-	for _, r := range id {
-		ok := r < 128 && (r >= 'a' && r <= 'z' || r >= 'A' && r <= 'Z' || r >= '0' && r <= '9' || r == '.' || r == '_' || r == '-')
-		if !ok {
-			r = '-'
-		}
-		sep := r == '-' || r == '.'
-		if sep && lastSep {
-			continue
-		}
-		b.WriteRune(r)
-		lastSep = sep
-	}
-	s := strings.Trim(b.String(), ".-")
-	if len(s) > 80 {
-		s = strings.TrimRight(s[:80], ".-")
-	}
-	if s == "" {
-		s = "well"
-	}
-	return s
 }
 
 // Destinations are the paths the files go to in dir, and those of them
