@@ -47,6 +47,7 @@ func Load(name string, data []byte) (*Well, error) {
 		return nil, r.errs
 	}
 	w.keys = &keyIndex{src: src, lines: r.lines}
+	w.Placeholders = findPlaceholders(src)
 	return w, nil
 }
 
