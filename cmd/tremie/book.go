@@ -107,8 +107,13 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 	} else if bw != nil {
 		wells = append(wells, *bw)
 	}
+	secs, err := bookSections(pw, date.Format("2006-01-02T15:04:05Z07:00"))
+	if err != nil {
+		fmt.Fprintf(stderr, "%s: %v\n", p.File, err)
+		code = worse(code, exitInput)
+	}
 	pdf, err := book.Build(book.Input{
-		Project: p, Date: date, Table: table.Build(pw.entries, p.Units), Wells: wells,
+		Project: p, Date: date, Table: table.Build(pw.entries, p.Units), Wells: wells, Sections: secs,
 		PageWidth: w, PageHeight: h, Caution: rules.Caution(pw.prof),
 	})
 	if err != nil {
