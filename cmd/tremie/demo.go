@@ -10,8 +10,6 @@ import (
 
 	"github.com/tremie-dev/tremie/cmd/tremie/demo"
 	"github.com/tremie-dev/tremie/render/out"
-	"github.com/tremie-dev/tremie/render/wallimage"
-	"github.com/tremie-dev/tremie/schema"
 )
 
 func init() {
@@ -94,7 +92,7 @@ func writeDemo(dir string) error {
 		if d.IsDir() {
 			return os.MkdirAll(target, 0o755)
 		}
-		if filepath.Ext(path) != ".toml" {
+		if ext := filepath.Ext(path); ext != ".toml" && ext != ".png" {
 			return nil
 		}
 		data, err := demo.FS.ReadFile(path)
@@ -104,27 +102,7 @@ func writeDemo(dir string) error {
 		if err := os.MkdirAll(filepath.Dir(target), 0o755); err != nil {
 			return fmt.Errorf("creating %s: %w", filepath.Dir(target), err)
 		}
-		if err := out.WriteFileAtomic(target, data); err != nil {
-			return err
-		}
-		return writeDemoImages(target, data)
+		return out.WriteFileAtomic(target, data)
 	})
 }
 
-// writeDemoImages makes the wall images a demo well names, beside it.
-func writeDemoImages(wellFile string, data []byte) error {
-	w, err := schema.Load(wellFile, data)
-	if err != nil || len(w.WallImages) == 0 {
-		return nil // the check step reports a bad well
-	}
-	images, err := wallimage.DemoImages(w)
-	if err != nil {
-		return fmt.Errorf("making the wall images of %s: %w", wellFile, err)
-	}
-	for _, wi := range w.WallImages {
-		if err := out.WriteFileAtomic(filepath.Join(filepath.Dir(wellFile), filepath.FromSlash(wi.File)), images[wi.File]); err != nil {
-			return err
-		}
-	}
-	return nil
-}

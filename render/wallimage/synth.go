@@ -28,7 +28,7 @@ func Synthesize(w *schema.Well, im schema.WallImage, width int, rowsPerUnit floa
 	for y := range rows {
 		for x := range width {
 			// Columns wrap around the hole: noise is periodic across.
-			v := 0.55*valueNoise(x, y, 24, width) + 0.3*valueNoise(x+977, y+311, 6, width) + 0.15*hash01(x, y, 7)
+			v := 0.55*valueNoise(x, y, 24, width) + 0.3*valueNoise(x+977, y+311, 6, width) + 0.15*valueNoise(x+31, y+57, 2, width)
 			grain := hash01(x, y, 99)
 			c := 120 + 70*v
 			switch {
@@ -38,7 +38,9 @@ func Synthesize(w *schema.Well, im schema.WallImage, width int, rowsPerUnit floa
 				c = 205 + 30*hash01(x, y, 6)
 			}
 			c += 6 * math.Sin(float64(y)/rowsPerUnit*2.1) // faint banding
-			g.SetGray(x, y, color.Gray{Y: uint8(max(0, min(255, c)))})
+			// Levels of 8 keep the file small; the eye sees no steps in
+			// a noisy texture.
+			g.SetGray(x, y, color.Gray{Y: uint8(max(0, min(255, math.Round(c/8)*8)))})
 		}
 	}
 	for i := range w.Features {
@@ -108,12 +110,12 @@ func valueNoise(x, y, cell, width int) float64 {
 func smooth(t float64) float64 { return t * t * (3 - 2*t) }
 
 // DemoImages makes every [[wall_image]] of a well with Synthesize: 360
-// columns (one a degree) and 30 rows a foot (or 100 a metre), PNG bytes
+// columns (one a degree) and 15 rows a foot (or 50 a metre), PNG bytes
 // by the image's file name as written.
 func DemoImages(w *schema.Well) (map[string][]byte, error) {
-	rows := 30.0
+	rows := 15.0
 	if !w.Units.Imperial() {
-		rows = 100
+		rows = 50
 	}
 	out := map[string][]byte{}
 	for _, im := range w.WallImages {
