@@ -105,4 +105,3 @@ func writeDemo(dir string) error {
 		return out.WriteFileAtomic(target, data)
 	})
 }
-
