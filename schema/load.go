@@ -1,12 +1,9 @@
 package schema
 
 import (
-	"errors"
 	"fmt"
 	"os"
 	"strings"
-
-	"github.com/BurntSushi/toml"
 
 	"github.com/tremie-dev/tremie/schema/crs"
 )
@@ -26,34 +23,18 @@ func Load(name string, data []byte) (*Well, error) {
 	// Decoding into a bare interface hands over the parser's own tree;
 	// a map[string]any target would be copied key by key.
 	src := string(data)
-	var tree any
-	if _, err := toml.Decode(src, &tree); err != nil {
-		var pe toml.ParseError
-		if errors.As(err, &pe) {
-			return nil, ErrorList{{File: name, Line: pe.Position.Line, Col: pe.Position.Col, Msg: "TOML syntax: " + pe.Message}}
-		}
-		return nil, ErrorList{{File: name, Msg: "TOML: " + err.Error()}}
-	}
-	raw, _ := tree.(map[string]any)
-	if raw == nil {
-		raw = map[string]any{}
+	raw, err := decode(name, src)
+	if err != nil {
+		return nil, err
 	}
 	r := &reader{file: name, src: src, heads: scanHeaderLines(src)}
 	w := r.well(r.root(raw))
 	if len(r.errs) > 0 {
-		sortErrors(r.errs)
+		r.errs.Sort()
 		return nil, r.errs
 	}
 	w.keys = &keyIndex{src: src, lines: r.lines}
 	return w, nil
-}
-
-func sortErrors(l ErrorList) {
-	for i := 1; i < len(l); i++ {
-		for j := i; j > 0 && (l[j].Line < l[j-1].Line || (l[j].Line == l[j-1].Line && l[j].Col < l[j-1].Col)); j-- {
-			l[j], l[j-1] = l[j-1], l[j]
-		}
-	}
 }
 
 // at is the position of a part of the well: the line of its table header,
