@@ -43,16 +43,18 @@ func decode(name, src string) (map[string]any, error) {
 	return raw, nil
 }
 
-// ParseDoc parses a file's bytes; name is used in positions. A syntax
-// error is returned as an ErrorList.
-func ParseDoc(name string, data []byte) (*Doc, error) {
+// ParseDoc parses a file's bytes; name is used in positions, spec is the
+// file's key table (nil for a file without one: then the keys its loader
+// asks for are the known ones). A syntax error is returned as an
+// ErrorList.
+func ParseDoc(name string, data []byte, spec *TableSpec) (*Doc, error) {
 	src := string(data)
 	raw, err := decode(name, src)
 	if err != nil {
 		return nil, err
 	}
 	r := &reader{file: name, src: src}
-	return &Doc{r: r, root: r.root(raw)}, nil
+	return &Doc{r: r, root: &table{r: r, m: raw, spec: spec}}, nil
 }
 
 // Root is the file's top-level table.
@@ -94,9 +96,6 @@ func (t *table) Str(k string) string { return t.str(k) }
 
 // ReqStr reads a string that must be present and not blank.
 func (t *table) ReqStr(k string) string { return t.reqStr(k) }
-
-// OneOf reads a string that must be one of allowed ("" when absent).
-func (t *table) OneOf(k string, allowed ...string) string { return t.oneOf(k, allowed...) }
 
 // Num reads a finite number, and whether it was given and valid.
 func (t *table) Num(k string) (float64, bool) { return t.num(k) }
@@ -176,28 +175,6 @@ func Suggest(word string, known []string) string {
 		}
 	}
 	return best
-}
-
-// editDistance is the Levenshtein distance between two strings, by bytes
-// (keys are ASCII).
-func editDistance(a, b string) int {
-	prev := make([]int, len(b)+1)
-	cur := make([]int, len(b)+1)
-	for j := range prev {
-		prev[j] = j
-	}
-	for i := 1; i <= len(a); i++ {
-		cur[0] = i
-		for j := 1; j <= len(b); j++ {
-			cost := 1
-			if a[i-1] == b[j-1] {
-				cost = 0
-			}
-			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
-		}
-		prev, cur = cur, prev
-	}
-	return prev[len(b)]
 }
 
 // DidYouMean is " (did you mean "x"?)" for the known word closest to

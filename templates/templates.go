@@ -120,7 +120,7 @@ func Load(name string, landscape bool) (*Template, error) {
 // (schema.Doc): every problem is reported, with name.toml:line:col, in one
 // schema.ErrorList.
 func Parse(name string, data []byte, landscape bool) (*Template, error) {
-	doc, err := schema.ParseDoc(name+".toml", data)
+	doc, err := schema.ParseDoc(name+".toml", data, nil)
 	if err != nil {
 		return nil, err
 	}

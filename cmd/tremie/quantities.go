@@ -8,7 +8,6 @@ import (
 	"github.com/tremie-dev/tremie/schema/project"
 	"io"
 	"math"
-	"sort"
 	"strconv"
 	"strings"
 	"text/tabwriter"
@@ -43,7 +42,7 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 	fset := flag.NewFlagSet("quantities", flag.ContinueOnError)
 	fset.SetOutput(stderr)
 	format := fset.String("format", "text", "output format: text, json or csv")
-	contingency := fset.Float64("contingency", 0, "percentage added to the project totals when ordering")
+	contingency := fset.Float64("contingency", quantity.DefaultContingency, "percentage added to each volume before it is rounded up to bags to order (default from "+quantity.DefaultContingencySource+")")
 	yieldsFile := fset.String("yields", "", "TOML file with a [yields] table overriding the default yields")
 	profileFile := fset.String("profile", "", "rule profile TOML setting the reconciliation thresholds")
 	fset.Usage = func() {
@@ -123,15 +122,19 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintln(stderr, "tremie quantities: no well files found")
 		return exitInput
 	}
-	totals := projectTotals(wells, *contingency)
+	reports := make([]*quantity.Report, len(wells))
+	for i, wq := range wells {
+		reports[i] = wq.Report
+	}
+	order := quantity.Totals(reports, *contingency)
 	var werr error
 	switch *format {
 	case "json":
-		werr = writeQuantitiesJSON(stdout, wells, totals, *contingency)
+		werr = writeQuantitiesJSON(stdout, wells, order)
 	case "csv":
-		werr = writeQuantitiesCSV(stdout, wells, totals)
+		werr = writeQuantitiesCSV(stdout, wells, order)
 	default:
-		werr = writeQuantitiesText(stdout, wells, totals, *contingency)
+		werr = writeQuantitiesText(stdout, wells, order)
 	}
 	if werr != nil {
 		fmt.Fprintf(stderr, "tremie quantities: writing the report: %v\n", werr)
@@ -160,85 +163,12 @@ func parseInterspersed(fset *flag.FlagSet, args []string) ([]string, error) {
 	}
 }
 
-// total is one material line of the project order: one material with one
-// bag (the same yield per bag and bag mass) across the wells.
-type total struct {
-	Material   schema.Material
-	Yield      quantity.Yield
-	HasYield   bool
-	Units      schema.Units // the first well's, for display
-	Calculated schema.Volume
-	BagsNeeded int // the sum of each interval's bags, each rounded up
-	BagsOrder  int // ceil(BagsNeeded x (1 + contingency))
-	BagsPlaced float64
-	Intervals  int
-}
-
-// projectTotals sums each material over the wells, one line per material
-// and bag. Bags to order are the sum of each interval's bags (each rounded
-// up, since an opened bag rarely travels to the next well) plus the
-// contingency, rounded up: never fewer than the intervals need.
-func projectTotals(wells []wellQuantities, contingency float64) []*total {
-	type key struct {
-		m       schema.Material
-		y, mass float64
-	}
-	byKey := map[key]*total{}
-	var order []*total
-	for _, wq := range wells {
-		for _, r := range wq.Report.Rows {
-			if r.Err != nil {
-				continue
-			}
-			k := key{m: r.Fill.Material}
-			if r.HasYield {
-				k.y, k.mass = float64(r.Yield.Volume), float64(r.Yield.BagMass)
-			}
-			t := byKey[k]
-			if t == nil {
-				t = &total{Material: r.Fill.Material, Yield: r.Yield, HasYield: r.HasYield, Units: wq.Report.Well.Units}
-				byKey[k] = t
-				order = append(order, t)
-			}
-			t.Calculated += r.Calculated
-			t.BagsNeeded += r.BagsNeeded
-			t.BagsPlaced += r.BagsPlaced
-			t.Intervals++
-		}
-	}
-	rank := map[schema.Material]int{}
-	for i, m := range schema.Materials {
-		rank[m] = i
-	}
-	sort.SliceStable(order, func(i, j int) bool {
-		a, b := order[i], order[j]
-		if a.Material != b.Material {
-			return rank[a.Material] < rank[b.Material]
-		}
-		if a.Yield.BagMass != b.Yield.BagMass {
-			return a.Yield.BagMass < b.Yield.BagMass
-		}
-		return a.Yield.Volume < b.Yield.Volume
-	})
-	for _, t := range order {
-		if t.HasYield {
-			t.BagsOrder = ceilBags(float64(t.BagsNeeded) * (1 + contingency/100))
-		}
-	}
-	return order
-}
-
-// ceilBags rounds a bag count up, forgiving float noise on exact counts.
-func ceilBags(n float64) int {
-	if n <= 0 {
-		return 0
-	}
-	return int(math.Ceil(n - 1e-6))
-}
+// total is one material line of a project list.
+type total = quantity.Line
 
 // --- text ---
 
-func writeQuantitiesText(w io.Writer, wells []wellQuantities, totals []*total, contingency float64) error {
+func writeQuantitiesText(w io.Writer, wells []wellQuantities, order *quantity.Order) error {
 	ew := &errWriter{w: w}
 	for i, wq := range wells {
 		if i > 0 {
@@ -248,7 +178,7 @@ func writeQuantitiesText(w io.Writer, wells []wellQuantities, totals []*total, c
 	}
 	if len(wells) > 0 {
 		fmt.Fprintln(ew)
-		writeTotalsText(ew, totals, contingency)
+		writeOrderText(ew, order)
 	}
 	fmt.Fprintln(ew)
 	fmt.Fprintln(ew, quantitiesCaution)
@@ -262,15 +192,18 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 	fmt.Fprintf(w, "%s  %s\n", r.Well.ID, wq.File)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	fmt.Fprintf(tw, "  #\tmaterial\tinterval %s\tcalculated %s\t%s\tyield %s per bag\tbags needed\tbags placed\tplaced %s\tratio\n", u.Depth, p, s, p, p)
-	for _, row := range r.Rows {
+	for _, row := range r.AllRows() {
 		f := row.Fill
 		iv := schema.TrimFloat(f.Top.In(u.Depth), 2) + "–" + schema.TrimFloat(f.Bottom.In(u.Depth), 2)
 		mat := string(f.Material)
+		if row.IsPad() {
+			mat += " pad"
+		}
 		if f.Within != "" {
 			mat += " (in " + f.Within + ")"
 		}
 		if row.Err != nil {
-			fmt.Fprintf(tw, "  %d\t%s\t%s\t(error)\t-\t-\t-\t-\t-\t-\n", row.Index+1, mat, iv)
+			fmt.Fprintf(tw, "  %s\t%s\t%s\t(error)\t-\t-\t-\t-\t-\t-\n", row.Label(), mat, iv)
 			continue
 		}
 		yield, needed := "-", "-"
@@ -290,13 +223,13 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 		if row.Ratio > 0 {
 			ratio = fmt.Sprintf("%.2f", row.Ratio)
 		}
-		fmt.Fprintf(tw, "  %d\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", row.Index+1, mat, iv,
+		fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", row.Label(), mat, iv,
 			quantity.Number(row.Calculated.In(p)), quantity.Number(row.Calculated.In(s)), yield, needed, placedBags, placed, ratio)
 	}
 	tw.Flush()
-	for _, row := range r.Rows {
+	for _, row := range r.AllRows() {
 		if row.Err != nil {
-			fmt.Fprintf(w, "  fill %d cannot be computed: %v\n", row.Index+1, row.Err)
+			fmt.Fprintf(w, "  %s cannot be computed: %v\n", row.Fill.Path, row.Err)
 		}
 		for _, tc := range row.Tags {
 			if tc.Err != nil {
@@ -339,7 +272,7 @@ func yieldNotes(r *quantity.Report) []string {
 	u := r.Well.Units
 	seen := map[string]bool{}
 	var out []string
-	for _, row := range r.Rows {
+	for _, row := range r.AllRows() {
 		if !row.HasYield || row.Err != nil {
 			continue
 		}
@@ -355,25 +288,50 @@ func yieldNotes(r *quantity.Report) []string {
 	return out
 }
 
-func writeTotalsText(w io.Writer, totals []*total, contingency float64) {
-	fmt.Fprintf(w, "Project totals (bags to order include a %s %% contingency)\n", schema.TrimFloat(contingency, 2))
-	if len(totals) == 0 {
+func writeOrderText(w io.Writer, o *quantity.Order) {
+	c := schema.TrimFloat(o.Contingency, 2)
+	if o.Planned {
+		fmt.Fprintf(w, "Order for the planned wells %s\n", strings.Join(o.For, ", "))
+	} else {
+		fmt.Fprintf(w, "Order (no well is planned: ordering for all %d wells)\n", len(o.For))
+	}
+	fmt.Fprintf(w, "  bags to order add %s %% to each volume before rounding up to whole bags\n", c)
+	writeLinesText(w, o.Lines, true)
+	if len(o.AsBuilt) > 0 {
+		fmt.Fprintf(w, "\nAs built, to reconcile: %s\n", strings.Join(o.AsBuilt, ", "))
+		writeLinesText(w, o.AsBuiltLines, false)
+	}
+}
+
+func writeLinesText(w io.Writer, lines []*total, order bool) {
+	if len(lines) == 0 {
 		fmt.Fprintln(w, "  no interval could be computed")
 		return
 	}
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
-	fmt.Fprintln(tw, "  material\tyield\tintervals\tcalculated\tbags needed\tbags to order\tbags placed")
-	for _, t := range totals {
-		bag, needed, order := "-", "-", "-"
+	if order {
+		fmt.Fprintln(tw, "  material\tyield\tintervals\tcalculated\tbags needed\tbags to order")
+	} else {
+		fmt.Fprintln(tw, "  material\tyield\tintervals\tcalculated\tbags needed\tbags placed\tplaced")
+	}
+	for _, t := range lines {
+		bag, needed, ord := "-", "-", "-"
 		if t.HasYield {
 			bag = quantity.FormatYield(t.Yield, t.Units)
-			needed, order = strconv.Itoa(t.BagsNeeded), strconv.Itoa(t.BagsOrder)
+			needed, ord = strconv.Itoa(t.BagsNeeded), strconv.Itoa(t.BagsOrder)
 		}
-		placed := "-"
+		if order {
+			fmt.Fprintf(tw, "  %s\t%s\t%d\t%s\t%s\t%s\n", t.Material, bag, t.Intervals, quantity.FormatVolume(t.Calculated, t.Units), needed, ord)
+			continue
+		}
+		placedBags, placed := "-", "-"
 		if t.BagsPlaced > 0 {
-			placed = schema.TrimFloat(t.BagsPlaced, 2)
+			placedBags = schema.TrimFloat(t.BagsPlaced, 2)
 		}
-		fmt.Fprintf(tw, "  %s\t%s\t%d\t%s\t%s\t%s\t%s\n", t.Material, bag, t.Intervals, quantity.FormatVolume(t.Calculated, t.Units), needed, order, placed)
+		if t.Placed > 0 {
+			placed = quantity.FormatVolume(t.Placed, t.Units)
+		}
+		fmt.Fprintf(tw, "  %s\t%s\t%d\t%s\t%s\t%s\t%s\n", t.Material, bag, t.Intervals, quantity.FormatVolume(t.Calculated, t.Units), needed, placedBags, placed)
 	}
 	tw.Flush()
 }
@@ -400,7 +358,11 @@ type jsonQuantities struct {
 	Caution     string          `json:"caution"`
 	Contingency float64         `json:"contingency_pct"`
 	Wells       []jsonWell      `json:"wells"`
+	OrderingFor []string        `json:"ordering_for"`
+	ForPlanned  bool            `json:"ordering_for_planned"`
 	Totals      []jsonTotal     `json:"totals"`
+	AsBuiltFor  []string        `json:"as_built"`
+	AsBuilt     []jsonTotal     `json:"as_built_totals"`
 	Findings    []rules.Finding `json:"findings"`
 }
 
@@ -467,6 +429,31 @@ type jsonTotal struct {
 	BagsNeeded *int     `json:"bags_needed,omitempty"`
 	BagsOrder  *int     `json:"bags_to_order,omitempty"`
 	BagsPlaced float64  `json:"bags_placed"`
+	Placed     *float64 `json:"placed,omitempty"`
+}
+
+// jsonTotals writes a list's lines.
+func jsonTotals(lines []*total) []jsonTotal {
+	out := []jsonTotal{}
+	for _, t := range lines {
+		p, _ := quantity.VolumeUnits(t.Units)
+		mu := quantity.MassUnit(t.Units)
+		jt := jsonTotal{Material: string(t.Material), MassUnit: string(mu), VolumeUnit: string(p), Calculated: r4(t.Calculated.In(p)),
+			Intervals: t.Intervals, BagsPlaced: t.BagsPlaced}
+		if t.HasYield {
+			jt.Yield = ptr(r4(t.Yield.Volume.In(p)))
+			if t.Yield.BagMass > 0 {
+				jt.BagMass = ptr(r4(t.Yield.BagMass.In(mu)))
+			}
+			jt.YieldBasis = string(t.Yield.Basis)
+			jt.BagsNeeded, jt.BagsOrder = ptr(t.BagsNeeded), ptr(t.BagsOrder)
+		}
+		if t.Placed > 0 {
+			jt.Placed = ptr(r4(t.Placed.In(p)))
+		}
+		out = append(out, jt)
+	}
+	return out
 }
 
 // r4 rounds to 4 decimals: stable output with no false precision.
@@ -474,8 +461,10 @@ func r4(v float64) float64 { return math.Round(v*1e4) / 1e4 }
 
 func ptr[T any](v T) *T { return &v }
 
-func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*total, contingency float64) error {
-	out := jsonQuantities{Caution: quantitiesCaution, Contingency: contingency, Wells: []jsonWell{}, Totals: []jsonTotal{}, Findings: []rules.Finding{}}
+func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Order) error {
+	out := jsonQuantities{Caution: quantitiesCaution, Contingency: order.Contingency, Wells: []jsonWell{}, Totals: jsonTotals(order.Lines),
+		OrderingFor: append([]string{}, order.For...), ForPlanned: order.Planned, AsBuiltFor: append([]string{}, order.AsBuilt...),
+		AsBuilt: jsonTotals(order.AsBuiltLines), Findings: []rules.Finding{}}
 	for _, wq := range wells {
 		r := wq.Report
 		u := r.Well.Units
@@ -483,7 +472,7 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*total, c
 		mu := quantity.MassUnit(u)
 		jw := jsonWell{File: wq.File, Well: r.Well.ID, DepthUnit: string(u.Depth), VolumeUnit: string(p), VolumeUnit2: string(s), MassUnit: string(mu),
 			Fills: []jsonFill{}, Pipes: []jsonPipe{}}
-		for _, row := range r.Rows {
+		for _, row := range r.AllRows() {
 			f := row.Fill
 			jf := jsonFill{Index: row.Index, Path: f.Path, Material: string(f.Material), Within: f.Within,
 				Top: r4(f.Top.In(u.Depth)), Bottom: r4(f.Bottom.In(u.Depth))}
@@ -530,21 +519,6 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*total, c
 		out.Wells = append(out.Wells, jw)
 		out.Findings = append(out.Findings, wq.Findings...)
 	}
-	for _, t := range totals {
-		p, _ := quantity.VolumeUnits(t.Units)
-		mu := quantity.MassUnit(t.Units)
-		jt := jsonTotal{Material: string(t.Material), MassUnit: string(mu), VolumeUnit: string(p), Calculated: r4(t.Calculated.In(p)),
-			Intervals: t.Intervals, BagsPlaced: t.BagsPlaced}
-		if t.HasYield {
-			jt.Yield = ptr(r4(t.Yield.Volume.In(p)))
-			if t.Yield.BagMass > 0 {
-				jt.BagMass = ptr(r4(t.Yield.BagMass.In(mu)))
-			}
-			jt.YieldBasis = string(t.Yield.Basis)
-			jt.BagsNeeded, jt.BagsOrder = ptr(t.BagsNeeded), ptr(t.BagsOrder)
-		}
-		out.Totals = append(out.Totals, jt)
-	}
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	return enc.Encode(out)
@@ -555,7 +529,7 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*total, c
 var quantitiesCSVHeader = []string{"kind", "file", "well", "fill", "material", "within", "top", "bottom", "depth_unit",
 	"calculated", "volume_unit", "yield", "yield_basis", "bag_mass", "mass_unit", "bags_needed", "bags_to_order", "bags_placed", "placed", "ratio", "note"}
 
-func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*total) error {
+func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Order) error {
 	cw := csv.NewWriter(w)
 	cw.Write(quantitiesCSVHeader)
 	num := func(v float64) string { return strconv.FormatFloat(r4(v), 'f', -1, 64) }
@@ -564,10 +538,10 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*total) er
 		u := r.Well.Units
 		p, _ := quantity.VolumeUnits(u)
 		mu := quantity.MassUnit(u)
-		for _, row := range r.Rows {
+		for _, row := range r.AllRows() {
 			f := row.Fill
 			rec := make([]string, len(quantitiesCSVHeader))
-			rec[0], rec[1], rec[2], rec[3], rec[4], rec[5] = "interval", wq.File, r.Well.ID, strconv.Itoa(row.Index+1), string(f.Material), f.Within
+			rec[0], rec[1], rec[2], rec[3], rec[4], rec[5] = "interval", wq.File, r.Well.ID, row.Label(), string(f.Material), f.Within
 			rec[6], rec[7], rec[8] = num(f.Top.In(u.Depth)), num(f.Bottom.In(u.Depth)), string(u.Depth)
 			rec[10], rec[14] = string(p), string(mu)
 			if row.Err != nil {
@@ -595,11 +569,28 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*total) er
 			cw.Write(rec)
 		}
 	}
-	for _, t := range totals {
+	lines := func(kind string, ts []*total, wells []string) {
+		for _, t := range ts {
+			csvTotal(cw, kind, t, countOf(t.Intervals, "interval")+" of "+strings.Join(wells, " "))
+		}
+	}
+	lines("order", order.Lines, order.For)
+	lines("as-built", order.AsBuiltLines, order.AsBuilt)
+	caution := make([]string, len(quantitiesCSVHeader))
+	caution[0], caution[20] = "caution", quantitiesCaution
+	cw.Write(caution)
+	cw.Flush()
+	return cw.Error()
+}
+
+// csvTotal writes one line of a project list.
+func csvTotal(cw *csv.Writer, kind string, t *total, note string) {
+	num := func(v float64) string { return strconv.FormatFloat(r4(v), 'f', -1, 64) }
+	{
 		p, _ := quantity.VolumeUnits(t.Units)
 		mu := quantity.MassUnit(t.Units)
 		rec := make([]string, len(quantitiesCSVHeader))
-		rec[0], rec[4], rec[20] = "total", string(t.Material), countOf(t.Intervals, "interval")
+		rec[0], rec[4], rec[20] = kind, string(t.Material), note
 		rec[9], rec[10], rec[14] = num(t.Calculated.In(p)), string(p), string(mu)
 		if t.HasYield {
 			rec[11], rec[12] = num(t.Yield.Volume.In(p)), string(t.Yield.Basis)
@@ -611,13 +602,11 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*total) er
 		if t.BagsPlaced > 0 {
 			rec[17] = num(t.BagsPlaced)
 		}
+		if t.Placed > 0 {
+			rec[18] = num(t.Placed.In(p))
+		}
 		cw.Write(rec)
 	}
-	caution := make([]string, len(quantitiesCSVHeader))
-	caution[0], caution[20] = "caution", quantitiesCaution
-	cw.Write(caution)
-	cw.Flush()
-	return cw.Error()
 }
 
 // countOf is "1 interval" or "3 intervals".

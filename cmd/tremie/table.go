@@ -73,6 +73,10 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie table: %v\n", err)
 		return exitOutput
 	}
+	if *format == "csv" {
+		// the CSV holds data only; its caution goes to the terminal
+		fmt.Fprintln(stderr, table.Caution)
+	}
 	if *outFile == "" {
 		if _, err := stdout.Write(buf.Bytes()); err != nil {
 			return exitOutput
@@ -83,7 +87,7 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie table: %v\n", err)
 		return exitOutput
 	}
-	fmt.Fprintf(stdout, "tremie table: %d wells written to %s\n", len(tb.Rows), *outFile)
+	fmt.Fprintf(stdout, "tremie table: %d monitoring points of %d wells written to %s\n", len(tb.Rows), tb.Wells(), *outFile)
 	return code
 }
 

@@ -139,7 +139,7 @@ func TestParseYieldsErrors(t *testing.T) {
 		line int
 		msg  string
 	}{
-		{"[yields]\n[yields.gravel]\nyield = 1\n", 2, "unknown material"},
+		{"[yields]\n[yields.gravel]\nyield = 1\n", 2, `unknown key "gravel" in [yields]`},
 		{"[yields]\n\n[yields.filter-pack]\nyeild = 1\n", 4, "unknown key"},
 		{"[yields]\n[yields.filter-pack]\nyield = -1\n", 3, "positive"},
 		{"[yields]\nvolume = \"cups\"\n", 2, "volume unit"},
@@ -172,7 +172,7 @@ func TestLoadYieldsReportsEveryError(t *testing.T) {
 	list := schema.Errors("", err)
 	want := []string{
 		p + `:2:10: yields volume unit must be one of ft3, gal, L, m3, not "cuft"`,
-		p + `:4:1: unknown material "filter-pak" in [yields] (did you mean "filter-pack"?)`,
+		p + `:4:1: unknown key "filter-pak" in [yields] (did you mean "filter-pack"?)`,
 		p + `:9:1: unknown key "bagmass" in [yields.neat-cement] (did you mean "bag_mass"?)`,
 	}
 	if len(list) != len(want) {

@@ -3,7 +3,6 @@ package quantity
 import (
 	"math"
 	"os"
-	"slices"
 
 	"github.com/tremie-dev/tremie/schema"
 )
@@ -44,7 +43,7 @@ func ParseYields(name string, data []byte) (*Yields, error) {
 // parseYields reads the [yields] table strictly (schema.Doc); whole says
 // the document is a yields file, which holds nothing else.
 func parseYields(name string, data []byte, whole bool) (*Yields, bool, error) {
-	doc, err := schema.ParseDoc(name, data)
+	doc, err := schema.ParseDoc(name, data, YieldsFile())
 	if err != nil {
 		return nil, false, err
 	}
@@ -84,16 +83,13 @@ func readYields(doc *schema.Doc, t *schema.Table, y *Yields) {
 			doc.Errorf("yields.mass", "yields mass unit must be lb or kg, not %q", s)
 		}
 	}
-	materials := materialNames()
 	for _, k := range t.Keys() {
 		if k == "volume" || k == "mass" {
 			continue
 		}
 		path := "yields." + k
-		if !slices.Contains(materials, k) {
-			t.Raw(k) // reported here, not again as an unknown key
-			doc.Errorf(path, "unknown material %q in [yields]%s", k, schema.DidYouMean(k, materials))
-			continue
+		if YieldsFile().Keys[0].Table.Key(k) == nil {
+			continue // not a material: Done reports it, with the materials
 		}
 		e := t.Sub(k)
 		if e == nil {
@@ -139,13 +135,4 @@ func number(v any) (float64, bool) {
 		return n, true
 	}
 	return 0, false
-}
-
-// materialNames are the materials as a [yields] table names them.
-func materialNames() []string {
-	names := make([]string, len(schema.Materials))
-	for i, m := range schema.Materials {
-		names[i] = string(m)
-	}
-	return names
 }

@@ -170,7 +170,8 @@ func (r *profileReader) header(prof *Profile, m map[string]any) {
 			}
 			prof.Units = schema.DepthUnit(s)
 		default:
-			r.errAt(path, "unknown key %q in [profile] (expected name, units, source)%s", k, schema.DidYouMean(k, []string{"name", "units", "source"}))
+			names := ProfileFile().Key("profile").Table.Names()
+			r.errAt(path, "unknown key %q in [profile] (expected %s)%s", k, strings.Join(names, ", "), schema.DidYouMean(k, names))
 		}
 	}
 }
