@@ -2,7 +2,6 @@ package schema
 
 import (
 	"fmt"
-	"os"
 	"strings"
 
 	"github.com/tremie-dev/tremie/schema/crs"
@@ -11,7 +10,7 @@ import (
 // LoadFile reads and checks one well file. A rejected file yields an
 // ErrorList naming every problem with its line.
 func LoadFile(path string) (*Well, error) {
-	data, err := os.ReadFile(path)
+	data, err := ReadInput(path, MaxTextFile)
 	if err != nil {
 		return nil, ErrorList{ReadError(path, "", err)}
 	}
@@ -22,6 +21,9 @@ func LoadFile(path string) (*Well, error) {
 func Load(name string, data []byte) (*Well, error) {
 	// Decoding into a bare interface hands over the parser's own tree;
 	// a map[string]any target would be copied key by key.
+	if e := CheckNesting(name, data, MaxNesting); e != nil {
+		return nil, ErrorList{e}
+	}
 	src := string(data)
 	raw, err := decode(name, src)
 	if err != nil {
@@ -34,6 +36,7 @@ func Load(name string, data []byte) (*Well, error) {
 		return nil, r.errs
 	}
 	w.keys = &keyIndex{src: src, lines: r.lines}
+	w.Placeholders = findPlaceholders(src)
 	return w, nil
 }
 

@@ -238,33 +238,8 @@ func encode(doc *draw.Document, format string, dpi float64) ([][]byte, error) {
 	return files, nil
 }
 
-// safeName makes a well ID a file name that stays in its directory:
-// only [A-Za-z0-9._-], runs of other characters made one '-', no leading
-// dot or dash, at most 80 bytes; "well" when nothing is left.
-func safeName(id string) string {
-	var b strings.Builder
-	lastSep := false
-	for _, r := range id {
-		ok := r < 128 && (r >= 'a' && r <= 'z' || r >= 'A' && r <= 'Z' || r >= '0' && r <= '9' || r == '.' || r == '_' || r == '-')
-		if !ok {
-			r = '-'
-		}
-		sep := r == '-' || r == '.'
-		if sep && lastSep {
-			continue // collapse "..", "-.", "--": no ".." survives
-		}
-		b.WriteRune(r)
-		lastSep = sep
-	}
-	s := strings.Trim(b.String(), ".-")
-	if len(s) > 80 {
-		s = strings.TrimRight(s[:80], ".-")
-	}
-	if s == "" {
-		s = "well"
-	}
-	return s
-}
+// safeName is the output base name of a well ID (schema.SafeFileName).
+func safeName(id string) string { return schema.SafeFileName(id) }
 
 // assignNames gives each file a unique output base name in input order:
 // the first well to claim a name keeps it, later ones get -2, -3, ...
@@ -317,7 +292,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	formats := fset.String("format", "svg,pdf,png", "comma-separated output formats: svg, pdf, png")
 	pageName := fset.String("page", "", "page size: letter, tabloid, a4 or a3 (default letter, or the project's)")
 	landscape := fset.Bool("landscape", false, "turn the page to landscape")
-	scaleText := fset.String("scale", "", "vertical scale, such as 1in=5ft or 1:50 (default: automatic)")
+	scaleText := fset.String("scale", "", "vertical scale, such as 1in=5ft or 1:50, or fit for one sheet (default: automatic)")
 	strict := fset.Bool("strict", false, "refuse to draw a well with unwaived error findings")
 	profilePath := fset.String("profile", "", "rule profile TOML (default: the project's, else the defaults)")
 	yieldsPath := fset.String("yields", "", "TOML file with a [yields] table overriding the default yields")

@@ -16,6 +16,7 @@ import (
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/table"
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/exchange"
 	"github.com/tremie-dev/tremie/schema/project"
 	"github.com/tremie-dev/tremie/schema/rules"
 )
@@ -23,7 +24,7 @@ import (
 func init() {
 	register(&command{
 		name:    "table",
-		summary: "write a project's construction summary table (--format csv|xlsx|md)",
+		summary: "write a project's construction summary table (--format csv|xlsx|md), or its wells in the import layout (import-xlsx)",
 		run:     runTable,
 	})
 }
@@ -31,10 +32,10 @@ func init() {
 func runTable(args []string, stdout, stderr io.Writer) int {
 	fset := flag.NewFlagSet("table", flag.ContinueOnError)
 	fset.SetOutput(stderr)
-	format := fset.String("format", "csv", "csv, xlsx or md")
+	format := fset.String("format", "csv", "csv, xlsx, md, or import-xlsx (the wells in tremie import's layout)")
 	outFile := fset.String("o", "", "output file (default: stdout for csv and md, OUTPUT/summary.xlsx for xlsx)")
 	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie table PROJECT_DIR [--format csv|xlsx|md] [-o FILE]")
+		fmt.Fprintln(stderr, "usage: tremie table PROJECT_DIR [--format csv|xlsx|md|import-xlsx] [-o FILE]")
 		fset.PrintDefaults()
 	}
 	rest, err := parseInterleaved(fset, args)
@@ -46,8 +47,8 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 		fset.Usage()
 		return exitUsage
 	}
-	if *format != "csv" && *format != "xlsx" && *format != "md" {
-		fmt.Fprintf(stderr, "tremie table: --format must be csv, xlsx or md, not %q\n", *format)
+	if *format != "csv" && *format != "xlsx" && *format != "md" && *format != "import-xlsx" {
+		fmt.Fprintf(stderr, "tremie table: --format must be csv, xlsx, md or import-xlsx, not %q\n", *format)
 		return exitUsage
 	}
 	pw, code := loadProjectWells(rest[0], stderr)
@@ -61,6 +62,22 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 		err = tb.CSV(&buf)
 	case "md":
 		err = tb.Markdown(&buf)
+	case "import-xlsx":
+		var files []string
+		for _, e := range pw.entries {
+			if e.Well != nil {
+				files = append(files, e.File)
+			}
+		}
+		var wb *exchange.Workbook
+		if wb, err = exchange.Layout(files); err == nil {
+			var data []byte
+			data, err = wb.XLSX(pw.date())
+			buf.Write(data)
+		}
+		if *outFile == "" {
+			*outFile = filepath.Join(pw.proj.Output, "import.xlsx")
+		}
 	case "xlsx":
 		var data []byte
 		data, err = tb.XLSX(pw.proj.Name, pw.date())

@@ -2,7 +2,6 @@ package quantity
 
 import (
 	"math"
-	"os"
 
 	"github.com/tremie-dev/tremie/schema"
 )
@@ -24,7 +23,7 @@ import (
 // named it for its yields. Every problem of the file is reported, sorted,
 // in one schema.ErrorList.
 func LoadYields(path string) (*Yields, error) {
-	data, err := os.ReadFile(path)
+	data, err := schema.ReadInput(path, schema.MaxTextFile)
 	if err != nil {
 		return nil, schema.ErrorList{schema.ReadError(path, "yields", err)}
 	}
