@@ -437,6 +437,9 @@ func (r *reader) fill(t *table, w *Well) Fill {
 	if y, ok := t.positive("yield"); ok {
 		f.Yield = VolumeFrom(y, u.Volume)
 	}
+	if d, ok := t.positive("density"); ok {
+		f.Density = SlurryDensityFrom(d, u)
+	}
 	for _, tt := range t.list("tag") {
 		tag := Tag{Pos: r.at(tt.path), Path: tt.path}
 		if _, ok := tt.m["after_bags"]; !ok {
