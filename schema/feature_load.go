@@ -63,7 +63,6 @@ func (r *reader) features(root *table, w *Well) {
 	}
 }
 
-
 func (r *reader) orientation(t *table) Orientation {
 	defer t.done()
 	o := Orientation{North: NorthReference(t.oneOf("north")), Given: true, Pos: r.at(t.path)}
