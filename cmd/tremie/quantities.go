@@ -3,16 +3,14 @@ package main
 import (
 	"encoding/csv"
 	"encoding/json"
-	"flag"
 	"fmt"
-	"github.com/tremie-dev/tremie/schema/project"
 	"io"
 	"math"
-	"sort"
 	"strconv"
 	"strings"
 	"text/tabwriter"
 
+	"github.com/tremie-dev/tremie/render/pipeline"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
@@ -40,98 +38,59 @@ type wellQuantities struct {
 }
 
 func runQuantities(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("quantities", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	format := fset.String("format", "text", "output format: text, json or csv")
-	contingency := fset.Float64("contingency", 0, "percentage added to the project totals when ordering")
-	yieldsFile := fset.String("yields", "", "TOML file with a [yields] table overriding the default yields")
-	profileFile := fset.String("profile", "", "rule profile TOML setting the reconciliation thresholds")
-	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie quantities [--format text|json|csv] [--contingency PCT] [--yields FILE] [--profile FILE] FILE|DIR...")
-		fset.PrintDefaults()
-	}
-	paths, err := parseInterspersed(fset, args)
-	if err != nil {
-		return exitUsage
+	fset := newFlags("quantities", stdout, stderr)
+	format := fset.String("format", "text", "output `format`: text, json or csv")
+	contingency := fset.Float64("contingency", 0, "`percentage` added to the project totals when ordering")
+	yieldsFile := fset.String("yields", "", "TOML `file` with a [yields] table overriding the yields (default: the project's)")
+	profileFile := fset.String("profile", "", "rule profile TOML `file` setting the reconciliation thresholds (default: the project's)")
+	paths, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
 	switch *format {
 	case "text", "json", "csv":
 	default:
-		fmt.Fprintf(stderr, "tremie quantities: unknown format %q (text, json or csv)\n", *format)
-		return exitUsage
+		return fset.usageError("unknown format %q (text, json or csv)", *format)
 	}
 	if *contingency < 0 || *contingency > 1000 || math.IsNaN(*contingency) {
-		fmt.Fprintf(stderr, "tremie quantities: --contingency %v is not a percentage between 0 and 1000\n", *contingency)
-		return exitUsage
+		return fset.usageError("--contingency %v is not a percentage between 0 and 1000", *contingency)
 	}
 	if len(paths) == 0 {
-		fset.Usage()
-		return exitUsage
+		return fset.usageError("name at least one well file or directory")
 	}
-	// A project directory names its wells, profile and yields file; the
-	// flags win over the project's.
-	in, errs := collectInputs(paths)
-	if *yieldsFile == "" {
-		*yieldsFile = in.yields
-	}
-	if *profileFile == "" {
-		*profileFile = in.profile
-	}
-	yields := quantity.DefaultYields()
-	if *yieldsFile != "" {
-		if yields, err = quantity.LoadYields(*yieldsFile); err != nil {
-			fmt.Fprintf(stderr, "tremie quantities: %v\n", err)
-			return exitInput
-		}
-	}
-	var prof *rules.Profile
-	if *profileFile != "" {
-		if prof, err = rules.LoadProfile(*profileFile); err != nil {
-			fmt.Fprintf(stderr, "tremie quantities: %v\n", err)
-			return exitInput
-		}
-	}
-
-	code := exitOK
-	files := in.files
-	for _, e := range errs {
-		fmt.Fprintf(stderr, "tremie quantities: %v\n", e)
-		code = exitInput
+	run, code, ok := resolve("quantities", paths, pipeline.Options{Profile: *profileFile, Yields: *yieldsFile}, stderr)
+	if !ok {
+		return code
 	}
 	var wells []wellQuantities
-	for _, f := range files {
-		w, err := schema.LoadFile(f)
-		if err != nil {
-			fmt.Fprintln(stderr, err)
+	var reports []*quantity.Report
+	for _, w := range run.PrepareAll(pipeline.ReconcileRules, "quantifying") {
+		if w.Err != nil {
+			printErr(stderr, "quantities", w.Err)
 			code = exitInput
 			continue
 		}
-		project.Apply(in.projects[f], w)
-		// the checks of placed amounts and tags, with the same yields
-		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields), Findings: rules.CheckReconcile(w, prof, yields)}
+		wq := wellQuantities{File: w.Path, Report: w.Quantities, Findings: w.Findings}
 		for _, r := range wq.Report.Rows {
 			if r.Err != nil {
-				fmt.Fprintf(stderr, "%s:%d: %v\n", f, w.Line(r.Fill.Path), r.Err)
+				fmt.Fprintf(stderr, "%s:%d: %v\n", w.Path, w.Well.Line(r.Fill.Path), r.Err)
 				if code == exitOK {
 					code = exitFindings
 				}
 			}
 		}
 		wells = append(wells, wq)
+		reports = append(reports, w.Quantities)
 	}
-	if len(files) == 0 && len(errs) == 0 {
-		fmt.Fprintln(stderr, "tremie quantities: no well files found")
-		return exitInput
-	}
-	totals := projectTotals(wells, *contingency)
+	totals := quantity.Totals(reports, *contingency)
 	var werr error
 	switch *format {
 	case "json":
-		werr = writeQuantitiesJSON(stdout, wells, totals, *contingency)
+		werr = writeQuantitiesJSON(stdout, wells, totals, *contingency, run.ProfileLabels())
 	case "csv":
-		werr = writeQuantitiesCSV(stdout, wells, totals)
+		werr = writeQuantitiesCSV(stdout, wells, totals, run.ProfileLabels())
 	default:
-		werr = writeQuantitiesText(stdout, wells, totals, *contingency)
+		werr = writeQuantitiesText(stdout, wells, totals, *contingency, run.ProfileLabels())
 	}
 	if werr != nil {
 		fmt.Fprintf(stderr, "tremie quantities: writing the report: %v\n", werr)
@@ -140,106 +99,11 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 	return code
 }
 
-// parseInterspersed parses flags that may come before, between or after
-// the file arguments.
-func parseInterspersed(fset *flag.FlagSet, args []string) ([]string, error) {
-	var paths []string
-	for {
-		if err := fset.Parse(args); err != nil {
-			return nil, err
-		}
-		rest := fset.Args()
-		if len(rest) == 0 {
-			return paths, nil
-		}
-		if rest[0] == "--" {
-			return append(paths, rest[1:]...), nil
-		}
-		paths = append(paths, rest[0])
-		args = rest[1:]
-	}
-}
-
-// total is one material line of the project order: one material with one
-// bag (the same yield per bag and bag mass) across the wells.
-type total struct {
-	Material   schema.Material
-	Yield      quantity.Yield
-	HasYield   bool
-	Units      schema.Units // the first well's, for display
-	Calculated schema.Volume
-	BagsNeeded int // the sum of each interval's bags, each rounded up
-	BagsOrder  int // ceil(BagsNeeded x (1 + contingency))
-	BagsPlaced float64
-	Intervals  int
-}
-
-// projectTotals sums each material over the wells, one line per material
-// and bag. Bags to order are the sum of each interval's bags (each rounded
-// up, since an opened bag rarely travels to the next well) plus the
-// contingency, rounded up: never fewer than the intervals need.
-func projectTotals(wells []wellQuantities, contingency float64) []*total {
-	type key struct {
-		m       schema.Material
-		y, mass float64
-	}
-	byKey := map[key]*total{}
-	var order []*total
-	for _, wq := range wells {
-		for _, r := range wq.Report.Rows {
-			if r.Err != nil {
-				continue
-			}
-			k := key{m: r.Fill.Material}
-			if r.HasYield {
-				k.y, k.mass = float64(r.Yield.Volume), float64(r.Yield.BagMass)
-			}
-			t := byKey[k]
-			if t == nil {
-				t = &total{Material: r.Fill.Material, Yield: r.Yield, HasYield: r.HasYield, Units: wq.Report.Well.Units}
-				byKey[k] = t
-				order = append(order, t)
-			}
-			t.Calculated += r.Calculated
-			t.BagsNeeded += r.BagsNeeded
-			t.BagsPlaced += r.BagsPlaced
-			t.Intervals++
-		}
-	}
-	rank := map[schema.Material]int{}
-	for i, m := range schema.Materials {
-		rank[m] = i
-	}
-	sort.SliceStable(order, func(i, j int) bool {
-		a, b := order[i], order[j]
-		if a.Material != b.Material {
-			return rank[a.Material] < rank[b.Material]
-		}
-		if a.Yield.BagMass != b.Yield.BagMass {
-			return a.Yield.BagMass < b.Yield.BagMass
-		}
-		return a.Yield.Volume < b.Yield.Volume
-	})
-	for _, t := range order {
-		if t.HasYield {
-			t.BagsOrder = ceilBags(float64(t.BagsNeeded) * (1 + contingency/100))
-		}
-	}
-	return order
-}
-
-// ceilBags rounds a bag count up, forgiving float noise on exact counts.
-func ceilBags(n float64) int {
-	if n <= 0 {
-		return 0
-	}
-	return int(math.Ceil(n - 1e-6))
-}
-
 // --- text ---
 
-func writeQuantitiesText(w io.Writer, wells []wellQuantities, totals []*total, contingency float64) error {
+func writeQuantitiesText(w io.Writer, wells []wellQuantities, totals []*quantity.Total, contingency float64, profiles []string) error {
 	ew := &errWriter{w: w}
+	fmt.Fprintf(ew, "Reconciliation checked with %s.\n\n", strings.Join(profiles, "; "))
 	for i, wq := range wells {
 		if i > 0 {
 			fmt.Fprintln(ew)
@@ -355,7 +219,7 @@ func yieldNotes(r *quantity.Report) []string {
 	return out
 }
 
-func writeTotalsText(w io.Writer, totals []*total, contingency float64) {
+func writeTotalsText(w io.Writer, totals []*quantity.Total, contingency float64) {
 	fmt.Fprintf(w, "Project totals (bags to order include a %s %% contingency)\n", schema.TrimFloat(contingency, 2))
 	if len(totals) == 0 {
 		fmt.Fprintln(w, "  no interval could be computed")
@@ -398,6 +262,7 @@ func (e *errWriter) Write(p []byte) (int, error) {
 
 type jsonQuantities struct {
 	Caution     string          `json:"caution"`
+	Profiles    []string        `json:"profiles"` // the profiles in force: "default thresholds" or "profile NAME"
 	Contingency float64         `json:"contingency_pct"`
 	Wells       []jsonWell      `json:"wells"`
 	Totals      []jsonTotal     `json:"totals"`
@@ -474,8 +339,8 @@ func r4(v float64) float64 { return math.Round(v*1e4) / 1e4 }
 
 func ptr[T any](v T) *T { return &v }
 
-func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*total, contingency float64) error {
-	out := jsonQuantities{Caution: quantitiesCaution, Contingency: contingency, Wells: []jsonWell{}, Totals: []jsonTotal{}, Findings: []rules.Finding{}}
+func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*quantity.Total, contingency float64, profiles []string) error {
+	out := jsonQuantities{Caution: quantitiesCaution, Profiles: profiles, Contingency: contingency, Wells: []jsonWell{}, Totals: []jsonTotal{}, Findings: []rules.Finding{}}
 	for _, wq := range wells {
 		r := wq.Report
 		u := r.Well.Units
@@ -555,7 +420,7 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*total, c
 var quantitiesCSVHeader = []string{"kind", "file", "well", "fill", "material", "within", "top", "bottom", "depth_unit",
 	"calculated", "volume_unit", "yield", "yield_basis", "bag_mass", "mass_unit", "bags_needed", "bags_to_order", "bags_placed", "placed", "ratio", "note"}
 
-func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*total) error {
+func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*quantity.Total, profiles []string) error {
 	cw := csv.NewWriter(w)
 	cw.Write(quantitiesCSVHeader)
 	num := func(v float64) string { return strconv.FormatFloat(r4(v), 'f', -1, 64) }
@@ -613,6 +478,9 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*total) er
 		}
 		cw.Write(rec)
 	}
+	prof := make([]string, len(quantitiesCSVHeader))
+	prof[0], prof[20] = "profile", strings.Join(profiles, "; ")
+	cw.Write(prof)
 	caution := make([]string, len(quantitiesCSVHeader))
 	caution[0], caution[20] = "caution", quantitiesCaution
 	cw.Write(caution)
