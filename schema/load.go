@@ -7,6 +7,8 @@ import (
 	"strings"
 
 	"github.com/BurntSushi/toml"
+
+	"github.com/tremie-dev/tremie/schema/crs"
 )
 
 // LoadFile reads and checks one well file. A rejected file yields an
@@ -168,6 +170,7 @@ func (r *reader) well(root *table) *Well {
 	if t := root.sub("surface"); t != nil {
 		w.Surface = r.surface(t, w.Units)
 	}
+	r.features(root, w)
 	for _, t := range root.list("waiver") {
 		wv := Waiver{Rule: t.reqStr("rule"), Reason: t.reqStr("reason"), ApprovedBy: t.reqStr("approved_by"), Date: t.date("date"), Pos: r.at(t.path)}
 		t.done()
@@ -205,7 +208,12 @@ func (r *reader) units(t *table, root *table) Units {
 
 func (r *reader) location(t *table) Location {
 	defer t.done()
-	l := Location{Description: t.str("description"), System: t.str("system")}
+	l := Location{Description: t.str("description"), System: t.str("system"), CRS: t.str("crs")}
+	if l.CRS != "" {
+		if _, err := crs.Parse(l.CRS); err != nil {
+			r.errAt(t.keyPath("crs"), "%v", err)
+		}
+	}
 	opt := func(k string) *float64 {
 		if v, ok := t.num(k); ok {
 			return &v

@@ -50,6 +50,12 @@ type Well struct {
 	Surface     Surface
 	Waivers     []Waiver
 
+	// Open-hole wall features and the images they were picked on
+	// (feature.go); Orientation is their azimuth reference.
+	Orientation Orientation
+	WallImages  []WallImage
+	Features    []Feature // as written
+
 	// keys locates key paths in the file text; see Line and HasKey.
 	keys *keyIndex
 }
@@ -140,7 +146,9 @@ type Drilling struct {
 }
 
 // Location is where the well stands. Coordinates are kept as written; the
-// reference system is free text (e.g. "NAD83 / UTM zone 11N").
+// reference system is free text (e.g. "NAD83 / UTM zone 11N") and, for
+// conversion to longitude and latitude, an EPSG code (CRS, "EPSG:2227")
+// that the loader has checked package crs knows.
 type Location struct {
 	Description string
 	Easting     *float64
@@ -148,6 +156,7 @@ type Location struct {
 	Latitude    *float64
 	Longitude   *float64
 	System      string
+	CRS         string
 }
 
 // Elevation holds the surveyed elevations, in depth units converted to

@@ -55,30 +55,43 @@ func writeRule(b *strings.Builder, r *rules.Rule) {
 	fmt.Fprintf(b, "\n%s  %s  %s\n", r.ID, r.Severity, r.Title)
 	wrap(b, r.Doc, "    ")
 	wrap(b, "source: "+r.Source, "    ")
+	if len(r.Purposes) > 0 {
+		wrap(b, "applies by default to "+rules.PurposeList(r.Purposes)+" wells, and to wells whose purpose is not given; "+
+			"a profile may switch it on for other purposes", "    ")
+	}
 	for _, p := range r.Params {
-		wrap(b, fmt.Sprintf("%s = %s", p.Name, paramDefault(p)), "    param ")
+		def := paramDefault(p.Kind, p.Default, p.DefaultFt)
+		if p.Default == 0 && p.Fallback != "" {
+			def = "as " + p.Fallback
+		} else if p.Default == 0 {
+			def = "none"
+		}
+		wrap(b, fmt.Sprintf("%s = %s", p.Name, def), "    param ")
 		wrap(b, p.Doc+"; source: "+p.Source, "          ")
+		for _, d := range p.ByPurpose {
+			wrap(b, fmt.Sprintf("%s: %s; source: %s", rules.PurposeList(d.Purposes), paramDefault(p.Kind, d.Default, d.DefaultFt), d.Source), "          for ")
+		}
 	}
 }
 
-// paramDefault writes a parameter's default as the two unit systems see
-// it: "2 ft (wells in ft), 0.6 m (wells in m)".
-func paramDefault(p rules.Param) string {
-	switch p.Kind {
+// paramDefault writes a default as the two unit systems see it:
+// "2 ft (wells in ft), 0.6 m (wells in m)".
+func paramDefault(kind rules.ParamKind, def, defFt float64) string {
+	switch kind {
 	case rules.LengthParam:
-		ft := p.DefaultFt
+		ft := defFt
 		if ft == 0 {
-			ft = schema.Length(p.Default).Feet()
+			ft = schema.Length(def).Feet()
 		}
-		return fmt.Sprintf("%s ft (wells in ft), %s m (wells in m)", schema.TrimFloat(ft, 3), schema.TrimFloat(p.Default, 3))
+		return fmt.Sprintf("%s ft (wells in ft), %s m (wells in m)", schema.TrimFloat(ft, 3), schema.TrimFloat(def, 3))
 	case rules.DiameterParam:
-		in := p.DefaultFt
+		in := defFt
 		if in == 0 {
-			in = schema.Diameter(p.Default).Inches()
+			in = schema.Diameter(def).Inches()
 		}
-		return fmt.Sprintf("%s in (wells in ft), %s mm (wells in m)", schema.TrimFloat(in, 3), schema.TrimFloat(p.Default, 1))
+		return fmt.Sprintf("%s in (wells in ft), %s mm (wells in m)", schema.TrimFloat(in, 3), schema.TrimFloat(def, 1))
 	}
-	return schema.TrimFloat(p.Default, 3)
+	return schema.TrimFloat(def, 3)
 }
 
 // wrap writes text in lines of at most 78 columns, the first prefixed

@@ -72,7 +72,7 @@ func (w *Well) Prepare(checks Checks) {
 	project.Apply(s.Project, w.Well)
 	w.Quantities = quantity.Compute(w.Well, s.Yields)
 	if checks == ReconcileRules {
-		w.Findings = rules.CheckReconcile(w.Well, s.Profile, s.Yields)
+		w.Findings = rules.Run(w.Well, rules.Select(rules.Reconciling), s.Profile)
 	} else {
 		w.Findings = rules.Check(w.Well, s.Profile)
 	}

@@ -36,7 +36,7 @@ func crowdedWell() (*schema.Well, Inputs) {
 	}
 	fs := rules.Check(w, nil)
 	for i := 0; i < 40; i++ {
-		fs = append(fs, rules.Finding{Rule: fmt.Sprintf("R-%02d", i), Severity: rules.Warning, Level: "warning", Line: i + 1,
+		fs = append(fs, rules.Finding{Rule: fmt.Sprintf("R-%02d", i), Severity: rules.Warning, Line: i + 1,
 			Message: "a warning long enough to take two lines of the notes area on any sheet, or so"})
 	}
 	return w, Inputs{Findings: fs, Quantities: quantity.Compute(w, nil)}

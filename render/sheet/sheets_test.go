@@ -145,7 +145,7 @@ func TestMarkupInInputIsEscaped(t *testing.T) {
 // Same input, same bytes: the layout and the SVG and PDF written from it.
 func TestDeterministic(t *testing.T) {
 	w := thinWell()
-	fs := []rules.Finding{{Rule: "X-1", Severity: rules.Error, Level: "error", Line: 3, Message: "a finding"}}
+	fs := []rules.Finding{{Rule: "X-1", Severity: rules.Error, Line: 3, Message: "a finding"}}
 	var prev [][]byte
 	for run := 0; run < 2; run++ {
 		doc := layoutOf(t, w, Inputs{Findings: fs}, Options{})
@@ -173,7 +173,7 @@ func TestDeterministic(t *testing.T) {
 // finding; a waived one is listed as waived and not stamped.
 func TestFindingsOnSheet(t *testing.T) {
 	w := simpleWell(30)
-	errF := rules.Finding{Rule: "SEAL-ABOVE-PACK", Severity: rules.Error, Level: "error", Line: 40, Message: "no seal above the pack"}
+	errF := rules.Finding{Rule: "SEAL-ABOVE-PACK", Severity: rules.Error, Line: 40, Message: "no seal above the pack"}
 	doc := layoutOf(t, w, Inputs{Findings: []rules.Finding{errF}}, Options{})
 	p := doc.Pages[0]
 	if len(boxes(p, "stamp:not-final")) != 1 || !strings.Contains(strings.Join(texts(p, "stamp-text"), ""), "NOT FINAL") {
@@ -200,7 +200,7 @@ func TestFindingsOnSheet(t *testing.T) {
 func TestManyFindingsContinueOnNotesSheet(t *testing.T) {
 	var fs []rules.Finding
 	for i := 0; i < 60; i++ {
-		fs = append(fs, rules.Finding{Rule: fmt.Sprintf("R-%02d", i), Severity: rules.Warning, Level: "warning", Line: i + 1,
+		fs = append(fs, rules.Finding{Rule: fmt.Sprintf("R-%02d", i), Severity: rules.Warning, Line: i + 1,
 			Message: "a warning long enough to take two lines of the notes area on a letter sheet, or so"})
 	}
 	doc := layoutOf(t, simpleWell(30), Inputs{Findings: fs}, Options{})

@@ -14,6 +14,7 @@ func Apply(p *Project, w *schema.Well) {
 	fill(&w.CheckedBy, p.TitleBlock.CheckedBy)
 	fill(&w.Elevation.Datum, p.Datum)
 	fill(&w.Location.System, p.CoordinateSystem)
+	fill(&w.Location.CRS, p.CRS)
 }
 
 func fill(dst *string, v string) {

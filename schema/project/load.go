@@ -14,6 +14,7 @@ import (
 	"github.com/BurntSushi/toml"
 
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/crs"
 )
 
 // ErrNoProject is returned (wrapped) by Load when the directory has no
@@ -30,6 +31,7 @@ type fileData struct {
 		Units            string `toml:"units"`
 		Datum            string `toml:"datum"`
 		CoordinateSystem string `toml:"coordinate_system"`
+		CRS              string `toml:"crs"`
 		Page             string `toml:"page"`
 		Landscape        bool   `toml:"landscape"`
 		Profile          string `toml:"profile"`
@@ -104,6 +106,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 		Site:             pr.Site,
 		Datum:            pr.Datum,
 		CoordinateSystem: pr.CoordinateSystem,
+		CRS:              pr.CRS,
 		Page:             pr.Page,
 		Landscape:        pr.Landscape,
 		Profile:          pr.Profile,
@@ -117,6 +120,11 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 		p.Units = schema.DepthUnit(pr.Units)
 	default:
 		return nil, bad("project.units", "units must be \"ft\" or \"m\", not %q", pr.Units)
+	}
+	if pr.CRS != "" {
+		if _, err := crs.Parse(pr.CRS); err != nil {
+			return nil, bad("project.crs", "%v", err)
+		}
 	}
 	if md.IsDefined("project", "wells") && strings.TrimSpace(pr.Wells) == "" {
 		return nil, bad("project.wells", "wells must name a directory or a glob, e.g. \"wells\" or \"wells/*.toml\"")

@@ -35,10 +35,11 @@ type Project struct {
 	// metres when they differ.
 	Units schema.DepthUnit
 
-	// Datum and CoordinateSystem fill a well's elevation datum and
-	// location system when the well leaves them blank.
+	// Datum, CoordinateSystem and CRS fill a well's elevation datum,
+	// location system and EPSG code when the well leaves them blank.
 	Datum            string
 	CoordinateSystem string
+	CRS              string // an EPSG code, "EPSG:2227"; checked by package crs
 
 	Page      string // page template name, "" for the default
 	Landscape bool

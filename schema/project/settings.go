@@ -19,6 +19,7 @@ func (p *Project) Settings() []byte {
 	line("units", string(p.Units))
 	line("datum", p.Datum)
 	line("coordinate_system", p.CoordinateSystem)
+	line("crs", p.CRS)
 	line("page", p.Page)
 	line("landscape", fmt.Sprint(p.Landscape))
 	line("profile", p.Profile)

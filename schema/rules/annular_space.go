@@ -7,22 +7,37 @@ import (
 	"github.com/tremie-dev/tremie/schema"
 )
 
+// annularSpaceSource is where the 2-in figure comes from.
+const annularSpaceSource = "California DWR Bulletin 74-90 §9.E (monitoring wells) and 74-81 §9 (water wells): at least 2 in " +
+	"of seal between every casing and the borehole wall and between casings in one hole; ASTM D5092 (monitoring wells): " +
+	"a hole at least 4 in larger than the casing OD (from memory). Local codes differ (some accept about 1.8 in for 2-in " +
+	"monitoring wells, 1.5 in for domestic wells in rock): set min per purpose in the profile"
+
 func init() {
 	register(&Rule{
 		ID:    "ANNULAR-SPACE",
 		Title: "Enough annular space where pack or seal is placed",
-		Doc: "Filter pack, bentonite and grout need room to fall or be tremied into place around the pipe " +
-			"without bridging. Where one of them is placed, the radial space between the borehole wall (or an " +
-			"outer casing's bore) and the pipe inside must be at least the minimum. Nested strings count as one " +
-			"bundle of pipes side by side, centred: the space is (hole - sum of their ODs) / 2; the space between " +
-			"the strings themselves is not checked.",
+		Doc: "Filter pack, bentonite and grout need room to fall or be tremied into place around each pipe " +
+			"without bridging, and a seal must be thick enough all round. Where one of them is placed, the radial " +
+			"space between the borehole wall (or an outer casing's bore) and the pipe inside must be at least the " +
+			"minimum. Several strings in one hole (a nested well) stand side by side: at best the pipes and the " +
+			"gaps between them and the wall line up along one diameter with every gap equal, so each gap is " +
+			"(hole - sum of the ODs) / (strings + 1); that gap must also reach the minimum, which names the two " +
+			"strings and the depth. Around a screen the pack may need more room than a seal (min_pack).",
 		Severity: Error,
-		Source: "common practice; many monitoring-well codes ask for a hole at least 4 in larger than the casing " +
-			"OD, i.e. 2 in of annular space (e.g. ASTM D5092, from memory)",
+		Source:   annularSpaceSource,
 		Params: []Param{{
 			Name: "min", Kind: DiameterParam, Default: 50, DefaultFt: 2,
-			Doc:    "minimum radial annular space",
-			Source: "common practice (2 in / 50 mm)",
+			Doc:    "minimum radial space between a pipe and the wall or outer casing, and between pipes in one hole",
+			Source: "DWR Bulletin 74-90 §9.E and 74-81 §9: 2 in (50 mm for wells in metres)",
+		}, {
+			Name: "min_pack", Kind: DiameterParam, Fallback: "min",
+			Doc:    "minimum radial space where filter pack or fine sand is placed (where not set: min)",
+			Source: "as min, except for supply wells",
+			ByPurpose: []PurposeDefault{{
+				Purposes: supplyWells, Default: 75, DefaultFt: 3,
+				Source: "US Army Corps of Engineers TI 814-01 (1998): at least 3 in of filter pack around a supply-well screen (from memory; 75 mm for wells in metres)",
+			}},
 		}},
 		Run: runAnnularSpace,
 	})
@@ -30,11 +45,14 @@ func init() {
 
 func runAnnularSpace(p *Pass) {
 	w := p.Well
-	minSpace := schema.Diameter(p.Param("min"))
+	minSeal := schema.Diameter(p.Param("min"))
+	minPack := schema.Diameter(p.Param("min_pack"))
 	type fault struct {
 		fill  *schema.Fill
 		space schema.Diameter
-		outer string
+		need  schema.Diameter
+		outer string // "the 8 in hole" or `casing "surface" (ID 9.9 in)`
+		bore  schema.Diameter
 		inner []pipe
 	}
 	faults := map[string]fault{}
@@ -72,8 +90,12 @@ func runAnnularSpace(p *Pass) {
 			if len(inner) == 0 {
 				continue // no pipe inside: the fill fills the hole, not an annulus
 			}
-			space := (outerD - sumOD(inner)) / 2
-			if space <= 0 || space >= minSpace-1e-9 {
+			need := minSeal
+			if isPack(f) {
+				need = minPack
+			}
+			space := (outerD - sumOD(inner)) / schema.Diameter(len(inner)+1)
+			if space <= 0 || space >= need-1e-9 {
 				continue // a pipe that does not fit is PIPE-FITS-HOLE's or CASING-CLEARANCE's finding
 			}
 			outer := "the " + p.Dia(cs.Hole) + " hole"
@@ -81,7 +103,7 @@ func runAnnularSpace(p *Pass) {
 				outer = casing.Label() + " (ID " + p.Dia(casing.ID) + ")"
 			}
 			k := fmt.Sprintf("%s|%.4f", f.Path, float64(space))
-			faults[k] = fault{f, space, outer, inner}
+			faults[k] = fault{f, space, need, outer, outerD, inner}
 			t.add(k, seg)
 		}
 	}
@@ -91,7 +113,26 @@ func runAnnularSpace(p *Pass) {
 		for _, q := range f.inner {
 			ods = append(ods, q.Owner()+" (OD "+p.Dia(q.OD)+")")
 		}
-		p.Reportf(f.fill.Path, depths(iv), "annular space for %s at %s is %s: %s in %s; at least %s is needed",
-			material(f.fill.Material), p.span(iv), p.Dia(f.space), strings.Join(ods, " and "), f.outer, p.Dia(minSpace))
+		if len(f.inner) == 1 {
+			p.Reportf(f.fill.Path, depths(iv), "annular space for %s at %s is %s: %s in %s; at least %s is needed",
+				material(f.fill.Material), p.span(iv), p.Dia(f.space), ods[0], f.outer, p.Dia(f.need))
+			return
+		}
+		n := schema.Diameter(len(f.inner) + 1)
+		p.Reportf(f.fill.Path, depths(iv), "%s at %s: %s stand side by side in %s; even spaced evenly, the gap between %s and from each to the wall is %s; at least %s is needed between casings and to the wall (a bore of at least %s)",
+			material(f.fill.Material), p.span(iv), strings.Join(ods, " and "), f.outer, pairNames(f.inner), p.Dia(f.space), p.Dia(f.need), p.Dia(sumOD(f.inner)+n*f.need))
 	})
+}
+
+// pairNames names the strings between which a gap is measured:
+// `string "A" and string "B"`.
+func pairNames(ps []pipe) string {
+	var names []string
+	for _, q := range ps {
+		names = append(names, q.Owner())
+	}
+	if len(names) == 2 {
+		return names[0] + " and " + names[1]
+	}
+	return "each of " + strings.Join(names, ", ")
 }

@@ -11,6 +11,7 @@ func init() {
 			"not so thick that it lengthens the monitored zone (the maximum).",
 		Severity: Warning,
 		Source:   "US EPA, RCRA Ground-Water Monitoring: Draft Technical Guidance (1992): 1 to 2 ft of fine sand above the filter pack",
+		Purposes: environmental,
 		Params: []Param{
 			{Name: "min", Kind: LengthParam, Default: 0.3, DefaultFt: 1, Doc: "minimum fine-sand thickness", Source: "US EPA 1992: 1 ft (0.3 m)"},
 			{Name: "max", Kind: LengthParam, Default: 0.6, DefaultFt: 2, Doc: "maximum fine-sand thickness", Source: "US EPA 1992: 2 ft (0.6 m)"},

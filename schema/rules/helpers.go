@@ -22,7 +22,7 @@ import (
 // that is milder: a rule that errs in one case and only warns in another
 // still honours a profile that turned it down to a warning.
 func (p *Pass) capped(sev Severity) Severity {
-	s := p.profile.severity(p.Rule)
+	s := p.profile.severityFor(p.Rule, p.Well.Purpose)
 	if sev < s {
 		return sev
 	}

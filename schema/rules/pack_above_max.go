@@ -10,11 +10,14 @@ func init() {
 			"much more than needed above the screen draws water from layers above the screened zone and can " +
 			"connect them. Measured from the screen top to the top of the pack and fine sand around it.",
 		Severity: Warning,
-		Source:   "US EPA, RCRA Ground-Water Monitoring: Draft Technical Guidance (1992): the packed length is the monitored zone; 5 ft (1.5 m) limit: common practice",
+		Source: "US EPA, RCRA Ground-Water Monitoring: Draft Technical Guidance (1992): the packed length is the monitored zone; " +
+			"UFGS 02525N (monitoring wells): the filter pack extends a limited height above the screen; the 5 ft (1.5 m) figure: common practice. " +
+			"Monitoring wells and piezometers only by default: a supply well's pack is meant to rise well above its screen (TM 5-813-1: at least 10 ft)",
+		Purposes: observationWells,
 		Params: []Param{{
 			Name: "max", Kind: LengthParam, Default: 1.5, DefaultFt: 5,
 			Doc:    "maximum height of pack and fine sand above the top of the screen",
-			Source: "common practice: 5 ft (1.5 m)",
+			Source: "common practice: 5 ft (1.5 m); US EPA 1992 and UFGS 02525N ask for a limited height without one number",
 		}},
 		Run: runPackAboveMax,
 	})

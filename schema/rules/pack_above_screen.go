@@ -16,6 +16,10 @@ func init() {
 			Name: "min", Kind: LengthParam, Default: 0.6, DefaultFt: 2,
 			Doc:    "minimum height of filter pack above the top of the screen",
 			Source: "US EPA 1992: 2 ft (0.6 m)",
+			ByPurpose: []PurposeDefault{{
+				Purposes: productionWells, Default: 3, DefaultFt: 10,
+				Source: "TM 5-813-1 / TI 814-01 (water supply): gravel pack at least 10 ft above the top of the screen (3 m for wells in metres)",
+			}},
 		}},
 		Run: runPackAboveScreen,
 	})

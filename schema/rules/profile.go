@@ -25,8 +25,9 @@ type Profile struct {
 	// Yields are the material yields the placement checks compare placed
 	// amounts with (a project's yields file); nil for the built-in ones.
 	Yields *quantity.Yields
-	// SanitarySeal, by purpose, in metres; read by the sanitary-seal rule.
-	SanitarySeal map[schema.Purpose]schema.Length
+	// ByPurpose holds what the profile sets for wells of one purpose only
+	// ([rule.RULE-ID.PURPOSE] or a group of purposes); see profile_purpose.go.
+	ByPurpose map[schema.Purpose]*purposeOverrides
 }
 
 // DefaultProfile is the profile with every default in force.

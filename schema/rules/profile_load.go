@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"os"
+	"path/filepath"
 	"sort"
 	"strings"
 
@@ -48,9 +49,11 @@ func ParseProfile(name string, data []byte) (*Profile, error) {
 }
 
 type profileReader struct {
-	file string
-	pos  map[string]schema.Position // key path -> line, column
-	errs schema.ErrorList
+	file   string
+	pos    map[string]schema.Position // key path -> line, column
+	errs   schema.ErrorList
+	groups map[string][]schema.Purpose // the profile's own [groups]
+	claims map[string]setting          // rule|purpose|key -> where it was set
 }
 
 func (r *profileReader) errAt(path, format string, args ...any) {
@@ -100,16 +103,20 @@ func (r *profileReader) number(path string, v any) (float64, bool) {
 
 func (r *profileReader) read(raw map[string]any) *Profile {
 	prof := &Profile{
-		Name:         "unnamed profile",
-		File:         r.file,
-		Values:       map[string]map[string]float64{},
-		Severities:   map[string]Severity{},
-		Off:          map[string]bool{},
-		SanitarySeal: map[schema.Purpose]schema.Length{},
+		Name:       profileNameOf(r.file),
+		File:       r.file,
+		Values:     map[string]map[string]float64{},
+		Severities: map[string]Severity{},
+		Off:        map[string]bool{},
 	}
 	if v, ok := raw["profile"]; ok {
 		if m, ok := r.tableOf("profile", v); ok {
 			r.header(prof, m)
+		}
+	}
+	if v, ok := raw["groups"]; ok {
+		if m, ok := r.tableOf("groups", v); ok {
+			r.readGroups(m)
 		}
 	}
 	numbers := r.hasNumbers(raw)
@@ -130,9 +137,9 @@ func (r *profileReader) read(raw map[string]any) *Profile {
 	}
 	for _, k := range sortedKeys(raw) {
 		switch k {
-		case "profile", "rule", "sanitary_seal":
+		case "profile", "rule", "sanitary_seal", "groups":
 		default:
-			r.errAt(k, "unknown key %q at top level (expected [profile], [rule.RULE-ID] or [sanitary_seal])", k)
+			r.errAt(k, "unknown key %q at top level (expected [profile], [groups], [rule.RULE-ID] or [sanitary_seal])", k)
 		}
 	}
 	return prof
@@ -173,12 +180,25 @@ func (r *profileReader) hasNumbers(raw map[string]any) bool {
 	}
 	rules, _ := raw["rule"].(map[string]any)
 	for _, v := range rules {
-		if m, ok := v.(map[string]any); ok {
-			for k := range m {
-				if k != "severity" {
-					return true
-				}
+		if m, ok := v.(map[string]any); ok && setsNumber(m) {
+			return true
+		}
+	}
+	return false
+}
+
+// setsNumber reports whether a rule table, or a purpose table in it, sets
+// anything but a severity.
+func setsNumber(m map[string]any) bool {
+	for k, v := range m {
+		if sub, ok := v.(map[string]any); ok {
+			if setsNumber(sub) {
+				return true
 			}
+			continue
+		}
+		if k != "severity" {
+			return true
 		}
 	}
 	return false
@@ -198,29 +218,33 @@ func (r *profileReader) rule(prof *Profile, id string, v any) {
 	for _, k := range sortedKeys(m) {
 		kp := path + "." + k
 		if k == "severity" {
-			switch m[k] {
-			case "error":
-				prof.Severities[id] = Error
-			case "warning":
-				prof.Severities[id] = Warning
-			case "off":
-				prof.Off[id] = true
-			default:
-				r.errAt(kp, "severity must be \"error\", \"warning\" or \"off\" (got %v)", m[k])
+			if sev, off, ok := r.severityValue(kp, m[k]); ok {
+				if off {
+					prof.Off[id] = true
+				} else {
+					prof.Severities[id] = sev
+				}
 			}
 			continue
 		}
 		prm, ok := rl.param(k)
+		if !ok && r.isPurposeOrGroup(k) {
+			if sub, isTable := m[k].(map[string]any); isTable {
+				r.purposeTable(prof, rl, k, sub)
+				continue
+			}
+			if len(rl.Params) == 1 {
+				// [rule.X] purpose = N: the rule's one parameter, for those purposes
+				r.purposeTable(prof, rl, k, map[string]any{rl.Params[0].Name: m[k]})
+				continue
+			}
+		}
 		if !ok {
 			r.errAt(kp, "rule %s has no parameter %q%s", id, k, rl.paramList())
 			continue
 		}
-		f, ok := r.number(kp, m[k])
+		f, ok := r.paramNumber(kp, prm, m[k])
 		if !ok {
-			continue
-		}
-		if prm.Kind == RatioParam && prm.Name == "min_retained" && f > 1 {
-			r.errAt(kp, "%s is a fraction from 0 to 1 (0.9 = 90 %%)", kp)
 			continue
 		}
 		if prof.Values[id] == nil {
@@ -230,32 +254,41 @@ func (r *profileReader) rule(prof *Profile, id string, v any) {
 	}
 }
 
+// sanitarySeal reads [sanitary_seal], the short form of
+// [rule.SANITARY-SEAL-DEPTH.PURPOSE] depth = N.
 func (r *profileReader) sanitarySeal(prof *Profile, m map[string]any) {
-	rl, _ := Lookup("SANITARY-SEAL-DEPTH")
+	rl, ok := Lookup("SANITARY-SEAL-DEPTH")
+	if !ok {
+		return
+	}
 	for _, k := range sortedKeys(m) {
 		kp := "sanitary_seal." + k
-		known := false
-		for _, p := range schema.Purposes {
-			known = known || string(p) == k
-		}
-		if !known {
-			var names []string
-			for _, p := range schema.Purposes {
-				names = append(names, string(p))
-			}
-			r.errAt(kp, "unknown purpose %q in [sanitary_seal] (one of: %s)", k, strings.Join(names, ", "))
+		if !isPurpose(k) {
+			r.errAt(kp, "unknown purpose %q in [sanitary_seal] (one of: %s)", k, purposeNames())
 			continue
 		}
-		if rl != nil {
-			if _, dup := prof.Values[rl.ID][k]; dup {
-				r.errAt(kp, "the %s seal depth is set twice: here and in [rule.%s]", k, rl.ID)
-				continue
+		f, ok := r.number(kp, m[k])
+		if ok && r.claim(rl.ID, schema.Purpose(k), "depth", kp, true) {
+			o := prof.overridesOf(schema.Purpose(k))
+			if o.Values[rl.ID] == nil {
+				o.Values[rl.ID] = map[string]float64{}
 			}
-		}
-		if f, ok := r.number(kp, m[k]); ok {
-			prof.SanitarySeal[schema.Purpose(k)] = schema.Length(prof.toModel(LengthParam, f))
+			o.Values[rl.ID]["depth"] = prof.toModel(LengthParam, f)
 		}
 	}
+}
+
+// profileNameOf names a profile by its file when [profile] gives no name:
+// "county" for county.profile.toml.
+func profileNameOf(file string) string {
+	base := filepath.Base(file)
+	for _, ext := range []string{".toml", ".profile"} {
+		base = strings.TrimSuffix(base, ext)
+	}
+	if base == "" || base == "." {
+		return "unnamed profile"
+	}
+	return base
 }
 
 // toModel converts a profile value to model units: lengths from the

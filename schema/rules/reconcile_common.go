@@ -5,7 +5,6 @@ package rules
 
 import (
 	"fmt"
-	"sort"
 
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/quantity"
@@ -16,47 +15,15 @@ const reconcileSources = "US EPA, RCRA Ground-Water Monitoring: Draft Technical 
 	"the volumes of filter pack and seal placed and explain any significant discrepancy; California DWR Bulletin " +
 	"74-90: check the depth of the top of the filter pack and verify its volume, to detect bridging"
 
-// ReconcileRules are the IDs of the reconciliation rules, sorted.
-var ReconcileRules = []string{"PLACED-VOLUME-HIGH", "PLACED-VOLUME-LOW", "TAG-EXPECTED-TOP", "TAG-FINAL-TOP"}
-
 // reconcileRun is the body of a reconciliation rule that needs the well's
 // quantities.
 type reconcileRun func(p *Pass, q *quantity.Report)
 
 // reconciling makes a rule's Run from its body. The quantities are those of
-// the check's yields (the built-in ones under Check, the given ones under
-// CheckReconcile; a fill's own yield key overrides them), computed once
-// for all the reconciliation rules.
+// the profile's yields (the built-in ones when it has none; a fill's own
+// yield key overrides them), computed once for all the rules of a run.
 func reconciling(run reconcileRun) func(*Pass) {
 	return func(p *Pass) { run(p, p.quantities()) }
-}
-
-// CheckReconcile runs only the reconciliation rules on a well, with the
-// quantities computed from the given yields (nil for the built-in ones),
-// the profile's thresholds (nil for the defaults) and the well's waivers.
-// The findings are sorted by line, then rule. It is Check for a report of
-// quantities made with a project's yields.
-func CheckReconcile(w *schema.Well, prof *Profile, y *quantity.Yields) []Finding {
-	if prof == nil {
-		prof = DefaultProfile()
-	}
-	var out []Finding
-	sh := &shared{yields: y}
-	for _, id := range ReconcileRules {
-		r, ok := Lookup(id)
-		if !ok {
-			continue
-		}
-		runOne(r, w, prof, sh, &out)
-	}
-	applyWaivers(w, out)
-	sort.SliceStable(out, func(i, j int) bool {
-		if out[i].Line != out[j].Line {
-			return out[i].Line < out[j].Line
-		}
-		return out[i].Rule < out[j].Rule
-	})
-	return out
 }
 
 // placedText says how much went in: "5 x 50-lb bag = 2.500 ft3 (18.70 gal)"

@@ -21,7 +21,8 @@ func init() {
 			Doc:    "largest accepted difference between a tag and the expected top",
 			Source: "common practice: 0.5 ft (0.15 m), the resolution of a weighted tape on a soft top",
 		}},
-		Run: reconciling(runTagExpectedTop),
+		Reconcile: true,
+		Run:       reconciling(runTagExpectedTop),
 	})
 	register(&Rule{
 		ID:    "TAG-FINAL-TOP",
@@ -36,7 +37,8 @@ func init() {
 			Doc:    "largest accepted difference between the final tag and the recorded top",
 			Source: "common practice: 0.5 ft (0.15 m), the resolution of a weighted tape on a soft top",
 		}},
-		Run: runTagFinalTop,
+		Reconcile: true,
+		Run:       runTagFinalTop,
 	})
 }
 

@@ -47,21 +47,27 @@ func TestReconcileMessages(t *testing.T) {
 	}
 }
 
-// CheckReconcile with the built-in yields finds what Check finds for these
-// rules; with a project's yields the ratio follows them: 5 bags at 0.9 ft3
+// The reconciliation rules run alone with the built-in yields find what
+// Check finds for them; with a project's yields the ratio follows them: 5 bags at 0.9 ft3
 // = 4.5 ft3 against 4.4568 ft3 is 101 %, no longer low (the grout, placed
 // by volume, is still 73 %).
-func TestCheckReconcile(t *testing.T) {
+func TestReconcileRulesAlone(t *testing.T) {
 	w, err := schema.LoadFile(filepath.Join("testdata", "PLACED-VOLUME-LOW", "fail.toml"))
 	if err != nil {
 		t.Fatal(err)
 	}
 	mine := map[string]bool{}
-	for _, id := range ReconcileRules {
-		if _, ok := Lookup(id); !ok {
-			t.Errorf("%s not registered", id)
+	for _, r := range Select(Reconciling) {
+		mine[r.ID] = true
+	}
+	// the rules that compare placed amounts and tags, and no other
+	for _, id := range []string{"PLACED-VOLUME-HIGH", "PLACED-VOLUME-LOW", "TAG-EXPECTED-TOP", "TAG-FINAL-TOP"} {
+		if !mine[id] {
+			t.Errorf("%s is not marked Reconcile", id)
 		}
-		mine[id] = true
+	}
+	if len(mine) != 4 {
+		t.Errorf("reconciliation rules: %v", mine)
 	}
 	var fromCheck []string
 	for _, f := range Check(w, nil) {
@@ -70,7 +76,7 @@ func TestCheckReconcile(t *testing.T) {
 		}
 	}
 	var fromReconcile []string
-	for _, f := range CheckReconcile(w, nil, nil) {
+	for _, f := range Run(w, Select(Reconciling), nil) {
 		fromReconcile = append(fromReconcile, f.Rule+" "+f.Message)
 	}
 	if strings.Join(fromCheck, "\n") != strings.Join(fromReconcile, "\n") || len(fromCheck) != 2 {
@@ -80,7 +86,7 @@ func TestCheckReconcile(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	got := CheckReconcile(w, nil, y)
+	got := Run(w, Select(Reconciling), &Profile{Yields: y})
 	if len(got) != 1 || !strings.Contains(got[0].Message, "neat cement") {
 		t.Errorf("with 0.9 ft3 sand: %v", got)
 	}

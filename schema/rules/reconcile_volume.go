@@ -20,7 +20,8 @@ func init() {
 			Doc:    "lowest acceptable ratio of placed to calculated volume",
 			Source: "common practice: 80 %, to allow for yields quoted loosely and for compaction",
 		}},
-		Run: reconciling(runPlacedVolumeLow),
+		Reconcile: true,
+		Run:       reconciling(runPlacedVolumeLow),
 	})
 	register(&Rule{
 		ID:    "PLACED-VOLUME-HIGH",
@@ -36,7 +37,8 @@ func init() {
 			Doc:    "highest acceptable ratio of placed to calculated volume",
 			Source: "common practice: 150 %, since augered and mud-rotary holes commonly take more than their nominal size",
 		}},
-		Run: reconciling(runPlacedVolumeHigh),
+		Reconcile: true,
+		Run:       reconciling(runPlacedVolumeHigh),
 	})
 }
 

@@ -38,7 +38,14 @@ type Rule struct {
 	Severity Severity // default severity
 	Source   string   // where its threshold or requirement comes from
 	Params   []Param  // thresholds a profile may set
-	Run      func(*Pass)
+	// Reconcile marks a rule that compares what was placed (amounts,
+	// tags) with the calculated quantities: the quantities report runs
+	// these rules alone, with the project's yields.
+	Reconcile bool
+	Run       func(*Pass)
+	// Purposes are the well purposes the rule applies to by default; nil
+	// for every well. A well whose purpose is not given is always checked.
+	Purposes []schema.Purpose
 }
 
 // ParamKind says how a parameter is written in a profile.
@@ -60,42 +67,10 @@ type Param struct {
 	DefaultFt float64 // imperial default in feet or inches; 0 = convert Default
 	Doc       string
 	Source    string
+	ByPurpose []PurposeDefault // defaults for some purposes, each with its source
+	Fraction  bool             // a RatioParam from 0 to 1
+	Fallback  string           // with Default 0: where no value applies, that of this other parameter
 }
-
-// Finding is one thing a rule found in a well.
-type Finding struct {
-	Rule     string          `json:"rule"`
-	Severity Severity        `json:"-"`
-	Level    string          `json:"severity"` // "error" or "warning", from Severity
-	Waived   bool            `json:"waived"`
-	Waiver   *Waiver         `json:"waiver,omitempty"`
-	File     string          `json:"file"`
-	Line     int             `json:"line"`
-	WellID   string          `json:"well"`
-	Message  string          `json:"message"`
-	Top      *float64        `json:"top,omitempty"`    // depth named, in file units
-	Bottom   *float64        `json:"bottom,omitempty"` // depth named, in file units
-	Unit     string          `json:"unit,omitempty"`
-	Depths   []schema.Length `json:"-"`
-}
-
-// Waiver is the waiver that covers a finding.
-type Waiver struct {
-	Reason     string `json:"reason"`
-	ApprovedBy string `json:"approved_by"`
-	Date       string `json:"date,omitempty"`
-}
-
-// Label is "error", "warning" or "waived", as the check prints it.
-func (f Finding) Label() string {
-	if f.Waived {
-		return "waived"
-	}
-	return f.Severity.String()
-}
-
-// Blocking reports whether the finding is an error that no waiver covers.
-func (f Finding) Blocking() bool { return f.Severity == Error && !f.Waived }
 
 // Pass is what a rule's Run receives: the well, the thresholds in force and
 // a way to report.
@@ -110,7 +85,7 @@ type Pass struct {
 // Param returns the value of the rule's named parameter in model units,
 // from the profile or the default.
 func (p *Pass) Param(name string) float64 {
-	return p.profile.value(p.Rule, name, p.Well.Units)
+	return p.profile.valueFor(p.Rule, name, p.Well.Units, p.Well.Purpose)
 }
 
 // Length returns a length parameter.
@@ -122,7 +97,7 @@ func (p *Pass) Profile() *Profile { return p.profile }
 // Reportf records a finding at a key path of the well (e.g. "fill[2].top")
 // naming the depths it concerns.
 func (p *Pass) Reportf(path string, depths []schema.Length, format string, args ...any) {
-	p.ReportSeverity(p.profile.severity(p.Rule), path, depths, format, args...)
+	p.ReportSeverity(p.profile.severityFor(p.Rule, p.Well.Purpose), path, depths, format, args...)
 }
 
 // ReportSeverity is Reportf with an explicit severity, for rules that warn
@@ -134,19 +109,13 @@ func (p *Pass) ReportSeverity(sev Severity, path string, depths []schema.Length,
 	f := Finding{
 		Rule:     p.Rule.ID,
 		Severity: sev,
-		Level:    sev.String(),
 		File:     p.Well.Pos.File,
 		Line:     p.Well.Line(path),
+		Path:     path,
 		WellID:   p.Well.ID,
 		Message:  fmt.Sprintf(format, args...),
 		Depths:   depths,
-		Unit:     string(p.Well.Units.Depth),
-	}
-	if len(depths) > 0 {
-		t := depths[0].In(p.Well.Units.Depth)
-		f.Top = &t
-		b := depths[len(depths)-1].In(p.Well.Units.Depth)
-		f.Bottom = &b
+		Units:    p.Well.Units.Depth,
 	}
 	*p.out = append(*p.out, f)
 }
@@ -193,85 +162,4 @@ func Lookup(id string) (*Rule, bool) {
 		}
 	}
 	return nil, false
-}
-
-// Check runs every rule on a well with a profile (nil for the defaults),
-// applies the well's waivers and returns the findings sorted by line, then
-// rule. A panic in one rule is turned into an error finding for it, so that
-// no input stops the check.
-func Check(w *schema.Well, prof *Profile) []Finding {
-	if prof == nil {
-		prof = DefaultProfile()
-	}
-	var out []Finding
-	sh := &shared{yields: prof.Yields}
-	for _, r := range sortedRules() {
-		runOne(r, w, prof, sh, &out)
-	}
-	applyWaivers(w, out)
-	sort.SliceStable(out, func(i, j int) bool {
-		if out[i].File != out[j].File {
-			return out[i].File < out[j].File
-		}
-		if out[i].Line != out[j].Line {
-			return out[i].Line < out[j].Line
-		}
-		return out[i].Rule < out[j].Rule
-	})
-	return out
-}
-
-func runOne(r *Rule, w *schema.Well, prof *Profile, sh *shared, out *[]Finding) {
-	defer func() {
-		if e := recover(); e != nil {
-			*out = append(*out, Finding{Rule: r.ID, Severity: Error, Level: "error", File: w.Pos.File, Line: 1, WellID: w.ID,
-				Message: fmt.Sprintf("internal error in rule %s: %v (please report)", r.ID, e)})
-		}
-	}()
-	r.Run(&Pass{Well: w, Rule: r, profile: prof, out: out, shared: sh})
-}
-
-func applyWaivers(w *schema.Well, fs []Finding) {
-	for i := range fs {
-		for _, wv := range w.Waivers {
-			if wv.Rule == fs[i].Rule {
-				fs[i].Waived = true
-				fs[i].Waiver = &Waiver{Reason: wv.Reason, ApprovedBy: wv.ApprovedBy, Date: wv.Date.String()}
-				break
-			}
-		}
-	}
-}
-
-// Blocking reports whether any finding is an unwaived error.
-func Blocking(fs []Finding) bool {
-	for _, f := range fs {
-		if f.Blocking() {
-			return true
-		}
-	}
-	return false
-}
-
-// Tally is how many findings of each kind a check reports.
-type Tally struct {
-	Errors   int // unwaived errors
-	Warnings int // unwaived warnings
-	Waived   int // findings a waiver covers, whatever their severity
-}
-
-// Count tallies findings the way every report prints them.
-func Count(fs []Finding) Tally {
-	var t Tally
-	for _, f := range fs {
-		switch {
-		case f.Waived:
-			t.Waived++
-		case f.Severity == Error:
-			t.Errors++
-		default:
-			t.Warnings++
-		}
-	}
-	return t
 }

@@ -24,17 +24,21 @@ var sanitarySealFt = []struct {
 	{schema.Injection, 50, "taken as an industrial well (DWR 74-81 §9: 50 ft)"},
 }
 
-func sanitarySealParams() []Param {
-	var out []Param
+// sanitarySealParam is the one parameter, with a default per purpose.
+func sanitarySealParam() Param {
+	prm := Param{
+		Name: "depth", Kind: LengthParam,
+		Doc:    "minimum sanitary-seal depth; set per purpose as [rule.SANITARY-SEAL-DEPTH.PURPOSE] depth = N or [sanitary_seal] PURPOSE = N",
+		Source: "no default for a well whose purpose is not given",
+	}
 	for _, s := range sanitarySealFt {
-		out = append(out, Param{
-			Name: string(s.purpose), Kind: LengthParam,
-			Default: float64(schema.LengthFrom(s.ft, schema.Feet)), DefaultFt: s.ft,
-			Doc:    "minimum sanitary-seal depth of " + string(s.purpose) + " wells, usually set as [sanitary_seal] " + string(s.purpose),
+		prm.ByPurpose = append(prm.ByPurpose, PurposeDefault{
+			Purposes: []schema.Purpose{s.purpose},
+			Default:  float64(schema.LengthFrom(s.ft, schema.Feet)), DefaultFt: s.ft,
 			Source: s.source,
 		})
 	}
-	return out
+	return prm
 }
 
 func init() {
@@ -49,7 +53,7 @@ func init() {
 			"variance from the local agency is needed (record it as a waiver).",
 		Severity: Error,
 		Source:   sanitarySealSource,
-		Params:   sanitarySealParams(),
+		Params:   []Param{sanitarySealParam()},
 		Run:      runSanitarySealDepth,
 	})
 }
@@ -59,10 +63,7 @@ func runSanitarySealDepth(p *Pass) {
 	if w.Purpose == "" {
 		return
 	}
-	required, ok := p.profile.SanitarySeal[w.Purpose]
-	if !ok {
-		required = p.Length(string(w.Purpose))
-	}
+	required := p.Length("depth")
 	if required <= 0 {
 		return
 	}

@@ -18,9 +18,13 @@ func init() {
 		Severity: Error,
 		Source:   "US EPA, RCRA Ground-Water Monitoring: Draft Technical Guidance (1992): the slot retains 90 to 100 % of the filter pack",
 		Params: []Param{{
-			Name: "min_retained", Kind: RatioParam, Default: 0.90,
+			Name: "min_retained", Kind: RatioParam, Default: 0.90, Fraction: true,
 			Doc:    "least fraction of the pack the slot must retain (0 to 1)",
 			Source: "US EPA 1992: 90 %",
+			ByPurpose: []PurposeDefault{{
+				Purposes: supplyWells, Default: 0.85,
+				Source: "US Army Corps of Engineers TI 814-01 (1998) / TM 5-813-1: the slot such that 85 to 100 % of the pack is larger than the openings; US EPA 1992 notes production wells need less retention than monitoring wells",
+			}},
 		}},
 		Run: runSlotRetainsPack,
 	})

@@ -152,8 +152,8 @@ slot_number = 40
 	if len(fs) != 1 || fs[0].Severity != Error || !strings.Contains(fs[0].Message, "49 ft") || !strings.Contains(fs[0].Message, "50 ft") {
 		t.Errorf("public-supply well sealed to 49 ft: %+v, want one error naming 49 and 50 ft", fs)
 	}
-	if fs[0].Top == nil || *fs[0].Top != 49 || *fs[0].Bottom != 50 {
-		t.Errorf("finding depths %v–%v, want 49–50 ft", fs[0].Top, fs[0].Bottom)
+	if top, bottom, ok := fs[0].Span(); !ok || top != 49 || bottom != 50 || fs[0].Units != schema.Feet {
+		t.Errorf("finding depths %v–%v %s, want 49–50 ft", top, bottom, fs[0].Units)
 	}
 
 	// A metric monitoring well: 6.096 m needed. Grout to 6.1 m, then

@@ -1,0 +1,35 @@
+package main
+
+import (
+	"bytes"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+// One bad file is reported with its line and exit code 2; the good one is
+// still listed.
+func TestFeaturesCommand(t *testing.T) {
+	dir := t.TempDir()
+	good := "[units]\ndepth = \"m\"\n[well]\nid = \"G\"\npurpose = \"monitoring\"\ntotal_depth = 30\n[[borehole]]\ntop = 0\nbottom = 30\ndiameter = 150\n" +
+		"[[feature]]\nkind = \"fracture\"\ntrace_high = 20\ntrace_low = 20.15\nlow_azimuth = 90\n"
+	bad := strings.Replace(good, "trace_low = 20.15", "trace_low = 19", 1)
+	os.WriteFile(filepath.Join(dir, "g.toml"), []byte(good), 0o644)
+	os.WriteFile(filepath.Join(dir, "b.toml"), []byte(bad), 0o644)
+	var out, errb bytes.Buffer
+	code := runFeatures([]string{"--format", "csv", dir}, &out, &errb)
+	if code != exitInput {
+		t.Errorf("exit %d, want %d", code, exitInput)
+	}
+	if !strings.Contains(errb.String(), "b.toml:14:") || !strings.Contains(errb.String(), "trace_low = 19 is above trace_high = 20") {
+		t.Errorf("stderr: %s", errb.String())
+	}
+	// 0.15 m on a 150-mm hole: h = d, 45° (arctan 1).
+	if !strings.Contains(out.String(), ",G,20.075,,m,fracture,45,90,0,270,45,") {
+		t.Errorf("stdout: %s", out.String())
+	}
+	if code := runFeatures([]string{"--format", "xml", dir}, &out, &errb); code != exitUsage {
+		t.Errorf("bad format: exit %d", code)
+	}
+}
