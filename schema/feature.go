@@ -41,7 +41,7 @@ type Feature struct {
 	Depth      Length
 	Kind       FeatureKind
 	Aperture   Diameter // 0 if not recorded
-	Inflow     Volume   // volume per minute (gpm, L/min); 0 if not recorded
+	Inflow     Volume   // volume per minute; 0 if not recorded (see InflowUnit)
 	HasInflow  bool
 	Confidence Confidence // "" if not given
 	Note       string
@@ -168,4 +168,14 @@ func (w *Well) WallImageNamed(name string) (WallImage, bool) {
 // Label is the kind in words: "water-bearing fracture", "broken zone".
 func (k FeatureKind) Label() string {
 	return strings.Replace(strings.ReplaceAll(string(k), "-", " "), "water bearing", "water-bearing", 1)
+}
+
+// InflowUnit is the volume unit of an inflow per minute in a file: US
+// gallons (gpm) with depths in feet, litres (L/min) with metres, the
+// units drillers report yields in.
+func InflowUnit(u Units) (VolumeUnit, string) {
+	if u.Imperial() {
+		return USGallons, "gpm"
+	}
+	return Litres, "L/min"
 }

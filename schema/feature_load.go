@@ -118,7 +118,8 @@ func (r *reader) feature(t *table, w *Well) (Feature, bool) {
 		f.Aperture = DiameterFrom(v, u.Diameter)
 	}
 	if v, ok := t.nonNegative("inflow"); ok {
-		f.Inflow, f.HasInflow = VolumeFrom(v, u.Volume), true
+		vu, _ := InflowUnit(u)
+		f.Inflow, f.HasInflow = VolumeFrom(v, vu), true
 	}
 	if v, ok := t.positive("caliper"); ok {
 		f.Caliper = DiameterFrom(v, u.Diameter)

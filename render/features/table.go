@@ -31,7 +31,8 @@ type Row struct {
 	PoleTrend *float64
 	PolePl    *float64
 	Aperture  *float64 // file diameter unit
-	Inflow    *float64 // file volume unit per minute
+	Inflow    *float64 // gpm or L/min (schema.InflowUnit)
+	FlowUnit  string
 	Method    string   // how the orientation was found
 	Hole      *float64 // hole diameter used for picks, file diameter unit
 	Residual  *float64 // RMS misfit of a fitted sinusoid, file diameter unit
@@ -56,8 +57,10 @@ func Rows(file string, w *schema.Well) []Row {
 		if f.Aperture > 0 {
 			r.Aperture = ptr(f.Aperture.In(u.Diameter))
 		}
+		vu, label := schema.InflowUnit(u)
+		r.FlowUnit = label
 		if f.HasInflow {
-			r.Inflow = ptr(f.Inflow.In(u.Volume))
+			r.Inflow = ptr(f.Inflow.In(vu))
 		}
 		r.Method = method(o)
 		if p := o.Picked; p != nil {
@@ -73,9 +76,9 @@ func Rows(file string, w *schema.Well) []Row {
 
 func north(o schema.Orientation) string {
 	if o.North == schema.MagneticNorth {
-		return fmt.Sprintf("magnetic, declination %s°", schema.TrimFloat(o.Declination, 2))
+		return fmt.Sprintf("magnetic north, declination %s°", schema.TrimFloat(o.Declination, 2))
 	}
-	return "true"
+	return "true north"
 }
 
 // method says where the orientation came from.

@@ -13,7 +13,6 @@ import (
 const wellSrc = `[units]
 depth = "ft"
 diameter = "in"
-volume = "gal"
 [well]
 id = "T-1"
 purpose = "domestic"
@@ -71,8 +70,8 @@ func TestCSVMatchesHandArithmetic(t *testing.T) {
 	}
 	want := []map[string]string{
 		{"depth": "97", "elevation": "324.7", "kind": "water-bearing-fracture", "dip": "57.99", "dip_direction": "141.5", "strike_rhr": "51.5",
-			"pole_trend": "321.5", "pole_plunge": "32.01", "inflow": "4.5", "inflow_unit": "gal/min", "hole_diameter": "6", "line": "18"},
-		{"depth": "110", "dip": "30", "dip_direction": "3.5", "strike_rhr": "273.5", "pole_trend": "183.5", "pole_plunge": "60", "method": "given", "line": "24"},
+			"pole_trend": "321.5", "pole_plunge": "32.01", "inflow": "4.5", "inflow_unit": "gpm", "hole_diameter": "6", "line": "17"},
+		{"depth": "110", "dip": "30", "dip_direction": "3.5", "strike_rhr": "273.5", "pole_trend": "183.5", "pole_plunge": "60", "method": "given", "line": "23"},
 	}
 	if len(recs) != 2+len(want) || recs[len(recs)-1][0] != "caution" {
 		t.Fatalf("got %d records: %q", len(recs), recs)
@@ -92,7 +91,7 @@ func TestTextAndJSON(t *testing.T) {
 	if err := Write(&buf, rows, "text"); err != nil {
 		t.Fatal(err)
 	}
-	for _, s := range []string{"water-bearing fracture", "58", "142", "052", "32→322", "magnetic, declination 13.5°", Caution} {
+	for _, s := range []string{"water-bearing fracture", "58", "142", "052", "32→322", "read from magnetic north, declination 13.5°", Caution} {
 		if !strings.Contains(buf.String(), s) {
 			t.Errorf("text lacks %q:\n%s", s, buf.String())
 		}

@@ -50,8 +50,8 @@ func writeText(w io.Writer, rows []Row) error {
 				fmt.Fprintln(tw)
 			}
 			well = r.File + r.WellID
-			fmt.Fprintf(tw, "%s  %s  (azimuths from true north; file azimuths from %s north)\n", r.WellID, r.File, r.North)
-			fmt.Fprintf(tw, "  line\tdepth %s\televation\tkind\tdip°\tdip dir.\tstrike (RHR)\tpole\taperture %s\tinflow %s/min\thow\n", r.Units.Depth, r.Units.Diameter, r.Units.Volume)
+			fmt.Fprintf(tw, "%s  %s  (azimuths from true north; read from %s)\n", r.WellID, r.File, r.North)
+			fmt.Fprintf(tw, "  line\tdepth %s\televation\tkind\tdip°\tdip dir.\tstrike (RHR)\tpole\taperture %s\tinflow %s\thow\n", r.Units.Depth, r.Units.Diameter, r.FlowUnit)
 		}
 		dip, pole := "-", "-"
 		if r.Dip != nil {
@@ -86,7 +86,7 @@ func writeCSV(w io.Writer, rows []Row) error {
 		f := r.Feature
 		cw.Write([]string{r.File, strconv.Itoa(r.Line), r.WellID, num(&r.Depth, 4), num(r.Elevation, 4), string(r.Units.Depth), string(f.Kind),
 			num(r.Dip, 2), num(r.DipDir, 2), num(r.Strike, 2), num(r.PoleTrend, 2), num(r.PolePl, 2),
-			num(r.Aperture, 4), string(r.Units.Diameter), num(r.Inflow, 4), string(r.Units.Volume) + "/min", string(f.Confidence), r.Method,
+			num(r.Aperture, 4), string(r.Units.Diameter), num(r.Inflow, 4), r.FlowUnit, string(f.Confidence), r.Method,
 			num(r.Hole, 4), num(r.Residual, 4), r.North, f.Note})
 	}
 	cw.Write([]string{"caution", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", Caution})
@@ -130,7 +130,7 @@ func writeJSON(w io.Writer, rows []Row) error {
 		out.Features = append(out.Features, jsonFeature{File: r.File, Line: r.Line, Well: r.WellID, Depth: *ptr(r.Depth), Elevation: r.Elevation,
 			DepthUnit: string(r.Units.Depth), Kind: string(f.Kind), WaterBearing: f.IsWaterBearing(), Dip: r.Dip, DipDirection: r.DipDir,
 			Strike: r.Strike, PoleTrend: r.PoleTrend, PolePlunge: r.PolePl, Aperture: r.Aperture, DiameterUnit: string(r.Units.Diameter),
-			Inflow: r.Inflow, InflowUnit: string(r.Units.Volume) + "/min", Confidence: string(f.Confidence), Method: r.Method,
+			Inflow: r.Inflow, InflowUnit: r.FlowUnit, Confidence: string(f.Confidence), Method: r.Method,
 			HoleDiameter: r.Hole, FitResidual: r.Residual, FileNorth: r.North, Note: f.Note})
 	}
 	enc := json.NewEncoder(w)
