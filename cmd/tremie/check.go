@@ -118,7 +118,7 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	if opts.format == "json" {
 		err = writeCheckJSON(stdout, results)
 	} else {
-		err = writeCheckText(stdout, results, run.ProfileLabels())
+		err = writeCheckText(stdout, results, run.ProfileLabels(), checkCautions(run))
 	}
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie check: writing the report: %v\n", err)
@@ -145,7 +145,9 @@ func checkExit(results []fileResult, missing bool) int {
 	return code
 }
 
-func writeCheckText(w io.Writer, results []fileResult, profiles []string) error {
+// writeCheckText writes the findings, the tally and, for each profile in
+// force, its caution (checkCaution for the defaults).
+func writeCheckText(w io.Writer, results []fileResult, profiles, cautions []string) error {
 	var b strings.Builder
 	var errs, warns, waived, bad, clean int
 	for _, r := range results {
@@ -167,7 +169,10 @@ func writeCheckText(w io.Writer, results []fileResult, profiles []string) error 
 	if bad > 0 {
 		fmt.Fprintf(&b, "; %s could not be read", checkCount(bad, "file"))
 	}
-	b.WriteString("\n" + checkCaution + "\n")
+	for _, c := range cautions {
+		b.WriteString("\n" + c)
+	}
+	b.WriteString("\n")
 	_, err := io.WriteString(w, b.String())
 	return err
 }
@@ -193,4 +198,25 @@ func checkCount(n int, word string) string {
 		return "1 " + word
 	}
 	return fmt.Sprintf("%d %ss", n, word)
+}
+
+// checkCautions are the closing cautions of a check: checkCaution under
+// the defaults, else the caution naming each profile in force.
+func checkCautions(run *pipeline.Run) []string {
+	var out []string
+	seen := map[string]bool{}
+	for _, s := range run.Settings {
+		c := checkCaution
+		if !s.Profile.IsDefault() {
+			c = rules.Caution(s.Profile) // names the profile, not "defaults"
+		}
+		if !seen[c] {
+			seen[c] = true
+			out = append(out, c)
+		}
+	}
+	if len(out) == 0 {
+		out = append(out, checkCaution)
+	}
+	return out
 }

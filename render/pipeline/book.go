@@ -10,6 +10,7 @@ import (
 	"github.com/tremie-dev/tremie/render/sheet"
 	"github.com/tremie-dev/tremie/render/table"
 	"github.com/tremie-dev/tremie/schema/project"
+	"github.com/tremie-dev/tremie/schema/rules"
 )
 
 // Table is the construction summary of prepared wells, lengths in the
@@ -59,9 +60,9 @@ func (r *Run) Book(p *project.Project, wells []*Well) (pdf []byte, problems []er
 			}
 		}
 	}
-	page := sheet.Letter
+	page, prof := sheet.Letter, (*rules.Profile)(nil)
 	if len(r.Settings) > 0 {
-		page = r.Settings[0].Page
+		page, prof = r.Settings[0].Page, r.Settings[0].Profile
 	}
 	w, h := page.Width, page.Height
 	if w > h {
@@ -69,7 +70,7 @@ func (r *Run) Book(p *project.Project, wells []*Well) (pdf []byte, problems []er
 	}
 	pdf, err = book.Build(book.Input{
 		Project: p, Date: date, Table: Table(p, wells), Wells: bound,
-		PageWidth: w, PageHeight: h, Caution: sheet.Caution,
+		PageWidth: w, PageHeight: h, Caution: rules.Caution(prof),
 	})
 	return pdf, problems, err
 }

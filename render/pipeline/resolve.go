@@ -49,7 +49,7 @@ type Setting struct {
 
 // ProfileLabel names the profile in force, for every report.
 func (s *Setting) ProfileLabel() string {
-	if s.ProfileFile == "" {
+	if s.Profile.IsDefault() {
 		return "default thresholds"
 	}
 	return "profile " + s.Profile.Name

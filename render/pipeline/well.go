@@ -105,7 +105,7 @@ type LayoutOptions struct {
 // quantities and its project's title block and logo.
 func (w *Well) SheetInputs() sheet.Inputs {
 	s := w.Setting
-	return sheet.Inputs{Findings: w.Findings, Quantities: w.Quantities, TitleBlock: s.TitleBlock(), Logo: s.Logo()}
+	return sheet.Inputs{Findings: w.Findings, Quantities: w.Quantities, TitleBlock: s.TitleBlock(), Logo: s.Logo(), Profile: s.Profile}
 }
 
 // SheetOptions are the drafting choices: the setting's page and opt.

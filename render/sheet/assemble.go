@@ -6,6 +6,7 @@ import (
 
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/rules"
 )
 
 // sheetCount is the number of pages: the drawings, and the notes sheets
@@ -65,7 +66,7 @@ func (l *layout) page(i int) *draw.Page {
 
 func (l *layout) cautionItems() []draw.Item {
 	var b textBlock
-	b.add(Caution, draw.Italic, sizeTiny, l.caution.W)
+	b.add(rules.Caution(l.in.Profile), draw.Italic, sizeTiny, l.caution.W)
 	return b.items(l.caution.X, l.caution.Y+2, ink, "caution")
 }
 

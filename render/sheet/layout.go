@@ -85,7 +85,7 @@ func (l *layout) plan() error {
 	hh := l.title.height(l.content.W)
 	l.header = draw.Rect{X: l.content.X, Y: l.content.Y, W: l.content.W, H: hh}
 
-	cautionLines := draw.Wrap(draw.Italic, sizeTiny, Caution, l.content.W)
+	cautionLines := draw.Wrap(draw.Italic, sizeTiny, rules.Caution(l.in.Profile), l.content.W)
 	ch := float64(len(cautionLines))*lineGap(sizeTiny) + 4
 	l.caution = draw.Rect{X: l.content.X, Y: l.content.Bottom() - ch, W: l.content.W, H: ch}
 

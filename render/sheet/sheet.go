@@ -23,6 +23,9 @@ type Inputs struct {
 	Quantities *quantity.Report // nil: no amounts table
 	TitleBlock project.TitleBlock
 	Logo       []byte // the client's or consultant's logo, PNG or JPEG; nil for none
+	// Profile is the rule profile the findings were made under (nil for
+	// the defaults): the footer names it.
+	Profile *rules.Profile
 }
 
 // Options are the drafting choices.
@@ -39,8 +42,9 @@ type Options struct {
 	Date string
 }
 
-// Caution is printed on every sheet.
-const Caution = "Figures and checks support, and never replace, the review of a licensed professional and the governing local well code; rule thresholds are defaults to be set to the local rules."
+// Caution is printed on every sheet drawn under the default thresholds;
+// under a profile the footer names it (rules.Caution).
+var Caution = rules.Caution(nil)
 
 // NotFinal is the stamp of a sheet whose well has unwaived error findings.
 const NotFinal = "NOT FINAL — check findings"

@@ -241,3 +241,40 @@ func TestProfileName(t *testing.T) {
 		t.Errorf("unnamed profile from county.profile.toml: %v %v", p, err)
 	}
 }
+
+// A bentonite seal whose interval overlaps the top of the pack is still a
+// seal on the pack: SEAL-ABOVE-PACK must not say none is recorded (the
+// overlap itself is FILL-OVERLAP's finding).
+func TestSealOverlappingPackIsASeal(t *testing.T) {
+	w := load(t, monitoringWell("ft", "8.25", "36.0", fill("23.0", "36.0", "filter-pack")+fill("20.0", "24.0", "bentonite-chips")+fill("0.0", "20.0", "neat-cement")))
+	if fs := findings(w, nil, "SEAL-ABOVE-PACK"); len(fs) != 0 {
+		t.Errorf("seal 20–24 ft over a pack from 23 ft: %q", fs[0].Message)
+	}
+	if n := len(findings(w, nil, "FILL-OVERLAP")); n != 1 {
+		t.Errorf("FILL-OVERLAP: %d findings, want 1", n)
+	}
+}
+
+// The footer says which thresholds were in force: the defaults, or the
+// profile by name, file (base name only) and the code it follows.
+func TestCautionNamesProfile(t *testing.T) {
+	if c := Caution(nil); !strings.Contains(c, "thresholds are defaults") || !strings.Contains(c, "licensed professional") {
+		t.Errorf("defaults caution: %q", c)
+	}
+	if c := Caution(DefaultProfile()); strings.Contains(c, "profile") {
+		t.Errorf("the defaults named as a profile: %q", c)
+	}
+	prof, err := ParseProfile("/somewhere/county.profile.toml", []byte("[profile]\nname = \"County code\"\nsource = \"Code ch. 9\"\n[rule.PACK-ABOVE-MAX]\nseverity = \"off\"\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	c := Caution(prof)
+	for _, want := range []string{`profile "County code" (county.profile.toml)`, "following Code ch. 9", "licensed professional"} {
+		if !strings.Contains(c, want) {
+			t.Errorf("caution %q lacks %q", c, want)
+		}
+	}
+	if strings.Contains(c, "defaults") || strings.Contains(c, "/somewhere") {
+		t.Errorf("caution under a profile: %q", c)
+	}
+}

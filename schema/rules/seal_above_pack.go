@@ -27,6 +27,9 @@ func runSealAbovePack(p *Pass) {
 				p.Reportf(key(top.Path, "top"), []schema.Length{st.Top}, "%s reaches ground surface: nothing seals the pack at %s", p.fillLabel(top), p.span(st.Interval))
 				continue
 			}
+			if sealOverlapsTop(fs, st.Interval) {
+				continue // a seal is recorded there; the overlap is FILL-OVERLAP's finding
+			}
 			above, touching := fillAbove(fs, st.Top, isPack)
 			switch {
 			case above == nil:
@@ -40,4 +43,16 @@ func runSealAbovePack(p *Pass) {
 			}
 		}
 	}
+}
+
+// sealOverlapsTop reports whether a bentonite seal recorded in the annulus
+// reaches down across the top of the pack run iv: the file then records a
+// seal on the pack, only with intervals that overlap.
+func sealOverlapsTop(fs []*schema.Fill, iv schema.Interval) bool {
+	for _, f := range fs {
+		if isBentoniteSeal(f) && f.Top < iv.Top-eps && f.Bottom > iv.Top+eps {
+			return true
+		}
+	}
+	return false
 }
