@@ -154,6 +154,7 @@ func (r *reader) well(root *table) *Well {
 		w.Strings = append(w.Strings, r.wellString(t, i, w.Units))
 	}
 	r.uniqueNames(w)
+	r.checkLiners(w)
 	for _, t := range root.list("fill") {
 		w.Fills = append(w.Fills, r.fill(t, w))
 	}
@@ -164,11 +165,18 @@ func (r *reader) well(root *table) *Well {
 	for _, t := range root.list("lithology") {
 		w.Lithology = append(w.Lithology, r.layer(t, w.Units))
 	}
+	// before the water levels, which may be measured from it
+	if t := root.sub("measuring_point"); t != nil {
+		w.MeasuringPoint = r.measuringPoint(t, w)
+	}
 	for _, t := range root.list("water_level") {
 		w.WaterLevels = append(w.WaterLevels, r.waterLevel(t, w))
 	}
 	if t := root.sub("surface"); t != nil {
 		w.Surface = r.surface(t, w.Units)
+	}
+	if t := root.sub("pump"); t != nil {
+		w.Pump = r.pump(t, w)
 	}
 	r.features(root, w)
 	for _, t := range root.list("waiver") {
@@ -284,7 +292,7 @@ func (r *reader) pipe(t *table, u Units) Pipe {
 func (r *reader) casing(t *table, u Units) Casing {
 	defer t.done()
 	c := Casing{Interval: r.interval(t, u, true), Pos: r.at(t.path), Path: t.path}
-	c.Kind = CasingKind(t.oneOf("kind", "surface", "conductor", "intermediate"))
+	c.Kind = CasingKind(t.oneOf("kind", "surface", "conductor", "intermediate", "production"))
 	if c.Kind == "" {
 		c.Kind = SurfaceCasing
 	}
@@ -297,6 +305,7 @@ func (r *reader) casing(t *table, u Units) Casing {
 		r.errAt(t.path, "casing %q: give size with schedule or sdr, or od and id", c.Name)
 	}
 	c.Centralizers = r.depths(t, "centralizers", u)
+	c.DriveShoe = t.boolean("drive_shoe")
 	return c
 }
 
@@ -318,6 +327,7 @@ func (r *reader) wellString(t *table, i int, u Units) String {
 		}
 	}
 	s.Centralizers = r.depths(t, "centralizers", u)
+	s.Liner = r.liner(t)
 	var prev Pipe
 	for _, st := range t.list("section") {
 		sec := r.section(st, u, prev)

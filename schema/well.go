@@ -49,6 +49,10 @@ type Well struct {
 	WaterLevels []WaterLevel
 	Surface     Surface
 	Waivers     []Waiver
+	// MeasuringPoint says what water levels and the surveyed measuring-
+	// point elevation refer to; see StickUp.
+	MeasuringPoint MeasuringPoint
+	Pump           *Pump // nil when no pump setting is recorded
 
 	// Open-hole wall features and the images they were picked on
 	// (feature.go); Orientation is their azimuth reference.
@@ -216,6 +220,7 @@ type Casing struct {
 	Kind         CasingKind
 	Pipe         Pipe
 	Centralizers []Length
+	DriveShoe    bool // a driven casing with a shoe on its bottom
 	Pos          Pos
 	Path         string
 }
@@ -227,6 +232,7 @@ const (
 	SurfaceCasing      CasingKind = "surface"
 	ConductorCasing    CasingKind = "conductor"
 	IntermediateCasing CasingKind = "intermediate"
+	ProductionCasing   CasingKind = "production"
 )
 
 // String is one well string: pipe sections from its top (riser) down
@@ -238,8 +244,11 @@ type String struct {
 	BottomCap    string // e.g. "threaded end plug"; "" if none recorded
 	Centralizers []Length
 	Sections     []Section // top down
-	Pos          Pos
-	Path         string
+	// Liner: a string hung inside an outer casing rather than run to the
+	// surface; its top is within that casing (the lap).
+	Liner *Liner
+	Pos   Pos
+	Path  string
 }
 
 // Top is the top of the string's first section.
@@ -503,11 +512,18 @@ type Waiver struct {
 	Pos Pos
 }
 
-// StickUp is the height of the measuring point's pipe above ground: the
-// highest well-string top, or for a well with no string (an open-hole rock
-// well) the highest outer-casing top. It is negative when a flush-mount
-// riser ends below ground, and 0 when there is no pipe at all.
+// StickUp is the height of the measuring point above ground: the one the
+// file names ([measuring_point]), else the highest top of the strings that
+// run to the surface (liners hang below it), or for a well with none of
+// those (an open-hole rock well, or one with liners only) the highest
+// outer-casing top. It is negative when a flush-mount riser ends below
+// ground, and 0 when there is no pipe at all.
 func (w *Well) StickUp() Length {
+	if m := w.MeasuringPoint; m.Height != nil {
+		return *m.Height
+	} else if top, ok := w.PipeTop(m.Pipe); ok && m.Pipe != "" {
+		return -top
+	}
 	first := true
 	var h Length
 	consider := func(top Length) {
@@ -516,9 +532,11 @@ func (w *Well) StickUp() Length {
 		}
 	}
 	for _, s := range w.Strings {
-		consider(s.Top())
+		if s.Liner == nil && len(s.Sections) > 0 {
+			consider(s.Top())
+		}
 	}
-	if len(w.Strings) == 0 {
+	if first {
 		for _, c := range w.Casings {
 			consider(c.Top)
 		}

@@ -181,21 +181,15 @@ func (l *layout) rawCallouts() []callout {
 		}
 	}
 
-	// Outer casings; with no well string, the highest casing top is the
-	// measuring point.
-	mpCasing := -1
-	if len(w.Strings) == 0 {
-		for i, c := range w.Casings {
-			if mpCasing < 0 || c.Top < w.Casings[mpCasing].Top {
-				mpCasing = i
-			}
-		}
-	}
+	// Outer casings; the measuring point is on the pipe the file names,
+	// else on the first string that reaches the surface, else on the
+	// highest casing.
+	mpCasing, mpString, mpNamed := l.measuringPointPipe()
 	for i, c := range w.Casings {
 		if i == mpCasing {
 			r := float64(od(c.Pipe)) / 2 * h.ppmm
 			add(callout{key: "mp:" + pathOr(c.Path, "casing", i), iv: schema.Interval{Top: c.Top, Bottom: c.Top}, anchorX: fixed(h.cx + r), title: "Measuring point",
-				lines: l.mpLines("casing", c.Top, ""), rank: 3})
+				lines: l.mpLines(c.Label()+" casing", c.Top, ""), rank: 3})
 		}
 		r := float64(od(c.Pipe)) / 2 * h.ppmm
 		title := strings.TrimSpace(string(c.Kind) + " casing")
@@ -203,7 +197,7 @@ func (l *layout) rawCallouts() []callout {
 			title += " (" + c.Name + ")"
 		}
 		add(callout{key: "casing:" + pathOr(c.Path, "casing", i), iv: c.Interval, anchorX: fixed(h.cx + r), title: upperFirst(title),
-			lines: []string{l.pipeSpec(c.Pipe), l.pipeSizes(c.Pipe), l.interval(c.Interval)}, minor: map[int]bool{1: true}, where: 2, rank: 2})
+			lines: []string{l.pipeLine(c.Pipe), l.pipeSizes(c.Pipe), l.interval(c.Interval)}, minor: map[int]bool{1: true}, where: 2, rank: 2})
 		if len(c.Centralizers) > 0 {
 			add(l.centralizerCallout("centralizer:"+pathOr(c.Path, "casing", i), h.cx, od(c.Pipe), c.Centralizers, title))
 		}
@@ -216,19 +210,22 @@ func (l *layout) rawCallouts() []callout {
 		if named {
 			suffix = " — " + s.Label()
 		}
-		if len(s.Sections) > 0 {
+		if len(s.Sections) > 0 && s.Liner == nil {
 			top := s.Sections[0]
 			rt := float64(od(top.Pipe)) / 2 * h.ppmm
-			mpElev := si == 0
 			lines := l.mpLines("riser", top.Top, s.TopCap)
-			if !mpElev && w.Elevation.MeasuringPoint != nil {
+			if si != mpString && w.Elevation.MeasuringPoint != nil {
 				lines = lines[:1]
 				if s.TopCap != "" {
 					lines = append(lines, "cap: "+s.TopCap)
 				}
 			}
-			add(callout{key: "mp:" + s.Label(), iv: schema.Interval{Top: top.Top, Bottom: top.Top}, anchorX: fixed(x + rt), title: "Measuring point" + suffix, lines: lines, rank: 3,
-				base: "Measuring point", of: ofString(named, s)})
+			title := "Measuring point"
+			if mpNamed && si != mpString {
+				title = "Top of riser"
+			}
+			add(callout{key: "mp:" + s.Label(), iv: schema.Interval{Top: top.Top, Bottom: top.Top}, anchorX: fixed(x + rt), title: title + suffix, lines: lines, rank: 3,
+				base: title, of: ofString(named, s)})
 		}
 		for k, sec := range s.Sections {
 			r := float64(od(sec.Pipe)) / 2 * h.ppmm
@@ -243,7 +240,7 @@ func (l *layout) rawCallouts() []callout {
 				}
 				lines = []string{l.pipeSpec(sec.Pipe), l.slot(sec) + ", " + t, l.interval(sec.Interval)}
 			default:
-				lines = []string{l.pipeSpec(sec.Pipe), l.pipeSizes(sec.Pipe), l.interval(sec.Interval)}
+				lines = []string{l.pipeLine(sec.Pipe), l.pipeSizes(sec.Pipe), l.interval(sec.Interval)}
 				minor = map[int]bool{1: true}
 			}
 			add(callout{key: role, iv: sec.Interval, anchorX: fixed(x + r), title: upperFirst(string(sec.Kind)) + suffix, lines: lines, minor: minor, where: 2, rank: 4,
@@ -327,6 +324,9 @@ func (l *layout) rawCallouts() []callout {
 			line += fmt.Sprintf(" (%s below MP)", l.depth(wl.Written))
 		}
 		lines := []string{line}
+		if g := w.Elevation.Ground; g != nil {
+			lines = append(lines, strings.TrimSpace(fmt.Sprintf("elev. %s %s", l.depth(*g-wl.Depth), w.Elevation.Datum)))
+		}
 		if !wl.Measured.IsZero() {
 			if wl.HasTime {
 				lines = append(lines, wl.Measured.Format("2006-01-02 15:04"))
@@ -336,6 +336,9 @@ func (l *layout) rawCallouts() []callout {
 		}
 		xi := x + float64(i%3-1)*3.5 + 3.5
 		add(callout{key: "water:" + pathOr(wl.Path, "water_level", i), iv: schema.Interval{Top: wl.Depth, Bottom: wl.Depth}, anchorX: fixed(xi), title: title, lines: lines, rank: 8})
+	}
+	for _, pt := range l.parts {
+		cs = append(cs, pt.callouts(l)...)
 	}
 	return cs
 }
@@ -696,6 +699,40 @@ func (p *painter) calloutItems(pcs []placedCallout) []draw.Item {
 		}
 	}
 	return items
+}
+
+// measuringPointPipe finds the pipe whose top is the measuring point: a
+// casing index or a string index (the other -1), and whether the file
+// named it. With none named it is the first string that reaches the
+// surface, else the highest casing; a nested well's other strings are
+// measuring points of their own.
+func (l *layout) measuringPointPipe() (casing, str int, named bool) {
+	w := l.w
+	casing, str = -1, -1
+	if m := w.MeasuringPoint; m.Pipe != "" {
+		for i, c := range w.Casings {
+			if c.Name == m.Pipe {
+				return i, -1, true
+			}
+		}
+		for i, s := range w.Strings {
+			if s.Name == m.Pipe {
+				return -1, i, true
+			}
+		}
+	}
+	named = w.MeasuringPoint.Height != nil
+	for i, s := range w.Strings {
+		if s.Liner == nil && len(s.Sections) > 0 {
+			return -1, i, named
+		}
+	}
+	for i, c := range w.Casings {
+		if casing < 0 || c.Top < w.Casings[casing].Top {
+			casing = i
+		}
+	}
+	return casing, -1, named
 }
 
 // mpLines describes a measuring point at the top of a pipe.

@@ -35,12 +35,32 @@ func unitText(u schema.VolumeUnit) string {
 // pipeSpec writes a pipe as a drafter labels it: "2-in Sch 40 PVC,
 // flush-threaded".
 func (l *layout) pipeSpec(p schema.Pipe) string {
+	words := l.pipeWords(p)
+	if strings.TrimSpace(p.Size) == "" && p.OD > 0 {
+		od := "OD " + l.diameter(p.OD)
+		if words == "" || strings.HasPrefix(words, ",") {
+			return od + words
+		}
+		return od + " " + words
+	}
+	return words
+}
+
+// pipeLine is the words of a pipe for a label whose next line gives its
+// diameters, so the outside diameter is not said twice.
+func (l *layout) pipeLine(p schema.Pipe) string {
+	if w := l.pipeWords(p); w != "" {
+		return w
+	}
+	return "pipe material not recorded"
+}
+
+// pipeWords is pipeSpec without an outside diameter, for a label whose
+// next line gives the diameters: "10-in Sch 40 carbon steel, welded".
+func (l *layout) pipeWords(p schema.Pipe) string {
 	var parts []string
 	switch s := strings.TrimSpace(p.Size); {
 	case s == "":
-		if p.OD > 0 {
-			parts = append(parts, "OD "+l.diameter(p.OD))
-		}
 	case strings.HasPrefix(strings.ToUpper(s), "DN"):
 		parts = append(parts, strings.ToUpper(s))
 	default:
@@ -57,12 +77,11 @@ func (l *layout) pipeSpec(p schema.Pipe) string {
 	}
 	s := strings.Join(parts, " ")
 	if p.Joint != "" {
-		s += ", " + p.Joint
+		s = strings.TrimPrefix(s+", "+p.Joint, ", ")
 	}
 	return s
 }
 
-// pipeSizes writes the resolved diameters.
 func (l *layout) pipeSizes(p schema.Pipe) string {
 	switch {
 	case p.OD > 0 && p.ID > 0:

@@ -38,6 +38,7 @@ type layout struct {
 	title     titleBlock
 	bandPlan  bandPlan
 	legendAll []symbol // every symbol the well's sheets use
+	parts     []part   // the supply-well parts (see part.go)
 
 	sheetCallouts   [][]placedCallout // each sheet's labels
 	sheetNotes      [][]noteBlock     // each sheet's component notes, in its notes box
@@ -71,6 +72,7 @@ func newLayout(w *schema.Well, in Inputs, opt Options, pg Page) *layout {
 	}
 	l.content = draw.Rect{X: pg.Margin, Y: pg.Margin, W: pg.Width - 2*pg.Margin, H: pg.Height - 2*pg.Margin}
 	l.blocking = rules.Blocking(in.Findings)
+	l.parts = l.supplyParts()
 	return l
 }
 

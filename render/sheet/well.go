@@ -57,6 +57,11 @@ func (p *painter) well() []draw.Item {
 				items = append(items, p.fillInCasing(i, f, c)...)
 			}
 		}
+		for _, pt := range l.parts {
+			if lp, ok := pt.(lapPart); ok && lp.host.Name == c.Name {
+				items = append(items, lp.paintSeal(p)...)
+			}
+		}
 	}
 	// 5. Open hole: a rough wall.
 	for i, o := range w.OpenHoles {
@@ -81,6 +86,9 @@ func (p *painter) well() []draw.Item {
 	// 8. Hole walls on top, so every fill ends on a clean edge.
 	items = append(items, p.holeWalls()...)
 	items = append(items, p.ground()...)
+	for _, pt := range l.parts {
+		items = append(items, pt.paint(p)...)
+	}
 	items = append(items, p.waterLevels()...)
 
 	y0, y1 := p.clipY()
@@ -232,6 +240,9 @@ func (p *painter) centralizers(role string, x float64, d schema.Diameter, at []s
 		// The collars span the box's inner 56 %, the bows bulge 22 % beyond:
 		// size the box so the collars meet the pipe and the bows the reach.
 		bw := max(2*(r+reach), 2*r/0.56)
+		if hole > r {
+			bw = min(bw, 2*hole-1.2) // the bows stay inside the hole wall
+		}
 		rect := draw.Rect{X: x - bw/2, Y: y - 5, W: bw, H: 10}
 		items = append(items, box(rect, draw.Color{}, 0, draw.Color{}, role))
 		items = append(items, p.use(sym).paint(rect)...)

@@ -93,6 +93,11 @@ const (
 	FirstWater    = "part:water-first"
 	Centralizer   = "part:centralizer"
 	Cap           = "part:cap"
+	Packer        = "part:packer"
+	Hanger        = "part:hanger"
+	DriveShoe     = "part:drive-shoe"
+	Pump          = "part:pump"
+	Tag           = "part:tag"
 )
 
 // MustPart is Part for the IDs above, which always exist.

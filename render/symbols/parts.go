@@ -19,6 +19,58 @@ var partSymbols = []Symbol{
 	{ID: "part:water-first", Name: "First water encountered", Kind: WellPart, marks: firstWaterMark, swatch: markSwatch("part:water-first")},
 	{ID: "part:centralizer", Name: "Centralizer", Kind: WellPart, marks: bowSprings, swatch: centralizerSwatch},
 	{ID: "part:cap", Name: "Cap or plug", Kind: WellPart, Fill: partInk, marks: capBand, swatch: capSwatch},
+	{ID: "part:packer", Name: "Packer (holds the liner, seals the lap)", Kind: WellPart, Fill: packerGrey, marks: packerCross, swatch: lapSwatch("part:packer")},
+	{ID: "part:hanger", Name: "Liner hanger (no seal)", Kind: WellPart, marks: hangerSlips, swatch: lapSwatch("part:hanger")},
+	{ID: "part:drive-shoe", Name: "Drive shoe", Kind: WellPart, Fill: partInk, marks: shoeBevel, swatch: shoeSwatch},
+	{ID: "part:pump", Name: "Pump intake", Kind: WellPart, marks: pumpBody, swatch: markSwatchPlain("part:pump")},
+	{ID: "part:tag", Name: "Tagged top of fill (after n bags)", Kind: WellPart, marks: tagBob, swatch: markSwatchPlain("part:tag")},
+}
+
+// packerGrey is the packer's rubber: lighter than a wall, darker than paper.
+var packerGrey = hex(0xA0A0A0)
+
+// packerCross: a cross over the packer's element, as a sealing element is
+// drawn across a gap.
+func packerCross(p *pen) {
+	r := p.r
+	p.line(r.X, r.Y, r.Right(), r.Bottom(), 0.5)
+	p.line(r.X, r.Bottom(), r.Right(), r.Y, 0.5)
+}
+
+// hangerSlips: downward-pointing slip wedges on either side of the gap,
+// which hold the liner without closing the gap.
+func hangerSlips(p *pen) {
+	r := p.r
+	w := r.W / 2
+	p.poly(true, draw.Point{X: r.X, Y: r.Y}, draw.Point{X: r.X + w*0.9, Y: r.Y}, draw.Point{X: r.X, Y: r.Bottom()})
+	p.poly(true, draw.Point{X: r.Right(), Y: r.Y}, draw.Point{X: r.Right() - w*0.9, Y: r.Y}, draw.Point{X: r.Right(), Y: r.Bottom()})
+}
+
+// shoeBevel: the bevelled cutting edge of a drive shoe, a pale line
+// along its slope.
+func shoeBevel(p *pen) {
+	r := p.r
+	p.lineStyled(r.X, r.Y+r.H*0.3, r.Right(), r.Y+r.H*0.3, draw.Style{Stroke: slotWhite, StrokeWidth: math.Min(0.6, r.H*0.15)})
+}
+
+// pumpBody: a pump's outline with its intake screen as short bars.
+func pumpBody(p *pen) {
+	r := p.r
+	x0, x1 := r.X+r.W*0.3, r.Right()-r.W*0.3
+	p.polyline(0.6, draw.Point{X: x0, Y: r.Y}, draw.Point{X: x0, Y: r.Bottom()}, draw.Point{X: x1, Y: r.Bottom()}, draw.Point{X: x1, Y: r.Y}, draw.Point{X: x0, Y: r.Y})
+	for k := 1; k <= 3; k++ {
+		y := r.Y + r.H*(0.55+0.1*float64(k))
+		p.line(x0+0.6, y, x1-0.6, y, 0.4)
+	}
+}
+
+// tagBob: a weighted tape's bob, a filled diamond hanging from its line,
+// its lower point on the tagged depth (the box's bottom).
+func tagBob(p *pen) {
+	r := p.r
+	cx := r.X + r.W/2
+	p.line(cx, r.Y, cx, r.Y+r.H*0.4, 0.4)
+	p.poly(true, draw.Point{X: cx, Y: r.Y + r.H*0.4}, draw.Point{X: cx + r.W*0.25, Y: r.Y + r.H*0.7}, draw.Point{X: cx, Y: r.Bottom()}, draw.Point{X: cx - r.W*0.25, Y: r.Y + r.H*0.7})
 }
 
 // Casing and the two screens are wall strips; the screen types must read
@@ -141,6 +193,46 @@ func markSwatch(id string) func(r draw.Rect) []draw.Item {
 		items := []draw.Item{draw.Shape{Style: draw.Style{Stroke: waterInk, StrokeWidth: 0.4, Dash: []float64{1.5, 1}}, Points: []draw.Point{{X: r.X + 1, Y: r.Y + r.H/2}, {X: r.Right() - 1, Y: r.Y + r.H/2}}}}
 		items = append(items, s.Paint(box)...)
 		return append(items, frame(r))
+	}
+}
+
+// lapSwatch draws a casing with a liner inside it, the part closing the
+// gap between them at mid-height.
+func lapSwatch(id string) func(r draw.Rect) []draw.Item {
+	return func(r draw.Rect) []draw.Item {
+		casing := byID["part:casing"]
+		l, rt := pipeWalls(r)
+		items := append(casing.Paint(l), casing.Paint(rt)...)
+		in := draw.Rect{X: l.Right() + 2, Y: r.Y + r.H*0.4, W: 1.2, H: r.H * 0.6}
+		inR := draw.Rect{X: rt.X - 3.2, Y: in.Y, W: 1.2, H: in.H}
+		items = append(items, casing.Paint(in)...)
+		items = append(items, casing.Paint(inR)...)
+		gapL := draw.Rect{X: l.Right(), Y: in.Y, W: 2, H: 2.4}
+		gapR := draw.Rect{X: inR.Right(), Y: in.Y, W: 2, H: 2.4}
+		items = append(items, byID[id].Paint(gapL)...)
+		items = append(items, byID[id].Paint(gapR)...)
+		return append(items, frame(r))
+	}
+}
+
+// shoeSwatch draws a casing whose bottom carries a drive shoe.
+func shoeSwatch(r draw.Rect) []draw.Item {
+	casing := byID["part:casing"]
+	l, rt := pipeWalls(r)
+	l.H, rt.H = r.H*0.7, r.H*0.7
+	items := append(casing.Paint(l), casing.Paint(rt)...)
+	shoe := byID["part:drive-shoe"]
+	items = append(items, shoe.Paint(draw.Rect{X: l.X - 0.8, Y: l.Bottom(), W: l.W + 0.8, H: 2.2})...)
+	items = append(items, shoe.Paint(draw.Rect{X: rt.X, Y: rt.Bottom(), W: rt.W + 0.8, H: 2.2})...)
+	return append(items, frame(r))
+}
+
+// markSwatchPlain draws a mark alone in the middle of its box.
+func markSwatchPlain(id string) func(r draw.Rect) []draw.Item {
+	return func(r draw.Rect) []draw.Item {
+		h := math.Min(r.H, r.W) * 0.9
+		box := draw.Rect{X: r.X + r.W/2 - h/2, Y: r.Y + r.H/2 - h/2, W: h, H: h}
+		return append(byID[id].Paint(box), frame(r))
 	}
 }
 

@@ -471,14 +471,14 @@ func TestAllIsCompleteAndUnique(t *testing.T) {
 			t.Errorf("%s has an empty swatch", s.ID)
 		}
 	}
-	want := len(schema.Materials) + len(uscsGroups) + 6 + 8 + 2 // materials, soils, rocks, parts, fallbacks
+	want := len(schema.Materials) + len(uscsGroups) + 6 + 13 + 2 // materials, soils, rocks, parts, fallbacks
 	if len(ids) != want {
 		t.Errorf("All lists %d symbols, want %d", len(ids), want)
 	}
 	if s, ok := ByID("soil:SP-SM"); !ok || s.Code != "SP-SM" {
 		t.Errorf("ByID of a dual soil: %v %v", s.ID, ok)
 	}
-	for _, id := range []string{Casing, ScreenSlotted, ScreenWrap, OpenHole, WaterLevel, FirstWater, Centralizer, Cap} {
+	for _, id := range []string{Casing, ScreenSlotted, ScreenWrap, OpenHole, WaterLevel, FirstWater, Centralizer, Cap, Packer, Hanger, DriveShoe, Pump, Tag} {
 		if _, ok := Part(id); !ok {
 			t.Errorf("part %s missing", id)
 		}

@@ -10,7 +10,8 @@ func init() {
 			"bottom of a flush-mount vault), must hold a recorded fill: an unfilled stretch is a void that can " +
 			"collapse or carry water between zones, and an unrecorded one cannot be shown to be sealed. Open-hole " +
 			"intervals have no annulus and are skipped. The annulus inside an outer casing (fills with `within`) " +
-			"must be filled wherever a pipe runs inside that casing.",
+			"must be filled wherever a pipe runs inside that casing, except over the lap of a liner whose packer or " +
+			"`lap_seal` closes it.",
 		Severity: Error,
 		Source:   "US EPA, RCRA Ground-Water Monitoring: Draft Technical Guidance (1992): the annulus is filled and sealed from the pack to the surface (from memory)",
 		Run:      runAnnulusGap,
@@ -39,8 +40,20 @@ func runAnnulusGap(p *Pass) {
 				expected = append(expected, seg)
 			}
 		}
-		p.reportGaps(c.Name, expected)
+		p.reportGaps(c.Name, subtract(expected, sealedLaps(w, c.Name)))
 	}
+}
+
+// sealedLaps are the laps of the liners hung in the named casing whose
+// packer or lap seal closes the annulus between liner and casing.
+func sealedLaps(w *schema.Well, casing string) []schema.Interval {
+	var out []schema.Interval
+	for _, s := range w.Strings {
+		if lap, ok := w.Lap(s); ok && s.Liner.HungIn == casing && s.Liner.LapSealed() {
+			out = append(out, lap)
+		}
+	}
+	return out
 }
 
 func (p *Pass) reportGaps(annulus string, expected []schema.Interval) {

@@ -6,7 +6,7 @@ func init() {
 	register(&Rule{
 		ID:    "ELEVATION-STICKUP",
 		Title: "Surveyed elevations agree with the stick-up",
-		Doc: "The measuring point is the top of the riser. Its surveyed elevation minus the ground elevation " +
+		Doc: "The measuring point is the one `[measuring_point]` names, else the top of the riser. Its surveyed elevation minus the ground elevation " +
 			"must equal the height of that riser top above ground (a negative top in the file; below ground for a " +
 			"flush mount), within the tolerance; otherwise water levels converted from the measuring point are " +
 			"wrong. Skipped when either elevation is missing.",
@@ -28,15 +28,20 @@ func runElevationStickup(p *Pass) {
 		return
 	}
 	surveyed := *e.MeasuringPoint - *e.Ground
-	var tops []schema.Length
-	for _, s := range w.Strings {
-		if len(s.Sections) > 0 {
-			tops = append(tops, s.Top())
+	// The measuring point the file names; else any top of a pipe that
+	// reaches the surface (a liner hangs below it).
+	tops := []schema.Length{-w.StickUp()}
+	if !w.MeasuringPoint.Given() {
+		tops = tops[:0]
+		for _, s := range w.Strings {
+			if len(s.Sections) > 0 && s.Liner == nil {
+				tops = append(tops, s.Top())
+			}
 		}
-	}
-	if len(tops) == 0 {
-		for _, c := range w.Casings {
-			tops = append(tops, c.Top)
+		if len(tops) == 0 {
+			for _, c := range w.Casings {
+				tops = append(tops, c.Top)
+			}
 		}
 	}
 	if len(tops) == 0 {
@@ -50,8 +55,8 @@ func runElevationStickup(p *Pass) {
 		}
 	}
 	if diff := surveyed + best; abs(diff) > tol+eps {
-		p.Reportf("elevation.measuring_point", []schema.Length{best}, "measuring point minus ground is %s, but the riser top is %s: they differ by %s, more than %s",
-			p.D(surveyed), p.level(best), p.D(abs(diff)), p.D(tol))
+		p.Reportf("elevation.measuring_point", []schema.Length{best}, "measuring point minus ground is %s, but the %s is %s: they differ by %s, more than %s",
+			p.D(surveyed), w.MeasuringPointLabel(), p.level(best), p.D(abs(diff)), p.D(tol))
 	}
 }
 
