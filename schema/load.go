@@ -477,7 +477,7 @@ func (r *reader) fill(t *table, w *Well) Fill {
 
 func (r *reader) layer(t *table, u Units) Layer {
 	defer t.done()
-	l := Layer{Interval: r.interval(t, u, false), USCS: strings.ToUpper(strings.TrimSpace(t.str("uscs"))), Rock: t.str("rock"), Description: t.str("description"), Pos: r.at(t.path), Path: t.path}
+	l := Layer{Interval: r.interval(t, u, false), USCS: strings.ToUpper(strings.TrimSpace(t.str("uscs"))), Rock: t.str("rock"), Description: t.str("description"), Unit: strings.TrimSpace(t.str("unit")), Pos: r.at(t.path), Path: t.path}
 	switch {
 	case l.USCS != "" && l.Rock != "":
 		r.errAt(t.keyPath("rock"), "give uscs or rock, not both")

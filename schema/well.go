@@ -422,8 +422,12 @@ type Layer struct {
 	USCS        string // ASTM D2487 group symbol, e.g. "SP-SM"; "" for rock
 	Rock        string // rock type, e.g. "granite"; "" for soil
 	Description string
-	Pos         Pos
-	Path        string
+	// Unit is the hydrostratigraphic unit the interval belongs to, a name
+	// of the user's ("upper aquifer"); cross-sections join a unit's top
+	// and bottom between neighbouring wells that both have it.
+	Unit string
+	Pos  Pos
+	Path string
 }
 
 // WaterLevel is one depth-to-water reading, converted to below ground.

@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"io"
 	"strings"
+
+	"github.com/tremie-dev/tremie/render/pipeline"
 )
 
 func init() {
@@ -33,7 +35,7 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 	pdf, problems, err := run.Book(p, wells)
 	for _, e := range problems {
 		fmt.Fprintln(stderr, e)
-		code = worse(code, exitInput)
+		code = worse(code, map[bool]int{true: exitOutput, false: exitInput}[pipeline.IsOutputError(e)])
 	}
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie book: %v\n", err)

@@ -28,7 +28,9 @@ var demoSteps = []struct {
 }{
 	{"check", func(dir string) []string { return []string{dir} }},
 	{"quantities", func(dir string) []string { return []string{dir} }},
+	{"features", func(dir string) []string { return []string{dir} }},
 	{"render", func(dir string) []string { return []string{dir} }},
+	{"section", func(dir string) []string { return []string{dir, "--force"} }},
 	{"book", func(dir string) []string { return []string{dir, "-o", filepath.Join(dir, "out", "book.pdf")} }},
 	{"table", func(dir string) []string {
 		return []string{dir, "--format", "xlsx", "-o", filepath.Join(dir, "out", "summary.xlsx")}

@@ -33,3 +33,19 @@ func TestFeaturesCommand(t *testing.T) {
 		t.Errorf("bad format: exit %d", code)
 	}
 }
+
+// The demo's rock well gets its feature summary beside its sheets, and
+// the book binds it after them.
+func TestDemoFeatureSummary(t *testing.T) {
+	t.Setenv("SOURCE_DATE_EPOCH", "1780000000")
+	dir := copyDemo(t)
+	outDir := filepath.Join(t.TempDir(), "sheets")
+	var stdout, stderr bytes.Buffer
+	run([]string{"render", dir, "-o", outDir, "--format", "pdf"}, &stdout, &stderr)
+	if _, err := os.Stat(filepath.Join(outDir, "BR-1-features.pdf")); err != nil {
+		t.Errorf("no feature summary: %v\n%s", err, stderr.String())
+	}
+	if _, err := os.Stat(filepath.Join(outDir, "MW-1-features.pdf")); err == nil {
+		t.Error("a well without features got a feature summary")
+	}
+}

@@ -21,7 +21,7 @@ func TestProjectYieldsFile(t *testing.T) {
 	put(t, dir, "site.yields.toml", "[yields]\nvolume = \"ft3\"\nmass = \"lb\"\n[yields.filter-pack]\nyield = 0.45\nbag_mass = 50\nnote = \"supplier sheet\"\n")
 	prj := filepath.Join(dir, "project.toml")
 	data, _ := os.ReadFile(prj)
-	if err := os.WriteFile(prj, append(data, []byte("yields = \"site.yields.toml\"\n")...), 0o644); err != nil {
+	if err := os.WriteFile(prj, []byte(strings.Replace(string(data), "[project]\n", "[project]\nyields = \"site.yields.toml\"\n", 1)), 0o644); err != nil {
 		t.Fatal(err)
 	}
 	_, out, errb := runTremie("quantities", dir)
@@ -55,7 +55,7 @@ func TestProjectYieldsReachCheck(t *testing.T) {
 	put(t, dir, "site.yields.toml", "[yields]\n[yields.filter-pack]\nyield = 0.3\nbag_mass = 50\n")
 	prj := filepath.Join(dir, "project.toml")
 	data, _ := os.ReadFile(prj)
-	if err := os.WriteFile(prj, append(data, []byte("yields = \"site.yields.toml\"\n")...), 0o644); err != nil {
+	if err := os.WriteFile(prj, []byte(strings.Replace(string(data), "[project]\n", "[project]\nyields = \"site.yields.toml\"\n", 1)), 0o644); err != nil {
 		t.Fatal(err)
 	}
 	_, after, errb := runTremie("check", dir)

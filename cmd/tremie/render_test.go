@@ -74,8 +74,7 @@ func TestRenderDemoProject(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		svgs, _ := filepath.Glob(filepath.Join(outDir, id+"*.svg"))
-		pngs, _ := filepath.Glob(filepath.Join(outDir, id+"*.png"))
+		svgs, pngs := sheetFiles(outDir, id, "svg"), sheetFiles(outDir, id, "png")
 		if len(svgs) != n || len(pngs) != n {
 			t.Errorf("%s: %d PDF pages, %d SVG and %d PNG files", id, n, len(svgs), len(pngs))
 		}
@@ -200,4 +199,12 @@ func TestRenderUsage(t *testing.T) {
 			t.Errorf("%v: exit %d, want %d", args, code, exitUsage)
 		}
 	}
+}
+
+// sheetFiles are a well's sheet files of one format: ID.EXT or
+// ID-sheetN.EXT, not its feature summary.
+func sheetFiles(dir, id, ext string) []string {
+	one, _ := filepath.Glob(filepath.Join(dir, id+"."+ext))
+	many, _ := filepath.Glob(filepath.Join(dir, id+"-sheet*."+ext))
+	return append(one, many...)
 }

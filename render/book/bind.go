@@ -50,10 +50,26 @@ func sheetPages(wells []Well) ([]int, error) {
 	return out, nil
 }
 
+// sectionPages counts the pages of each cross-section.
+func sectionPages(secs []Section) ([]int, error) {
+	out := make([]int, len(secs))
+	for i, s := range secs {
+		n, err := api.PageCount(bytes.NewReader(s.Sheet), config())
+		if err != nil {
+			return nil, fmt.Errorf("book: cross-section %s: %w", s.Name, err)
+		}
+		out[i] = n
+	}
+	return out, nil
+}
+
 // bind merges the front matter, the tables and the sheets, adds the
 // outline and pins the dates.
 func bind(front, tables []byte, in Input, pl *plan) ([]byte, error) {
 	parts := []io.ReadSeeker{bytes.NewReader(front), bytes.NewReader(tables)}
+	for _, s := range in.Sections {
+		parts = append(parts, bytes.NewReader(s.Sheet))
+	}
 	for _, w := range in.Wells {
 		if w.Sheets != nil {
 			parts = append(parts, bytes.NewReader(w.Sheets))
@@ -95,6 +111,13 @@ func outline(in Input, pl *plan) []pdfcpu.Bookmark {
 		{Title: "Contents", PageFrom: 2},
 		{Title: "Construction summary", PageFrom: pl.summaryPage()},
 		{Title: "Findings and waivers", PageFrom: pl.findingsPage()},
+	}
+	var secs []pdfcpu.Bookmark
+	for i, s := range in.Sections {
+		secs = append(secs, pdfcpu.Bookmark{Title: "Cross-section " + s.Name, PageFrom: pl.sectionPage(i)})
+	}
+	if len(secs) > 0 {
+		bms = append(bms, pdfcpu.Bookmark{Title: "Cross-sections", PageFrom: secs[0].PageFrom, Kids: secs})
 	}
 	var kids []pdfcpu.Bookmark
 	for i, w := range in.Wells {

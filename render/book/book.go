@@ -24,6 +24,9 @@ type Input struct {
 	Date    time.Time    // printed and written as the PDF's dates
 	Table   *table.Table // the construction summary
 	Wells   []Well       // in book order
+	// Sections are the project's cross-sections, bound after the tables
+	// and before the well sheets.
+	Sections []Section
 	// PageWidth and PageHeight are the portrait page size in points for
 	// the cover and contents; 0 means US Letter. Tables use it turned.
 	PageWidth, PageHeight float64
@@ -37,6 +40,12 @@ type Well struct {
 	Findings []rules.Finding
 	Sheets   []byte // the well's sheets as one PDF; nil when none were drawn
 	Problem  string // why there are no sheets
+}
+
+// Section is one cross-section's part of the book.
+type Section struct {
+	Name  string
+	Sheet []byte // the section as a PDF
 }
 
 // Name is the well's ID, or its file when it has none.
@@ -62,7 +71,11 @@ func Build(in Input) ([]byte, error) {
 	if err != nil {
 		return nil, err
 	}
-	pl := plan{in: in, sheetCounts: counts}
+	secCounts, err := sectionPages(in.Sections)
+	if err != nil {
+		return nil, err
+	}
+	pl := plan{in: in, sheetCounts: counts, sectionCounts: secCounts}
 	pl.contentsPages = contentsPageCount(in, len(in.Wells))
 	tables, tablePages, findingsAt, err := typesetTables(in, pl.firstTablePage())
 	if err != nil {
@@ -80,6 +93,7 @@ func Build(in Input) ([]byte, error) {
 type plan struct {
 	in            Input
 	sheetCounts   []int // pages of each well's sheets (0 if none)
+	sectionCounts []int // pages of each cross-section
 	contentsPages int
 	tablePages    int
 	findingsAt    int // first page of the findings table, within the tables
@@ -95,16 +109,26 @@ func (p *plan) wellPage(i int) int {
 	if p.sheetCounts[i] == 0 {
 		return 0
 	}
-	n := 1 + p.contentsPages + p.tablePages + 1
+	n := p.sectionPage(len(p.sectionCounts))
 	for j := 0; j < i; j++ {
 		n += p.sheetCounts[j]
 	}
 	return n
 }
 
+// sectionPage is the first page of cross-section i (for i equal to the
+// number of sections: the page after the last one).
+func (p *plan) sectionPage(i int) int {
+	n := 1 + p.contentsPages + p.tablePages + 1
+	for j := 0; j < i; j++ {
+		n += p.sectionCounts[j]
+	}
+	return n
+}
+
 // total is the book's page count.
 func (p *plan) total() int {
-	n := 1 + p.contentsPages + p.tablePages
+	n := p.sectionPage(len(p.sectionCounts)) - 1
 	for _, c := range p.sheetCounts {
 		n += c
 	}

@@ -14,6 +14,9 @@ const contentsLines = 40
 // heading for the wells, and one line per well.
 func contentsPageCount(in Input, wells int) int {
 	n := 3 + wells
+	if len(in.Sections) > 0 {
+		n += 1 + len(in.Sections)
+	}
 	return (n + contentsLines - 1) / contentsLines
 }
 
@@ -113,8 +116,14 @@ func contents(f *fpdf.Fpdf, in Input, pl *plan) {
 	lines := []line{
 		{text: "Construction summary", page: pl.summaryPage(), bold: true},
 		{text: "Findings and waivers", page: pl.findingsPage(), bold: true},
-		{text: "Well sheets", page: pl.wellPage(firstDrawn(pl)), bold: true},
 	}
+	if len(in.Sections) > 0 {
+		lines = append(lines, line{text: "Cross-sections", page: pl.sectionPage(0), bold: true})
+		for i, s := range in.Sections {
+			lines = append(lines, line{text: s.Name, page: pl.sectionPage(i)})
+		}
+	}
+	lines = append(lines, line{text: "Well sheets", page: pl.wellPage(firstDrawn(pl)), bold: true})
 	for i, w := range in.Wells {
 		l := line{text: w.Name(), page: pl.wellPage(i)}
 		switch {

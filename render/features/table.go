@@ -88,13 +88,13 @@ func method(o schema.FeatureOrientation) string {
 	switch {
 	case p == nil:
 	case p.Points == 2:
-		picks = "picks: high and low points"
+		picks = "picks: high and low"
 	default:
-		picks = fmt.Sprintf("picks: sinusoid through %d points", p.Points)
+		picks = fmt.Sprintf("picks: %d-point fit", p.Points)
 	}
 	switch {
 	case o.Given != nil && p != nil:
-		return fmt.Sprintf("given; %s, %.1f° apart", picks, o.Disagree)
+		return fmt.Sprintf("given; %s %.1f° off", picks, o.Disagree)
 	case o.Given != nil:
 		return "given"
 	case p != nil:

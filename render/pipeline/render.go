@@ -8,6 +8,7 @@ import (
 	"strconv"
 	"strings"
 
+	"github.com/tremie-dev/tremie/render/features"
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/pipeline/batch"
 	"github.com/tremie-dev/tremie/render/pipeline/incremental"
@@ -183,6 +184,35 @@ func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt Rend
 		}
 		if f.PerSheet {
 			removeStaleSheets(r.OutDir, base, f.Ext, len(files), cache)
+		}
+	}
+	return r.drawFeatures(rd, base, cache, opt)
+}
+
+// drawFeatures writes the well's wall-feature summary beside its sheets
+// as BASE-features.EXT (BASE-features-pageN.EXT for several pages), when
+// it has features.
+func (r *Run) drawFeatures(rd *Rendered, base string, cache *incremental.Cache, opt RenderOptions) error {
+	w := rd.Well
+	pw, ph := portrait(w.Setting.Page)
+	doc := features.WellSummary(w.Path, w.Well, pw, ph, r.SourceDate)
+	if doc == nil {
+		return nil
+	}
+	for _, f := range opt.Formats {
+		files, err := f.Encode(doc, out.EncodeOptions{DPI: opt.DPI})
+		if err != nil {
+			return &OutputError{fmt.Errorf("%s: feature summary: %w", w.Path, err)}
+		}
+		for i, data := range files {
+			name := base + "-features" + f.Ext
+			if len(files) > 1 {
+				name = fmt.Sprintf("%s-features-page%d%s", base, i+1, f.Ext)
+			}
+			if err := writeOwned(r.OutDir, name, data, cache, opt.Force); err != nil {
+				return err
+			}
+			rd.Outputs = append(rd.Outputs, filepath.Join(r.OutDir, name))
 		}
 	}
 	return nil

@@ -303,7 +303,7 @@ func (l *layout) rawCallouts() []callout {
 		add(callout{key: "borehole:" + pathOr(b.Path, "borehole", i), iv: b.Interval, anchorX: fixed(h.cx + r), title: "Borehole", lines: lines, minor: map[int]bool{2: true}, where: 1, rank: 7})
 	}
 	for i, o := range w.OpenHoles {
-		d := holeAt(w, (o.Top+o.Bottom)/2)
+		d := l.holeAt((o.Top + o.Bottom) / 2)
 		r := float64(d) / 2 * h.ppmm
 		add(callout{key: "openhole:" + pathOr(o.Path, "open_hole", i), iv: o.Interval, anchorX: fixed(h.cx + r + 1.6), title: "Open hole",
 			lines: []string{l.diameter(d) + " diameter, uncased", l.interval(o.Interval)}, where: 1, rank: 7})
@@ -438,7 +438,7 @@ func (l *layout) centralizerCallout(key string, x float64, d schema.Diameter, at
 	}
 	first := at[0]
 	r := float64(d) / 2 * l.hz.ppmm
-	hole := float64(holeAt(l.w, first)) / 2 * l.hz.ppmm
+	hole := float64(l.holeAt(first)) / 2 * l.hz.ppmm
 	tip := x + r + max(hole-r-0.8, 2)
 	title := "Centralizers"
 	if len(at) == 1 {
@@ -465,28 +465,21 @@ func upperFirst(s string) string {
 // hole wall (or the casing bore it was placed in).
 func (l *layout) annulusX(f schema.Fill, d schema.Length) float64 {
 	h := l.hz
-	outer := float64(holeAt(l.w, d)) / 2 * h.ppmm
+	cs := l.secs.At(d)
+	outer := float64(cs.Hole) / 2 * h.ppmm
 	limit := schema.Diameter(1e9)
-	if f.Within != "" {
-		for _, c := range l.w.Casings {
-			if c.Label() == f.Within && c.Contains(d) {
-				outer = float64(id(c.Pipe)) / 2 * h.ppmm
-				limit = id(c.Pipe)
-			}
-		}
+	if c, _, ok := cs.Inside(f.Within); ok && f.Within != "" {
+		outer = float64(id(c.Casing.Pipe)) / 2 * h.ppmm
+		limit = id(c.Casing.Pipe)
 	}
 	inner := 0.0
-	for _, c := range l.w.Casings {
-		if c.Contains(d) && od(c.Pipe) < limit {
-			inner = max(inner, float64(od(c.Pipe))/2*h.ppmm)
+	for _, c := range cs.Casings {
+		if od(c.Casing.Pipe) < limit {
+			inner = max(inner, float64(od(c.Casing.Pipe))/2*h.ppmm)
 		}
 	}
-	for si, s := range l.w.Strings {
-		for _, sec := range s.Sections {
-			if sec.Contains(d) {
-				inner = max(inner, h.strX[si]-h.cx+float64(od(sec.Pipe))/2*h.ppmm)
-			}
-		}
+	for _, s := range cs.Strings {
+		inner = max(inner, h.strX[s.Index]-h.cx+float64(od(s.Section.Pipe))/2*h.ppmm)
 	}
 	if outer <= inner {
 		return h.cx + inner

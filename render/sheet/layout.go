@@ -21,6 +21,8 @@ type layout struct {
 	pg  Page
 	u   schema.Units
 
+	secs *schema.Sections // what stands in the hole at each depth
+
 	content draw.Rect // the page inside its margin
 	header  draw.Rect // title block
 	body    draw.Rect // column heads and the scaled columns
@@ -66,7 +68,7 @@ const (
 )
 
 func newLayout(w *schema.Well, in Inputs, opt Options, pg Page) *layout {
-	l := &layout{w: w, in: in, opt: opt, pg: pg, u: w.Units}
+	l := &layout{w: w, secs: w.CrossSections(), in: in, opt: opt, pg: pg, u: w.Units}
 	if l.u.Depth == "" {
 		l.u = schema.DefaultUnits(schema.Feet)
 	}

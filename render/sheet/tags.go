@@ -35,11 +35,10 @@ func (t tagPart) paint(p *painter) []draw.Item {
 // tagX is the x of a tag mark: in the fill's annulus, just inside the
 // hole wall (or the casing's bore, for a fill placed within a casing).
 func (l *layout) tagX(f schema.Fill, d schema.Length) float64 {
-	wall := holeAt(l.w, d)
-	for _, c := range l.w.Casings {
-		if f.Within != "" && c.Name == f.Within {
-			wall = id(c.Pipe)
-		}
+	cs := l.secs.At(d)
+	wall := cs.Hole
+	if c, _, ok := cs.Inside(f.Within); ok && f.Within != "" {
+		wall = id(c.Casing.Pipe)
 	}
 	return l.hz.cx + float64(wall)/2*l.hz.ppmm - 3.5
 }

@@ -234,7 +234,7 @@ func (p *painter) centralizers(role string, x float64, d schema.Diameter, at []s
 		if !p.visible(z) {
 			continue
 		}
-		hole := float64(holeAt(p.l.w, z)) / 2 * p.l.hz.ppmm
+		hole := float64(p.l.holeAt(z)) / 2 * p.l.hz.ppmm
 		reach := max(hole-r-0.8, 2.0)
 		y := p.y(z)
 		// The collars span the box's inner 56 %, the bows bulge 22 % beyond:
@@ -251,12 +251,7 @@ func (p *painter) centralizers(role string, x float64, d schema.Diameter, at []s
 }
 
 // holeAt is the borehole diameter at a depth, 0 if none.
-func holeAt(w *schema.Well, z schema.Length) schema.Diameter {
-	if b, ok := w.BoreholeAt(z); ok {
-		return b.Diameter
-	}
-	return 0
-}
+func (l *layout) holeAt(z schema.Length) schema.Diameter { return l.secs.At(z).Hole }
 
 // openHole paints an uncased interval: paper inside, rough walls drawn
 // with the other hole walls.
@@ -265,7 +260,7 @@ func (p *painter) openHole(i int, o schema.OpenHole) []draw.Item {
 	if !ok {
 		return nil
 	}
-	d := holeAt(p.l.w, (o.Top+o.Bottom)/2)
+	d := p.l.holeAt((o.Top + o.Bottom) / 2)
 	r := float64(d) / 2 * p.l.hz.ppmm
 	return []draw.Item{box(draw.Rect{X: p.l.hz.cx - r, Y: y0, W: 2 * r, H: y1 - y0}, draw.Color{}, 0, draw.White, "openhole:"+pathOr(o.Path, "open_hole", i))}
 }
@@ -453,7 +448,7 @@ func (p *painter) ground() []draw.Item {
 	l := p.l
 	col := l.cols.well
 	y := p.y(0)
-	gap := float64(holeAt(l.w, 0.001)) / 2 * l.hz.ppmm
+	gap := float64(l.holeAt(0.001)) / 2 * l.hz.ppmm
 	if v := l.w.Surface.Vault; v != nil {
 		gap = max(gap, float64(v.Diameter)/2*l.hz.ppmm)
 	}

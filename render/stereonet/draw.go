@@ -10,6 +10,7 @@ import (
 var (
 	netInk     = draw.RGB(0x22, 0x22, 0x22)
 	gridInk    = draw.RGB(0xAA, 0xAA, 0xAA)
+	grey       = draw.RGB(0x69, 0x69, 0x69)
 	contourInk = draw.RGB(0x88, 0x22, 0x55) // Tol's "muted" wine, apart from the pole marks
 	roseFill   = draw.RGB(0xBB, 0xCC, 0xEE)
 )
@@ -107,7 +108,8 @@ func Rose(c draw.Point, r float64, bins []int, width float64) []draw.Item {
 	for n := step; n <= hi; n += step {
 		rr := r * math.Sqrt(float64(n)/float64(hi))
 		items = append(items, draw.Circle{Style: draw.Style{Stroke: gridInk, StrokeWidth: 0.4, Dash: []float64{1.5, 1.5}}, Center: c, R: rr},
-			draw.Text{At: draw.Point{X: c.X + 2, Y: c.Y - rr - 1.5}, S: fmt.Sprint(n), Size: 6, Color: gridInk})
+			// The ring's count stands on it at 25°, clear of the N.
+			draw.Text{At: draw.Point{X: c.X + rr*math.Sin(rad(25)) + 1, Y: c.Y - rr*math.Cos(rad(25)) - 1}, S: fmt.Sprint(n), Size: 6, Color: grey})
 	}
 	for i, n := range bins {
 		if n == 0 {

@@ -11,6 +11,14 @@ import "math"
 // k = 3, E = nA and σ = √(nA(1 − A)). Contours are drawn at 2σ steps
 // above E, so each marks a concentration unlikely under uniform chance.
 
+// Smoothed counts weigh each pole by exp(f·(|cos θ| − 1)), f = 2(1 + n/k²),
+// θ its angle from the counting point, instead of counting it 1 inside
+// the cone and 0 outside (F. W. Vollmer, 1995, "C program for automatic
+// contouring of spherical orientation data using a modified Kamb
+// method", Computers & Geosciences 21, 31–49): the same E = 3σ with
+// E = n/f and σ = √(n(f/2 − 1))/f, and contours without the steps of
+// whole counts.
+
 // KambK is the number of standard deviations E is made to equal.
 const KambK = 3
 
@@ -23,18 +31,20 @@ type Density struct {
 	N        int
 	Area     float64 // A: the cone's fraction of the hemisphere
 	CosCone  float64 // cosine of the cone's half-angle
-	Expected float64 // E = nA
+	Expected float64 // E = nA (n/f smoothed)
 	Sigma    float64 // σ
-	Cells    int     // grid cells per side; nodes are Cells+1
+	Smoothed bool
+	Cells    int // grid cells per side; nodes are Cells+1
 	// Count at node (i, j), x = -1 + 2i/Cells east, y = -1 + 2j/Cells
 	// north; nodes outside the net take the count at the primitive.
 	Count [][]float64
 }
 
-// Kamb counts poles over a grid of cells × cells.
-func Kamb(poles []Axis, cells int) *Density {
+// Kamb counts poles over a grid of cells × cells; smoothed selects
+// Vollmer's exponential weights.
+func Kamb(poles []Axis, cells int, smoothed bool) *Density {
 	n := len(poles)
-	d := &Density{N: n, Cells: cells}
+	d := &Density{N: n, Cells: cells, Smoothed: smoothed}
 	if n == 0 || cells < 2 {
 		return d
 	}
@@ -43,6 +53,11 @@ func Kamb(poles []Axis, cells int) *Density {
 	d.CosCone = 1 - d.Area // a cap of half-angle θ is (1 − cos θ) of the hemisphere
 	d.Expected = float64(n) * d.Area
 	d.Sigma = math.Sqrt(float64(n) * d.Area * (1 - d.Area))
+	f := 2 * (1 + float64(n)/k2)
+	if smoothed {
+		d.Expected = float64(n) / f
+		d.Sigma = math.Sqrt(float64(n)*(f/2-1)) / f
+	}
 	units := make([][3]float64, n)
 	for i, p := range poles {
 		units[i] = p.unit()
@@ -56,14 +71,18 @@ func Kamb(poles []Axis, cells int) *Density {
 				x, y = x/r, y/r
 			}
 			g := Inverse(x, y).unit()
-			c := 0
+			c := 0.0
 			for _, u := range units {
 				// Axes: a pole and its antipode are one line.
-				if math.Abs(u[0]*g[0]+u[1]*g[1]+u[2]*g[2]) >= d.CosCone {
+				cos := math.Abs(u[0]*g[0] + u[1]*g[1] + u[2]*g[2])
+				switch {
+				case smoothed:
+					c += math.Exp(f * (cos - 1))
+				case cos >= d.CosCone:
 					c++
 				}
 			}
-			d.Count[i][j] = float64(c)
+			d.Count[i][j] = c
 		}
 	}
 	return d

@@ -62,19 +62,30 @@ func TestEqualAreaAgainstSnyder(t *testing.T) {
 }
 
 // Kamb's counting cone makes the expected count three standard deviations
-// (Kamb 1959: E = 3σ for any number of poles).
+// (Kamb 1959: E = 3σ for any number of poles), and so do Vollmer's
+// smoothed counts. The cone and σ are those of the general-purpose
+// mplstereonet library's Kamb counting (its _kamb_radius, 1 − k²/(n + k²),
+// and _kamb_units, √(n·r·(1 − r))), and its exponential kernel's
+// σ = √(n(f/2 − 1)/f²).
 func TestKambCone(t *testing.T) {
 	for _, n := range []int{10, 50, 100, 1000} {
 		poles := make([]Axis, n)
 		for i := range poles {
 			poles[i] = Axis{Trend: float64(i * 37 % 360), Plunge: float64(10 + i*13%80)}
 		}
-		d := Kamb(poles, 4)
+		d := Kamb(poles, 4, false)
 		near(t, "E/σ", d.Expected/d.Sigma, KambK, 1e-9)
+		k2, fn := 9.0, float64(n)
+		near(t, "cone (mplstereonet)", d.CosCone, 1-k2/(fn+k2), 1e-12)
+		near(t, "σ (mplstereonet)", d.Sigma, math.Sqrt(fn*d.CosCone*(1-d.CosCone)), 1e-12)
+		s := Kamb(poles, 4, true)
+		f := 2 * (1 + fn/k2)
+		near(t, "smoothed E/σ", s.Expected/s.Sigma, KambK, 1e-9)
+		near(t, "smoothed σ (mplstereonet)", s.Sigma, math.Sqrt(fn*(f/2-1)/(f*f)), 1e-12)
 	}
 	// 100 poles: A = 9/109, the cone's half-angle arccos(0.917431) = 23.45°
 	// (by calculator).
-	d := Kamb(make([]Axis, 100), 2)
+	d := Kamb(make([]Axis, 100), 2, false)
 	near(t, "cone half-angle", math.Acos(d.CosCone)*180/math.Pi, 23.45, 0.005)
 }
 
@@ -86,7 +97,7 @@ func TestKambCluster(t *testing.T) {
 		poles = append(poles, Axis{Trend: 300 + float64(i%3), Plunge: 40 + float64(i%4)})
 	}
 	poles = append(poles, Axis{Trend: 100, Plunge: 0}, Axis{Trend: 280, Plunge: 0}, Axis{Trend: 10, Plunge: 70})
-	d := Kamb(poles, 40)
+	d := Kamb(poles, 40, true)
 	x, y := EqualArea(Axis{Trend: 301, Plunge: 41.5})
 	i, j := int(math.Round((x+1)/2*40)), int(math.Round((y+1)/2*40))
 	if d.Count[i][j] < 12 {
@@ -107,7 +118,7 @@ func TestKambCluster(t *testing.T) {
 		t.Errorf("counts %v at the cluster and %v away from it do not straddle the level %v", d.Count[i][j], d.Count[fi][fj], lv[0])
 	}
 	// A horizontal axis and its opposite are one line.
-	e := Kamb([]Axis{{100, 0}, {280, 0}}, 20)
+	e := Kamb([]Axis{{100, 0}, {280, 0}}, 20, false)
 	x, y = EqualArea(Axis{100, 0})
 	if c := e.Count[int(math.Round((x+1)/2*20))][int(math.Round((y+1)/2*20))]; c != 2 {
 		t.Errorf("antipodal axes counted %v times, want 2", c)

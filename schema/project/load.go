@@ -50,6 +50,7 @@ type fileData struct {
 		Revision   string `toml:"revision"`
 		Issued     any    `toml:"issued"`
 	} `toml:"project"`
+	Section []sectionData `toml:"section"`
 }
 
 // Load reads dir/project.toml (dir may also be the file itself) and the
@@ -84,7 +85,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 		k := und[0].String()
 		msg := fmt.Sprintf("unknown key %q", k)
 		if len(und[0]) == 1 {
-			msg = fmt.Sprintf("unknown table or key %q (a project file has only a [project] table)", k)
+			msg = fmt.Sprintf("unknown table or key %q (a project file has a [project] table and [[section]] tables)", k)
 		}
 		return nil, &schema.Error{File: file, Line: lines[k], Key: k, Msg: msg}
 	}
@@ -166,6 +167,9 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 			return nil, bad("project.issued", "issued must be a date such as 2026-03-14, without quotes")
 		}
 		p.TitleBlock.Issued = schema.Date{Year: t.Year(), Month: t.Month(), Day: t.Day()}
+	}
+	if p.Sections, err = sections(file, lines, fd.Section, p.Units); err != nil {
+		return nil, err
 	}
 	if pr.Logo != "" {
 		logo, err := LoadLogo(p.Path(pr.Logo))

@@ -52,6 +52,9 @@ type Project struct {
 	LogoPath string // "" when none
 	Logo     *Logo  // nil when none
 
+	// Sections are the cross-sections the file defines, in file order.
+	Sections []Section
+
 	Wells  string // glob or directory of well files, as written
 	Output string // output directory, resolved
 

@@ -77,27 +77,28 @@ func Compute(w *schema.Well, y *Yields) *Report {
 		y = DefaultYields()
 	}
 	r := &Report{Well: w, Rows: make([]Row, 0, len(w.Fills))}
+	secs := w.CrossSections()
 	for i, f := range w.Fills {
-		r.Rows = append(r.Rows, row(w, y, i, f))
+		r.Rows = append(r.Rows, row(w, secs, y, i, f))
 	}
-	for i, c := range w.Casings {
-		r.Pipes = append(r.Pipes, PipeVolume{Name: c.Label(), Kind: string(c.Kind), Path: pathOr(c.Path, fmt.Sprintf("casing[%d]", i)),
-			Interval: c.Interval, Pipe: c.Pipe, Inside: InsideVolumePerLength(c.Pipe)})
-	}
-	for si, s := range w.Strings {
-		for ki, sec := range s.Sections {
-			r.Pipes = append(r.Pipes, PipeVolume{Name: s.Label(), Kind: string(sec.Kind), Path: pathOr(sec.Path, fmt.Sprintf("string[%d].section[%d]", si, ki)),
-				Interval: sec.Interval, Pipe: sec.Pipe, Inside: InsideVolumePerLength(sec.Pipe)})
+	for _, p := range w.HolePipes() {
+		pv := PipeVolume{Path: p.Path, Interval: p.Interval}
+		if p.Casing != nil {
+			pv.Name, pv.Kind, pv.Pipe = p.Casing.Label(), string(p.Casing.Kind), p.Casing.Pipe
+		} else {
+			pv.Name, pv.Kind, pv.Pipe = p.String.Label(), string(p.Section.Kind), p.Section.Pipe
 		}
+		pv.Inside = InsideVolumePerLength(pv.Pipe)
+		r.Pipes = append(r.Pipes, pv)
 	}
 	return r
 }
 
-func row(w *schema.Well, y *Yields, i int, f schema.Fill) Row {
+func row(w *schema.Well, secs *schema.Sections, y *Yields, i int, f schema.Fill) Row {
 	r := Row{Index: i, Fill: f, BagsPlaced: f.Bags, Recorded: f.Recorded()}
-	r.Calculated, r.Err = AnnularVolume(w, f)
+	r.Calculated, r.Err = annularVolume(w, secs, f)
 	if r.Err != nil {
-		r.Err = fmt.Errorf("%s: %w", pathOr(f.Path, fmt.Sprintf("fill[%d]", i)), r.Err)
+		r.Err = fmt.Errorf("%s: %w", fillPath(f, i), r.Err)
 		r.Calculated = 0
 	}
 	r.Yield, r.HasYield = y.For(f)
@@ -117,7 +118,7 @@ func row(w *schema.Well, y *Yields, i int, f schema.Fill) Row {
 	if r.HasYield && r.Yield.Volume > 0 {
 		for _, t := range f.Tags {
 			tc := TagCheck{Tag: t}
-			tc.Expected, tc.Reached, tc.Err = RiseTop(w, f, schema.Volume(t.AfterBags)*r.Yield.Volume)
+			tc.Expected, tc.Reached, tc.Err = riseTop(w, secs, f, schema.Volume(t.AfterBags)*r.Yield.Volume)
 			r.Tags = append(r.Tags, tc)
 		}
 	}
@@ -131,4 +132,12 @@ func bagsUp(n float64) int {
 		return 0
 	}
 	return int(math.Ceil(n - 1e-6))
+}
+
+// fillPath is a fill's key path, made up for a well built in code.
+func fillPath(f schema.Fill, i int) string {
+	if f.Path != "" {
+		return f.Path
+	}
+	return fmt.Sprintf("fill[%d]", i)
 }

@@ -2,7 +2,6 @@ package quantity
 
 import (
 	"fmt"
-	"sort"
 
 	"github.com/tremie-dev/tremie/schema"
 )
@@ -16,46 +15,27 @@ type Slice struct {
 // Volume is the slice's volume.
 func (s Slice) Volume() schema.Volume { return schema.Volume(s.Area * float64(s.Thickness())) }
 
-// boundaries returns every depth in [top, bottom] at which a hole
-// diameter, casing or string section starts or ends, with top and bottom,
-// sorted and without repeats.
-func boundaries(w *schema.Well, top, bottom schema.Length) []schema.Length {
-	zs := []schema.Length{top, bottom}
-	w.EachGeometryInterval(func(iv schema.Interval) {
-		for _, z := range []schema.Length{iv.Top, iv.Bottom} {
-			if z > top && z < bottom {
-				zs = append(zs, z)
-			}
-		}
-	})
-	sort.Slice(zs, func(i, j int) bool { return zs[i] < zs[j] })
-	out := zs[:1]
-	for _, z := range zs[1:] {
-		if z != out[len(out)-1] {
-			out = append(out, z)
-		}
-	}
-	return out
-}
-
 // Slices splits [top, bottom] of a region into constant cross-sections,
 // top down.
 func Slices(w *schema.Well, r Region, top, bottom schema.Length) ([]Slice, error) {
+	return slices(w, w.CrossSections(), r, top, bottom)
+}
+
+func slices(w *schema.Well, secs *schema.Sections, r Region, top, bottom schema.Length) ([]Slice, error) {
 	if !(top < bottom) {
 		if top == bottom {
 			return nil, nil
 		}
 		return nil, fmt.Errorf("top %s is below bottom %s", w.Units.FormatDepth(top), w.Units.FormatDepth(bottom))
 	}
-	zs := boundaries(w, top, bottom)
-	out := make([]Slice, 0, len(zs)-1)
-	for i := 0; i+1 < len(zs); i++ {
-		mid := (zs[i] + zs[i+1]) / 2
-		a, err := At(w, mid).Area(r)
+	cs := secs.Within(top, bottom)
+	out := make([]Slice, 0, len(cs))
+	for _, c := range cs {
+		a, err := Area(c, r, w.Units)
 		if err != nil {
-			return nil, fmt.Errorf("at %s: %w", w.Units.FormatInterval(zs[i], zs[i+1]), err)
+			return nil, fmt.Errorf("at %s: %w", w.Units.FormatInterval(c.Top, c.Bottom), err)
 		}
-		out = append(out, Slice{Interval: schema.Interval{Top: zs[i], Bottom: zs[i+1]}, Area: a})
+		out = append(out, Slice{Interval: c.Interval, Area: a})
 	}
 	return out, nil
 }
@@ -63,7 +43,11 @@ func Slices(w *schema.Well, r Region, top, bottom schema.Length) ([]Slice, error
 // AnnularVolume is the volume a fill interval should take: its region's
 // open area integrated from the fill's top to its bottom.
 func AnnularVolume(w *schema.Well, f schema.Fill) (schema.Volume, error) {
-	sl, err := Slices(w, RegionOf(f), f.Top, f.Bottom)
+	return annularVolume(w, w.CrossSections(), f)
+}
+
+func annularVolume(w *schema.Well, secs *schema.Sections, f schema.Fill) (schema.Volume, error) {
+	sl, err := slices(w, secs, RegionOf(f), f.Top, f.Bottom)
 	if err != nil {
 		return 0, err
 	}
@@ -81,20 +65,21 @@ func AnnularVolume(w *schema.Well, f schema.Fill) (schema.Volume, error) {
 // exists, never above ground), and reached reports whether v fitted below
 // there.
 func RiseTop(w *schema.Well, f schema.Fill, v schema.Volume) (top schema.Length, reached bool, err error) {
+	return riseTop(w, w.CrossSections(), f, v)
+}
+
+func riseTop(w *schema.Well, secs *schema.Sections, f schema.Fill, v schema.Volume) (top schema.Length, reached bool, err error) {
 	if v <= 0 {
 		return f.Bottom, true, nil
 	}
-	// Walk up slice by slice, from the fill's bottom to the highest depth
+	// Walk up slab by slab, from the fill's bottom to the highest depth
 	// the geometry still defines (ground, or the casing's top).
-	ceiling := schema.Length(0)
-	if f.Top < ceiling {
-		ceiling = f.Top
-	}
-	zs := boundaries(w, ceiling, f.Bottom)
+	ceiling := min(f.Top, 0)
+	cs := secs.Within(ceiling, f.Bottom)
 	left := float64(v)
-	for i := len(zs) - 1; i > 0; i-- {
-		lo, hi := zs[i], zs[i-1]
-		a, aerr := At(w, (lo+hi)/2).Area(RegionOf(f))
+	for i := len(cs) - 1; i >= 0; i-- {
+		lo, hi := cs[i].Bottom, cs[i].Top
+		a, aerr := Area(cs[i], RegionOf(f), w.Units)
 		if aerr != nil {
 			if hi >= f.Top {
 				// within the interval itself the geometry must hold
@@ -111,7 +96,7 @@ func RiseTop(w *schema.Well, f schema.Fill, v schema.Volume) (top schema.Length,
 		}
 		left -= room
 	}
-	return zs[0], false, nil
+	return ceiling, false, nil
 }
 
 // VolumePerLength is a volume per unit length of pipe or hole: cubic

@@ -53,7 +53,7 @@ func runAnnularSpace(p *Pass) {
 		need  schema.Diameter
 		outer string // "the 8 in hole" or `casing "surface" (ID 9.9 in)`
 		bore  schema.Diameter
-		inner []pipe
+		inner []schema.HolePipe
 	}
 	faults := map[string]fault{}
 	var t spanTracker
@@ -73,8 +73,8 @@ func runAnnularSpace(p *Pass) {
 				continue
 			}
 			var outerD schema.Diameter
-			var casing pipe // the outer casing, unless name is the borehole annulus
-			var inner []pipe
+			var casing schema.HolePipe // the outer casing, unless name is the borehole annulus
+			var inner []schema.HolePipe
 			if name == boreholeAnnulus {
 				if !cs.HasHole {
 					continue
@@ -126,7 +126,7 @@ func runAnnularSpace(p *Pass) {
 
 // pairNames names the strings between which a gap is measured:
 // `string "A" and string "B"`.
-func pairNames(ps []pipe) string {
+func pairNames(ps []schema.HolePipe) string {
 	var names []string
 	for _, q := range ps {
 		names = append(names, q.Owner())

@@ -23,8 +23,8 @@ func init() {
 func runCasingClearance(p *Pass) {
 	var t spanTracker
 	type fault struct {
-		outer pipe
-		inner []pipe
+		outer schema.HolePipe
+		inner []schema.HolePipe
 	}
 	faults := map[string]fault{}
 	segs, sections := p.segments()

@@ -34,7 +34,7 @@ func runFeatureInConstruction(p *Pass) {
 // constructionAt names the pipes and annular fills standing at a depth.
 func constructionAt(p *Pass, d schema.Length) []string {
 	var out []string
-	for _, q := range pipes(p.Well) {
+	for _, q := range p.Well.HolePipes() {
 		if q.Top < d && d < q.Bottom {
 			out = append(out, fmt.Sprintf("%s (%s)", q.Label(), p.span(q.Interval)))
 		}

@@ -26,8 +26,8 @@ func runFeatureWaterBelowShoe(p *Pass) {
 		if !f.IsWaterBearing() {
 			continue
 		}
-		var shoe *pipe
-		for _, q := range pipes(w) {
+		var shoe *schema.HolePipe
+		for _, q := range w.HolePipes() {
 			if q.Bottom <= f.Depth+eps && (shoe == nil || q.Bottom > shoe.Bottom) {
 				q := q
 				shoe = &q

@@ -8,9 +8,11 @@ package rules
 //   runs(fs, keep)        maximal contiguous runs of the fills keep accepts
 //   fillAbove(fs, d, ...) the nearest fill resting on depth d
 //   covered / subtract / union / overlap   interval set arithmetic
-//   pipes(w) / crossSectionAt(w, d)        what stands in the hole at d
-//   segments(w)           elementary depth ranges between every boundary
-//   annulusOfDepth(w, d)  which annulus a screen at d is packed in
+//   sumOD(pipes)          the width of pipes standing side by side
+//
+// What stands in the hole at a depth is schema.Sections, shared by the
+// rules of a check through p.crossSections(), p.segments() and
+// p.annulusAt(d).
 
 import (
 	"cmp"
@@ -185,124 +187,8 @@ func thickness(ivs []schema.Interval) schema.Length {
 	return t
 }
 
-// pipe is one length of pipe standing in the hole: an outer casing or a
-// section of a well string.
-type pipe struct {
-	schema.Interval
-	OD, ID  schema.Diameter
-	Casing  *schema.Casing  // set for an outer casing
-	String  *schema.String  // set for a string section
-	Section *schema.Section // set for a string section
-	Path    string
-}
-
-// Label names the pipe for messages: `casing "surface"` or
-// `string "main" screen`.
-func (p pipe) Label() string {
-	if p.Casing != nil {
-		return "casing \"" + p.Casing.Name + "\""
-	}
-	return "string \"" + p.String.Name + "\" " + string(p.Section.Kind)
-}
-
-// Owner names the casing or string the pipe belongs to, without the
-// section kind: `string "main"`.
-func (p pipe) Owner() string {
-	if p.Casing != nil {
-		return p.Label()
-	}
-	return "string \"" + p.String.Name + "\""
-}
-
-// pipes lists every casing and string section.
-func pipes(w *schema.Well) []pipe {
-	var out []pipe
-	for i := range w.Casings {
-		out = append(out, casingPipe(&w.Casings[i]))
-	}
-	for i := range w.Strings {
-		s := &w.Strings[i]
-		for j := range s.Sections {
-			out = append(out, sectionPipe(s, &s.Sections[j]))
-		}
-	}
-	return out
-}
-
-func casingPipe(c *schema.Casing) pipe {
-	return pipe{Interval: c.Interval, OD: c.Pipe.OD, ID: c.Pipe.ID, Casing: c, Path: c.Path}
-}
-
-func sectionPipe(s *schema.String, sec *schema.Section) pipe {
-	return pipe{Interval: sec.Interval, OD: sec.Pipe.OD, ID: sec.Pipe.ID, String: s, Section: sec, Path: sec.Path}
-}
-
-// crossSection is what stands in the hole at one depth: the borehole
-// diameter (if a section covers it), the outer casings present from the
-// outermost in, and the string sections present, which run inside the
-// innermost casing side by side.
-type crossSection struct {
-	Hole    schema.Diameter
-	HasHole bool
-	Casings []pipe
-	Strings []pipe
-}
-
-// crossSectionAt describes depth d. Call it at a depth strictly inside a
-// segment, so that no boundary is ambiguous.
-func crossSectionAt(w *schema.Well, d schema.Length) crossSection {
-	var cs crossSection
-	if b, ok := w.BoreholeAt(d); ok {
-		cs.Hole, cs.HasHole = b.Diameter, true
-	}
-	for i := range w.Casings {
-		if c := &w.Casings[i]; c.Contains(d) {
-			cs.Casings = append(cs.Casings, casingPipe(c))
-		}
-	}
-	for i := range w.Strings {
-		s := &w.Strings[i]
-		for j := range s.Sections {
-			if sec := &s.Sections[j]; sec.Contains(d) {
-				// one pipe per string: overlapping sections of one string
-				// are STRING-CONTINUOUS's finding, not a second pipe
-				cs.Strings = append(cs.Strings, sectionPipe(s, sec))
-				break
-			}
-		}
-	}
-	if len(cs.Casings) > 1 {
-		slices.SortStableFunc(cs.Casings, func(a, b pipe) int { return cmp.Compare(b.OD, a.OD) })
-	}
-	return cs
-}
-
-// Outermost returns the pipes that touch the borehole annulus: the
-// outermost casing, or else every string side by side.
-func (cs crossSection) Outermost() []pipe {
-	if len(cs.Casings) > 0 {
-		return cs.Casings[:1:1]
-	}
-	return cs.Strings
-}
-
-// Inside returns the pipes directly inside the named casing, and that
-// casing, or false when it is not present.
-func (cs crossSection) Inside(name string) (pipe, []pipe, bool) {
-	for i, c := range cs.Casings {
-		if c.Casing.Name != name {
-			continue
-		}
-		if i+1 < len(cs.Casings) {
-			return c, cs.Casings[i+1 : i+2 : i+2], true
-		}
-		return c, cs.Strings, true
-	}
-	return pipe{}, nil, false
-}
-
 // sumOD adds the outside diameters of pipes standing side by side.
-func sumOD(ps []pipe) schema.Diameter {
+func sumOD(ps []schema.HolePipe) schema.Diameter {
 	var s schema.Diameter
 	for _, p := range ps {
 		s += p.OD
@@ -310,45 +196,8 @@ func sumOD(ps []pipe) schema.Diameter {
 	return s
 }
 
-// segments splits 0..total depth at every boundary of every borehole
-// section, pipe, fill and open hole; each segment is uniform inside.
-func segments(w *schema.Well) []schema.Interval {
-	cuts := make([]schema.Length, 0, 2+2*(len(w.Boreholes)+len(w.Casings)+len(w.Fills)+len(w.OpenHoles)+8))
-	cuts = append(cuts, 0, w.TotalDepth)
-	w.EachConstructionInterval(func(iv schema.Interval) { cuts = append(cuts, iv.Top, iv.Bottom) })
-	slices.Sort(cuts)
-	var out []schema.Interval
-	for i := 1; i < len(cuts); i++ {
-		top, bottom := max(cuts[i-1], 0), min(cuts[i], w.TotalDepth)
-		if bottom-top > eps {
-			out = append(out, schema.Interval{Top: top, Bottom: bottom})
-		}
-	}
-	return out
-}
-
 // mid is the middle of an interval.
 func mid(iv schema.Interval) schema.Length { return (iv.Top + iv.Bottom) / 2 }
-
-// annulusAt names the annulus just outside a string at depth d: the
-// innermost casing present there, or the borehole annulus.
-func annulusAt(w *schema.Well, d schema.Length) string {
-	cs := crossSectionAt(w, d)
-	if n := len(cs.Casings); n > 0 {
-		return cs.Casings[n-1].Casing.Name
-	}
-	return boreholeAnnulus
-}
-
-// inOpenHole reports whether depth d lies in a declared open-hole interval.
-func inOpenHole(w *schema.Well, d schema.Length) bool {
-	for _, o := range w.OpenHoles {
-		if d > o.Top && d < o.Bottom {
-			return true
-		}
-	}
-	return false
-}
 
 // spanTracker merges consecutive offending segments per key into one
 // interval, so a rule reports each fault once with its whole depth range.

@@ -43,7 +43,7 @@ func runNestedSeal(p *Pass) {
 		}
 		between := schema.Interval{Top: up.Section.Bottom, Bottom: low.Section.Top}
 		var sealed []schema.Interval
-		for _, f := range p.annulusFills(annulusAt(w, mid(between))) {
+		for _, f := range p.annulusFills(p.annulusAt(mid(between))) {
 			if iv, ok := overlap(f.Interval, between); ok && f.Material.IsSeal() {
 				sealed = append(sealed, iv)
 			}

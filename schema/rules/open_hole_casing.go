@@ -35,8 +35,8 @@ func runOpenHoleBelowCasing(p *Pass) {
 
 // pipeAbove returns the deepest pipe ending at or above the top of an open
 // hole, or else a pipe reaching into it.
-func pipeAbove(w *schema.Well, open schema.Interval) (above, overlapping *pipe) {
-	for _, q := range pipes(w) {
+func pipeAbove(w *schema.Well, open schema.Interval) (above, overlapping *schema.HolePipe) {
+	for _, q := range w.HolePipes() {
 		q := q
 		if q.Bottom > open.Top+eps && q.Top < open.Bottom-eps {
 			return nil, &q
@@ -50,24 +50,23 @@ func pipeAbove(w *schema.Well, open schema.Interval) (above, overlapping *pipe) 
 
 // groutedAtFoot reports whether the annulus outside a pipe holds grout,
 // bentonite or concrete just above the pipe's bottom.
-func groutedAtFoot(p *Pass, q pipe) bool {
-	w := p.Well
+func groutedAtFoot(p *Pass, q schema.HolePipe) bool {
 	d := q.Bottom - 0.01 // 1 cm above the foot
 	if d <= q.Top {
 		d = mid(q.Interval)
 	}
-	cs := crossSectionAt(w, d)
+	cs := p.crossSections().At(d)
 	outside := boreholeAnnulus
 	for i, c := range cs.Casings {
 		if c.Path == q.Path && i > 0 {
-			outside = cs.Casings[i-1].Casing.Name
+			outside = cs.Casings[i-1].Casing.Label()
 		}
 	}
-	if q.Casing == nil && len(cs.Casings) > 0 {
-		outside = cs.Casings[len(cs.Casings)-1].Casing.Name
+	if q.Casing == nil {
+		outside = cs.Annulus()
 	}
-	for _, f := range p.annulusFills(outside) {
-		if f.Contains(d) && f.Material.IsSeal() {
+	for _, f := range cs.Fills {
+		if f.Within == outside && f.Material.IsSeal() {
 			return true
 		}
 	}

@@ -45,7 +45,7 @@ func forEachTopScreen(p *Pass, keep func(*schema.Fill) bool, fn func(schema.Stri
 	screens := w.Screens()
 	for _, sc := range screens {
 		sec := sc.Section
-		name := annulusAt(w, mid(sec.Interval))
+		name := p.annulusAt(mid(sec.Interval))
 		for _, r := range runs(p.annulusFills(name), keep) {
 			if sec.Top < r.Top-eps || sec.Top > r.Bottom+eps {
 				continue

@@ -19,7 +19,7 @@ func runPackCoversScreen(p *Pass) {
 	w := p.Well
 	for _, sc := range w.Screens() {
 		sec := sc.Section
-		name := annulusAt(w, mid(sec.Interval))
+		name := p.annulusAt(mid(sec.Interval))
 		var packs []schema.Interval
 		for _, f := range p.annulusFills(name) {
 			if isFilterPack(f) {

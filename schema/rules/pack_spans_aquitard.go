@@ -26,7 +26,7 @@ func runPackSpansAquitard(p *Pass) {
 	for _, sc := range w.Screens() {
 		sec := sc.Section
 		packed := []schema.Interval{sec.Interval}
-		for _, r := range runs(p.annulusFills(annulusAt(w, mid(sec.Interval))), isPack) {
+		for _, r := range runs(p.annulusFills(p.annulusAt(mid(sec.Interval))), isPack) {
 			if _, ok := overlap(r.Interval, sec.Interval); ok {
 				packed = append(packed, r.Interval)
 			}

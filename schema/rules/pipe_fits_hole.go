@@ -23,7 +23,7 @@ func init() {
 func runPipeFitsHole(p *Pass) {
 	var t spanTracker
 	type fault struct {
-		pipes []pipe
+		pipes []schema.HolePipe
 		hole  schema.Diameter
 	}
 	faults := map[string]fault{}

@@ -14,8 +14,9 @@ import (
 type shared struct {
 	yields *quantity.Yields // for quantities; nil for the built-in ones
 
+	secs     *schema.Sections
 	segs     []schema.Interval
-	sections []crossSection // what stands in the hole at the middle of segs[i]
+	sections []schema.CrossSection // what stands in the hole over segs[i]
 	hasSegs  bool
 
 	fills map[string][]*schema.Fill // annulus name -> its fills, top down
@@ -23,22 +24,42 @@ type shared struct {
 	report *quantity.Report
 }
 
-// segments returns segments(w) and the cross-section at the middle of each.
-func (p *Pass) segments() ([]schema.Interval, []crossSection) {
+// crossSections returns the well's cross-sections, made once per check.
+func (p *Pass) crossSections() *schema.Sections {
+	s := p.shared
+	if s != nil && s.secs != nil {
+		return s.secs
+	}
+	secs := p.Well.CrossSections()
+	if s != nil {
+		s.secs = secs
+	}
+	return secs
+}
+
+// segments returns the slabs of the well from ground to total depth
+// thicker than eps, with the cross-section over each.
+func (p *Pass) segments() ([]schema.Interval, []schema.CrossSection) {
 	s := p.shared
 	if s != nil && s.hasSegs {
 		return s.segs, s.sections
 	}
-	segs := segments(p.Well)
-	cs := make([]crossSection, len(segs))
-	for i, seg := range segs {
-		cs[i] = crossSectionAt(p.Well, mid(seg))
+	var segs []schema.Interval
+	var cs []schema.CrossSection
+	for _, c := range p.crossSections().Within(0, p.Well.TotalDepth) {
+		if c.Thickness() > eps {
+			segs, cs = append(segs, c.Interval), append(cs, c)
+		}
 	}
 	if s != nil {
 		s.segs, s.sections, s.hasSegs = segs, cs, true
 	}
 	return segs, cs
 }
+
+// annulusAt names the annulus just outside a string at depth d: the
+// innermost casing present there, or the borehole annulus.
+func (p *Pass) annulusAt(d schema.Length) string { return p.crossSections().At(d).Annulus() }
 
 // annulusFills returns annulusFills(w, name), shared across the rules.
 func (p *Pass) annulusFills(name string) []*schema.Fill {

@@ -53,7 +53,7 @@ func runSlotRetainsPack(p *Pass) {
 		if sec.Slot <= 0 {
 			continue
 		}
-		for _, f := range p.annulusFills(annulusAt(w, mid(sec.Interval))) {
+		for _, f := range p.annulusFills(p.annulusAt(mid(sec.Interval))) {
 			if !isPack(f) || f.GrainMin <= 0 {
 				continue
 			}

@@ -1,0 +1,89 @@
+package main
+
+import (
+	"fmt"
+	"io"
+	"path/filepath"
+
+	"github.com/tremie-dev/tremie/render/gis"
+	"github.com/tremie-dev/tremie/render/pipeline"
+	"github.com/tremie-dev/tremie/schema/crs"
+)
+
+func init() {
+	register(&command{
+		name:    "export",
+		summary: "export a project's wells for GIS: one point per monitoring point (--format geojson|csv)",
+		run:     runExport,
+		args:    "PROJECT_DIR",
+	})
+}
+
+func runExport(args []string, stdout, stderr io.Writer) int {
+	fset := newFlags("export", stdout, stderr)
+	format := fset.String("format", "geojson", "`format`: geojson (RFC 7946, WGS 84) or csv")
+	outFile := fset.String("o", "", "output `file` (default: stdout)")
+	rest, code, ok := fset.parse(args)
+	if !ok {
+		return code
+	}
+	if len(rest) != 1 {
+		return fset.usageError("name one project directory")
+	}
+	if *format != "geojson" && *format != "csv" {
+		return fset.usageError("--format must be geojson or csv, not %q", *format)
+	}
+	_, p, wells, code := prepareProject(rest[0], stderr)
+	if p == nil {
+		return code
+	}
+	var projected *crs.CRS
+	var err error
+	if p.CRS != "" {
+		if projected, err = crs.Parse(p.CRS); err != nil || projected.Geographic() {
+			projected = nil // a geographic project system leaves the projected columns to the wells
+		}
+	}
+	dir := "."
+	if *outFile != "" {
+		dir = filepath.Dir(*outFile)
+	}
+	names := pipeline.AssignNames(wells)
+	entries := pipeline.Entries(wells)
+	in := make([]gis.Input, len(wells))
+	for i, w := range wells {
+		in[i] = gis.Input{Entry: entries[i], Sheets: gis.SheetFiles(p.Output, names[w])}
+	}
+	x := gis.Build(in, p.Units, projected, dir)
+	for _, s := range x.Skipped {
+		fmt.Fprintf(stderr, "%s: %s left out of the export: %s\n", s.File, or(s.ID, "well"), s.Reason)
+	}
+	var data []byte
+	if *format == "csv" {
+		if data, err = x.CSV(); err != nil {
+			fmt.Fprintf(stderr, "tremie export: %v\n", err)
+			return exitOutput
+		}
+	} else {
+		data = x.GeoJSON()
+	}
+	if *outFile == "" {
+		if _, err := stdout.Write(data); err != nil {
+			return exitOutput
+		}
+		return code
+	}
+	if err := pipeline.WriteFile(*outFile, data); err != nil {
+		fmt.Fprintf(stderr, "tremie export: %v\n", err)
+		return exitOutput
+	}
+	fmt.Fprintf(stdout, "tremie export: %d monitoring points written to %s (%d wells left out)\n", len(x.Points), *outFile, len(x.Skipped))
+	return code
+}
+
+func or(s, alt string) string {
+	if s == "" {
+		return alt
+	}
+	return s
+}

@@ -1,0 +1,108 @@
+package section
+
+import (
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/symbols"
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// waterLine is the day whose static levels are joined across the
+// section.
+type waterLine struct {
+	date  schema.Date
+	given bool // the project named the day
+}
+
+func dayOf(wl schema.WaterLevel) schema.Date {
+	t := wl.Measured
+	return schema.Date{Year: t.Year(), Month: t.Month(), Day: t.Day()}
+}
+
+// chooseWater picks the day: the one the project names, else the day on
+// which the most wells have a static level, the latest on a tie.
+func chooseWater(given schema.Date, ws []*placed) waterLine {
+	if !given.IsZero() {
+		return waterLine{date: given, given: true}
+	}
+	count := map[schema.Date]int{}
+	for _, p := range ws {
+		seen := map[schema.Date]bool{}
+		for _, wl := range p.w.WaterLevels {
+			if wl.Kind != schema.Static || wl.Measured.IsZero() {
+				continue
+			}
+			d := dayOf(wl)
+			if !seen[d] {
+				seen[d] = true
+				count[d]++
+			}
+		}
+	}
+	var best schema.Date
+	for d, n := range count {
+		if n > count[best] || (n == count[best] && d.Time().After(best.Time())) {
+			best = d
+		}
+	}
+	return waterLine{date: best}
+}
+
+// levelOn is a well's static level on the day, as an elevation in
+// metres (the last reading of the day); ok false when there is none.
+func (wl waterLine) levelOn(p *placed) (float64, bool) {
+	var got *schema.WaterLevel
+	for i, r := range p.w.WaterLevels {
+		if r.Kind == schema.Static && !r.Measured.IsZero() && dayOf(r) == wl.date {
+			if got == nil || r.Measured.After(got.Measured) {
+				got = &p.w.WaterLevels[i]
+			}
+		}
+	}
+	if got == nil {
+		return 0, false
+	}
+	return float64(p.ground - got.Depth), true
+}
+
+// waterItems draws the day's levels as the water mark joined by a line
+// between neighbours that both have one, and every other static level as
+// a small open mark.
+func (l *layout) waterItems() []draw.Item {
+	var items []draw.Item
+	ws := drawnOrder(l.wells)
+	mark := symbols.MustPart(symbols.WaterLevel)
+	var prev *placed
+	var prevZ float64
+	for _, p := range ws {
+		z, ok := l.water.levelOn(p)
+		if ok {
+			y := l.y(z)
+			if prev != nil {
+				items = append(items, draw.Shape{Points: []draw.Point{{X: prev.x + colWidth/2, Y: l.y(prevZ)}, {X: p.x - colWidth/2 - unitBarWidth, Y: y}},
+					Style: draw.Style{Stroke: waterInk, StrokeWidth: 0.9, Dash: []float64{5, 2}}, Role: "section-water-line"})
+			}
+			items = append(items, l.paint(mark, draw.Rect{X: p.x - colWidth/2 - unitBarWidth - 10, Y: y - 5, W: 9, H: 10})...)
+			items = append(items, draw.Text{At: draw.Point{X: p.x - colWidth/2 - unitBarWidth - 11, Y: y - 1}, S: l.elev(z), Size: sizeSmall, Anchor: draw.End, Color: waterInk, Role: "section-water:" + p.w.ID})
+			prev, prevZ = p, z
+			l.used.waterLine = true
+		} else {
+			prev = nil
+		}
+		for _, r := range p.w.WaterLevels {
+			if r.Kind != schema.Static || (!r.Measured.IsZero() && dayOf(r) == l.water.date) {
+				continue
+			}
+			y := l.y(float64(p.ground - r.Depth))
+			items = append(items, otherLevelMark(p.x+colWidth/2+1.5, y, "section-water-other:"+p.w.ID))
+			l.used.otherLevels = true
+		}
+	}
+	return items
+}
+
+// otherLevelMark is a small open triangle, apex on the level: a static
+// level of another day.
+func otherLevelMark(x, y float64, role string) draw.Item {
+	return draw.Shape{Points: []draw.Point{{X: x, Y: y}, {X: x + 5, Y: y - 4}, {X: x + 5, Y: y + 4}}, Closed: true,
+		Style: draw.Style{Stroke: waterInk, StrokeWidth: 0.6, Fill: draw.White}, Role: role}
+}
