@@ -484,8 +484,19 @@ func (r *reader) layer(t *table, u Units) Layer {
 	case l.USCS == "" && l.Rock == "":
 		r.errAt(t.path, "lithology: give uscs (an ASTM D2487 group symbol) or rock")
 	case l.USCS != "":
-		if !ValidUSCS(l.USCS) {
-			r.errAt(t.keyPath("uscs"), "uscs = %q is not an ASTM D2487 group symbol (e.g. SP, CL, SP-SM)", l.USCS)
+		if msg := USCSProblem(l.USCS); msg != "" {
+			r.errAt(t.keyPath("uscs"), "uscs = %q %s", l.USCS, msg)
+		}
+	}
+	if s := t.str("weathering"); s != "" {
+		g, ok := ParseWeathering(s)
+		switch {
+		case !ok:
+			r.errAt(t.keyPath("weathering"), "weathering = %q is not a grade (fresh, slightly-weathered, moderately-weathered, highly-weathered, completely-weathered, residual-soil, or I to VI; ISRM 1981 / BS 5930)", s)
+		case l.Rock == "":
+			r.errAt(t.keyPath("weathering"), "weathering grades rock: give it with rock, not uscs")
+		default:
+			l.Weathering = g
 		}
 	}
 	return l

@@ -177,16 +177,93 @@ func TestGradation(t *testing.T) {
 	}
 }
 
+// ASTM D2487-17 Note 1 and its classification charts: the 15 group
+// symbols; dual symbols only for 5 to 12 % fines (GW-GM, GW-GC, GP-GM,
+// GP-GC, SW-SM, SW-SC, SP-SM, SP-SC), fines in the hatched CL-ML band
+// (GC-GM, SC-SM) and CL-ML; borderline symbols with a slash (Note 1's
+// examples: CL/CH, GM/SM, SC/CL, and CH/CL).
 func TestUSCS(t *testing.T) {
-	// ASTM D2487 group and dual symbols.
-	for _, s := range []string{"SP", "SP-SM", "CL-ML", "GW-GC", "PT", "CH"} {
+	for _, s := range []string{
+		"GW", "GP", "GM", "GC", "SW", "SP", "SM", "SC", "ML", "CL", "OL", "MH", "CH", "OH", "PT",
+		"GW-GM", "GW-GC", "GP-GM", "GP-GC", "SW-SM", "SW-SC", "SP-SM", "SP-SC", "GC-GM", "SC-SM", "CL-ML",
+		"CL/CH", "CH/CL", "GM/SM", "SC/CL",
+	} {
 		if !ValidUSCS(s) {
-			t.Errorf("%s rejected", s)
+			t.Errorf("%s rejected: %s", s, USCSProblem(s))
 		}
 	}
-	for _, s := range []string{"SX", "SP-SP", "SP-SM-ML", "", "sand"} {
+	// Pairs D2487 never assigns as dual symbols, and malformed symbols.
+	for _, s := range []string{
+		"PT-GW", "ML-CL", "CH-SP", "SM-SP", "GM-GW", "SM-SC", "GM-GC", "CH-MH", "ML-MH", "OL-OH", "CL-CH", "GW-SW", "SP-SW", "CL-SC",
+		"SX", "SP-SP", "SP-SM-ML", "", "sand", "CL/CL", "CL/CH/MH", "PT/OH", "CL/XY", "SP-SM-",
+	} {
 		if ValidUSCS(s) {
 			t.Errorf("%q accepted", s)
+		}
+	}
+	if msg := USCSProblem("ML-CL"); !strings.Contains(msg, "did you mean CL-ML") || !strings.Contains(msg, "ML/CL") {
+		t.Errorf("ML-CL: %q, want a suggestion of CL-ML or ML/CL", msg)
+	}
+	if msg := USCSProblem("CH-SP"); !strings.Contains(msg, "CH/SP") {
+		t.Errorf("CH-SP: %q, want the borderline form suggested", msg)
+	}
+	// The primary symbol decides fine-grained: CL-ML and CL/CH are fine,
+	// SC/CL and SP-SM coarse (D2487: the first symbol is the classification).
+	for s, fine := range map[string]bool{"CL-ML": true, "CL/CH": true, "SC/CL": false, "SP-SM": false, "PT": true} {
+		if got := (Layer{USCS: s}).FineGrained(); got != fine {
+			t.Errorf("%s fine-grained = %v", s, got)
+		}
+	}
+}
+
+// Weathering grades after ISRM (1981) and BS 5930:1999: I fresh, II
+// slightly, III moderately (less than half of the rock decomposed to
+// soil), IV highly (more than half), V completely (all, structure
+// intact), VI residual soil. Grades IV to VI, saprolite, residual soil
+// and made ground behave as soil.
+func TestRockAndWeathering(t *testing.T) {
+	for _, c := range []struct {
+		rock, grade string
+		soil        bool
+	}{
+		{"granite", "", false},
+		{"granite", "fresh", false},
+		{"granite", "II", false},
+		{"granite", "moderately-weathered", false},
+		{"granite", "IV", true},
+		{"granite", "highly weathered", true},
+		{"gneiss", "completely-weathered", true},
+		{"schist", "VI", true},
+		{"weathered granite", "", true},
+		{"slightly weathered granite", "", false},
+		{"saprolite", "", true},
+		{"residual soil", "", true},
+		{"fill", "", true},
+		{"Sandstone", "", false},
+	} {
+		l := Layer{Rock: c.rock}
+		if c.grade != "" {
+			g, ok := ParseWeathering(c.grade)
+			if !ok {
+				t.Fatalf("grade %q not read", c.grade)
+			}
+			l.Weathering = g
+		}
+		if got := l.Unconsolidated(); got != c.soil {
+			t.Errorf("%s (%s): unconsolidated = %v, want %v", c.rock, c.grade, got, c.soil)
+		}
+	}
+	if _, ok := ParseWeathering("crumbly"); ok {
+		t.Error("an unknown grade was read")
+	}
+	for in, want := range map[string]string{"Biotite GNEISS, fractured": "gneiss", "granit": "granite", "sandstne": "sandstone", "limestone, karstic": "limestone", "xyzzy": ""} {
+		if got := SuggestRock(in); got != want {
+			t.Errorf("SuggestRock(%q) = %q, want %q", in, got, want)
+		}
+	}
+	for _, n := range []string{"granite", "weathered granite", "highly weathered gneiss", "saprolite", "fill"} {
+		if _, _, ok := ParseRock(n); !ok {
+			t.Errorf("%q not a listed rock", n)
 		}
 	}
 }
@@ -253,4 +330,27 @@ func FuzzLoad(f *testing.F) {
 			t.Fatal("nil well without error")
 		}
 	})
+}
+
+// FORMAT.md lists exactly the rock names the loader knows.
+func TestRockNamesDocumented(t *testing.T) {
+	doc, err := os.ReadFile("FORMAT.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	listed := map[string]bool{}
+	for _, line := range strings.Split(string(doc), "\n") {
+		cells := strings.Split(line, "|")
+		if len(cells) != 4 || strings.HasPrefix(line, "| kind") {
+			continue
+		}
+		for _, n := range strings.Split(cells[2], ",") {
+			listed[strings.TrimSpace(n)] = true
+		}
+	}
+	for n := range RockNames {
+		if !listed[n] {
+			t.Errorf("rock name %q is not in FORMAT.md's table", n)
+		}
+	}
 }

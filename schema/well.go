@@ -367,13 +367,14 @@ const (
 	BentoniteGrout    Material = "bentonite-grout"
 	NeatCement        Material = "neat-cement"
 	CementBentonite   Material = "cement-bentonite"
+	SandCement        Material = "sand-cement"
 	Concrete          Material = "concrete"
 	NativeBackfill    Material = "native-backfill"
 	CaveIn            Material = "cave-in"
 )
 
 // Materials lists every fill class, bottom-of-sequence first.
-var Materials = []Material{FilterPack, FineSand, BentoniteChips, BentonitePellets, BentoniteGranular, BentoniteGrout, NeatCement, CementBentonite, Concrete, NativeBackfill, CaveIn}
+var Materials = []Material{FilterPack, FineSand, BentoniteChips, BentonitePellets, BentoniteGranular, BentoniteGrout, NeatCement, CementBentonite, SandCement, Concrete, NativeBackfill, CaveIn}
 
 // Group is the role a material plays in the sequence.
 type Group int
@@ -381,7 +382,7 @@ type Group int
 const (
 	PackGroup     Group = iota // filter pack, fine sand
 	SealGroup                  // bentonite chips, pellets, granular
-	GroutGroup                 // bentonite, neat cement, cement-bentonite grout
+	GroutGroup                 // bentonite, neat cement, cement-bentonite, sand-cement grout
 	ConcreteGroup              // surface seal
 	BackfillGroup              // native backfill, cave-in
 )
@@ -393,7 +394,7 @@ func (m Material) Group() Group {
 		return PackGroup
 	case BentoniteChips, BentonitePellets, BentoniteGranular:
 		return SealGroup
-	case BentoniteGrout, NeatCement, CementBentonite:
+	case BentoniteGrout, NeatCement, CementBentonite, SandCement:
 		return GroutGroup
 	case Concrete:
 		return ConcreteGroup
@@ -419,8 +420,9 @@ type OpenHole struct {
 // Layer is one lithology interval.
 type Layer struct {
 	Interval
-	USCS        string // ASTM D2487 group symbol, e.g. "SP-SM"; "" for rock
-	Rock        string // rock type, e.g. "granite"; "" for soil
+	USCS        string     // ASTM D2487 group symbol, e.g. "SP-SM"; "" for rock
+	Rock        string     // rock type, e.g. "granite"; "" for soil
+	Weathering  Weathering // grade of the rock, ISRM 1981 / BS 5930; "" if not given
 	Description string
 	// Unit is the hydrostratigraphic unit the interval belongs to, a name
 	// of the user's ("upper aquifer"); cross-sections join a unit's top

@@ -40,7 +40,7 @@ type wellQuantities struct {
 func runQuantities(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("quantities", stdout, stderr)
 	format := fset.String("format", "text", "output `format`: text, json or csv")
-	contingency := fset.Float64("contingency", 0, "`percentage` added to the project totals when ordering")
+	contingency := fset.Float64("contingency", quantity.DefaultContingency, "`percentage` added to each volume before it is rounded up to bags to order (default from "+quantity.DefaultContingencySource+")")
 	yieldsFile := fset.String("yields", "", "TOML `file` with a [yields] table overriding the yields (default: the project's)")
 	profileFile := fset.String("profile", "", "rule profile TOML `file` setting the reconciliation thresholds (default: the project's)")
 	paths, code, ok := fset.parse(args)
@@ -70,6 +70,7 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 			code = exitInput
 			continue
 		}
+		// the checks of placed amounts and tags, with the same yields
 		wq := wellQuantities{File: w.Path, Report: w.Quantities, Findings: w.Findings}
 		for _, r := range wq.Report.Rows {
 			if r.Err != nil {
@@ -82,15 +83,16 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 		wells = append(wells, wq)
 		reports = append(reports, w.Quantities)
 	}
-	totals := quantity.Totals(reports, *contingency)
+	order := quantity.Totals(reports, *contingency)
+	profiles := run.ProfileLabels()
 	var werr error
 	switch *format {
 	case "json":
-		werr = writeQuantitiesJSON(stdout, wells, totals, *contingency, run.ProfileLabels())
+		werr = writeQuantitiesJSON(stdout, wells, order, profiles)
 	case "csv":
-		werr = writeQuantitiesCSV(stdout, wells, totals, run.ProfileLabels())
+		werr = writeQuantitiesCSV(stdout, wells, order, profiles)
 	default:
-		werr = writeQuantitiesText(stdout, wells, totals, *contingency, run.ProfileLabels())
+		werr = writeQuantitiesText(stdout, wells, order, profiles)
 	}
 	if werr != nil {
 		fmt.Fprintf(stderr, "tremie quantities: writing the report: %v\n", werr)
@@ -99,9 +101,12 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 	return code
 }
 
+// total is one material line of a project list.
+type total = quantity.Line
+
 // --- text ---
 
-func writeQuantitiesText(w io.Writer, wells []wellQuantities, totals []*quantity.Total, contingency float64, profiles []string) error {
+func writeQuantitiesText(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
 	ew := &errWriter{w: w}
 	fmt.Fprintf(ew, "Reconciliation checked with %s.\n\n", strings.Join(profiles, "; "))
 	for i, wq := range wells {
@@ -112,7 +117,7 @@ func writeQuantitiesText(w io.Writer, wells []wellQuantities, totals []*quantity
 	}
 	if len(wells) > 0 {
 		fmt.Fprintln(ew)
-		writeTotalsText(ew, totals, contingency)
+		writeOrderText(ew, order)
 	}
 	fmt.Fprintln(ew)
 	fmt.Fprintln(ew, quantitiesCaution)
@@ -126,15 +131,18 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 	fmt.Fprintf(w, "%s  %s\n", r.Well.ID, wq.File)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	fmt.Fprintf(tw, "  #\tmaterial\tinterval %s\tcalculated %s\t%s\tyield %s per bag\tbags needed\tbags placed\tplaced %s\tratio\n", u.Depth, p, s, p, p)
-	for _, row := range r.Rows {
+	for _, row := range r.AllRows() {
 		f := row.Fill
 		iv := schema.TrimFloat(f.Top.In(u.Depth), 2) + "–" + schema.TrimFloat(f.Bottom.In(u.Depth), 2)
 		mat := string(f.Material)
+		if row.IsPad() {
+			mat += " pad"
+		}
 		if f.Within != "" {
 			mat += " (in " + f.Within + ")"
 		}
 		if row.Err != nil {
-			fmt.Fprintf(tw, "  %d\t%s\t%s\t(error)\t-\t-\t-\t-\t-\t-\n", row.Index+1, mat, iv)
+			fmt.Fprintf(tw, "  %s\t%s\t%s\t(error)\t-\t-\t-\t-\t-\t-\n", row.Label(), mat, iv)
 			continue
 		}
 		yield, needed := "-", "-"
@@ -154,13 +162,13 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 		if row.Ratio > 0 {
 			ratio = fmt.Sprintf("%.2f", row.Ratio)
 		}
-		fmt.Fprintf(tw, "  %d\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", row.Index+1, mat, iv,
+		fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", row.Label(), mat, iv,
 			quantity.Number(row.Calculated.In(p)), quantity.Number(row.Calculated.In(s)), yield, needed, placedBags, placed, ratio)
 	}
 	tw.Flush()
-	for _, row := range r.Rows {
+	for _, row := range r.AllRows() {
 		if row.Err != nil {
-			fmt.Fprintf(w, "  fill %d cannot be computed: %v\n", row.Index+1, row.Err)
+			fmt.Fprintf(w, "  %s cannot be computed: %v\n", row.Fill.Path, row.Err)
 		}
 		for _, tc := range row.Tags {
 			if tc.Err != nil {
@@ -203,7 +211,7 @@ func yieldNotes(r *quantity.Report) []string {
 	u := r.Well.Units
 	seen := map[string]bool{}
 	var out []string
-	for _, row := range r.Rows {
+	for _, row := range r.AllRows() {
 		if !row.HasYield || row.Err != nil {
 			continue
 		}
@@ -219,25 +227,50 @@ func yieldNotes(r *quantity.Report) []string {
 	return out
 }
 
-func writeTotalsText(w io.Writer, totals []*quantity.Total, contingency float64) {
-	fmt.Fprintf(w, "Project totals (bags to order include a %s %% contingency)\n", schema.TrimFloat(contingency, 2))
-	if len(totals) == 0 {
+func writeOrderText(w io.Writer, o *quantity.Order) {
+	c := schema.TrimFloat(o.Contingency, 2)
+	if o.Planned {
+		fmt.Fprintf(w, "Order for the planned wells %s\n", strings.Join(o.For, ", "))
+	} else {
+		fmt.Fprintf(w, "Order (no well is planned: ordering for all %d wells)\n", len(o.For))
+	}
+	fmt.Fprintf(w, "  bags to order add %s %% to each volume before rounding up to whole bags\n", c)
+	writeLinesText(w, o.Lines, true)
+	if len(o.AsBuilt) > 0 {
+		fmt.Fprintf(w, "\nAs built, to reconcile: %s\n", strings.Join(o.AsBuilt, ", "))
+		writeLinesText(w, o.AsBuiltLines, false)
+	}
+}
+
+func writeLinesText(w io.Writer, lines []*total, order bool) {
+	if len(lines) == 0 {
 		fmt.Fprintln(w, "  no interval could be computed")
 		return
 	}
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
-	fmt.Fprintln(tw, "  material\tyield\tintervals\tcalculated\tbags needed\tbags to order\tbags placed")
-	for _, t := range totals {
-		bag, needed, order := "-", "-", "-"
+	if order {
+		fmt.Fprintln(tw, "  material\tyield\tintervals\tcalculated\tbags needed\tbags to order")
+	} else {
+		fmt.Fprintln(tw, "  material\tyield\tintervals\tcalculated\tbags needed\tbags placed\tplaced")
+	}
+	for _, t := range lines {
+		bag, needed, ord := "-", "-", "-"
 		if t.HasYield {
 			bag = quantity.FormatYield(t.Yield, t.Units)
-			needed, order = strconv.Itoa(t.BagsNeeded), strconv.Itoa(t.BagsOrder)
+			needed, ord = strconv.Itoa(t.BagsNeeded), strconv.Itoa(t.BagsOrder)
 		}
-		placed := "-"
+		if order {
+			fmt.Fprintf(tw, "  %s\t%s\t%d\t%s\t%s\t%s\n", t.Material, bag, t.Intervals, quantity.FormatVolume(t.Calculated, t.Units), needed, ord)
+			continue
+		}
+		placedBags, placed := "-", "-"
 		if t.BagsPlaced > 0 {
-			placed = schema.TrimFloat(t.BagsPlaced, 2)
+			placedBags = schema.TrimFloat(t.BagsPlaced, 2)
 		}
-		fmt.Fprintf(tw, "  %s\t%s\t%d\t%s\t%s\t%s\t%s\n", t.Material, bag, t.Intervals, quantity.FormatVolume(t.Calculated, t.Units), needed, order, placed)
+		if t.Placed > 0 {
+			placed = quantity.FormatVolume(t.Placed, t.Units)
+		}
+		fmt.Fprintf(tw, "  %s\t%s\t%d\t%s\t%s\t%s\t%s\n", t.Material, bag, t.Intervals, quantity.FormatVolume(t.Calculated, t.Units), needed, placedBags, placed)
 	}
 	tw.Flush()
 }
@@ -265,7 +298,11 @@ type jsonQuantities struct {
 	Profiles    []string        `json:"profiles"` // the profiles in force: "default thresholds" or "profile NAME"
 	Contingency float64         `json:"contingency_pct"`
 	Wells       []jsonWell      `json:"wells"`
+	OrderingFor []string        `json:"ordering_for"`
+	ForPlanned  bool            `json:"ordering_for_planned"`
 	Totals      []jsonTotal     `json:"totals"`
+	AsBuiltFor  []string        `json:"as_built"`
+	AsBuilt     []jsonTotal     `json:"as_built_totals"`
 	Findings    []rules.Finding `json:"findings"`
 }
 
@@ -332,6 +369,31 @@ type jsonTotal struct {
 	BagsNeeded *int     `json:"bags_needed,omitempty"`
 	BagsOrder  *int     `json:"bags_to_order,omitempty"`
 	BagsPlaced float64  `json:"bags_placed"`
+	Placed     *float64 `json:"placed,omitempty"`
+}
+
+// jsonTotals writes a list's lines.
+func jsonTotals(lines []*total) []jsonTotal {
+	out := []jsonTotal{}
+	for _, t := range lines {
+		p, _ := quantity.VolumeUnits(t.Units)
+		mu := quantity.MassUnit(t.Units)
+		jt := jsonTotal{Material: string(t.Material), MassUnit: string(mu), VolumeUnit: string(p), Calculated: r4(t.Calculated.In(p)),
+			Intervals: t.Intervals, BagsPlaced: t.BagsPlaced}
+		if t.HasYield {
+			jt.Yield = ptr(r4(t.Yield.Volume.In(p)))
+			if t.Yield.BagMass > 0 {
+				jt.BagMass = ptr(r4(t.Yield.BagMass.In(mu)))
+			}
+			jt.YieldBasis = string(t.Yield.Basis)
+			jt.BagsNeeded, jt.BagsOrder = ptr(t.BagsNeeded), ptr(t.BagsOrder)
+		}
+		if t.Placed > 0 {
+			jt.Placed = ptr(r4(t.Placed.In(p)))
+		}
+		out = append(out, jt)
+	}
+	return out
 }
 
 // r4 rounds to 4 decimals: stable output with no false precision.
@@ -339,8 +401,10 @@ func r4(v float64) float64 { return math.Round(v*1e4) / 1e4 }
 
 func ptr[T any](v T) *T { return &v }
 
-func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*quantity.Total, contingency float64, profiles []string) error {
-	out := jsonQuantities{Caution: quantitiesCaution, Profiles: profiles, Contingency: contingency, Wells: []jsonWell{}, Totals: []jsonTotal{}, Findings: []rules.Finding{}}
+func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
+	out := jsonQuantities{Caution: quantitiesCaution, Profiles: profiles, Contingency: order.Contingency, Wells: []jsonWell{}, Totals: jsonTotals(order.Lines),
+		OrderingFor: append([]string{}, order.For...), ForPlanned: order.Planned, AsBuiltFor: append([]string{}, order.AsBuilt...),
+		AsBuilt: jsonTotals(order.AsBuiltLines), Findings: []rules.Finding{}}
 	for _, wq := range wells {
 		r := wq.Report
 		u := r.Well.Units
@@ -348,7 +412,7 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*quantity
 		mu := quantity.MassUnit(u)
 		jw := jsonWell{File: wq.File, Well: r.Well.ID, DepthUnit: string(u.Depth), VolumeUnit: string(p), VolumeUnit2: string(s), MassUnit: string(mu),
 			Fills: []jsonFill{}, Pipes: []jsonPipe{}}
-		for _, row := range r.Rows {
+		for _, row := range r.AllRows() {
 			f := row.Fill
 			jf := jsonFill{Index: row.Index, Path: f.Path, Material: string(f.Material), Within: f.Within,
 				Top: r4(f.Top.In(u.Depth)), Bottom: r4(f.Bottom.In(u.Depth))}
@@ -395,21 +459,6 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*quantity
 		out.Wells = append(out.Wells, jw)
 		out.Findings = append(out.Findings, wq.Findings...)
 	}
-	for _, t := range totals {
-		p, _ := quantity.VolumeUnits(t.Units)
-		mu := quantity.MassUnit(t.Units)
-		jt := jsonTotal{Material: string(t.Material), MassUnit: string(mu), VolumeUnit: string(p), Calculated: r4(t.Calculated.In(p)),
-			Intervals: t.Intervals, BagsPlaced: t.BagsPlaced}
-		if t.HasYield {
-			jt.Yield = ptr(r4(t.Yield.Volume.In(p)))
-			if t.Yield.BagMass > 0 {
-				jt.BagMass = ptr(r4(t.Yield.BagMass.In(mu)))
-			}
-			jt.YieldBasis = string(t.Yield.Basis)
-			jt.BagsNeeded, jt.BagsOrder = ptr(t.BagsNeeded), ptr(t.BagsOrder)
-		}
-		out.Totals = append(out.Totals, jt)
-	}
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	return enc.Encode(out)
@@ -420,7 +469,7 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, totals []*quantity
 var quantitiesCSVHeader = []string{"kind", "file", "well", "fill", "material", "within", "top", "bottom", "depth_unit",
 	"calculated", "volume_unit", "yield", "yield_basis", "bag_mass", "mass_unit", "bags_needed", "bags_to_order", "bags_placed", "placed", "ratio", "note"}
 
-func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*quantity.Total, profiles []string) error {
+func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
 	cw := csv.NewWriter(w)
 	cw.Write(quantitiesCSVHeader)
 	num := func(v float64) string { return strconv.FormatFloat(r4(v), 'f', -1, 64) }
@@ -429,10 +478,10 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*quantity.
 		u := r.Well.Units
 		p, _ := quantity.VolumeUnits(u)
 		mu := quantity.MassUnit(u)
-		for _, row := range r.Rows {
+		for _, row := range r.AllRows() {
 			f := row.Fill
 			rec := make([]string, len(quantitiesCSVHeader))
-			rec[0], rec[1], rec[2], rec[3], rec[4], rec[5] = "interval", wq.File, r.Well.ID, strconv.Itoa(row.Index+1), string(f.Material), f.Within
+			rec[0], rec[1], rec[2], rec[3], rec[4], rec[5] = "interval", wq.File, r.Well.ID, row.Label(), string(f.Material), f.Within
 			rec[6], rec[7], rec[8] = num(f.Top.In(u.Depth)), num(f.Bottom.In(u.Depth)), string(u.Depth)
 			rec[10], rec[14] = string(p), string(mu)
 			if row.Err != nil {
@@ -460,11 +509,31 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*quantity.
 			cw.Write(rec)
 		}
 	}
-	for _, t := range totals {
+	lines := func(kind string, ts []*total, wells []string) {
+		for _, t := range ts {
+			csvTotal(cw, kind, t, countOf(t.Intervals, "interval")+" of "+strings.Join(wells, " "))
+		}
+	}
+	lines("order", order.Lines, order.For)
+	lines("as-built", order.AsBuiltLines, order.AsBuilt)
+	caution := make([]string, len(quantitiesCSVHeader))
+	caution[0], caution[20] = "caution", quantitiesCaution
+	prof := make([]string, len(quantitiesCSVHeader))
+	prof[0], prof[20] = "profile", strings.Join(profiles, "; ")
+	cw.Write(prof)
+	cw.Write(caution)
+	cw.Flush()
+	return cw.Error()
+}
+
+// csvTotal writes one line of a project list.
+func csvTotal(cw *csv.Writer, kind string, t *total, note string) {
+	num := func(v float64) string { return strconv.FormatFloat(r4(v), 'f', -1, 64) }
+	{
 		p, _ := quantity.VolumeUnits(t.Units)
 		mu := quantity.MassUnit(t.Units)
 		rec := make([]string, len(quantitiesCSVHeader))
-		rec[0], rec[4], rec[20] = "total", string(t.Material), countOf(t.Intervals, "interval")
+		rec[0], rec[4], rec[20] = kind, string(t.Material), note
 		rec[9], rec[10], rec[14] = num(t.Calculated.In(p)), string(p), string(mu)
 		if t.HasYield {
 			rec[11], rec[12] = num(t.Yield.Volume.In(p)), string(t.Yield.Basis)
@@ -476,16 +545,11 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, totals []*quantity.
 		if t.BagsPlaced > 0 {
 			rec[17] = num(t.BagsPlaced)
 		}
+		if t.Placed > 0 {
+			rec[18] = num(t.Placed.In(p))
+		}
 		cw.Write(rec)
 	}
-	prof := make([]string, len(quantitiesCSVHeader))
-	prof[0], prof[20] = "profile", strings.Join(profiles, "; ")
-	cw.Write(prof)
-	caution := make([]string, len(quantitiesCSVHeader))
-	caution[0], caution[20] = "caution", quantitiesCaution
-	cw.Write(caution)
-	cw.Flush()
-	return cw.Error()
 }
 
 // countOf is "1 interval" or "3 intervals".

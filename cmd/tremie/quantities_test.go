@@ -17,7 +17,7 @@ import (
 // (8.25^2 - 2.375^2) / 144 = 0.34046 ft2/ft = 2.547 US gal/ft:
 //
 //	pack  10 ft: 3.4046 ft3 (25.47 gal) / 0.5 ft3 per 50-lb bag = 6.81 -> 7
-//	chips  3 ft: 1.0214 ft3 / 0.65 ft3 per 50-lb bag = 1.57 -> 2
+//	chips  3 ft: 1.0214 ft3 / 0.6944 ft3 per 50-lb bag = 1.47 -> 2
 //	grout 17 ft: 5.7878 ft3 / 1.18 ft3 per 94-lb sack = 4.90 -> 5
 const wellTOML = `[units]
 depth = "ft"
@@ -139,9 +139,12 @@ func TestQuantitiesPlannedJSON(t *testing.T) {
 	if p := w.Pipes[0]; p.Unit != "gal/ft" || math.Abs(p.Inside-0.1743) > 0.0001 {
 		t.Errorf("riser inside %v %s", p.Inside, p.Unit)
 	}
-	// totals: two wells x (7, 2, 5) = 14, 4, 10; +10 % -> 15.4, 4.4, 11 ->
-	// 16, 5, 11 bags to order
-	want := map[string][2]int{"filter-pack": {14, 16}, "bentonite-chips": {4, 5}, "neat-cement": {10, 11}}
+	// totals: two wells x (7, 2, 5) = 14, 4, 10 bags needed. To order, 10 %
+	// goes on each volume before rounding (Kuo, Practical Design
+	// Calculations for Groundwater and Soil Remediation, ex. 2.21-2.22):
+	// pack 3.4046 x 1.1 / 0.5 = 7.49 -> 8, chips 1.0214 x 1.1 / 0.6944 =
+	// 1.62 -> 2, grout 5.7878 x 1.1 / 1.18 = 5.40 -> 6; twice: 16, 4, 12
+	want := map[string][2]int{"filter-pack": {14, 16}, "bentonite-chips": {4, 4}, "neat-cement": {10, 12}}
 	if len(q.Totals) != 3 {
 		t.Fatalf("%d totals", len(q.Totals))
 	}
@@ -161,7 +164,7 @@ func TestQuantitiesDemo(t *testing.T) {
 	if code != exitOK {
 		t.Fatalf("exit %d: %s", code, errs)
 	}
-	for _, s := range []string{"MW-3", "4.457", "0.56", "PLACED-VOLUME-LOW", "possible bridge", "expected 36.68 ft", "Project totals", "licensed professional"} {
+	for _, s := range []string{"MW-3", "4.457", "0.56", "PLACED-VOLUME-LOW", "possible bridge", "expected 36.68 ft", "As built, to reconcile", "licensed professional"} {
 		if !strings.Contains(out, s) {
 			t.Errorf("output lacks %q", s)
 		}
@@ -207,10 +210,11 @@ func TestQuantitiesCSVMetric(t *testing.T) {
 	if pack[col("volume_unit")] != "L" || pack[col("calculated")] != "85.6733" {
 		t.Errorf("pack row %v", pack)
 	}
-	// a 25-kg bag is not given, so the 50-lb reference bag holds:
-	// 85.673 L / (0.5 ft3 = 14.158 L) = 6.05 -> 7 bags
-	if pack[col("bags_needed")] != "7" {
-		t.Errorf("pack bags %s, want 7", pack[col("bags_needed")])
+	// no bag mass is given, so a metric well counts 25-kg bags: 0.5 ft3
+	// per 50 lb (22.680 kg) is 14.158 L x 25 / 22.680 = 15.607 L per bag,
+	// 85.673 / 15.607 = 5.49 -> 6 bags
+	if pack[col("bags_needed")] != "6" || pack[col("bag_mass")] != "25" {
+		t.Errorf("pack bags %s of %s kg, want 6 of 25", pack[col("bags_needed")], pack[col("bag_mass")])
 	}
 	if last := recs[len(recs)-1]; last[0] != "caution" {
 		t.Errorf("last record %v", last)
@@ -297,5 +301,82 @@ func TestQuantitiesProfile(t *testing.T) {
 	}
 	if code, _, _ := runQ("--profile", filepath.Join(dir, "none.toml"), dir); code != exitInput {
 		t.Errorf("missing profile: exit %d", code)
+	}
+}
+
+// The demo's surface completions, by hand (8.25-in hole; 2-in Sch 40 PVC,
+// OD 2.375 in per ASTM D1785; pi/4 d^2/144 ft2 for d in inches):
+//
+//	MW-1, flush-mount, 8-in vault to 1.0 ft, riser top at 0.32 ft:
+//	  concrete 0-1.0 ft beside the vault  pi/4 (68.0625 - 64)     /144 x 1.0 = 0.02216
+//	           1.0-1.5 ft around the riser pi/4 (68.0625 - 5.6406) /144 x 0.5 = 0.17023
+//	                                                                 0.19238 ft3
+//	  pad, flush: 2 x 2 x 0.5 less the hole pi/4 68.0625/144 x 0.5 = 2 - 0.18561 = 1.81439 ft3
+//	MW-2, stick-up, 6-in protective casing to 2.0 ft:
+//	  concrete 0-1 ft beside the casing pi/4 (68.0625 - 36)/144 x 1 = 0.17487 ft3
+//	  neat cement 1-2 ft 0.17487 + 2-4 ft 2 x 0.34045 = 0.85578 ft3;
+//	    1 sack x 1.18 ft3 placed: ratio 1.18 / 0.85578 = 1.379
+//	  pad on grade: 3 x 3 x 0.33 less the casing pi/4 36/144 x 0.33
+//	    = 2.97 - 0.06480 = 2.90520 ft3
+func TestQuantitiesDemoSurface(t *testing.T) {
+	code, out, errs := runQ("--format", "json", filepath.Join("demo", "wells", "MW-1.toml"), filepath.Join("demo", "wells", "MW-2.toml"))
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	var q struct {
+		Wells []struct {
+			Well  string `json:"well"`
+			Fills []struct {
+				Path       string   `json:"path"`
+				Material   string   `json:"material"`
+				Calculated float64  `json:"calculated"`
+				Ratio      *float64 `json:"ratio"`
+				BagsNeeded *int     `json:"bags_needed"`
+			} `json:"fills"`
+		} `json:"wells"`
+		Totals []struct {
+			Material   string  `json:"material"`
+			Calculated float64 `json:"calculated"`
+		} `json:"totals"`
+	}
+	if err := json.Unmarshal([]byte(out), &q); err != nil {
+		t.Fatal(err)
+	}
+	type fig struct {
+		well, path  string
+		calc, ratio float64
+	}
+	for _, c := range []fig{
+		{"MW-1", "fill[4]", 0.1924, 0},
+		{"MW-1", "surface.pad", 1.8144, 0},
+		{"MW-2", "fill[2]", 0.8558, 1.379},
+		{"MW-2", "fill[3]", 0.1749, 0},
+		{"MW-2", "surface.pad", 2.9052, 0},
+	} {
+		found := false
+		for _, w := range q.Wells {
+			for _, f := range w.Fills {
+				if w.Well != c.well || f.Path != c.path {
+					continue
+				}
+				found = true
+				if math.Abs(f.Calculated-c.calc) > 1.5e-4 {
+					t.Errorf("%s %s: %.4f ft3, by hand %.4f", c.well, c.path, f.Calculated, c.calc)
+				}
+				if c.ratio > 0 && (f.Ratio == nil || math.Abs(*f.Ratio-c.ratio) > 1e-3) {
+					t.Errorf("%s %s: ratio %v, by hand %.3f", c.well, c.path, f.Ratio, c.ratio)
+				}
+			}
+		}
+		if !found {
+			t.Errorf("%s %s not reported", c.well, c.path)
+		}
+	}
+	// the order counts the concrete of both fills and both pads:
+	// 0.19238 + 1.81439 + 0.17487 + 2.90520 = 5.08684 ft3
+	for _, tot := range q.Totals {
+		if tot.Material == "concrete" && math.Abs(tot.Calculated-5.0868) > 2e-4 {
+			t.Errorf("concrete to order %.4f ft3, by hand 5.0868", tot.Calculated)
+		}
 	}
 }

@@ -48,6 +48,7 @@ func (l *layout) column(p *placed) []draw.Item {
 	}
 	items = append(items, l.pipes(p, yd)...)
 	items = append(items, l.unitBar(p, yd)...)
+	items = append(items, l.lithologyCodes(p, yd)...)
 	// Ground mark across the column.
 	items = append(items, draw.Shape{Points: []draw.Point{{X: x0 - 3, Y: yd(0)}, {X: x0 + colWidth + 3, Y: yd(0)}}, Style: draw.Style{Stroke: groundInk, StrokeWidth: 1.2}, Role: "section-ground:" + w.ID})
 	// Total depth.
@@ -142,7 +143,7 @@ func (l *layout) screenLabels(p *placed, yd func(schema.Length) float64) []draw.
 		x := p.x + colWidth/2 + sizeSmall + 1
 		if lb.y0 < lastRight+2 {
 			if lb.y0 >= lastLeft+2 {
-				x = p.x - colWidth/2 - 2
+				x = p.x - colWidth/2 - unitBarWidth - 2
 				lastLeft = lb.y1
 			} else {
 				x = p.x + colWidth/2 + 2*sizeSmall + 2 // a second row on the right
@@ -166,4 +167,35 @@ func (l *layout) paint(s symbols.Symbol, r draw.Rect) []draw.Item {
 // left to the axis title.
 func (l *layout) elev(m float64) string {
 	return strconv.FormatFloat(schema.Length(m).In(l.u), 'f', 1, 64)
+}
+
+// lithologyCodes writes each interval's USCS group symbol (or the rock
+// class's short name) in the strip of lithology left of the hole, turned
+// to run along it, on a white ground so the pattern does not hide it;
+// an interval drawn too short for its code goes without (the legend
+// still names its pattern).
+func (l *layout) lithologyCodes(p *placed, yd func(schema.Length) float64) []draw.Item {
+	var items []draw.Item
+	strip := (colWidth - holeWidth) / 2
+	size := 4.6
+	for _, ly := range p.w.Lithology {
+		code := ly.USCS
+		if code == "" {
+			code = symbols.ForLayer(ly).Code
+		}
+		if code == "" {
+			continue
+		}
+		tw := draw.TextWidth(draw.Bold, size, code)
+		y0, y1 := yd(ly.Top), yd(ly.Bottom)
+		if y1-y0 < tw+3 {
+			continue
+		}
+		cx, cy := p.x-colWidth/2+strip/2, (y0+y1)/2
+		items = append(items,
+			draw.Box{Rect: draw.Rect{X: cx - size*0.62, Y: cy - tw/2 - 1, W: size * 1.24, H: tw + 2}, Style: draw.Style{Fill: draw.White}},
+			draw.Text{At: draw.Point{X: cx + size*0.36, Y: cy}, S: code, Size: size, Font: draw.Bold, Anchor: draw.Middle, Color: ink, Rotate: 90, Role: "section-uscs:" + p.w.ID},
+		)
+	}
+	return items
 }

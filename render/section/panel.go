@@ -43,7 +43,7 @@ func (l *layout) planInset(r draw.Rect) []draw.Item {
 		draw.Box{Rect: r, Style: draw.Style{Stroke: ink, StrokeWidth: 0.5}, Role: "section-plan"},
 		draw.Text{At: draw.Point{X: r.X + 4, Y: r.Y + 10}, S: "Plan", Size: sizeLabel, Font: draw.Bold, Color: ink},
 	}
-	pts := append([]XY{}, l.line...)
+	pts := append([]XY{}, l.extendedLine()...)
 	for _, p := range l.wells {
 		pts = append(pts, p.plan)
 	}
@@ -60,7 +60,7 @@ func (l *layout) planInset(r draw.Rect) []draw.Item {
 		return draw.Point{X: cx + (p.E-(minE+maxE)/2)*k, Y: cy - (p.N-(minN+maxN)/2)*k}
 	}
 	var line []draw.Point
-	for _, p := range l.line {
+	for _, p := range l.extendedLine() {
 		line = append(line, at(p))
 	}
 	items = append(items, draw.Shape{Points: line, Style: draw.Style{Stroke: ink, StrokeWidth: 0.8, Dash: []float64{4, 2}}, Role: "section-plan-line"})
@@ -225,4 +225,29 @@ func legendGrid(ents []legendEntry, r draw.Rect, cols int, size float64) ([]draw
 		y += h
 	}
 	return items, true
+}
+
+// extendedLine is the section line run on past its ends to the wells
+// that project beyond them, as the distance axis draws them.
+func (l *layout) extendedLine() []XY {
+	pl := append([]XY{}, l.line...)
+	cmin, cmax := 0.0, l.line.length()
+	for _, p := range l.wells {
+		cmin, cmax = math.Min(cmin, p.chainage), math.Max(cmax, p.chainage)
+	}
+	n := len(pl)
+	along := func(a, b XY, d float64) XY {
+		len := math.Hypot(b.E-a.E, b.N-a.N)
+		if len == 0 {
+			return a
+		}
+		return XY{E: a.E + (b.E-a.E)/len*d, N: a.N + (b.N-a.N)/len*d}
+	}
+	if cmin < 0 {
+		pl[0] = along(l.line[0], l.line[1], cmin)
+	}
+	if over := cmax - l.line.length(); over > 0 {
+		pl[n-1] = along(l.line[n-1], l.line[n-2], -over)
+	}
+	return pl
 }

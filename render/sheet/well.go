@@ -8,6 +8,7 @@ import (
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/render/symbols"
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
 )
 
 // Drawn minimum wall thicknesses: a 2-in Sch 40 wall at 1:10 would be a
@@ -349,17 +350,8 @@ func splitByOpenHole(w *schema.Well, iv schema.Interval) []wallSeg {
 	return out
 }
 
-// padInterval is where the concrete pad stands: on grade around a
-// stick-up, flush with the ground around a vault.
-func padInterval(s schema.Surface) (schema.Interval, bool) {
-	if s.Pad == nil || s.Pad.Thickness <= 0 {
-		return schema.Interval{}, false
-	}
-	if s.Kind == schema.FlushMount {
-		return schema.Interval{Top: 0, Bottom: s.Pad.Thickness}, true
-	}
-	return schema.Interval{Top: -s.Pad.Thickness, Bottom: 0}, true
-}
+// padInterval is where the concrete pad stands, as the quantities count it.
+func padInterval(s schema.Surface) (schema.Interval, bool) { return quantity.PadInterval(s) }
 
 // pad paints the concrete pad to the horizontal scale, cut with break
 // marks where it is wider than the column.

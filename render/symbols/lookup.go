@@ -26,6 +26,9 @@ func ForLayer(l schema.Layer) Symbol {
 		}
 		return unclassifiedRow
 	}
+	if l.Weathering.Soil() {
+		return byID["rock:weathered"] // graded IV to VI: drawn as weathered rock whatever its name
+	}
 	return ForRock(l.Rock)
 }
 

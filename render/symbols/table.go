@@ -24,6 +24,7 @@ var materialSymbols = []Symbol{
 	{ID: "fill:bentonite-grout", Name: "Bentonite grout", Kind: Material, Fill: groundBentonite, marks: bentoniteGrout},
 	{ID: "fill:neat-cement", Name: "Neat cement grout", Kind: Material, Fill: groundRock, marks: neatCement},
 	{ID: "fill:cement-bentonite", Name: "Cement-bentonite grout", Kind: Material, Fill: groundRock, marks: cementBentonite},
+	{ID: "fill:sand-cement", Name: "Sand-cement grout", Kind: Material, Fill: groundRock, marks: sandCement},
 	{ID: "fill:concrete", Name: "Concrete", Kind: Material, Fill: groundRock, marks: concrete},
 	{ID: "fill:native-backfill", Name: "Native backfill", Kind: Material, Fill: groundPlaced, marks: nativeBackfill},
 	{ID: "fill:cave-in", Name: "Cave-in (collapsed formation)", Kind: Material, Fill: groundPlaced, marks: caveIn},
@@ -151,6 +152,16 @@ func neatCement(p *pen) {
 func cementBentonite(p *pen) {
 	p.hatch(45, 3.6, markWidth, nil)
 	p.hatch(135, 3.6, markWidth, []float64{1.6, 1.4})
+}
+
+// sandCement: the grout hatch one way only, with sand stipple between
+// the lines: cement carrying sand.
+func sandCement(p *pen) {
+	p.hatch(45, 3.6, markWidth, nil)
+	const w, h = 3.2, 2.6
+	tiles(p.r, w, h, 2, func(x, y float64, i, j int) {
+		p.dot(x+stagger(j, w)+0.6+0.8*hash(i, j, 2), y+1.3, 0.3)
+	})
 }
 
 // concrete: open triangles (aggregate) among dots.

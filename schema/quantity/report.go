@@ -3,6 +3,7 @@ package quantity
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"github.com/tremie-dev/tremie/schema"
 )
@@ -13,6 +14,9 @@ type Report struct {
 	Well  *schema.Well
 	Rows  []Row
 	Pipes []PipeVolume
+	// Pad is the surface pad's concrete beyond the annular fills, as a
+	// row (Index -1, Fill.Path PadPath); nil when the well has no pad.
+	Pad *Row
 }
 
 // Row is one fill interval's arithmetic. Volumes are in cubic metres like
@@ -81,6 +85,7 @@ func Compute(w *schema.Well, y *Yields) *Report {
 	for i, f := range w.Fills {
 		r.Rows = append(r.Rows, row(w, secs, y, i, f))
 	}
+	r.Pad = padRow(w, y)
 	for _, p := range w.HolePipes() {
 		pv := PipeVolume{Path: p.Path, Interval: p.Interval}
 		if p.Casing != nil {
@@ -101,7 +106,7 @@ func row(w *schema.Well, secs *schema.Sections, y *Yields, i int, f schema.Fill)
 		r.Err = fmt.Errorf("%s: %w", fillPath(f, i), r.Err)
 		r.Calculated = 0
 	}
-	r.Yield, r.HasYield = y.For(f)
+	r.Yield, r.HasYield = y.ForWell(f, w.Units)
 	if r.HasYield && r.Yield.Volume > 0 && r.Err == nil {
 		r.BagsExact = float64(r.Calculated / r.Yield.Volume)
 		r.BagsNeeded = bagsUp(r.BagsExact)
@@ -132,6 +137,27 @@ func bagsUp(n float64) int {
 		return 0
 	}
 	return int(math.Ceil(n - 1e-6))
+}
+
+// AllRows is the fill rows followed by the pad's, if any: everything the
+// well takes in bags.
+func (r *Report) AllRows() []Row {
+	if r.Pad == nil {
+		return r.Rows
+	}
+	out := make([]Row, 0, len(r.Rows)+1)
+	return append(append(out, r.Rows...), *r.Pad)
+}
+
+// IsPad reports whether the row is the surface pad's.
+func (row Row) IsPad() bool { return row.Index < 0 }
+
+// Label is the row's name in a report: "3" for the third fill, "pad".
+func (row Row) Label() string {
+	if row.IsPad() {
+		return "pad"
+	}
+	return strconv.Itoa(row.Index + 1)
 }
 
 // fillPath is a fill's key path, made up for a well built in code.

@@ -32,7 +32,8 @@ func typical() *schema.Well {
 //	pack 12 ft: 4.0855 ft3 / 0.5 ft3 per bag = 8.17 -> 9 bags; 5 placed =
 //	  2.5 ft3, ratio 0.612; after 3 bags (1.5 ft3) the top should be at
 //	  40 - 1.5 / 0.34046 = 35.594 ft; after 5, 40 - 2.5 / 0.34046 = 32.657 ft
-//	chips 3 ft: 1.0214 ft3 / 0.65 = 1.571 -> 2 bags; 2 placed, ratio 1.273
+//	chips 3 ft: 1.0214 ft3 / (50/72 = 0.6944) = 1.471 -> 2 bags; 2 placed
+//	  = 1.3889 ft3, ratio 1.360
 //	grout 25 ft: 8.5115 ft3 / 1.18 = 7.213 -> 8 sacks; 9 ft3 placed, 1.057
 func TestComputeTypical(t *testing.T) {
 	r := Compute(typical(), nil)
@@ -51,7 +52,7 @@ func TestComputeTypical(t *testing.T) {
 	}
 	near(t, "pack placed ft3", pack.Placed.In(schema.CubicFeet), 2.5, 1e-12)
 	near(t, "pack ratio", pack.Ratio, 0.612, 1e-3)
-	near(t, "chips ratio", chips.Ratio, 1.273, 1e-3)
+	near(t, "chips ratio", chips.Ratio, 1.360, 1e-3)
 	near(t, "grout ratio", grout.Ratio, 1.057, 1e-3)
 	if len(pack.Tags) != 2 {
 		t.Fatalf("%d tag checks", len(pack.Tags))

@@ -28,10 +28,10 @@ func slices(w *schema.Well, secs *schema.Sections, r Region, top, bottom schema.
 		}
 		return nil, fmt.Errorf("top %s is below bottom %s", w.Units.FormatDepth(top), w.Units.FormatDepth(bottom))
 	}
-	cs := secs.Within(top, bottom)
+	cs := within(w, secs, top, bottom)
 	out := make([]Slice, 0, len(cs))
 	for _, c := range cs {
-		a, err := Area(c, r, w.Units)
+		a, err := regionArea(w, c, r)
 		if err != nil {
 			return nil, fmt.Errorf("at %s: %w", w.Units.FormatInterval(c.Top, c.Bottom), err)
 		}
@@ -75,11 +75,11 @@ func riseTop(w *schema.Well, secs *schema.Sections, f schema.Fill, v schema.Volu
 	// Walk up slab by slab, from the fill's bottom to the highest depth
 	// the geometry still defines (ground, or the casing's top).
 	ceiling := min(f.Top, 0)
-	cs := secs.Within(ceiling, f.Bottom)
+	cs := within(w, secs, ceiling, f.Bottom)
 	left := float64(v)
 	for i := len(cs) - 1; i >= 0; i-- {
 		lo, hi := cs[i].Bottom, cs[i].Top
-		a, aerr := Area(cs[i], RegionOf(f), w.Units)
+		a, aerr := regionArea(w, cs[i], RegionOf(f))
 		if aerr != nil {
 			if hi >= f.Top {
 				// within the interval itself the geometry must hold

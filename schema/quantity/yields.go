@@ -86,35 +86,93 @@ func (y *Yields) For(f schema.Fill) (Yield, bool) {
 	return v.Scaled(f.BagMass), true
 }
 
+// ForWell is For with the well's units: a fill of a metric well that
+// gives no bag mass is counted in the metric bag of its material
+// (MetricBag), not in the US sack the built-in figure is for.
+func (y *Yields) ForWell(f schema.Fill, u schema.Units) (Yield, bool) {
+	v, ok := y.For(f)
+	if !ok || f.Yield > 0 || f.BagMass > 0 || u.Imperial() {
+		return v, ok
+	}
+	if v.Basis != CommonPractice && v.Basis != FromMemory {
+		return v, ok // a project's own figure stays as written
+	}
+	if m := MetricBag(f.Material); m > 0 {
+		v = v.Scaled(m)
+	}
+	return v, ok
+}
+
+// MetricBag is the bag a material comes in where it is sold by the
+// kilogram: 25 kg for sand, bentonite and cement (EN 197-1 cements are
+// sold in 25-kg sacks in most of Europe: common practice), 0 for a
+// material not bagged.
+func MetricBag(m schema.Material) schema.Mass {
+	switch m.Group() {
+	case schema.BackfillGroup:
+		return 0
+	}
+	return schema.MassFrom(25, schema.Kilograms)
+}
+
 func ft3(v float64) schema.Volume { return schema.VolumeFrom(v, schema.CubicFeet) }
 func lb(v float64) schema.Mass    { return schema.MassFrom(v, schema.Pounds) }
 
+// Densities used to make up the default yields. Water weighs 62.4 lb/ft3
+// and a US gallon is 231 in3 (NIST Handbook 44, appendix C), so 7.48052
+// gal/ft3.
+const (
+	waterLbPerFt3 = 62.4
+	galPerFt3     = 1728.0 / 231
+	cementSG      = 3.15 // Portland cement, ASTM C188 typical (common practice)
+	bentoniteSG   = 2.6  // sodium montmorillonite (from memory)
+	quartzSG      = 2.65 // silica sand (common practice)
+)
+
+// absolute is the absolute volume in cubic feet of pounds lb of a solid of
+// specific gravity sg.
+func absolute(lb, sg float64) float64 { return lb / (sg * waterLbPerFt3) }
+
 // DefaultYields is the built-in table. The dry materials' figures are
-// bulk volumes of the bag as poured; the slurries' are absolute-volume
-// sums (solids at their specific gravity plus the mix water), which is how
-// a mix sheet reaches them. Native backfill and cave-in come by the
-// bucket, not the bag, and have none. Each call returns a fresh table.
+// bulk volumes of the bag as poured (bag mass over loose bulk density);
+// the slurries' are absolute-volume sums (solids at their specific
+// gravity plus the mix water), which is how a mix sheet reaches them.
+// Native backfill and cave-in come by the bucket, not the bag, and have
+// none. Each call returns a fresh table.
 func DefaultYields() *Yields {
 	y := &Yields{}
 	sand := Yield{Volume: ft3(0.5), BagMass: lb(50), Basis: CommonPractice,
 		Note: "50-lb bag of dry silica sand at about 100 lb/ft3 loose"}
 	y.Set(schema.FilterPack, sand)
 	y.Set(schema.FineSand, sand)
-	dryBentonite := Yield{Volume: ft3(0.65), BagMass: lb(50), Basis: FromMemory,
-		Note: "50-lb bag; product sheets quote 0.6 to 0.7 ft3"}
-	y.Set(schema.BentoniteChips, dryBentonite)
-	y.Set(schema.BentonitePellets, dryBentonite)
-	y.Set(schema.BentoniteGranular, dryBentonite)
+	// 50 lb / 72 lb/ft3 = 0.694 ft3
+	y.Set(schema.BentoniteChips, Yield{Volume: ft3(50.0 / 72), BagMass: lb(50), Basis: FromMemory,
+		Note: "50-lb bag of chips at about 72 lb/ft3 bulk (0.68 to 0.70 ft3 per bag)"})
+	y.Set(schema.BentonitePellets, Yield{Volume: ft3(50.0 / 72), BagMass: lb(50), Basis: FromMemory,
+		Note: "50-lb pail or bag of pellets at about 72 lb/ft3 bulk"})
+	// 28 ft3 per short ton: 2000 / 28 = 71.4 lb/ft3, 50 lb = 0.700 ft3
+	y.Set(schema.BentoniteGranular, Yield{Volume: ft3(50 * 28 / 2000.0), BagMass: lb(50), Basis: CommonPractice,
+		Note: "50-lb bag of granular bentonite at 28 ft3 per short ton (71.4 lb/ft3)"})
 	// 50 lb / (2.6 x 62.4 lb/ft3) + 24 gal / 7.48052 gal/ft3 = 0.31 + 3.21
 	y.Set(schema.BentoniteGrout, Yield{Volume: ft3(3.5), BagMass: lb(50), Basis: FromMemory,
 		Note: "50-lb bag of grout-grade bentonite with about 24 US gal water (20% solids)"})
-	// 94 lb / (3.15 x 62.4 lb/ft3) + 5.2 gal / 7.48052 gal/ft3 = 0.48 + 0.70
+	// 94 lb / (3.15 x 62.4 lb/ft3) + 5.2 gal / 7.48052 gal/ft3 = 0.48 + 0.70,
+	// 1.18 in the cementing tables (the sack's entrained air)
 	y.Set(schema.NeatCement, Yield{Volume: ft3(1.18), BagMass: lb(94), Basis: CommonPractice,
 		Note: "94-lb sack of Portland cement with 5.2 US gal water"})
 	// as neat cement, plus 4.7 lb bentonite (5%) and 0.65 gal water per 1%
 	y.Set(schema.CementBentonite, Yield{Volume: ft3(1.64), BagMass: lb(94), Basis: FromMemory,
 		Note: "94-lb sack of Portland cement with 5% bentonite and 8.5 US gal water"})
+	y.Set(schema.SandCement, Yield{Volume: ft3(SandCementYield(94, 188, 7)), BagMass: lb(94), Basis: CommonPractice,
+		Note: "94-lb sack of Portland cement with 188 lb sand (2 parts sand to 1 of cement by weight) and 7 US gal water, by absolute volumes"})
 	y.Set(schema.Concrete, Yield{Volume: ft3(0.6), BagMass: lb(80), Basis: FromMemory,
 		Note: "80-lb bag of premixed concrete"})
 	return y
+}
+
+// SandCementYield is the volume in cubic feet of a batch of cement and
+// sand (pounds) with water (US gallons), by absolute volumes: cement at
+// specific gravity 3.15, quartz sand at 2.65, no entrained air.
+func SandCementYield(cementLb, sandLb, waterGal float64) float64 {
+	return absolute(cementLb, cementSG) + absolute(sandLb, quartzSG) + waterGal/galPerFt3
 }
