@@ -58,7 +58,7 @@ func (t *table) has(k string) bool { _, ok := t.m[k]; return ok }
 
 func (r *reader) orientation(t *table) Orientation {
 	defer t.done()
-	o := Orientation{North: NorthReference(t.oneOf("north", "true", "magnetic")), Given: true, Pos: r.at(t.path)}
+	o := Orientation{North: NorthReference(t.oneOf("north")), Given: true, Pos: r.at(t.path)}
 	if o.North == "" {
 		o.North = TrueNorth
 		if !t.has("north") {
@@ -94,7 +94,7 @@ func (r *reader) wallImage(t *table, i int, w *Well) WallImage {
 		r.errAt(t.keyPath("file"), "file %q is not a PNG, JPEG or TIFF image (by its extension)", im.File)
 	}
 	im.LeftAzimuth = r.azimuth(t, "left_azimuth", false)
-	switch t.oneOf("direction", "clockwise", "counterclockwise") {
+	switch t.oneOf("direction") {
 	case "counterclockwise":
 		im.Clockwise = false
 	}
@@ -109,8 +109,8 @@ func (r *reader) feature(t *table, w *Well) (Feature, bool) {
 	if !t.has("kind") {
 		r.errAt(t.path, "missing required key \"kind\" in [[feature]] (one of: %s)", strings.Join(featureKindNames, ", "))
 	}
-	f.Kind = FeatureKind(t.oneOf("kind", featureKindNames...))
-	f.Confidence = Confidence(t.oneOf("confidence", "high", "medium", "low"))
+	f.Kind = FeatureKind(t.oneOf("kind"))
+	f.Confidence = Confidence(t.oneOf("confidence"))
 	if v, ok := t.nonNegative("depth"); ok {
 		f.Depth = LengthFrom(v, u.Depth)
 	}
@@ -190,7 +190,7 @@ func (r *reader) azimuth(t *table, k string, required bool) float64 {
 // tracePoints reads points = [[azimuth, depth], ...].
 func (r *reader) tracePoints(t *table, u Units) []TracePoint {
 	k := "points"
-	v, _ := t.get(k)
+	v, _ := t.get(k, TypeNumberPairs)
 	arr, ok := v.([]any)
 	if !ok {
 		r.errAt(t.keyPath(k), "points must be an array of [azimuth, depth] pairs, not %s", typeName(v))

@@ -103,11 +103,10 @@ func (r *reader) well(root *table) *Well {
 	w.Project = wt.str("project")
 	w.Client = wt.str("client")
 	w.Site = wt.str("site")
-	purposes := purposeNames
 	if _, ok := wt.m["purpose"]; !ok {
-		r.errAt("well", "missing required key \"purpose\" in [well] (one of: %s)", strings.Join(purposes, ", "))
+		r.errAt("well", "missing required key \"purpose\" in [well] (one of: %s)", strings.Join(purposeNames, ", "))
 	}
-	w.Purpose = Purpose(wt.oneOf("purpose", purposes...))
+	w.Purpose = Purpose(wt.oneOf("purpose"))
 	w.Status = wt.str("status")
 	w.Drilled = wt.date("drilled")
 	w.Completed = wt.date("completed")
@@ -197,18 +196,18 @@ func (r *reader) units(t *table, root *table) Units {
 	if _, ok := t.m["depth"]; !ok {
 		r.errAt("units", "missing required key \"depth\" in [units] (\"ft\" or \"m\")")
 	}
-	depth := DepthUnit(t.oneOf("depth", "ft", "m"))
+	depth := DepthUnit(t.oneOf("depth"))
 	if depth == "" {
 		depth = Feet
 	}
 	u := DefaultUnits(depth)
-	if d := t.oneOf("diameter", "in", "mm"); d != "" {
+	if d := t.oneOf("diameter"); d != "" {
 		u.Diameter = DiameterUnit(d)
 	}
-	if m := t.oneOf("mass", "lb", "kg"); m != "" {
+	if m := t.oneOf("mass"); m != "" {
 		u.Mass = MassUnit(m)
 	}
-	if v := t.oneOf("volume", "ft3", "gal", "L", "m3"); v != "" {
+	if v := t.oneOf("volume"); v != "" {
 		u.Volume = VolumeUnit(v)
 	}
 	return u
@@ -292,7 +291,7 @@ func (r *reader) pipe(t *table, u Units) Pipe {
 func (r *reader) casing(t *table, u Units) Casing {
 	defer t.done()
 	c := Casing{Interval: r.interval(t, u, true), Pos: r.at(t.path), Path: t.path}
-	c.Kind = CasingKind(t.oneOf("kind", "surface", "conductor", "intermediate", "production"))
+	c.Kind = CasingKind(t.oneOf("kind"))
 	if c.Kind == "" {
 		c.Kind = SurfaceCasing
 	}
@@ -346,7 +345,7 @@ func (r *reader) section(t *table, u Units, prev Pipe) Section {
 	if _, ok := t.m["kind"]; !ok {
 		r.errAt(t.path, "missing required key \"kind\" in [[string.section]] (riser, screen or sump)")
 	}
-	sec.Kind = SectionKind(t.oneOf("kind", "riser", "screen", "sump"))
+	sec.Kind = SectionKind(t.oneOf("kind"))
 	sec.Pipe = r.pipe(t, u)
 	if !sec.Pipe.Known() {
 		if !prev.Known() {
@@ -363,7 +362,7 @@ func (r *reader) section(t *table, u Units, prev Pipe) Section {
 	}
 	slot, hasSlot := t.positive("slot")
 	num, hasNum := t.positive("slot_number")
-	typ := t.oneOf("type", "slotted", "continuous-wrap", "prepacked")
+	typ := t.oneOf("type")
 	if sec.Kind != ScreenSection {
 		if hasSlot || hasNum || typ != "" {
 			r.errAt(t.path, "slot, slot_number and type apply to screen sections only")
@@ -405,11 +404,10 @@ func (r *reader) fill(t *table, w *Well) Fill {
 	defer t.done()
 	u := w.Units
 	f := Fill{Interval: r.interval(t, u, false), Pos: r.at(t.path), Path: t.path}
-	names := materialNames
 	if _, ok := t.m["material"]; !ok {
-		r.errAt(t.path, "missing required key \"material\" in [[fill]] (one of: %s)", strings.Join(names, ", "))
+		r.errAt(t.path, "missing required key \"material\" in [[fill]] (one of: %s)", strings.Join(materialNames, ", "))
 	}
-	f.Material = Material(t.oneOf("material", names...))
+	f.Material = Material(t.oneOf("material"))
 	f.Product = t.str("product")
 	f.Gradation = t.str("gradation")
 	if f.Gradation != "" {
@@ -428,7 +426,7 @@ func (r *reader) fill(t *table, w *Well) Fill {
 	if f.GrainMin > 0 && f.GrainMax > 0 && f.GrainMin > f.GrainMax {
 		r.errAt(t.keyPath("grain_max"), "grain_max is smaller than grain_min")
 	}
-	f.Method = Placement(t.oneOf("method", "tremie", "poured", "pumped"))
+	f.Method = Placement(t.oneOf("method"))
 	f.Within = t.str("within")
 	if f.Within != "" {
 		found := false
@@ -510,12 +508,12 @@ func (r *reader) waterLevel(t *table, w *Well) WaterLevel {
 	}
 	d, _ := t.num("depth")
 	wl.Written = LengthFrom(d, w.Units.Depth)
-	wl.Reference = LevelReference(t.oneOf("reference", "ground", "measuring-point"))
+	wl.Reference = LevelReference(t.oneOf("reference"))
 	if wl.Reference == "" {
 		wl.Reference = FromGround
 	}
 	wl.Measured, wl.HasTime = t.instant("measured")
-	wl.Kind = LevelKind(t.oneOf("kind", "first-encountered", "static", "pumping"))
+	wl.Kind = LevelKind(t.oneOf("kind"))
 	if wl.Kind == "" {
 		wl.Kind = Static
 	}
@@ -537,7 +535,7 @@ func measuringPointHeight(w *Well) Length {
 
 func (r *reader) surface(t *table, u Units) Surface {
 	defer t.done()
-	s := Surface{Kind: SurfaceKind(t.oneOf("kind", "stick-up", "flush-mount")), Lock: t.str("lock"), Drainage: t.str("drainage"), Bollards: t.integer("bollards"), Pos: r.at(t.path)}
+	s := Surface{Kind: SurfaceKind(t.oneOf("kind")), Lock: t.str("lock"), Drainage: t.str("drainage"), Bollards: t.integer("bollards"), Pos: r.at(t.path)}
 	if p := t.sub("protective"); p != nil {
 		pc := &Protective{Interval: r.interval(p, u, true), Material: p.str("material"), Pos: r.at(p.path)}
 		if d, ok := p.positive("diameter"); ok {

@@ -5,7 +5,7 @@ package schema
 
 // boolean reads a true/false key.
 func (t *table) boolean(k string) bool {
-	v, ok := t.get(k)
+	v, ok := t.get(k, TypeBool)
 	if !ok {
 		return false
 	}
@@ -20,9 +20,9 @@ func (t *table) boolean(k string) bool {
 // a casing.
 func (r *reader) liner(t *table) *Liner {
 	in := t.str("hung_in")
-	hanger := HangerKind(t.oneOf("hanger", string(Packer), string(Hanger)))
+	hanger := HangerKind(t.oneOf("hanger"))
 	product := t.str("hanger_product")
-	seal := Material(t.oneOf("lap_seal", materialNames...))
+	seal := Material(t.oneOf("lap_seal"))
 	if in == "" {
 		for _, k := range []string{"hanger", "hanger_product", "lap_seal"} {
 			if _, ok := t.m[k]; ok {

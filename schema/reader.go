@@ -18,6 +18,8 @@ type reader struct {
 	lines map[string]int    // key path -> line, for every key; scanned when needed
 	pos   map[string]keyPos // with columns; scanned on the first error
 	errs  ErrorList
+
+	onRead func(path, key string) // tests: called for every key the loader reads
 }
 
 // errAt records an error at the value of a key path (or its nearest
@@ -52,12 +54,13 @@ type table struct {
 	r    *reader
 	path string
 	m    map[string]any
-	used []string  // keys asked for; a table has few, so a slice beats a map
-	buf  [8]string // used's first backing array, saving an allocation per table
+	spec *TableSpec // the keys the table may hold (see WellFile)
+	used []string   // keys asked for; a table has few, so a slice beats a map
+	buf  [8]string  // used's first backing array, saving an allocation per table
 }
 
 func (r *reader) root(m map[string]any) *table {
-	return &table{r: r, m: m}
+	return &table{r: r, m: m, spec: WellFile}
 }
 
 // use marks a key as read.
@@ -85,20 +88,46 @@ func (t *table) keyPath(k string) string {
 	return t.path + "." + k
 }
 
-func (t *table) get(k string) (any, bool) {
+// get reads key k as type want. Reading a key the key table does not
+// declare, or as another type, is a fault of the loader, reported as an
+// error on every file so that no test can miss it.
+func (t *table) get(k string, want ValueType) (any, bool) {
 	t.use(k)
+	if t.r.onRead != nil {
+		t.r.onRead(t.path, k)
+	}
+	if ks := t.spec.Key(k); ks == nil || ks.Type != want {
+		t.r.errAt(t.path, "internal: the loader reads %q in [%s] as %v, which schema/wellkeys.go does not declare", k, stripIndex(t.path), want)
+	}
 	v, ok := t.m[k]
 	return v, ok
 }
 
-// done reports every key of the table that no reader asked for.
+// childSpec is the key table of sub-table k.
+func (t *table) childSpec(k string) *TableSpec {
+	if ks := t.spec.Key(k); ks != nil {
+		return ks.Table
+	}
+	return nil
+}
+
+// bounded checks that the key table gives key k the bound the loader
+// enforces.
+func (t *table) bounded(k string, b Bound) {
+	if ks := t.spec.Key(k); ks != nil && ks.Bound != b {
+		t.r.errAt(t.path, "internal: the loader bounds %q in [%s] other than schema/wellkeys.go declares", k, stripIndex(t.path))
+	}
+}
+
+// done reports every key of the table that its key table does not
+// declare (or, for a table without one, that no reader asked for).
 func (t *table) done() {
 	if t == nil {
 		return
 	}
 	var unknown []string
 	for k := range t.m {
-		if !t.isUsed(k) {
+		if (t.spec != nil && t.spec.Key(k) == nil) || (t.spec == nil && !t.isUsed(k)) {
 			unknown = append(unknown, k)
 		}
 	}
@@ -149,7 +178,7 @@ func typeName(v any) string {
 }
 
 func (t *table) str(k string) string {
-	v, ok := t.get(k)
+	v, ok := t.get(k, TypeString)
 	if !ok {
 		return ""
 	}
@@ -173,12 +202,16 @@ func (t *table) reqStr(k string) string {
 	return s
 }
 
-// oneOf reads a string that must be one of the allowed values ("" allowed
-// when absent).
-func (t *table) oneOf(k string, allowed ...string) string {
+// oneOf reads a string that must be one of the values the key table
+// allows ("" when absent).
+func (t *table) oneOf(k string) string {
 	s := t.str(k)
 	if s == "" {
 		return ""
+	}
+	var allowed []string
+	if ks := t.spec.Key(k); ks != nil {
+		allowed = ks.Enum
 	}
 	for _, a := range allowed {
 		if s == a {
@@ -191,7 +224,7 @@ func (t *table) oneOf(k string, allowed ...string) string {
 
 // num reads a finite number (integer or float).
 func (t *table) num(k string) (float64, bool) {
-	v, ok := t.get(k)
+	v, ok := t.get(k, TypeNumber)
 	if !ok {
 		return 0, false
 	}
@@ -224,6 +257,7 @@ func (t *table) reqNum(k string) float64 {
 
 // positive reads a number that must be > 0 when present.
 func (t *table) positive(k string) (float64, bool) {
+	t.bounded(k, Positive)
 	f, ok := t.num(k)
 	if ok && f <= 0 {
 		t.r.errAt(t.keyPath(k), "%s must be positive, not %v", k, f)
@@ -233,6 +267,7 @@ func (t *table) positive(k string) (float64, bool) {
 }
 
 func (t *table) nonNegative(k string) (float64, bool) {
+	t.bounded(k, NonNegative)
 	f, ok := t.num(k)
 	if ok && f < 0 {
 		t.r.errAt(t.keyPath(k), "%s must not be negative, not %v", k, f)
@@ -242,7 +277,7 @@ func (t *table) nonNegative(k string) (float64, bool) {
 }
 
 func (t *table) integer(k string) int {
-	v, ok := t.get(k)
+	v, ok := t.get(k, TypeInteger)
 	if !ok {
 		return 0
 	}
@@ -259,7 +294,7 @@ func (t *table) integer(k string) int {
 }
 
 func (t *table) date(k string) Date {
-	v, ok := t.get(k)
+	v, ok := t.get(k, TypeDate)
 	if !ok {
 		return Date{}
 	}
@@ -273,7 +308,7 @@ func (t *table) date(k string) Date {
 
 // instant reads a date or date-time; hasTime is false for a bare date.
 func (t *table) instant(k string) (time.Time, bool) {
-	v, ok := t.get(k)
+	v, ok := t.get(k, TypeDateTime)
 	if !ok {
 		return time.Time{}, false
 	}
@@ -287,7 +322,7 @@ func (t *table) instant(k string) (time.Time, bool) {
 }
 
 func (t *table) strings(k string) []string {
-	v, ok := t.get(k)
+	v, ok := t.get(k, TypeStrings)
 	if !ok {
 		return nil
 	}
@@ -312,7 +347,7 @@ func (t *table) strings(k string) []string {
 }
 
 func (t *table) numbers(k string) []float64 {
-	v, ok := t.get(k)
+	v, ok := t.get(k, TypeNumbers)
 	if !ok {
 		return nil
 	}
@@ -344,7 +379,7 @@ func (t *table) numbers(k string) []float64 {
 
 // sub returns a sub-table, or nil when absent.
 func (t *table) sub(k string) *table {
-	v, ok := t.get(k)
+	v, ok := t.get(k, TypeTable)
 	if !ok {
 		return nil
 	}
@@ -353,12 +388,12 @@ func (t *table) sub(k string) *table {
 		t.r.errAt(t.keyPath(k), "%s must be a table ([%s]), not %s", k, stripIndex(t.keyPath(k)), typeName(v))
 		return nil
 	}
-	return &table{r: t.r, path: t.keyPath(k), m: m}
+	return &table{r: t.r, path: t.keyPath(k), m: m, spec: t.childSpec(k)}
 }
 
 // list returns the entries of an array of tables ([[k]]).
 func (t *table) list(k string) []*table {
-	v, ok := t.get(k)
+	v, ok := t.get(k, TypeTables)
 	if !ok {
 		return nil
 	}
@@ -385,8 +420,9 @@ func (t *table) list(k string) []*table {
 	out := make([]*table, len(maps))
 	tables := make([]table, len(maps))
 	base := t.keyPath(k)
+	spec := t.childSpec(k)
 	for i, m := range maps {
-		tables[i] = table{r: t.r, path: base + "[" + strconv.Itoa(i) + "]", m: m}
+		tables[i] = table{r: t.r, path: base + "[" + strconv.Itoa(i) + "]", m: m, spec: spec}
 		out[i] = &tables[i]
 	}
 	return out

@@ -56,7 +56,7 @@ func (l *layout) page(i int) *draw.Page {
 	case len(l.bandPlan.overflow) > 0:
 		more = fmt.Sprintf("Notes and findings continue on sheet %d.", nn)
 	case len(l.calloutOverflow) > 0:
-		more = fmt.Sprintf("Component notes continue on sheet %d.", nn)
+		more = fmt.Sprintf("Notes continue on sheet %d.", nn)
 	}
 	notes := append(append([]noteBlock(nil), l.bandPlan.notes...), l.sheetNotes[i]...)
 	pg.Add(l.noteItems(notes, l.bandPlan.noteR, more)...)
@@ -128,13 +128,24 @@ func (l *layout) matchLines(p *painter, i int) []draw.Item {
 		y := p.y(p.sp.Top)
 		prev, _ := l.number(i - 1)
 		items = append(items, draw.Shape{Style: st, Points: []draw.Point{{X: b.X, Y: y}, {X: b.Right(), Y: y}}, Role: "matchline:top"},
-			text(l.cols.desc.X+4, y-4, fmt.Sprintf("MATCH LINE %s — continued from sheet %d", l.depth(p.sp.Top), prev), draw.Bold, sizeSmall, draw.Start, ink, "matchline-text"))
+			l.matchText(y-4, p.sp.Top, "continued from", prev))
 	}
 	if i < len(l.sheets)-1 {
 		y := p.y(p.sp.Bottom)
 		next, _ := l.number(i + 1)
 		items = append(items, draw.Shape{Style: st, Points: []draw.Point{{X: b.X, Y: y}, {X: b.Right(), Y: y}}, Role: "matchline:bottom"},
-			text(l.cols.desc.X+4, y+9, fmt.Sprintf("MATCH LINE %s — continued on sheet %d", l.depth(p.sp.Bottom), next), draw.Bold, sizeSmall, draw.Start, ink, "matchline-text"))
+			l.matchText(y+9, p.sp.Bottom, "continued on", next))
 	}
 	return items
+}
+
+// matchText names a match line in the components column, shortened when
+// the column is narrow, so it crosses no column rule.
+func (l *layout) matchText(y float64, d schema.Length, how string, sheet int) draw.Text {
+	col := l.cols.call
+	s := fmt.Sprintf("MATCH LINE %s — %s sheet %d", l.depth(d), how, sheet)
+	if draw.TextWidth(draw.Bold, sizeSmall, s) > col.W-8 {
+		s = fmt.Sprintf("MATCH LINE %s · sheet %d", l.depth(d), sheet)
+	}
+	return text(col.X+4, y, s, draw.Bold, sizeSmall, draw.Start, ink, "matchline-text")
 }

@@ -161,7 +161,10 @@ func TestCrowdedBandContinues(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		opt := Options{Page: FromTemplate(tpl)}
+		// One drawing sheet, so the amounts table is drawn once and
+		// continues on the notes sheet.
+		s := Imperial(30)
+		opt := Options{Page: FromTemplate(tpl), Scale: &s}
 		doc := layoutOf(t, w, in, opt)
 		rows, findings := 0, map[string]int{}
 		for _, p := range doc.Pages {

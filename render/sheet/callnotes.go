@@ -2,6 +2,7 @@ package sheet
 
 import (
 	"fmt"
+	"strings"
 
 	"github.com/tremie-dev/tremie/render/draw"
 )
@@ -31,6 +32,7 @@ func (l *layout) planCallouts() {
 	used := bandHeadH + bandPad + notesHeight(l.bandPlan.notes)
 	reserve := lineGap(sizeSmall) + 2 // the "continue on sheet" line
 	next := 1
+	descNotes := l.planDescriptions(noteW)
 	l.sheetCallouts = make([][]placedCallout, len(l.sheets))
 	l.sheetNotes = make([][]noteBlock, len(l.sheets))
 	for i, sp := range l.sheets {
@@ -38,7 +40,7 @@ func (l *layout) planCallouts() {
 		vis := p.calloutsFor(all)
 		next = numberNotes(vis, width, next)
 		l.sheetCallouts[i] = vis
-		var entries []noteBlock
+		entries := descNotes[i]
 		for _, pc := range vis {
 			if pc.rest == "" {
 				continue
@@ -55,20 +57,27 @@ func (l *layout) planCallouts() {
 			b.add(s, draw.Bold, sizeSmall, noteW)
 			return noteBlock{heading: true, block: b, color: ink, role: "callout-note-head"}
 		}
+		title := "COMPONENTS, CONTINUED"
+		switch {
+		case len(descNotes[i]) == len(entries):
+			title = "DESCRIPTIONS, CONTINUED"
+		case len(descNotes[i]) > 0:
+			title = "DESCRIPTIONS AND COMPONENTS, CONTINUED"
+		}
 		k := 0
 		if len(l.bandPlan.overflow) == 0 {
-			h := used + notesHeight([]noteBlock{head("COMPONENTS, CONTINUED")})
+			h := used + notesHeight([]noteBlock{head(title)})
 			for k < len(entries) && h+notesHeight(entries[k:k+1]) <= r.H-reserve {
 				h += notesHeight(entries[k : k+1])
 				k++
 			}
 		}
 		if k > 0 {
-			l.sheetNotes[i] = append([]noteBlock{head("COMPONENTS, CONTINUED")}, entries[:k]...)
+			l.sheetNotes[i] = append([]noteBlock{head(title)}, entries[:k]...)
 		}
 		if k < len(entries) {
 			n, _ := l.number(i)
-			l.calloutOverflow = append(l.calloutOverflow, head(fmt.Sprintf("COMPONENTS ON SHEET %d, CONTINUED", n)))
+			l.calloutOverflow = append(l.calloutOverflow, head(fmt.Sprintf("%s ON SHEET %d, CONTINUED", strings.TrimSuffix(title, ", CONTINUED"), n)))
 			l.calloutOverflow = append(l.calloutOverflow, entries[k:]...)
 		}
 	}

@@ -42,6 +42,7 @@ type layout struct {
 	legendAll []symbol // every symbol the well's sheets use
 	parts     []part   // the supply-well parts (see part.go)
 
+	sheetDescs      [][]descEntry     // each sheet's lithology descriptions
 	sheetCallouts   [][]placedCallout // each sheet's labels
 	sheetNotes      [][]noteBlock     // each sheet's component notes, in its notes box
 	calloutOverflow []noteBlock       // component notes for the notes sheet
@@ -132,14 +133,42 @@ func (l *layout) plan() error {
 	} else {
 		l.scale, l.fitsOne = autoScale(l.u.Imperial(), l.bot-l.top, usable)
 	}
-	per := schema.Length(usable / l.scale.PointsPerMetre())
+	if err := l.paginateAt(l.scale, usable); err != nil {
+		return err
+	}
+	if l.opt.Scale == nil {
+		// The automatic scale weighs the text too: where a sheet's
+		// descriptions do not fit even one line each, or its labels run
+		// off the drawing, a more detailed scale gives them room.
+		cs := candidates(l.u.Imperial())
+		k := len(cs) - 1
+		for k > 0 && cs[k].Ratio != l.scale.Ratio {
+			k--
+		}
+		for k > 0 && !l.textFits() {
+			saved, savedFits, savedSheets := l.scale, l.fitsOne, l.sheets
+			l.scale, l.fitsOne = cs[k-1], false
+			if err := l.paginateAt(l.scale, usable); err != nil {
+				l.scale, l.fitsOne, l.sheets = saved, savedFits, savedSheets
+				l.scaleFields()
+				break
+			}
+			k--
+		}
+	}
+	l.planCallouts()
+	l.planNotesSheets()
+	return nil
+}
+
+// paginateAt divides the depth range into sheets at a scale.
+func (l *layout) paginateAt(s Scale, usable float64) error {
+	per := schema.Length(usable / s.PointsPerMetre())
 	if n := float64((l.bot - l.top) / per); n > maxSheets {
-		return fmt.Errorf("at %s the well needs %.0f sheets (more than %d); choose a smaller scale", l.scale, math.Ceil(n), maxSheets)
+		return fmt.Errorf("at %s the well needs %.0f sheets (more than %d); choose a smaller scale", s, math.Ceil(n), maxSheets)
 	}
 	l.scaleFields()
 	l.sheets = paginate(l.top, l.bot, per, schema.LengthFrom(l.majorStep(), l.u.Depth))
-	l.planCallouts()
-	l.planNotesSheets()
 	return nil
 }
 

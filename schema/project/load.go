@@ -22,36 +22,40 @@ import (
 var ErrNoProject = errors.New("no " + FileName)
 
 // fileData is the file's shape; every key the format knows is here, so
-// anything else is reported as unknown.
+// anything else is reported as unknown. Its tags are also the key table
+// that `tremie schema project` prints (see File).
 type fileData struct {
 	Project struct {
-		Name             string `toml:"name"`
-		Client           string `toml:"client"`
-		Site             string `toml:"site"`
-		Units            string `toml:"units"`
-		Datum            string `toml:"datum"`
-		CoordinateSystem string `toml:"coordinate_system"`
-		CRS              string `toml:"crs"`
-		Page             string `toml:"page"`
-		Landscape        bool   `toml:"landscape"`
-		Profile          string `toml:"profile"`
-		Yields           string `toml:"yields"`
-		Logo             string `toml:"logo"`
-		Wells            string `toml:"wells"`
-		Output           string `toml:"output"`
+		Name             string `toml:"name" required:"true" doc:"Project name; a well's project when it gives none." example:"Coldwater Mill groundwater investigation"`
+		Client           string `toml:"client" doc:"Client; a well's client when it gives none." example:"Valley Water Authority"`
+		Site             string `toml:"site" doc:"Site; a well's site when it gives none." example:"Former mill, Tannery Road"`
+		Units            string `toml:"units" enum:"ft,m" doc:"Depth unit of the project-wide tables (summary, book); default the unit all wells share, else m. Each sheet keeps its well file's units." example:"ft"`
+		Datum            string `toml:"datum" doc:"Elevation datum for wells whose [elevation] gives none." example:"NAVD88"`
+		CoordinateSystem string `toml:"coordinate_system" doc:"Reference system for wells whose [location] gives none." example:"NAD83 / UTM zone 11N"`
+		CRS              string `toml:"crs" doc:"EPSG code of the coordinates, for wells whose [location] gives no crs (docs/import.md lists the codes)." example:"EPSG:2227"`
+		Page             string `toml:"page" doc:"Page template of every sheet: letter, tabloid, a4 or a3." example:"letter"`
+		Landscape        bool   `toml:"landscape" doc:"Print sheets in landscape." example:"false"`
+		Profile          string `toml:"profile" doc:"Path of the rule profile (relative to this file); must exist. Default: the rule defaults." example:"site.profile.toml"`
+		Yields           string `toml:"yields" doc:"Path of a yields file with a [yields] table; must exist. Default: the built-in yields." example:"site.yields.toml"`
+		Logo             string `toml:"logo" doc:"PNG or JPEG for the title block and book cover: at most 1 MiB, 16 to 2048 pixels a side." example:"logo.png"`
+		Wells            string `toml:"wells" doc:"Directory (searched recursively) or glob of the well files; default wells." example:"wells"`
+		Output           string `toml:"output" doc:"Where sheets, the cache and tables go; default out." example:"out"`
 
 		// title-block fields
-		Consultant string `toml:"consultant"`
-		PreparedBy string `toml:"prepared_by"`
-		CheckedBy  string `toml:"checked_by"`
-		ApprovedBy string `toml:"approved_by"`
-		Report     string `toml:"report"`
-		Job        string `toml:"job"`
-		Revision   string `toml:"revision"`
-		Issued     any    `toml:"issued"`
-	} `toml:"project"`
-	Section []sectionData `toml:"section"`
+		Consultant string `toml:"consultant" doc:"Title block: the firm preparing the logs." example:"Example Hydrogeology"`
+		PreparedBy string `toml:"prepared_by" doc:"Title block: who drafted the logs." example:"A. Geologist"`
+		CheckedBy  string `toml:"checked_by" doc:"Title block: who checked them; also a well's checked_by when it gives none." example:"B. Reviewer, PG"`
+		ApprovedBy string `toml:"approved_by" doc:"Title block: who approved them." example:"B. Reviewer, PG"`
+		Report     string `toml:"report" doc:"Title block: report number." example:"EH-2026-014"`
+		Job        string `toml:"job" doc:"Title block: job number." example:"26-044"`
+		Revision   string `toml:"revision" doc:"Title block: revision." example:"0"`
+		Issued     any    `toml:"issued" type:"date" doc:"Title block: issue date of the set of sheets, a TOML date without quotes." example:"2026-06-15"`
+	} `toml:"project" required:"true" doc:"The project's settings and title-block fields."`
+	Section []sectionData `toml:"section" doc:"A cross-section that tremie section draws and tremie book binds."`
 }
+
+// File is the key table of a project file, made from fileData.
+var File = schema.SpecOf("tremie project file", "A project's settings shared by every well: names, units, page, rule profile, yields, title block, where the wells are and where outputs go.", fileData{})
 
 // Load reads dir/project.toml (dir may also be the file itself) and the
 // logo it names. Errors carry the file and line.

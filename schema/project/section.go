@@ -33,12 +33,12 @@ type Section struct {
 
 // sectionData is a [[section]] table as written.
 type sectionData struct {
-	Name           string       `toml:"name"`
-	Wells          []string     `toml:"wells"`
-	Bends          [][2]float64 `toml:"bends"`
-	CoordinateUnit string       `toml:"coordinate_unit"`
-	MaxOffset      *float64     `toml:"max_offset"`
-	WaterDate      any          `toml:"water_date"`
+	Name           string       `toml:"name" required:"true" doc:"The section's name; also its output file name." example:"A-A'"`
+	Wells          []string     `toml:"wells" required:"true" doc:"Well IDs in order along the line: at least two, each once." example:"MW-1,MW-3"`
+	Bends          [][2]float64 `toml:"bends" doc:"A polyline the section follows, as [easting, northing] pairs; default the straight line through the first and last well." example:"500000 4100000;500200 4100100"`
+	CoordinateUnit string       `toml:"coordinate_unit" enum:"m,ft,us-ft" doc:"Unit of the wells' easting and northing and of bends; default m for a metric project, else us-ft." example:"m"`
+	MaxOffset      *float64     `toml:"max_offset" unit:"project depth unit" doc:"A well farther than this from the line is noted with its offset; default a tenth of the line's length." example:"50"`
+	WaterDate      any          `toml:"water_date" type:"date" doc:"The date whose water levels are joined into a line; default the date with the most static levels." example:"2026-03-20"`
 }
 
 // CoordinateUnits lists the accepted coordinate units with metres per unit

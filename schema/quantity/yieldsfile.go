@@ -40,6 +40,9 @@ func LoadYields(path string) (*Yields, error) {
 	if !found {
 		return nil, &schema.Error{File: path, Line: 1, Msg: "no [yields] table in this file"}
 	}
+	if k := otherTable(data); k != "" {
+		return nil, &schema.Error{File: path, Line: schema.LineOf(schema.KeyLines(string(data)), k), Key: k, Msg: fmt.Sprintf("unknown table or key %q (a yields file holds only a [yields] table)", k)}
+	}
 	return y, nil
 }
 
@@ -102,7 +105,7 @@ func parseYields(name string, data []byte) (*Yields, bool, error) {
 			continue
 		}
 		path := "yields." + k
-		if !knownMaterial(k) {
+		if YieldsFile().Keys[0].Table.Key(k) == nil {
 			return nil, true, errAt(path, "unknown material %q in [yields] (one of: %s)", k, materialList())
 		}
 		e, ok := t[k].(map[string]any)
@@ -130,8 +133,8 @@ func parseYields(name string, data []byte) (*Yields, bool, error) {
 					return nil, true, errAt(path+".note", "note must be a string")
 				}
 				entry.Note = s
-			default:
-				return nil, true, errAt(path+"."+ek, "unknown key %q in yields.%s (yield, bag_mass, note)", ek, k)
+			default: // every key of yieldEntry has a case above
+				return nil, true, errAt(path+"."+ek, "unknown key %q in yields.%s (%s)", ek, k, strings.Join(yieldEntry.Names(), ", "))
 			}
 		}
 		if entry.Volume <= 0 {
@@ -140,6 +143,21 @@ func parseYields(name string, data []byte) (*Yields, bool, error) {
 		y.Set(schema.Material(k), entry)
 	}
 	return y, true, nil
+}
+
+// otherTable is the first top-level key of a yields file other than
+// yields, or "". The file already parsed.
+func otherTable(data []byte) string {
+	var doc map[string]any
+	if _, err := toml.Decode(string(data), &doc); err != nil {
+		return ""
+	}
+	for _, k := range sortedKeys(doc) {
+		if YieldsFile().Key(k) == nil {
+			return k
+		}
+	}
+	return ""
 }
 
 func number(v any) (float64, bool) {
@@ -159,15 +177,6 @@ func sortedKeys(m map[string]any) []string {
 	}
 	sort.Strings(out)
 	return out
-}
-
-func knownMaterial(k string) bool {
-	for _, m := range schema.Materials {
-		if string(m) == k {
-			return true
-		}
-	}
-	return false
 }
 
 func materialList() string {

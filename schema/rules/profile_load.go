@@ -168,7 +168,7 @@ func (r *profileReader) header(prof *Profile, m map[string]any) {
 			}
 			prof.Units = schema.DepthUnit(s)
 		default:
-			r.errAt(path, "unknown key %q in [profile] (expected name, units, source)", k)
+			r.errAt(path, "unknown key %q in [profile] (expected %s)", k, strings.Join(ProfileFile().Key("profile").Table.Names(), ", "))
 		}
 	}
 }

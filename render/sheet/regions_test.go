@@ -1,0 +1,183 @@
+package sheet
+
+import (
+	"fmt"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
+	"github.com/tremie-dev/tremie/templates"
+)
+
+// corpusWell is a well with its inputs, for the tests over every kind.
+type corpusWell struct {
+	name string
+	w    *schema.Well
+	in   Inputs
+}
+
+// galleryWells reads every well of testdata/gallery with its findings
+// and quantities.
+func galleryWells(t testing.TB) []corpusWell {
+	t.Helper()
+	files, err := filepath.Glob("../../testdata/gallery/*.toml")
+	if err != nil || len(files) == 0 {
+		t.Fatalf("gallery: %v (%d files)", err, len(files))
+	}
+	var out []corpusWell
+	for _, f := range files {
+		data, err := os.ReadFile(f)
+		if err != nil {
+			t.Fatal(err)
+		}
+		w, err := schema.Load(f, data)
+		if err != nil {
+			t.Fatalf("%s: %v", f, err)
+		}
+		out = append(out, corpusWell{filepath.Base(f), w, Inputs{Findings: rules.Check(w, nil), Quantities: quantity.Compute(w, nil)}})
+	}
+	return out
+}
+
+// textRegion is where a text of a role must lie on a drawing sheet: its
+// column of the body, the title block, the band or the caution.
+func (l *layout) textRegion(role string) (draw.Rect, bool) {
+	body := l.body
+	col := func(c xRange) draw.Rect { return draw.Rect{X: c.X, Y: body.Y, W: c.W, H: body.H} }
+	switch {
+	case role == "description":
+		return col(l.cols.desc), true
+	case role == "callout-text", role == "matchline-text":
+		return col(l.cols.call), true
+	case strings.HasPrefix(role, "uscs:"):
+		return col(l.cols.uscs), true
+	case role == "depth-label":
+		return col(l.cols.depth), true
+	case role == "elevation-label":
+		return col(l.cols.elev), true
+	case role == "total-depth", role == "column-head":
+		return body, true
+	case strings.HasPrefix(role, "field:"), role == "sheet-number", role == "well-id", role == "scalebar-length", role == "stamp-text":
+		return l.header, true
+	case role == "caution":
+		return l.caution, true
+	case isBandRole(role):
+		return l.band, true
+	}
+	return l.content, false
+}
+
+// Every text of every sheet lies inside its region (its column of the
+// body, the title block, the band, the caution line), on every page size
+// and orientation, for the demo wells, the gallery (a 1,200-ft well with
+// 150 intervals among them) and a crowded well; a column head lies within
+// one column (common practice: a drafted sheet writes nothing across its
+// rules or off its frame).
+func TestEveryTextInsideItsRegion(t *testing.T) {
+	var wells []corpusWell
+	for n, d := range demoWells(t) {
+		wells = append(wells, corpusWell{n, d.w, d.in})
+	}
+	wells = append(wells, galleryWells(t)...)
+	cw, cin := crowdedWell()
+	wells = append(wells, corpusWell{"crowded", cw, cin})
+	for _, name := range []string{"letter", "tabloid", "a4", "a3"} {
+		for _, land := range []bool{false, true} {
+			tpl, err := templates.Load(name, land)
+			if err != nil {
+				t.Fatal(err)
+			}
+			pg := FromTemplate(tpl)
+			for _, c := range wells {
+				tag := fmt.Sprintf("%s on %s landscape=%v", c.name, name, land)
+				opt := Options{Page: pg}
+				l := newLayout(c.w, c.in, opt, pg)
+				if err := l.plan(); err != nil {
+					t.Fatalf("%s: %v", tag, err)
+				}
+				doc := layoutOf(t, c.w, c.in, opt)
+				bad := 0
+				for i, p := range doc.Pages {
+					notesSheet := i >= len(l.sheets)
+					p.Walk(func(it draw.Item) {
+						tx, ok := it.(draw.Text)
+						if !ok || bad > 5 {
+							return
+						}
+						r := textRect(tx)
+						region, known := l.textRegion(tx.Role)
+						if notesSheet && known && region != l.header && region != l.caution {
+							region = draw.Rect{X: l.content.X, Y: l.header.Bottom(), W: l.content.W, H: l.caution.Y - l.header.Bottom()}
+						}
+						if !within(r, region) {
+							bad++
+							t.Errorf("%s sheet %d: %s %q at %+v outside %+v", tag, i+1, tx.Role, tx.S, r, region)
+						}
+						if tx.Role == "column-head" && !notesSheet {
+							in := false
+							for _, c := range []xRange{l.cols.depth, l.cols.elev, l.cols.lith, l.cols.uscs, l.cols.desc, l.cols.well, l.cols.call} {
+								in = in || (r.X >= c.X-0.01 && r.Right() <= c.Right()+0.01)
+							}
+							if !in {
+								bad++
+								t.Errorf("%s sheet %d: column head %q at %+v crosses a column rule", tag, i+1, tx.S, r)
+							}
+						}
+					})
+				}
+			}
+		}
+	}
+}
+
+// The 1,200-ft well's 150 descriptions are all readable at the automatic
+// scale: each stands beside its layer whole, or as one line whose other
+// words are in a numbered note on the same set of sheets; none is left
+// off the drawing.
+func TestDeepWellDescriptionsReadable(t *testing.T) {
+	var deep *corpusWell
+	for _, c := range galleryWells(t) {
+		if c.name == "DS-1200.toml" {
+			deep = &c
+		}
+	}
+	if deep == nil {
+		t.Fatal("no DS-1200 in the gallery")
+	}
+	for _, land := range []bool{false, true} {
+		tpl, _ := templates.Load("letter", land)
+		opt := Options{Page: FromTemplate(tpl)}
+		l := newLayout(deep.w, deep.in, opt, opt.Page)
+		if err := l.plan(); err != nil {
+			t.Fatal(err)
+		}
+		doc := layoutOf(t, deep.w, deep.in, opt)
+		var notes strings.Builder
+		for _, p := range doc.Pages {
+			for _, s := range texts(p, "") {
+				notes.WriteString(s + " ")
+			}
+		}
+		all := strings.Join(strings.Fields(notes.String()), " ")
+		seen := map[int]bool{}
+		for i, es := range l.sheetDescs {
+			for _, e := range es {
+				seen[e.layer] = true
+				if e.form == descNoted {
+					t.Errorf("landscape=%v sheet %d: layer %d has no description beside it", land, i+1, e.layer)
+				}
+				if w := strings.Fields(e.rest); len(w) > 0 && !strings.Contains(all, strings.Join(w[:min(3, len(w))], " ")) {
+					t.Errorf("landscape=%v: the rest of %s (%q) is on no sheet", land, e.mark, e.rest)
+				}
+			}
+		}
+		if len(seen) != len(deep.w.Lithology) {
+			t.Errorf("landscape=%v: %d of %d layers described", land, len(seen), len(deep.w.Lithology))
+		}
+	}
+}

@@ -1,0 +1,40 @@
+package quantity
+
+import (
+	"sync"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+var yieldsFile struct {
+	once sync.Once
+	spec *schema.TableSpec
+}
+
+// YieldsFile is the key table of a yields file: the units, then one table
+// per fill material of schema.Materials. The reader checks keys against
+// it.
+func YieldsFile() *schema.TableSpec {
+	yieldsFile.once.Do(func() { yieldsFile.spec = yieldsSpec() })
+	return yieldsFile.spec
+}
+
+// yieldEntry is the table of one material's yield.
+var yieldEntry = &schema.TableSpec{Doc: "The yield of one material, overriding the built-in figure.", Keys: []schema.KeySpec{
+	{Name: "yield", Type: schema.TypeNumber, Required: true, Bound: schema.Positive, Unit: "[yields] volume unit", Doc: "Volume one bag fills in place.", Example: 0.45},
+	{Name: "bag_mass", Type: schema.TypeNumber, Bound: schema.Positive, Unit: "[yields] mass unit", Doc: "Mass of the bag the yield is for; omit for per bag as placed.", Example: 50},
+	{Name: "note", Type: schema.TypeString, Doc: "Where the figure comes from.", Example: "supplier data sheet, 2026"},
+}}
+
+func yieldsSpec() *schema.TableSpec {
+	t := &schema.TableSpec{Doc: "Yields per bag of the materials named; the others keep the built-in figures.", Keys: []schema.KeySpec{
+		{Name: "volume", Type: schema.TypeString, Enum: []string{string(schema.CubicFeet), string(schema.USGallons), string(schema.Litres), string(schema.CubicMetres)}, Doc: "Unit of each yield (gal = US gallon); default ft3.", Example: "ft3"},
+		{Name: "mass", Type: schema.TypeString, Enum: []string{string(schema.Pounds), string(schema.Kilograms)}, Doc: "Unit of each bag_mass; default lb.", Example: "lb"},
+	}}
+	for _, m := range schema.Materials {
+		t.Keys = append(t.Keys, schema.KeySpec{Name: string(m), Type: schema.TypeTable, Doc: "Yield of " + string(m) + ".", Table: yieldEntry})
+	}
+	return &schema.TableSpec{Title: "tremie yields file", Doc: "Material yields per bag for a project, named by project.toml's yields key.", Keys: []schema.KeySpec{
+		{Name: "yields", Type: schema.TypeTable, Required: true, Doc: t.Doc, Table: t},
+	}}
+}
