@@ -7,13 +7,15 @@ import (
 	"path/filepath"
 
 	"github.com/tremie-dev/tremie/render/pipeline"
+	"github.com/tremie-dev/tremie/render/table"
+	"github.com/tremie-dev/tremie/schema/exchange"
 	"github.com/tremie-dev/tremie/schema/project"
 )
 
 func init() {
 	register(&command{
 		name:    "table",
-		summary: "write a project's construction summary table (--format csv|xlsx|md)",
+		summary: "write a project's construction summary table (--format csv|xlsx|md), or its wells in the import layout (import-xlsx)",
 		run:     runTable,
 		args:    "PROJECT_DIR",
 	})
@@ -21,9 +23,9 @@ func init() {
 
 func runTable(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("table", stdout, stderr)
-	format := fset.String("format", "csv", "table `format`: csv, xlsx or md")
-	outFile := fset.String("o", "", "output `file` (default: stdout for csv and md, OUTPUT/summary.xlsx for xlsx)")
-	force := fset.Bool("force", false, "replace OUTPUT/summary.xlsx even if tremie did not write it")
+	format := fset.String("format", "csv", "table `format`: csv, xlsx, md, or import-xlsx (the wells in tremie import's layout)")
+	outFile := fset.String("o", "", "output `file` (default: stdout for csv and md, OUTPUT/summary.xlsx for xlsx, OUTPUT/import.xlsx for import-xlsx)")
+	force := fset.Bool("force", false, "replace the default output file even if tremie did not write it")
 	rest, code, ok := fset.parse(args)
 	if !ok {
 		return code
@@ -31,8 +33,8 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 	if len(rest) != 1 {
 		return fset.usageError("name one project directory")
 	}
-	if *format != "csv" && *format != "xlsx" && *format != "md" {
-		return fset.usageError("--format must be csv, xlsx or md, not %q", *format)
+	if *format != "csv" && *format != "xlsx" && *format != "md" && *format != "import-xlsx" {
+		return fset.usageError("--format must be csv, xlsx, md or import-xlsx, not %q", *format)
 	}
 	run, p, wells, code := prepareProject(rest[0], stderr)
 	if p == nil {
@@ -41,32 +43,52 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 	tb := pipeline.Table(p, wells)
 	var buf bytes.Buffer
 	var err error
+	defaultName := ""
 	switch *format {
 	case "csv":
 		err = tb.CSV(&buf)
 	case "md":
 		err = tb.Markdown(&buf)
+	case "import-xlsx":
+		var files []string
+		for _, w := range wells {
+			if w.Well != nil {
+				files = append(files, w.Path)
+			}
+		}
+		var wb *exchange.Workbook
+		if wb, err = exchange.Layout(files); err == nil {
+			var data []byte
+			data, err = wb.XLSX(run.ProjectDate(p, wells))
+			buf.Write(data)
+		}
+		defaultName = "import.xlsx"
 	case "xlsx":
 		var data []byte
 		data, err = tb.XLSX(p.Name, run.ProjectDate(p, wells))
 		buf.Write(data)
+		defaultName = "summary.xlsx"
 	}
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie table: %v\n", err)
 		return exitOutput
 	}
-	if *outFile == "" && *format != "xlsx" {
+	if *format == "csv" {
+		// the CSV holds data only; its caution goes to the terminal
+		fmt.Fprintln(stderr, table.Caution)
+	}
+	if *outFile == "" && defaultName == "" {
 		if _, err := stdout.Write(buf.Bytes()); err != nil {
 			return exitOutput
 		}
 		return code
 	}
-	dst, err := writeProjectOutput(*outFile, run.OutDir, "summary.xlsx", buf.Bytes(), *force)
+	dst, err := writeProjectOutput(*outFile, run.OutDir, defaultName, buf.Bytes(), *force)
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie table: %v\n", err)
 		return exitOutput
 	}
-	fmt.Fprintf(stdout, "tremie table: %d wells written to %s\n", len(tb.Rows), dst)
+	fmt.Fprintf(stdout, "tremie table: %d monitoring points of %d wells written to %s\n", len(tb.Rows), tb.Wells(), dst)
 	return code
 }
 

@@ -18,7 +18,7 @@ var summaryColumns = []struct {
 	header string
 	width  float64
 }{
-	{"Well", 1.1}, {"Purpose", 1.3}, {"Ground elev.", 1.1}, {"MP elev.", 1}, {"Total depth", 0.9},
+	{"Well", 1.1}, {"String", 0.9}, {"Purpose", 1.3}, {"Ground elev.", 1.1}, {"MP elev.", 1}, {"Total depth", 0.9},
 	{"Casing size", 1.3}, {"Casing material", 1.1}, {"Screen top", 0.9}, {"Screen bottom", 1},
 	{"Screen top elev.", 1}, {"Screen bottom elev.", 1}, {"Slot", 1}, {"Filter pack", 2},
 	{"Seal", 1.8}, {"Grout", 2}, {"Water level", 0.9}, {"Water level date", 1.45},
@@ -100,8 +100,10 @@ func typesetTables(in Input, first int) ([]byte, int, int, error) {
 // tally counts the wells by check status.
 func tally(in Input) string {
 	counts := map[table.Status]int{}
-	for _, r := range in.Table.Rows {
-		counts[r.Status]++
+	for i, r := range in.Table.Rows {
+		if in.Table.FirstOfWell(i) {
+			counts[r.Status]++ // a well once, whatever its strings
+		}
 	}
 	var parts []string
 	for _, s := range []table.Status{table.Clean, table.Warnings, table.Errors, table.Waived, table.Unreadable} {
@@ -109,7 +111,7 @@ func tally(in Input) string {
 			parts = append(parts, fmt.Sprintf("%d %s", counts[s], s))
 		}
 	}
-	return fmt.Sprintf("%d wells: %s.", len(in.Table.Rows), strings.Join(parts, ", ")) + " Wells without findings are not listed. A waived finding is listed with its waiver and no longer fails the check."
+	return fmt.Sprintf("%d wells: %s.", in.Table.Wells(), strings.Join(parts, ", ")) + " Wells without findings are not listed. A waived finding is listed with its waiver and no longer fails the check."
 }
 
 // footer numbers pages from first and names the project.

@@ -53,12 +53,10 @@ func number(digits int, f func(Row) *float64) func(Row) Cell {
 // Columns are the summary's columns, in order, for this table's unit.
 func (t *Table) Columns() []Column {
 	u := string(t.Units)
-	slotUnit := "in"
-	if t.Units == schema.Metres {
-		slotUnit = "mm"
-	}
+	slotUnit := string(t.DiameterUnit())
 	return []Column{
 		{"Well", "", text(func(r Row) string { return r.ID })},
+		{"String", "", text(func(r Row) string { return r.String })},
 		{"Purpose", "", text(func(r Row) string { return r.Purpose })},
 		{"Easting", "", number(-1, func(r Row) *float64 { return r.Easting })},
 		{"Northing", "", number(-1, func(r Row) *float64 { return r.Northing })},
@@ -79,9 +77,9 @@ func (t *Table) Columns() []Column {
 			if r.Slot == nil {
 				return Cell{Text: r.SlotText}
 			}
-			d := 3
-			if slotUnit == "mm" {
-				d = 2
+			d := 3 // 0.040 in
+			if t.DiameterUnit() == schema.Millimetres {
+				d = 2 // 0.50 mm
 			}
 			return Cell{Num: r.Slot, Digits: d, Fixed: true}
 		}},

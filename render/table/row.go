@@ -1,5 +1,5 @@
 // Package table builds a project's construction summary: one row per
-// well with its location, elevations, depth, casing, screen, annular
+// monitoring point (a well, or each string of a nested well) with its location, elevations, depth, casing, screen, annular
 // fill, latest water level and check status, in the project's depth unit.
 // Writers turn it into CSV, Markdown or XLSX; the columns are defined
 // once (columns.go) and every writer reads them.
@@ -39,6 +39,7 @@ type Entry struct {
 type Row struct {
 	File    string
 	ID      string
+	String  string // the string's name when the well has several, else ""
 	Purpose string
 
 	Easting, Northing   *float64 // as written
@@ -54,7 +55,7 @@ type Row struct {
 	Screens                         int
 	ScreenTop, ScreenBottom         *float64 // depths
 	ScreenTopElev, ScreenBottomElev *float64 // elevations
-	Slot                            *float64 // in inches (ft tables) or mm (m tables); nil when none or mixed
+	Slot                            *float64 // in the table's diameter unit; nil when none or mixed
 	SlotText                        string   // every slot, when they differ
 
 	Pack, Seal, Grout string // intervals "top–bottom; ..."
@@ -83,9 +84,77 @@ func Build(entries []Entry, units schema.DepthUnit) *Table {
 	}
 	t := &Table{Units: units}
 	for _, e := range entries {
-		t.Rows = append(t.Rows, rowOf(e, units))
+		t.Rows = append(t.Rows, rowsOf(e, units)...)
 	}
 	return t
+}
+
+// DiameterUnit is the unit of the table's slots and sizes: inches for a
+// table in feet, millimetres for one in metres.
+func (t *Table) DiameterUnit() schema.DiameterUnit { return diameterUnit(t.Units) }
+
+func diameterUnit(u schema.DepthUnit) schema.DiameterUnit {
+	if u == schema.Feet {
+		return schema.Inches
+	}
+	return schema.Millimetres
+}
+
+// FirstOfWell reports whether row i is its well's first (a nested
+// well's strings follow each other).
+func (t *Table) FirstOfWell(i int) bool {
+	return i == 0 || t.Rows[i].File != t.Rows[i-1].File || t.Rows[i].ID != t.Rows[i-1].ID
+}
+
+// Wells is the number of wells the rows come from.
+func (t *Table) Wells() int {
+	n := 0
+	for i := range t.Rows {
+		if t.FirstOfWell(i) {
+			n++
+		}
+	}
+	return n
+}
+
+// rowsOf is a well's rows: one per string of a nested well (its own
+// riser, screens and the pack around them), else one.
+func rowsOf(e Entry, u schema.DepthUnit) []Row {
+	r := rowOf(e, u)
+	w := e.Well
+	if w == nil || len(w.Strings) < 2 {
+		return []Row{r}
+	}
+	out := make([]Row, 0, len(w.Strings))
+	for i := range w.Strings {
+		sr := r
+		sr.String = w.Strings[i].Label()
+		one := *w
+		one.Strings = w.Strings[i : i+1]
+		sr.CasingSize, sr.CasingMaterial = casing(&one, u)
+		sr.ScreenTop, sr.ScreenBottom, sr.ScreenTopElev, sr.ScreenBottomElev, sr.Slot, sr.SlotText = nil, nil, nil, nil, nil, ""
+		screens(&one, &sr, u)
+		sr.Pack = packsOf(w, w.Strings[i], u)
+		out = append(out, sr)
+	}
+	return out
+}
+
+// packsOf lists the pack intervals that reach one string's screens.
+func packsOf(w *schema.Well, s schema.String, u schema.DepthUnit) string {
+	var parts []string
+	for _, f := range w.Fills {
+		if f.Material.Group() != schema.PackGroup {
+			continue
+		}
+		for _, sec := range s.Screens() {
+			if f.Overlaps(sec.Interval) {
+				parts = append(parts, interval(f.Top, f.Bottom, u))
+				break
+			}
+		}
+	}
+	return strings.Join(parts, "; ")
 }
 
 func sharedUnit(entries []Entry) schema.DepthUnit {
@@ -143,8 +212,8 @@ func rowOf(e Entry, u schema.DepthUnit) Row {
 	if mp := w.Elevation.MeasuringPoint; mp != nil {
 		r.MeasuringPoint = in(*mp)
 	}
-	r.CasingSize, r.CasingMaterial = casing(w)
-	screens(w, &r, in, elev)
+	r.CasingSize, r.CasingMaterial = casing(w, u)
+	screens(w, &r, u)
 	r.Pack, r.Seal, r.Grout = fills(w, u)
 	if wl, ok := latestLevel(w); ok {
 		r.WaterDepth = in(wl.Depth)
@@ -161,26 +230,28 @@ func rowOf(e Entry, u schema.DepthUnit) Row {
 // casing describes the riser of each string: "2 in Sch 40", "PVC"; a
 // well with no string (an open-hole rock well) is described by its outer
 // casing, which is then the well's casing.
-func casing(w *schema.Well) (size, material string) {
+func casing(w *schema.Well, u schema.DepthUnit) (size, material string) {
 	var sizes, mats []string
 	for _, s := range w.Strings {
 		if len(s.Sections) == 0 {
 			continue
 		}
 		p := s.Sections[0].Pipe
-		sizes = append(sizes, pipeSize(p))
+		sizes = append(sizes, pipeSize(p, u))
 		mats = append(mats, p.Material)
 	}
 	if len(w.Strings) == 0 {
 		for _, c := range w.Casings {
-			sizes = append(sizes, pipeSize(c.Pipe))
+			sizes = append(sizes, pipeSize(c.Pipe, u))
 			mats = append(mats, c.Pipe.Material)
 		}
 	}
 	return joinDistinct(sizes), joinDistinct(mats)
 }
 
-func pipeSize(p schema.Pipe) string {
+// pipeSize is the nominal size as written, or the outside diameter in the
+// table's diameter unit when the file gives none.
+func pipeSize(p schema.Pipe, u schema.DepthUnit) string {
 	s := p.Size
 	if s != "" && !strings.HasPrefix(strings.ToUpper(s), "DN") {
 		s += " in"
@@ -192,12 +263,23 @@ func pipeSize(p schema.Pipe) string {
 		s += " SDR " + schema.TrimFloat(p.SDR, 1)
 	}
 	if s == "" && p.OD > 0 {
-		s = "OD " + schema.TrimFloat(float64(p.OD), 1) + " mm"
+		if diameterUnit(u) == schema.Inches {
+			s = "OD " + schema.TrimFloat(p.OD.Inches(), 3) + " in"
+		} else {
+			s = "OD " + schema.TrimFloat(float64(p.OD), 1) + " mm"
+		}
 	}
 	return strings.TrimSpace(s)
 }
 
-func screens(w *schema.Well, r *Row, in func(schema.Length) *float64, elev func(schema.Length) *float64) {
+func screens(w *schema.Well, r *Row, u schema.DepthUnit) {
+	in := func(l schema.Length) *float64 { v := l.In(u); return &v }
+	elev := func(depth schema.Length) *float64 {
+		if w.Elevation.Ground == nil {
+			return nil
+		}
+		return in(*w.Elevation.Ground - depth)
+	}
 	scr := w.Screens()
 	r.Screens = len(scr)
 	if len(scr) == 0 {
@@ -211,16 +293,16 @@ func screens(w *schema.Well, r *Row, in func(schema.Length) *float64, elev func(
 		bot = max(bot, s.Section.Bottom)
 		if s.Section.Slot > 0 && !slotSet[s.Section.Slot] {
 			slotSet[s.Section.Slot] = true
-			slots = append(slots, slotText(s.Section, w.Units))
+			slots = append(slots, slotText(s.Section, diameterUnit(u)))
 		}
 	}
 	r.ScreenTop, r.ScreenBottom = in(top), in(bot)
 	r.ScreenTopElev, r.ScreenBottomElev = elev(top), elev(bot)
 	if len(slotSet) == 1 {
 		for d := range slotSet {
-			v := d.Inches()
-			if w.Units.Diameter == schema.Millimetres {
-				v = float64(d)
+			v := float64(d) // mm
+			if diameterUnit(u) == schema.Inches {
+				v = d.Inches()
 			}
 			r.Slot = &v
 		}
@@ -228,9 +310,9 @@ func screens(w *schema.Well, r *Row, in func(schema.Length) *float64, elev func(
 	r.SlotText = strings.Join(slots, "; ")
 }
 
-// slotText is "0.010 in (10-slot)" or "0.25 mm".
-func slotText(s schema.Section, u schema.Units) string {
-	if u.Diameter == schema.Millimetres {
+// slotText is "0.010 in (10-slot)" or "0.25 mm", in the table's unit.
+func slotText(s schema.Section, du schema.DiameterUnit) string {
+	if du == schema.Millimetres {
 		return schema.TrimFloat(float64(s.Slot), 2) + " mm"
 	}
 	return schema.TrimFloat(s.Slot.Inches(), 3) + " in (" + schema.TrimFloat(s.SlotNumber(), 0) + "-slot)"

@@ -71,44 +71,29 @@ func sub(m map[string]any, k string) map[string]any { v, _ := m[k].(map[string]a
 
 func list(m map[string]any, k string) []map[string]any { v, _ := m[k].([]map[string]any); return v }
 
-// expected computes a row's numbers from the raw file, in feet: depths
+// expected computes the numbers of a well's rows from the raw file, one
+// map per string (a nested well has a row per string), in feet: depths
 // and elevations as written, converted with 1 ft = 0.3048 m exactly
 // (NIST SP 811); elevations of depths are ground minus depth, and a
 // water level read from the measuring point is MP elevation minus the
 // reading (common practice).
-func expected(s source) map[string]float64 {
+func expected(s source) []map[string]float64 {
 	toFt := 1.0
 	if sub(s.raw, "units")["depth"] == "m" {
 		toFt = 1 / 0.3048
 	}
-	out := map[string]float64{}
+	common := map[string]float64{}
 	el := sub(s.raw, "elevation")
 	ground, hasGround := num(el, "ground")
 	mp, hasMP := num(el, "measuring_point")
 	if hasGround {
-		out["Ground elev. (ft)"] = ground * toFt
+		common["Ground elev. (ft)"] = ground * toFt
 	}
 	if hasMP {
-		out["MP elev. (ft)"] = mp * toFt
+		common["MP elev. (ft)"] = mp * toFt
 	}
 	td, _ := num(sub(s.raw, "well"), "total_depth")
-	out["Total depth (ft)"] = td * toFt
-	top, bot := math.Inf(1), math.Inf(-1)
-	for _, st := range list(s.raw, "string") {
-		for _, sec := range list(st, "section") {
-			if sec["kind"] == "screen" {
-				a, _ := num(sec, "top")
-				b, _ := num(sec, "bottom")
-				top, bot = math.Min(top, a), math.Max(bot, b)
-			}
-		}
-	}
-	if !math.IsInf(top, 0) {
-		out["Screen top (ft)"], out["Screen bottom (ft)"] = top*toFt, bot*toFt
-		if hasGround {
-			out["Screen top elev. (ft)"], out["Screen bottom elev. (ft)"] = (ground-top)*toFt, (ground-bot)*toFt
-		}
-	}
+	common["Total depth (ft)"] = td * toFt
 	// The latest static reading (dates in these files sort as text).
 	var latest map[string]any
 	latestAt := ""
@@ -128,14 +113,49 @@ func expected(s source) map[string]float64 {
 	if latest != nil {
 		d, _ := num(latest, "depth")
 		if latest["reference"] == "measuring-point" {
-			out["Water level elev. (ft)"] = (mp - d) * toFt
-			out["Water level (ft)"] = (d - (mp - ground)) * toFt
+			common["Water level elev. (ft)"] = (mp - d) * toFt
+			common["Water level (ft)"] = (d - (mp - ground)) * toFt
 		} else {
-			out["Water level elev. (ft)"] = (ground - d) * toFt
-			out["Water level (ft)"] = d * toFt
+			common["Water level elev. (ft)"] = (ground - d) * toFt
+			common["Water level (ft)"] = d * toFt
 		}
 	}
+	strs := list(s.raw, "string")
+	if len(strs) == 0 {
+		strs = []map[string]any{{}}
+	}
+	var out []map[string]float64
+	for _, st := range strs {
+		row := map[string]float64{}
+		for k, v := range common {
+			row[k] = v
+		}
+		top, bot := math.Inf(1), math.Inf(-1)
+		for _, sec := range list(st, "section") {
+			if sec["kind"] == "screen" {
+				a, _ := num(sec, "top")
+				b, _ := num(sec, "bottom")
+				top, bot = math.Min(top, a), math.Max(bot, b)
+			}
+		}
+		if !math.IsInf(top, 0) {
+			row["Screen top (ft)"], row["Screen bottom (ft)"] = top*toFt, bot*toFt
+			if hasGround {
+				row["Screen top elev. (ft)"], row["Screen bottom elev. (ft)"] = (ground-top)*toFt, (ground-bot)*toFt
+			}
+		}
+		out = append(out, row)
+	}
 	return out
+}
+
+// points counts the monitoring points of the sources: a row per string.
+func points(src []source) int {
+	n := 0
+	for _, s := range src {
+		n += len(expected(s))
+	}
+	return n
 }
 
 func TestCSVNumbersEqualTheWellFiles(t *testing.T) {
@@ -149,30 +169,39 @@ func TestCSVNumbersEqualTheWellFiles(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if len(recs) != len(src)+2 || !strings.HasPrefix(recs[len(recs)-1][0], "Caution:") {
-		t.Fatalf("%d records; last %q", len(recs), recs[len(recs)-1][0])
+	// data only: the header and exactly one record per monitoring point
+	// (the demo's nested NW-1 gives two), no caution or total rows
+	if len(recs) != 1+points(src) || points(src) != len(src)+1 {
+		t.Fatalf("%d records for %d points of %d wells", len(recs), points(src), len(src))
 	}
 	col := map[string]int{}
 	for i, h := range recs[0] {
 		col[h] = i
 	}
-	checked := 0
-	for i, s := range src {
-		rec := recs[i+1]
-		for h, want := range expected(s) {
-			j, ok := col[h]
-			if !ok {
-				t.Fatalf("no column %q in %v", h, recs[0])
+	checked, i := 0, 1
+	for _, s := range src {
+		strs := list(s.raw, "string")
+		for k, want := range expected(s) {
+			rec := recs[i]
+			i++
+			for h, v := range want {
+				j, ok := col[h]
+				if !ok {
+					t.Fatalf("no column %q in %v", h, recs[0])
+				}
+				got, err := strconv.ParseFloat(rec[j], 64)
+				// Two decimals are printed.
+				if err != nil || math.Abs(got-v) > 0.005+1e-9 {
+					t.Errorf("%s %s = %q, want %.4f", s.name, h, rec[j], v)
+				}
+				checked++
 			}
-			got, err := strconv.ParseFloat(rec[j], 64)
-			// Two decimals are printed.
-			if err != nil || math.Abs(got-want) > 0.005+1e-9 {
-				t.Errorf("%s %s = %q, want %.4f", s.name, h, rec[j], want)
+			if id := sub(s.raw, "well")["id"]; rec[col["Well"]] != id {
+				t.Errorf("%s: id %q", s.name, rec[col["Well"]])
 			}
-			checked++
-		}
-		if id := sub(s.raw, "well")["id"]; rec[col["Well"]] != id {
-			t.Errorf("%s: id %q", s.name, rec[col["Well"]])
+			if len(strs) > 1 && rec[col["String"]] != strs[k]["name"] {
+				t.Errorf("%s row %d: string %q, want %v", s.name, k, rec[col["String"]], strs[k]["name"])
+			}
 		}
 	}
 	if checked < 6*len(src) {
@@ -199,20 +228,30 @@ func TestXLSXNumbersEqualTheWellFiles(t *testing.T) {
 	for i, h := range rows[0] {
 		col[h] = i
 	}
-	for i, s := range src {
-		for h, want := range expected(s) {
-			cell, _ := excelize.CoordinatesToCellName(col[h]+1, i+2)
-			if typ, _ := f.GetCellType("Summary", cell); typ != excelize.CellTypeNumber && typ != excelize.CellTypeUnset {
-				t.Errorf("%s %s: cell type %v, want a number", s.name, h, typ)
+	if len(rows) != 1+points(src) {
+		t.Errorf("Summary has %d rows, want the header and %d points", len(rows), points(src))
+	}
+	i := 0
+	for _, s := range src {
+		for _, want := range expected(s) {
+			for h, w := range want {
+				cell, _ := excelize.CoordinatesToCellName(col[h]+1, i+2)
+				if typ, _ := f.GetCellType("Summary", cell); typ != excelize.CellTypeNumber && typ != excelize.CellTypeUnset {
+					t.Errorf("%s %s: cell type %v, want a number", s.name, h, typ)
+				}
+				v, _ := f.GetCellValue("Summary", cell)
+				got, err := strconv.ParseFloat(v, 64)
+				// Full precision is stored; only the rounding of the
+				// inputs' conversions separates them.
+				if err != nil || math.Abs(got-w) > 1e-9 {
+					t.Errorf("%s %s = %q, want %v", s.name, h, v, w)
+				}
 			}
-			v, _ := f.GetCellValue("Summary", cell)
-			got, err := strconv.ParseFloat(v, 64)
-			// Full precision is stored; only the rounding of the
-			// inputs' conversions separates them.
-			if err != nil || math.Abs(got-want) > 1e-9 {
-				t.Errorf("%s %s = %q, want %v", s.name, h, v, want)
-			}
+			i++
 		}
+	}
+	if note, _ := f.GetCellValue(NotesSheet, "A1"); note != Caution {
+		t.Errorf("notes sheet holds %q", note)
 	}
 	props, _ := f.GetDocProps()
 	if props.Created != "2026-06-15T00:00:00Z" || props.Modified != props.Created {
@@ -358,3 +397,73 @@ depth = 4.02
 reference = "measuring-point"
 measured = 2026-04-01
 `
+
+// Slots and sizes come in the table's units with the unit in the header;
+// 1 in = 25.4 mm exactly (NIST SP 811). A 0.040-in slot stays 0.040 in a
+// table in feet and is 1.016 mm (shown 1.02) in one in metres; a 0.5-mm
+// slot is 0.0197 in (shown 0.020) in feet; a pipe given only by its OD
+// (60.325 mm = 2.375 in, ASTM D1785 2-in) shows it in inches in feet.
+func TestSlotAndSizeUnits(t *testing.T) {
+	inch := strings.NewReplacer(`id = "PZ-9"`, `id = "PW-7"`, `slot = 0.5`, `slot_number = 40`).Replace(metricWell)
+	inch = strings.Replace(inch, "[units]\ndepth = \"m\"", "[units]\ndepth = \"m\"\ndiameter = \"in\"", 1)
+	inch = strings.Replace(inch, "diameter = 200", "diameter = 8", 1)
+	pw7, err := schema.Load("PW-7.toml", []byte(inch))
+	if err != nil {
+		t.Fatal(err)
+	}
+	noSize := strings.Replace(strings.Replace(metricWell, `size = "DN50"`, `od = 60.325`+"\nid = 50.0", 1), "sdr = 11\n", "", 1)
+	pz, err := schema.Load("PZ-9.toml", []byte(noSize))
+	if err != nil {
+		t.Fatal(err)
+	}
+	cell := func(tb *Table, row int, header string) string {
+		for i, h := range tb.Header() {
+			if h == header {
+				return tb.Cells(tb.Rows[row])[i].String()
+			}
+		}
+		t.Fatalf("no column %q in %v", header, tb.Header())
+		return ""
+	}
+	ft := Build([]Entry{{Well: pw7}, {Well: pz}}, schema.Feet)
+	if got := cell(ft, 0, "Slot (in)"); got != "0.040" {
+		t.Errorf("0.040-in slot in feet: %q", got)
+	}
+	if got := cell(ft, 1, "Slot (in)"); got != "0.020" {
+		t.Errorf("0.5-mm slot in feet: %q, want 0.020", got)
+	}
+	if got := cell(ft, 1, "Casing size"); got != "OD 2.375 in" {
+		t.Errorf("OD-only casing in feet: %q", got)
+	}
+	m := Build([]Entry{{Well: pw7}, {Well: pz}}, schema.Metres)
+	if got := cell(m, 0, "Slot (mm)"); got != "1.02" {
+		t.Errorf("0.040-in slot in metres: %q, want 1.02", got)
+	}
+	if got := cell(m, 1, "Slot (mm)"); got != "0.50" {
+		t.Errorf("0.5-mm slot in metres: %q", got)
+	}
+}
+
+// A nested well gives a row per string with its own screen and the pack
+// around it: NW-1's strings are screened 30-40 and 70-80 ft (not one
+// envelope of 30-80), packed 28-43 and 67-82 ft (the demo file).
+func TestNestedWellRowPerString(t *testing.T) {
+	w, err := schema.Load("NW-1.toml", mustRead(t, "wells/NW-1.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	tb := Build([]Entry{{File: "NW-1.toml", Well: w}}, schema.Feet)
+	if len(tb.Rows) != 2 || tb.Wells() != 1 {
+		t.Fatalf("%d rows of %d wells", len(tb.Rows), tb.Wells())
+	}
+	for i, want := range []struct {
+		name     string
+		top, bot float64
+		pack     string
+	}{{"NW-1S", 30, 40, "28–43"}, {"NW-1D", 70, 80, "67–82"}} {
+		r := tb.Rows[i]
+		if r.ID != "NW-1" || r.String != want.name || *r.ScreenTop != want.top || *r.ScreenBottom != want.bot || r.Pack != want.pack {
+			t.Errorf("row %d: %s %s %v–%v pack %q; want %+v", i, r.ID, r.String, *r.ScreenTop, *r.ScreenBottom, r.Pack, want)
+		}
+	}
+}

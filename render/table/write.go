@@ -8,8 +8,10 @@ import (
 	"strings"
 )
 
-// CSV writes the table as RFC 4180 CSV, UTF-8: the header, one record
-// per well, then a record holding the caution in its first field.
+// CSV writes the table as RFC 4180 CSV, UTF-8: the header and one record
+// per monitoring point, nothing else, so that a database or GIS loads it
+// as it is. The caution goes with the other forms (Markdown, XLSX, book)
+// and the command prints it.
 func (t *Table) CSV(w io.Writer) error {
 	cw := csv.NewWriter(w)
 	header := t.Header()
@@ -25,11 +27,6 @@ func (t *Table) CSV(w io.Writer) error {
 		if err := cw.Write(rec); err != nil {
 			return fmt.Errorf("csv: %w", err)
 		}
-	}
-	caution := make([]string, len(header))
-	caution[0] = Caution
-	if err := cw.Write(caution); err != nil {
-		return fmt.Errorf("csv: %w", err)
 	}
 	cw.Flush()
 	if err := cw.Error(); err != nil {

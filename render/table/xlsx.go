@@ -8,11 +8,15 @@ import (
 	"github.com/xuri/excelize/v2"
 )
 
-// XLSX writes the table as a workbook with one sheet, "Summary": numbers
-// as numeric cells (full precision, shown with the table's decimals), a
-// bold frozen header row and the caution below the rows. date is written
+// XLSX writes the table as a workbook: the sheet "Summary" holds only the
+// header and one row per monitoring point (numbers as numeric cells, full
+// precision, shown with the table's decimals; a bold frozen header row),
+// and the sheet "Notes" the caution. date is written
 // as the document's created and modified date, so the same input gives
 // the same bytes.
+// NotesSheet is the workbook's sheet holding the caution.
+const NotesSheet = "Notes"
+
 func (t *Table) XLSX(title string, date time.Time) ([]byte, error) {
 	f := excelize.NewFile()
 	defer f.Close()
@@ -78,8 +82,13 @@ func (t *Table) XLSX(title string, date time.Time) ([]byte, error) {
 			}
 		}
 	}
-	caution, _ := excelize.CoordinatesToCellName(1, len(t.Rows)+3)
-	if err := f.SetCellStr(sheet, caution, Caution); err != nil {
+	if _, err := f.NewSheet(NotesSheet); err != nil {
+		return nil, fmt.Errorf("xlsx: %w", err)
+	}
+	if err := f.SetCellStr(NotesSheet, "A1", Caution); err != nil {
+		return nil, fmt.Errorf("xlsx: %w", err)
+	}
+	if err := f.SetColWidth(NotesSheet, "A", "A", 120); err != nil {
 		return nil, fmt.Errorf("xlsx: %w", err)
 	}
 	if err := f.SetPanes(sheet, &excelize.Panes{Freeze: true, XSplit: 1, YSplit: 1, TopLeftCell: "B2", ActivePane: "bottomRight"}); err != nil {

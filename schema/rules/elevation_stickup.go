@@ -14,8 +14,9 @@ func init() {
 		Source:   "common practice: water-level elevation = measuring-point elevation - depth to water",
 		Params: []Param{{
 			Name: "tolerance", Kind: LengthParam, Default: 0.03, DefaultFt: 0.1,
-			Doc:    "allowed difference between surveyed and recorded stick-up",
-			Source: "common practice: 0.1 ft (0.03 m)",
+			Doc: "allowed difference between surveyed and recorded stick-up",
+			Source: "common practice: 0.1 ft (0.03 m), no published figure; the ground beside a casing is not one point " +
+				"and a ground shot is commonly good to about 0.1 ft where the measuring point is surveyed to 0.01 ft",
 		}},
 		Run: runElevationStickup,
 	})

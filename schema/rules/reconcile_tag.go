@@ -13,14 +13,11 @@ func init() {
 			"that many bags, filling upward from the interval's bottom through the recorded hole and pipe " +
 			"diameters, and compares. A tag shallower than expected suggests a bridge (material hung up above a " +
 			"void) or a narrower hole; a tag deeper than expected suggests material lost to the formation or an " +
-			"enlarged hole.",
-		Severity: Warning,
-		Source:   reconcileSources,
-		Params: []Param{{
-			Name: "tolerance", Kind: LengthParam, Default: 0.15, DefaultFt: 0.5,
-			Doc:    "largest accepted difference between a tag and the expected top",
-			Source: "common practice: 0.5 ft (0.15 m), the resolution of a weighted tape on a soft top",
-		}},
+			"enlarged hole. The accepted miss grows with the interval: the depth that a fraction of the volume " +
+			"placed so far takes up at the expected top, but at least the tape's tolerance.",
+		Severity:  Warning,
+		Source:    reconcileSources,
+		Params:    tagToleranceParams("a tag and the expected top"),
 		Reconcile: true,
 		Run:       reconciling(runTagExpectedTop),
 	})
@@ -29,21 +26,17 @@ func init() {
 		Title: "The final tag confirms the fill's recorded top",
 		Doc: "The last tag of a fill, taken once all its bags were in, measures where its top really is. When it " +
 			"differs from the top the file records for the interval, the log shows the pack or seal where it " +
-			"is not.",
-		Severity: Error,
-		Source:   reconcileSources,
-		Params: []Param{{
-			Name: "tolerance", Kind: LengthParam, Default: 0.15, DefaultFt: 0.5,
-			Doc:    "largest accepted difference between the final tag and the recorded top",
-			Source: "common practice: 0.5 ft (0.15 m), the resolution of a weighted tape on a soft top",
-		}},
+			"is not. The accepted miss is the depth a fraction of the interval's volume takes up at its top, but " +
+			"at least the tape's tolerance.",
+		Severity:  Error,
+		Source:    reconcileSources,
+		Params:    tagToleranceParams("the final tag and the recorded top"),
 		Reconcile: true,
 		Run:       runTagFinalTop,
 	})
 }
 
 func runTagExpectedTop(p *Pass, q *quantity.Report) {
-	tol := p.Length("tolerance")
 	u := p.Well.Units
 	for _, r := range q.Rows {
 		if r.Err != nil {
@@ -54,6 +47,8 @@ func runTagExpectedTop(p *Pass, q *quantity.Report) {
 				continue
 			}
 			off := tc.Off()
+			vol := schema.Volume(tc.Tag.AfterBags) * r.Yield.Volume
+			tol := p.tagTolerance(r.Fill, tc.Expected, vol)
 			if absLength(off) <= tol+eps {
 				continue
 			}
@@ -65,30 +60,33 @@ func runTagExpectedTop(p *Pass, q *quantity.Report) {
 			if !tc.Reached {
 				expected = "more than the annulus holds up to " + p.D(tc.Expected)
 			}
-			vol := schema.Volume(tc.Tag.AfterBags) * r.Yield.Volume
 			p.Reportf(key(tc.Tag.Path, "depth"), ordered(tc.Expected, tc.Tag.Depth),
-				"%s: tagged at %s after %s bags, but %s bags at %s make %s, %s: %s %s, %s",
+				"%s: tagged at %s after %s bags, but %s bags at %s make %s, %s: %s %s (accepted: %s), %s",
 				p.fillLabel(&r.Fill), p.D(tc.Tag.Depth), schema.TrimFloat(tc.Tag.AfterBags, 2),
 				schema.TrimFloat(tc.Tag.AfterBags, 2), quantity.FormatYield(r.Yield, u), quantity.FormatVolume(vol, u),
-				expected, p.D(absLength(off)), tagDirection(off), why)
+				expected, p.D(absLength(off)), tagDirection(off), p.D(tol), why)
 		}
 	}
 }
 
 func runTagFinalTop(p *Pass) {
-	tol := p.Length("tolerance")
 	for _, f := range p.Well.Fills {
 		final, ok := finalTag(f)
 		if !ok {
 			continue
 		}
 		off := final.Depth - f.Top
+		vol, err := quantity.AnnularVolume(p.Well, f)
+		if err != nil {
+			vol = 0 // the geometry's fault is another rule's; the tape's tolerance applies
+		}
+		tol := p.tagTolerance(f, f.Top, vol)
 		if absLength(off) <= tol+eps {
 			continue
 		}
 		p.Reportf(key(final.Path, "depth"), ordered(f.Top, final.Depth),
-			"%s: the final tag (after %s bags) found the top at %s, but the recorded top is %s: %s %s",
-			p.fillLabel(&f), schema.TrimFloat(final.AfterBags, 2), p.D(final.Depth), p.D(f.Top), p.D(absLength(off)), tagDirection(off))
+			"%s: the final tag (after %s bags) found the top at %s, but the recorded top is %s: %s %s (accepted: %s)",
+			p.fillLabel(&f), schema.TrimFloat(final.AfterBags, 2), p.D(final.Depth), p.D(f.Top), p.D(absLength(off)), tagDirection(off), p.D(tol))
 	}
 }
 
