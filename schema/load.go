@@ -3,7 +3,6 @@ package schema
 import (
 	"errors"
 	"fmt"
-	"os"
 	"strings"
 
 	"github.com/BurntSushi/toml"
@@ -14,7 +13,7 @@ import (
 // LoadFile reads and checks one well file. A rejected file yields an
 // ErrorList naming every problem with its line.
 func LoadFile(path string) (*Well, error) {
-	data, err := os.ReadFile(path)
+	data, err := ReadInput(path, MaxTextFile)
 	if err != nil {
 		return nil, ErrorList{ReadError(path, "", err)}
 	}
@@ -25,6 +24,9 @@ func LoadFile(path string) (*Well, error) {
 func Load(name string, data []byte) (*Well, error) {
 	// Decoding into a bare interface hands over the parser's own tree;
 	// a map[string]any target would be copied key by key.
+	if e := CheckNesting(name, data, MaxNesting); e != nil {
+		return nil, ErrorList{e}
+	}
 	src := string(data)
 	var tree any
 	if _, err := toml.Decode(src, &tree); err != nil {
@@ -45,6 +47,7 @@ func Load(name string, data []byte) (*Well, error) {
 		return nil, r.errs
 	}
 	w.keys = &keyIndex{src: src, lines: r.lines}
+	w.Placeholders = findPlaceholders(src)
 	return w, nil
 }
 

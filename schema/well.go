@@ -60,6 +60,9 @@ type Well struct {
 	WallImages  []WallImage
 	Features    []Feature // as written
 
+	// Placeholders are the starter values still marked "# FILL".
+	Placeholders []Placeholder
+
 	// keys locates key paths in the file text; see Line and HasKey.
 	keys *keyIndex
 }

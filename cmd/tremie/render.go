@@ -29,7 +29,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	formats := fset.String("format", "svg,pdf,png", "comma-separated output `formats`: "+strings.Join(out.FormatNames(), ", "))
 	pageName := fset.String("page", "", "page `size`: letter, tabloid, a4 or a3 (default letter, or the project's)")
 	landscape := fset.Bool("landscape", false, "turn the page to landscape")
-	scaleText := fset.String("scale", "", "vertical `scale`, such as 1in=5ft or 1:50 (default: automatic)")
+	scaleText := fset.String("scale", "", "vertical `scale`, such as 1in=5ft or 1:50, or fit for one sheet (default: automatic)")
 	strict := fset.Bool("strict", false, "refuse to draw a well with unwaived error findings")
 	profilePath := fset.String("profile", "", "rule profile TOML `file` (default: the project's, else the defaults)")
 	yieldsPath := fset.String("yields", "", "TOML `file` with a [yields] table overriding the yields (default: the project's)")

@@ -252,7 +252,7 @@ func (r *Run) setting(p *project.Project) *Setting {
 			errs = append(errs, err)
 		} else {
 			s.Profile = prof
-			s.profileBytes, _ = os.ReadFile(s.ProfileFile)
+			s.profileBytes, _ = schema.ReadInput(s.ProfileFile, schema.MaxTextFile)
 		}
 	}
 	if s.YieldsFile != "" {
@@ -261,7 +261,7 @@ func (r *Run) setting(p *project.Project) *Setting {
 			errs = append(errs, err)
 		} else {
 			s.Yields = y
-			s.yieldsBytes, _ = os.ReadFile(s.YieldsFile)
+			s.yieldsBytes, _ = schema.ReadInput(s.YieldsFile, schema.MaxTextFile)
 			cp := *s.Profile
 			cp.Yields = y
 			s.Profile = &cp

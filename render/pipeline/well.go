@@ -3,7 +3,6 @@ package pipeline
 import (
 	"errors"
 	"fmt"
-	"os"
 
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/render/sheet"
@@ -47,7 +46,7 @@ func Load(in Input) *Well {
 		w.Err = &schema.Error{File: in.Path, Msg: ErrSetting.Error()}
 		return w
 	}
-	data, err := os.ReadFile(in.Path)
+	data, err := schema.ReadInput(in.Path, schema.MaxTextFile)
 	if err != nil {
 		w.Err = schema.ErrorList{schema.ReadError(in.Path, "", err)}
 		return w

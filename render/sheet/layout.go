@@ -124,14 +124,24 @@ func (l *layout) plan() error {
 	l.plot = draw.Rect{X: l.body.X, Y: l.body.Y + columnHeadH, W: l.body.W, H: l.body.H - columnHeadH}
 
 	usable := l.plot.H - plotPadTop - plotPadBottom
-	if l.opt.Scale != nil {
+	switch {
+	case l.opt.Scale != nil && l.opt.Scale.Fit:
+		s, ok := fitScale(l.u.Imperial(), l.bot-l.top, usable)
+		if !ok {
+			return fmt.Errorf("the well does not fit one sheet even at %s; use a larger page or a scale", s)
+		}
+		l.scale, l.fitsOne = s, true
+	case l.opt.Scale != nil:
 		if !(l.opt.Scale.Ratio > 0) || math.IsInf(l.opt.Scale.Ratio, 0) {
 			return fmt.Errorf("scale %v is not usable", *l.opt.Scale)
 		}
 		l.scale = *l.opt.Scale
 		l.fitsOne = l.scale.Points(l.bot-l.top) <= usable
-	} else {
+	default:
 		l.scale, l.fitsOne = autoScale(l.u.Imperial(), l.bot-l.top, usable)
+		if s, ok := l.economicalScale(usable); ok {
+			l.scale, l.fitsOne = s, true
+		}
 	}
 	if err := l.paginateAt(l.scale, usable); err != nil {
 		return err
@@ -140,25 +150,53 @@ func (l *layout) plan() error {
 		// The automatic scale weighs the text too: where a sheet's
 		// descriptions do not fit even one line each, or its labels run
 		// off the drawing, a more detailed scale gives them room.
-		cs := candidates(l.u.Imperial())
-		k := len(cs) - 1
-		for k > 0 && cs[k].Ratio != l.scale.Ratio {
-			k--
-		}
-		for k > 0 && !l.textFits() {
+		for !l.textFits() {
+			next, ok := moreDetailed(candidates(l.u.Imperial()), l.scale)
+			if !ok {
+				break
+			}
 			saved, savedFits, savedSheets := l.scale, l.fitsOne, l.sheets
-			l.scale, l.fitsOne = cs[k-1], false
+			l.scale, l.fitsOne = next, false
 			if err := l.paginateAt(l.scale, usable); err != nil {
 				l.scale, l.fitsOne, l.sheets = saved, savedFits, savedSheets
 				l.scaleFields()
 				break
 			}
-			k--
 		}
 	}
 	l.planCallouts()
 	l.planNotesSheets()
 	return nil
+}
+
+// moreDetailed is the least detailed of the scales that is more detailed
+// than s.
+func moreDetailed(cs []Scale, s Scale) (Scale, bool) {
+	best, ok := Scale{}, false
+	for _, c := range cs {
+		if c.Ratio < s.Ratio && (!ok || c.Ratio > best.Ratio) {
+			best, ok = c, true
+		}
+	}
+	return best, ok
+}
+
+// economicalScale spares a second sheet that would stand mostly blank:
+// when the automatic scale needs two sheets and the second would be less
+// than half used, a scale up to twice the readable limit that holds the
+// well on one sheet is taken instead.
+func (l *layout) economicalScale(usable float64) (Scale, bool) {
+	span := l.bot - l.top
+	sheets := l.scale.Points(span) / usable
+	if sheets <= 1 || sheets > 1.5 {
+		return Scale{}, false
+	}
+	s, ok := fitScale(l.u.Imperial(), span, usable)
+	limit := imperialReadable * 12 * 2
+	if !l.u.Imperial() {
+		limit = metricReadable * 2
+	}
+	return s, ok && s.Ratio <= limit
 }
 
 // paginateAt divides the depth range into sheets at a scale.

@@ -14,7 +14,13 @@ import (
 type Scale struct {
 	Ratio    float64
 	Imperial bool // written as "1 in = N ft" rather than "1:N"
+	// Fit asks for the most detailed round scale that draws the whole
+	// well on one sheet (Ratio is then chosen by the layout).
+	Fit bool
 }
+
+// Fitted is the scale that asks for one sheet.
+var Fitted = Scale{Fit: true}
 
 const pointsPerMetre = 72 / 0.0254 // 1 in = 72 pt = 0.0254 m exactly
 
@@ -29,6 +35,9 @@ func (s Scale) FeetPerInch() float64 { return s.Ratio / 12 }
 
 // String writes the scale as a drafter states it: "1 in = 5 ft" or "1:50".
 func (s Scale) String() string {
+	if s.Fit && s.Ratio == 0 {
+		return "fit"
+	}
 	if s.Imperial {
 		return fmt.Sprintf("1 in = %s ft", schema.TrimFloat(s.FeetPerInch(), 2))
 	}
@@ -41,9 +50,13 @@ func Imperial(ft float64) Scale { return Scale{Ratio: ft * 12, Imperial: true} }
 // Metric makes the scale 1:n.
 func Metric(n float64) Scale { return Scale{Ratio: n} }
 
-// ParseScale reads "1in=5ft", "1 in = 5 ft", "1\"=5'" or "1:50".
+// ParseScale reads "1in=5ft", "1 in = 5 ft", "1\"=5'", "1:50", or "fit"
+// (one sheet at the most detailed round scale that holds the well).
 func ParseScale(s string) (Scale, error) {
 	t := strings.ToLower(strings.ReplaceAll(s, " ", ""))
+	if t == "fit" {
+		return Fitted, nil
+	}
 	if a, b, ok := strings.Cut(t, ":"); ok {
 		if a != "1" {
 			return Scale{}, fmt.Errorf("scale %q: a metric scale is written 1:N, such as 1:50", s)
@@ -72,10 +85,10 @@ func ParseScale(s string) (Scale, error) {
 // stops at the last readable one (index readable); past it the well goes
 // on over several sheets rather than shrinking further.
 var (
-	imperialSteps    = []float64{1, 2, 5, 10, 20, 30, 40, 50, 100, 200, 500} // ft per in: 1-2-5 steps plus the 30 and 40 of the engineer's scale (common practice)
-	metricSteps      = []float64{20, 50, 100, 200, 500, 1000, 2000}          // 1:N
-	imperialReadable = 50.0                                                  // 1 in = 50 ft: a 2-ft seal is 2.9 pt
-	metricReadable   = 500.0                                                 // 1:500: a 1-m seal is 5.7 pt
+	imperialSteps    = []float64{1, 2, 5, 10, 20, 30, 40, 50, 60, 100, 200, 500} // ft per in: 1-2-5 steps plus the 30, 40 and 60 of the engineer's scale (common practice)
+	metricSteps      = []float64{20, 25, 50, 100, 200, 250, 500, 1000, 2000}     // 1:N: ISO 5455 steps plus the 1:25 and 1:250 of building drawings (common practice)
+	imperialReadable = 50.0                                                      // 1 in = 50 ft: a 2-ft seal is 2.9 pt
+	metricReadable   = 500.0                                                     // 1:500: a 1-m seal is 5.7 pt
 )
 
 // candidates lists the automatic scales for the units, most detailed
@@ -96,6 +109,28 @@ func candidates(imperial bool) []Scale {
 		}
 	}
 	return out
+}
+
+// fitScale is the most detailed round scale of every step the units have
+// (past the readable limit too) at which a depth span fits the body, or
+// false when none does.
+func fitScale(imperial bool, span schema.Length, body float64) (Scale, bool) {
+	var all []Scale
+	if imperial {
+		for _, ft := range append(imperialSteps, 1000, 2000) {
+			all = append(all, Imperial(ft))
+		}
+	} else {
+		for _, n := range append(metricSteps, 5000, 10000) {
+			all = append(all, Metric(n))
+		}
+	}
+	for _, s := range all {
+		if s.Points(span) <= body {
+			return s, true
+		}
+	}
+	return all[len(all)-1], false
 }
 
 // autoScale picks the most detailed round scale at which a depth span

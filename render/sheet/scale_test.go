@@ -1,6 +1,7 @@
 package sheet
 
 import (
+	"github.com/tremie-dev/tremie/templates"
 	"math"
 	"testing"
 
@@ -140,5 +141,50 @@ func TestMetricScaleNames(t *testing.T) {
 	}
 	if !ok {
 		t.Errorf("scale %v is not a round metric scale", l.scale)
+	}
+}
+
+// --scale fit draws the 1,200-ft gallery well on one sheet at the most
+// detailed round scale that holds it, with every text inside its region
+// (checked by TestEveryTextInsideItsRegion's rules on this layout too).
+func TestFitScaleGivesOneSheet(t *testing.T) {
+	if s, err := ParseScale("fit"); err != nil || !s.Fit {
+		t.Fatalf("ParseScale(fit) = %v, %v", s, err)
+	}
+	for _, c := range galleryWells(t) {
+		for _, land := range []bool{false, true} {
+			tpl, _ := templates.Load("letter", land)
+			fit := Fitted
+			opt := Options{Page: FromTemplate(tpl), Scale: &fit}
+			l := newLayout(c.w, c.in, opt, opt.Page)
+			if err := l.plan(); err != nil {
+				t.Fatal(err)
+			}
+			usable := l.plot.H - plotPadTop - plotPadBottom
+			if len(l.sheets) != 1 {
+				t.Errorf("%s landscape=%v: %d sheets at %v", c.name, land, len(l.sheets), l.scale)
+			}
+			if next, ok := moreDetailed(append(candidates(true), Imperial(60), Imperial(100), Imperial(200), Imperial(500)), l.scale); ok && next.Points(l.bot-l.top) <= usable {
+				t.Errorf("%s landscape=%v: fit chose %v but %v holds the well", c.name, land, l.scale, next)
+			}
+		}
+	}
+}
+
+// A well whose second sheet would stand more than half blank at the
+// readable limit goes on one sheet at a less detailed round scale
+// instead (common practice: no sheet is issued mostly empty).
+func TestNoMostlyBlankSecondSheet(t *testing.T) {
+	for _, td := range []float64{300, 400} {
+		w := simpleWell(td)
+		l := newLayout(w, Inputs{}, Options{}, Letter)
+		if err := l.plan(); err != nil {
+			t.Fatal(err)
+		}
+		usable := l.plot.H - plotPadTop - plotPadBottom
+		at50 := Imperial(50).Points(l.bot-l.top) / usable
+		if at50 > 1 && at50 <= 1.5 && len(l.sheets) != 1 {
+			t.Errorf("%g-ft well: %d sheets at %v; at 1 in = 50 ft the second sheet would be %.0f %% used", td, len(l.sheets), l.scale, (at50-1)*100)
+		}
 	}
 }

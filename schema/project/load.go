@@ -66,7 +66,7 @@ func Load(dir string) (*Project, error) {
 	} else {
 		dir = filepath.Dir(dir)
 	}
-	data, err := os.ReadFile(file)
+	data, err := schema.ReadInput(file, schema.MaxTextFile)
 	if err != nil {
 		if errors.Is(err, fs.ErrNotExist) {
 			return nil, fmt.Errorf("%s: %w", file, ErrNoProject)

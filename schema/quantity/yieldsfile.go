@@ -4,7 +4,6 @@ import (
 	"errors"
 	"fmt"
 	"math"
-	"os"
 	"sort"
 	"strings"
 
@@ -29,7 +28,7 @@ import (
 // defaults overridden by it. A file without the table is an error: the user
 // named it for its yields.
 func LoadYields(path string) (*Yields, error) {
-	data, err := os.ReadFile(path)
+	data, err := schema.ReadInput(path, schema.MaxTextFile)
 	if err != nil {
 		return nil, schema.ReadError(path, "yields", err)
 	}

@@ -4,7 +4,6 @@ import (
 	"errors"
 	"fmt"
 	"math"
-	"os"
 	"path/filepath"
 	"sort"
 	"strings"
@@ -17,7 +16,7 @@ import (
 // is strict: an unknown table, rule, parameter or purpose is an error with
 // its line, and a rejected profile yields a schema.ErrorList.
 func LoadProfile(path string) (*Profile, error) {
-	data, err := os.ReadFile(path)
+	data, err := schema.ReadInput(path, schema.MaxTextFile)
 	if err != nil {
 		return nil, schema.ErrorList{schema.ReadError(path, "profile", err)}
 	}
