@@ -2,7 +2,6 @@ package main
 
 import (
 	"encoding/json"
-	"errors"
 	"fmt"
 	"io"
 	"strings"
@@ -49,23 +48,11 @@ type jsonError struct {
 	Col     int    `json:"col,omitempty"`
 	Key     string `json:"key,omitempty"`
 	Message string `json:"message"`
+	Hint    string `json:"hint,omitempty"`
 }
 
 // Unreadable reports whether the file could not be read or parsed.
 func (r fileResult) Unreadable() bool { return len(r.Errors) > 0 }
-
-// schemaErrors flattens a loader error into positioned errors.
-func schemaErrors(path string, err error) []*schema.Error {
-	var list schema.ErrorList
-	if errors.As(err, &list) && len(list) > 0 {
-		return list
-	}
-	var one *schema.Error
-	if errors.As(err, &one) {
-		return []*schema.Error{one}
-	}
-	return []*schema.Error{{File: path, Msg: err.Error()}}
-}
 
 // checkOptions are the parsed command line of tremie check.
 type checkOptions struct {
@@ -107,11 +94,9 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	for i, w := range wells {
 		results[i] = fileResult{Path: w.Path, WellID: w.ID, Findings: w.Findings, Profile: w.Setting.ProfileLabel()}
 		if w.Err != nil {
-			results[i].Errors = schemaErrors(w.Path, w.Err)
+			results[i].Errors = schema.Errors(w.Path, w.Err)
 			results[i].Findings = []rules.Finding{}
-			for _, e := range results[i].Errors {
-				fmt.Fprintln(stderr, e)
-			}
+			fmt.Fprintln(stderr, schema.ErrorList(results[i].Errors))
 		}
 	}
 	var err error
@@ -182,7 +167,7 @@ func writeCheckJSON(w io.Writer, results []fileResult) error {
 	for i, r := range results {
 		out[i] = jsonResult{fileResult: r, Readable: !r.Unreadable()}
 		for _, e := range r.Errors {
-			out[i].Problems = append(out[i].Problems, jsonError{Line: e.Line, Col: e.Col, Key: e.Key, Message: e.Msg})
+			out[i].Problems = append(out[i].Problems, jsonError{Line: e.Line, Col: e.Col, Key: e.Key, Message: e.Msg, Hint: e.Hint})
 		}
 	}
 	data, err := json.MarshalIndent(out, "", "  ")

@@ -129,11 +129,9 @@ func printErr(w io.Writer, cmd string, err error) {
 	var one *schema.Error
 	switch {
 	case errors.As(err, &list) && len(list) > 0:
-		for _, e := range list {
-			fmt.Fprintln(w, e)
-		}
+		fmt.Fprintln(w, list) // with each error's hint
 	case errors.As(err, &one):
-		fmt.Fprintln(w, one)
+		fmt.Fprintln(w, schema.ErrorList{one})
 	default:
 		fmt.Fprintf(w, "tremie %s: %v\n", cmd, err)
 	}

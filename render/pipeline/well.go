@@ -6,6 +6,7 @@ import (
 
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/render/sheet"
+	"github.com/tremie-dev/tremie/render/wallimage"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/project"
 	"github.com/tremie-dev/tremie/schema/quantity"
@@ -101,10 +102,18 @@ type LayoutOptions struct {
 }
 
 // SheetInputs is what the sheet shows besides the well: its findings,
-// quantities and its project's title block and logo.
-func (w *Well) SheetInputs() sheet.Inputs {
+// quantities, wall images (read relative to the well file) and its
+// project's title block and logo. An image that cannot be read is an
+// input error naming the well file and line.
+func (w *Well) SheetInputs() (sheet.Inputs, error) {
 	s := w.Setting
-	return sheet.Inputs{Findings: w.Findings, Quantities: w.Quantities, TitleBlock: s.TitleBlock(), Logo: s.Logo(), Profile: s.Profile}
+	in := sheet.Inputs{Findings: w.Findings, Quantities: w.Quantities, TitleBlock: s.TitleBlock(), Logo: s.Logo(), Profile: s.Profile}
+	images, errs := wallimage.LoadAll(w.Path, w.Well)
+	if len(errs) > 0 {
+		return in, errors.Join(errs...)
+	}
+	in.WallImages = images
+	return in, nil
 }
 
 // SheetOptions are the drafting choices: the setting's page and opt.
@@ -118,7 +127,11 @@ func (w *Well) Layout(opt LayoutOptions) (*draw.Document, error) {
 	if w.Well == nil {
 		return nil, fmt.Errorf("%s: no well to draw", w.Path)
 	}
-	doc, err := sheet.Layout(w.Well, w.SheetInputs(), w.SheetOptions(opt))
+	in, err := w.SheetInputs()
+	if err != nil {
+		return nil, err
+	}
+	doc, err := sheet.Layout(w.Well, in, w.SheetOptions(opt))
 	if err != nil {
 		return nil, fmt.Errorf("%s: %w", w.Path, err)
 	}

@@ -31,8 +31,11 @@ func prepareDemo(t testing.TB) map[string]sheet.DemoWell {
 		if w.Err != nil {
 			t.Fatalf("%s: %v", w.Path, w.Err)
 		}
-		out[filepath.Base(w.Path)] = sheet.DemoWell{Well: w.Well, In: w.SheetInputs(),
-			Opt: w.SheetOptions(pipeline.LayoutOptions{Date: run.SourceDate})}
+		in, err := w.SheetInputs()
+		if err != nil {
+			t.Fatal(err)
+		}
+		out[filepath.Base(w.Path)] = sheet.DemoWell{Well: w.Well, In: in, Opt: w.SheetOptions(pipeline.LayoutOptions{Date: run.SourceDate})}
 	}
 	return out
 }

@@ -40,7 +40,7 @@ func Write(dir string, force bool) error {
 			}
 			return nil
 		}
-		if filepath.Ext(path) != ".toml" {
+		if ext := filepath.Ext(path); ext != ".toml" && ext != ".png" {
 			return nil
 		}
 		data, err := FS.ReadFile(path)
