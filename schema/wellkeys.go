@@ -136,12 +136,16 @@ func wellFile() *TableSpec {
 			{Name: "gradation", Type: TypeString, Doc: "US sieve range, coarse/fine: \"20/40\" passes No. 20 and is held on No. 40.", Example: "20/40"},
 			{Name: "grain_min", Type: TypeNumber, Bound: Positive, Unit: UnitGrain, Doc: "Instead of gradation: smallest grain size.", Example: 0.42},
 			{Name: "grain_max", Type: TypeNumber, Bound: Positive, Unit: UnitGrain, Doc: "Instead of gradation: largest grain size.", Example: 0.84},
+			{Name: "d10", Type: TypeNumber, Bound: Positive, Unit: UnitGrain, Doc: "Grain size 10 % of the pack is finer than, by mass (its grading curve); the slot is checked against it.", Example: 0.45},
+			{Name: "d30", Type: TypeNumber, Bound: Positive, Unit: UnitGrain, Doc: "Grain size 30 % of the pack is finer than.", Example: 0.55},
+			{Name: "d60", Type: TypeNumber, Bound: Positive, Unit: UnitGrain, Doc: "Grain size 60 % of the pack is finer than.", Example: 0.70},
 			{Name: "method", Type: TypeString, Enum: []string{string(Tremied), string(Poured), string(Pumped)}, Doc: "How the fill was placed.", Example: "poured"},
 			{Name: "within", Type: TypeString, Doc: "Name of the [[casing]] the fill was placed inside; default the borehole annulus.", Example: "surface"},
 			{Name: "bags", Type: TypeNumber, Bound: NonNegative, Doc: "Bags placed.", Example: 9},
 			{Name: "bag_mass", Type: TypeNumber, Bound: Positive, Unit: UnitMass, Doc: "Mass of one bag.", Example: 50},
 			{Name: "volume", Type: TypeNumber, Bound: NonNegative, Unit: UnitVolume, Doc: "Instead of bags: volume placed.", Example: 6.4},
 			{Name: "yield", Type: TypeNumber, Bound: Positive, Unit: UnitVolume, Doc: "Volume one bag (or batch) fills in place, overriding the material default.", Example: 0.5},
+			{Name: "density", Type: TypeNumber, Bound: Positive, Doc: "Slurry density measured with a mud balance: lb/gal in a file in feet, kg/L in one in metres.", Example: 15.2},
 			{Name: "tag", Type: TypeTables, Doc: "Weighted-tape tags of the top of the fill.", Table: tag},
 		})}
 	openHole := &TableSpec{Doc: "An uncased interval below the casing (rock completion).", Keys: interval("open hole", false, 60.0, 150.0)}
