@@ -2,7 +2,6 @@ package main
 
 import (
 	"context"
-	"flag"
 	"fmt"
 	"io"
 	"os"
@@ -16,25 +15,20 @@ func init() {
 	register(&command{
 		name:    "serve",
 		summary: "a local web page of the project's wells, sheets, findings and quantities that follows the files as you edit",
+		args:    "[PROJECT_DIR]",
 		run:     runServe,
 	})
 }
 
 func runServe(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("serve", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	addr := fset.String("addr", "127.0.0.1:0", "address to listen on (port 0: any free port)")
-	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie serve [--addr 127.0.0.1:0] [PROJECT_DIR]")
-		fset.PrintDefaults()
-	}
-	pos, err := parseInterspersed(fset, args)
-	if err != nil {
-		return exitUsage
+	fset := newFlags("serve", stdout, stderr)
+	addr := fset.String("addr", "127.0.0.1:0", "`address` to listen on (port 0: any free port)")
+	pos, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
 	if len(pos) > 1 {
-		fset.Usage()
-		return exitUsage
+		return fset.usageError("name one project directory")
 	}
 	dir := "."
 	if len(pos) == 1 {

@@ -2,6 +2,8 @@ package live
 
 import (
 	"context"
+	"crypto/sha256"
+	"fmt"
 	"io"
 	"io/fs"
 	"net/http"
@@ -51,6 +53,7 @@ func get(t *testing.T, h http.Handler, path string) (int, string) {
 // it, does not.
 func TestServesOnlyItsOwnOutputs(t *testing.T) {
 	dir := demoProject(t)
+	before := tree(t, dir)
 	s, err := New(dir)
 	if err != nil {
 		t.Fatal(err)
@@ -76,16 +79,29 @@ func TestServesOnlyItsOwnOutputs(t *testing.T) {
 		}
 	}
 	// and it wrote nothing into the project
-	var files []string
-	filepath.WalkDir(dir, func(p string, d fs.DirEntry, err error) error {
-		if err == nil && !d.IsDir() {
-			files = append(files, p)
+	if after := tree(t, dir); after != before {
+		t.Errorf("the project changed while served:\n%s\nnow:\n%s", before, after)
+	}
+}
+
+// tree lists every file under dir with its size and content hash.
+func tree(t *testing.T, dir string) string {
+	var b strings.Builder
+	err := filepath.WalkDir(dir, func(p string, d fs.DirEntry, err error) error {
+		if err != nil || d.IsDir() {
+			return err
 		}
+		data, err := os.ReadFile(p)
+		if err != nil {
+			return err
+		}
+		fmt.Fprintf(&b, "%s %d %x\n", p, len(data), sha256.Sum256(data))
 		return nil
 	})
-	if len(files) != 8 { // project.toml and the 7 wells
-		t.Errorf("the project holds %d files after serving: %v", len(files), files)
+	if err != nil {
+		t.Fatal(err)
 	}
+	return b.String()
 }
 
 // TestRefreshIsIncremental: a change to one well file redraws that well

@@ -19,7 +19,7 @@ type Server struct {
 	dir string
 
 	mu       sync.Mutex
-	setting  *setting
+	settings *settings
 	wells    []*Well // in file order
 	problems []error // project-level problems: listing, settings
 	version  uint64  // bumped on every change the page shows
@@ -46,30 +46,28 @@ func New(dir string) (*Server, error) {
 // setting changed; the others keep their sheets. It wakes the pages when
 // anything they show changed.
 func (s *Server) Refresh() {
-	st := loadSetting(s.dir)
-	var problems []error
-	problems = append(problems, st.problems...)
-	files, err := st.wellFiles()
-	if err != nil {
-		problems = append(problems, err)
-	}
+	st := loadSettings(s.dir)
+	problems := st.problems
 	s.mu.Lock()
 	prev := map[string]*Well{}
 	for _, w := range s.wells {
 		prev[w.Path] = w
 	}
 	s.mu.Unlock()
-	wells := make([]*Well, len(files))
+	var wells []*Well
 	redrawn := 0
-	for i, f := range files {
-		wells[i] = prepare(st, f, st.project.Key(f), prev[f])
-		if wells[i] != prev[f] {
-			redrawn++
+	if st.run != nil {
+		for _, in := range st.run.Inputs {
+			w := prepare(st, in, prev[in.Path])
+			if w != prev[in.Path] {
+				redrawn++
+			}
+			wells = append(wells, w)
 		}
 	}
 	s.mu.Lock()
 	changed := redrawn > 0 || len(wells) != len(s.wells) || errText(problems) != errText(s.problems)
-	s.setting, s.wells, s.problems = st, wells, problems
+	s.settings, s.wells, s.problems = st, wells, problems
 	if changed {
 		s.version++
 		for ch := range s.waiters {
@@ -106,8 +104,10 @@ func (s *Server) snapshot() snapshot {
 	s.mu.Lock()
 	defer s.mu.Unlock()
 	snap := snapshot{Dir: s.dir, Version: s.version, Wells: s.wells, Problems: s.problems, Aspect: "8.5 / 11"}
-	if pg := s.setting.page; pg.Width > 0 && pg.Height > 0 {
-		snap.Aspect = fmt.Sprintf("%g / %g", pg.Width, pg.Height)
+	if st := s.settings; st != nil && st.run != nil && len(st.run.Settings) > 0 {
+		if pg := st.run.Settings[0].Page; pg.Width > 0 && pg.Height > 0 {
+			snap.Aspect = fmt.Sprintf("%g / %g", pg.Width, pg.Height)
+		}
 	}
 	return snap
 }
@@ -230,7 +230,7 @@ func (s *Server) Serve(ctx context.Context, addr string, ready func(addr string)
 // and yields files.
 func (s *Server) watchDirs() []string {
 	s.mu.Lock()
-	st, wells := s.setting, s.wells
+	st, wells := s.settings, s.wells
 	s.mu.Unlock()
 	seen := map[string]bool{s.dir: true}
 	out := []string{s.dir}
@@ -243,15 +243,16 @@ func (s *Server) watchDirs() []string {
 	for _, w := range wells {
 		add(filepath.Dir(w.Path))
 	}
-	if st != nil && st.project != nil {
-		if p := st.project.Path(st.project.Wells); p != "" {
-			add(filepath.Clean(p))
-		}
-		if p := st.project.ProfilePath(); p != "" {
-			add(filepath.Dir(p))
-		}
-		if p := st.project.YieldsPath(); p != "" {
-			add(filepath.Dir(p))
+	if st != nil && st.run != nil {
+		for _, set := range st.run.Settings {
+			if p := set.Project; p != nil {
+				add(filepath.Clean(p.Path(p.Wells)))
+			}
+			for _, f := range []string{set.ProfileFile, set.YieldsFile} {
+				if f != "" {
+					add(filepath.Dir(f))
+				}
+			}
 		}
 	}
 	return out

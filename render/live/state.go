@@ -11,19 +11,13 @@ import (
 	"crypto/sha256"
 	"errors"
 	"fmt"
-	"io"
-	"os"
-	"path/filepath"
-	"sort"
 	"strings"
 
 	"github.com/tremie-dev/tremie/render/out"
-	"github.com/tremie-dev/tremie/render/sheet"
+	"github.com/tremie-dev/tremie/render/pipeline"
 	"github.com/tremie-dev/tremie/schema"
-	"github.com/tremie-dev/tremie/schema/project"
 	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
-	"github.com/tremie-dev/tremie/templates"
 )
 
 // Status is a well's standing on the page.
@@ -35,9 +29,6 @@ const (
 	Errors   Status = "errors" // an unwaived error finding, or the file could not be read
 	Planned  Status = "planned"
 )
-
-// maxWellBytes bounds what is read of one well file.
-const maxWellBytes = 8 << 20
 
 // Well is one well file as the page shows it.
 type Well struct {
@@ -52,125 +43,82 @@ type Well struct {
 	Version    string   // hash of what it was made from: changes when it is redrawn
 }
 
-// setting is what every well is judged and drawn with.
-type setting struct {
-	project  *project.Project
-	profile  *rules.Profile
-	page     sheet.Page
-	problems []error // project, profile, yields or page that could not be read
-	hash     [32]byte
+// settings reads the project through the pipeline: its wells, each with
+// the setting (profile, yields, page) it is judged with, a hash of each
+// setting's files, and what could not be read.
+type settings struct {
+	run      *pipeline.Run
+	hashes   map[*pipeline.Setting][32]byte
+	problems []error
 }
 
-// loadSetting reads the project file and what it names. A file that
-// cannot be read is a problem shown on the page; the defaults stand in.
-func loadSetting(dir string) *setting {
-	s := &setting{}
-	h := sha256.New()
-	p, err := project.Load(dir)
-	switch {
-	case errors.Is(err, project.ErrNoProject):
-		p = project.Default(dir)
-	case err != nil:
-		s.problems = append(s.problems, err)
-		p = project.Default(dir)
-	}
-	s.project = p
-	if data, err := os.ReadFile(filepath.Join(dir, project.FileName)); err == nil {
-		h.Write(data)
-	}
-	h.Write([]byte{0})
-	var yields *quantity.Yields
-	if path := p.YieldsPath(); path != "" {
-		data, _ := os.ReadFile(path)
-		h.Write(data)
-		if yields, err = quantity.LoadYields(path); err != nil {
-			s.problems = append(s.problems, err)
-			yields = nil
-		}
-	}
-	h.Write([]byte{0})
-	if path := p.ProfilePath(); path != "" {
-		data, _ := os.ReadFile(path)
-		h.Write(data)
-		if s.profile, err = rules.LoadProfile(path); err != nil {
-			s.problems = append(s.problems, err)
-			s.profile = nil
-		}
-	}
-	if yields != nil {
-		if s.profile == nil {
-			s.profile = &rules.Profile{Name: "default thresholds"}
-		}
-		s.profile.Yields = yields
-	}
-	name := p.Page
-	if name == "" {
-		name = "letter"
-	}
-	fmt.Fprintf(h, "\x00%s\x00%v", name, p.Landscape)
-	if t, err := templates.Load(name, p.Landscape); err != nil {
-		s.problems = append(s.problems, fmt.Errorf("%s: page %q: %w", p.File, name, err))
-	} else {
-		s.page = sheet.FromTemplate(t)
-	}
-	h.Sum(s.hash[:0])
-	return s
-}
-
-// wellFiles lists the project's well files.
-func (s *setting) wellFiles() ([]string, error) {
-	files, err := s.project.WellFiles()
+func loadSettings(dir string) *settings {
+	st := &settings{hashes: map[*pipeline.Setting][32]byte{}}
+	run, _, err := pipeline.ResolveProject(dir, pipeline.Options{Quiet: true})
 	if err != nil {
-		return nil, err
+		st.problems = append(st.problems, err)
+		return st
 	}
-	sort.Strings(files)
-	return files, nil
+	st.run = run
+	st.problems = append(st.problems, run.Problems...)
+	for _, s := range run.Settings {
+		h := sha256.New()
+		if s.Project != nil {
+			data, _ := schema.ReadInput(s.Project.File, schema.MaxTextFile)
+			h.Write(data)
+		}
+		for _, f := range []string{s.ProfileFile, s.YieldsFile} {
+			h.Write([]byte{0})
+			if f != "" {
+				data, _ := schema.ReadInput(f, schema.MaxTextFile)
+				h.Write(data)
+			}
+		}
+		fmt.Fprintf(h, "\x00%s\x00%v", s.PageName, s.Landscape)
+		var sum [32]byte
+		h.Sum(sum[:0])
+		st.hashes[s] = sum
+	}
+	return st
 }
 
-// prepare reads, checks, quantifies and draws one well. prev is the last
-// result for the same file: returned as it is when neither the file nor
-// the setting changed.
-func prepare(s *setting, path, key string, prev *Well) *Well {
-	data, err := readBounded(path)
+// prepare checks, quantifies and draws one well through the pipeline.
+// prev is the last result for the same file: returned as it is when
+// neither the file nor its setting changed.
+func prepare(st *settings, in pipeline.Input, prev *Well) *Well {
+	data, rerr := schema.ReadInput(in.Path, schema.MaxTextFile)
+	sum := st.hashes[in.Setting]
 	h := sha256.New()
-	h.Write(s.hash[:])
+	h.Write(sum[:])
 	h.Write(data)
 	version := fmt.Sprintf("%x", h.Sum(nil))[:16]
-	if prev != nil && prev.Version == version && err == nil {
+	if prev != nil && prev.Version == version && rerr == nil {
 		return prev
 	}
-	w := &Well{Key: key, Path: path, Version: version, Status: Errors}
-	if err != nil {
-		w.Problems = schema.ErrorList{schema.ReadError(key, "", err)}
+	w := &Well{Key: in.Key, Path: in.Path, Version: version, Status: Errors}
+	pw := pipeline.Prepare(in, pipeline.AllRules)
+	if pw.Err != nil {
+		w.Problems = problemsOf(pw.Err, in)
 		return w
 	}
-	well, err := schema.Load(key, data) // positions name the file as the project does
-	if err != nil {
-		var el schema.ErrorList
-		if !errors.As(err, &el) {
-			el = schema.ErrorList{{File: key, Msg: err.Error()}}
+	w.ID = pw.ID
+	w.Quantities = pw.Quantities
+	w.Findings = pw.Findings
+	for i := range w.Findings {
+		if w.Findings[i].File == in.Path {
+			w.Findings[i].File = in.Key // name the file as the project does
 		}
-		w.Problems = el
-		return w
 	}
-	w.ID = well.ID
-	project.Apply(s.project, well)
-	var yields *quantity.Yields
-	if s.profile != nil {
-		yields = s.profile.Yields
-	}
-	w.Quantities = quantity.Compute(well, yields)
-	w.Findings = rules.Check(well, s.profile)
-	w.Status = statusOf(well, w.Findings)
-	doc, err := sheet.Layout(well, sheet.Inputs{Findings: w.Findings, Quantities: w.Quantities, TitleBlock: s.project.TitleBlock, Logo: logo(s.project), Profile: s.profile}, sheet.Options{Page: s.page})
+	w.Status = statusOf(pw.Well, w.Findings)
+	doc, err := pw.Layout(pipeline.LayoutOptions{})
 	if err != nil {
-		w.Problems = schema.ErrorList{{File: path, Msg: "cannot draw: " + err.Error()}}
+		w.Problems = problemsOf(err, in)
 		return w
 	}
 	for i := range doc.Pages {
 		svg, err := out.SVG(doc, i)
 		if err != nil {
-			w.Problems = schema.ErrorList{{File: path, Msg: "cannot draw: " + err.Error()}}
+			w.Problems = problemsOf(err, in)
 			return w
 		}
 		w.Sheets = append(w.Sheets, svg)
@@ -178,11 +126,27 @@ func prepare(s *setting, path, key string, prev *Well) *Well {
 	return w
 }
 
-func logo(p *project.Project) []byte {
-	if p == nil || p.Logo == nil {
-		return nil
+// problemsOf is an error as the page lists it, each position naming the
+// file relative to the project.
+func problemsOf(err error, in pipeline.Input) schema.ErrorList {
+	var el schema.ErrorList
+	var one *schema.Error
+	switch {
+	case errors.As(err, &el):
+	case errors.As(err, &one):
+		el = schema.ErrorList{one}
+	default:
+		el = schema.ErrorList{{File: in.Path, Msg: err.Error()}}
 	}
-	return p.Logo.Data
+	out := make(schema.ErrorList, len(el))
+	for i, e := range el {
+		c := *e
+		if c.File == in.Path {
+			c.File = in.Key
+		}
+		out[i] = &c
+	}
+	return out
 }
 
 func statusOf(w *schema.Well, findings []rules.Finding) Status {
@@ -198,20 +162,4 @@ func statusOf(w *schema.Well, findings []rules.Finding) Status {
 		}
 	}
 	return Clean
-}
-
-func readBounded(path string) ([]byte, error) {
-	f, err := os.Open(path)
-	if err != nil {
-		return nil, err
-	}
-	defer f.Close()
-	data, err := io.ReadAll(io.LimitReader(f, maxWellBytes+1))
-	if err != nil {
-		return nil, err
-	}
-	if len(data) > maxWellBytes {
-		return nil, fmt.Errorf("a well file is at most %d bytes", maxWellBytes)
-	}
-	return data, nil
 }
