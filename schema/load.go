@@ -1,11 +1,8 @@
 package schema
 
 import (
-	"errors"
 	"fmt"
 	"strings"
-
-	"github.com/BurntSushi/toml"
 
 	"github.com/tremie-dev/tremie/schema/crs"
 )
@@ -28,35 +25,19 @@ func Load(name string, data []byte) (*Well, error) {
 		return nil, ErrorList{e}
 	}
 	src := string(data)
-	var tree any
-	if _, err := toml.Decode(src, &tree); err != nil {
-		var pe toml.ParseError
-		if errors.As(err, &pe) {
-			return nil, ErrorList{{File: name, Line: pe.Position.Line, Col: pe.Position.Col, Msg: "TOML syntax: " + pe.Message}}
-		}
-		return nil, ErrorList{{File: name, Msg: "TOML: " + err.Error()}}
-	}
-	raw, _ := tree.(map[string]any)
-	if raw == nil {
-		raw = map[string]any{}
+	raw, err := decode(name, src)
+	if err != nil {
+		return nil, err
 	}
 	r := &reader{file: name, src: src, heads: scanHeaderLines(src)}
 	w := r.well(r.root(raw))
 	if len(r.errs) > 0 {
-		sortErrors(r.errs)
+		r.errs.Sort()
 		return nil, r.errs
 	}
 	w.keys = &keyIndex{src: src, lines: r.lines}
 	w.Placeholders = findPlaceholders(src)
 	return w, nil
-}
-
-func sortErrors(l ErrorList) {
-	for i := 1; i < len(l); i++ {
-		for j := i; j > 0 && (l[j].Line < l[j-1].Line || (l[j].Line == l[j-1].Line && l[j].Col < l[j-1].Col)); j-- {
-			l[j], l[j-1] = l[j-1], l[j]
-		}
-	}
 }
 
 // at is the position of a part of the well: the line of its table header,
@@ -429,6 +410,7 @@ func (r *reader) fill(t *table, w *Well) Fill {
 	if f.GrainMin > 0 && f.GrainMax > 0 && f.GrainMin > f.GrainMax {
 		r.errAt(t.keyPath("grain_max"), "grain_max is smaller than grain_min")
 	}
+	r.gradingCurve(t, &f)
 	f.Method = Placement(t.oneOf("method"))
 	f.Within = t.str("within")
 	if f.Within != "" {
@@ -582,4 +564,25 @@ func (r *reader) surface(t *table, u Units) Surface {
 		r.errAt(t.path, "a flush-mount completion has no [surface.protective]")
 	}
 	return s
+}
+
+// gradingCurve reads d10, d30 and d60 (mm, always), which must not
+// decrease: by definition 10 % of the mass is finer than d10, 30 % than
+// d30, 60 % than d60.
+func (r *reader) gradingCurve(t *table, f *Fill) {
+	prev, prevKey := Diameter(0), ""
+	for _, k := range []struct {
+		name string
+		to   *Diameter
+	}{{"d10", &f.D10}, {"d30", &f.D30}, {"d60", &f.D60}} {
+		v, ok := t.positive(k.name)
+		if !ok {
+			continue
+		}
+		*k.to = Diameter(v)
+		if *k.to < prev {
+			r.errAt(t.keyPath(k.name), "%s = %v mm is smaller than %s = %v mm: a grading curve does not fall", k.name, v, prevKey, float64(prev))
+		}
+		prev, prevKey = *k.to, k.name
+	}
 }

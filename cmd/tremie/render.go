@@ -16,6 +16,7 @@ import (
 	"github.com/tremie-dev/tremie/render/features"
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/sheet"
+	"github.com/tremie-dev/tremie/render/wallimage"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/project"
 	"github.com/tremie-dev/tremie/schema/quantity"
@@ -101,6 +102,11 @@ func renderLoaded(path string, w *schema.Well, opts renderOptions) (renderResult
 		return res, nil
 	}
 	in := sheet.Inputs{Findings: res.Findings, Quantities: quantity.Compute(w, opts.yields), Profile: opts.profile}
+	images, errs := wallimage.LoadAll(path, w)
+	if len(errs) > 0 {
+		return res, inputErr(errors.Join(errs...))
+	}
+	in.WallImages = images
 	name, landscape := opts.pageName, opts.landscape
 	if prj != nil {
 		in.TitleBlock = prj.TitleBlock
@@ -370,9 +376,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	}
 	if profile != "" {
 		if opts.profile, err = rules.LoadProfile(profile); err != nil {
-			for _, e := range schemaErrors(profile, err) {
-				fmt.Fprintln(stderr, e)
-			}
+			fmt.Fprintln(stderr, schema.Errors(profile, err))
 			return exitInput
 		}
 	}
@@ -422,9 +426,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 			if errors.As(r.Err, &re) {
 				c = re.code
 			}
-			for _, e := range schemaErrors(f, r.Err) {
-				fmt.Fprintln(stderr, e)
-			}
+			fmt.Fprintln(stderr, schema.Errors(f, r.Err))
 			code = worse(code, c)
 			continue
 		}
