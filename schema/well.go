@@ -341,9 +341,9 @@ type Fill struct {
 	// Size is the nominal size of bentonite chips or pellets (3/8 in,
 	// say); 0 if not given.
 	Size Diameter
-	Tags    []Tag
-	Pos     Pos
-	Path    string
+	Tags []Tag
+	Pos  Pos
+	Path string
 }
 
 // Recorded reports whether an amount placed was recorded.
