@@ -56,6 +56,7 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 		return code
 	}
 	tb := table.Build(pw.entries, pw.proj.Units)
+	tb.Profile = pw.prof
 	var buf bytes.Buffer
 	switch *format {
 	case "csv":
