@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"errors"
 	"flag"
 	"fmt"
 	"github.com/tremie-dev/tremie/cmd/internal/batch"
@@ -138,20 +139,30 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	if profile == "" {
 		profile = in.profile
 	}
+	// A profile or yields file that does not load stops the check; its
+	// errors go to stderr and, under --format json, into the report.
+	unreadable := func(file string, err error) int {
+		list := schema.Errors(file, err)
+		fmt.Fprintln(stderr, list)
+		if opts.format == "json" {
+			if werr := writeCheckJSON(stdout, []fileResult{{Path: file, Findings: []rules.Finding{}, Errors: list}}); werr != nil {
+				fmt.Fprintf(stderr, "tremie check: writing the report: %v\n", werr)
+			}
+		}
+		return exitInput
+	}
 	var prof *rules.Profile
 	if profile != "" {
 		p, err := rules.LoadProfile(profile)
 		if err != nil {
-			fmt.Fprintln(stderr, schema.Errors(profile, err))
-			return exitInput
+			return unreadable(profile, err)
 		}
 		prof = p
 	}
 	if in.yields != "" {
 		y, err := quantity.LoadYields(in.yields)
 		if err != nil {
-			fmt.Fprintln(stderr, err)
-			return exitInput
+			return unreadable(in.yields, err)
 		}
 		prof = withYields(prof, y)
 	}
@@ -179,6 +190,13 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	}
 	var err error
 	if opts.format == "json" {
+		// a project file that did not load is reported with the wells
+		for _, e := range findErrs {
+			var list schema.ErrorList
+			if errors.As(e, &list) && len(list) > 0 {
+				results = append(results, fileResult{Path: list[0].File, Findings: []rules.Finding{}, Errors: list})
+			}
+		}
 		err = writeCheckJSON(stdout, results)
 	} else {
 		err = writeCheckText(stdout, results, prof)
