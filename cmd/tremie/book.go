@@ -1,6 +1,7 @@
 package main
 
 import (
+	"errors"
 	"flag"
 	"fmt"
 	"io"
@@ -12,6 +13,7 @@ import (
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/sheet"
 	"github.com/tremie-dev/tremie/render/table"
+	"github.com/tremie-dev/tremie/render/wallimage"
 	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
 )
@@ -64,6 +66,13 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 		}
 		bw.ID = e.Well.ID
 		in := sheet.Inputs{Findings: e.Findings, Quantities: quantity.Compute(e.Well, pw.yields), TitleBlock: p.TitleBlock, Logo: logo, Profile: pw.prof}
+		images, errs := wallimage.LoadAll(e.File, e.Well)
+		if len(errs) > 0 {
+			err := errors.Join(errs...)
+			bw.Problem = err.Error()
+			return bw, batch.Done, err
+		}
+		in.WallImages = images
 		doc, err := sheet.Layout(e.Well, in, sheet.Options{Page: page, Date: date.Format("2006-01-02T15:04:05Z07:00")})
 		if err != nil {
 			bw.Problem = err.Error()

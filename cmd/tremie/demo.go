@@ -92,7 +92,7 @@ func writeDemo(dir string) error {
 		if d.IsDir() {
 			return os.MkdirAll(target, 0o755)
 		}
-		if filepath.Ext(path) != ".toml" {
+		if ext := filepath.Ext(path); ext != ".toml" && ext != ".png" {
 			return nil
 		}
 		data, err := demo.FS.ReadFile(path)

@@ -85,7 +85,7 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 			return exitOutput
 		}
 	}
-	fmt.Fprintf(stdout, "tremie import: %d well files written to %s\n", len(files), filepath.Clean(*outDir))
+	fmt.Fprintf(stdout, "tremie import: %d %s written to %s\n", len(files), plural(len(files), "well file", "well files"), filepath.Clean(*outDir))
 	return exitOK
 }
 

@@ -66,6 +66,12 @@ func TestDemoRoundTripsThroughImportLayout(t *testing.T) {
 	}
 	prj, _ := os.ReadFile(filepath.Join(a, "project.toml"))
 	os.WriteFile(filepath.Join(b, "project.toml"), prj, 0o644)
+	// The wall images a well names travel beside it, not in the workbook.
+	images, _ := filepath.Glob(filepath.Join(a, "wells", "*.png"))
+	for _, im := range images {
+		data, _ := os.ReadFile(im)
+		os.WriteFile(filepath.Join(b, "wells", filepath.Base(im)), data, 0o644)
+	}
 	fa, fb := findingsOf(t, a), findingsOf(t, b)
 	if len(fa) == 0 || strings.Join(fa, "\n") != strings.Join(fb, "\n") {
 		t.Errorf("findings differ:\n%s\n---\n%s", strings.Join(fa, "\n"), strings.Join(fb, "\n"))

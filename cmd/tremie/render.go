@@ -16,6 +16,7 @@ import (
 	"github.com/tremie-dev/tremie/render/features"
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/sheet"
+	"github.com/tremie-dev/tremie/render/wallimage"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/project"
 	"github.com/tremie-dev/tremie/schema/quantity"
@@ -101,6 +102,11 @@ func renderLoaded(path string, w *schema.Well, opts renderOptions) (renderResult
 		return res, nil
 	}
 	in := sheet.Inputs{Findings: res.Findings, Quantities: quantity.Compute(w, opts.yields), Profile: opts.profile}
+	images, errs := wallimage.LoadAll(path, w)
+	if len(errs) > 0 {
+		return res, inputErr(errors.Join(errs...))
+	}
+	in.WallImages = images
 	name, landscape := opts.pageName, opts.landscape
 	if prj != nil {
 		in.TitleBlock = prj.TitleBlock

@@ -7,6 +7,7 @@ import (
 
 	"github.com/tremie-dev/tremie/cmd/internal/batch"
 	"github.com/tremie-dev/tremie/cmd/internal/incremental"
+	"github.com/tremie-dev/tremie/render/wallimage"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/project"
 	"github.com/tremie-dev/tremie/schema/rules"
@@ -37,6 +38,10 @@ func loadAll(files []string) []loadedWell {
 		w, err := schema.Load(f, data)
 		if err != nil {
 			return loadedWell{data: data, err: inputErr(err)}, batch.Done, nil
+		}
+		// A changed wall image changes the sheet: it joins the cache key.
+		if fp := wallimage.Fingerprint(f, w); len(fp) > 0 {
+			data = append(data[:len(data):len(data)], fp...)
 		}
 		return loadedWell{data: data, well: w}, batch.Done, nil
 	})

@@ -57,6 +57,7 @@ func demoWells(t testing.TB) map[string]demoWell {
 		}
 		project.Apply(prj, w)
 		in := Inputs{Findings: rules.Check(w, nil), Quantities: quantity.Compute(w, nil), TitleBlock: prj.TitleBlock}
+		in.WallImages = demoWallImages(t, w)
 		out[path.Base(n)] = demoWell{w: w, in: in, opt: Options{Page: FromTemplate(tpl)}}
 	}
 	return out
