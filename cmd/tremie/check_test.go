@@ -65,8 +65,9 @@ bottom = 36.0
 uscs = "SP"
 `
 
-// unsealedWell has grout straight on the pack (line 31: the grout's bottom).
-var unsealedWell = strings.Replace(sealedWell, `[[fill]]
+// unsealedWell (BAD-1) has grout straight on the pack (line 31: the
+// grout's bottom).
+var unsealedWell = strings.Replace(strings.Replace(sealedWell, `id = "OK-1"`, `id = "BAD-1"`, 1), `[[fill]]
 top = 20.0
 bottom = 23.0
 material = "bentonite-chips"
@@ -203,7 +204,7 @@ func TestCheckJSON(t *testing.T) {
 		t.Fatalf("%d results, want 3", len(got))
 	}
 	bad, ok, syn := got[0], got[1], got[2]
-	if bad.Well != "OK-1" || !bad.Readable || len(bad.Findings) == 0 {
+	if bad.Well != "BAD-1" || !bad.Readable || len(bad.Findings) == 0 {
 		t.Errorf("flawed file: %+v", bad)
 	}
 	found := false
@@ -275,5 +276,20 @@ func TestRulesListing(t *testing.T) {
 	}
 	if code, _, _ := runTremie("rules", "NO-SUCH-RULE"); code != exitUsage {
 		t.Errorf("unknown rule: exit %d, want %d", code, exitUsage)
+	}
+	// Per purpose: a public-supply well gets DWR 74-81's 50 ft seal and
+	// TM 5-813-1's 10 ft of pack above the screen, and is not judged by the
+	// monitoring-well pack maximum.
+	code, out, _ = runTremie("rules", "--purpose", "public-supply", "SANITARY-SEAL-DEPTH", "PACK-ABOVE-SCREEN", "PACK-ABOVE-MAX")
+	if code != exitOK {
+		t.Fatalf("--purpose: exit %d", code)
+	}
+	for _, want := range []string{"param depth = 50 ft (wells in ft)", "param min = 10 ft (wells in ft)", "does not apply to public-supply wells"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("--purpose public-supply lacks %q:\n%s", want, out)
+		}
+	}
+	if code, _, _ := runTremie("rules", "--purpose", "orchard"); code != exitUsage {
+		t.Errorf("unknown purpose: exit %d, want %d", code, exitUsage)
 	}
 }

@@ -3,6 +3,7 @@ package main
 import (
 	"bytes"
 	"encoding/json"
+	"github.com/tremie-dev/tremie/cmd/tremie/demo"
 	"os"
 	"path/filepath"
 	"regexp"
@@ -54,7 +55,7 @@ var sourceLine = regexp.MustCompile(`\(line \d+\)`)
 func TestDemoRoundTripsThroughImportLayout(t *testing.T) {
 	root := t.TempDir()
 	a, b := filepath.Join(root, "a"), filepath.Join(root, "b")
-	if err := writeDemo(a); err != nil {
+	if err := demo.Write(a, false); err != nil {
 		t.Fatal(err)
 	}
 	book := filepath.Join(root, "demo.xlsx")
