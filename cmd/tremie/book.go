@@ -28,8 +28,9 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 	fset := flag.NewFlagSet("book", flag.ContinueOnError)
 	fset.SetOutput(stderr)
 	outFile := fset.String("o", "", "output PDF (default OUTPUT/book.pdf)")
+	issue := fset.Bool("issue", false, "bind the issued set: no rule IDs or file lines; refused while any well has unwaived error findings")
 	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie book PROJECT_DIR [-o FILE.pdf]")
+		fmt.Fprintln(stderr, "usage: tremie book PROJECT_DIR [-o FILE.pdf] [--issue]")
 		fset.PrintDefaults()
 	}
 	rest, err := parseInterleaved(fset, args)
@@ -52,6 +53,20 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 		return exitInput
 	}
 	date := pw.date()
+	issued := *issue || p.Issue
+	if issued {
+		refused := 0
+		for _, e := range pw.entries {
+			if e.Well != nil && rules.Blocking(e.Findings) {
+				fmt.Fprintf(stderr, "tremie book: %s (%s): not issued: unwaived error findings; resolve or waive them (run tremie check %s)\n", e.File, e.Well.ID, e.File)
+				refused++
+			}
+		}
+		if refused > 0 {
+			fmt.Fprintf(stderr, "tremie book: no issued set while %d %s unwaived errors; tremie book without --issue binds the draft\n", refused, plural(refused, "well has", "wells have"))
+			return exitFindings
+		}
+	}
 	var logo []byte
 	if p.Logo != nil {
 		logo = p.Logo.Data
@@ -64,7 +79,7 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 		}
 		bw.ID = e.Well.ID
 		in := sheet.Inputs{Findings: e.Findings, Quantities: quantity.Compute(e.Well, pw.yields), TitleBlock: p.TitleBlock, Logo: logo, Profile: pw.prof}
-		doc, err := sheet.Layout(e.Well, in, sheet.Options{Page: page, Date: date.Format("2006-01-02T15:04:05Z07:00")})
+		doc, err := sheet.Layout(e.Well, in, sheet.Options{Page: page, Date: date.Format("2006-01-02T15:04:05Z07:00"), Issue: issued})
 		if err != nil {
 			bw.Problem = err.Error()
 			return bw, batch.Done, err
@@ -105,7 +120,7 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 	}
 	pdf, err := book.Build(book.Input{
 		Project: p, Date: date, Table: table.Build(pw.entries, p.Units), Wells: wells, Sections: secs,
-		PageWidth: w, PageHeight: h, Caution: rules.Caution(pw.prof),
+		PageWidth: w, PageHeight: h, Caution: rules.Caution(pw.prof), Issue: issued,
 	})
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie book: %v\n", err)

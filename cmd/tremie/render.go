@@ -43,6 +43,7 @@ type renderOptions struct {
 	pageSet   bool
 	scale     *sheet.Scale
 	strict    bool
+	issue     bool // --issue: the issued set (a project may ask for it too)
 	profile   *rules.Profile
 	yields    *quantity.Yields
 	dpi       float64
@@ -64,6 +65,7 @@ type renderResult struct {
 	Findings []rules.Finding
 	Blocking bool // unwaived error findings: drawn, marked not final
 	Refused  bool // --strict and Blocking: nothing written
+	Issue    bool // drawn (or refused) as the issued set
 }
 
 // renderError carries the exit code a failure maps to.
@@ -96,7 +98,8 @@ func renderLoaded(path string, w *schema.Well, opts renderOptions) (renderResult
 	res.WellID = w.ID
 	res.Findings = rules.Check(w, opts.profile)
 	res.Blocking = rules.Blocking(res.Findings)
-	if res.Blocking && opts.strict {
+	res.Issue = opts.issue || prj != nil && prj.Issue
+	if res.Blocking && (opts.strict || res.Issue) {
 		res.Refused = true
 		return res, nil
 	}
@@ -115,7 +118,7 @@ func renderLoaded(path string, w *schema.Well, opts renderOptions) (renderResult
 	if err != nil {
 		return res, inputErr(fmt.Errorf("%s: %w", path, err))
 	}
-	doc, err := sheet.Layout(w, in, sheet.Options{Page: page, Scale: opts.scale, Date: opts.date})
+	doc, err := sheet.Layout(w, in, sheet.Options{Page: page, Scale: opts.scale, Date: opts.date, Issue: res.Issue})
 	if err != nil {
 		return res, inputErr(fmt.Errorf("%s: %w", path, err))
 	}
@@ -294,12 +297,13 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	landscape := fset.Bool("landscape", false, "turn the page to landscape")
 	scaleText := fset.String("scale", "", "vertical scale, such as 1in=5ft or 1:50, or fit for one sheet (default: automatic)")
 	strict := fset.Bool("strict", false, "refuse to draw a well with unwaived error findings")
+	issue := fset.Bool("issue", false, "draw the issued set: no rule IDs or file lines, a revision block and a seal space; wells with unwaived error findings are refused")
 	profilePath := fset.String("profile", "", "rule profile TOML (default: the project's, else the defaults)")
 	yieldsPath := fset.String("yields", "", "TOML file with a [yields] table overriding the default yields")
 	dpi := fset.Float64("dpi", 150, "PNG resolution in dots per inch")
 	force := fset.Bool("force", false, "redraw every well, even those unchanged since the last run")
 	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie render FILE|DIR... -o OUTDIR [--format svg,pdf,png] [--page letter|tabloid|a4|a3] [--landscape] [--scale S] [--strict] [--force] [--profile FILE] [--yields FILE] [--dpi N]")
+		fmt.Fprintln(stderr, "usage: tremie render FILE|DIR... -o OUTDIR [--format svg,pdf,png] [--page letter|tabloid|a4|a3] [--landscape] [--scale S|fit] [--strict] [--issue] [--force] [--profile FILE] [--yields FILE] [--dpi N]")
 		fset.PrintDefaults()
 	}
 	paths, err := parseInterleaved(fset, args)
@@ -311,7 +315,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 		fset.Usage()
 		return exitUsage
 	}
-	opts := renderOptions{outDir: *outDir, strict: *strict, dpi: *dpi, projects: map[string]*project.Project{}}
+	opts := renderOptions{outDir: *outDir, strict: *strict, issue: *issue, dpi: *dpi, projects: map[string]*project.Project{}}
 	if !(opts.dpi >= 10 && opts.dpi <= 1200) {
 		fmt.Fprintf(stderr, "tremie render: --dpi %g is outside 10–1200\n", *dpi)
 		return exitUsage
@@ -434,6 +438,9 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 			code = worse(code, exitFindings)
 		}
 		switch {
+		case res.Refused && res.Issue:
+			fmt.Fprintf(stderr, "tremie render: %s (%s): not issued: unwaived error findings; resolve or waive them (run tremie check %s)\n", f, res.WellID, f)
+			code = worse(code, exitFindings)
 		case res.Refused:
 			fmt.Fprintf(stderr, "tremie render: %s (%s): refused under --strict: unwaived error findings (run tremie check %s)\n", f, res.WellID, f)
 			code = worse(code, exitFindings)

@@ -152,6 +152,7 @@ func renderShared(prj *project.Project, opts renderOptions, profileBytes, yields
 		fmt.Sprintf("dpi=%g", opts.dpi),
 		"scale=" + scale,
 		fmt.Sprintf("strict=%v", opts.strict),
+		fmt.Sprintf("issue=%v", opts.issue),
 		"date=" + opts.date,
 		"yields=" + string(yieldsBytes),
 	}

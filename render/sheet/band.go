@@ -240,6 +240,9 @@ func (l *layout) noteBlocks(width float64) []noteBlock {
 		return 1
 	}
 	sort.SliceStable(fs, func(i, j int) bool { return rank(fs[i]) < rank(fs[j]) })
+	if l.opt.Issue {
+		return append(out, l.issuedFindings(fs, width)...)
+	}
 	t := rules.Count(fs)
 	ne, nw, nv := t.Errors, t.Warnings, t.Waived
 	c := ink
@@ -267,6 +270,55 @@ func (l *layout) noteBlocks(width float64) []noteBlock {
 			col = grey
 		}
 		body(s, draw.Regular, col)
+	}
+	return out
+}
+
+// issuedFindings are the findings as an issued set states them: the
+// accepted departures (waivers) and the review remarks (warnings) in plain
+// words, with no rule IDs or file lines. An issued set has no errors.
+func (l *layout) issuedFindings(fs []rules.Finding, width float64) []noteBlock {
+	var out []noteBlock
+	add := func(s string, font draw.FontStyle, heading bool) {
+		var b textBlock
+		b.add(s, font, sizeSmall, width)
+		out = append(out, noteBlock{heading: heading, block: b, color: ink})
+	}
+	sentence := func(s string) string {
+		s = upperFirst(strings.TrimSpace(s))
+		if !strings.HasSuffix(s, ".") {
+			s += "."
+		}
+		return s
+	}
+	var waived, remarks []rules.Finding
+	for _, f := range fs {
+		switch {
+		case f.Waived:
+			waived = append(waived, f)
+		case !f.Blocking():
+			remarks = append(remarks, f)
+		}
+	}
+	if len(waived) > 0 {
+		add("ACCEPTED DEPARTURES FROM PRACTICE", draw.Bold, true)
+		for _, f := range waived {
+			s := sentence(f.Message)
+			if w := f.Waiver; w != nil {
+				s += " Accepted by " + w.ApprovedBy
+				if w.Date != "" {
+					s += " on " + w.Date
+				}
+				s += ": " + sentence(w.Reason)
+			}
+			add(s, draw.Regular, false)
+		}
+	}
+	if len(remarks) > 0 {
+		add("REVIEW REMARKS", draw.Bold, true)
+		for _, f := range remarks {
+			add(sentence(f.Message), draw.Regular, false)
+		}
 	}
 	return out
 }

@@ -50,8 +50,17 @@ type fileData struct {
 		Job        string `toml:"job" doc:"Title block: job number." example:"26-044"`
 		Revision   string `toml:"revision" doc:"Title block: revision." example:"0"`
 		Issued     any    `toml:"issued" type:"date" doc:"Title block: issue date of the set of sheets, a TOML date without quotes." example:"2026-06-15"`
+		Issue      bool   `toml:"issue" doc:"Draw the issued set (as render --issue): no rule IDs or file lines, wells with unwaived errors refused, a revision block and a seal space." example:"false"`
 	} `toml:"project" required:"true" doc:"The project's settings and title-block fields."`
-	Section []sectionData `toml:"section" doc:"A cross-section that tremie section draws and tremie book binds."`
+	Section  []sectionData  `toml:"section" doc:"A cross-section that tremie section draws and tremie book binds."`
+	Revision []revisionData `toml:"revision" doc:"A row of the revision block of an issued set, oldest first."`
+}
+
+type revisionData struct {
+	Rev         string `toml:"rev" required:"true" doc:"Revision letter or number." example:"A"`
+	Date        any    `toml:"date" type:"date" required:"true" doc:"Date of the revision, a TOML date without quotes." example:"2026-06-15"`
+	Description string `toml:"description" required:"true" doc:"What the revision is." example:"Issued for permit"`
+	By          string `toml:"by" doc:"Who made it (initials)." example:"RV"`
 }
 
 // File is the key table of a project file, made from fileData.
@@ -171,6 +180,17 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 			return nil, bad("project.issued", "issued must be a date such as 2026-03-14, without quotes")
 		}
 		p.TitleBlock.Issued = schema.Date{Year: t.Year(), Month: t.Month(), Day: t.Day()}
+	}
+	p.Issue = pr.Issue
+	for i, r := range fd.Revision {
+		t, ok := r.Date.(time.Time)
+		if name, _ := t.Zone(); !ok || name != "date-local" {
+			return nil, bad(fmt.Sprintf("revision[%d].date", i), "date must be a date such as 2026-03-14, without quotes")
+		}
+		if strings.TrimSpace(r.Rev) == "" || strings.TrimSpace(r.Description) == "" {
+			return nil, bad(fmt.Sprintf("revision[%d]", i), "a revision needs rev and description")
+		}
+		p.TitleBlock.Revisions = append(p.TitleBlock.Revisions, Revision{Rev: r.Rev, Date: schema.Date{Year: t.Year(), Month: t.Month(), Day: t.Day()}, Description: r.Description, By: r.By})
 	}
 	if p.Sections, err = sections(file, lines, fd.Section, p.Units); err != nil {
 		return nil, err
