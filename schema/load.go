@@ -1,12 +1,8 @@
 package schema
 
 import (
-	"errors"
 	"fmt"
-	"os"
 	"strings"
-
-	"github.com/BurntSushi/toml"
 
 	"github.com/tremie-dev/tremie/schema/crs"
 )
@@ -14,7 +10,7 @@ import (
 // LoadFile reads and checks one well file. A rejected file yields an
 // ErrorList naming every problem with its line.
 func LoadFile(path string) (*Well, error) {
-	data, err := os.ReadFile(path)
+	data, err := ReadInput(path, MaxTextFile)
 	if err != nil {
 		return nil, ErrorList{ReadError(path, "", err)}
 	}
@@ -25,35 +21,23 @@ func LoadFile(path string) (*Well, error) {
 func Load(name string, data []byte) (*Well, error) {
 	// Decoding into a bare interface hands over the parser's own tree;
 	// a map[string]any target would be copied key by key.
-	src := string(data)
-	var tree any
-	if _, err := toml.Decode(src, &tree); err != nil {
-		var pe toml.ParseError
-		if errors.As(err, &pe) {
-			return nil, ErrorList{{File: name, Line: pe.Position.Line, Col: pe.Position.Col, Msg: "TOML syntax: " + pe.Message}}
-		}
-		return nil, ErrorList{{File: name, Msg: "TOML: " + err.Error()}}
+	if e := CheckNesting(name, data, MaxNesting); e != nil {
+		return nil, ErrorList{e}
 	}
-	raw, _ := tree.(map[string]any)
-	if raw == nil {
-		raw = map[string]any{}
+	src := string(data)
+	raw, err := decode(name, src)
+	if err != nil {
+		return nil, err
 	}
 	r := &reader{file: name, src: src, heads: scanHeaderLines(src)}
 	w := r.well(r.root(raw))
 	if len(r.errs) > 0 {
-		sortErrors(r.errs)
+		r.errs.Sort()
 		return nil, r.errs
 	}
 	w.keys = &keyIndex{src: src, lines: r.lines}
+	w.Placeholders = findPlaceholders(src)
 	return w, nil
-}
-
-func sortErrors(l ErrorList) {
-	for i := 1; i < len(l); i++ {
-		for j := i; j > 0 && (l[j].Line < l[j-1].Line || (l[j].Line == l[j-1].Line && l[j].Col < l[j-1].Col)); j-- {
-			l[j], l[j-1] = l[j-1], l[j]
-		}
-	}
 }
 
 // at is the position of a part of the well: the line of its table header,
@@ -452,6 +436,9 @@ func (r *reader) fill(t *table, w *Well) Fill {
 	}
 	if y, ok := t.positive("yield"); ok {
 		f.Yield = VolumeFrom(y, u.Volume)
+	}
+	if d, ok := t.positive("density"); ok {
+		f.Density = SlurryDensityFrom(d, u)
 	}
 	for _, tt := range t.list("tag") {
 		tag := Tag{Pos: r.at(tt.path), Path: tt.path}

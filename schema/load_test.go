@@ -6,6 +6,7 @@ import (
 	"os"
 	"path/filepath"
 	"regexp"
+	"sort"
 	"strconv"
 	"strings"
 	"testing"
@@ -58,34 +59,75 @@ func TestBadFilesNameTheirLine(t *testing.T) {
 
 func near(a, b, tol float64) bool { return math.Abs(a-b) <= tol }
 
+// ASTM D1785 (PVC Schedule 40 and 80), its table of dimensions in
+// millimetres: outside diameter min-max and minimum wall for Sch 40 and
+// Sch 80, NPS 1/2 to 8, as published (the metric values of the inch
+// table, to 0.01 mm). The table's inch values must give them back.
+var d1785mm = []struct {
+	size                   string
+	odMin, odMax, w40, w80 float64
+}{
+	{"1/2", 21.24, 21.44, 2.77, 3.73}, {"3/4", 26.57, 26.77, 2.87, 3.91}, {"1", 33.27, 33.53, 3.38, 4.55},
+	{"1-1/4", 42.03, 42.29, 3.56, 4.85}, {"1-1/2", 48.11, 48.41, 3.68, 5.08}, {"2", 60.17, 60.47, 3.91, 5.54},
+	{"2-1/2", 72.84, 73.20, 5.16, 7.01}, {"3", 88.70, 89.10, 5.49, 7.62}, {"4", 114.07, 114.53, 6.02, 8.56},
+	{"5", 141.05, 141.55, 6.55, 9.52}, {"6", 168.00, 168.56, 7.11, 10.97}, {"8", 218.70, 219.46, 8.18, 12.70},
+}
+
 func TestPipeDimensions(t *testing.T) {
-	cases := []struct {
-		size, sched  string
-		od, wall, id float64 // inches
-	}{
-		{"2", "40", 2.375, 0.154, 2.067}, // ASTM D1785 (from memory): 2-in Sch 40 OD 2.375, wall 0.154, ID 2.067
-		{"2", "80", 2.375, 0.218, 1.939}, // ASTM D1785 (from memory): 2-in Sch 80 wall 0.218
-		{"4", "40", 4.500, 0.237, 4.026}, // ASTM D1785 (from memory): 4-in Sch 40 OD 4.500, wall 0.237
-		{"6", "40", 6.625, 0.280, 6.065}, // ASTM D1785 (from memory): 6-in Sch 40 OD 6.625, wall 0.280
+	for _, c := range d1785mm {
+		for _, sc := range []struct {
+			sched string
+			wall  float64
+		}{{"40", c.w40}, {"80", c.w80}} {
+			p := Pipe{Material: "PVC", Size: c.size, Schedule: sc.sched}
+			if err := resolvePipe(&p, 0, 0, false, false, Inches); err != nil {
+				t.Fatal(err)
+			}
+			// The average OD is the middle of the published range; the
+			// wall rounds to the published 0.01 mm.
+			if mid := (c.odMin + c.odMax) / 2; !near(float64(p.OD), mid, 0.011) {
+				t.Errorf("NPS %s: OD %.3f mm, ASTM D1785 %.2f-%.2f mm", c.size, float64(p.OD), c.odMin, c.odMax)
+			}
+			if !near(float64(p.Wall()), sc.wall, 0.0051) {
+				t.Errorf("NPS %s Sch %s: wall %.3f mm, ASTM D1785 %.2f mm", c.size, sc.sched, float64(p.Wall()), sc.wall)
+			}
+		}
 	}
-	for _, c := range cases {
-		p := Pipe{Size: c.size, Schedule: c.sched}
+	// NPS 10 and 12 (ASTM D1785 inch table, from memory): OD 10.750 and
+	// 12.750 in; Sch 40 walls 0.365 and 0.406 in; Sch 80 0.593 and 0.687 in.
+	// ASME B36.10M Table 1 gives steel Sch 80 walls of 0.594 and 0.688 in
+	// (and the same Sch 40 walls): steel pipe takes those.
+	for _, c := range []struct {
+		material, size, sched string
+		od, wall              float64
+	}{
+		{"PVC", "10", "40", 10.750, 0.365}, {"PVC", "12", "40", 12.750, 0.406},
+		{"PVC", "10", "80", 10.750, 0.593}, {"PVC", "12", "80", 12.750, 0.687},
+		{"carbon steel", "10", "40", 10.750, 0.365}, {"carbon steel", "12", "40", 12.750, 0.406},
+		{"carbon steel", "10", "80", 10.750, 0.594}, {"carbon steel", "12", "80", 12.750, 0.688},
+		{"304 stainless steel", "12", "80", 12.750, 0.688},
+		// ASME B36.10M Table 1: NPS 2, 4, 6, 8 steel Sch 40/80 (same as PVC).
+		{"carbon steel", "2", "40", 2.375, 0.154}, {"carbon steel", "4", "80", 4.500, 0.337},
+		{"carbon steel", "6", "40", 6.625, 0.280}, {"carbon steel", "8", "80", 8.625, 0.500},
+	} {
+		p := Pipe{Material: c.material, Size: c.size, Schedule: c.sched}
 		if err := resolvePipe(&p, 0, 0, false, false, Inches); err != nil {
 			t.Fatal(err)
 		}
-		if !near(p.OD.Inches(), c.od, 1e-9) || !near(p.Wall().Inches(), c.wall, 1e-9) || !near(p.ID.Inches(), c.id, 1e-9) {
-			t.Errorf("%s-in Sch %s: OD %.4f wall %.4f ID %.4f", c.size, c.sched, p.OD.Inches(), p.Wall().Inches(), p.ID.Inches())
+		if !near(p.OD.Inches(), c.od, 1e-9) || !near(p.Wall().Inches(), c.wall, 1e-9) {
+			t.Errorf("%s NPS %s Sch %s: OD %.4f wall %.4f in, want %.3f and %.3f", c.material, c.size, c.sched, p.OD.Inches(), p.Wall().Inches(), c.od, c.wall)
 		}
 	}
-	// SDR: wall = OD / SDR by definition of the standard dimension ratio
-	// (ASTM F480 / D2241 define SDR = average OD / minimum wall).
+	// SDR 21, 4-in (OD 4.500 in): ASTM D2241's table gives a minimum wall of
+	// 0.214 in (4.500 / 21 = 0.2143).
 	p := Pipe{Size: "4", SDR: 21}
 	if err := resolvePipe(&p, 0, 0, false, false, Inches); err != nil {
 		t.Fatal(err)
 	}
-	if !near(p.Wall().Inches(), 4.5/21, 1e-9) {
-		t.Errorf("SDR 21 wall %.4f", p.Wall().Inches())
+	if !near(p.Wall().Inches(), 0.214, 0.0005) {
+		t.Errorf("SDR 21 wall %.4f in, ASTM D2241 0.214", p.Wall().Inches())
 	}
+	// ISO 6708 pairs DN50 with NPS 2 (common practice).
 	if s, err := NominalSize("DN50"); err != nil || s != "2" {
 		t.Errorf("DN50 -> %q %v", s, err)
 	}
@@ -162,18 +204,49 @@ func TestExactConversions(t *testing.T) {
 	}
 }
 
+// ASTM E11 Table 1: the nominal openings of the numbered sieves, No. 4
+// (4.75 mm) to No. 635 (20 µm).
+var e11 = map[int]float64{
+	4: 4.75, 5: 4.00, 6: 3.35, 7: 2.80, 8: 2.36, 10: 2.00, 12: 1.70, 14: 1.40, 16: 1.18, 18: 1.00,
+	20: 0.850, 25: 0.710, 30: 0.600, 35: 0.500, 40: 0.425, 45: 0.355, 50: 0.300, 60: 0.250, 70: 0.212,
+	80: 0.180, 100: 0.150, 120: 0.125, 140: 0.106, 170: 0.090, 200: 0.075, 230: 0.063, 270: 0.053,
+	325: 0.045, 400: 0.038, 450: 0.032, 500: 0.025, 635: 0.020,
+}
+
 func TestGradation(t *testing.T) {
-	// ASTM E11 (from memory): No. 20 = 0.850 mm, No. 40 = 0.425 mm.
+	if len(sieveOpening) != len(e11) {
+		t.Errorf("the table holds %d sieves, ASTM E11 numbers %d", len(sieveOpening), len(e11))
+	}
+	numbers := make([]int, 0, len(e11))
+	for n, mm := range e11 {
+		numbers = append(numbers, n)
+		if got, ok := SieveOpening(n); !ok || float64(got) != mm {
+			t.Errorf("No. %d: %v mm, ASTM E11 %v mm", n, got, mm)
+		}
+	}
+	// ISO 565 R 40/3 (which E11's openings follow down to No. 450, 32 µm):
+	// each opening is about 2^(1/4) = 1.189 times the next finer; rounded
+	// openings stay within 3 %. No. 500 (25 µm) and No. 635 (20 µm) are
+	// R 10 sizes added below the series.
+	sort.Ints(numbers)
+	for i := 1; i < len(numbers) && numbers[i] <= 450; i++ {
+		r := e11[numbers[i-1]] / e11[numbers[i]]
+		if math.Abs(r/math.Pow(2, 0.25)-1) > 0.03 {
+			t.Errorf("No. %d / No. %d: ratio %.4f, not 2^(1/4)", numbers[i-1], numbers[i], r)
+		}
+	}
 	lo, hi, err := ParseGradation("20/40")
 	if err != nil || lo != 0.425 || hi != 0.850 {
 		t.Errorf("20/40 -> %v %v %v", lo, hi, err)
 	}
-	// ASTM E11 (from memory): No. 8 = 2.36 mm, No. 16 = 1.18 mm.
 	if lo, hi, err := ParseGradation("#8x#16"); err != nil || lo != 1.18 || hi != 2.36 {
 		t.Errorf("8x16 -> %v %v %v", lo, hi, err)
 	}
 	if _, _, err := ParseGradation("coarse"); err == nil {
 		t.Error("want an error for a non-range")
+	}
+	if _, _, err := ParseGradation("20/33"); err == nil {
+		t.Error("No. 33 is no E11 sieve")
 	}
 }
 

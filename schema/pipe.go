@@ -15,8 +15,9 @@ var nominalOD = map[string]float64{
 }
 
 // scheduleWall is the wall thickness in inches by schedule and nominal
-// size. Sch 40 and 80 from ASTM D1785 (PVC; same as steel Sch 40/80 for
-// these sizes), 5S and 10S from ASME B36.19M (stainless). From memory.
+// size. Sch 40 and 80 are the minimum walls of ASTM D1785 (PVC), which
+// equal the nominal walls of ASME B36.10M (steel) except 10 and 12 in Sch
+// 80 (steelWall); 5S and 10S from ASME B36.19M (stainless), from memory.
 var scheduleWall = map[string]map[string]float64{
 	"40": {"1/2": 0.109, "3/4": 0.113, "1": 0.133, "1-1/4": 0.140, "1-1/2": 0.145, "2": 0.154,
 		"2-1/2": 0.203, "3": 0.216, "4": 0.237, "5": 0.258, "6": 0.280, "8": 0.322, "10": 0.365, "12": 0.406},
@@ -26,6 +27,20 @@ var scheduleWall = map[string]map[string]float64{
 		"2-1/2": 0.083, "3": 0.083, "4": 0.083, "5": 0.109, "6": 0.109, "8": 0.109, "10": 0.134, "12": 0.156},
 	"10S": {"1/2": 0.083, "3/4": 0.083, "1": 0.109, "1-1/4": 0.109, "1-1/2": 0.109, "2": 0.109,
 		"2-1/2": 0.120, "3": 0.120, "4": 0.120, "5": 0.134, "6": 0.134, "8": 0.148, "10": 0.165, "12": 0.180},
+}
+
+// steelWall holds the ASME B36.10M walls where steel differs from ASTM
+// D1785: 10-in Sch 80 is 0.594 in (PVC 0.593), 12-in Sch 80 0.688 in (PVC
+// 0.687).
+var steelWall = map[string]map[string]float64{
+	"80": {"10": 0.594, "12": 0.688},
+}
+
+// isSteel reports whether a pipe material is steel or iron, whose
+// schedule walls follow ASME B36.10M rather than ASTM D1785.
+func isSteel(material string) bool {
+	m := strings.ToLower(material)
+	return strings.Contains(m, "steel") || strings.Contains(m, "iron")
 }
 
 // dnToNPS maps metric nominal diameters to nominal pipe sizes (ISO 6708
@@ -87,6 +102,9 @@ func resolvePipe(p *Pipe, od, id float64, hasOD, hasID bool, u DiameterUnit) err
 				w, ok := walls[nps]
 				if !ok {
 					return fmt.Errorf("no schedule %s dimensions for size %s", p.Schedule, p.Size)
+				}
+				if sw, ok := steelWall[strings.ToUpper(p.Schedule)][nps]; ok && isSteel(p.Material) {
+					w = sw
 				}
 				p.ID = p.OD - 2*DiameterFrom(w, Inches)
 			case p.SDR > 0:

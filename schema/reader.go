@@ -3,6 +3,7 @@ package schema
 import (
 	"fmt"
 	"math"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -28,9 +29,11 @@ func (r *reader) errAt(path string, format string, args ...any) {
 	r.record(path, false, format, args...)
 }
 
-// errAtKey records an error at the key itself, for unknown keys.
-func (r *reader) errAtKey(path string, format string, args ...any) {
+// errAtKey records an error at the key itself, for unknown keys, with a
+// hint on how the table is written.
+func (r *reader) errAtKey(path, hint string, format string, args ...any) {
 	r.record(path, true, format, args...)
+	r.errs[len(r.errs)-1].Hint = hint
 }
 
 func (r *reader) record(path string, atKey bool, format string, args ...any) {
@@ -38,12 +41,18 @@ func (r *reader) record(path string, atKey bool, format string, args ...any) {
 		r.pos = scanKeyPositions(r.src)
 	}
 	p, ok := r.pos[path]
+	if !ok {
+		p, ok = r.pos[path+"[0]"] // an array of tables: its first header
+	}
 	for q := path; !ok && q != ""; q = parentPath(q) {
 		p, ok = r.pos[q]
 	}
 	col := p.col
 	if atKey {
 		col = p.keyCol
+	}
+	if p.line == 0 {
+		p.line = 1 // a problem of the whole file
 	}
 	r.errs = append(r.errs, &Error{File: r.file, Line: p.line, Col: col, Key: path, Msg: fmt.Sprintf(format, args...)})
 }
@@ -96,7 +105,7 @@ func (t *table) get(k string, want ValueType) (any, bool) {
 	if t.r.onRead != nil {
 		t.r.onRead(t.path, k)
 	}
-	if ks := t.spec.Key(k); ks == nil || ks.Type != want {
+	if ks := t.spec.Key(k); t.spec != nil && (ks == nil || ks.Type != want) {
 		t.r.errAt(t.path, "internal: the loader reads %q in [%s] as %v, which schema/wellkeys.go does not declare", k, stripIndex(t.path), want)
 	}
 	v, ok := t.m[k]
@@ -120,7 +129,9 @@ func (t *table) bounded(k string, b Bound) {
 }
 
 // done reports every key of the table that its key table does not
-// declare (or, for a table without one, that no reader asked for).
+// declare (or, for a table without one, that no reader asked for), naming
+// the known key it is closest to and, as a hint, every key the table
+// takes.
 func (t *table) done() {
 	if t == nil {
 		return
@@ -131,13 +142,28 @@ func (t *table) done() {
 			unknown = append(unknown, k)
 		}
 	}
+	if len(unknown) == 0 {
+		return
+	}
 	sort.Strings(unknown)
+	var known []string
+	if t.spec != nil {
+		known = t.spec.Names()
+	} else {
+		known = append(known, t.used...)
+	}
+	sort.Strings(known)
+	known = slices.Compact(known)
+	where, hint := "at top level", "the file takes: "+strings.Join(known, ", ")
+	if t.path != "" {
+		where = "in [" + stripIndex(t.path) + "]"
+		hint = "[" + stripIndex(t.path) + "] takes: " + strings.Join(known, ", ")
+	}
+	if len(known) == 0 {
+		hint = ""
+	}
 	for _, k := range unknown {
-		where := "at top level"
-		if t.path != "" {
-			where = "in [" + stripIndex(t.path) + "]"
-		}
-		t.r.errAtKey(t.keyPath(k), "unknown key %q %s", k, where)
+		t.r.errAtKey(t.keyPath(k), hint, "unknown key %q %s%s", k, where, DidYouMean(k, known))
 	}
 }
 

@@ -6,12 +6,14 @@ import (
 	"strings"
 )
 
-// sieveOpening is the opening in mm of each US standard sieve number, from
-// ASTM E11 (values from memory).
+// sieveOpening is the nominal opening in mm of each numbered US standard
+// sieve, ASTM E11 Table 1 (No. 4 to No. 635; the openings follow the
+// ISO 565 R 40/3 series, each about 2^(1/4) times the next finer).
 var sieveOpening = map[int]float64{
-	4: 4.75, 6: 3.35, 8: 2.36, 10: 2.00, 12: 1.70, 14: 1.40, 16: 1.18, 18: 1.00,
+	4: 4.75, 5: 4.00, 6: 3.35, 7: 2.80, 8: 2.36, 10: 2.00, 12: 1.70, 14: 1.40, 16: 1.18, 18: 1.00,
 	20: 0.850, 25: 0.710, 30: 0.600, 35: 0.500, 40: 0.425, 45: 0.355, 50: 0.300,
 	60: 0.250, 70: 0.212, 80: 0.180, 100: 0.150, 120: 0.125, 140: 0.106, 170: 0.090, 200: 0.075,
+	230: 0.063, 270: 0.053, 325: 0.045, 400: 0.038, 450: 0.032, 500: 0.025, 635: 0.020,
 }
 
 // SieveOpening returns the opening of a US standard sieve in mm.

@@ -60,6 +60,9 @@ type Well struct {
 	WallImages  []WallImage
 	Features    []Feature // as written
 
+	// Placeholders are the starter values still marked "# FILL".
+	Placeholders []Placeholder
+
 	// keys locates key paths in the file text; see Line and HasKey.
 	keys *keyIndex
 }
@@ -329,9 +332,12 @@ type Fill struct {
 	Placed  Volume // a placed volume, 0 if given as bags or not recorded
 	// Yield overrides the material's default yield per bag; 0 = default.
 	Yield Volume
-	Tags  []Tag
-	Pos   Pos
-	Path  string
+	// Density is the slurry's density measured with a mud balance, in
+	// kg/m3; 0 if not recorded.
+	Density float64
+	Tags    []Tag
+	Pos     Pos
+	Path    string
 }
 
 // Recorded reports whether an amount placed was recorded.
@@ -641,4 +647,38 @@ func (s String) Label() string {
 		return s.Name
 	}
 	return "main"
+}
+
+// LatestLevel is the latest static water level (a reading of no stated
+// kind counts as static), or the latest of any kind when none is static.
+func (w *Well) LatestLevel() (WaterLevel, bool) {
+	var best WaterLevel
+	found, static := false, false
+	for _, l := range w.WaterLevels {
+		isStatic := l.Kind == Static || l.Kind == ""
+		switch {
+		case !found, isStatic && !static, isStatic == static && l.Measured.After(best.Measured):
+			best, found, static = l, true, isStatic
+		}
+	}
+	return best, found
+}
+
+// SlurryDensityFrom converts a mud-balance reading as written, lb/gal in
+// a file in feet and kg/L in one in metres, to kg/m3 (1 lb/gal =
+// 0.45359237 kg / 3.785411784 L, NIST Handbook 44).
+func SlurryDensityFrom(v float64, u Units) float64 {
+	if u.Imperial() {
+		return v * 0.45359237 / LitresPerUSGallon * 1000
+	}
+	return v * 1000
+}
+
+// SlurryDensityIn is a density in kg/m3 as the file writes it: lb/gal or
+// kg/L, with that unit's name.
+func SlurryDensityIn(kgPerM3 float64, u Units) (float64, string) {
+	if u.Imperial() {
+		return kgPerM3 / (0.45359237 / LitresPerUSGallon * 1000), "lb/gal"
+	}
+	return kgPerM3 / 1000, "kg/L"
 }

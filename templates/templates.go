@@ -7,16 +7,14 @@
 package templates
 
 import (
-	"bytes"
 	"embed"
-	"errors"
 	"fmt"
 	"math"
 	"sort"
 	"strconv"
 	"strings"
 
-	"github.com/BurntSushi/toml"
+	"github.com/tremie-dev/tremie/schema"
 )
 
 //go:embed *.toml
@@ -117,115 +115,140 @@ func Load(name string, landscape bool) (*Template, error) {
 	return Parse(key, data, landscape)
 }
 
-// file is a template as written.
-type file struct {
-	Title      string  `toml:"title"`
-	Width      length  `toml:"width"`
-	Height     length  `toml:"height"`
-	Margin     length  `toml:"margin"`
-	TitleBlock length  `toml:"title_block"`
-	Legend     legend  `toml:"legend"`
-	Columns    Columns `toml:"columns"`
-	Landscape  struct {
-		TitleBlock length   `toml:"title_block"`
-		Legend     *legend  `toml:"legend"`
-		Columns    *Columns `toml:"columns"`
-	} `toml:"landscape"`
-}
-
-type legend struct {
-	Side string `toml:"side"`
-	Size length `toml:"size"`
-}
-
 // Parse reads a template written in the format README.md describes;
-// name is used in messages and as the template's Name.
+// name is used in messages and as the template's Name. It reads strictly
+// (schema.Doc): every problem is reported, with name.toml:line:col, in one
+// schema.ErrorList.
 func Parse(name string, data []byte, landscape bool) (*Template, error) {
-	var f file
-	md, err := toml.NewDecoder(bytes.NewReader(data)).Decode(&f)
+	doc, err := schema.ParseDoc(name+".toml", data, nil)
 	if err != nil {
-		var pe toml.ParseError
-		if errors.As(err, &pe) {
-			return nil, fmt.Errorf("%s.toml:%d: %s", name, pe.Position.Line, pe.Message)
+		return nil, err
+	}
+	root := doc.Root()
+	t := &Template{Name: name, Title: root.Str("title"), Landscape: landscape}
+	t.Width = readLength(doc, root, "width")
+	t.Height = readLength(doc, root, "height")
+	t.Margin = readLength(doc, root, "margin")
+	t.TitleBlock = readLength(doc, root, "title_block")
+	t.Legend = readLegend(doc, root.Sub("legend"))
+	t.Columns = readColumns(root.Sub("columns"))
+	where := map[string]string{"title_block": "title_block", "legend": "legend", "columns": "columns"}
+	if lt := root.Sub("landscape"); lt != nil {
+		tb := readLength(doc, lt, "title_block")
+		legend, columns := lt.Sub("legend"), lt.Sub("columns")
+		if landscape {
+			if lt.Has("title_block") {
+				t.TitleBlock, where["title_block"] = tb, "landscape.title_block"
+			}
+			if legend != nil {
+				t.Legend, where["legend"] = readLegend(doc, legend), "landscape.legend"
+			}
+			if columns != nil {
+				t.Columns, where["columns"] = readColumns(columns), "landscape.columns"
+			}
+		} else {
+			readLegend(doc, legend)
+			readColumns(columns)
 		}
-		return nil, fmt.Errorf("%s.toml: %w", name, err)
+		lt.Done()
 	}
-	if und := md.Undecoded(); len(und) > 0 {
-		return nil, fmt.Errorf("%s.toml: unknown key %q", name, und[0].String())
-	}
-	t := &Template{
-		Name: name, Title: f.Title, Landscape: landscape,
-		Width: f.Width.pt, Height: f.Height.pt, Margin: f.Margin.pt, TitleBlock: f.TitleBlock.pt,
-		Legend:  Legend{Side: f.Legend.Side, Size: f.Legend.Size.pt},
-		Columns: f.Columns,
+	root.Done()
+	if err := doc.Err(); err != nil {
+		return nil, err
 	}
 	if landscape {
 		t.Width, t.Height = math.Max(t.Width, t.Height), math.Min(t.Width, t.Height)
-		if f.Landscape.TitleBlock.set {
-			t.TitleBlock = f.Landscape.TitleBlock.pt
-		}
-		if l := f.Landscape.Legend; l != nil {
-			t.Legend = Legend{Side: l.Side, Size: l.Size.pt}
-		}
-		if c := f.Landscape.Columns; c != nil {
-			t.Columns = *c
-		}
 	}
-	if err := t.check(); err != nil {
-		return nil, fmt.Errorf("%s.toml: %w", name, err)
+	t.check(doc, where)
+	if err := doc.Err(); err != nil {
+		return nil, err
 	}
 	return t, nil
 }
 
-func (t *Template) check() error {
+func readLegend(doc *schema.Doc, t *schema.Table) Legend {
+	if t == nil {
+		return Legend{}
+	}
+	l := Legend{Side: t.Str("side"), Size: readLength(doc, t, "size")}
+	t.Done()
+	return l
+}
+
+func readColumns(t *schema.Table) Columns {
+	if t == nil {
+		return Columns{}
+	}
+	num := func(k string) float64 { v, _ := t.Num(k); return v }
+	c := Columns{Depth: num("depth"), Elevation: num("elevation"), Lithology: num("lithology"), USCS: num("uscs"),
+		Description: num("description"), Well: num("well"), Callouts: num("callouts")}
+	t.Done()
+	return c
+}
+
+// check records what makes the template unusable at the key that sets it;
+// where names the table each of title_block, legend and columns came from.
+func (t *Template) check(doc *schema.Doc, where map[string]string) {
 	switch {
 	case t.Title == "":
-		return errors.New("title is missing")
+		doc.Errorf("", "title is missing")
 	case !(t.Width > 0 && t.Height > 0):
-		return errors.New("width and height must be given and positive")
+		doc.Errorf("width", "width and height must be given and positive")
 	case t.Margin < 0 || 2*t.Margin >= math.Min(t.Width, t.Height):
-		return fmt.Errorf("margin %.1f pt leaves no room on a %.0f × %.0f pt page", t.Margin, t.Width, t.Height)
+		doc.Errorf("margin", "margin %.1f pt leaves no room on a %.0f × %.0f pt page", t.Margin, t.Width, t.Height)
 	case t.Legend.Side != "bottom" && t.Legend.Side != "right":
-		return fmt.Errorf("legend side %q: use \"bottom\" or \"right\"", t.Legend.Side)
+		doc.Errorf(where["legend"]+".side", "legend side %q: use \"bottom\" or \"right\"", t.Legend.Side)
 	}
-	_, _, w, h := t.Body()
-	if w <= 0 || h <= 0 || t.TitleBlock < 0 || t.Legend.Size < 0 {
-		return errors.New("title block and legend leave no room for the body")
+	if _, _, w, h := t.Body(); w <= 0 || h <= 0 || t.TitleBlock < 0 || t.Legend.Size < 0 {
+		doc.Errorf(where["title_block"], "title block and legend leave no room for the body")
 	}
 	c := t.Columns
 	for _, v := range []float64{c.Depth, c.Elevation, c.Lithology, c.USCS, c.Description, c.Well, c.Callouts} {
 		if !(v >= 0) {
-			return fmt.Errorf("column fraction %g is negative", v)
+			doc.Errorf(where["columns"], "column fraction %g is negative", v)
 		}
 	}
 	if s := c.Sum(); math.Abs(s-1) > 1e-6 {
-		return fmt.Errorf("column fractions sum to %g, not 1", s)
+		doc.Errorf(where["columns"], "column fractions sum to %g, not 1", s)
 	}
-	return nil
 }
 
-// length is a TOML string such as "8.5in", "210mm", "2.5cm" or "24pt",
-// held in points.
-type length struct {
-	pt  float64
-	set bool
+// readLength reads a length key in points; an error is recorded at it.
+func readLength(doc *schema.Doc, t *schema.Table, k string) float64 {
+	s := t.Str(k)
+	if s == "" {
+		return 0
+	}
+	pt, err := parseLength(s)
+	if err != nil {
+		doc.Errorf(joinPath(t.Path(), k), "%s: %v", k, err)
+	}
+	return pt
+}
+
+func joinPath(table, k string) string {
+	if table == "" {
+		return k
+	}
+	return table + "." + k
 }
 
 // Points per unit: 72 per inch by the PostScript and PDF definition of
 // the point; 25.4 mm to the inch exactly (international inch, 1959).
 var perUnit = map[string]float64{"in": 72, "mm": 72 / 25.4, "cm": 720 / 25.4, "pt": 1}
 
-func (l *length) UnmarshalText(b []byte) error {
-	s := strings.TrimSpace(string(b))
+// parseLength reads a length such as "8.5in", "210mm", "2.5cm" or "24pt"
+// in points.
+func parseLength(s string) (float64, error) {
+	s = strings.TrimSpace(s)
 	for unit, k := range perUnit {
 		if num, ok := strings.CutSuffix(s, unit); ok {
 			v, err := strconv.ParseFloat(strings.TrimSpace(num), 64)
 			if err != nil || math.IsNaN(v) || math.IsInf(v, 0) || v < 0 {
-				return fmt.Errorf("length %q: want a non-negative number and a unit (in, mm, cm, pt)", s)
+				return 0, fmt.Errorf("length %q: want a non-negative number and a unit (in, mm, cm, pt)", s)
 			}
-			l.pt, l.set = v*k, true
-			return nil
+			return v * k, nil
 		}
 	}
-	return fmt.Errorf("length %q: give a unit (in, mm, cm, pt)", s)
+	return 0, fmt.Errorf("length %q: give a unit (in, mm, cm, pt)", s)
 }

@@ -1,6 +1,8 @@
 package templates
 
 import (
+	"github.com/tremie-dev/tremie/schema"
+
 	"math"
 	"strings"
 	"testing"
@@ -157,5 +159,25 @@ well = 0.5
 	}
 	if _, err := Parse("bad", []byte(base+"[[[\n"), false); err == nil || !strings.Contains(err.Error(), "bad.toml:12") {
 		t.Errorf("syntax error without its line: %v", err)
+	}
+}
+
+// A template with several mistakes reports each, with file:line:col, and
+// "did you mean" for a slip of the keyboard.
+func TestParseReportsEveryError(t *testing.T) {
+	src := "title = \"x\"\nwidht = \"8.5in\"\nheight = \"11in\"\nmargin = \"0.4in\"\n[legend]\nside = \"bottom\"\nsize = \"1 furlong\"\n[columns]\nwell = 1.0\n"
+	_, err := Parse("bad", []byte(src), false)
+	list := schema.Errors("", err)
+	want := []string{
+		`bad.toml:2:1: unknown key "widht" at top level (did you mean "width"?)`,
+		`bad.toml:7:8: size: length "1 furlong": give a unit (in, mm, cm, pt)`,
+	}
+	if len(list) != len(want) {
+		t.Fatalf("%d errors, want %d:\n%v", len(list), len(want), err)
+	}
+	for i, e := range list {
+		if e.Error() != want[i] {
+			t.Errorf("error %d:\n got %s\nwant %s", i, e, want[i])
+		}
 	}
 }

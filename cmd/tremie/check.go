@@ -2,7 +2,6 @@ package main
 
 import (
 	"encoding/json"
-	"errors"
 	"flag"
 	"fmt"
 	"github.com/tremie-dev/tremie/cmd/internal/batch"
@@ -48,6 +47,7 @@ type jsonError struct {
 	Col     int    `json:"col,omitempty"`
 	Key     string `json:"key,omitempty"`
 	Message string `json:"message"`
+	Hint    string `json:"hint,omitempty"`
 }
 
 // Unreadable reports whether the file could not be read or parsed.
@@ -59,7 +59,7 @@ func checkFile(path string, prof *rules.Profile) fileResult {
 	res := fileResult{Path: path, Findings: []rules.Finding{}}
 	w, err := schema.LoadFile(path)
 	if err != nil {
-		res.Errors = schemaErrors(path, err)
+		res.Errors = schema.Errors(path, err)
 		return res
 	}
 	res.WellID = w.ID
@@ -68,19 +68,6 @@ func checkFile(path string, prof *rules.Profile) fileResult {
 		res.Findings = []rules.Finding{}
 	}
 	return res
-}
-
-// schemaErrors flattens a loader error into positioned errors.
-func schemaErrors(path string, err error) []*schema.Error {
-	var list schema.ErrorList
-	if errors.As(err, &list) && len(list) > 0 {
-		return list
-	}
-	var one *schema.Error
-	if errors.As(err, &one) {
-		return []*schema.Error{one}
-	}
-	return []*schema.Error{{File: path, Msg: err.Error()}}
 }
 
 // checkOptions are the parsed command line of tremie check.
@@ -155,9 +142,7 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	if profile != "" {
 		p, err := rules.LoadProfile(profile)
 		if err != nil {
-			for _, e := range schemaErrors(profile, err) {
-				fmt.Fprintln(stderr, e)
-			}
+			fmt.Fprintln(stderr, schema.Errors(profile, err))
 			return exitInput
 		}
 		prof = p
@@ -188,8 +173,8 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 		}
 	}
 	for _, r := range results {
-		for _, e := range r.Errors {
-			fmt.Fprintln(stderr, e)
+		if len(r.Errors) > 0 {
+			fmt.Fprintln(stderr, schema.ErrorList(r.Errors))
 		}
 	}
 	var err error
@@ -263,7 +248,7 @@ func writeCheckJSON(w io.Writer, results []fileResult) error {
 	for i, r := range results {
 		out[i] = jsonResult{fileResult: r, Readable: !r.Unreadable()}
 		for _, e := range r.Errors {
-			out[i].Problems = append(out[i].Problems, jsonError{Line: e.Line, Col: e.Col, Key: e.Key, Message: e.Msg})
+			out[i].Problems = append(out[i].Problems, jsonError{Line: e.Line, Col: e.Col, Key: e.Key, Message: e.Msg, Hint: e.Hint})
 		}
 	}
 	data, err := json.MarshalIndent(out, "", "  ")

@@ -36,6 +36,7 @@ type wellQuantities struct {
 	File     string
 	Report   *quantity.Report
 	Findings []rules.Finding
+	Volumes  []quantity.WellVolume // water standing in each string, for purging
 }
 
 func runQuantities(args []string, stdout, stderr io.Writer) int {
@@ -45,6 +46,7 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 	contingency := fset.Float64("contingency", quantity.DefaultContingency, "percentage added to each volume before it is rounded up to bags to order (default from "+quantity.DefaultContingencySource+")")
 	yieldsFile := fset.String("yields", "", "TOML file with a [yields] table overriding the default yields")
 	profileFile := fset.String("profile", "", "rule profile TOML setting the reconciliation thresholds")
+	porosity := fset.Float64("pack-porosity", 0, "porosity (0 to 1) of the saturated filter pack, to add its pore water to the well volume; 0 leaves it out")
 	fset.Usage = func() {
 		fmt.Fprintln(stderr, "usage: tremie quantities [--format text|json|csv] [--contingency PCT] [--yields FILE] [--profile FILE] FILE|DIR...")
 		fset.PrintDefaults()
@@ -61,6 +63,10 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 	}
 	if *contingency < 0 || *contingency > 1000 || math.IsNaN(*contingency) {
 		fmt.Fprintf(stderr, "tremie quantities: --contingency %v is not a percentage between 0 and 1000\n", *contingency)
+		return exitUsage
+	}
+	if !(*porosity >= 0 && *porosity < 1) {
+		fmt.Fprintf(stderr, "tremie quantities: --pack-porosity %v is not a fraction between 0 and 1\n", *porosity)
 		return exitUsage
 	}
 	if len(paths) == 0 {
@@ -107,7 +113,8 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 		}
 		project.Apply(in.projects[f], w)
 		// the checks of placed amounts and tags, with the same yields
-		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields), Findings: rules.Run(w, rules.Select(rules.Reconciling), withYields(prof, yields))}
+		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields), Findings: rules.Run(w, rules.Select(rules.Reconciling), withYields(prof, yields)),
+			Volumes: quantity.WellVolumes(w, *porosity)}
 		for _, r := range wq.Report.Rows {
 			if r.Err != nil {
 				fmt.Fprintf(stderr, "%s:%d: %v\n", f, w.Line(r.Fill.Path), r.Err)
@@ -262,9 +269,47 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 	for _, note := range yieldNotes(r) {
 		fmt.Fprintf(w, "  yield: %s\n", note)
 	}
+	for _, row := range r.Rows {
+		if line := mixLine(row, u); line != "" {
+			fmt.Fprintf(w, "  grout mix, fill %s: %s\n", row.Label(), line)
+		}
+	}
+	for _, v := range wq.Volumes {
+		fmt.Fprintf(w, "  well volume, %s: %s\n", v.String, wellVolumeLine(v, u))
+	}
 	for _, fd := range wq.Findings {
 		fmt.Fprintf(w, "  %s %s (line %d): %s\n", fd.Label(), fd.Rule, fd.Line, fd.Message)
 	}
+}
+
+// mixLine is a grout row's water per bag and expected density, with the
+// mud-balance reading when one is recorded: "5.2 gal water per 94-lb
+// sack, expected 15.56 lb/gal; measured 15.2 lb/gal (-2.3 %)".
+func mixLine(row quantity.Row, u schema.Units) string {
+	d, ok := row.Yield.Density()
+	if !ok || !row.HasYield || row.Fill.Yield > 0 {
+		return ""
+	}
+	want, unit := schema.SlurryDensityIn(d, u)
+	water := quantity.Number(row.Yield.Water.In(schema.USGallons)) + " gal"
+	if !u.Imperial() {
+		water = quantity.Number(row.Yield.Water.In(schema.Litres)) + " L"
+	}
+	s := fmt.Sprintf("%s water per %s, expected %.2f %s", water, quantity.FormatBag(row.Yield.BagMass, u), want, unit)
+	if row.Fill.Density > 0 {
+		got, _ := schema.SlurryDensityIn(row.Fill.Density, u)
+		s += fmt.Sprintf("; measured %s %s (%+.1f %%)", schema.TrimFloat(got, 2), unit, (row.Fill.Density/d-1)*100)
+	}
+	return s
+}
+
+// wellVolumeLine is one string's well and purge volumes.
+func wellVolumeLine(v quantity.WellVolume, u schema.Units) string {
+	s := fmt.Sprintf("static level %s to the bottom at %s: %s of water in the well", u.FormatDepth(v.Level), u.FormatDepth(v.Bottom), quantity.FormatVolume(v.Casing, u))
+	if v.Pack > 0 {
+		s += fmt.Sprintf(" + %s in the saturated pack (porosity %s)", quantity.FormatVolume(v.Pack, u), schema.TrimFloat(v.Porosity, 2))
+	}
+	return s + fmt.Sprintf("; purge %d well volumes = %s (USGS National Field Manual A4)", quantity.PurgeWellVolumes, quantity.FormatVolume(v.Purge(), u))
 }
 
 // yieldNotes lists each yield used in a well once, with its basis.
@@ -375,6 +420,30 @@ type jsonWell struct {
 	MassUnit    string     `json:"mass_unit"`
 	Fills       []jsonFill `json:"fills"`
 	Pipes       []jsonPipe `json:"pipes"`
+	// WellVolumes are in volume_unit, levels in depth_unit.
+	WellVolumes []jsonWellVolume `json:"well_volumes"`
+}
+
+type jsonWellVolume struct {
+	String     string   `json:"string"`
+	Level      float64  `json:"static_level"`
+	Bottom     float64  `json:"bottom"`
+	Casing     float64  `json:"casing_volume"`
+	Pack       *float64 `json:"pack_pore_volume,omitempty"`
+	Porosity   *float64 `json:"pack_porosity,omitempty"`
+	WellVolume float64  `json:"well_volume"`
+	Purge      float64  `json:"purge_volume"`
+	PurgeTimes int      `json:"purge_well_volumes"`
+}
+
+// jsonMix is a grout's mix per bag: water in water_unit (gal, or L for a
+// well in metres) and densities in density_unit (lb/gal or kg/L).
+type jsonMix struct {
+	Water       float64  `json:"water_per_bag"`
+	WaterUnit   string   `json:"water_unit"`
+	Expected    float64  `json:"expected_density"`
+	Measured    *float64 `json:"measured_density,omitempty"`
+	DensityUnit string   `json:"density_unit"`
 }
 
 type jsonFill struct {
@@ -395,6 +464,7 @@ type jsonFill struct {
 	Placed      *float64  `json:"placed,omitempty"`
 	Ratio       *float64  `json:"ratio,omitempty"`
 	Tags        []jsonTag `json:"tags,omitempty"`
+	Mix         *jsonMix  `json:"mix,omitempty"`
 	Error       string    `json:"error,omitempty"`
 }
 
@@ -471,7 +541,15 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 		p, s := quantity.VolumeUnits(u)
 		mu := quantity.MassUnit(u)
 		jw := jsonWell{File: wq.File, Well: r.Well.ID, DepthUnit: string(u.Depth), VolumeUnit: string(p), VolumeUnit2: string(s), MassUnit: string(mu),
-			Fills: []jsonFill{}, Pipes: []jsonPipe{}}
+			Fills: []jsonFill{}, Pipes: []jsonPipe{}, WellVolumes: []jsonWellVolume{}}
+		for _, v := range wq.Volumes {
+			jv := jsonWellVolume{String: v.String, Level: r4(v.Level.In(u.Depth)), Bottom: r4(v.Bottom.In(u.Depth)), Casing: r4(v.Casing.In(p)),
+				WellVolume: r4(v.Well().In(p)), Purge: r4(v.Purge().In(p)), PurgeTimes: quantity.PurgeWellVolumes}
+			if v.Porosity > 0 {
+				jv.Pack, jv.Porosity = ptr(r4(v.Pack.In(p))), ptr(v.Porosity)
+			}
+			jw.WellVolumes = append(jw.WellVolumes, jv)
+		}
 		for _, row := range r.AllRows() {
 			f := row.Fill
 			jf := jsonFill{Index: row.Index, Path: f.Path, Material: string(f.Material), Within: f.Within,
@@ -499,6 +577,20 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 			}
 			if row.Ratio > 0 {
 				jf.Ratio = ptr(r4(row.Ratio))
+			}
+			if d, ok := row.Yield.Density(); ok && row.HasYield && f.Yield <= 0 {
+				m := &jsonMix{Water: r4(row.Yield.Water.In(schema.USGallons)), WaterUnit: "gal"}
+				if !u.Imperial() {
+					m.Water, m.WaterUnit = r4(row.Yield.Water.In(schema.Litres)), "L"
+				}
+				var want float64
+				want, m.DensityUnit = schema.SlurryDensityIn(d, u)
+				m.Expected = r4(want)
+				if f.Density > 0 {
+					got, _ := schema.SlurryDensityIn(f.Density, u)
+					m.Measured = ptr(r4(got))
+				}
+				jf.Mix = m
 			}
 			for _, tc := range row.Tags {
 				if tc.Err == nil {

@@ -380,3 +380,30 @@ func TestQuantitiesDemoSurface(t *testing.T) {
 		}
 	}
 }
+
+// Every demo well with a static level gets its well and purge volumes,
+// and every grout its water per sack and expected density. MW-1 by hand
+// (USGS NFM A4, V = 0.0408 H D^2): level 25.53 ft below ground (25.21 ft
+// below the MP, 0.32 ft below ground), bottom 35 ft, 2.067-in ID: 0.0408 x
+// 9.47 x 2.067^2 = 1.651 gal, purge 4.952 gal. MW-2's neat cement: 5.2
+// gal per sack, about 15.6 lb/gal expected, 15.3 measured. BR-1, open
+// below its 6-in Sch 40 casing (ID 6.065 in, ASTM A53 / B36.10): level
+// 39.8 ft, 0.2 ft in the casing (0.0408 x 6.065^2 x 0.2 = 0.300 gal) and
+// 110 ft of 6-in hole (0.0408 x 36 x 110 = 161.57 gal): 161.87 gal.
+func TestQuantitiesPurgeAndMix(t *testing.T) {
+	code, out, errs := runQ(filepath.Join("demo", "wells"))
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	for _, id := range []string{"BR-1", "MW-1", "MW-2", "MW-3", "NW-1S", "NW-1D", "PW-1"} {
+		if !strings.Contains(out, "well volume, "+id+": static level") {
+			t.Errorf("no well volume for %s", id)
+		}
+	}
+	for _, s := range []string{"1.651 gal) of water in the well; purge 3 well volumes = 0.662 ft3 (4.952 gal)",
+		"5.200 gal water per 94-lb bag, expected 15.5", "measured 15.3 lb/gal", "(161.87 gal) of water in the well"} {
+		if !strings.Contains(out, s) {
+			t.Errorf("output lacks %q", s)
+		}
+	}
+}

@@ -374,9 +374,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	}
 	if profile != "" {
 		if opts.profile, err = rules.LoadProfile(profile); err != nil {
-			for _, e := range schemaErrors(profile, err) {
-				fmt.Fprintln(stderr, e)
-			}
+			fmt.Fprintln(stderr, schema.Errors(profile, err))
 			return exitInput
 		}
 	}
@@ -426,9 +424,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 			if errors.As(r.Err, &re) {
 				c = re.code
 			}
-			for _, e := range schemaErrors(f, r.Err) {
-				fmt.Fprintln(stderr, e)
-			}
+			fmt.Fprintln(stderr, schema.Errors(f, r.Err))
 			code = worse(code, c)
 			continue
 		}

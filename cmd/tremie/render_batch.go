@@ -2,7 +2,6 @@ package main
 
 import (
 	"fmt"
-	"os"
 	"path/filepath"
 	"strings"
 
@@ -31,7 +30,7 @@ type loadedWell struct {
 // loadAll reads and parses every file in parallel.
 func loadAll(files []string) []loadedWell {
 	res, _ := batch.Run(files, batch.Options{}, func(_ int, f string) (loadedWell, batch.Outcome, error) {
-		data, err := os.ReadFile(f)
+		data, err := schema.ReadInput(f, schema.MaxTextFile)
 		if err != nil {
 			return loadedWell{err: inputErr(schema.ErrorList{schema.ReadError(f, "", err)})}, batch.Done, nil
 		}

@@ -145,9 +145,7 @@ func loadProjectWells(dir string, stderr io.Writer) (*projectWells, int) {
 	if path := p.ProfilePath(); path != "" {
 		prof, err := rules.LoadProfile(path)
 		if err != nil {
-			for _, e := range schemaErrors(path, err) {
-				fmt.Fprintln(stderr, e)
-			}
+			fmt.Fprintln(stderr, schema.Errors(path, err))
 			return nil, exitInput
 		}
 		pw.prof = prof
@@ -183,9 +181,7 @@ func loadProjectWells(dir string, stderr io.Writer) (*projectWells, int) {
 		e := r.Value
 		if r.Err != nil {
 			e = table.Entry{File: files[i], Err: r.Err} // a panic leaves no value
-			for _, se := range schemaErrors(files[i], r.Err) {
-				fmt.Fprintln(stderr, se)
-			}
+			fmt.Fprintln(stderr, schema.Errors(files[i], r.Err))
 			code = exitInput
 		} else if code == exitOK && rules.Blocking(e.Findings) {
 			code = exitFindings

@@ -199,3 +199,35 @@ func TestBookText(t *testing.T) {
 }
 
 func itoa(n int) string { return strconv.Itoa(n) }
+
+// TestBookTakesAnyUnicode: runes above U+FFFF (an emoji in the project
+// name, a musical symbol in a well ID) and runes the face lacks print as
+// the replacement character; fpdf used to panic on the first kind.
+func TestBookTakesAnyUnicode(t *testing.T) {
+	in, _ := demoInput(t)
+	in.Project.Name = "Coldwater 💧 Mill"
+	in.Project.Client = "Client \U0001D11E and \u0E01"
+	in.Wells[0].ID = "MW-\U0001F600"
+	pdf, err := Build(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	bin, err := exec.LookPath("pdftotext")
+	if err != nil {
+		t.Skip("pdftotext not installed")
+	}
+	path := filepath.Join(t.TempDir(), "book.pdf")
+	os.WriteFile(path, pdf, 0o644)
+	out, err := exec.Command(bin, "-l", "2", path, "-").Output()
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, want := range []string{"Coldwater \uFFFD Mill", "Client \uFFFD and", "MW-\uFFFD"} {
+		if !strings.Contains(string(out), want) {
+			t.Errorf("book text lacks %q:\n%s", want, out)
+		}
+	}
+	if printable("plain ±µ° Å") != "plain ±µ° Å" {
+		t.Error("printable changed text the face can print")
+	}
+}

@@ -36,7 +36,7 @@ func typesetFront(in Input, pl *plan) ([]byte, error) {
 	return buf.Bytes(), nil
 }
 
-func cover(f *fpdf.Fpdf, in Input) {
+func cover(f *doc, in Input) {
 	p := in.Project
 	tb := p.TitleBlock
 	f.AddPage()
@@ -107,7 +107,7 @@ func cover(f *fpdf.Fpdf, in Input) {
 	f.MultiCell(pw-48, 4.6, in.Caution, "", "L", false)
 }
 
-func contents(f *fpdf.Fpdf, in Input, pl *plan) {
+func contents(f *doc, in Input, pl *plan) {
 	type line struct {
 		text, note string
 		page       int

@@ -2,8 +2,6 @@ package book
 
 import (
 	"strings"
-
-	"github.com/go-pdf/fpdf"
 )
 
 // gridCol is one column of a typeset table; width is relative.
@@ -16,7 +14,7 @@ type gridCol struct {
 // grid typesets rows that wrap within their cells, breaking pages and
 // repeating the header on each.
 type grid struct {
-	f       *fpdf.Fpdf
+	f       *doc
 	cols    []gridCol
 	widths  []float64 // mm
 	size    float64   // font size, pt
@@ -27,7 +25,7 @@ type grid struct {
 	shade   bool
 }
 
-func newGrid(f *fpdf.Fpdf, heading string, cols []gridCol, size float64) *grid {
+func newGrid(f *doc, heading string, cols []gridCol, size float64) *grid {
 	pw, ph := f.GetPageSize()
 	l, _, r, b := f.GetMargins()
 	g := &grid{f: f, cols: cols, size: size, lineH: size * 0.3528 * 1.25, heading: heading, bottom: ph - b - 8}
@@ -38,7 +36,7 @@ func newGrid(f *fpdf.Fpdf, heading string, cols []gridCol, size float64) *grid {
 // fitWidths shares the text width among the columns by their relative
 // widths, but gives every column at least the width of the longest word of
 // its title, so that no header breaks inside a word ("Scree/n top").
-func fitWidths(f *fpdf.Fpdf, cols []gridCol, size, avail float64) []float64 {
+func fitWidths(f *doc, cols []gridCol, size, avail float64) []float64 {
 	f.SetFont(family, "B", size)
 	minW := make([]float64, len(cols))
 	total := 0.0

@@ -6,8 +6,6 @@ import (
 	"strconv"
 	"strings"
 
-	"github.com/go-pdf/fpdf"
-
 	"github.com/tremie-dev/tremie/render/table"
 )
 
@@ -128,7 +126,7 @@ func tally(in Input) string {
 }
 
 // footer numbers pages from first and names the project.
-func footer(f *fpdf.Fpdf, in Input, first int) {
+func footer(f *doc, in Input, first int) {
 	f.SetFooterFunc(func() {
 		_, h := f.GetPageSize()
 		f.SetXY(14, h-10)

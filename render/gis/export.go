@@ -65,7 +65,7 @@ func Build(in []Input, units schema.DepthUnit, projected *crs.CRS, dir string) *
 			x.Columns = append(x.Columns, c)
 		}
 	}
-	for i, w := range in {
+	for _, w := range in {
 		e := w.Entry
 		if e.Well == nil {
 			reason := "unreadable"
@@ -89,48 +89,21 @@ func Build(in []Input, units schema.DepthUnit, projected *crs.CRS, dir string) *
 			}
 			p.E, p.N = en[0], en[1]
 		}
-		for _, v := range pointViews(e, units, full.Units, full.Rows[i]) {
+		// The summary's rows of this well are its monitoring points: one,
+		// or one per string of a nested well.
+		for _, r := range table.Build([]table.Entry{e}, full.Units).Rows {
 			q := p
-			q.Name = v.name
-			if v.name != e.Well.ID {
-				q.ID = e.Well.ID + "/" + v.name
+			if r.String != "" {
+				q.Name, q.ID = r.String, e.Well.ID+"/"+r.String
 			}
-			q.Cells = x.cells(full, v.row)
+			q.Cells = x.cells(r)
 			x.Points = append(x.Points, q)
 		}
 	}
 	return x
 }
 
-type view struct {
-	name string
-	row  table.Row
-}
-
-// pointViews is one summary row per monitoring point: the well's own row,
-// or for a nested well one per string, each computed from the well with
-// only that string (its casing and screen; fills and status are the
-// well's).
-func pointViews(e table.Entry, units, tableUnits schema.DepthUnit, row table.Row) []view {
-	w := e.Well
-	if len(w.Strings) <= 1 {
-		name := w.ID
-		if len(w.Strings) == 1 && w.Strings[0].Name != "" && w.Strings[0].Name != "main" {
-			name = w.Strings[0].Name
-		}
-		return []view{{name, row}}
-	}
-	var out []view
-	for _, s := range w.Strings {
-		one := *w
-		one.Strings = []schema.String{s}
-		r := table.Build([]table.Entry{{File: e.File, Well: &one, Findings: e.Findings}}, tableUnits).Rows[0]
-		out = append(out, view{s.Label(), r})
-	}
-	return out
-}
-
-func (x *Export) cells(t *table.Table, r table.Row) []table.Cell {
+func (x *Export) cells(r table.Row) []table.Cell {
 	out := make([]table.Cell, len(x.Columns))
 	for i, c := range x.Columns {
 		out[i] = c.Value(r)

@@ -46,6 +46,12 @@ func (s Symbol) Paint(r draw.Rect) []draw.Item {
 	if !(r.W > 0 && r.H > 0) || math.IsInf(r.W, 0) || math.IsInf(r.H, 0) {
 		return nil
 	}
+	// Marks are laid cell by cell over r: bound r by the largest sheet, so
+	// that a fill drawn far past the page (an absurd diameter) costs no
+	// more than one that fills it.
+	if r = within(r, drawable); !(r.W > 0 && r.H > 0) {
+		return nil
+	}
 	if s.paint != nil {
 		return s.paint(r)
 	}
@@ -78,4 +84,20 @@ func (s Symbol) Swatch(r draw.Rect) []draw.Item {
 
 func frame(r draw.Rect) draw.Item {
 	return draw.Box{Rect: r, Style: draw.Style{Stroke: frameInk, StrokeWidth: 0.5}, Role: "swatch frame"}
+}
+
+// drawable holds every page tremie draws (the largest template, A3 or
+// Tabloid, is under 1,250 points a side) with room to spare; nothing
+// outside it can be seen.
+var drawable = draw.Rect{X: -1000, Y: -1000, W: 6000, H: 6000}
+
+// within is the part of r inside b; r itself, to the bit, when it lies
+// inside already.
+func within(r, b draw.Rect) draw.Rect {
+	if r.X >= b.X && r.Y >= b.Y && r.Right() <= b.Right() && r.Bottom() <= b.Bottom() {
+		return r
+	}
+	x0, y0 := math.Max(r.X, b.X), math.Max(r.Y, b.Y)
+	x1, y1 := math.Min(r.Right(), b.Right()), math.Min(r.Bottom(), b.Bottom())
+	return draw.Rect{X: x0, Y: y0, W: x1 - x0, H: y1 - y0}
 }

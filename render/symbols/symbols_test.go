@@ -503,3 +503,27 @@ func BenchmarkPaint(b *testing.B) {
 		}
 	}
 }
+
+// TestPaintBoundedByPage: a fill far wider than any sheet (a diameter
+// typed a million times too big) costs no more marks than one the size
+// of the drawable area.
+func TestPaintBoundedByPage(t *testing.T) {
+	for _, s := range All() {
+		huge := countMarks(s.Paint(draw.Rect{X: -1e9, Y: 0, W: 2e9, H: 50}))
+		page := countMarks(s.Paint(draw.Rect{X: drawable.X, Y: 0, W: drawable.W, H: 50}))
+		if huge != page {
+			t.Errorf("%s: %d marks for a 2e9-pt fill, %d for the drawable width", s.ID, huge, page)
+		}
+	}
+}
+
+func countMarks(items []draw.Item) int {
+	n := 0
+	pg := &draw.Page{Items: items}
+	pg.Walk(func(it draw.Item) {
+		if p, ok := it.(draw.Path); ok {
+			n += len(p.Subpaths) + len(p.Circles)
+		}
+	})
+	return n
+}

@@ -10,6 +10,7 @@ import (
 	"strings"
 
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
 )
 
@@ -143,16 +144,8 @@ func rowsOf(e Entry, u schema.DepthUnit) []Row {
 // packsOf lists the pack intervals that reach one string's screens.
 func packsOf(w *schema.Well, s schema.String, u schema.DepthUnit) string {
 	var parts []string
-	for _, f := range w.Fills {
-		if f.Material.Group() != schema.PackGroup {
-			continue
-		}
-		for _, sec := range s.Screens() {
-			if f.Overlaps(sec.Interval) {
-				parts = append(parts, interval(f.Top, f.Bottom, u))
-				break
-			}
-		}
+	for _, f := range quantity.PacksAround(w, s) {
+		parts = append(parts, interval(f.Top, f.Bottom, u))
 	}
 	return strings.Join(parts, "; ")
 }
@@ -215,7 +208,7 @@ func rowOf(e Entry, u schema.DepthUnit) Row {
 	r.CasingSize, r.CasingMaterial = casing(w, u)
 	screens(w, &r, u)
 	r.Pack, r.Seal, r.Grout = fills(w, u)
-	if wl, ok := latestLevel(w); ok {
+	if wl, ok := w.LatestLevel(); ok {
 		r.WaterDepth = in(wl.Depth)
 		r.WaterElev = elev(wl.Depth)
 		r.WaterKind = string(wl.Kind)
@@ -357,21 +350,6 @@ func fills(w *schema.Well, u schema.DepthUnit) (pack, seal, grout string) {
 
 func interval(top, bot schema.Length, u schema.DepthUnit) string {
 	return schema.TrimFloat(top.In(u), 2) + "–" + schema.TrimFloat(bot.In(u), 2)
-}
-
-// latestLevel is the latest static level, or the latest of any kind when
-// none is static.
-func latestLevel(w *schema.Well) (schema.WaterLevel, bool) {
-	var best schema.WaterLevel
-	found, static := false, false
-	for _, l := range w.WaterLevels {
-		isStatic := l.Kind == schema.Static || l.Kind == ""
-		switch {
-		case !found, isStatic && !static, isStatic == static && l.Measured.After(best.Measured):
-			best, found, static = l, true, isStatic
-		}
-	}
-	return best, found
 }
 
 func status(fs []rules.Finding) (s Status, errs, warns, waived int) {

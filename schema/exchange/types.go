@@ -1,5 +1,11 @@
 package exchange
 
+import (
+	"strings"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
 // valueType is the TOML type a key's cell is written as.
 type valueType int
 
@@ -15,39 +21,47 @@ const (
 	tPairs    // "a b; c d" for [[a, b], [c, d]]
 )
 
-var numberKeys = map[string]bool{}
-
-func init() {
-	for _, k := range []string{"top", "bottom", "depth", "diameter", "od", "id", "sdr", "slot", "slot_number",
-		"bags", "bag_mass", "volume", "yield", "after_bags", "grain_min", "grain_max", "total_depth", "easting",
-		"northing", "latitude", "longitude", "ground", "measuring_point", "height", "intake", "length", "width",
-		"thickness", "declination", "dip", "dip_direction", "aperture", "trace_high", "trace_low", "low_azimuth",
-		"left_azimuth", "inflow", "caliper"} {
-		numberKeys[k] = true
+// keySpec finds a key in the well file's key table (schema.WellFile):
+// table is a dotted path ("surface.pad", "string.section"). nil when the
+// format has no such key; the loader then names the cell.
+func keySpec(table, key string) *schema.KeySpec {
+	spec := schema.WellFile
+	if table != "" {
+		for _, part := range strings.Split(table, ".") {
+			k := spec.Key(part)
+			if k == nil || k.Table == nil {
+				return nil
+			}
+			spec = k.Table
+		}
 	}
+	return spec.Key(key)
 }
 
-// typeOf is the type of a key of a table ("well", "fill", "surface.pad").
+// typeOf is the type of a key of a table, from the key table; a key it
+// does not know is written as a string, and the loader reports it.
 func typeOf(table, key string) valueType {
-	switch {
-	case table == "units", table == "well" && key == "id", table == "measuring_point" && key != "height":
+	k := keySpec(table, key)
+	if k == nil {
 		return tString
-	case key == "bollards":
-		return tInteger
-	case key == "drive_shoe":
-		return tBool
-	case key == "drilled", key == "completed", key == "surveyed", key == "date":
-		return tDate
-	case key == "measured":
-		return tDateTime
-	case key == "notes":
-		return tStrings
-	case key == "centralizers":
-		return tNumbers
-	case key == "points":
-		return tPairs
-	case numberKeys[key]:
+	}
+	switch k.Type {
+	case schema.TypeNumber:
 		return tNumber
+	case schema.TypeInteger:
+		return tInteger
+	case schema.TypeBool:
+		return tBool
+	case schema.TypeDate:
+		return tDate
+	case schema.TypeDateTime:
+		return tDateTime
+	case schema.TypeStrings:
+		return tStrings
+	case schema.TypeNumbers:
+		return tNumbers
+	case schema.TypeNumberPairs:
+		return tPairs
 	}
 	return tString
 }

@@ -6,17 +6,16 @@ import (
 	"time"
 
 	"github.com/xuri/excelize/v2"
-
-	"github.com/tremie-dev/tremie/schema"
 )
 
 // caution heads the workbook's notes: tremie's figures and checks support,
 // never replace, review.
 const caution = "Caution: the figures and checks tremie makes from these wells support, and never replace, the review of a licensed professional and the governing local well code."
 
-// list is a validation list: the column it checks and its values. Strict
-// lists refuse other values; the others only offer theirs (the material
-// column also takes pipe materials, the method column borehole methods).
+// list is a validation list: the column it checks and its values, the
+// key's allowed values in the well file's key table. Strict lists refuse
+// other values; the others only offer theirs (the material column also
+// takes pipe materials, the method column borehole methods).
 type list struct {
 	sheet, column string
 	values        []string
@@ -24,27 +23,26 @@ type list struct {
 }
 
 func lists() []list {
-	var purposes, materials []string
-	for _, p := range schema.Purposes {
-		purposes = append(purposes, string(p))
-	}
-	for _, m := range schema.Materials {
-		materials = append(materials, string(m))
+	enum := func(table, key string) []string {
+		if k := keySpec(table, key); k != nil {
+			return k.Enum
+		}
+		return nil
 	}
 	return []list{
-		{WellsSheet, "purpose", purposes, true},
-		{WellsSheet, "depth_unit", []string{"ft", "m"}, true},
-		{WellsSheet, "diameter_unit", []string{"in", "mm"}, true},
-		{WellsSheet, "mass_unit", []string{"lb", "kg"}, true},
-		{WellsSheet, "volume_unit", []string{"ft3", "gal", "L", "m3"}, true},
-		{WellsSheet, "surface", []string{string(schema.StickUp), string(schema.FlushMount)}, true},
+		{WellsSheet, "purpose", enum("well", "purpose"), true},
+		{WellsSheet, "depth_unit", enum("units", "depth"), true},
+		{WellsSheet, "diameter_unit", enum("units", "diameter"), true},
+		{WellsSheet, "mass_unit", enum("units", "mass"), true},
+		{WellsSheet, "volume_unit", enum("units", "volume"), true},
+		{WellsSheet, "surface", enum("surface", "kind"), true},
 		{IntervalsSheet, "kind", kindNames(), true},
-		{IntervalsSheet, "material", materials, false},
-		{IntervalsSheet, "casing_kind", []string{string(schema.SurfaceCasing), string(schema.ConductorCasing), string(schema.IntermediateCasing), string(schema.ProductionCasing)}, true},
-		{IntervalsSheet, "type", []string{string(schema.Slotted), string(schema.ContinuousWrap), string(schema.Prepacked)}, true},
-		{IntervalsSheet, "method", []string{string(schema.Tremied), string(schema.Poured), string(schema.Pumped)}, false},
-		{IntervalsSheet, "reference", []string{string(schema.FromGround), string(schema.FromMeasuringPoint)}, true},
-		{IntervalsSheet, "water_level_kind", []string{string(schema.FirstEncountered), string(schema.Static), string(schema.Pumping)}, true},
+		{IntervalsSheet, "material", enum("fill", "material"), false},
+		{IntervalsSheet, "casing_kind", enum("casing", "kind"), true},
+		{IntervalsSheet, "type", enum("string.section", "type"), true},
+		{IntervalsSheet, "method", enum("fill", "method"), false},
+		{IntervalsSheet, "reference", enum("water_level", "reference"), true},
+		{IntervalsSheet, "water_level_kind", enum("water_level", "kind"), true},
 	}
 }
 
@@ -178,6 +176,9 @@ func writeLists(f *excelize.File, b *book) error {
 		cols := b.wellCols
 		if l.sheet == IntervalsSheet {
 			cols = b.intervalCols
+		}
+		if len(l.values) == 0 {
+			continue
 		}
 		ci := -1
 		for i, c := range cols {

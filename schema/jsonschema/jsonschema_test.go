@@ -12,10 +12,6 @@ import (
 	"regexp"
 	"strings"
 	"testing"
-	"time"
-
-	"github.com/BurntSushi/toml"
-	validator "github.com/santhosh-tekuri/jsonschema/v6"
 
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/project"
@@ -28,80 +24,12 @@ import (
 // Schema test suite, so the schemas are tested by an implementation that
 // is not ours.
 
-func compile(t *testing.T, kind string) *validator.Schema {
+func validate(t *testing.T, kind string, src string) error {
 	t.Helper()
-	b, err := Generate(kind)
-	if err != nil {
-		t.Fatal(err)
-	}
-	doc, err := validator.UnmarshalJSON(bytes.NewReader(b))
-	if err != nil {
-		t.Fatalf("%s schema is not JSON: %v", kind, err)
-	}
-	c := validator.NewCompiler()
-	if err := c.AddResource(kind+".json", doc); err != nil {
-		t.Fatal(err)
-	}
-	s, err := c.Compile(kind + ".json")
-	if err != nil {
-		t.Fatalf("%s schema does not compile: %v", kind, err)
-	}
-	return s
-}
-
-// instance is a TOML document as an editor hands it to a schema: tables
-// as objects, dates as their text.
-func instance(src string) (any, error) {
-	var tree map[string]any
-	if _, err := toml.Decode(src, &tree); err != nil {
-		return nil, err
-	}
-	b, err := json.Marshal(jsonable(tree))
-	if err != nil {
-		return nil, err
-	}
-	return validator.UnmarshalJSON(bytes.NewReader(b))
-}
-
-func jsonable(v any) any {
-	switch x := v.(type) {
-	case map[string]any:
-		out := map[string]any{}
-		for k, e := range x {
-			out[k] = jsonable(e)
-		}
-		return out
-	case []map[string]any:
-		out := make([]any, len(x))
-		for i, e := range x {
-			out[i] = jsonable(e)
-		}
-		return out
-	case []any:
-		out := make([]any, len(x))
-		for i, e := range x {
-			out[i] = jsonable(e)
-		}
-		return out
-	case time.Time:
-		switch name, _ := x.Zone(); name {
-		case "date-local":
-			return x.Format("2006-01-02")
-		case "datetime-local":
-			return x.Format("2006-01-02T15:04:05")
-		}
-		return x.Format(time.RFC3339)
-	}
-	return v
-}
-
-func validate(t *testing.T, s *validator.Schema, src string) error {
-	t.Helper()
-	inst, err := instance(src)
-	if err != nil {
+	if _, err := Instance([]byte(src)); err != nil {
 		t.Fatalf("not TOML: %v", err)
 	}
-	return s.Validate(inst)
+	return Validate(kind, []byte(src))
 }
 
 func wellFiles(t *testing.T) []string {
@@ -122,14 +50,13 @@ func wellFiles(t *testing.T) []string {
 // TestFilesTheLoaderAcceptsValidate: every demo, good and rule-fixture
 // well the loader accepts is valid against the well schema.
 func TestFilesTheLoaderAcceptsValidate(t *testing.T) {
-	s := compile(t, "well")
 	n := 0
 	for _, f := range wellFiles(t) {
 		if _, err := schema.LoadFile(f); err != nil {
 			continue // a fixture of a loader error
 		}
 		data, _ := os.ReadFile(f)
-		if err := validate(t, s, string(data)); err != nil {
+		if err := validate(t, "well", string(data)); err != nil {
 			t.Errorf("%s loads but fails the schema: %v", f, err)
 		}
 		n++
@@ -137,12 +64,11 @@ func TestFilesTheLoaderAcceptsValidate(t *testing.T) {
 	if n < 20 {
 		t.Errorf("validated only %d files", n)
 	}
-	ps := compile(t, "project")
 	data, err := os.ReadFile("../../cmd/tremie/demo/project.toml")
 	if err != nil {
 		t.Fatal(err)
 	}
-	if err := validate(t, ps, string(data)); err != nil {
+	if err := validate(t, "project", string(data)); err != nil {
 		t.Errorf("demo project.toml fails the schema: %v", err)
 	}
 }
@@ -154,7 +80,6 @@ var expectLine = regexp.MustCompile(`^# expect: \S+ (.*)`)
 // too. (Errors between keys, such as an inverted interval, and numbers
 // JSON cannot hold, NaN and infinity, are the loader's alone.)
 func TestBadFilesRejected(t *testing.T) {
-	s := compile(t, "well")
 	files, _ := filepath.Glob("../../testdata/bad/*.toml")
 	checked := 0
 	for _, f := range files {
@@ -168,7 +93,7 @@ func TestBadFilesRejected(t *testing.T) {
 			continue
 		}
 		checked++
-		if err := validate(t, s, string(data)); err == nil {
+		if err := validate(t, "well", string(data)); err == nil {
 			t.Errorf("%s: the loader rejects it (%s), the schema accepts it", f, msg)
 		}
 	}
@@ -252,12 +177,11 @@ func eachKey(t *schema.TableSpec, path string, visit func(path string, k *schema
 // result, the schema must too, and the loader must reject every one.
 func checkRejections(t *testing.T, kind, valid string, load loader) {
 	t.Helper()
-	s := compile(t, kind)
 	spec, _ := Spec(kind)
 	if err := load(valid); err != nil {
 		t.Fatalf("%s: the valid document is rejected: %v\n%s", kind, err, valid)
 	}
-	if err := validate(t, s, valid); err != nil {
+	if err := validate(t, kind, valid); err != nil {
 		t.Fatalf("%s: the valid document fails the schema: %v", kind, err)
 	}
 	n := 0
@@ -273,7 +197,7 @@ func checkRejections(t *testing.T, kind, valid string, load loader) {
 				t.Errorf("%s: loader accepts %s.%s = %s", kind, path, k.Name, v)
 				continue
 			}
-			if err := validate(t, s, src); err == nil {
+			if err := validate(t, kind, src); err == nil {
 				t.Errorf("%s: loader rejects %s.%s = %s (%v), the schema accepts it", kind, path, k.Name, v, lerr)
 			}
 		}
@@ -395,7 +319,6 @@ func dropTable(src, name string) string {
 // loader and by the schema, in every table of every kind.
 func TestUnknownKeysRejected(t *testing.T) {
 	for _, kind := range Kinds {
-		s := compile(t, kind)
 		spec, _ := Spec(kind)
 		var tables []string
 		var walk func(t *schema.TableSpec, path string)
@@ -417,7 +340,7 @@ func TestUnknownKeysRejected(t *testing.T) {
 		walk(spec, "")
 		for _, tbl := range tables {
 			src := insertKey(spec.ExampleTOML(), tbl, "bogus_key = 1")
-			if err := validate(t, s, src); err == nil {
+			if err := validate(t, kind, src); err == nil {
 				t.Errorf("%s: schema accepts an unknown key in [%s]", kind, tbl)
 			}
 		}

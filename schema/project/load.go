@@ -6,12 +6,7 @@ import (
 	"io/fs"
 	"os"
 	"path/filepath"
-	"regexp"
-	"strconv"
 	"strings"
-	"time"
-
-	"github.com/BurntSushi/toml"
 
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/crs"
@@ -21,9 +16,9 @@ import (
 // project.toml; callers that accept a bare directory of wells use Default.
 var ErrNoProject = errors.New("no " + FileName)
 
-// fileData is the file's shape; every key the format knows is here, so
-// anything else is reported as unknown. Its tags are also the key table
-// that `tremie schema project` prints (see File).
+// fileData is the file's shape, every key the format knows: its tags are
+// the key table (File) that Parse reads by and `tremie schema project`
+// prints; any other key is reported as unknown.
 type fileData struct {
 	Project struct {
 		Name             string `toml:"name" required:"true" doc:"Project name; a well's project when it gives none." example:"Coldwater Mill groundwater investigation"`
@@ -63,6 +58,20 @@ type revisionData struct {
 	By          string `toml:"by" doc:"Who made it (initials)." example:"RV"`
 }
 
+// readRevisions reads the [[revision]] tables of an issued set.
+func readRevisions(doc *schema.Doc, ts []*schema.Table) []Revision {
+	var out []Revision
+	for _, t := range ts {
+		r := Revision{Rev: t.Str("rev"), Date: t.Date("date"), Description: t.Str("description"), By: t.Str("by")}
+		if strings.TrimSpace(r.Rev) == "" || strings.TrimSpace(r.Description) == "" || r.Date.IsZero() {
+			doc.Errorf(t.Path(), "a [[revision]] needs rev, date and description")
+		}
+		t.Done()
+		out = append(out, r)
+	}
+	return out
+}
+
 // File is the key table of a project file, made from fileData.
 var File = schema.SpecOf("tremie project file", "A project's settings shared by every well: names, units, page, rule profile, yields, title block, where the wells are and where outputs go.", fileData{})
 
@@ -75,7 +84,7 @@ func Load(dir string) (*Project, error) {
 	} else {
 		dir = filepath.Dir(dir)
 	}
-	data, err := os.ReadFile(file)
+	data, err := schema.ReadInput(file, schema.MaxTextFile)
 	if err != nil {
 		if errors.Is(err, fs.ErrNotExist) {
 			return nil, fmt.Errorf("%s: %w", file, ErrNoProject)
@@ -86,142 +95,154 @@ func Load(dir string) (*Project, error) {
 }
 
 // Parse reads a project file's bytes; dir is the project root that
-// relative paths are joined to.
+// relative paths are joined to. It reads strictly (schema.Doc): every
+// problem of the file is reported, sorted, in one schema.ErrorList.
 func Parse(dir, file string, data []byte) (*Project, error) {
-	lines := schema.KeyLines(string(data))
-	var fd fileData
-	md, err := toml.Decode(string(data), &fd)
+	doc, err := schema.ParseDoc(file, data, File)
 	if err != nil {
-		return nil, decodeError(file, lines, err)
+		return nil, err
 	}
-	if und := md.Undecoded(); len(und) > 0 {
-		k := und[0].String()
-		msg := fmt.Sprintf("unknown key %q", k)
-		if len(und[0]) == 1 {
-			msg = fmt.Sprintf("unknown table or key %q (a project file has a [project] table and [[section]] tables)", k)
-		}
-		return nil, &schema.Error{File: file, Line: lines[k], Key: k, Msg: msg}
-	}
-	bad := func(key, format string, args ...any) error {
-		return &schema.Error{File: file, Line: schema.LineOf(lines, key), Key: key, Msg: fmt.Sprintf(format, args...)}
-	}
-	if !md.IsDefined("project") {
-		return nil, &schema.Error{File: file, Line: 1, Msg: "missing [project] table"}
-	}
-	pr := fd.Project
-	if strings.TrimSpace(pr.Name) == "" {
-		return nil, bad("project", "[project] needs a name (name = \"...\")")
+	root := doc.Root()
+	pt := root.Sub("project")
+	if pt == nil {
+		doc.Errorf("", "missing [project] table")
+		root.Done()
+		return nil, doc.Err()
 	}
 	p := &Project{
 		Dir:              dir,
 		File:             file,
-		Name:             pr.Name,
-		Client:           pr.Client,
-		Site:             pr.Site,
-		Datum:            pr.Datum,
-		CoordinateSystem: pr.CoordinateSystem,
-		CRS:              pr.CRS,
-		Page:             pr.Page,
-		Landscape:        pr.Landscape,
-		Profile:          pr.Profile,
-		Yields:           pr.Yields,
-		LogoPath:         pr.Logo,
-		Wells:            pr.Wells,
-		Keys:             lines,
+		Name:             pt.Str("name"),
+		Client:           pt.Str("client"),
+		Site:             pt.Str("site"),
+		Units:            schema.DepthUnit(pt.Str("units")),
+		Datum:            pt.Str("datum"),
+		CoordinateSystem: pt.Str("coordinate_system"),
+		CRS:              pt.Str("crs"),
+		Page:             pt.Str("page"),
+		Landscape:        pt.Bool("landscape"),
+		Profile:          pt.Str("profile"),
+		Yields:           pt.Str("yields"),
+		LogoPath:         pt.Str("logo"),
+		Wells:            pt.Str("wells"),
+		Keys:             doc.Lines(),
+		TitleBlock: TitleBlock{
+			Consultant:   pt.Str("consultant"),
+			PreparedBy:   pt.Str("prepared_by"),
+			CheckedBy:    pt.Str("checked_by"),
+			ApprovedBy:   pt.Str("approved_by"),
+			ReportNumber: pt.Str("report"),
+			JobNumber:    pt.Str("job"),
+			Revision:     pt.Str("revision"),
+			Issued:       pt.Date("issued"),
+		},
+		Issue: pt.Bool("issue"),
 	}
-	switch schema.DepthUnit(pr.Units) {
+	if strings.TrimSpace(p.Name) == "" {
+		doc.Errorf("project", "[project] needs a name (name = \"...\")")
+	}
+	switch p.Units {
 	case "", schema.Feet, schema.Metres:
-		p.Units = schema.DepthUnit(pr.Units)
 	default:
-		return nil, bad("project.units", "units must be \"ft\" or \"m\", not %q", pr.Units)
+		doc.Errorf("project.units", "units must be \"ft\" or \"m\", not %q", p.Units)
 	}
-	if pr.CRS != "" {
-		if _, err := crs.Parse(pr.CRS); err != nil {
-			return nil, bad("project.crs", "%v", err)
+	if p.CRS != "" {
+		if _, err := crs.Parse(p.CRS); err != nil {
+			doc.Errorf("project.crs", "%v", err)
 		}
 	}
-	if md.IsDefined("project", "wells") && strings.TrimSpace(pr.Wells) == "" {
-		return nil, bad("project.wells", "wells must name a directory or a glob, e.g. \"wells\" or \"wells/*.toml\"")
+	if pt.Has("wells") && strings.TrimSpace(p.Wells) == "" {
+		doc.Errorf("project.wells", "wells must name a directory or a glob, e.g. \"wells\" or \"wells/*.toml\"")
 	}
 	if p.Wells == "" {
 		p.Wells = DefaultWells
 	}
-	out := pr.Output
-	if md.IsDefined("project", "output") && strings.TrimSpace(out) == "" {
-		return nil, bad("project.output", "output must name a directory, e.g. \"out\"")
+	out := pt.Str("output")
+	if pt.Has("output") && strings.TrimSpace(out) == "" {
+		doc.Errorf("project.output", "output must name a directory, e.g. \"out\"")
 	}
 	if out == "" {
 		out = DefaultOutput
 	}
 	p.Output = p.Path(out)
-	if pr.Profile != "" {
+	if p.Profile != "" {
 		if st, err := os.Stat(p.ProfilePath()); err != nil || st.IsDir() {
-			return nil, bad("project.profile", "rule profile %s not found", p.ProfilePath())
+			doc.Errorf("project.profile", "rule profile %s not found", p.ProfilePath())
 		}
 	}
-	if pr.Yields != "" {
+	if p.Yields != "" {
 		if st, err := os.Stat(p.YieldsPath()); err != nil || st.IsDir() {
-			return nil, bad("project.yields", "yields file %s not found", p.YieldsPath())
+			doc.Errorf("project.yields", "yields file %s not found", p.YieldsPath())
 		}
 	}
-	tb := fd.Project
-	p.TitleBlock = TitleBlock{
-		Consultant:   tb.Consultant,
-		PreparedBy:   tb.PreparedBy,
-		CheckedBy:    tb.CheckedBy,
-		ApprovedBy:   tb.ApprovedBy,
-		ReportNumber: tb.Report,
-		JobNumber:    tb.Job,
-		Revision:     tb.Revision,
-	}
-	if tb.Issued != nil {
-		t, ok := tb.Issued.(time.Time)
-		if name, _ := t.Zone(); !ok || name != "date-local" { // BurntSushi's zone for a TOML local date
-			return nil, bad("project.issued", "issued must be a date such as 2026-03-14, without quotes")
-		}
-		p.TitleBlock.Issued = schema.Date{Year: t.Year(), Month: t.Month(), Day: t.Day()}
-	}
-	p.Issue = pr.Issue
-	for i, r := range fd.Revision {
-		t, ok := r.Date.(time.Time)
-		if name, _ := t.Zone(); !ok || name != "date-local" {
-			return nil, bad(fmt.Sprintf("revision[%d].date", i), "date must be a date such as 2026-03-14, without quotes")
-		}
-		if strings.TrimSpace(r.Rev) == "" || strings.TrimSpace(r.Description) == "" {
-			return nil, bad(fmt.Sprintf("revision[%d]", i), "a revision needs rev and description")
-		}
-		p.TitleBlock.Revisions = append(p.TitleBlock.Revisions, Revision{Rev: r.Rev, Date: schema.Date{Year: t.Year(), Month: t.Month(), Day: t.Day()}, Description: r.Description, By: r.By})
-	}
-	if p.Sections, err = sections(file, lines, fd.Section, p.Units); err != nil {
+	pt.Done()
+	sections := readSections(doc, root.List("section"))
+	p.TitleBlock.Revisions = readRevisions(doc, root.List("revision"))
+	root.Done()
+	if err := doc.Err(); err != nil {
 		return nil, err
 	}
-	if pr.Logo != "" {
-		logo, err := LoadLogo(p.Path(pr.Logo))
+	if p.Sections, err = checkSections(file, p.Keys, sections, p.Units); err != nil {
+		return nil, err
+	}
+	if p.LogoPath != "" {
+		logo, err := LoadLogo(p.Path(p.LogoPath))
 		if err != nil {
-			return nil, &schema.Error{File: file, Line: schema.LineOf(lines, "project.logo"), Key: "project.logo", Msg: err.Error()}
+			return nil, schema.ErrorList{{File: file, Line: schema.LineOf(p.Keys, "project.logo"), Key: "project.logo", Msg: err.Error()}}
 		}
 		p.Logo = logo
 	}
 	return p, nil
 }
 
-var lineInMsg = regexp.MustCompile(`line (\d+)`)
-
-// decodeError turns a TOML syntax or type error into an Error with a line.
-func decodeError(file string, lines map[string]int, err error) error {
-	var pe toml.ParseError
-	if errors.As(err, &pe) {
-		msg := pe.Message
-		if pe.LastKey != "" && pe.Position.Line == 0 {
-			return &schema.Error{File: file, Line: schema.LineOf(lines, pe.LastKey), Key: pe.LastKey, Msg: msg}
+// readSections reads the [[section]] tables as written; checkSections
+// then checks what they say.
+func readSections(doc *schema.Doc, ts []*schema.Table) []sectionData {
+	out := make([]sectionData, len(ts))
+	for i, t := range ts {
+		d := &out[i]
+		d.Name = t.Str("name")
+		d.Wells = t.Strings("wells")
+		d.CoordinateUnit = t.Str("coordinate_unit")
+		if v, ok := t.Num("max_offset"); ok {
+			d.MaxOffset = &v
 		}
-		return &schema.Error{File: file, Line: pe.Position.Line, Key: pe.LastKey, Msg: msg}
+		d.WaterDate, _ = t.Raw("water_date")
+		if v, ok := t.Raw("bends"); ok {
+			d.Bends = bendPoints(v)
+			if d.Bends == nil {
+				doc.Errorf(t.Path()+".bends", "bends must be an array of [easting, northing] pairs")
+			}
+		}
+		t.Done()
 	}
-	msg := strings.TrimPrefix(err.Error(), "toml: ")
-	line := 0
-	if m := lineInMsg.FindStringSubmatch(msg); m != nil {
-		line, _ = strconv.Atoi(m[1])
-		msg = strings.TrimSpace(strings.TrimPrefix(msg[strings.Index(msg, m[0])+len(m[0]):], ":"))
+	return out
+}
+
+// bendPoints converts [[e, n], ...] to pairs, or nil if v is not that.
+func bendPoints(v any) [][2]float64 {
+	arr, ok := v.([]any)
+	if !ok {
+		return nil
 	}
-	return &schema.Error{File: file, Line: line, Msg: msg}
+	out := make([][2]float64, 0, len(arr))
+	for _, e := range arr {
+		pair, ok := e.([]any)
+		if !ok || len(pair) != 2 {
+			return nil
+		}
+		var pt [2]float64
+		for j, c := range pair {
+			switch n := c.(type) {
+			case int64:
+				pt[j] = float64(n)
+			case float64:
+				pt[j] = n
+			default:
+				return nil
+			}
+		}
+		out = append(out, pt)
+	}
+	return out
 }

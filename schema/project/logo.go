@@ -7,6 +7,8 @@ import (
 	_ "image/jpeg" // logos may be JPEG
 	_ "image/png"  // or PNG
 	"os"
+
+	"github.com/tremie-dev/tremie/schema"
 )
 
 // Logo limits: a title-block logo is printed a few centimetres wide, so
@@ -30,7 +32,7 @@ func LoadLogo(path string) (*Logo, error) {
 	if st.Size() > MaxLogoBytes {
 		return nil, fmt.Errorf("logo %s is %d bytes; the limit is %d (1 MiB): export it smaller", path, st.Size(), MaxLogoBytes)
 	}
-	data, err := os.ReadFile(path)
+	data, err := schema.ReadInput(path, MaxLogoBytes)
 	if err != nil {
 		return nil, fmt.Errorf("logo %s: %w", path, err)
 	}

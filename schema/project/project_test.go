@@ -87,9 +87,9 @@ func TestLoadErrorsNameTheLine(t *testing.T) {
 		line       int
 		want       string
 	}{
-		{"unknown key", "[project]\nname = \"x\"\n\ncolour = \"red\"\n", 4, `unknown key "project.colour"`},
+		{"unknown key", "[project]\nname = \"x\"\n\ncolour = \"red\"\n", 4, `unknown key "colour" in [project]`},
 		{"unknown table", "[project]\nname = \"x\"\n[title]\nfoo = 1\n", 3, `"title"`},
-		{"wrong type", "[project]\nname = \"x\"\nlandscape = \"yes\"\n", 3, "incompatible types"},
+		{"wrong type", "[project]\nname = \"x\"\nlandscape = \"yes\"\n", 3, "landscape must be true or false, not a string"},
 		{"syntax", "[project]\nname = \"x\n", 2, ""},
 		{"no name", "[project]\nclient = \"c\"\n", 1, "needs a name"},
 		{"no table", "name = \"x\"\n", 1, ""},
@@ -116,6 +116,31 @@ func TestLoadErrorsNameTheLine(t *testing.T) {
 				t.Errorf("message %q does not start with the file", err)
 			}
 		})
+	}
+}
+
+// A project file with three mistakes reports all three, sorted, each with
+// file:line:col, and a key one slip away from a known one is named.
+func TestLoadReportsEveryError(t *testing.T) {
+	dir := writeProject(t, "[project]\nname = \"x\"\nunits = \"yd\"\nlandscpe = true\n\n[[section]]\nname = \"A-A'\"\nwells = [\"MW-1\", \"MW-2\"]\nmax_offset = \"far\"\n")
+	_, err := Load(dir)
+	list := schema.Errors("", err)
+	file := filepath.Join(dir, FileName)
+	want := []string{
+		file + `:3:9: units must be "ft" or "m", not "yd"`,
+		file + `:4:1: unknown key "landscpe" in [project] (did you mean "landscape"?)`,
+		file + `:9:14: max_offset must be a number, not a string`,
+	}
+	if len(list) != len(want) {
+		t.Fatalf("%d errors, want %d:\n%v", len(list), len(want), err)
+	}
+	for i, e := range list {
+		if e.Error() != want[i] {
+			t.Errorf("error %d:\n got %s\nwant %s", i, e, want[i])
+		}
+	}
+	if !strings.Contains(err.Error(), "\n\t[project] takes: ") {
+		t.Errorf("no usage hint for the unknown key:\n%v", err)
 	}
 }
 

@@ -45,9 +45,9 @@ type sectionData struct {
 // (the US survey foot is 1200/3937 m exactly, NIST Handbook 44 appendix C).
 var CoordinateUnits = map[string]float64{"m": 1, "ft": schema.MetresPerFoot, "us-ft": 1200.0 / 3937.0}
 
-// sections checks the [[section]] tables; depth is the project's depth
+// checkSections checks the [[section]] tables; depth is the project's depth
 // unit (for max_offset and the coordinate unit's default).
-func sections(file string, lines map[string]int, in []sectionData, depth schema.DepthUnit) ([]Section, error) {
+func checkSections(file string, lines map[string]int, in []sectionData, depth schema.DepthUnit) ([]Section, error) {
 	var errs schema.ErrorList
 	bad := func(i int, key, format string, args ...any) {
 		path := fmt.Sprintf("section[%d]", i)

@@ -18,10 +18,10 @@ func (s Slice) Volume() schema.Volume { return schema.Volume(s.Area * float64(s.
 // Slices splits [top, bottom] of a region into constant cross-sections,
 // top down.
 func Slices(w *schema.Well, r Region, top, bottom schema.Length) ([]Slice, error) {
-	return slices(w, w.CrossSections(), r, top, bottom)
+	return regionSlices(w, w.CrossSections(), r, top, bottom)
 }
 
-func slices(w *schema.Well, secs *schema.Sections, r Region, top, bottom schema.Length) ([]Slice, error) {
+func regionSlices(w *schema.Well, secs *schema.Sections, r Region, top, bottom schema.Length) ([]Slice, error) {
 	if !(top < bottom) {
 		if top == bottom {
 			return nil, nil
@@ -47,7 +47,7 @@ func AnnularVolume(w *schema.Well, f schema.Fill) (schema.Volume, error) {
 }
 
 func annularVolume(w *schema.Well, secs *schema.Sections, f schema.Fill) (schema.Volume, error) {
-	sl, err := slices(w, secs, RegionOf(f), f.Top, f.Bottom)
+	sl, err := regionSlices(w, secs, RegionOf(f), f.Top, f.Bottom)
 	if err != nil {
 		return 0, err
 	}

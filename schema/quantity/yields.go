@@ -24,6 +24,20 @@ type Yield struct {
 	BagMass schema.Mass
 	Basis   Basis
 	Note    string // how the figure is made up
+	// A slurry's mix per bag: the water and the dry mass with additives
+	// (the bag, and bentonite or sand added to it); 0 for a dry material.
+	Water  schema.Volume
+	Solids schema.Mass
+}
+
+// Density is the slurry's expected density in kg/m3: the mix's mass over
+// its yield, water at 62.4 lb/ft3 (999.6 kg/m3); false for a dry
+// material or a yield with no mix.
+func (y Yield) Density() (float64, bool) {
+	if y.Water <= 0 || y.Solids <= 0 || y.Volume <= 0 {
+		return 0, false
+	}
+	return (float64(y.Solids) + float64(y.Water)*waterKgPerM3) / float64(y.Volume), true
 }
 
 // Scaled is the yield of a bag of mass m: in proportion to the reference
@@ -32,7 +46,10 @@ func (y Yield) Scaled(m schema.Mass) Yield {
 	if m <= 0 || y.BagMass <= 0 || m == y.BagMass {
 		return y
 	}
-	y.Volume = schema.Volume(float64(y.Volume) * float64(m) / float64(y.BagMass))
+	k := float64(m) / float64(y.BagMass)
+	y.Volume = schema.Volume(float64(y.Volume) * k)
+	y.Water = schema.Volume(float64(y.Water) * k)
+	y.Solids = schema.Mass(float64(y.Solids) * k)
 	y.BagMass = m
 	if y.Note != "" {
 		y.Note += "; scaled to this bag's mass"
@@ -116,6 +133,7 @@ func MetricBag(m schema.Material) schema.Mass {
 }
 
 func ft3(v float64) schema.Volume { return schema.VolumeFrom(v, schema.CubicFeet) }
+func gal(v float64) schema.Volume { return schema.VolumeFrom(v, schema.USGallons) }
 func lb(v float64) schema.Mass    { return schema.MassFrom(v, schema.Pounds) }
 
 // Densities used to make up the default yields. Water weighs 62.4 lb/ft3
@@ -128,6 +146,9 @@ const (
 	bentoniteSG   = 2.6  // sodium montmorillonite (from memory)
 	quartzSG      = 2.65 // silica sand (common practice)
 )
+
+// waterKgPerM3 is 62.4 lb/ft3 in kg/m3.
+var waterKgPerM3 = float64(lb(waterLbPerFt3)) / float64(ft3(1))
 
 // absolute is the absolute volume in cubic feet of pounds lb of a solid of
 // specific gravity sg.
@@ -155,16 +176,17 @@ func DefaultYields() *Yields {
 		Note: "50-lb bag of granular bentonite at 28 ft3 per short ton (71.4 lb/ft3)"})
 	// 50 lb / (2.6 x 62.4 lb/ft3) + 24 gal / 7.48052 gal/ft3 = 0.31 + 3.21
 	y.Set(schema.BentoniteGrout, Yield{Volume: ft3(3.5), BagMass: lb(50), Basis: FromMemory,
-		Note: "50-lb bag of grout-grade bentonite with about 24 US gal water (20% solids)"})
+		Note: "50-lb bag of grout-grade bentonite with about 24 US gal water (20% solids)", Water: gal(24), Solids: lb(50)})
 	// 94 lb / (3.15 x 62.4 lb/ft3) + 5.2 gal / 7.48052 gal/ft3 = 0.48 + 0.70,
 	// 1.18 in the cementing tables (the sack's entrained air)
 	y.Set(schema.NeatCement, Yield{Volume: ft3(1.18), BagMass: lb(94), Basis: CommonPractice,
-		Note: "94-lb sack of Portland cement with 5.2 US gal water"})
+		Note: "94-lb sack of Portland cement with 5.2 US gal water", Water: gal(5.2), Solids: lb(94)})
 	// as neat cement, plus 4.7 lb bentonite (5%) and 0.65 gal water per 1%
 	y.Set(schema.CementBentonite, Yield{Volume: ft3(1.64), BagMass: lb(94), Basis: FromMemory,
-		Note: "94-lb sack of Portland cement with 5% bentonite and 8.5 US gal water"})
+		Note: "94-lb sack of Portland cement with 5% bentonite and 8.5 US gal water", Water: gal(8.5), Solids: lb(94 + 4.7)})
 	y.Set(schema.SandCement, Yield{Volume: ft3(SandCementYield(94, 188, 7)), BagMass: lb(94), Basis: CommonPractice,
-		Note: "94-lb sack of Portland cement with 188 lb sand (2 parts sand to 1 of cement by weight) and 7 US gal water, by absolute volumes"})
+		Note:  "94-lb sack of Portland cement with 188 lb sand (2 parts sand to 1 of cement by weight) and 7 US gal water, by absolute volumes",
+		Water: gal(7), Solids: lb(94 + 188)})
 	y.Set(schema.Concrete, Yield{Volume: ft3(0.6), BagMass: lb(80), Basis: FromMemory,
 		Note: "80-lb bag of premixed concrete"})
 	return y

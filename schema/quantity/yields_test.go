@@ -1,7 +1,6 @@
 package quantity
 
 import (
-	"errors"
 	"os"
 	"path/filepath"
 	"strings"
@@ -140,7 +139,7 @@ func TestParseYieldsErrors(t *testing.T) {
 		line int
 		msg  string
 	}{
-		{"[yields]\n[yields.gravel]\nyield = 1\n", 2, "unknown material"},
+		{"[yields]\n[yields.gravel]\nyield = 1\n", 2, `unknown key "gravel" in [yields]`},
 		{"[yields]\n\n[yields.filter-pack]\nyeild = 1\n", 4, "unknown key"},
 		{"[yields]\n[yields.filter-pack]\nyield = -1\n", 3, "positive"},
 		{"[yields]\nvolume = \"cups\"\n", 2, "volume unit"},
@@ -151,13 +150,37 @@ func TestParseYieldsErrors(t *testing.T) {
 		{"[yields]\nvolume = = 1\n", 2, ""},
 	} {
 		_, err := ParseYields("y.toml", []byte(c.src))
-		var se *schema.Error
-		if !errors.As(err, &se) {
-			t.Errorf("%q: error %v, want a *schema.Error", c.src, err)
-			continue
+		found := false
+		for _, e := range schema.Errors("", err) {
+			found = found || (e.Line == c.line && strings.Contains(e.Msg, c.msg) && e.File == "y.toml")
 		}
-		if se.Line != c.line || !strings.Contains(se.Msg, c.msg) || se.File != "y.toml" {
+		if !found {
 			t.Errorf("%q: %v, want line %d with %q", c.src, err, c.line, c.msg)
+		}
+	}
+}
+
+// A yields file with three mistakes reports all three, sorted, each with
+// file:line:col; a slip of the keyboard gets "did you mean".
+func TestLoadYieldsReportsEveryError(t *testing.T) {
+	p := filepath.Join(t.TempDir(), "site.yields.toml")
+	src := "[yields]\nvolume = \"cuft\"\n\n[yields.filter-pak]\nyield = 0.5\n\n[yields.neat-cement]\nyield = 0.9\nbagmass = 94\n"
+	if err := os.WriteFile(p, []byte(src), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	_, err := LoadYields(p)
+	list := schema.Errors("", err)
+	want := []string{
+		p + `:2:10: yields volume unit must be one of ft3, gal, L, m3, not "cuft"`,
+		p + `:4:1: unknown key "filter-pak" in [yields] (did you mean "filter-pack"?)`,
+		p + `:9:1: unknown key "bagmass" in [yields.neat-cement] (did you mean "bag_mass"?)`,
+	}
+	if len(list) != len(want) {
+		t.Fatalf("%d errors, want %d:\n%v", len(list), len(want), err)
+	}
+	for i, e := range list {
+		if e.Error() != want[i] {
+			t.Errorf("error %d:\n got %s\nwant %s", i, e, want[i])
 		}
 	}
 }

@@ -1,14 +1,7 @@
 package quantity
 
 import (
-	"errors"
-	"fmt"
 	"math"
-	"os"
-	"sort"
-	"strings"
-
-	"github.com/BurntSushi/toml"
 
 	"github.com/tremie-dev/tremie/schema"
 )
@@ -27,137 +20,110 @@ import (
 
 // LoadYields reads a TOML file that holds a [yields] table and returns the
 // defaults overridden by it. A file without the table is an error: the user
-// named it for its yields.
+// named it for its yields. Every problem of the file is reported, sorted,
+// in one schema.ErrorList.
 func LoadYields(path string) (*Yields, error) {
-	data, err := os.ReadFile(path)
+	data, err := schema.ReadInput(path, schema.MaxTextFile)
 	if err != nil {
-		return nil, schema.ReadError(path, "yields", err)
+		return nil, schema.ErrorList{schema.ReadError(path, "yields", err)}
 	}
-	y, found, err := parseYields(path, data)
-	if err != nil {
-		return nil, err
-	}
-	if !found {
-		return nil, &schema.Error{File: path, Line: 1, Msg: "no [yields] table in this file"}
-	}
-	if k := otherTable(data); k != "" {
-		return nil, &schema.Error{File: path, Line: schema.LineOf(schema.KeyLines(string(data)), k), Key: k, Msg: fmt.Sprintf("unknown table or key %q (a yields file holds only a [yields] table)", k)}
-	}
-	return y, nil
+	y, _, err := parseYields(path, data, true)
+	return y, err
 }
 
 // ParseYields returns the defaults overridden by the [yields] table of a
 // TOML document (a project file, say); a document without one gives the
 // defaults. name is the file name for errors.
 func ParseYields(name string, data []byte) (*Yields, error) {
-	y, _, err := parseYields(name, data)
+	y, _, err := parseYields(name, data, false)
 	return y, err
 }
 
-func parseYields(name string, data []byte) (*Yields, bool, error) {
-	var doc map[string]any
-	if _, err := toml.Decode(string(data), &doc); err != nil {
-		var pe toml.ParseError
-		if errors.As(err, &pe) {
-			return nil, false, &schema.Error{File: name, Line: pe.Position.Line, Col: pe.Position.Col, Msg: pe.Message}
-		}
-		return nil, false, &schema.Error{File: name, Msg: err.Error()}
+// parseYields reads the [yields] table strictly (schema.Doc); whole says
+// the document is a yields file, which holds nothing else.
+func parseYields(name string, data []byte, whole bool) (*Yields, bool, error) {
+	doc, err := schema.ParseDoc(name, data, YieldsFile())
+	if err != nil {
+		return nil, false, err
 	}
+	root := doc.Root()
+	found := root.Has("yields")
 	y := DefaultYields()
-	raw, ok := doc["yields"]
-	if !ok {
-		return y, false, nil
+	if t := root.Sub("yields"); t != nil {
+		readYields(doc, t, y)
 	}
-	lines := schema.KeyLines(string(data))
-	errAt := func(key, format string, args ...any) *schema.Error {
-		return &schema.Error{File: name, Line: schema.LineOf(lines, key), Key: key, Msg: fmt.Sprintf(format, args...)}
+	if whole {
+		if !found {
+			doc.Errorf("", "no [yields] table in this file")
+		}
+		root.Done()
 	}
-	t, ok := raw.(map[string]any)
-	if !ok {
-		return nil, true, errAt("yields", "yields must be a table")
+	if err := doc.Err(); err != nil {
+		return nil, found, err
 	}
+	return y, found, nil
+}
+
+func readYields(doc *schema.Doc, t *schema.Table, y *Yields) {
 	vu, mu := schema.CubicFeet, schema.Pounds
-	if v, ok := t["volume"]; ok {
-		s, _ := v.(string)
+	if s := t.Str("volume"); s != "" {
 		switch u := schema.VolumeUnit(s); u {
 		case schema.CubicFeet, schema.USGallons, schema.Litres, schema.CubicMetres:
 			vu = u
 		default:
-			return nil, true, errAt("yields.volume", "yields volume unit must be one of ft3, gal, L, m3, not %v", v)
+			doc.Errorf("yields.volume", "yields volume unit must be one of ft3, gal, L, m3, not %q", s)
 		}
 	}
-	if v, ok := t["mass"]; ok {
-		s, _ := v.(string)
+	if s := t.Str("mass"); s != "" {
 		switch u := schema.MassUnit(s); u {
 		case schema.Pounds, schema.Kilograms:
 			mu = u
 		default:
-			return nil, true, errAt("yields.mass", "yields mass unit must be lb or kg, not %v", v)
+			doc.Errorf("yields.mass", "yields mass unit must be lb or kg, not %q", s)
 		}
 	}
-	keys := make([]string, 0, len(t))
-	for k := range t {
-		keys = append(keys, k)
-	}
-	sort.Strings(keys) // the first error is the same on every run
-	for _, k := range keys {
+	for _, k := range t.Keys() {
 		if k == "volume" || k == "mass" {
 			continue
 		}
 		path := "yields." + k
 		if YieldsFile().Keys[0].Table.Key(k) == nil {
-			return nil, true, errAt(path, "unknown material %q in [yields] (one of: %s)", k, materialList())
+			continue // not a material: Done reports it, with the materials
 		}
-		e, ok := t[k].(map[string]any)
-		if !ok {
-			return nil, true, errAt(path, "yields.%s must be a table with yield and bag_mass", k)
+		e := t.Sub(k)
+		if e == nil {
+			continue
 		}
-		var entry Yield
-		entry.Basis = ProjectBasis
-		for _, ek := range sortedKeys(e) {
-			v := e[ek]
-			switch ek {
-			case "yield", "bag_mass":
-				n, ok := number(v)
-				if !ok || !(n > 0) || math.IsInf(n, 0) {
-					return nil, true, errAt(path+"."+ek, "%s must be a positive number, not %v", ek, v)
-				}
-				if ek == "yield" {
-					entry.Volume = schema.VolumeFrom(n, vu)
-				} else {
-					entry.BagMass = schema.MassFrom(n, mu)
-				}
-			case "note":
-				s, ok := v.(string)
-				if !ok {
-					return nil, true, errAt(path+".note", "note must be a string")
-				}
-				entry.Note = s
-			default: // every key of yieldEntry has a case above
-				return nil, true, errAt(path+"."+ek, "unknown key %q in yields.%s (%s)", ek, k, strings.Join(yieldEntry.Names(), ", "))
-			}
+		entry := Yield{Basis: ProjectBasis, Note: e.Str("note")}
+		if n, ok := positiveNumber(doc, e, "yield"); ok {
+			entry.Volume = schema.VolumeFrom(n, vu)
+		} else if !e.Has("yield") {
+			doc.Errorf(path, "yields.%s has no yield", k)
 		}
-		if entry.Volume <= 0 {
-			return nil, true, errAt(path, "yields.%s has no yield", k)
+		if n, ok := positiveNumber(doc, e, "bag_mass"); ok {
+			entry.BagMass = schema.MassFrom(n, mu)
 		}
-		y.Set(schema.Material(k), entry)
+		e.Done()
+		if entry.Volume > 0 {
+			y.Set(schema.Material(k), entry)
+		}
 	}
-	return y, true, nil
+	t.Done()
 }
 
-// otherTable is the first top-level key of a yields file other than
-// yields, or "". The file already parsed.
-func otherTable(data []byte) string {
-	var doc map[string]any
-	if _, err := toml.Decode(string(data), &doc); err != nil {
-		return ""
+// positiveNumber reads a key that must be a positive, finite number, and
+// whether it was given and valid.
+func positiveNumber(doc *schema.Doc, t *schema.Table, k string) (float64, bool) {
+	v, ok := t.Raw(k)
+	if !ok {
+		return 0, false
 	}
-	for _, k := range sortedKeys(doc) {
-		if YieldsFile().Key(k) == nil {
-			return k
-		}
+	n, ok := number(v)
+	if !ok || !(n > 0) || math.IsInf(n, 0) {
+		doc.Errorf(t.Path()+"."+k, "%s must be a positive number, not %v", k, v)
+		return 0, false
 	}
-	return ""
+	return n, true
 }
 
 func number(v any) (float64, bool) {
@@ -168,21 +134,4 @@ func number(v any) (float64, bool) {
 		return n, true
 	}
 	return 0, false
-}
-
-func sortedKeys(m map[string]any) []string {
-	out := make([]string, 0, len(m))
-	for k := range m {
-		out = append(out, k)
-	}
-	sort.Strings(out)
-	return out
-}
-
-func materialList() string {
-	names := make([]string, len(schema.Materials))
-	for i, m := range schema.Materials {
-		names[i] = string(m)
-	}
-	return strings.Join(names, ", ")
 }

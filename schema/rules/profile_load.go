@@ -4,7 +4,6 @@ import (
 	"errors"
 	"fmt"
 	"math"
-	"os"
 	"path/filepath"
 	"sort"
 	"strings"
@@ -17,7 +16,7 @@ import (
 // is strict: an unknown table, rule, parameter or purpose is an error with
 // its line, and a rejected profile yields a schema.ErrorList.
 func LoadProfile(path string) (*Profile, error) {
-	data, err := os.ReadFile(path)
+	data, err := schema.ReadInput(path, schema.MaxTextFile)
 	if err != nil {
 		return nil, schema.ErrorList{schema.ReadError(path, "profile", err)}
 	}
@@ -120,7 +119,8 @@ func (r *profileReader) read(raw map[string]any) *Profile {
 		}
 	}
 	numbers := r.hasNumbers(raw)
-	if numbers && prof.Units == "" {
+	// units written but wrong are reported where they are written
+	if pt, _ := raw["profile"].(map[string]any); numbers && prof.Units == "" && pt["units"] == nil {
 		r.errAt("profile", "give units = \"ft\" or \"m\" in [profile]: the profile sets thresholds")
 	}
 	if v, ok := raw["rule"]; ok {
@@ -139,7 +139,8 @@ func (r *profileReader) read(raw map[string]any) *Profile {
 		switch k {
 		case "profile", "rule", "sanitary_seal", "groups":
 		default:
-			r.errAt(k, "unknown key %q at top level (expected [profile], [groups], [rule.RULE-ID] or [sanitary_seal])", k)
+			r.errAt(k, "unknown key %q at top level (expected [profile], [groups], [rule.RULE-ID] or [sanitary_seal])%s", k,
+				schema.DidYouMean(k, []string{"profile", "groups", "rule", "sanitary_seal"}))
 		}
 	}
 	return prof
@@ -168,7 +169,8 @@ func (r *profileReader) header(prof *Profile, m map[string]any) {
 			}
 			prof.Units = schema.DepthUnit(s)
 		default:
-			r.errAt(path, "unknown key %q in [profile] (expected %s)", k, strings.Join(ProfileFile().Key("profile").Table.Names(), ", "))
+			names := ProfileFile().Key("profile").Table.Names()
+			r.errAt(path, "unknown key %q in [profile] (expected %s)%s", k, strings.Join(names, ", "), schema.DidYouMean(k, names))
 		}
 	}
 }
@@ -212,7 +214,7 @@ func (r *profileReader) rule(prof *Profile, id string, v any) {
 	}
 	rl, ok := Lookup(id)
 	if !ok {
-		r.errAt(path, "unknown rule %q (tremie rules lists them)", id)
+		r.errAt(path, "unknown rule %q (tremie rules lists them)%s", id, schema.DidYouMean(id, ruleIDs()))
 		return
 	}
 	for _, k := range sortedKeys(m) {
@@ -240,7 +242,7 @@ func (r *profileReader) rule(prof *Profile, id string, v any) {
 			}
 		}
 		if !ok {
-			r.errAt(kp, "rule %s has no parameter %q%s", id, k, rl.paramList())
+			r.errAt(kp, "rule %s has no parameter %q%s%s", id, k, rl.paramList(), schema.DidYouMean(k, rl.paramNames()))
 			continue
 		}
 		f, ok := r.paramNumber(kp, prm, m[k])
@@ -264,7 +266,7 @@ func (r *profileReader) sanitarySeal(prof *Profile, m map[string]any) {
 	for _, k := range sortedKeys(m) {
 		kp := "sanitary_seal." + k
 		if !isPurpose(k) {
-			r.errAt(kp, "unknown purpose %q in [sanitary_seal] (one of: %s)", k, purposeNames())
+			r.errAt(kp, "unknown purpose %q in [sanitary_seal] (one of: %s)%s", k, purposeNames(), schema.DidYouMean(k, strings.Split(purposeNames(), ", ")))
 			continue
 		}
 		f, ok := r.number(kp, m[k])
@@ -350,4 +352,22 @@ func tomlType(v any) string {
 		return "an array"
 	}
 	return fmt.Sprintf("%T", v)
+}
+
+// ruleIDs lists every registered rule's ID, for "did you mean".
+func ruleIDs() []string {
+	out := make([]string, len(registry))
+	for i, r := range registry {
+		out[i] = r.ID
+	}
+	return out
+}
+
+// paramNames lists the keys a [rule.ID] table takes, for "did you mean".
+func (rl *Rule) paramNames() []string {
+	out := []string{"severity"}
+	for _, p := range rl.Params {
+		out = append(out, p.Name)
+	}
+	return out
 }

@@ -1,0 +1,187 @@
+package schema
+
+import (
+	"errors"
+	"sort"
+	"strings"
+
+	"github.com/BurntSushi/toml"
+)
+
+// Doc is one TOML input file read strictly, the way the well loader reads
+// a well file: the project, profile, yields and page-template loaders use
+// it too. Each value is read through a Table, which records a type error
+// at the value's line and column; Done reports every key no one asked
+// for, with "did you mean" when a known key is close; Err returns every
+// error of the file, sorted. So every input file fails the same way.
+type Doc struct {
+	r    *reader
+	root *table
+}
+
+// Table is one table of a Doc. Its methods read a key (marking it known)
+// and record any error; see Doc.
+type Table = table
+
+// decode parses TOML text into its tree, or the syntax error with its
+// position.
+func decode(name, src string) (map[string]any, error) {
+	// Decoding into a bare interface hands over the parser's own tree;
+	// a map[string]any target would be copied key by key.
+	var tree any
+	if _, err := toml.Decode(src, &tree); err != nil {
+		var pe toml.ParseError
+		if errors.As(err, &pe) {
+			return nil, ErrorList{{File: name, Line: pe.Position.Line, Col: pe.Position.Col, Msg: "TOML syntax: " + pe.Message}}
+		}
+		return nil, ErrorList{{File: name, Msg: "TOML: " + err.Error()}}
+	}
+	raw, _ := tree.(map[string]any)
+	if raw == nil {
+		raw = map[string]any{}
+	}
+	return raw, nil
+}
+
+// ParseDoc parses a file's bytes; name is used in positions, spec is the
+// file's key table (nil for a file without one: then the keys its loader
+// asks for are the known ones). A syntax error is returned as an
+// ErrorList.
+func ParseDoc(name string, data []byte, spec *TableSpec) (*Doc, error) {
+	src := string(data)
+	raw, err := decode(name, src)
+	if err != nil {
+		return nil, err
+	}
+	r := &reader{file: name, src: src}
+	return &Doc{r: r, root: &table{r: r, m: raw, spec: spec}}, nil
+}
+
+// Root is the file's top-level table.
+func (d *Doc) Root() *Table { return d.root }
+
+// Errorf records an error at the value of a key path (or of its nearest
+// enclosing table), e.g. "project.units".
+func (d *Doc) Errorf(path, format string, args ...any) { d.r.errAt(path, format, args...) }
+
+// Line is the line of a key path, or of its nearest enclosing table, or 1.
+func (d *Doc) Line(path string) int {
+	if d.r.lines == nil {
+		d.r.lines = scanKeyLines(d.r.src)
+	}
+	return LineOf(d.r.lines, path)
+}
+
+// Lines maps every key path of the file to its line.
+func (d *Doc) Lines() map[string]int {
+	if d.r.lines == nil {
+		d.r.lines = scanKeyLines(d.r.src)
+	}
+	return d.r.lines
+}
+
+// Err returns every error recorded, sorted, as an ErrorList; nil if none.
+func (d *Doc) Err() error {
+	if len(d.r.errs) == 0 {
+		return nil
+	}
+	d.r.errs.Sort()
+	return d.r.errs
+}
+
+// Exported readers of a Table, for the loaders outside this package.
+
+// Str reads a string ("" when absent).
+func (t *table) Str(k string) string { return t.str(k) }
+
+// ReqStr reads a string that must be present and not blank.
+func (t *table) ReqStr(k string) string { return t.reqStr(k) }
+
+// Num reads a finite number, and whether it was given and valid.
+func (t *table) Num(k string) (float64, bool) { return t.num(k) }
+
+// Positive reads a number that must be > 0 when present.
+func (t *table) Positive(k string) (float64, bool) { return t.positive(k) }
+
+// NonNegative reads a number that must be >= 0 when present.
+func (t *table) NonNegative(k string) (float64, bool) { return t.nonNegative(k) }
+
+// Bool reads a boolean (false when absent).
+func (t *table) Bool(k string) bool { return t.boolean(k) }
+
+// Date reads a TOML local date.
+func (t *table) Date(k string) Date { return t.date(k) }
+
+// Sub reads a sub-table, or nil when absent.
+func (t *table) Sub(k string) *Table { return t.sub(k) }
+
+// Strings reads an array of strings (a lone string is one).
+func (t *table) Strings(k string) []string { return t.strings(k) }
+
+// List reads an array of tables ([[k]]).
+func (t *table) List(k string) []*Table { return t.list(k) }
+
+// Raw reads a key as the TOML parser gave it (string, int64, float64,
+// bool, time.Time, []any, map[string]any), for a shape the other readers
+// do not cover; the caller checks it and reports with Doc.Errorf.
+func (t *table) Raw(k string) (any, bool) {
+	t.use(k)
+	v, ok := t.m[k]
+	return v, ok
+}
+
+// Has reports whether the key is written, without reading it.
+func (t *table) Has(k string) bool {
+	_, ok := t.m[k]
+	return ok
+}
+
+// Keys lists the table's keys, sorted, without reading them.
+func (t *table) Keys() []string {
+	out := make([]string, 0, len(t.m))
+	for k := range t.m {
+		out = append(out, k)
+	}
+	sort.Strings(out)
+	return out
+}
+
+// Path is the table's key path, "" for the root.
+func (t *table) Path() string { return t.path }
+
+// Done reports every key of the table that no reader asked for. Call it
+// on every table once its known keys are read; nil is allowed.
+func (t *table) Done() { t.done() }
+
+// Suggest returns the known word closest to word, if it is close enough
+// to be a slip of the keyboard (an edit distance of 1 for short words, 2
+// from five letters on, 3 from nine; case is ignored), else "".
+func Suggest(word string, known []string) string {
+	w := strings.ToLower(word)
+	limit := 1
+	switch {
+	case len(w) >= 9:
+		limit = 3
+	case len(w) >= 5:
+		limit = 2
+	}
+	best, bestD := "", limit+1
+	for _, k := range known {
+		if k == word {
+			continue
+		}
+		if d := editDistance(w, strings.ToLower(k)); d < bestD {
+			best, bestD = k, d
+		}
+	}
+	return best
+}
+
+// DidYouMean is " (did you mean "x"?)" for the known word closest to
+// word, or "".
+func DidYouMean(word string, known []string) string {
+	if s := Suggest(word, known); s != "" {
+		return " (did you mean \"" + s + "\"?)"
+	}
+	return ""
+}

@@ -1,0 +1,72 @@
+package quantity
+
+import (
+	"testing"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// kgPerM3PerLbPerGal: 1 lb/gal = 0.45359237 kg / 3.785411784 L = 119.826
+// kg/m3 (NIST Handbook 44, appendix C).
+const kgPerM3PerLbPerGal = 0.45359237 / 3.785411784 * 1000
+
+// The expected densities of the default grouts against published
+// figures: neat cement at 5.2 US gal per 94-lb sack weighs about 15.6
+// lb/gal (API/cementing tables for Class A/Type I at 5.2 gal/sk: 15.6
+// lb/gal, 1.18 ft3/sk, from memory) and meets Ohio Adm. Code 3745-9-07
+// (at most 5.2 gal per sack, at least 15 lb/gal).
+func TestGroutDensity(t *testing.T) {
+	y := DefaultYields()
+	neat, _ := y.Get(schema.NeatCement)
+	d, ok := neat.Density()
+	if !ok {
+		t.Fatal("neat cement has no density")
+	}
+	lbGal := d / kgPerM3PerLbPerGal
+	near(t, "neat cement lb/gal", lbGal, 15.6, 0.05)
+	if lbGal < 15 || neat.Water.In(schema.USGallons) > 5.2+1e-9 {
+		t.Errorf("neat cement default %.2f lb/gal with %.2f gal/sack breaks Ohio 3745-9-07", lbGal, neat.Water.In(schema.USGallons))
+	}
+	// a 25-kg bag keeps the mix: same density, water in proportion
+	// (5.2 gal x 25 / 42.638 kg = 3.049 gal = 11.54 L)
+	f := fill(0, 1, schema.NeatCement)
+	f.BagMass = 25
+	m, _ := y.For(f)
+	d25, _ := m.Density()
+	near(t, "25-kg sack density", d25, d, 1e-9)
+	near(t, "25-kg sack water L", m.Water.In(schema.Litres), 5.2*3.785411784*25/(94*0.45359237), 1e-9)
+	// a dry material has none
+	if chips, _ := y.Get(schema.BentoniteChips); func() bool { _, ok := chips.Density(); return ok }() {
+		t.Error("chips have a slurry density")
+	}
+}
+
+// USGS National Field Manual, chapter A4: the water in a well is V =
+// 0.0408 x H x D^2 US gal (H ft of water, D in. inside diameter), and at
+// least three well volumes are purged. 2-in Sch 40 PVC has a 2.067-in
+// ID (ASTM D1785): 0.0408 x 2.067^2 = 0.17432 gal/ft. With the static
+// level 12 ft below ground and the string's bottom at 30 ft, H = 18 ft:
+// 3.1377 gal, purge 9.413 gal. A pack of porosity 0.30 from 20 to 30 ft
+// in an 8.25-in hole (0.34046 ft2/ft annulus, 2.5469 gal/ft) adds 0.30 x
+// 10 x 2.5469 = 7.6406 gal of pore water.
+func TestWellVolumeUSGS(t *testing.T) {
+	w := imperial()
+	hole(w, 0, ft(30), in(8.25))
+	str(w, "main", ft(-2.5), ft(20), ft(30), sch40Two)
+	w.Fills = []schema.Fill{fill(ft(20), ft(30), schema.FilterPack)}
+	w.WaterLevels = []schema.WaterLevel{{Depth: ft(14), Kind: schema.FirstEncountered}, {Depth: ft(12), Kind: schema.Static}}
+	vs := WellVolumes(w, 0)
+	if len(vs) != 1 {
+		t.Fatalf("%d volumes", len(vs))
+	}
+	usgs := 0.0408 * 2.067 * 2.067 * 18
+	near(t, "casing gal", vs[0].Casing.In(schema.USGallons), usgs, 1e-3) // 0.0408 is given to 3 figures
+	near(t, "purge gal (USGS)", vs[0].Purge().In(schema.USGallons), 9.413, 0.005)
+	withPack := WellVolumes(w, 0.30)[0]
+	near(t, "pack pore gal", withPack.Pack.In(schema.USGallons), 7.6406, 5e-4)
+	// a level below the bottom leaves nothing to purge
+	w.WaterLevels = []schema.WaterLevel{{Depth: ft(31), Kind: schema.Static}}
+	if vs := WellVolumes(w, 0); len(vs) != 0 {
+		t.Errorf("dry well: %+v", vs)
+	}
+}

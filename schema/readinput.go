@@ -1,0 +1,145 @@
+package schema
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"io/fs"
+	"os"
+	"syscall"
+)
+
+// Size limits of what tremie reads, far above any real file: a well file
+// of 150 lithology intervals is about 30 KB, and a logo is at most 1 MiB.
+const (
+	MaxTextFile  = 8 << 20  // a well, project, profile or yields file
+	MaxImageFile = 64 << 20 // a wall image or logo, before its own checks
+	MaxNesting   = 64       // arrays and inline tables inside each other
+)
+
+// ErrNotRegular is wrapped by ReadInput's error for a FIFO, device,
+// socket or directory named as an input.
+var ErrNotRegular = errors.New("not a regular file")
+
+// ReadInput reads a file tremie takes as input: only a regular file
+// (a FIFO would block every command, a device such as /dev/zero would
+// never end), and at most limit bytes. The file is opened without
+// blocking and checked on the open descriptor, so a FIFO put in its
+// place after a look cannot hang the run.
+func ReadInput(path string, limit int64) ([]byte, error) {
+	f, err := os.OpenFile(path, os.O_RDONLY|syscall.O_NONBLOCK, 0)
+	if err != nil {
+		return nil, err
+	}
+	defer f.Close()
+	st, err := f.Stat()
+	if err != nil {
+		return nil, err
+	}
+	if !st.Mode().IsRegular() {
+		return nil, &fs.PathError{Op: "read", Path: path, Err: fmt.Errorf("%w (%s)", ErrNotRegular, kindOf(st.Mode()))}
+	}
+	if st.Size() > limit {
+		return nil, &fs.PathError{Op: "read", Path: path, Err: fmt.Errorf("%d bytes, more than the %d a file of this kind may have", st.Size(), limit)}
+	}
+	data, err := io.ReadAll(io.LimitReader(f, limit+1))
+	if err != nil {
+		return nil, err
+	}
+	if int64(len(data)) > limit {
+		return nil, &fs.PathError{Op: "read", Path: path, Err: fmt.Errorf("more than the %d bytes a file of this kind may have", limit)}
+	}
+	return data, nil
+}
+
+func kindOf(m fs.FileMode) string {
+	switch {
+	case m.IsDir():
+		return "a directory"
+	case m&fs.ModeNamedPipe != 0:
+		return "a named pipe"
+	case m&fs.ModeDevice != 0, m&fs.ModeCharDevice != 0:
+		return "a device"
+	case m&fs.ModeSocket != 0:
+		return "a socket"
+	}
+	return "not a plain file"
+}
+
+// CheckNesting reports, before the TOML parser sees the text, the first
+// place where arrays and inline tables nest deeper than max: the parser
+// recurses once per level, and a small file of ten thousand nested
+// braces would take it minutes and gigabytes. Strings and comments are
+// skipped, so brackets inside them do not count.
+func CheckNesting(name string, data []byte, max int) *Error {
+	depth, line, col := 0, 1, 0
+	for i := 0; i < len(data); i++ {
+		c := data[i]
+		col++
+		switch c {
+		case '\n':
+			line, col = line+1, 0
+		case '#':
+			for i+1 < len(data) && data[i+1] != '\n' {
+				i++
+			}
+		case '"', '\'':
+			n := skipString(data, i)
+			for _, b := range data[i:n] {
+				if b == '\n' {
+					line, col = line+1, 0
+				} else {
+					col++
+				}
+			}
+			i = n - 1
+		case '[', '{':
+			depth++
+			if depth > max {
+				return &Error{File: name, Line: line, Col: col, Msg: fmt.Sprintf("arrays and inline tables nest more than %d deep here; no well file needs that", max)}
+			}
+		case ']', '}':
+			if depth > 0 {
+				depth--
+			}
+		}
+	}
+	return nil
+}
+
+// skipString returns the index just past the string (basic or literal,
+// one- or multi-line) that opens at data[i]; an unclosed string runs to
+// the end of its line (one-line) or of the data (multi-line), which the
+// parser then reports.
+func skipString(data []byte, i int) int {
+	q := data[i]
+	if i+2 < len(data) && data[i+1] == q && data[i+2] == q {
+		delim := []byte{q, q, q}
+		for j := i + 3; j+2 < len(data)+0; j++ {
+			if q == '"' && data[j] == '\\' {
+				j++
+				continue
+			}
+			if data[j] == q && data[j+1] == delim[1] && data[j+2] == delim[2] {
+				// A closing run may carry up to two more quotes.
+				k := j + 3
+				for n := 0; n < 2 && k < len(data) && data[k] == q; n++ {
+					k++
+				}
+				return k
+			}
+		}
+		return len(data)
+	}
+	for j := i + 1; j < len(data); j++ {
+		switch {
+		case q == '"' && data[j] == '\\':
+			j++
+		case data[j] == q:
+			return j + 1
+		case data[j] == '\n':
+			return j
+		}
+	}
+	return len(data)
+}

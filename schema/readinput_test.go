@@ -1,0 +1,83 @@
+package schema
+
+import (
+	"errors"
+	"os"
+	"path/filepath"
+	"strings"
+	"syscall"
+	"testing"
+	"time"
+)
+
+// TestReadInputRefusesWhatNeverEnds: a FIFO, a device and an oversize
+// file are refused at once, without blocking or reading to the end.
+func TestReadInputRefusesWhatNeverEnds(t *testing.T) {
+	dir := t.TempDir()
+	fifo := filepath.Join(dir, "w.toml")
+	if err := syscall.Mkfifo(fifo, 0o644); err != nil {
+		t.Skipf("no FIFOs here: %v", err)
+	}
+	done := make(chan error, 1)
+	go func() { _, err := ReadInput(fifo, MaxTextFile); done <- err }()
+	select {
+	case err := <-done:
+		if !errors.Is(err, ErrNotRegular) {
+			t.Errorf("FIFO: err = %v, want ErrNotRegular", err)
+		}
+	case <-time.After(5 * time.Second):
+		t.Fatal("reading a FIFO blocked")
+	}
+	if _, err := os.Stat("/dev/zero"); err == nil {
+		link := filepath.Join(dir, "zero.toml")
+		if err := os.Symlink("/dev/zero", link); err == nil {
+			if _, err := ReadInput(link, MaxTextFile); !errors.Is(err, ErrNotRegular) || !strings.Contains(err.Error(), "device") {
+				t.Errorf("/dev/zero: err = %v", err)
+			}
+		}
+	}
+	big := filepath.Join(dir, "big.toml")
+	if err := os.WriteFile(big, make([]byte, 2048), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if _, err := ReadInput(big, 1024); err == nil || !strings.Contains(err.Error(), "more than the 1024") {
+		t.Errorf("oversize: err = %v", err)
+	}
+	if _, err := ReadInput(dir, MaxTextFile); !errors.Is(err, ErrNotRegular) {
+		t.Errorf("directory: err = %v", err)
+	}
+	// LoadFile names the file and says why.
+	_, err := LoadFile(fifo)
+	if err == nil || !strings.Contains(err.Error(), fifo+": cannot read") || !strings.Contains(err.Error(), "named pipe") {
+		t.Errorf("LoadFile(FIFO) = %v", err)
+	}
+}
+
+// TestCheckNesting counts only real brackets: those in strings and
+// comments, and the one-level table headers, do not count.
+func TestCheckNesting(t *testing.T) {
+	// The 65th brace stands after "x = " and 64 "{a=": column 4 + 192 + 1.
+	deep := "x = " + strings.Repeat("{a=", 100) + "1" + strings.Repeat("}", 100)
+	e := CheckNesting("w.toml", []byte("# header\n"+deep), 64)
+	if e == nil || e.Line != 2 || e.Col != 4+64*3+1 {
+		t.Fatalf("deep inline tables: %v", e)
+	}
+	ok := []string{
+		"[well]\nid = \"[[[[[[[[\"\n",
+		"a = '{{{{{{{{{{'\n# [[[[[[[[[[[[[[[[[[[\n",
+		"s = \"\"\"\n[[[[[[[[[[[[[\n\"\"\"\nt = '''{{{{{{{{{{'''\n",
+		"e = \"quote \\\" [[[[[[[[\"\n",
+		"[[fill]]\n[[fill.tag]]\nx = [[1, 2], [3, 4]]\n",
+	}
+	for _, s := range ok {
+		if e := CheckNesting("w.toml", []byte(s), 4); e != nil {
+			t.Errorf("%q: %v", s, e)
+		}
+	}
+	// Load stops a ten-thousand-deep file at once, with its position.
+	start := time.Now()
+	_, err := Load("deep.toml", []byte("x = "+strings.Repeat("[", 10000)+strings.Repeat("]", 10000)))
+	if err == nil || !strings.Contains(err.Error(), "deep.toml:1:") || time.Since(start) > 5*time.Second {
+		t.Errorf("deep arrays: %v after %v", err, time.Since(start))
+	}
+}
