@@ -117,7 +117,7 @@ func tally(in Input) string {
 		}
 	}
 	var parts []string
-	for _, s := range []table.Status{table.Clean, table.Warnings, table.Errors, table.Waived, table.Unreadable} {
+	for _, s := range []table.Status{table.Clean, table.Warnings, table.Errors, table.Waived, table.Planned, table.Unreadable} {
 		if counts[s] > 0 {
 			parts = append(parts, fmt.Sprintf("%d %s", counts[s], s))
 		}

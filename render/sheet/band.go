@@ -6,6 +6,7 @@ import (
 	"strings"
 
 	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
 )
 
@@ -409,6 +410,10 @@ func (l *layout) amountRows() [][]string {
 		if r.Fill.Gradation != "" {
 			name += " " + r.Fill.Gradation
 		}
+		if l.w.IsPlanned() {
+			rows = append(rows, []string{l.interval(r.Fill.Interval), name, l.calculated(r), l.toOrder(r), l.yield(r)})
+			continue
+		}
 		rows = append(rows, []string{l.interval(r.Fill.Interval), name, l.calculated(r), l.placed(r), ratio(r)})
 	}
 	return rows
@@ -435,14 +440,14 @@ var continueLineH = lineGap(sizeSmall) + 2
 // with the table's foot note or a continuation line.
 func (l *layout) amountsBoxHeight(w float64, rows [][]string, foot, more bool) float64 {
 	inner := w - 2*bandPad
-	_, hh := l.amountCells(amountHead(), inner, draw.Bold)
+	_, hh := l.amountCells(l.amountHead(), inner, draw.Bold)
 	h := bandHeadH + bandPad + hh
 	for _, r := range rows {
 		_, rh := l.amountCells(r, inner, draw.Regular)
 		h += rh
 	}
 	if foot {
-		f := amountsFoot(inner)
+		f := l.amountsFoot(inner)
 		h += 1 + f.height()
 	}
 	if more {
@@ -451,16 +456,25 @@ func (l *layout) amountsBoxHeight(w float64, rows [][]string, foot, more bool) f
 	return h + bandPad
 }
 
-func amountsFoot(width float64) textBlock {
+func (l *layout) amountsFoot(width float64) textBlock {
 	var foot textBlock
-	foot.add("Calculated: annulus between the recorded hole (or casing bore) and pipe outside diameters; bags at the yields in force.", draw.Italic, sizeTiny, width)
+	s := "Calculated: annulus between the recorded hole (or casing bore) and pipe outside diameters; bags at the yields in force."
+	if l.w.IsPlanned() {
+		s = fmt.Sprintf("Calculated: annulus between the design hole (or casing bore) and pipe outside diameters. To order: calculated plus %g %% (%s), rounded up to whole bags.", quantity.DefaultContingency, quantity.DefaultContingencySource)
+	}
+	foot.add(s, draw.Italic, sizeTiny, width)
 	return foot
 }
 
-func amountHead() []string {
+// amountHead is the amounts table's head: placed and ratio for a well as
+// built, to order and the yield for a design.
+func (l *layout) amountHead() []string {
 	h := make([]string, len(amountCols))
 	for i, c := range amountCols {
 		h[i] = c.head
+	}
+	if l.w.IsPlanned() {
+		h[3], h[4] = "To order", "Yield"
 	}
 	return h
 }
@@ -501,12 +515,12 @@ func (l *layout) amountBox(r draw.Rect, title string, rows [][]string, foot bool
 		y += rh
 		items = append(items, line(r.X+bandPad, y-1, r.Right()-bandPad, y-1, 0.3, lightGrey, ""))
 	}
-	drawRow(amountHead(), draw.Bold, "amounts-head")
+	drawRow(l.amountHead(), draw.Bold, "amounts-head")
 	for _, row := range rows {
 		drawRow(row, draw.Regular, "amounts-row")
 	}
 	if foot {
-		f := amountsFoot(inner)
+		f := l.amountsFoot(inner)
 		items = append(items, f.items(r.X+bandPad, y+1, grey, "amounts-note")...)
 		y += 1 + f.height()
 	}

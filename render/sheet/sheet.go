@@ -9,6 +9,7 @@ package sheet
 import (
 	"errors"
 	"fmt"
+	"strings"
 	"time"
 
 	"github.com/tremie-dev/tremie/render/draw"
@@ -80,7 +81,7 @@ func Layout(w *schema.Well, in Inputs, opt Options) (*draw.Document, error) {
 		return nil, fmt.Errorf("sheet %s: %w", w.ID, err)
 	}
 	doc := &draw.Document{
-		Title:   fmt.Sprintf("%s well construction log", w.ID),
+		Title:   fmt.Sprintf("%s %s", w.ID, strings.ToLower(l.sheetTitle())),
 		Subject: joinNonEmpty(" · ", w.Project, w.Site),
 		Author:  joinNonEmpty(", ", in.TitleBlock.Consultant, w.LoggedBy),
 		Date:    documentDate(w, opt.Date),

@@ -267,7 +267,7 @@ func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
 	}
 	idW := min(draw.TextWidth(draw.Bold, sizeTitle, id), r.W*0.4)
 	items = append(items, text(x, r.Y+20, fit(id, draw.Bold, sizeTitle, r.W*0.4), draw.Bold, sizeTitle, draw.Start, ink, "well-id"))
-	items = append(items, text(x+idW+8, r.Y+13, "WELL CONSTRUCTION LOG", draw.Bold, sizeHeading, draw.Start, ink, ""),
+	items = append(items, text(x+idW+8, r.Y+13, l.sheetTitle(), draw.Bold, sizeHeading, draw.Start, ink, "sheet-title"),
 		text(x+idW+8, r.Y+22, fit(subtitle, draw.Regular, sizeSmall, r.W*0.35), draw.Regular, sizeSmall, draw.Start, grey, ""))
 	// Sheet number, boxed at the right.
 	sheetW := 74.0
@@ -320,6 +320,15 @@ func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
 		y += rh
 	}
 	return items
+}
+
+// sheetTitle names the kind of sheet: the log of a well as built, or the
+// design of a planned one.
+func (l *layout) sheetTitle() string {
+	if l.w.IsPlanned() {
+		return "PROPOSED WELL DESIGN"
+	}
+	return "WELL CONSTRUCTION LOG"
 }
 
 // scaleBar draws a bar of a round length at the vertical scale, in
