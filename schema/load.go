@@ -410,6 +410,7 @@ func (r *reader) fill(t *table, w *Well) Fill {
 	if f.GrainMin > 0 && f.GrainMax > 0 && f.GrainMin > f.GrainMax {
 		r.errAt(t.keyPath("grain_max"), "grain_max is smaller than grain_min")
 	}
+	r.gradingCurve(t, &f)
 	f.Method = Placement(t.oneOf("method"))
 	f.Within = t.str("within")
 	if f.Within != "" {
@@ -563,4 +564,25 @@ func (r *reader) surface(t *table, u Units) Surface {
 		r.errAt(t.path, "a flush-mount completion has no [surface.protective]")
 	}
 	return s
+}
+
+// gradingCurve reads d10, d30 and d60 (mm, always), which must not
+// decrease: by definition 10 % of the mass is finer than d10, 30 % than
+// d30, 60 % than d60.
+func (r *reader) gradingCurve(t *table, f *Fill) {
+	prev, prevKey := Diameter(0), ""
+	for _, k := range []struct {
+		name string
+		to   *Diameter
+	}{{"d10", &f.D10}, {"d30", &f.D30}, {"d60", &f.D60}} {
+		v, ok := t.positive(k.name)
+		if !ok {
+			continue
+		}
+		*k.to = Diameter(v)
+		if *k.to < prev {
+			r.errAt(t.keyPath(k.name), "%s = %v mm is smaller than %s = %v mm: a grading curve does not fall", k.name, v, prevKey, float64(prev))
+		}
+		prev, prevKey = *k.to, k.name
+	}
 }

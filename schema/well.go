@@ -322,7 +322,10 @@ type Fill struct {
 	Gradation string   // sieve range as written, e.g. "20/40"
 	GrainMin  Diameter // finest grain size (from the sieve range or written), 0 if unknown
 	GrainMax  Diameter // coarsest grain size, 0 if unknown
-	Method    Placement
+	// D10, D30, D60 are the grain sizes 10, 30 and 60 % of the pack is
+	// finer than, by mass (its grading curve, ASTM D6913), in mm; 0 if not given.
+	D10, D30, D60 Diameter
+	Method        Placement
 	// Within names the outer casing the fill was placed inside; "" means
 	// the borehole annulus outside every casing.
 	Within string

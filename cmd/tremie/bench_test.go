@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"io"
 	"os"
-	"path/filepath"
 	"runtime"
 	"sync"
 	"sync/atomic"
@@ -13,16 +12,16 @@ import (
 
 	"github.com/BurntSushi/toml"
 
-	"github.com/tremie-dev/tremie/cmd/internal/batch"
-	"github.com/tremie-dev/tremie/cmd/internal/incremental"
-	"github.com/tremie-dev/tremie/cmd/internal/synth"
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/render/out"
+	"github.com/tremie-dev/tremie/render/pipeline"
+	"github.com/tremie-dev/tremie/render/pipeline/batch"
 	"github.com/tremie-dev/tremie/render/sheet"
 	"github.com/tremie-dev/tremie/schema"
-	"github.com/tremie-dev/tremie/schema/project"
 	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
+	"github.com/tremie-dev/tremie/schema/synth"
+	"github.com/tremie-dev/tremie/templates"
 )
 
 // wellsPerSecond reports the benchmark's throughput in wells.
@@ -72,7 +71,11 @@ func typicalDoc(b *testing.B) *sheetDoc {
 		b.Fatal(err)
 	}
 	fs := rules.Check(w, nil)
-	page, _ := pageFor("letter", false)
+	tpl, err := templates.Load("letter", false)
+	if err != nil {
+		b.Fatal(err)
+	}
+	page := sheet.FromTemplate(tpl)
 	in := sheet.Inputs{Findings: fs, Quantities: quantity.Compute(w, nil)}
 	doc, err := sheet.Layout(w, in, sheet.Options{Page: page, Date: "2026-01-01T00:00:00Z"})
 	if err != nil {
@@ -147,62 +150,28 @@ func BenchmarkSVGAndPDFOneWell(b *testing.B) {
 	wellsPerSecond(b, 1)
 }
 
-// renderIncremental is the project render loop with the cache: what
-// tremie render PROJECT_DIR does once the batch runner and the cache are
-// wired in. It draws SVG and PDF through renderWell.
+// renderIncremental is tremie render PROJECT_DIR --format svg,pdf
+// through the pipeline, as the command runs it but without printing.
 func renderIncremental(b *testing.B, dir string, force bool) batch.Summary {
-	p, err := project.Load(dir)
+	run, err := pipeline.Resolve([]string{dir}, pipeline.Options{Quiet: true})
+	if err != nil || len(run.Problems) > 0 {
+		b.Fatal(err, run.Problems)
+	}
+	formats, err := out.ParseFormats("svg,pdf")
 	if err != nil {
 		b.Fatal(err)
 	}
-	files, err := p.WellFiles()
+	rep, err := run.Render(pipeline.RenderOptions{Formats: formats, DPI: 150, Force: force, Version: Version})
 	if err != nil {
 		b.Fatal(err)
 	}
-	cache, _ := incremental.Load(p.Output)
-	base := incremental.NewBase(incremental.Shared{Version: Version, Settings: p.Settings(), Template: []byte(p.Page), Options: []string{"svg", "pdf"}})
-	os.MkdirAll(p.Output, 0o755)
-	projects := map[string]*project.Project{}
-	for _, f := range files {
-		projects[f] = p
+	if rep.SaveErr != nil {
+		b.Fatal(rep.SaveErr)
 	}
-	opts := renderOptions{outDir: p.Output, formats: []string{"svg", "pdf"}, dpi: 150, projects: projects, date: "2026-01-01T00:00:00Z"}
-	_, sum := batch.Run(files, batch.Options{}, func(i int, f string) (struct{}, batch.Outcome, error) {
-		key := p.Key(f)
-		data, err := os.ReadFile(f)
-		if err != nil {
-			cache.Forget(key)
-			return struct{}{}, batch.Done, err
-		}
-		hash := base.Well(data)
-		if !force && cache.Fresh(key, hash, nil) {
-			return struct{}{}, batch.Skipped, nil
-		}
-		res, err := renderWell(f, opts)
-		if err != nil {
-			cache.Forget(key)
-			return struct{}{}, batch.Done, err
-		}
-		var outs []string
-		for _, o := range res.Outputs {
-			rel, _ := filepath.Rel(p.Output, o)
-			outs = append(outs, rel)
-		}
-		cache.Record(key, hash, outs)
-		return struct{}{}, batch.Done, nil
-	})
-	var present []string
-	for _, f := range files {
-		present = append(present, p.Key(f))
+	if rep.Summary.Failed > 0 {
+		b.Fatalf("%d wells failed", rep.Summary.Failed)
 	}
-	cache.Stale(present)
-	if err := cache.Save(); err != nil {
-		b.Fatal(err)
-	}
-	if sum.Failed > 0 {
-		b.Fatalf("%d wells failed", sum.Failed)
-	}
-	return sum
+	return rep.Summary
 }
 
 // peakHeap samples the heap while fn runs and reports its peak, in MB:

@@ -10,7 +10,7 @@ import (
 	"github.com/pdfcpu/pdfcpu/pkg/api"
 	"github.com/pdfcpu/pdfcpu/pkg/pdfcpu/model"
 
-	"github.com/tremie-dev/tremie/cmd/internal/synth"
+	"github.com/tremie-dev/tremie/schema/synth"
 )
 
 func TestBookBindsEveryReadableWell(t *testing.T) {

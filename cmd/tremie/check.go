@@ -2,13 +2,11 @@ package main
 
 import (
 	"encoding/json"
-	"flag"
 	"fmt"
-	"github.com/tremie-dev/tremie/cmd/internal/batch"
-	"github.com/tremie-dev/tremie/schema/quantity"
 	"io"
 	"strings"
 
+	"github.com/tremie-dev/tremie/render/pipeline"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/rules"
 )
@@ -18,6 +16,8 @@ func init() {
 		name:    "check",
 		summary: "check well files against the rules of practice",
 		run:     runCheck,
+		args:    "FILE|DIR...",
+		about:   "A well file inside a project directory is judged with that project's profile and yields,\nwhether it is named as a file, as the wells folder or as the project.",
 	})
 }
 
@@ -30,6 +30,7 @@ const checkCaution = "These checks support, and never replace, review by a licen
 type fileResult struct {
 	Path     string          `json:"file"`
 	WellID   string          `json:"well,omitempty"`
+	Profile  string          `json:"profile"` // the profile in force: "default thresholds" or "profile NAME"
 	Findings []rules.Finding `json:"findings"`
 	Errors   []*schema.Error `json:"-"`
 }
@@ -53,23 +54,6 @@ type jsonError struct {
 // Unreadable reports whether the file could not be read or parsed.
 func (r fileResult) Unreadable() bool { return len(r.Errors) > 0 }
 
-// checkFile loads and checks one well file. It touches nothing shared, so
-// files may be checked in parallel.
-func checkFile(path string, prof *rules.Profile) fileResult {
-	res := fileResult{Path: path, Findings: []rules.Finding{}}
-	w, err := schema.LoadFile(path)
-	if err != nil {
-		res.Errors = schema.Errors(path, err)
-		return res
-	}
-	res.WellID = w.ID
-	res.Findings = rules.Check(w, prof)
-	if res.Findings == nil {
-		res.Findings = []rules.Finding{}
-	}
-	return res
-}
-
 // checkOptions are the parsed command line of tremie check.
 type checkOptions struct {
 	format  string
@@ -77,117 +61,72 @@ type checkOptions struct {
 	paths   []string
 }
 
-// parseInterleaved parses flags that may come before, between or after
-// the file arguments.
-func parseInterleaved(fset *flag.FlagSet, args []string) ([]string, error) {
-	var rest []string
-	for {
-		if err := fset.Parse(args); err != nil {
-			return nil, err
-		}
-		args = fset.Args()
-		if len(args) == 0 {
-			return rest, nil
-		}
-		if args[0] == "--" {
-			return append(rest, args[1:]...), nil
-		}
-		rest = append(rest, args[0])
-		args = args[1:]
-	}
-}
-
-func parseCheckArgs(args []string, stderr io.Writer) (checkOptions, bool) {
+func parseCheckArgs(args []string, stdout, stderr io.Writer) (checkOptions, int, bool) {
 	var o checkOptions
-	fset := flag.NewFlagSet("check", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	fset.StringVar(&o.format, "format", "text", "output format: text or json")
-	fset.StringVar(&o.profile, "profile", "", "rule profile TOML setting thresholds and severities")
-	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie check [--format text|json] [--profile FILE] FILE|DIR...")
-		fset.PrintDefaults()
-	}
-	paths, err := parseInterleaved(fset, args)
-	if err != nil {
-		return o, false
+	fset := newFlags("check", stdout, stderr)
+	fset.StringVar(&o.format, "format", "text", "output `format`: text or json")
+	fset.StringVar(&o.profile, "profile", "", "rule profile TOML `file` setting thresholds and severities (default: the project's)")
+	paths, code, ok := fset.parse(args)
+	if !ok {
+		return o, code, false
 	}
 	if o.format != "text" && o.format != "json" {
-		fmt.Fprintf(stderr, "tremie check: --format must be text or json, not %q\n", o.format)
-		return o, false
+		return o, fset.usageError("--format must be text or json, not %q", o.format), false
 	}
 	if len(paths) == 0 {
-		fmt.Fprintln(stderr, "tremie check: name at least one well file or directory")
-		fset.Usage()
-		return o, false
+		return o, fset.usageError("name at least one well file or directory"), false
 	}
 	o.paths = paths
-	return o, true
+	return o, exitOK, true
 }
 
 func runCheck(args []string, stdout, stderr io.Writer) int {
-	opts, ok := parseCheckArgs(args, stderr)
+	opts, code, ok := parseCheckArgs(args, stdout, stderr)
 	if !ok {
-		return exitUsage
+		return code
 	}
-	in, findErrs := collectInputs(opts.paths)
-	files := in.files
-	for _, e := range findErrs {
-		fmt.Fprintf(stderr, "tremie check: %v\n", e)
-	}
-	profile := opts.profile
-	if profile == "" {
-		profile = in.profile
-	}
-	var prof *rules.Profile
-	if profile != "" {
-		p, err := rules.LoadProfile(profile)
-		if err != nil {
-			fmt.Fprintln(stderr, schema.Errors(profile, err))
-			return exitInput
+	run, code, ok := resolve("check", opts.paths, pipeline.Options{Profile: opts.profile}, stderr)
+	if !ok {
+		if opts.format == "json" && run != nil {
+			if err := writeCheckJSON(stdout, unreadableInputs(run.Problems)); err != nil {
+				fmt.Fprintf(stderr, "tremie check: writing the report: %v\n", err)
+			}
 		}
-		prof = p
+		return code
 	}
-	if in.yields != "" {
-		y, err := quantity.LoadYields(in.yields)
-		if err != nil {
-			fmt.Fprintln(stderr, err)
-			return exitInput
-		}
-		prof = withYields(prof, y)
-	}
-	if len(files) == 0 && len(findErrs) == 0 {
-		fmt.Fprintf(stderr, "tremie check: no well files found in %s\n", strings.Join(opts.paths, ", "))
-		return exitInput
-	}
-	defer lessEagerGC()()
-	// Every file on its own worker; results come back in input order, so
-	// the report is the same on every run.
-	res, _ := batch.Run(files, batch.Options{Progress: batch.Terminal(), Label: "checking"}, func(_ int, f string) (fileResult, batch.Outcome, error) {
-		return checkFile(f, prof), batch.Done, nil
-	})
-	results := make([]fileResult, len(res))
-	for i, r := range res {
-		results[i] = r.Value
-		if r.Err != nil { // a panic caught by the runner
-			results[i] = fileResult{Path: files[i], Errors: []*schema.Error{{File: files[i], Msg: r.Err.Error()}}}
-		}
-	}
-	for _, r := range results {
-		if len(r.Errors) > 0 {
-			fmt.Fprintln(stderr, schema.ErrorList(r.Errors))
+	wells := run.PrepareAll(pipeline.AllRules, "checking")
+	results := make([]fileResult, len(wells))
+	for i, w := range wells {
+		results[i] = fileResult{Path: w.Path, WellID: w.ID, Findings: w.Findings, Profile: w.Setting.ProfileLabel()}
+		if w.Err != nil {
+			results[i].Errors = schema.Errors(w.Path, w.Err)
+			results[i].Findings = []rules.Finding{}
+			fmt.Fprintln(stderr, schema.ErrorList(results[i].Errors))
 		}
 	}
 	var err error
 	if opts.format == "json" {
-		err = writeCheckJSON(stdout, results)
+		err = writeCheckJSON(stdout, append(results, unreadableInputs(run.Problems)...))
 	} else {
-		err = writeCheckText(stdout, results, prof)
+		err = writeCheckText(stdout, results, run.ProfileLabels(), checkCautions(run))
 	}
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie check: writing the report: %v\n", err)
 		return exitOutput
 	}
-	return checkExit(results, len(findErrs) > 0)
+	return checkExit(results, len(run.Problems) > 0)
+}
+
+// unreadableInputs are the project, profile and yields files among a
+// run's problems, each with its errors, for the JSON report.
+func unreadableInputs(problems []error) []fileResult {
+	var out []fileResult
+	for _, e := range problems {
+		if list := schema.Errors("", e); list[0].File != "" {
+			out = append(out, fileResult{Path: list[0].File, Findings: []rules.Finding{}, Errors: list})
+		}
+	}
+	return out
 }
 
 // checkExit is 2 when any file could not be found, read or parsed, else 1
@@ -208,7 +147,9 @@ func checkExit(results []fileResult, missing bool) int {
 	return code
 }
 
-func writeCheckText(w io.Writer, results []fileResult, prof *rules.Profile) error {
+// writeCheckText writes the findings, the tally and, for each profile in
+// force, its caution (checkCaution for the defaults).
+func writeCheckText(w io.Writer, results []fileResult, profiles, cautions []string) error {
 	var b strings.Builder
 	var errs, warns, waived, bad, clean int
 	for _, r := range results {
@@ -225,20 +166,15 @@ func writeCheckText(w io.Writer, results []fileResult, prof *rules.Profile) erro
 		t := rules.Count(r.Findings)
 		errs, warns, waived = errs+t.Errors, warns+t.Warnings, waived+t.Waived
 	}
-	profName := "default thresholds"
-	if prof != nil {
-		profName = "profile " + prof.Name
-	}
 	fmt.Fprintf(&b, "checked %s (%s): %s, %s, %s waived; %d without errors",
-		checkCount(len(results), "file"), profName, checkCount(errs, "error"), checkCount(warns, "warning"), fmt.Sprint(waived), clean)
+		checkCount(len(results), "file"), strings.Join(profiles, "; "), checkCount(errs, "error"), checkCount(warns, "warning"), fmt.Sprint(waived), clean)
 	if bad > 0 {
 		fmt.Fprintf(&b, "; %s could not be read", checkCount(bad, "file"))
 	}
-	caution := checkCaution
-	if !prof.IsDefault() {
-		caution = rules.Caution(prof) // names the profile, not "defaults"
+	for _, c := range cautions {
+		b.WriteString("\n" + c)
 	}
-	b.WriteString("\n" + caution + "\n")
+	b.WriteString("\n")
 	_, err := io.WriteString(w, b.String())
 	return err
 }
@@ -264,4 +200,25 @@ func checkCount(n int, word string) string {
 		return "1 " + word
 	}
 	return fmt.Sprintf("%d %ss", n, word)
+}
+
+// checkCautions are the closing cautions of a check: checkCaution under
+// the defaults, else the caution naming each profile in force.
+func checkCautions(run *pipeline.Run) []string {
+	var out []string
+	seen := map[string]bool{}
+	for _, s := range run.Settings {
+		c := checkCaution
+		if !s.Profile.IsDefault() {
+			c = rules.Caution(s.Profile) // names the profile, not "defaults"
+		}
+		if !seen[c] {
+			seen[c] = true
+			out = append(out, c)
+		}
+	}
+	if len(out) == 0 {
+		out = append(out, checkCaution)
+	}
+	return out
 }

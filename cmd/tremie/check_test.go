@@ -65,8 +65,9 @@ bottom = 36.0
 uscs = "SP"
 `
 
-// unsealedWell has grout straight on the pack (line 31: the grout's bottom).
-var unsealedWell = strings.Replace(sealedWell, `[[fill]]
+// unsealedWell (BAD-1) has grout straight on the pack (line 31: the
+// grout's bottom).
+var unsealedWell = strings.Replace(strings.Replace(sealedWell, `id = "OK-1"`, `id = "BAD-1"`, 1), `[[fill]]
 top = 20.0
 bottom = 23.0
 material = "bentonite-chips"
@@ -203,7 +204,7 @@ func TestCheckJSON(t *testing.T) {
 		t.Fatalf("%d results, want 3", len(got))
 	}
 	bad, ok, syn := got[0], got[1], got[2]
-	if bad.Well != "OK-1" || !bad.Readable || len(bad.Findings) == 0 {
+	if bad.Well != "BAD-1" || !bad.Readable || len(bad.Findings) == 0 {
 		t.Errorf("flawed file: %+v", bad)
 	}
 	found := false

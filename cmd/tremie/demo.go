@@ -1,15 +1,13 @@
 package main
 
 import (
-	"flag"
+	"errors"
 	"fmt"
 	"io"
-	"io/fs"
-	"os"
 	"path/filepath"
+	"strings"
 
 	"github.com/tremie-dev/tremie/cmd/tremie/demo"
-	"github.com/tremie-dev/tremie/render/out"
 )
 
 func init() {
@@ -17,6 +15,7 @@ func init() {
 		name:    "demo",
 		summary: "write the invented demo project into -o DIR, then check and draw it",
 		run:     runDemo,
+		about:   "DIR must be new or empty, unless --force.",
 	})
 }
 
@@ -39,18 +38,21 @@ var demoSteps = []struct {
 }
 
 func runDemo(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("demo", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	outDir := fset.String("o", "tremie-demo", "directory to write the demo project into")
-	if err := fset.Parse(args); err != nil {
-		return exitUsage
+	fset := newFlags("demo", stdout, stderr)
+	outDir := fset.String("o", "tremie-demo", "`directory` to write the demo project into")
+	force := fset.Bool("force", false, "write into DIR even if it is not empty, replacing the demo's files and outputs there")
+	rest, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
-	if fset.NArg() > 0 {
-		fmt.Fprintf(stderr, "tremie demo: unexpected argument %q (use -o DIR)\n", fset.Arg(0))
-		return exitUsage
+	if len(rest) > 0 {
+		return fset.usageError("unexpected argument %q (use -o DIR)", rest[0])
 	}
-	if err := writeDemo(*outDir); err != nil {
+	if err := demo.Write(*outDir, *force); err != nil {
 		fmt.Fprintf(stderr, "tremie demo: %v\n", err)
+		if errors.Is(err, demo.ErrNotEmpty) {
+			return exitUsage
+		}
 		return exitOutput
 	}
 	fmt.Fprintf(stdout, "tremie demo: wrote the Coldwater Mill demo project (invented data) to %s\n", *outDir)
@@ -60,8 +62,15 @@ func runDemo(args []string, stdout, stderr io.Writer) int {
 		if !ok {
 			continue
 		}
-		fmt.Fprintf(stdout, "\n$ tremie %s %s\n", step.name, joinArgs(step.args(*outDir)))
-		code := c.run(step.args(*outDir), stdout, stderr)
+		args := step.args(*outDir)
+		if *force && step.name == "render" {
+			args = append(args, "--force")
+		}
+		if quiet {
+			args = append([]string{"--quiet"}, args...)
+		}
+		fmt.Fprintf(stdout, "\n$ tremie %s %s\n", step.name, strings.Join(args, " "))
+		code := c.run(args, stdout, stderr)
 		// The demo holds a flawed well on purpose, so a findings exit is
 		// expected; an unreadable input or a failed write is not.
 		if code > exitFindings && code > worst {
@@ -69,39 +78,4 @@ func runDemo(args []string, stdout, stderr io.Writer) int {
 		}
 	}
 	return worst
-}
-
-func joinArgs(a []string) string {
-	s := ""
-	for i, x := range a {
-		if i > 0 {
-			s += " "
-		}
-		s += x
-	}
-	return s
-}
-
-// writeDemo copies the embedded project into dir, each file atomically.
-func writeDemo(dir string) error {
-	return fs.WalkDir(demo.FS, ".", func(path string, d fs.DirEntry, err error) error {
-		if err != nil {
-			return err
-		}
-		target := filepath.Join(dir, filepath.FromSlash(path))
-		if d.IsDir() {
-			return os.MkdirAll(target, 0o755)
-		}
-		if filepath.Ext(path) != ".toml" {
-			return nil
-		}
-		data, err := demo.FS.ReadFile(path)
-		if err != nil {
-			return fmt.Errorf("reading embedded %s: %w", path, err)
-		}
-		if err := os.MkdirAll(filepath.Dir(target), 0o755); err != nil {
-			return fmt.Errorf("creating %s: %w", filepath.Dir(target), err)
-		}
-		return out.WriteFileAtomic(target, data)
-	})
 }

@@ -1,12 +1,12 @@
 package main
 
 import (
-	"flag"
 	"fmt"
 	"io"
 	"path/filepath"
 
 	"github.com/tremie-dev/tremie/render/gis"
+	"github.com/tremie-dev/tremie/render/pipeline"
 	"github.com/tremie-dev/tremie/schema/crs"
 )
 
@@ -15,38 +15,32 @@ func init() {
 		name:    "export",
 		summary: "export a project's wells for GIS: one point per monitoring point (--format geojson|csv)",
 		run:     runExport,
+		args:    "PROJECT_DIR",
 	})
 }
 
 func runExport(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("export", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	format := fset.String("format", "geojson", "geojson (RFC 7946, WGS 84) or csv")
-	outFile := fset.String("o", "", "output file (default: stdout)")
-	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie export PROJECT_DIR [--format geojson|csv] [-o FILE]")
-		fset.PrintDefaults()
-	}
-	rest, err := parseInterleaved(fset, args)
-	if err != nil {
-		return exitUsage
+	fset := newFlags("export", stdout, stderr)
+	format := fset.String("format", "geojson", "`format`: geojson (RFC 7946, WGS 84) or csv")
+	outFile := fset.String("o", "", "output `file` (default: stdout)")
+	rest, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
 	if len(rest) != 1 {
-		fmt.Fprintln(stderr, "tremie export: name one project directory")
-		fset.Usage()
-		return exitUsage
+		return fset.usageError("name one project directory")
 	}
 	if *format != "geojson" && *format != "csv" {
-		fmt.Fprintf(stderr, "tremie export: --format must be geojson or csv, not %q\n", *format)
-		return exitUsage
+		return fset.usageError("--format must be geojson or csv, not %q", *format)
 	}
-	pw, code := loadProjectWells(rest[0], stderr)
-	if pw == nil {
+	_, p, wells, code := prepareProject(rest[0], stderr)
+	if p == nil {
 		return code
 	}
 	var projected *crs.CRS
-	if pw.proj.CRS != "" {
-		if projected, err = crs.Parse(pw.proj.CRS); err != nil || projected.Geographic() {
+	var err error
+	if p.CRS != "" {
+		if projected, err = crs.Parse(p.CRS); err != nil || projected.Geographic() {
 			projected = nil // a geographic project system leaves the projected columns to the wells
 		}
 	}
@@ -54,20 +48,13 @@ func runExport(args []string, stdout, stderr io.Writer) int {
 	if *outFile != "" {
 		dir = filepath.Dir(*outFile)
 	}
-	files := make([]string, len(pw.entries))
-	ids := make([]string, len(pw.entries))
-	for i, e := range pw.entries {
-		files[i] = e.File
-		if e.Well != nil {
-			ids[i] = e.Well.ID
-		}
+	names := pipeline.AssignNames(wells)
+	entries := pipeline.Entries(wells)
+	in := make([]gis.Input, len(wells))
+	for i, w := range wells {
+		in[i] = gis.Input{Entry: entries[i], Sheets: gis.SheetFiles(p.Output, names[w])}
 	}
-	names := assignNames(files, ids)
-	in := make([]gis.Input, len(pw.entries))
-	for i, e := range pw.entries {
-		in[i] = gis.Input{Entry: e, Sheets: gis.SheetFiles(pw.proj.Output, names[e.File])}
-	}
-	x := gis.Build(in, pw.proj.Units, projected, dir)
+	x := gis.Build(in, p.Units, projected, dir)
 	for _, s := range x.Skipped {
 		fmt.Fprintf(stderr, "%s: %s left out of the export: %s\n", s.File, or(s.ID, "well"), s.Reason)
 	}
@@ -86,7 +73,7 @@ func runExport(args []string, stdout, stderr io.Writer) int {
 		}
 		return code
 	}
-	if err := writeOutput(*outFile, data); err != nil {
+	if err := pipeline.WriteFile(*outFile, data); err != nil {
 		fmt.Fprintf(stderr, "tremie export: %v\n", err)
 		return exitOutput
 	}

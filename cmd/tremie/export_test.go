@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"github.com/tremie-dev/tremie/cmd/tremie/demo"
 	"os"
 	"path/filepath"
 	"strings"
@@ -12,7 +13,7 @@ import (
 // links relative to the file's folder, and the same bytes twice.
 func TestExportDemo(t *testing.T) {
 	dir := t.TempDir()
-	if err := writeDemo(dir); err != nil {
+	if err := demo.Write(dir, false); err != nil {
 		t.Fatal(err)
 	}
 	dst := filepath.Join(dir, "gis", "wells.geojson")

@@ -2,14 +2,12 @@ package main
 
 import (
 	"bytes"
-	"flag"
 	"fmt"
 	"io"
 	"slices"
 
 	"github.com/tremie-dev/tremie/render/features"
-	"github.com/tremie-dev/tremie/schema"
-	"github.com/tremie-dev/tremie/schema/project"
+	"github.com/tremie-dev/tremie/render/pipeline"
 )
 
 func init() {
@@ -17,49 +15,35 @@ func init() {
 		name:    "features",
 		summary: "list open-hole wall features with dip, dip direction, strike and pole (--format text|csv|json)",
 		run:     runFeatures,
+		args:    "FILE|DIR...",
 	})
 }
 
 func runFeatures(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("features", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	format := fset.String("format", "text", "output format: text, csv or json")
-	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie features [--format text|csv|json] FILE|DIR...")
-		fset.PrintDefaults()
-	}
-	paths, err := parseInterspersed(fset, args)
-	if err != nil {
-		return exitUsage
+	fset := newFlags("features", stdout, stderr)
+	format := fset.String("format", "text", "output `format`: text, csv or json")
+	paths, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
 	if !slices.Contains(features.Formats, *format) {
-		fmt.Fprintf(stderr, "tremie features: unknown format %q (text, csv or json)\n", *format)
-		return exitUsage
+		return fset.usageError("unknown format %q (text, csv or json)", *format)
 	}
 	if len(paths) == 0 {
-		fset.Usage()
-		return exitUsage
+		return fset.usageError("name at least one well file or directory")
 	}
-	in, errs := collectInputs(paths)
-	code := exitOK
-	for _, e := range errs {
-		fmt.Fprintf(stderr, "tremie features: %v\n", e)
-		code = exitInput
-	}
-	if len(in.files) == 0 && len(errs) == 0 {
-		fmt.Fprintln(stderr, "tremie features: no well files found")
-		return exitInput
+	run, code, ok := resolve("features", paths, pipeline.Options{}, stderr)
+	if !ok {
+		return code
 	}
 	var rows []features.Row
-	for _, f := range in.files {
-		w, err := schema.LoadFile(f)
-		if err != nil {
-			fmt.Fprintln(stderr, err)
+	for _, w := range run.PrepareAll(pipeline.AllRules, "reading") {
+		if w.Err != nil {
+			printErr(stderr, "features", w.Err)
 			code = exitInput
 			continue
 		}
-		project.Apply(in.projects[f], w)
-		rows = append(rows, features.Rows(f, w)...)
+		rows = append(rows, features.Rows(w.Path, w.Well)...)
 	}
 	var buf bytes.Buffer
 	if err := features.Write(&buf, rows, *format); err != nil {

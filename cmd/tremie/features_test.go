@@ -2,10 +2,16 @@ package main
 
 import (
 	"bytes"
+	"image"
+	"image/png"
 	"os"
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"github.com/tremie-dev/tremie/cmd/tremie/demo"
+	"github.com/tremie-dev/tremie/render/wallimage"
+	"github.com/tremie-dev/tremie/schema"
 )
 
 // One bad file is reported with its line and exit code 2; the good one is
@@ -47,5 +53,38 @@ func TestDemoFeatureSummary(t *testing.T) {
 	}
 	if _, err := os.Stat(filepath.Join(outDir, "MW-1-features.pdf")); err == nil {
 		t.Error("a well without features got a feature summary")
+	}
+}
+
+// The demo's wall image is the generator's: the embedded file decodes to
+// the very pixels wallimage.DemoImages makes from BR-1's picks (bytes may
+// differ between Go releases' PNG encoders; pixels may not).
+func TestDemoWallImageIsGenerated(t *testing.T) {
+	data, err := demo.FS.ReadFile("wells/BR-1.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	w, err := schema.Load("BR-1.toml", data)
+	if err != nil {
+		t.Fatal(err)
+	}
+	made, err := wallimage.DemoImages(w)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, wi := range w.WallImages {
+		embedded, err := demo.FS.ReadFile("wells/" + wi.File)
+		if err != nil {
+			t.Fatalf("%s not embedded: %v", wi.File, err)
+		}
+		a, errA := png.Decode(bytes.NewReader(embedded))
+		b, errB := png.Decode(bytes.NewReader(made[wi.File]))
+		if errA != nil || errB != nil {
+			t.Fatal(errA, errB)
+		}
+		ga, gb := a.(*image.Gray), b.(*image.Gray)
+		if !ga.Rect.Eq(gb.Rect) || !bytes.Equal(ga.Pix, gb.Pix) {
+			t.Errorf("%s differs from what the generator makes: regenerate it with wallimage.DemoImages", wi.File)
+		}
 	}
 }

@@ -1,7 +1,6 @@
 package main
 
 import (
-	"flag"
 	"fmt"
 	"io"
 	"os"
@@ -9,6 +8,7 @@ import (
 	"time"
 
 	"github.com/tremie-dev/tremie/render/out"
+	"github.com/tremie-dev/tremie/render/pipeline"
 	"github.com/tremie-dev/tremie/schema/exchange"
 )
 
@@ -17,27 +17,23 @@ func init() {
 		name:    "import",
 		summary: "make well files from a workbook or CSV files in tremie's import layout (--template FILE.xlsx writes the layout)",
 		run:     runImport,
+		args:    "TABLE.xlsx|WELLS.csv [INTERVALS.csv]",
+		about:   "tremie import --template FILE.xlsx writes the layout.",
 	})
 }
 
 func runImport(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("import", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	outDir := fset.String("o", "", "directory for the well files (required)")
-	template := fset.String("template", "", "write an empty workbook in the import layout, with an example well, to this file")
+	fset := newFlags("import", stdout, stderr)
+	outDir := fset.String("o", "", "`directory` for the well files (required)")
+	template := fset.String("template", "", "write an empty workbook in the import layout, with an example well, to this `file`")
 	force := fset.Bool("force", false, "overwrite well files that already exist")
-	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie import TABLE.xlsx|WELLS.csv [INTERVALS.csv] -o WELLS_DIR [--force]\n       tremie import --template FILE.xlsx")
-		fset.PrintDefaults()
-	}
-	rest, err := parseInterleaved(fset, args)
-	if err != nil {
-		return exitUsage
+	rest, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
 	if *template != "" {
 		if len(rest) != 0 || *outDir != "" {
-			fmt.Fprintln(stderr, "tremie import: --template takes only the file to write")
-			return exitUsage
+			return fset.usageError("--template takes only the file to write")
 		}
 		if _, err := os.Stat(*template); err == nil && !*force {
 			fmt.Fprintf(stderr, "tremie import: %s exists; --force overwrites it\n", *template)
@@ -45,7 +41,7 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 		}
 		data, err := exchange.Template(templateDate())
 		if err == nil {
-			err = writeOutput(*template, data)
+			err = pipeline.WriteFile(*template, data)
 		}
 		if err != nil {
 			fmt.Fprintf(stderr, "tremie import: %v\n", err)
@@ -55,9 +51,7 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 		return exitOK
 	}
 	if len(rest) == 0 || *outDir == "" {
-		fmt.Fprintln(stderr, "tremie import: name the workbook (or CSV files) and -o WELLS_DIR")
-		fset.Usage()
-		return exitUsage
+		return fset.usageError("name the workbook (or CSV files) and -o WELLS_DIR")
 	}
 	files, errs := exchange.Import(rest...)
 	for _, e := range errs {
@@ -85,7 +79,7 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 			return exitOutput
 		}
 	}
-	fmt.Fprintf(stdout, "tremie import: %d well files written to %s\n", len(files), filepath.Clean(*outDir))
+	fmt.Fprintf(stdout, "tremie import: %d %s written to %s\n", len(files), plural(len(files), "well file", "well files"), filepath.Clean(*outDir))
 	return exitOK
 }
 
@@ -93,7 +87,7 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 // set, else a fixed day, so the template's bytes never change by
 // themselves.
 func templateDate() time.Time {
-	if s, err := sourceDate(); err == nil && s != "" {
+	if s, err := pipeline.SourceDate(); err == nil && s != "" {
 		if t, err := time.Parse(time.RFC3339, s); err == nil {
 			return t
 		}

@@ -3,6 +3,7 @@ package main
 import (
 	"bytes"
 	"encoding/json"
+	"github.com/tremie-dev/tremie/cmd/tremie/demo"
 	"os"
 	"path/filepath"
 	"regexp"
@@ -54,7 +55,7 @@ var sourceLine = regexp.MustCompile(`\(line \d+\)`)
 func TestDemoRoundTripsThroughImportLayout(t *testing.T) {
 	root := t.TempDir()
 	a, b := filepath.Join(root, "a"), filepath.Join(root, "b")
-	if err := writeDemo(a); err != nil {
+	if err := demo.Write(a, false); err != nil {
 		t.Fatal(err)
 	}
 	book := filepath.Join(root, "demo.xlsx")
@@ -66,6 +67,12 @@ func TestDemoRoundTripsThroughImportLayout(t *testing.T) {
 	}
 	prj, _ := os.ReadFile(filepath.Join(a, "project.toml"))
 	os.WriteFile(filepath.Join(b, "project.toml"), prj, 0o644)
+	// The wall images a well names travel beside it, not in the workbook.
+	images, _ := filepath.Glob(filepath.Join(a, "wells", "*.png"))
+	for _, im := range images {
+		data, _ := os.ReadFile(im)
+		os.WriteFile(filepath.Join(b, "wells", filepath.Base(im)), data, 0o644)
+	}
 	fa, fb := findingsOf(t, a), findingsOf(t, b)
 	if len(fa) == 0 || strings.Join(fa, "\n") != strings.Join(fb, "\n") {
 		t.Errorf("findings differ:\n%s\n---\n%s", strings.Join(fa, "\n"), strings.Join(fb, "\n"))

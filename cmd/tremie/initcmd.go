@@ -2,7 +2,6 @@ package main
 
 import (
 	"errors"
-	"flag"
 	"fmt"
 	"io"
 
@@ -15,26 +14,21 @@ func init() {
 		name:    "init",
 		summary: "start a project: project.toml with every key explained, a wells folder, a rule profile, editor schemas",
 		run:     runInit,
+		args:    "DIR",
 	})
 }
 
 func runInit(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("init", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	units := fset.String("units", "ft", "depth unit of the project: ft or m")
-	name := fset.String("name", "", "project name (default: the folder's name)")
+	fset := newFlags("init", stdout, stderr)
+	units := fset.String("units", "ft", "depth `unit` of the project: ft or m")
+	name := fset.String("name", "", "project `name` (default: the folder's name)")
 	noProfile := fset.Bool("no-profile", false, "write no rule profile")
-	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie init [--units ft|m] [--name NAME] [--no-profile] DIR")
-		fset.PrintDefaults()
-	}
-	pos, err := parseInterspersed(fset, args)
-	if err != nil {
-		return exitUsage
+	pos, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
 	if len(pos) != 1 {
-		fset.Usage()
-		return exitUsage
+		return fset.usageError("name one directory")
 	}
 	dir := pos[0]
 	wrote, err := starter.Init(dir, starter.InitOptions{Name: *name, Units: schema.DepthUnit(*units), NoProfile: *noProfile})

@@ -2,7 +2,6 @@ package main
 
 import (
 	"errors"
-	"flag"
 	"fmt"
 	"io"
 	"strings"
@@ -16,30 +15,23 @@ func init() {
 		name:    "new",
 		summary: "write a starter well file: every key explained, example values marked # FILL",
 		run:     runNew,
+		args:    "ID",
+		about:   newKindsAbout(),
 	})
 }
 
 func runNew(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("new", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	purpose := fset.String("purpose", "", "well purpose (default: the kind's usual one)")
-	units := fset.String("units", "ft", "units of the file: ft (feet, inches) or m (metres, millimetres)")
-	kind := fset.String("kind", "monitoring", "kind of well: "+strings.Join(starter.Kinds, ", "))
-	dir := fset.String("o", ".", "folder to write ID.toml in")
-	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie new ID [--purpose P] [--units ft|m] [--kind K] [-o DIR]")
-		fset.PrintDefaults()
-		for _, k := range starter.Kinds {
-			fmt.Fprintf(stderr, "  %-11s %s\n", k, starter.KindDoc(k))
-		}
-	}
-	pos, err := parseInterspersed(fset, args)
-	if err != nil {
-		return exitUsage
+	fset := newFlags("new", stdout, stderr)
+	purpose := fset.String("purpose", "", "well `purpose` (default: the kind's usual one)")
+	units := fset.String("units", "ft", "`units` of the file: ft (feet, inches) or m (metres, millimetres)")
+	kind := fset.String("kind", "monitoring", "`kind` of well: "+strings.Join(starter.Kinds, ", "))
+	dir := fset.String("o", ".", "`folder` to write ID.toml in")
+	pos, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
 	if len(pos) != 1 {
-		fset.Usage()
-		return exitUsage
+		return fset.usageError("name one well ID")
 	}
 	wrote, err := starter.WriteWell(*dir, starter.Options{ID: pos[0], Kind: *kind, Purpose: schema.Purpose(*purpose), Units: schema.DepthUnit(*units)})
 	for _, p := range wrote {
@@ -53,4 +45,14 @@ func runNew(args []string, stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	return exitOK
+}
+
+// newKindsAbout lists the kinds of well tremie new writes, for its usage.
+func newKindsAbout() string {
+	var b strings.Builder
+	b.WriteString("kinds:")
+	for _, k := range starter.Kinds {
+		fmt.Fprintf(&b, "\n  %-11s %s", k, starter.KindDoc(k))
+	}
+	return b.String()
 }

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"github.com/tremie-dev/tremie/cmd/tremie/demo"
 	"os"
 	"path/filepath"
 	"regexp"
@@ -14,7 +15,7 @@ import (
 // 0.5 ft3 default (common practice).
 func TestProjectYieldsFile(t *testing.T) {
 	dir := t.TempDir()
-	if err := writeDemo(dir); err != nil {
+	if err := demo.Write(dir, false); err != nil {
 		t.Fatal(err)
 	}
 	put(t, dir, "site.yields.toml", "[yields]\nvolume = \"ft3\"\nmass = \"lb\"\n[yields.filter-pack]\nyield = 0.45\nbag_mass = 50\nnote = \"supplier sheet\"\n")
@@ -44,7 +45,7 @@ func TestProjectYieldsFile(t *testing.T) {
 // does not get at the 0.5 ft3 default (common practice).
 func TestProjectYieldsReachCheck(t *testing.T) {
 	dir := t.TempDir()
-	if err := writeDemo(dir); err != nil {
+	if err := demo.Write(dir, false); err != nil {
 		t.Fatal(err)
 	}
 	_, before, _ := runTremie("check", dir)

@@ -3,15 +3,14 @@ package main
 import (
 	"encoding/csv"
 	"encoding/json"
-	"flag"
 	"fmt"
-	"github.com/tremie-dev/tremie/schema/project"
 	"io"
 	"math"
 	"strconv"
 	"strings"
 	"text/tabwriter"
 
+	"github.com/tremie-dev/tremie/render/pipeline"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
@@ -40,108 +39,65 @@ type wellQuantities struct {
 }
 
 func runQuantities(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("quantities", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	format := fset.String("format", "text", "output format: text, json or csv")
-	contingency := fset.Float64("contingency", quantity.DefaultContingency, "percentage added to each volume before it is rounded up to bags to order (default from "+quantity.DefaultContingencySource+")")
-	yieldsFile := fset.String("yields", "", "TOML file with a [yields] table overriding the default yields")
-	profileFile := fset.String("profile", "", "rule profile TOML setting the reconciliation thresholds")
-	porosity := fset.Float64("pack-porosity", 0, "porosity (0 to 1) of the saturated filter pack, to add its pore water to the well volume; 0 leaves it out")
-	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie quantities [--format text|json|csv] [--contingency PCT] [--yields FILE] [--profile FILE] FILE|DIR...")
-		fset.PrintDefaults()
-	}
-	paths, err := parseInterspersed(fset, args)
-	if err != nil {
-		return exitUsage
+	fset := newFlags("quantities", stdout, stderr)
+	format := fset.String("format", "text", "output `format`: text, json or csv")
+	contingency := fset.Float64("contingency", quantity.DefaultContingency, "`percentage` added to each volume before it is rounded up to bags to order (default from "+quantity.DefaultContingencySource+")")
+	yieldsFile := fset.String("yields", "", "TOML `file` with a [yields] table overriding the yields (default: the project's)")
+	profileFile := fset.String("profile", "", "rule profile TOML `file` setting the reconciliation thresholds (default: the project's)")
+	porosity := fset.Float64("pack-porosity", 0, "`porosity` (0 to 1) of the saturated filter pack, to add its pore water to the well volume; 0 leaves it out")
+	paths, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
 	switch *format {
 	case "text", "json", "csv":
 	default:
-		fmt.Fprintf(stderr, "tremie quantities: unknown format %q (text, json or csv)\n", *format)
-		return exitUsage
+		return fset.usageError("unknown format %q (text, json or csv)", *format)
 	}
 	if *contingency < 0 || *contingency > 1000 || math.IsNaN(*contingency) {
-		fmt.Fprintf(stderr, "tremie quantities: --contingency %v is not a percentage between 0 and 1000\n", *contingency)
-		return exitUsage
+		return fset.usageError("--contingency %v is not a percentage between 0 and 1000", *contingency)
 	}
 	if !(*porosity >= 0 && *porosity < 1) {
-		fmt.Fprintf(stderr, "tremie quantities: --pack-porosity %v is not a fraction between 0 and 1\n", *porosity)
-		return exitUsage
+		return fset.usageError("--pack-porosity %v is not a fraction between 0 and 1", *porosity)
 	}
 	if len(paths) == 0 {
-		fset.Usage()
-		return exitUsage
+		return fset.usageError("name at least one well file or directory")
 	}
-	// A project directory names its wells, profile and yields file; the
-	// flags win over the project's.
-	in, errs := collectInputs(paths)
-	if *yieldsFile == "" {
-		*yieldsFile = in.yields
-	}
-	if *profileFile == "" {
-		*profileFile = in.profile
-	}
-	yields := quantity.DefaultYields()
-	if *yieldsFile != "" {
-		if yields, err = quantity.LoadYields(*yieldsFile); err != nil {
-			fmt.Fprintf(stderr, "tremie quantities: %v\n", err)
-			return exitInput
-		}
-	}
-	var prof *rules.Profile
-	if *profileFile != "" {
-		if prof, err = rules.LoadProfile(*profileFile); err != nil {
-			fmt.Fprintf(stderr, "tremie quantities: %v\n", err)
-			return exitInput
-		}
-	}
-
-	code := exitOK
-	files := in.files
-	for _, e := range errs {
-		fmt.Fprintf(stderr, "tremie quantities: %v\n", e)
-		code = exitInput
+	run, code, ok := resolve("quantities", paths, pipeline.Options{Profile: *profileFile, Yields: *yieldsFile}, stderr)
+	if !ok {
+		return code
 	}
 	var wells []wellQuantities
-	for _, f := range files {
-		w, err := schema.LoadFile(f)
-		if err != nil {
-			fmt.Fprintln(stderr, err)
+	var reports []*quantity.Report
+	for _, w := range run.PrepareAll(pipeline.ReconcileRules, "quantifying") {
+		if w.Err != nil {
+			printErr(stderr, "quantities", w.Err)
 			code = exitInput
 			continue
 		}
-		project.Apply(in.projects[f], w)
 		// the checks of placed amounts and tags, with the same yields
-		wq := wellQuantities{File: f, Report: quantity.Compute(w, yields), Findings: rules.Run(w, rules.Select(rules.Reconciling), withYields(prof, yields)),
-			Volumes: quantity.WellVolumes(w, *porosity)}
+		wq := wellQuantities{File: w.Path, Report: w.Quantities, Findings: w.Findings, Volumes: quantity.WellVolumes(w.Well, *porosity)}
 		for _, r := range wq.Report.Rows {
 			if r.Err != nil {
-				fmt.Fprintf(stderr, "%s:%d: %v\n", f, w.Line(r.Fill.Path), r.Err)
+				fmt.Fprintf(stderr, "%s:%d: %v\n", w.Path, w.Well.Line(r.Fill.Path), r.Err)
 				if code == exitOK {
 					code = exitFindings
 				}
 			}
 		}
 		wells = append(wells, wq)
-	}
-	if len(files) == 0 && len(errs) == 0 {
-		fmt.Fprintln(stderr, "tremie quantities: no well files found")
-		return exitInput
-	}
-	reports := make([]*quantity.Report, len(wells))
-	for i, wq := range wells {
-		reports[i] = wq.Report
+		reports = append(reports, w.Quantities)
 	}
 	order := quantity.Totals(reports, *contingency)
+	profiles := run.ProfileLabels()
 	var werr error
 	switch *format {
 	case "json":
-		werr = writeQuantitiesJSON(stdout, wells, order)
+		werr = writeQuantitiesJSON(stdout, wells, order, profiles)
 	case "csv":
-		werr = writeQuantitiesCSV(stdout, wells, order)
+		werr = writeQuantitiesCSV(stdout, wells, order, profiles)
 	default:
-		werr = writeQuantitiesText(stdout, wells, order)
+		werr = writeQuantitiesText(stdout, wells, order, profiles)
 	}
 	if werr != nil {
 		fmt.Fprintf(stderr, "tremie quantities: writing the report: %v\n", werr)
@@ -150,33 +106,14 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 	return code
 }
 
-// parseInterspersed parses flags that may come before, between or after
-// the file arguments.
-func parseInterspersed(fset *flag.FlagSet, args []string) ([]string, error) {
-	var paths []string
-	for {
-		if err := fset.Parse(args); err != nil {
-			return nil, err
-		}
-		rest := fset.Args()
-		if len(rest) == 0 {
-			return paths, nil
-		}
-		if rest[0] == "--" {
-			return append(paths, rest[1:]...), nil
-		}
-		paths = append(paths, rest[0])
-		args = rest[1:]
-	}
-}
-
 // total is one material line of a project list.
 type total = quantity.Line
 
 // --- text ---
 
-func writeQuantitiesText(w io.Writer, wells []wellQuantities, order *quantity.Order) error {
+func writeQuantitiesText(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
 	ew := &errWriter{w: w}
+	fmt.Fprintf(ew, "Reconciliation checked with %s.\n\n", strings.Join(profiles, "; "))
 	for i, wq := range wells {
 		if i > 0 {
 			fmt.Fprintln(ew)
@@ -401,6 +338,7 @@ func (e *errWriter) Write(p []byte) (int, error) {
 
 type jsonQuantities struct {
 	Caution     string          `json:"caution"`
+	Profiles    []string        `json:"profiles"` // the profiles in force: "default thresholds" or "profile NAME"
 	Contingency float64         `json:"contingency_pct"`
 	Wells       []jsonWell      `json:"wells"`
 	OrderingFor []string        `json:"ordering_for"`
@@ -531,8 +469,8 @@ func r4(v float64) float64 { return math.Round(v*1e4) / 1e4 }
 
 func ptr[T any](v T) *T { return &v }
 
-func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Order) error {
-	out := jsonQuantities{Caution: quantitiesCaution, Contingency: order.Contingency, Wells: []jsonWell{}, Totals: jsonTotals(order.Lines),
+func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
+	out := jsonQuantities{Caution: quantitiesCaution, Profiles: profiles, Contingency: order.Contingency, Wells: []jsonWell{}, Totals: jsonTotals(order.Lines),
 		OrderingFor: append([]string{}, order.For...), ForPlanned: order.Planned, AsBuiltFor: append([]string{}, order.AsBuilt...),
 		AsBuilt: jsonTotals(order.AsBuiltLines), Findings: []rules.Finding{}}
 	for _, wq := range wells {
@@ -621,7 +559,7 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 var quantitiesCSVHeader = []string{"kind", "file", "well", "fill", "material", "within", "top", "bottom", "depth_unit",
 	"calculated", "volume_unit", "yield", "yield_basis", "bag_mass", "mass_unit", "bags_needed", "bags_to_order", "bags_placed", "placed", "ratio", "note"}
 
-func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Order) error {
+func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
 	cw := csv.NewWriter(w)
 	cw.Write(quantitiesCSVHeader)
 	num := func(v float64) string { return strconv.FormatFloat(r4(v), 'f', -1, 64) }
@@ -670,6 +608,9 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Ord
 	lines("as-built", order.AsBuiltLines, order.AsBuilt)
 	caution := make([]string, len(quantitiesCSVHeader))
 	caution[0], caution[20] = "caution", quantitiesCaution
+	prof := make([]string, len(quantitiesCSVHeader))
+	prof[0], prof[20] = "profile", strings.Join(profiles, "; ")
+	cw.Write(prof)
 	cw.Write(caution)
 	cw.Flush()
 	return cw.Error()

@@ -193,7 +193,7 @@ func TestQuantitiesCSVMetric(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if len(recs) != 1+3+3+1 {
+	if len(recs) != 1+3+3+2 { // header, intervals, totals, profile and caution
 		t.Fatalf("%d records", len(recs))
 	}
 	head := recs[0]

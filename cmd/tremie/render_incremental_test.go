@@ -1,6 +1,7 @@
 package main
 
 import (
+	"github.com/tremie-dev/tremie/cmd/tremie/demo"
 	"os"
 	"path/filepath"
 	"regexp"
@@ -23,7 +24,7 @@ func rendered(out string) []string {
 // a project-level setting redraws all; --force redraws all.
 func TestRenderIncremental(t *testing.T) {
 	dir := t.TempDir()
-	if err := writeDemo(dir); err != nil {
+	if err := demo.Write(dir, false); err != nil {
 		t.Fatal(err)
 	}
 	args := []string{"render", dir, "--format", "svg"}
@@ -76,7 +77,7 @@ func TestRenderIncremental(t *testing.T) {
 // still renders every other well and exits non-zero.
 func TestRenderProjectWithBadFile(t *testing.T) {
 	dir := t.TempDir()
-	if err := writeDemo(dir); err != nil {
+	if err := demo.Write(dir, false); err != nil {
 		t.Fatal(err)
 	}
 	put(t, dir, "wells/ZZ-BAD.toml", "[units]\ndepth = \"ft\"\n[well]\nid = \"ZZ\"\npurpose = \"monitoring\"\ntotal_depth = 10\nbotom = 3\n")

@@ -18,46 +18,7 @@ import (
 	"github.com/tremie-dev/tremie/cmd/tremie/demo"
 )
 
-func TestSafeName(t *testing.T) {
-	cases := map[string]string{
-		"MW-1":                   "MW-1",
-		"../../x":                "x",
-		"..":                     "well",
-		"":                       "well",
-		".hidden":                "hidden",
-		"a/b\\c":                 "a-b-c",
-		"MW 3 (deep)":            "MW-3-deep",
-		"PZ-2.5":                 "PZ-2.5",
-		"a..b":                   "a.b",
-		"日本":                     "well",
-		"/etc/passwd":            "etc-passwd",
-		"C:\\x\\..\\y":           "C-x-y",
-		"x\x00y":                 "x-y",
-		strings.Repeat("a", 200): strings.Repeat("a", 80),
-	}
-	for in, want := range cases {
-		got := safeName(in)
-		if got != want {
-			t.Errorf("safeName(%q) = %q, want %q", in, got, want)
-		}
-		if got != filepath.Base(got) || strings.HasPrefix(got, ".") || strings.Contains(got, "..") {
-			t.Errorf("safeName(%q) = %q is not a plain file name", in, got)
-		}
-	}
-}
-
-func TestAssignNamesDedupes(t *testing.T) {
-	files := []string{"a.toml", "b.toml", "c.toml", "d.toml"}
-	got := assignNames(files, []string{"MW 1", "MW/1", "mw-1", "PZ-1"})
-	want := map[string]string{"a.toml": "MW-1", "b.toml": "MW-1-2", "c.toml": "mw-1-3", "d.toml": "PZ-1"}
-	for f, w := range want {
-		if got[f] != w {
-			t.Errorf("%s: %q, want %q", f, got[f], w)
-		}
-	}
-}
-
-// writeDemo copies the demo project to a temporary directory.
+// copyDemo copies the demo project to a temporary directory.
 func copyDemo(t *testing.T) string {
 	t.Helper()
 	dir := t.TempDir()

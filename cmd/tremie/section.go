@@ -1,19 +1,14 @@
 package main
 
 import (
-	"errors"
-	"flag"
 	"fmt"
 	"io"
-	"os"
 	"path/filepath"
 	"strings"
+	"time"
 
-	"github.com/tremie-dev/tremie/render/book"
 	"github.com/tremie-dev/tremie/render/out"
-	"github.com/tremie-dev/tremie/render/section"
-	"github.com/tremie-dev/tremie/schema"
-	"github.com/tremie-dev/tremie/templates"
+	"github.com/tremie-dev/tremie/render/pipeline"
 )
 
 func init() {
@@ -21,28 +16,23 @@ func init() {
 		name:    "section",
 		summary: "draw a cross-section of several wells hung on elevation",
 		run:     runSection,
+		args:    "PROJECT_DIR [NAME]",
 	})
 }
 
 func runSection(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("section", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	outDir := fset.String("o", "", "output directory (default the project's output directory)")
-	wellList := fset.String("wells", "", "draw a line through these wells, in order: A,B,C")
-	formats := fset.String("format", "svg,pdf,png", "output formats: svg, pdf, png")
-	pageName := fset.String("page", "tabloid", "page template (landscape)")
-	force := fset.Bool("force", false, "replace existing output files")
-	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie section PROJECT_DIR [NAME] [--wells A,B,C] [-o OUTDIR] [--format svg,pdf,png] [--page NAME] [--force]")
-		fset.PrintDefaults()
-	}
-	rest, err := parseInterleaved(fset, args)
-	if err != nil {
-		return exitUsage
+	fset := newFlags("section", stdout, stderr)
+	outDir := fset.String("o", "", "output `directory` (default the project's output directory)")
+	wellList := fset.String("wells", "", "draw a line through these `wells`, in order: A,B,C")
+	formats := fset.String("format", "svg,pdf,png", "output `formats`: "+strings.Join(out.FormatNames(), ", "))
+	pageName := fset.String("page", "tabloid", "page `template` (landscape)")
+	force := fset.Bool("force", false, "replace output files tremie did not write")
+	rest, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
 	if len(rest) < 1 || len(rest) > 2 {
-		fset.Usage()
-		return exitUsage
+		return fset.usageError("name one project directory and, optionally, one section")
 	}
 	name := ""
 	if len(rest) == 2 {
@@ -54,97 +44,47 @@ func runSection(args []string, stdout, stderr io.Writer) int {
 			ids = append(ids, id)
 		}
 	}
-	tpl, err := templates.Load(*pageName, true)
+	fmts, err := out.ParseFormats(*formats)
 	if err != nil {
-		fmt.Fprintf(stderr, "tremie section: %v\n", err)
-		return exitUsage
+		return fset.usageError("--format: %v", err)
 	}
-	pw, code := loadProjectWells(rest[0], stderr)
-	if pw == nil {
+	if _, err := pipeline.PageFor(*pageName, true); err != nil {
+		return fset.usageError("--page: %v", err)
+	}
+	run, p, wells, code := prepareProject(rest[0], stderr)
+	if p == nil {
 		return code
 	}
-	var wells []*schema.Well
-	for _, e := range pw.entries {
-		wells = append(wells, e.Well)
-	}
-	inputs, err := section.Select(pw.proj, wells, name, ids)
+	code = exitOK // a flawed well still stands in a section
+	docs, inputs, err := pipeline.Sections(p, wells, name, ids, *pageName, run.ProjectDate(p, wells).Format(time.RFC3339))
 	if err != nil {
-		fmt.Fprintf(stderr, "tremie section: %v\n", err)
-		return exitInput
+		fmt.Fprintf(stderr, "%s: %v\n", p.File, err)
+		code = exitInput
 	}
 	dir := *outDir
 	if dir == "" {
-		dir = pw.proj.Output
+		dir = p.Output
 	}
-	date := pw.date().Format("2006-01-02T15:04:05Z07:00")
-	status := exitOK
-	for _, in := range inputs {
-		in.Page, in.Date = tpl, date
-		doc, err := section.Layout(in)
-		if err != nil {
-			fmt.Fprintf(stderr, "%s: %v\n", pw.proj.File, err)
-			status = exitInput
+	for i, doc := range docs {
+		if doc == nil {
 			continue
 		}
-		for _, f := range strings.Split(*formats, ",") {
-			f = strings.TrimSpace(f)
-			files, err := encode(doc, f, 150)
+		for _, f := range fmts {
+			files, err := f.Encode(doc, out.EncodeOptions{DPI: 150})
 			if err != nil {
 				fmt.Fprintf(stderr, "tremie section: %v\n", err)
 				return exitOutput
 			}
-			path := filepath.Join(dir, "section-"+safeName(in.Section.Name)+"."+f)
-			if _, err := os.Stat(path); err == nil && !*force {
-				fmt.Fprintf(stderr, "%s exists; --force replaces it\n", path)
-				status = exitOutput
+			file := "section-" + pipeline.SafeName(inputs[i].Section.Name) + f.Ext
+			if err := pipeline.WriteOwned(dir, file, files[0], *force); err != nil {
+				fmt.Fprintf(stderr, "tremie section: %v\n", err)
+				code = exitOutput
 				continue
 			}
-			if err := os.MkdirAll(dir, 0o755); err != nil {
-				fmt.Fprintf(stderr, "tremie section: %v\n", err)
-				return exitOutput
-			}
-			if err := out.WriteFileAtomic(path, files[0]); err != nil {
-				fmt.Fprintf(stderr, "tremie section: %v\n", err)
-				return exitOutput
-			}
-			fmt.Fprintf(stdout, "%s: drew %s\n", in.Section.Name, path)
-		}
-	}
-	return status
-}
-
-// bookSections draws every section the project defines, as PDFs for the
-// book; a section that cannot be drawn is left out and its error
-// returned.
-func bookSections(pw *projectWells, date string) ([]book.Section, error) {
-	if len(pw.proj.Sections) == 0 {
-		return nil, nil
-	}
-	var wells []*schema.Well
-	for _, e := range pw.entries {
-		wells = append(wells, e.Well)
-	}
-	inputs, err := section.Select(pw.proj, wells, "", nil)
-	if err != nil {
-		return nil, err
-	}
-	tpl, err := templates.Load("tabloid", true)
-	if err != nil {
-		return nil, err
-	}
-	var secs []book.Section
-	var errs []error
-	for _, in := range inputs {
-		in.Page, in.Date = tpl, date
-		doc, err := section.Layout(in)
-		if err == nil {
-			var pdf []byte
-			if pdf, err = out.PDF(doc); err == nil {
-				secs = append(secs, book.Section{Name: in.Section.Name, Sheet: pdf})
-				continue
+			if !quiet {
+				fmt.Fprintf(stdout, "%s: drew %s\n", inputs[i].Section.Name, filepath.Join(dir, file))
 			}
 		}
-		errs = append(errs, err)
 	}
-	return secs, errors.Join(errs...)
+	return code
 }

@@ -11,8 +11,8 @@ import (
 
 	"github.com/xuri/excelize/v2"
 
-	"github.com/tremie-dev/tremie/cmd/internal/synth"
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/synth"
 )
 
 // spoiledProject is a synthetic project of n wells in which well 1 is not

@@ -129,9 +129,9 @@ func (x *Export) CSV() ([]byte, error) {
 		return nil, fmt.Errorf("csv: %w", err)
 	}
 	for _, p := range x.Points {
-		rec := []string{p.Name}
+		rec := []string{table.Inert(p.Name)}
 		for _, c := range p.Cells {
-			rec = append(rec, c.String())
+			rec = append(rec, c.CSVText())
 		}
 		if x.Projected != nil {
 			rec = append(rec, schema.TrimFloat(p.E, projectedDigits), schema.TrimFloat(p.N, projectedDigits))

@@ -6,58 +6,37 @@ import (
 	"flag"
 	"fmt"
 	"io"
-	"io/fs"
 	"os"
-	"path"
 	"path/filepath"
 	"strings"
 	"testing"
 
-	"github.com/tremie-dev/tremie/cmd/tremie/demo"
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/schema"
-	"github.com/tremie-dev/tremie/schema/project"
-	"github.com/tremie-dev/tremie/schema/quantity"
-	"github.com/tremie-dev/tremie/schema/rules"
-	"github.com/tremie-dev/tremie/templates"
 )
 
 var update = flag.Bool("update", false, "rewrite the golden SVGs under testdata/golden from the current layout")
 
+// DemoWell is a demo well as the render pipeline hands it to Layout.
+type DemoWell struct {
+	Well *schema.Well
+	In   Inputs
+	Opt  Options
+}
+
+// PrepareDemo is set by pipeline_test.go (package sheet_test), which may
+// import render/pipeline, the one sequence from a well file to its
+// sheets; this package's own tests cannot import it without a cycle.
+var PrepareDemo func(t testing.TB) map[string]DemoWell
+
 // demoWells reads every demo well with the inputs and options tremie
-// render would use, by file name.
+// render gives it, by file name.
 func demoWells(t testing.TB) map[string]demoWell {
 	t.Helper()
-	pdata, err := demo.FS.ReadFile("project.toml")
-	if err != nil {
-		t.Fatal(err)
-	}
-	prj, err := project.Parse("demo", "project.toml", pdata)
-	if err != nil {
-		t.Fatal(err)
-	}
-	tpl, err := templates.Load(prj.Page, prj.Landscape)
-	if err != nil {
-		t.Fatal(err)
-	}
-	names, err := fs.Glob(demo.FS, "wells/*.toml")
-	if err != nil || len(names) < 6 {
-		t.Fatalf("demo wells: %v (%d)", err, len(names))
-	}
 	out := map[string]demoWell{}
-	for _, n := range names {
-		data, err := demo.FS.ReadFile(n)
-		if err != nil {
-			t.Fatal(err)
-		}
-		w, err := schema.Load(n, data)
-		if err != nil {
-			t.Fatalf("%s: %v", n, err)
-		}
-		project.Apply(prj, w)
-		in := Inputs{Findings: rules.Check(w, nil), Quantities: quantity.Compute(w, nil), TitleBlock: prj.TitleBlock}
-		out[path.Base(n)] = demoWell{w: w, in: in, opt: Options{Page: FromTemplate(tpl)}}
+	for n, d := range PrepareDemo(t) {
+		out[n] = demoWell{w: d.Well, in: d.In, opt: d.Opt}
 	}
 	return out
 }

@@ -52,6 +52,7 @@ type layout struct {
 // columnRects are the x ranges of the body's columns.
 type columnRects struct {
 	depth, elev, lith, uscs, desc, well, call xRange
+	feat                                      xRange // wall features (features.go); zero width when none
 }
 
 type xRange struct{ X, W float64 }
@@ -252,6 +253,7 @@ func (l *layout) layColumns(width float64) {
 	l.cols.desc = next(f.Description)
 	l.cols.well = next(f.Well)
 	l.cols.call = next(f.Callouts)
+	l.layFeatureColumn(width)
 }
 
 // majorStep is the depth-axis tick interval in the file's depth unit:

@@ -32,7 +32,7 @@ func TestPlannedWellIsADesign(t *testing.T) {
 	// The filter pack, 24-42 ft: an 8.25-in hole round 2-in Sch 40 pipe
 	// (OD 2.375 in, ASTM D1785) below 38 ft the open 8.25-in hole.
 	area := func(d float64) float64 { return math.Pi / 4 * d * d / 144 } // ft2 for d in inches
-	calc := (area(8.25)-area(2.375))*(38-24) + area(8.25)*(42-38)         // ft3
+	calc := (area(8.25)-area(2.375))*(38-24) + area(8.25)*(42-38)        // ft3
 	bags := int(math.Ceil(calc * 1.10 / 0.5))                            // 0.5 ft3 per 50-lb bag of sand (common practice)
 	rows := strings.Join(texts(p, "amounts-row"), "|")
 	if want := "14 bags"; bags != 14 || !strings.Contains(rows, want) {

@@ -120,7 +120,7 @@ func TestEveryTextInsideItsRegion(t *testing.T) {
 						}
 						if tx.Role == "column-head" && !notesSheet {
 							in := false
-							for _, c := range []xRange{l.cols.depth, l.cols.elev, l.cols.lith, l.cols.uscs, l.cols.desc, l.cols.well, l.cols.call} {
+							for _, c := range []xRange{l.cols.depth, l.cols.elev, l.cols.lith, l.cols.uscs, l.cols.desc, l.cols.feat, l.cols.well, l.cols.call} {
 								in = in || (r.X >= c.X-0.01 && r.Right() <= c.Right()+0.01)
 							}
 							if !in {

@@ -13,6 +13,7 @@ import (
 	"time"
 
 	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/wallimage"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/project"
 	"github.com/tremie-dev/tremie/schema/quantity"
@@ -28,6 +29,9 @@ type Inputs struct {
 	// Profile is the rule profile the findings were made under (nil for
 	// the defaults): the footer names it.
 	Profile *rules.Profile
+	// WallImages are the well's [[wall_image]] files, decoded, by name;
+	// a missing one is drawn as a blank strip.
+	WallImages map[string]*wallimage.Image
 }
 
 // Options are the drafting choices.

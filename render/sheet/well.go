@@ -94,7 +94,7 @@ func (p *painter) well() []draw.Item {
 
 	y0, y1 := p.clipY()
 	col := l.cols.well
-	return []draw.Item{draw.Clip{Rect: draw.Rect{X: col.X, Y: y0, W: col.W, H: y1 - y0}, Items: items}}
+	return append([]draw.Item{draw.Clip{Rect: draw.Rect{X: col.X, Y: y0, W: col.W, H: y1 - y0}, Items: items}}, p.featureTrack()...)
 }
 
 func pathOr(path, kind string, i int) string {

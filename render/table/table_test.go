@@ -467,3 +467,26 @@ func TestNestedWellRowPerString(t *testing.T) {
 		}
 	}
 }
+
+// TestCSVCellsAreInert: a well ID or note that a spreadsheet would run as
+// a formula is neutralised (OWASP, "CSV Injection"); numbers, negative
+// ones too, stay numbers.
+func TestCSVCellsAreInert(t *testing.T) {
+	for in, want := range map[string]string{
+		"=HYPERLINK(\"x\")": "'=HYPERLINK(\"x\")",
+		"+1":                "'+1",
+		"-cmd":              "'-cmd",
+		"@SUM(A1)":          "'@SUM(A1)",
+		"\tx":               "'\tx",
+		"MW-1":              "MW-1",
+		"":                  "",
+	} {
+		if got := Inert(in); got != want {
+			t.Errorf("Inert(%q) = %q, want %q", in, got, want)
+		}
+	}
+	neg := -2.5
+	if got := (Cell{Num: &neg, Digits: 1}).CSVText(); got != "-2.5" {
+		t.Errorf("a negative number became %q", got)
+	}
+}

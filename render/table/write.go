@@ -22,7 +22,7 @@ func (t *Table) CSV(w io.Writer) error {
 		cells := t.Cells(r)
 		rec := make([]string, len(cells))
 		for i, c := range cells {
-			rec[i] = c.String()
+			rec[i] = c.CSVText()
 		}
 		if err := cw.Write(rec); err != nil {
 			return fmt.Errorf("csv: %w", err)

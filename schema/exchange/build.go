@@ -50,6 +50,9 @@ func Import(paths ...string) ([]WellFile, []error) {
 	for _, s := range intervals {
 		im.readIntervals(s)
 	}
+	if len(im.order) == 0 && len(im.errs) == 0 {
+		return nil, []error{fmt.Errorf("%s: the Wells sheet has no wells", wells[0].file)}
+	}
 	var out []WellFile
 	for _, w := range im.order {
 		wf, ok := im.build(w)
@@ -391,7 +394,7 @@ func (d *doc) table(header string, it *item) {
 		d.line("", Cell{})
 	}
 	d.line(header, it.head)
-	for _, e := range it.keys {
+	for _, e := range sortedKeys(it) {
 		d.line(e.key+" = "+e.value, e.cell)
 	}
 }
@@ -500,4 +503,25 @@ func Destinations(dir string, files []WellFile) (paths, existing []string) {
 		}
 	}
 	return paths, existing
+}
+
+// sortedKeys are an element's keys in the key table's order (the order of
+// schema/FORMAT.md), keys it does not know last, each group as written.
+func sortedKeys(it *item) []entry {
+	var names []string
+	if k := tableSpec(it.table); k != nil {
+		names = k.Names()
+	}
+	keys := slices.Clone(it.keys)
+	sort.SliceStable(keys, func(i, j int) bool {
+		a, b := slices.Index(names, keys[i].key), slices.Index(names, keys[j].key)
+		if a < 0 {
+			a = len(names)
+		}
+		if b < 0 {
+			b = len(names)
+		}
+		return a < b
+	})
+	return keys
 }

@@ -21,21 +21,28 @@ const (
 	tPairs    // "a b; c d" for [[a, b], [c, d]]
 )
 
+// tableSpec finds a table of the well file's key table by its dotted
+// path ("surface.pad", "string.section"); nil when there is none.
+func tableSpec(table string) *schema.TableSpec {
+	spec := schema.WellFile
+	if table == "" {
+		return spec
+	}
+	for _, part := range strings.Split(table, ".") {
+		k := spec.Key(part)
+		if k == nil || k.Table == nil {
+			return nil
+		}
+		spec = k.Table
+	}
+	return spec
+}
+
 // keySpec finds a key in the well file's key table (schema.WellFile):
 // table is a dotted path ("surface.pad", "string.section"). nil when the
 // format has no such key; the loader then names the cell.
 func keySpec(table, key string) *schema.KeySpec {
-	spec := schema.WellFile
-	if table != "" {
-		for _, part := range strings.Split(table, ".") {
-			k := spec.Key(part)
-			if k == nil || k.Table == nil {
-				return nil
-			}
-			spec = k.Table
-		}
-	}
-	return spec.Key(key)
+	return tableSpec(table).Key(key)
 }
 
 // typeOf is the type of a key of a table, from the key table; a key it

@@ -6,6 +6,8 @@ import (
 	"strconv"
 	"strings"
 	"time"
+
+	"github.com/tremie-dev/tremie/schema"
 )
 
 // tomlValue turns a cell's text into the TOML value of a key of type t,
@@ -97,16 +99,19 @@ func splitList(s string) []string {
 	return out
 }
 
-// number writes a number as TOML: a whole number as an integer, else the
-// shortest decimal that reads back to the same float.
+// number writes a number as a TOML float, as the key table's writer
+// does: the shortest decimal that reads back to the same value, with a
+// decimal point (36.0).
 func number(s string) (string, error) {
 	v, err := strconv.ParseFloat(strings.TrimSpace(s), 64)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		return "", fmt.Errorf("%q is not a number", s)
 	}
-	return formatNumber(v), nil
+	return schema.TOMLValue(schema.TypeNumber, v), nil
 }
 
+// formatNumber writes a number for a cell's text: as short as it reads
+// back exactly, no decimal point on a whole number.
 func formatNumber(v float64) string {
 	if v == math.Trunc(v) && math.Abs(v) < 1e15 {
 		return strconv.FormatInt(int64(v), 10)

@@ -14,9 +14,13 @@ func init() {
 			"pack washes into the well and the formation follows. For a pack given by a sieve range (e.g. " +
 			"20/40: 0.425 to 0.850 mm) the share retained by a slot is estimated by taking the grains as spread " +
 			"evenly on a log scale between the two sieve openings: a slot at or below the fine end retains all " +
-			"of it, one at the coarse end none. Packs with no gradation or grain sizes recorded are skipped.",
+			"of it, one at the coarse end none. A pack given by its grading curve (d10, and d30, d60 if known) is " +
+			"judged on it instead: by definition a slot no wider than d10 holds back the 90 % of the pack that is " +
+			"coarser; between two known points the share passing is read on a straight line in log grain size. " +
+			"Packs with no gradation, grain sizes or grading recorded are skipped.",
 		Severity: Error,
-		Source:   "US EPA, RCRA Ground-Water Monitoring: Draft Technical Guidance (1992): the slot retains 90 to 100 % of the filter pack",
+		Source: "US EPA, RCRA Ground-Water Monitoring: Draft Technical Guidance (1992): the slot retains 90 to 100 % of the filter pack; " +
+			"d10, d30, d60 as defined in ASTM D2487 and D6913 (the sizes 10, 30, 60 % of the mass is finer than)",
 		Params: []Param{{
 			Name: "min_retained", Kind: RatioParam, Default: 0.90, Fraction: true,
 			Doc:    "least fraction of the pack the slot must retain (0 to 1)",
@@ -54,10 +58,14 @@ func runSlotRetainsPack(p *Pass) {
 			continue
 		}
 		for _, f := range p.annulusFills(p.annulusAt(mid(sec.Interval))) {
-			if !isPack(f) || f.GrainMin <= 0 {
+			if !isPack(f) || (f.GrainMin <= 0 && f.D10 <= 0) {
 				continue
 			}
 			if _, ok := overlap(f.Interval, sec.Interval); !ok {
+				continue
+			}
+			if f.D10 > 0 {
+				p.slotAgainstCurve(sc, f, need)
 				continue
 			}
 			kept := retainedFraction(sec.Slot, f.GrainMin, f.GrainMax)
@@ -82,4 +90,58 @@ func runSlotRetainsPack(p *Pass) {
 				schema.TrimFloat(float64(f.GrainMin), 3), schema.TrimFloat(float64(f.GrainMax), 3), pct(need))
 		}
 	}
+}
+
+// retainedByCurve bounds the share of a pack a slot holds back, from the
+// points of its grading curve that are known ((d10, 10 %), (d30, 30 %),
+// (d60, 60 %) finer by mass): exact at a point, read on a straight line in
+// log size between two (our model, as a sieve analysis is plotted), and
+// only bounded outside them.
+func retainedByCurve(slot schema.Diameter, f *schema.Fill) (lo, hi float64) {
+	type point struct {
+		d       schema.Diameter
+		passing float64
+	}
+	var pts []point
+	for _, q := range []point{{f.D10, 0.10}, {f.D30, 0.30}, {f.D60, 0.60}} {
+		if q.d > 0 {
+			pts = append(pts, q)
+		}
+	}
+	if slot <= pts[0].d {
+		return 1 - pts[0].passing, 1 // at most 10 % is finer than the slot
+	}
+	for i := 1; i < len(pts); i++ {
+		a, b := pts[i-1], pts[i]
+		if slot <= b.d {
+			passing := a.passing
+			if b.d > a.d {
+				passing += (b.passing - a.passing) * math.Log(float64(slot/a.d)) / math.Log(float64(b.d/a.d))
+			}
+			return 1 - passing, 1 - passing
+		}
+	}
+	// coarser than the last point known: strictly less is retained than
+	// at that point
+	return 0, 1 - pts[len(pts)-1].passing - 1e-6
+}
+
+// slotAgainstCurve checks a screen's slot against a pack's grading curve.
+func (p *Pass) slotAgainstCurve(sc schema.StringSection, f *schema.Fill, need float64) {
+	sec := sc.Section
+	lo, hi := retainedByCurve(sec.Slot, f)
+	if hi >= need-1e-9 {
+		return // retains enough, or may: the curve says no less
+	}
+	slotKey := key(sec.Path, "slot")
+	if !p.Well.HasKey(slotKey) {
+		slotKey = key(sec.Path, "slot_number")
+	}
+	share := "about " + pct(lo)
+	if lo != hi {
+		share = "less than " + pct(hi)
+	}
+	p.Reportf(slotKey, depths(sec.Interval), "the %.0f-slot (%s) screen of string %q at %s is wider than the d10 (%s mm) of the %s at %s: it retains %s of it; at least %s should be retained",
+		sec.SlotNumber(), p.Dia(sec.Slot), sc.String.Name, p.span(sec.Interval), schema.TrimFloat(float64(f.D10), 3),
+		material(f.Material), p.span(f.Interval), share, pct(need))
 }

@@ -195,34 +195,70 @@ func TestSanitarySealFromProfile(t *testing.T) {
 	}
 }
 
-// Slot number = thousandths of an inch (common practice): 20-slot =
-// 0.020 in = 0.508 mm. A 20/40 pack runs from 0.425 mm (ASTM E11 No. 40)
-// to 0.850 mm (No. 20). Log-even grains: a 0.508 mm slot retains
-// 1 - ln(0.508/0.425)/ln(0.850/0.425) = 1 - 0.17839/0.69315 = 0.7426,
-// under the 90 % of US EPA 1992; a 10-slot (0.254 mm) retains all.
+// A pack given by its grading curve. By the definition of d10 (ASTM
+// D2487 §3, ASTM D6913: the size 10 % of the mass is finer than), a slot no
+// wider than d10 holds back 90 % of the pack, the minimum of US EPA 1992,
+// and a slot wider than d10 less than that. Slot numbers are thousandths
+// of an inch (common practice): 10-slot = 0.254 mm, 20-slot = 0.508 mm
+// (NIST SP 811: 1 in = 25.4 mm).
 func TestSlotAgainstPack(t *testing.T) {
+	packD := func(slot string, d10, d60 string) string {
+		pack := "[[fill]]\ntop = 23.0\nbottom = 36.0\nmaterial = \"filter-pack\"\nd10 = " + d10 + "\n"
+		if d60 != "" {
+			pack += "d60 = " + d60 + "\n"
+		}
+		w := monitoringWell("ft", "8.25", "36.0", pack+fill("20.0", "23.0", "bentonite-chips")+fill("0.0", "20.0", "neat-cement"))
+		return strings.Replace(w, "slot_number = 10", "slot_number = "+slot, 1)
+	}
+	// d10 = 0.45 mm: a 10-slot (0.254 mm) retains at least 90 %.
+	if fs := findings(load(t, packD("10", "0.45", "")), nil, "SLOT-RETAINS-PACK"); len(fs) != 0 {
+		t.Errorf("10-slot, d10 0.45 mm: %s", fs[0].Message)
+	}
+	// A 20-slot (0.508 mm) is wider than d10 = 0.45 mm: less than 90 %.
+	fs := findings(load(t, packD("20", "0.45", "")), nil, "SLOT-RETAINS-PACK")
+	if len(fs) != 1 || !strings.Contains(fs[0].Message, "wider than the d10 (0.45 mm)") || !strings.Contains(fs[0].Message, "less than 90 %") {
+		t.Errorf("20-slot, d10 0.45 mm: %+v", fs)
+	}
+	// The same slot on a pack with d10 = 0.52 mm (coarser than the slot)
+	// passes, whatever the sieve range would have said.
+	if fs := findings(load(t, packD("20", "0.52", "")), nil, "SLOT-RETAINS-PACK"); len(fs) != 0 {
+		t.Errorf("20-slot, d10 0.52 mm: %s", fs[0].Message)
+	}
+	// With d60 = 0.70 mm the share finer than 0.508 mm is read on the
+	// straight line in log size between (0.45, 10 %) and (0.70, 60 %):
+	// 10 + 50 x ln(0.508/0.45)/ln(0.70/0.45) = 10 + 50 x 0.12124/0.44183 =
+	// 23.7 %, so 76 % is retained (arithmetic on the grading plot).
+	fs = findings(load(t, packD("20", "0.45", "0.70")), nil, "SLOT-RETAINS-PACK")
+	if len(fs) != 1 || !strings.Contains(fs[0].Message, "about 76 %") {
+		t.Errorf("20-slot, d10 0.45, d60 0.70 mm: %+v, want about 76 %%", fs)
+	}
+}
+
+// The sieve-range model (ours, documented in the rule): grains spread
+// evenly on a log scale between the two ASTM E11 openings of the range
+// (20/40: No. 40 = 0.425 mm to No. 20 = 0.850 mm). The bounds are the
+// model's definition: a slot at or below the fine sieve retains all, one
+// at the coarse sieve none, and a slot half-way in log size (the
+// geometric mean, 0.601 mm) half.
+func TestSlotAgainstSieveRange(t *testing.T) {
 	lo, hi, err := schema.ParseGradation("20/40")
 	if err != nil {
 		t.Fatal(err)
 	}
-	slot20 := schema.DiameterFrom(0.020, schema.Inches)
-	if math.Abs(float64(slot20)-0.508) > 1e-12 {
-		t.Fatalf("20-slot = %v mm, want 0.508", slot20)
-	}
-	if got := retainedFraction(slot20, lo, hi); math.Abs(got-0.7426) > 5e-4 {
-		t.Errorf("20-slot in 20/40 retains %.4f, want 0.7426", got)
-	}
-	if got := retainedFraction(schema.DiameterFrom(0.010, schema.Inches), lo, hi); got != 1 {
-		t.Errorf("10-slot in 20/40 retains %v, want 1", got)
-	}
-	// 10/20 sand (0.850-2.00 mm) with a 20-slot screen: the usual pairing
-	// (common practice) retains all of it.
-	lo, hi, _ = schema.ParseGradation("10/20")
-	if got := retainedFraction(slot20, lo, hi); got != 1 {
-		t.Errorf("20-slot in 10/20 retains %v, want 1", got)
+	if got := retainedFraction(lo, lo, hi); got != 1 {
+		t.Errorf("slot at the fine sieve retains %v, want 1", got)
 	}
 	if got := retainedFraction(hi, lo, hi); got != 0 {
-		t.Errorf("a slot as wide as the coarsest grain retains %v, want 0", got)
+		t.Errorf("slot at the coarse sieve retains %v, want 0", got)
+	}
+	if got := retainedFraction(schema.Diameter(math.Sqrt(0.425*0.850)), lo, hi); math.Abs(got-0.5) > 1e-12 {
+		t.Errorf("slot at the geometric mean retains %v, want 0.5", got)
+	}
+	// 10/20 sand (0.850-2.00 mm) with a 20-slot (0.508 mm) screen, the
+	// usual pairing (common practice): all retained.
+	lo, hi, _ = schema.ParseGradation("10/20")
+	if got := retainedFraction(schema.DiameterFrom(0.020, schema.Inches), lo, hi); got != 1 {
+		t.Errorf("20-slot in 10/20 retains %v, want 1", got)
 	}
 }
 

@@ -5,7 +5,8 @@ package demo
 
 import "embed"
 
-// FS holds project.toml and wells/*.toml.
+// FS holds project.toml, wells/*.toml and the wall images the wells
+// name (wells/*.png, made by wallimage.DemoImages; a test keeps them so).
 //
-//go:embed project.toml wells/*.toml
+//go:embed project.toml wells/*.toml wells/*.png
 var FS embed.FS

@@ -14,7 +14,7 @@ var writeGallery = flag.Bool("gallery", false, "rewrite testdata/gallery/DS-1200
 // The gallery's deep well is Deep(1200, 150), kept as a file so the
 // sheets' tests and a user can read it; this test keeps the two equal.
 func TestDeepGalleryWell(t *testing.T) {
-	const path = "../../../testdata/gallery/DS-1200.toml"
+	const path = "../../testdata/gallery/DS-1200.toml"
 	data := Deep(1200, 150)
 	if *writeGallery {
 		if err := os.WriteFile(path, data, 0o644); err != nil {
@@ -23,7 +23,7 @@ func TestDeepGalleryWell(t *testing.T) {
 	}
 	got, err := os.ReadFile(path)
 	if err != nil || string(got) != string(data) {
-		t.Fatalf("%s is not Deep(1200, 150); rewrite it with go test ./cmd/internal/synth -run DeepGallery -gallery (%v)", path, err)
+		t.Fatalf("%s is not Deep(1200, 150); rewrite it with go test ./schema/synth -run DeepGallery -gallery (%v)", path, err)
 	}
 	w, err := schema.Load(path, data)
 	if err != nil {

@@ -10,13 +10,13 @@ import (
 	"testing"
 	"time"
 
-	"github.com/tremie-dev/tremie/cmd/internal/batch"
-	"github.com/tremie-dev/tremie/cmd/internal/synth"
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/render/out"
+	"github.com/tremie-dev/tremie/render/pipeline/batch"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/project"
 	"github.com/tremie-dev/tremie/schema/rules"
+	"github.com/tremie-dev/tremie/schema/synth"
 )
 
 // run is a render loop as the command runs it: hash every well, skip the

@@ -28,6 +28,7 @@ type Cache struct {
 	mu      sync.Mutex
 	entries map[string]entry
 	orphans map[string]bool // outputs no well claims any more
+	files   map[string]bool // other outputs tremie wrote here (a book, a table)
 	dirty   bool
 }
 
@@ -35,12 +36,16 @@ type Cache struct {
 type entry struct {
 	Hash    string   `json:"hash"`
 	Outputs []string `json:"outputs"` // relative to the output directory, sorted
+	// Source is the well file, relative to the output directory: a well
+	// left out of a run is stale only when this file is gone.
+	Source string `json:"source,omitempty"`
 }
 
 type fileData struct {
 	Format  int              `json:"format"`
 	Wells   map[string]entry `json:"wells"`
 	Orphans []string         `json:"orphans,omitempty"`
+	Files   []string         `json:"files,omitempty"`
 }
 
 // Load reads the cache of an output directory. A missing file gives an
@@ -48,7 +53,7 @@ type fileData struct {
 // (everything is drawn again) together with an error to print as a
 // warning.
 func Load(outdir string) (*Cache, error) {
-	c := &Cache{dir: outdir, entries: map[string]entry{}, orphans: map[string]bool{}}
+	c := &Cache{dir: outdir, entries: map[string]entry{}, orphans: map[string]bool{}, files: map[string]bool{}}
 	path := filepath.Join(outdir, FileName)
 	data, err := os.ReadFile(path)
 	if errors.Is(err, fs.ErrNotExist) {
@@ -71,6 +76,9 @@ func Load(outdir string) (*Cache, error) {
 	}
 	for _, o := range fd.Orphans {
 		c.orphans[o] = true
+	}
+	for _, f := range fd.Files {
+		c.files[f] = true
 	}
 	return c, nil
 }
@@ -102,6 +110,12 @@ func (c *Cache) Fresh(key, hash string, outputs []string) bool {
 // hash into these outputs. Outputs it had before and no longer has become
 // orphans, reported by Stale.
 func (c *Cache) Record(key, hash string, outputs []string) {
+	c.RecordFrom(key, "", hash, outputs)
+}
+
+// RecordFrom is Record for a well read from source (a path relative to
+// the output directory), which Stale consults.
+func (c *Cache) RecordFrom(key, source, hash string, outputs []string) {
 	outs := sorted(outputs)
 	c.mu.Lock()
 	defer c.mu.Unlock()
@@ -113,7 +127,7 @@ func (c *Cache) Record(key, hash string, outputs []string) {
 	for _, o := range outs {
 		delete(c.orphans, o)
 	}
-	c.entries[key] = entry{Hash: hash, Outputs: outs}
+	c.entries[key] = entry{Hash: hash, Outputs: outs, Source: filepath.ToSlash(source)}
 	c.dirty = true
 }
 
@@ -133,9 +147,11 @@ func (c *Cache) Forget(key string) {
 }
 
 // Stale returns, sorted, the outputs still on disk that belong to no
-// present well: those of wells whose keys are not in present, and those a
-// well produced once under another name. Nothing is deleted. Records of
-// absent wells whose outputs are all gone are dropped.
+// present well: those of wells whose keys are not in present and whose
+// well file is gone (a run over some of a project's wells leaves the
+// others' sheets alone), and those a well produced once under another
+// name. Nothing is deleted. Records of absent wells whose outputs are all
+// gone are dropped.
 func (c *Cache) Stale(present []string) []string {
 	here := make(map[string]bool, len(present))
 	for _, k := range present {
@@ -167,6 +183,14 @@ func (c *Cache) Stale(present []string) []string {
 	for k, e := range c.entries {
 		if here[k] {
 			continue
+		}
+		if e.Source != "" {
+			if _, err := os.Stat(filepath.Join(c.dir, filepath.FromSlash(e.Source))); err == nil {
+				for _, o := range e.Outputs {
+					claimed[o] = true
+				}
+				continue // its well is still there, only not in this run
+			}
 		}
 		alive := false
 		for _, o := range e.Outputs {
@@ -202,6 +226,10 @@ func (c *Cache) Save() error {
 		fd.Orphans = append(fd.Orphans, o)
 	}
 	sort.Strings(fd.Orphans)
+	for f := range c.files {
+		fd.Files = append(fd.Files, f)
+	}
+	sort.Strings(fd.Files)
 	data, err := json.MarshalIndent(fd, "", "  ") // map keys come sorted
 	if err != nil {
 		return fmt.Errorf("cache: %w", err)
@@ -223,4 +251,35 @@ func sorted(s []string) []string {
 	}
 	sort.Strings(out)
 	return out
+}
+
+// Owns reports whether tremie wrote the file at rel (relative to the
+// output directory) itself, as far as this cache knows: a well's output,
+// an orphan, or a file recorded with Claim. A file it does not own is the
+// user's and is never replaced unasked.
+func (c *Cache) Owns(rel string) bool {
+	rel = filepath.ToSlash(rel)
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	if c.files[rel] || c.orphans[rel] {
+		return true
+	}
+	for _, e := range c.entries {
+		if slices.Contains(e.Outputs, rel) {
+			return true
+		}
+	}
+	return false
+}
+
+// Claim records a file tremie wrote at rel that belongs to no one well
+// (a book, a summary table), so that a later run may replace it.
+func (c *Cache) Claim(rel string) {
+	rel = filepath.ToSlash(rel)
+	c.mu.Lock()
+	defer c.mu.Unlock()
+	if !c.files[rel] {
+		c.files[rel] = true
+		c.dirty = true
+	}
 }

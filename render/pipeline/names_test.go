@@ -1,0 +1,51 @@
+package pipeline
+
+import (
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+func TestSafeName(t *testing.T) {
+	cases := map[string]string{
+		"MW-1":                   "MW-1",
+		"../../x":                "x",
+		"..":                     "well",
+		"":                       "well",
+		".hidden":                "hidden",
+		"a/b\\c":                 "a-b-c",
+		"MW 3 (deep)":            "MW-3-deep",
+		"PZ-2.5":                 "PZ-2.5",
+		"a..b":                   "a.b",
+		"日本":                     "well",
+		"/etc/passwd":            "etc-passwd",
+		"C:\\x\\..\\y":           "C-x-y",
+		"x\x00y":                 "x-y",
+		strings.Repeat("a", 200): strings.Repeat("a", 80),
+	}
+	for in, want := range cases {
+		got := SafeName(in)
+		if got != want {
+			t.Errorf("SafeName(%q) = %q, want %q", in, got, want)
+		}
+		if got != filepath.Base(got) || strings.HasPrefix(got, ".") || strings.Contains(got, "..") {
+			t.Errorf("SafeName(%q) = %q is not a plain file name", in, got)
+		}
+	}
+}
+
+func TestAssignNamesDedupes(t *testing.T) {
+	var wells []*Well
+	for i, id := range []string{"MW 1", "MW/1", "mw-1", "PZ-1"} {
+		wells = append(wells, &Well{Input: Input{Path: string(rune('a'+i)) + ".toml"}, Well: &schema.Well{ID: id}})
+	}
+	got := AssignNames(wells)
+	want := []string{"MW-1", "MW-1-2", "mw-1-3", "PZ-1"}
+	for i, w := range want {
+		if got[wells[i]] != w {
+			t.Errorf("%s: %q, want %q", wells[i].Path, got[wells[i]], w)
+		}
+	}
+}

@@ -1,0 +1,141 @@
+package pipeline
+
+import (
+	"errors"
+	"fmt"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/sheet"
+	"github.com/tremie-dev/tremie/render/wallimage"
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/project"
+	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+// Checks says which rules a well is checked with.
+type Checks int
+
+const (
+	AllRules       Checks = iota // every rule (check, render, book, table)
+	ReconcileRules               // only the reconciliation of placed amounts and tags (quantities)
+)
+
+// Well is one well file carried through the pipeline: read and parsed by
+// Load, completed, checked and quantified by Prepare, drawn by Layout.
+type Well struct {
+	Input
+	Data []byte       // the file's bytes, nil when it could not be read
+	Well *schema.Well // nil when Err is set
+	ID   string       // the well's ID, "" when it could not be read
+	// Err is why the well cannot be judged: the file could not be read or
+	// parsed (a schema.ErrorList), its setting could not be read, or its
+	// ID is another well's too.
+	Err        error
+	Findings   []rules.Finding  // after Prepare
+	Quantities *quantity.Report // after Prepare
+}
+
+// ErrSetting marks a well whose project settings could not be read; the
+// reasons are in Run.Problems, printed once.
+var ErrSetting = errors.New("not judged: its project's settings could not be read")
+
+// Load reads and parses one well file.
+func Load(in Input) *Well {
+	w := &Well{Input: in}
+	if in.Setting != nil && in.Setting.Err != nil {
+		w.Err = &schema.Error{File: in.Path, Msg: ErrSetting.Error()}
+		return w
+	}
+	data, err := schema.ReadInput(in.Path, schema.MaxTextFile)
+	if err != nil {
+		w.Err = schema.ErrorList{schema.ReadError(in.Path, "", err)}
+		return w
+	}
+	w.Data = data
+	if w.Well, err = schema.Load(in.Path, data); err != nil {
+		w.Well, w.Err = nil, err
+		return w
+	}
+	w.ID = w.Well.ID
+	return w
+}
+
+// Prepare completes a loaded well from its project's defaults, checks it
+// with its setting's profile and computes its quantities with the
+// setting's yields. A well that could not be loaded is left as it is.
+func (w *Well) Prepare(checks Checks) {
+	if w.Err != nil || w.Well == nil {
+		return
+	}
+	s := w.Setting
+	project.Apply(s.Project, w.Well)
+	w.Quantities = quantity.Compute(w.Well, s.Yields)
+	if checks == ReconcileRules {
+		w.Findings = rules.Run(w.Well, rules.Select(rules.Reconciling), s.Profile)
+	} else {
+		w.Findings = rules.Check(w.Well, s.Profile)
+	}
+	if w.Findings == nil {
+		w.Findings = []rules.Finding{}
+	}
+}
+
+// Prepare loads and prepares one well.
+func Prepare(in Input, checks Checks) *Well {
+	w := Load(in)
+	w.Prepare(checks)
+	return w
+}
+
+// Blocking reports whether the well has an unwaived error finding.
+func (w *Well) Blocking() bool { return rules.Blocking(w.Findings) }
+
+// LayoutOptions are the drafting choices a command may make.
+type LayoutOptions struct {
+	Scale *sheet.Scale // nil: automatic
+	// Date is the document date (RFC 3339): the run's SourceDate, a
+	// project's date, or "" for the well's own.
+	Date string
+	// SheetOffset and SheetTotal number the sheets within a bound set.
+	SheetOffset, SheetTotal int
+	// Issue draws the issued set (sheet.Options.Issue).
+	Issue bool
+}
+
+// SheetInputs is what the sheet shows besides the well: its findings,
+// quantities, wall images (read relative to the well file) and its
+// project's title block and logo. An image that cannot be read is an
+// input error naming the well file and line.
+func (w *Well) SheetInputs() (sheet.Inputs, error) {
+	s := w.Setting
+	in := sheet.Inputs{Findings: w.Findings, Quantities: w.Quantities, TitleBlock: s.TitleBlock(), Logo: s.Logo(), Profile: s.Profile}
+	images, errs := wallimage.LoadAll(w.Path, w.Well)
+	if len(errs) > 0 {
+		return in, errors.Join(errs...)
+	}
+	in.WallImages = images
+	return in, nil
+}
+
+// SheetOptions are the drafting choices: the setting's page and opt.
+func (w *Well) SheetOptions(opt LayoutOptions) sheet.Options {
+	return sheet.Options{Page: w.Setting.Page, Scale: opt.Scale, Date: opt.Date, SheetOffset: opt.SheetOffset, SheetTotal: opt.SheetTotal, Issue: opt.Issue}
+}
+
+// Layout lays a prepared well out on its setting's page with its
+// project's title block and logo.
+func (w *Well) Layout(opt LayoutOptions) (*draw.Document, error) {
+	if w.Well == nil {
+		return nil, fmt.Errorf("%s: no well to draw", w.Path)
+	}
+	in, err := w.SheetInputs()
+	if err != nil {
+		return nil, err
+	}
+	doc, err := sheet.Layout(w.Well, in, w.SheetOptions(opt))
+	if err != nil {
+		return nil, fmt.Errorf("%s: %w", w.Path, err)
+	}
+	return doc, nil
+}

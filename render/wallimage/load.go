@@ -1,0 +1,196 @@
+// Package wallimage reads unwrapped images of a borehole wall (PNG, JPEG,
+// TIFF) with their size and format checked before anything is decoded,
+// keeps them at a bounded working resolution, cuts and resamples strips
+// of them for a sheet, and makes the demo's image from its picks.
+package wallimage
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+	"image"
+	"image/draw"
+	_ "image/jpeg" // wall images may be JPEG
+	"image/png"
+	"io"
+	"os"
+	"path/filepath"
+
+	"github.com/tremie-dev/tremie/schema"
+
+	xdraw "golang.org/x/image/draw"
+	_ "golang.org/x/image/tiff" // or TIFF
+)
+
+// Limits: a file is refused before decoding when it breaks one, so no
+// image can exhaust memory. An optical log 100 m long at 1 mm per row and
+// 360 columns is 36 megapixels: such a log is split into several images.
+const (
+	MaxFileBytes = 64 << 20   // 64 MiB
+	MaxPixels    = 24_000_000 // width × height: 96 MiB decoded as 8-bit RGBA
+	MaxSide      = 60_000     // pixels, either side
+	MinSide      = 8
+	// The working copy kept after decoding: 720 columns (half a degree)
+	// by 16384 rows at most, 47 MiB of RGBA at worst.
+	workWidth  = 720
+	workHeight = 16384
+)
+
+// Image is a decoded wall image at working resolution.
+type Image struct {
+	Pix           *image.RGBA
+	Format        string // png, jpeg or tiff
+	Width, Height int    // of the file, as decoded
+}
+
+// ErrFormat is returned for a file that is not a PNG, JPEG or TIFF.
+var ErrFormat = errors.New("not a PNG, JPEG or TIFF image")
+
+// Load reads and checks an image file.
+func Load(path string) (*Image, error) {
+	f, err := os.Open(path)
+	if err != nil {
+		return nil, err
+	}
+	defer f.Close()
+	st, err := f.Stat()
+	if err != nil {
+		return nil, err
+	}
+	if st.IsDir() {
+		return nil, fmt.Errorf("%s is a directory, not an image", path)
+	}
+	if st.Size() > MaxFileBytes {
+		return nil, fmt.Errorf("%s is %d bytes; the limit is %d (64 MiB)", path, st.Size(), MaxFileBytes)
+	}
+	data, err := io.ReadAll(io.LimitReader(f, MaxFileBytes+1))
+	if err != nil {
+		return nil, err
+	}
+	im, err := Decode(data)
+	if err != nil {
+		return nil, fmt.Errorf("%s: %w", path, err)
+	}
+	return im, nil
+}
+
+// Decode checks and decodes image bytes: the header's format and size
+// first, then the pixels, whose real size must match the header's.
+func Decode(data []byte) (*Image, error) {
+	if len(data) > MaxFileBytes {
+		return nil, fmt.Errorf("%d bytes; the limit is %d (64 MiB)", len(data), MaxFileBytes)
+	}
+	cfg, format, err := image.DecodeConfig(bytes.NewReader(data))
+	if err != nil {
+		if errors.Is(err, image.ErrFormat) {
+			return nil, ErrFormat
+		}
+		return nil, fmt.Errorf("unreadable image header: %w", err)
+	}
+	switch format {
+	case "png", "jpeg", "tiff":
+	default:
+		return nil, fmt.Errorf("%s image: %w", format, ErrFormat)
+	}
+	if err := checkSize(cfg.Width, cfg.Height); err != nil {
+		return nil, err
+	}
+	src, _, err := image.Decode(bytes.NewReader(data))
+	if err != nil {
+		return nil, fmt.Errorf("%s image: %w", format, err)
+	}
+	b := src.Bounds()
+	if b.Dx() != cfg.Width || b.Dy() != cfg.Height {
+		return nil, fmt.Errorf("%s image decodes to %d×%d pixels but its header says %d×%d", format, b.Dx(), b.Dy(), cfg.Width, cfg.Height)
+	}
+	return &Image{Pix: working(src), Format: format, Width: b.Dx(), Height: b.Dy()}, nil
+}
+
+func checkSize(w, h int) error {
+	switch {
+	case w < MinSide || h < MinSide:
+		return fmt.Errorf("image of %d×%d pixels is too small (at least %d on a side)", w, h, MinSide)
+	case w > MaxSide || h > MaxSide:
+		return fmt.Errorf("image of %d×%d pixels is too large (at most %d on a side)", w, h, MaxSide)
+	case int64(w)*int64(h) > MaxPixels:
+		return fmt.Errorf("image of %d×%d pixels is too large (at most %d megapixels)", w, h, MaxPixels/1_000_000)
+	}
+	return nil
+}
+
+// working copies the image to RGBA, shrunk to the working size if larger.
+func working(src image.Image) *image.RGBA {
+	b := src.Bounds()
+	w, h := min(b.Dx(), workWidth), min(b.Dy(), workHeight)
+	dst := image.NewRGBA(image.Rect(0, 0, w, h))
+	if w == b.Dx() && h == b.Dy() {
+		draw.Draw(dst, dst.Bounds(), src, b.Min, draw.Src)
+		return dst
+	}
+	xdraw.ApproxBiLinear.Scale(dst, dst.Bounds(), src, b, xdraw.Src, nil)
+	return dst
+}
+
+// Strip cuts the rows between fractions top and bottom of the image's
+// height (0 top, 1 bottom) and resamples them to w × h pixels, as PNG.
+func (im *Image) Strip(top, bottom float64, w, h int) ([]byte, error) {
+	if im == nil || im.Pix == nil {
+		return nil, errors.New("no image")
+	}
+	if !(bottom > top) || w < 1 || h < 1 || w > 4096 || h > 16384 {
+		return nil, fmt.Errorf("strip %v–%v at %d×%d pixels is not drawable", top, bottom, w, h)
+	}
+	H := float64(im.Pix.Bounds().Dy())
+	y0, y1 := int(max(0, top)*H), int(min(1, bottom)*H+0.999)
+	if y1 <= y0 {
+		y1 = y0 + 1
+	}
+	src := im.Pix.Bounds()
+	src.Min.Y, src.Max.Y = y0, min(y1, src.Max.Y)
+	dst := image.NewRGBA(image.Rect(0, 0, w, h))
+	xdraw.CatmullRom.Scale(dst, dst.Bounds(), im.Pix, src, xdraw.Src, nil)
+	var buf bytes.Buffer
+	if err := (&png.Encoder{CompressionLevel: png.BestSpeed}).Encode(&buf, dst); err != nil {
+		return nil, err
+	}
+	return buf.Bytes(), nil
+}
+
+// LoadAll reads every [[wall_image]] of a well, the files named relative
+// to the well file. An image that cannot be read is left out and its
+// error, naming the file and line, returned with the others.
+func LoadAll(wellFile string, w *schema.Well) (map[string]*Image, []error) {
+	out := map[string]*Image{}
+	var errs []error
+	for _, wi := range w.WallImages {
+		p := wi.File
+		if !filepath.IsAbs(p) {
+			p = filepath.Join(filepath.Dir(wellFile), filepath.FromSlash(p))
+		}
+		im, err := Load(p)
+		if err != nil {
+			errs = append(errs, &schema.Error{File: w.Pos.File, Line: w.Line(wi.Path + ".file"), Key: wi.Path + ".file", Msg: "wall image: " + err.Error()})
+			continue
+		}
+		out[wi.Name] = im
+	}
+	return out, errs
+}
+
+// Fingerprint names the state of a well's image files (path, size and
+// modification time of each), for a cache key: a changed image redraws
+// the well without being read twice.
+func Fingerprint(wellFile string, w *schema.Well) []byte {
+	var b bytes.Buffer
+	for _, wi := range w.WallImages {
+		p := wi.File
+		if !filepath.IsAbs(p) {
+			p = filepath.Join(filepath.Dir(wellFile), filepath.FromSlash(p))
+		}
+		fmt.Fprintf(&b, "\nwall_image %q", p)
+		if st, err := os.Stat(p); err == nil {
+			fmt.Fprintf(&b, " %d %d", st.Size(), st.ModTime().UnixNano())
+		}
+	}
+	return b.Bytes()
+}

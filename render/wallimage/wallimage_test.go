@@ -1,0 +1,139 @@
+package wallimage
+
+import (
+	"bytes"
+	"encoding/binary"
+	"hash/crc32"
+	"image"
+	"image/color"
+	"image/png"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+func demoWell(t *testing.T) *schema.Well {
+	t.Helper()
+	w, err := schema.LoadFile("../../cmd/tremie/demo/wells/BR-1.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	return w
+}
+
+// The demo image is made the same each time, and reads back at its size.
+func TestSynthesizeDeterministic(t *testing.T) {
+	w := demoWell(t)
+	a, err := Synthesize(w, w.WallImages[0], 360, 10)
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, _ := Synthesize(w, w.WallImages[0], 360, 10)
+	if !bytes.Equal(a, b) {
+		t.Fatal("two runs differ")
+	}
+	im, err := Decode(a)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if im.Width != 360 || im.Height != 1100 || im.Format != "png" {
+		t.Errorf("decoded %d×%d %s", im.Width, im.Height, im.Format)
+	}
+	if dir := os.Getenv("TREMIE_LOOK"); dir != "" {
+		os.WriteFile(filepath.Join(dir, "BR-1-wall.png"), a, 0o644)
+	}
+}
+
+// The trace of a picked feature is dark where its sinusoid runs: the
+// water-bearing fracture at 97 ft, lowest (97.36 ft) at magnetic 292°.
+func TestSynthesizeDrawsTraces(t *testing.T) {
+	w := demoWell(t)
+	data, _ := Synthesize(w, w.WallImages[0], 360, 10)
+	img, _ := png.Decode(bytes.NewReader(data))
+	g := img.(*image.Gray)
+	for _, f := range w.Features {
+		if f.Kind != schema.WaterBearingFracture {
+			continue
+		}
+		p := f.Orient.Picked
+		for _, az := range []float64{0, 90, 180, 292} {
+			y := int((p.Fit.DepthAt(az) - w.WallImages[0].Top).In(schema.Feet) * 10)
+			if v := g.GrayAt(int(az), y).Y; v > 60 {
+				t.Errorf("at %v° row %d the trace is %d, not dark", az, y, v)
+			}
+		}
+	}
+}
+
+func pngOf(w, h int) []byte {
+	var buf bytes.Buffer
+	png.Encode(&buf, image.NewGray(image.Rect(0, 0, w, h)))
+	return buf.Bytes()
+}
+
+func TestDecodeChecks(t *testing.T) {
+	if _, err := Decode([]byte("GIF89a....")); err == nil {
+		t.Error("GIF accepted")
+	}
+	if _, err := Decode([]byte("not an image at all")); err == nil || !strings.Contains(err.Error(), "not a PNG, JPEG or TIFF") {
+		t.Errorf("text: %v", err)
+	}
+	if _, err := Decode(pngOf(4, 100)); err == nil || !strings.Contains(err.Error(), "too small") {
+		t.Errorf("4 px wide: %v", err)
+	}
+	// A header claiming 60 001 × 10 rows is refused before decoding.
+	big := pngOf(10, 10)
+	binary.BigEndian.PutUint32(big[16:], 60001)
+	binary.BigEndian.PutUint32(big[29:], crc32.ChecksumIEEE(big[12:29]))
+	if _, err := Decode(big); err == nil || !strings.Contains(err.Error(), "too large") {
+		t.Errorf("60001 px: %v", err)
+	}
+	// 5000 × 5000 is 25 megapixels, over the limit, though each side is fine.
+	huge := pngOf(10, 10)
+	binary.BigEndian.PutUint32(huge[16:], 5000)
+	binary.BigEndian.PutUint32(huge[20:], 5000)
+	binary.BigEndian.PutUint32(huge[29:], crc32.ChecksumIEEE(huge[12:29]))
+	if _, err := Decode(huge); err == nil || !strings.Contains(err.Error(), "megapixels") {
+		t.Errorf("25 Mpx: %v", err)
+	}
+	// A header that lies about its size: the pixels do not follow.
+	lie := pngOf(10, 10)
+	binary.BigEndian.PutUint32(lie[16:], 20)
+	binary.BigEndian.PutUint32(lie[29:], crc32.ChecksumIEEE(lie[12:29]))
+	if _, err := Decode(lie); err == nil {
+		t.Error("a PNG whose header lies was accepted")
+	}
+}
+
+// A strip is cut from the right rows and comes out at the size asked.
+func TestStrip(t *testing.T) {
+	src := image.NewGray(image.Rect(0, 0, 40, 100))
+	for y := 50; y < 100; y++ {
+		for x := range 40 {
+			src.SetGray(x, y, color.Gray{Y: 255})
+		}
+	}
+	var buf bytes.Buffer
+	png.Encode(&buf, src)
+	im, err := Decode(buf.Bytes())
+	if err != nil {
+		t.Fatal(err)
+	}
+	data, err := im.Strip(0.6, 1, 20, 30) // all white rows
+	if err != nil {
+		t.Fatal(err)
+	}
+	out, _ := png.Decode(bytes.NewReader(data))
+	if b := out.Bounds(); b.Dx() != 20 || b.Dy() != 30 {
+		t.Fatalf("strip %v", b)
+	}
+	if r, _, _, _ := out.At(10, 15).RGBA(); r>>8 != 255 {
+		t.Errorf("strip of white rows is %d", r>>8)
+	}
+	if _, err := im.Strip(0.5, 0.4, 20, 30); err == nil {
+		t.Error("inverted strip accepted")
+	}
+}
