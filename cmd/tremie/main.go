@@ -41,8 +41,9 @@ func register(c *command) { commands[c.name] = c }
 var quiet bool
 
 func main() {
-	stopOnSignal(os.Stderr)
-	os.Exit(exitStatus(run(os.Args[1:], os.Stdout, os.Stderr)))
+	stdout, stderr := terminalSafe()
+	stopOnSignal(stderr)
+	os.Exit(exitStatus(run(os.Args[1:], stdout, stderr)))
 }
 
 func run(args []string, stdout, stderr io.Writer) int {
