@@ -4,6 +4,7 @@ import (
 	"flag"
 	"fmt"
 	"io"
+	"slices"
 	"strings"
 
 	"github.com/tremie-dev/tremie/schema"
@@ -21,8 +22,17 @@ func init() {
 func runRules(args []string, stdout, stderr io.Writer) int {
 	fset := flag.NewFlagSet("rules", flag.ContinueOnError)
 	fset.SetOutput(stderr)
-	fset.Usage = func() { fmt.Fprintln(stderr, "usage: tremie rules [RULE-ID...]") }
+	purpose := fset.String("purpose", "", "show the thresholds in force for wells of this purpose (monitoring, public-supply, ...)")
+	fset.Usage = func() {
+		fmt.Fprintln(stderr, "usage: tremie rules [--purpose PURPOSE] [RULE-ID...]")
+		fset.PrintDefaults()
+	}
 	if err := fset.Parse(args); err != nil {
+		return exitUsage
+	}
+	pu := schema.Purpose(*purpose)
+	if pu != "" && !slices.Contains(schema.Purposes, pu) {
+		fmt.Fprintf(stderr, "tremie rules: unknown purpose %q (one of: %s)\n", *purpose, rules.PurposeList(schema.Purposes))
 		return exitUsage
 	}
 	list := rules.All()
@@ -41,7 +51,14 @@ func runRules(args []string, stdout, stderr io.Writer) int {
 	wrap(&b, "Rules of practice applied by tremie check. Thresholds are defaults, each with its source: "+
 		"set them to the governing local well code in a profile (tremie check --profile FILE; see schema/rules/PROFILE.md).", "")
 	wrap(&b, checkCaution, "")
+	if pu != "" {
+		wrap(&b, fmt.Sprintf("Thresholds for %s wells, each with its source.", pu), "")
+	}
 	for _, r := range list {
+		if pu != "" {
+			writeRuleFor(&b, r, pu)
+			continue
+		}
 		writeRule(&b, r)
 	}
 	if _, err := io.WriteString(stdout, b.String()); err != nil {
@@ -71,6 +88,20 @@ func writeRule(b *strings.Builder, r *rules.Rule) {
 		for _, d := range p.ByPurpose {
 			wrap(b, fmt.Sprintf("%s: %s; source: %s", rules.PurposeList(d.Purposes), paramDefault(p.Kind, d.Default, d.DefaultFt), d.Source), "          for ")
 		}
+	}
+}
+
+// writeRuleFor writes a rule as it applies to wells of one purpose.
+func writeRuleFor(b *strings.Builder, r *rules.Rule, pu schema.Purpose) {
+	fmt.Fprintf(b, "\n%s  %s  %s\n", r.ID, r.Severity, r.Title)
+	if !r.AppliesTo(pu) {
+		wrap(b, "does not apply to "+string(pu)+" wells by default (it applies to "+rules.PurposeList(r.Purposes)+"); a profile may switch it on", "    ")
+		return
+	}
+	wrap(b, "source: "+r.Source, "    ")
+	for _, p := range r.Params {
+		def, defFt, src := r.DefaultFor(p, pu)
+		wrap(b, fmt.Sprintf("%s = %s; source: %s", p.Name, paramDefault(p.Kind, def, defFt), src), "    param ")
 	}
 }
 

@@ -13,6 +13,7 @@ import (
 	"github.com/tremie-dev/tremie/render/pipeline/batch"
 	"github.com/tremie-dev/tremie/render/pipeline/incremental"
 	"github.com/tremie-dev/tremie/render/sheet"
+	"github.com/tremie-dev/tremie/render/wallimage"
 )
 
 // RenderOptions are the drawing choices of a render run.
@@ -21,6 +22,10 @@ type RenderOptions struct {
 	DPI     float64      // for raster formats
 	Scale   *sheet.Scale // nil: automatic
 	Strict  bool         // refuse to draw a well with unwaived error findings
+	// Issue draws the issued set (a project may ask for it too): no rule
+	// IDs or file lines, a revision block and a seal space; a well with
+	// unwaived error findings is refused.
+	Issue bool
 	// Force redraws every well, and lets outputs replace files in the
 	// output directory that tremie did not write.
 	Force bool
@@ -34,7 +39,8 @@ type Rendered struct {
 	Sheets  int
 	Outputs []string      // paths of the files written (or, when skipped, already there)
 	Outcome batch.Outcome // Done, Skipped (unchanged) or Failed
-	Refused bool          // Strict and blocking: nothing written
+	Refused bool          // Strict (or Issue) and blocking: nothing written
+	Issue   bool          // drawn, or refused, as the issued set
 	// Err is why the well was not drawn: an *OutputError when a file
 	// could not be written, else an input error.
 	Err error
@@ -115,7 +121,9 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 			return rd, batch.Failed, w.Err
 		}
 		w.Prepare(AllRules)
-		hash := j.base.Well(w.Data)
+		// A changed wall image changes the sheet: it joins the well's bytes
+		// in the cache key (by size and time, not read twice).
+		hash := j.base.Well(append(w.Data[:len(w.Data):len(w.Data)], wallimage.Fingerprint(w.Path, w.Well)...))
 		w.Data = nil // drawn from the model from here on; let the bytes go
 		if !opt.Force {
 			if outs, ok := cache.Recorded(w.Key, hash); ok {
@@ -126,7 +134,8 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 				return rd, batch.Skipped, nil
 			}
 		}
-		if w.Blocking() && opt.Strict {
+		rd.Issue = w.Setting.Issue(opt.Issue)
+		if w.Blocking() && (opt.Strict || rd.Issue) {
 			rd.Refused = true
 			cache.Forget(w.Key)
 			return rd, batch.Done, nil
@@ -162,7 +171,7 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 // draw lays out one prepared well and writes it in every format.
 func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt RenderOptions) error {
 	w := rd.Well
-	doc, err := w.Layout(LayoutOptions{Scale: opt.Scale, Date: r.SourceDate})
+	doc, err := w.Layout(LayoutOptions{Scale: opt.Scale, Date: r.SourceDate, Issue: rd.Issue})
 	if err != nil {
 		return err
 	}
@@ -321,6 +330,7 @@ func (r *Run) shared(s *Setting, opt RenderOptions) incremental.Shared {
 		fmt.Sprintf("dpi=%g", opt.DPI),
 		"scale=" + scale,
 		fmt.Sprintf("strict=%v", opt.Strict),
+		fmt.Sprintf("issue=%v", opt.Issue),
 		"date=" + r.SourceDate,
 		"yields=" + string(s.yieldsBytes),
 	}

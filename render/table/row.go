@@ -26,6 +26,7 @@ const (
 	Errors     Status = "errors"
 	Waived     Status = "waived" // every finding is waived
 	Unreadable Status = "unreadable"
+	Planned    Status = "planned" // a design: nothing placed to check yet
 )
 
 // Entry is one well as the table receives it.
@@ -75,6 +76,17 @@ type Row struct {
 type Table struct {
 	Units schema.DepthUnit
 	Rows  []Row
+	// Profile is the rule profile the findings were made under, nil for
+	// the defaults: the caution names it.
+	Profile *rules.Profile
+}
+
+// caution is the table's caution, true to the thresholds in force.
+func (t *Table) caution() string {
+	if t.Profile.IsDefault() {
+		return Caution
+	}
+	return "Caution: " + rules.Caution(t.Profile)
 }
 
 // Build makes the table in the given unit; "" takes the unit every
@@ -217,6 +229,9 @@ func rowOf(e Entry, u schema.DepthUnit) Row {
 		}
 	}
 	r.Status, r.Errors, r.Warnings, r.Waived = status(e.Findings)
+	if w.IsPlanned() && r.Status != Errors {
+		r.Status = Planned
+	}
 	return r
 }
 
