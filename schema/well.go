@@ -338,9 +338,12 @@ type Fill struct {
 	// Density is the slurry's density measured with a mud balance, in
 	// kg/m3; 0 if not recorded.
 	Density float64
-	Tags    []Tag
-	Pos     Pos
-	Path    string
+	// Size is the nominal size of bentonite chips or pellets (3/8 in,
+	// say); 0 if not given.
+	Size Diameter
+	Tags []Tag
+	Pos  Pos
+	Path string
 }
 
 // Recorded reports whether an amount placed was recorded.
@@ -578,13 +581,14 @@ type StringSection struct {
 	Section Section
 }
 
-// BoreholeAt returns the borehole section at depth d (the deepest one that
-// contains d), or false.
+// BoreholeAt returns the borehole section at depth d, or false. Like
+// every part in a CrossSection a section covers top <= d < bottom; where
+// sections overlap the last written wins.
 func (w *Well) BoreholeAt(d Length) (BoreholeSection, bool) {
 	var found BoreholeSection
 	ok := false
 	for _, b := range w.Boreholes {
-		if b.Contains(d) {
+		if covers(b.Interval, d) {
 			found, ok = b, true
 		}
 	}
