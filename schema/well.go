@@ -583,13 +583,14 @@ type StringSection struct {
 	Section Section
 }
 
-// BoreholeAt returns the borehole section at depth d (the deepest one that
-// contains d), or false.
+// BoreholeAt returns the borehole section at depth d, or false. Like
+// every part in a CrossSection a section covers top <= d < bottom; where
+// sections overlap the last written wins.
 func (w *Well) BoreholeAt(d Length) (BoreholeSection, bool) {
 	var found BoreholeSection
 	ok := false
 	for _, b := range w.Boreholes {
-		if b.Contains(d) {
+		if covers(b.Interval, d) {
 			found, ok = b, true
 		}
 	}
