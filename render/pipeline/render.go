@@ -22,6 +22,10 @@ type RenderOptions struct {
 	DPI     float64      // for raster formats
 	Scale   *sheet.Scale // nil: automatic
 	Strict  bool         // refuse to draw a well with unwaived error findings
+	// Issue draws the issued set (a project may ask for it too): no rule
+	// IDs or file lines, a revision block and a seal space; a well with
+	// unwaived error findings is refused.
+	Issue bool
 	// Force redraws every well, and lets outputs replace files in the
 	// output directory that tremie did not write.
 	Force bool
@@ -35,7 +39,8 @@ type Rendered struct {
 	Sheets  int
 	Outputs []string      // paths of the files written (or, when skipped, already there)
 	Outcome batch.Outcome // Done, Skipped (unchanged) or Failed
-	Refused bool          // Strict and blocking: nothing written
+	Refused bool          // Strict (or Issue) and blocking: nothing written
+	Issue   bool          // drawn, or refused, as the issued set
 	// Err is why the well was not drawn: an *OutputError when a file
 	// could not be written, else an input error.
 	Err error
@@ -129,7 +134,8 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 				return rd, batch.Skipped, nil
 			}
 		}
-		if w.Blocking() && opt.Strict {
+		rd.Issue = w.Setting.Issue(opt.Issue)
+		if w.Blocking() && (opt.Strict || rd.Issue) {
 			rd.Refused = true
 			cache.Forget(w.Key)
 			return rd, batch.Done, nil
@@ -165,7 +171,7 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 // draw lays out one prepared well and writes it in every format.
 func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt RenderOptions) error {
 	w := rd.Well
-	doc, err := w.Layout(LayoutOptions{Scale: opt.Scale, Date: r.SourceDate})
+	doc, err := w.Layout(LayoutOptions{Scale: opt.Scale, Date: r.SourceDate, Issue: rd.Issue})
 	if err != nil {
 		return err
 	}
@@ -324,6 +330,7 @@ func (r *Run) shared(s *Setting, opt RenderOptions) incremental.Shared {
 		fmt.Sprintf("dpi=%g", opt.DPI),
 		"scale=" + scale,
 		fmt.Sprintf("strict=%v", opt.Strict),
+		fmt.Sprintf("issue=%v", opt.Issue),
 		"date=" + r.SourceDate,
 		"yields=" + string(s.yieldsBytes),
 	}
