@@ -1,7 +1,6 @@
 package main
 
 import (
-	"flag"
 	"fmt"
 	"io"
 	"strings"
@@ -15,20 +14,20 @@ func init() {
 		name:    "rules",
 		summary: "list the rules tremie check applies, with sources and default thresholds",
 		run:     runRules,
+		args:    "[RULE-ID...]",
 	})
 }
 
 func runRules(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("rules", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	fset.Usage = func() { fmt.Fprintln(stderr, "usage: tremie rules [RULE-ID...]") }
-	if err := fset.Parse(args); err != nil {
-		return exitUsage
+	fset := newFlags("rules", stdout, stderr)
+	ids, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
 	list := rules.All()
-	if fset.NArg() > 0 {
+	if len(ids) > 0 {
 		list = nil
-		for _, id := range fset.Args() {
+		for _, id := range ids {
 			r, ok := rules.Lookup(strings.ToUpper(id))
 			if !ok {
 				fmt.Fprintf(stderr, "tremie rules: no rule %q (tremie rules lists them)\n", id)
