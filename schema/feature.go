@@ -179,3 +179,15 @@ func InflowUnit(u Units) (VolumeUnit, string) {
 	}
 	return Litres, "L/min"
 }
+
+// Span is the depth range of the picked points.
+func (pk *Picks) Span() (top, bot Length) {
+	if pk.HighLowGiven || len(pk.Points) == 0 {
+		return pk.High, pk.Low
+	}
+	top, bot = pk.Points[0].Depth, pk.Points[0].Depth
+	for _, q := range pk.Points[1:] {
+		top, bot = min(top, q.Depth), max(bot, q.Depth)
+	}
+	return top, bot
+}

@@ -43,25 +43,32 @@ func (r *reader) features(root *table, w *Well) {
 		}
 		o, err := w.orient(&f)
 		if err != nil {
-			r.errAt(t.path, "feature at %s: %v", w.Units.FormatDepth(f.Depth), err)
+			where, key := "", t.path
+			if f.Picks != nil {
+				key = t.keyPath("points")
+				if f.Picks.HighLowGiven {
+					key = t.keyPath("trace_high")
+				}
+				top, bot := f.Picks.Span()
+				where = " picked at " + w.Units.FormatInterval(top, bot)
+			}
+			r.errAt(key, "%s%s: %v", f.Kind.Label(), where, err)
 			continue
 		}
 		f.Orient = o
-		if f.Picks != nil && !t.has("depth") {
+		if f.Picks != nil && !t.Has("depth") {
 			f.Depth = Length(o.Picked.Fit.A)
 		}
 		w.Features = append(w.Features, f)
 	}
 }
 
-func (t *table) has(k string) bool { _, ok := t.m[k]; return ok }
-
 func (r *reader) orientation(t *table) Orientation {
 	defer t.done()
 	o := Orientation{North: NorthReference(t.oneOf("north")), Given: true, Pos: r.at(t.path)}
 	if o.North == "" {
 		o.North = TrueNorth
-		if !t.has("north") {
+		if !t.Has("north") {
 			r.errAt(t.path, "missing required key \"north\" in [orientation] (\"true\" or \"magnetic\")")
 		}
 	}
@@ -106,7 +113,7 @@ func (r *reader) feature(t *table, w *Well) (Feature, bool) {
 	u := w.Units
 	f := Feature{Pos: r.at(t.path), Path: t.path, Note: t.str("note"), Image: t.str("image")}
 	nerr := len(r.errs)
-	if !t.has("kind") {
+	if !t.Has("kind") {
 		r.errAt(t.path, "missing required key \"kind\" in [[feature]] (one of: %s)", strings.Join(featureKindNames, ", "))
 	}
 	f.Kind = FeatureKind(t.oneOf("kind"))
@@ -131,8 +138,8 @@ func (r *reader) feature(t *table, w *Well) (Feature, bool) {
 	}
 
 	// Orientation: given, picked, or both (then they are compared).
-	if t.has("dip") || t.has("dip_direction") {
-		if !t.has("dip") || !t.has("dip_direction") {
+	if t.Has("dip") || t.Has("dip_direction") {
+		if !t.Has("dip") || !t.Has("dip_direction") {
 			r.errAt(t.path, "give dip and dip_direction together")
 		}
 		dip, _ := t.num("dip")
@@ -141,13 +148,13 @@ func (r *reader) feature(t *table, w *Well) (Feature, bool) {
 		}
 		f.Given = &Attitude{Dip: dip, DipDirection: r.azimuth(t, "dip_direction", true)}
 	}
-	highLow := t.has("trace_high") || t.has("trace_low") || t.has("low_azimuth")
-	points := t.has("points")
+	highLow := t.Has("trace_high") || t.Has("trace_low") || t.Has("low_azimuth")
+	points := t.Has("points")
 	switch {
 	case highLow && points:
 		r.errAt(t.keyPath("points"), "give trace_high, trace_low and low_azimuth, or points, not both")
 	case highLow:
-		if !t.has("trace_high") || !t.has("trace_low") || !t.has("low_azimuth") {
+		if !t.Has("trace_high") || !t.Has("trace_low") || !t.Has("low_azimuth") {
 			r.errAt(t.path, "picks by the trace's ends need trace_high, trace_low and low_azimuth")
 		}
 		hi, _ := t.nonNegative("trace_high")
@@ -162,10 +169,10 @@ func (r *reader) feature(t *table, w *Well) (Feature, bool) {
 	if f.Picks == nil && f.Caliper > 0 {
 		r.errAt(t.keyPath("caliper"), "caliper is the hole diameter for picks; this feature has none")
 	}
-	if f.Picks == nil && !t.has("depth") {
+	if f.Picks == nil && !t.Has("depth") {
 		r.errAt(t.path, "missing required key \"depth\" in [[feature]] (or picks that fix it)")
 	}
-	if f.Picks != nil && t.has("depth") && f.Picks.HighLowGiven && (f.Depth < f.Picks.High || f.Depth > f.Picks.Low) {
+	if f.Picks != nil && t.Has("depth") && f.Picks.HighLowGiven && (f.Depth < f.Picks.High || f.Depth > f.Picks.Low) {
 		r.errAt(t.keyPath("depth"), "depth %s lies outside the picked trace (%s)", u.FormatDepth(f.Depth), u.FormatInterval(f.Picks.High, f.Picks.Low))
 	}
 	return f, len(r.errs) == nerr
@@ -175,7 +182,7 @@ func (r *reader) feature(t *table, w *Well) (Feature, bool) {
 func (r *reader) azimuth(t *table, k string, required bool) float64 {
 	v, ok := t.num(k)
 	if !ok {
-		if required && !t.has(k) {
+		if required && !t.Has(k) {
 			r.errAt(t.path, "missing required key %q in [%s]", k, stripIndex(t.path))
 		}
 		return 0

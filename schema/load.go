@@ -441,6 +441,9 @@ func (r *reader) fill(t *table, w *Well) Fill {
 	if d, ok := t.positive("density"); ok {
 		f.Density = SlurryDensityFrom(d, u)
 	}
+	if d, ok := t.positive("size"); ok {
+		f.Size = DiameterFrom(d, u.Diameter)
+	}
 	for _, tt := range t.list("tag") {
 		tag := Tag{Pos: r.at(tt.path), Path: tt.path}
 		if _, ok := tt.m["after_bags"]; !ok {

@@ -232,3 +232,15 @@ func (w *Well) pickedTrace(f *Feature) (*PickedTrace, error) {
 	}
 	return pt, nil
 }
+
+// SetOrientation gives a well whose file wrote no [orientation] its
+// project's azimuth reference and works every feature's orientation out
+// again (the picks were checked when the file was loaded).
+func (w *Well) SetOrientation(o Orientation) {
+	w.Orientation = o
+	for i := range w.Features {
+		if fo, err := w.orient(&w.Features[i]); err == nil {
+			w.Features[i].Orient = fo
+		}
+	}
+}

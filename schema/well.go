@@ -338,9 +338,12 @@ type Fill struct {
 	// Density is the slurry's density measured with a mud balance, in
 	// kg/m3; 0 if not recorded.
 	Density float64
-	Tags    []Tag
-	Pos     Pos
-	Path    string
+	// Size is the nominal size of bentonite chips or pellets (3/8 in,
+	// say); 0 if not given.
+	Size Diameter
+	Tags []Tag
+	Pos  Pos
+	Path string
 }
 
 // Recorded reports whether an amount placed was recorded.

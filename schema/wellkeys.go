@@ -145,6 +145,7 @@ func wellFile() *TableSpec {
 			{Name: "bag_mass", Type: TypeNumber, Bound: Positive, Unit: UnitMass, Doc: "Mass of one bag.", Example: 50},
 			{Name: "volume", Type: TypeNumber, Bound: NonNegative, Unit: UnitVolume, Doc: "Instead of bags: volume placed.", Example: 6.4},
 			{Name: "yield", Type: TypeNumber, Bound: Positive, Unit: UnitVolume, Doc: "Volume one bag (or batch) fills in place, overriding the material default.", Example: 0.5},
+			{Name: "size", Type: TypeNumber, Bound: Positive, Unit: UnitDiameter, Doc: "Nominal size of bentonite chips or pellets, in the diameter unit (0.375 for 3/8-in chips).", Example: 0.375},
 			{Name: "density", Type: TypeNumber, Bound: Positive, Doc: "Slurry density measured with a mud balance: lb/gal in a file in feet, kg/L in one in metres.", Example: 15.2},
 			{Name: "tag", Type: TypeTables, Doc: "Weighted-tape tags of the top of the fill.", Table: tag},
 		})}

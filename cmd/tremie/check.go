@@ -87,6 +87,11 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	}
 	run, code, ok := resolve("check", opts.paths, pipeline.Options{Profile: opts.profile}, stderr)
 	if !ok {
+		if opts.format == "json" && run != nil {
+			if err := writeCheckJSON(stdout, unreadableInputs(run.Problems)); err != nil {
+				fmt.Fprintf(stderr, "tremie check: writing the report: %v\n", err)
+			}
+		}
 		return code
 	}
 	wells := run.PrepareAll(pipeline.AllRules, "checking")
@@ -101,7 +106,7 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	}
 	var err error
 	if opts.format == "json" {
-		err = writeCheckJSON(stdout, results)
+		err = writeCheckJSON(stdout, append(results, unreadableInputs(run.Problems)...))
 	} else {
 		err = writeCheckText(stdout, results, run.ProfileLabels(), checkCautions(run))
 	}
@@ -110,6 +115,18 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 		return exitOutput
 	}
 	return checkExit(results, len(run.Problems) > 0)
+}
+
+// unreadableInputs are the project, profile and yields files among a
+// run's problems, each with its errors, for the JSON report.
+func unreadableInputs(problems []error) []fileResult {
+	var out []fileResult
+	for _, e := range problems {
+		if list := schema.Errors("", e); list[0].File != "" {
+			out = append(out, fileResult{Path: list[0].File, Findings: []rules.Finding{}, Errors: list})
+		}
+	}
+	return out
 }
 
 // checkExit is 2 when any file could not be found, read or parsed, else 1

@@ -277,4 +277,19 @@ func TestRulesListing(t *testing.T) {
 	if code, _, _ := runTremie("rules", "NO-SUCH-RULE"); code != exitUsage {
 		t.Errorf("unknown rule: exit %d, want %d", code, exitUsage)
 	}
+	// Per purpose: a public-supply well gets DWR 74-81's 50 ft seal and
+	// TM 5-813-1's 10 ft of pack above the screen, and is not judged by the
+	// monitoring-well pack maximum.
+	code, out, _ = runTremie("rules", "--purpose", "public-supply", "SANITARY-SEAL-DEPTH", "PACK-ABOVE-SCREEN", "PACK-ABOVE-MAX")
+	if code != exitOK {
+		t.Fatalf("--purpose: exit %d", code)
+	}
+	for _, want := range []string{"param depth = 50 ft (wells in ft)", "param min = 10 ft (wells in ft)", "does not apply to public-supply wells"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("--purpose public-supply lacks %q:\n%s", want, out)
+		}
+	}
+	if code, _, _ := runTremie("rules", "--purpose", "orchard"); code != exitUsage {
+		t.Errorf("unknown purpose: exit %d, want %d", code, exitUsage)
+	}
 }

@@ -88,3 +88,39 @@ func TestDemoWallImageIsGenerated(t *testing.T) {
 		}
 	}
 }
+
+// A changed wall image redraws its well though the well file is the same.
+func TestChangedWallImageRedraws(t *testing.T) {
+	t.Setenv("SOURCE_DATE_EPOCH", "1780000000")
+	dir := copyDemo(t)
+	well := filepath.Join(dir, "wells", "BR-1.toml")
+	outDir := filepath.Join(t.TempDir(), "out")
+	if code, _, errb := runTremie("render", well, "-o", outDir, "--format", "svg"); code != exitOK {
+		t.Fatalf("first render: %d %s", code, errb)
+	}
+	_, out, _ := runTremie("render", well, "-o", outDir, "--format", "svg")
+	if !strings.Contains(out, "0 rendered, 1 unchanged") {
+		t.Fatalf("second render is not skipped:\n%s", out)
+	}
+	img := filepath.Join(dir, "wells", "BR-1-wall.png")
+	data, _ := os.ReadFile(img)
+	w, _ := schema.Load(well, mustRead(t, well))
+	made, _ := wallimage.Synthesize(w, w.WallImages[0], 180, 10) // another size
+	if bytes.Equal(made, data) {
+		t.Fatal("no change made")
+	}
+	os.WriteFile(img, made, 0o644)
+	_, out, _ = runTremie("render", well, "-o", outDir, "--format", "svg")
+	if !strings.Contains(out, "1 rendered, 0 unchanged") {
+		t.Errorf("a changed image did not redraw:\n%s", out)
+	}
+}
+
+func mustRead(t *testing.T, path string) []byte {
+	t.Helper()
+	b, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return b
+}

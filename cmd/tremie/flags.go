@@ -171,7 +171,7 @@ func resolve(cmd string, paths []string, opt pipeline.Options, stderr io.Writer)
 	run, err := pipeline.Resolve(paths, opt)
 	if err != nil {
 		printErr(stderr, cmd, err)
-		return nil, exitInput, false
+		return &pipeline.Run{Problems: []error{err}}, exitInput, false // the problem, for a JSON report
 	}
 	for _, e := range run.Problems {
 		printErr(stderr, cmd, e)

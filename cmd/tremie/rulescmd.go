@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"io"
+	"slices"
 	"strings"
 
 	"github.com/tremie-dev/tremie/schema"
@@ -20,9 +21,14 @@ func init() {
 
 func runRules(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("rules", stdout, stderr)
+	purpose := fset.String("purpose", "", "show the thresholds in force for wells of this `purpose` (monitoring, public-supply, ...)")
 	ids, code, ok := fset.parse(args)
 	if !ok {
 		return code
+	}
+	pu := schema.Purpose(*purpose)
+	if pu != "" && !slices.Contains(schema.Purposes, pu) {
+		return fset.usageError("unknown purpose %q (one of: %s)", *purpose, rules.PurposeList(schema.Purposes))
 	}
 	list := rules.All()
 	if len(ids) > 0 {
@@ -40,7 +46,14 @@ func runRules(args []string, stdout, stderr io.Writer) int {
 	wrap(&b, "Rules of practice applied by tremie check. Thresholds are defaults, each with its source: "+
 		"set them to the governing local well code in a profile (tremie check --profile FILE; see schema/rules/PROFILE.md).", "")
 	wrap(&b, checkCaution, "")
+	if pu != "" {
+		wrap(&b, fmt.Sprintf("Thresholds for %s wells, each with its source.", pu), "")
+	}
 	for _, r := range list {
+		if pu != "" {
+			writeRuleFor(&b, r, pu)
+			continue
+		}
 		writeRule(&b, r)
 	}
 	if _, err := io.WriteString(stdout, b.String()); err != nil {
@@ -70,6 +83,20 @@ func writeRule(b *strings.Builder, r *rules.Rule) {
 		for _, d := range p.ByPurpose {
 			wrap(b, fmt.Sprintf("%s: %s; source: %s", rules.PurposeList(d.Purposes), paramDefault(p.Kind, d.Default, d.DefaultFt), d.Source), "          for ")
 		}
+	}
+}
+
+// writeRuleFor writes a rule as it applies to wells of one purpose.
+func writeRuleFor(b *strings.Builder, r *rules.Rule, pu schema.Purpose) {
+	fmt.Fprintf(b, "\n%s  %s  %s\n", r.ID, r.Severity, r.Title)
+	if !r.AppliesTo(pu) {
+		wrap(b, "does not apply to "+string(pu)+" wells by default (it applies to "+rules.PurposeList(r.Purposes)+"); a profile may switch it on", "    ")
+		return
+	}
+	wrap(b, "source: "+r.Source, "    ")
+	for _, p := range r.Params {
+		def, defFt, src := r.DefaultFor(p, pu)
+		wrap(b, fmt.Sprintf("%s = %s; source: %s", p.Name, paramDefault(p.Kind, def, defFt), src), "    param ")
 	}
 }
 

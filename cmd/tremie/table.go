@@ -44,6 +44,7 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 	var buf bytes.Buffer
 	var err error
 	defaultName := ""
+	what := fmt.Sprintf("%d monitoring points of %d wells", len(tb.Rows), tb.Wells())
 	switch *format {
 	case "csv":
 		err = tb.CSV(&buf)
@@ -56,13 +57,16 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 				files = append(files, w.Path)
 			}
 		}
-		var wb *exchange.Workbook
-		if wb, err = exchange.Layout(files); err == nil {
-			var data []byte
-			data, err = wb.XLSX(run.ProjectDate(p, wells))
-			buf.Write(data)
+		wb, lerr := exchange.Layout(files)
+		if lerr != nil {
+			fmt.Fprintf(stderr, "tremie table: %v\n", lerr)
+			return exitInput
 		}
+		var data []byte
+		data, err = wb.XLSX(run.ProjectDate(p, wells))
+		buf.Write(data)
 		defaultName = "import.xlsx"
+		what = fmt.Sprintf("%d wells in the import layout", len(files))
 	case "xlsx":
 		var data []byte
 		data, err = tb.XLSX(p.Name, run.ProjectDate(p, wells))
@@ -88,7 +92,7 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie table: %v\n", err)
 		return exitOutput
 	}
-	fmt.Fprintf(stdout, "tremie table: %d monitoring points of %d wells written to %s\n", len(tb.Rows), tb.Wells(), dst)
+	fmt.Fprintf(stdout, "tremie table: %s written to %s\n", what, dst)
 	return code
 }
 

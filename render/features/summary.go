@@ -48,7 +48,7 @@ func Summary(in SummaryInput) *draw.Document {
 			break
 		}
 		pg = s.newPage(len(doc.Pages) + 1)
-		y = s.margin + 44
+		y = s.margin + 52
 	}
 	return doc
 }
@@ -98,8 +98,10 @@ func (s *summary) newPage(n int) *draw.Page {
 	if refs := norths(in.Rows); len(refs) == 1 && refs[0] != "true north" {
 		north += " (read from " + refs[0] + ")"
 	}
-	pg.Add(txt(m, m+26, joinNonEmpty(" · ", sub, count, north, "each hole taken as vertical"), draw.Regular, sizeText, draw.Start, grey, "summary:subtitle"))
-	pg.Add(draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.8}, Points: []draw.Point{{X: m, Y: m + 32}, {X: in.Width - m, Y: m + 32}}})
+	width := in.Width - 2*m
+	pg.Add(txt(m, m+24, fitText(sub, sizeText, width), draw.Regular, sizeText, draw.Start, grey, "summary:subtitle"))
+	pg.Add(txt(m, m+33, fitText(joinNonEmpty(" · ", count, north, "each hole taken as vertical"), sizeText, width), draw.Regular, sizeText, draw.Start, grey, "summary:subtitle"))
+	pg.Add(draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.8}, Points: []draw.Point{{X: m, Y: m + 38}, {X: in.Width - m, Y: m + 38}}})
 	lines := draw.Wrap(draw.Italic, 6, Caution+" Figures and checks are from the well files as written.", in.Width-2*m)
 	for i, l := range lines {
 		pg.Add(txt(m, in.Height-m-float64(len(lines)-1-i)*7.2, l, draw.Italic, 6, draw.Start, ink, "caution"))
@@ -118,7 +120,7 @@ func (s *summary) figures(pg *draw.Page) float64 {
 	in := s.in
 	m := s.margin
 	w := in.Width - 2*m
-	top := m + 50
+	top := m + 58
 	r := min(w*0.27, 150.0)
 	nc := draw.Point{X: m + 20 + r, Y: top + 14 + r}
 

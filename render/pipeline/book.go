@@ -22,7 +22,14 @@ import (
 // Table is the construction summary of prepared wells, lengths in the
 // project's unit.
 func Table(p *project.Project, wells []*Well) *table.Table {
-	return table.Build(Entries(wells), p.Units)
+	t := table.Build(Entries(wells), p.Units)
+	for _, w := range wells {
+		if w.Setting != nil && w.Setting.Err == nil {
+			t.Profile = w.Setting.Profile // the caution names the profile in force
+			break
+		}
+	}
+	return t
 }
 
 // Entries are prepared wells as the summary table reads them.

@@ -13,6 +13,7 @@ import (
 	"github.com/tremie-dev/tremie/render/pipeline/batch"
 	"github.com/tremie-dev/tremie/render/pipeline/incremental"
 	"github.com/tremie-dev/tremie/render/sheet"
+	"github.com/tremie-dev/tremie/render/wallimage"
 )
 
 // RenderOptions are the drawing choices of a render run.
@@ -115,7 +116,9 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 			return rd, batch.Failed, w.Err
 		}
 		w.Prepare(AllRules)
-		hash := j.base.Well(w.Data)
+		// A changed wall image changes the sheet: it joins the well's bytes
+		// in the cache key (by size and time, not read twice).
+		hash := j.base.Well(append(w.Data[:len(w.Data):len(w.Data)], wallimage.Fingerprint(w.Path, w.Well)...))
 		w.Data = nil // drawn from the model from here on; let the bytes go
 		if !opt.Force {
 			if outs, ok := cache.Recorded(w.Key, hash); ok {

@@ -75,6 +75,17 @@ type Row struct {
 type Table struct {
 	Units schema.DepthUnit
 	Rows  []Row
+	// Profile is the rule profile the findings were made under, nil for
+	// the defaults: the caution names it.
+	Profile *rules.Profile
+}
+
+// caution is the table's caution, true to the thresholds in force.
+func (t *Table) caution() string {
+	if t.Profile.IsDefault() {
+		return Caution
+	}
+	return "Caution: " + rules.Caution(t.Profile)
 }
 
 // Build makes the table in the given unit; "" takes the unit every

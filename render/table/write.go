@@ -57,7 +57,7 @@ func (t *Table) Markdown(w io.Writer) error {
 		}
 		b.WriteString("| " + strings.Join(escapeAll(s), " | ") + " |\n")
 	}
-	b.WriteString("\n" + Caution + "\n")
+	b.WriteString("\n" + t.caution() + "\n")
 	_, err := w.Write(b.Bytes())
 	if err != nil {
 		return fmt.Errorf("markdown: %w", err)

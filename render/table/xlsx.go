@@ -27,7 +27,7 @@ func (t *Table) XLSX(title string, date time.Time) ([]byte, error) {
 	stamp := date.UTC().Format("2006-01-02T15:04:05Z")
 	if err := f.SetDocProps(&excelize.DocProperties{
 		Title: title, Subject: "Construction summary", Creator: "tremie", Created: stamp, Modified: stamp,
-		Description: Caution,
+		Description: t.caution(),
 	}); err != nil {
 		return nil, fmt.Errorf("xlsx: %w", err)
 	}
@@ -85,7 +85,7 @@ func (t *Table) XLSX(title string, date time.Time) ([]byte, error) {
 	if _, err := f.NewSheet(NotesSheet); err != nil {
 		return nil, fmt.Errorf("xlsx: %w", err)
 	}
-	if err := f.SetCellStr(NotesSheet, "A1", Caution); err != nil {
+	if err := f.SetCellStr(NotesSheet, "A1", t.caution()); err != nil {
 		return nil, fmt.Errorf("xlsx: %w", err)
 	}
 	if err := f.SetColWidth(NotesSheet, "A", "A", 120); err != nil {

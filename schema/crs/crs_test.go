@@ -181,3 +181,15 @@ func TestBadCoordinates(t *testing.T) {
 		}
 	}
 }
+
+// Snyder, Map Projections: A Working Manual (USGS Professional Paper 1395,
+// 1987), Transverse Mercator worked example on the Clarke 1866 ellipsoid
+// (from memory): 40°30'N, 73°30'W with the central meridian at 75°W and
+// k0 = 0.9996 (UTM zone 18 without its false easting) is x = 127106.5 m,
+// y = 4484124.4 m, printed to 0.1 m.
+func TestTransverseMercatorSnyderExample(t *testing.T) {
+	p := newTransverseMercator(clarke1866, 0, -75, 0.9996, 0, 0)
+	x, y := p.forward(-73.5, 40.5)
+	near(t, "x", x, 127106.5, 0.05)
+	near(t, "y", y, 4484124.4, 0.05)
+}

@@ -50,6 +50,9 @@ func Import(paths ...string) ([]WellFile, []error) {
 	for _, s := range intervals {
 		im.readIntervals(s)
 	}
+	if len(im.order) == 0 && len(im.errs) == 0 {
+		return nil, []error{fmt.Errorf("%s: the Wells sheet has no wells", wells[0].file)}
+	}
 	var out []WellFile
 	for _, w := range im.order {
 		wf, ok := im.build(w)

@@ -15,6 +15,9 @@ func Apply(p *Project, w *schema.Well) {
 	fill(&w.Elevation.Datum, p.Datum)
 	fill(&w.Location.System, p.CoordinateSystem)
 	fill(&w.Location.CRS, p.CRS)
+	if p.Orientation.Given && !w.Orientation.Given {
+		w.SetOrientation(p.Orientation)
+	}
 }
 
 func fill(dst *string, v string) {

@@ -21,20 +21,22 @@ var ErrNoProject = errors.New("no " + FileName)
 // prints; any other key is reported as unknown.
 type fileData struct {
 	Project struct {
-		Name             string `toml:"name" required:"true" doc:"Project name; a well's project when it gives none." example:"Coldwater Mill groundwater investigation"`
-		Client           string `toml:"client" doc:"Client; a well's client when it gives none." example:"Valley Water Authority"`
-		Site             string `toml:"site" doc:"Site; a well's site when it gives none." example:"Former mill, Tannery Road"`
-		Units            string `toml:"units" enum:"ft,m" doc:"Depth unit of the project-wide tables (summary, book); default the unit all wells share, else m. Each sheet keeps its well file's units." example:"ft"`
-		Datum            string `toml:"datum" doc:"Elevation datum for wells whose [elevation] gives none." example:"NAVD88"`
-		CoordinateSystem string `toml:"coordinate_system" doc:"Reference system for wells whose [location] gives none." example:"NAD83 / UTM zone 11N"`
-		CRS              string `toml:"crs" doc:"EPSG code of the coordinates, for wells whose [location] gives no crs (docs/import.md lists the codes)." example:"EPSG:2227"`
-		Page             string `toml:"page" doc:"Page template of every sheet: letter, tabloid, a4 or a3." example:"letter"`
-		Landscape        bool   `toml:"landscape" doc:"Print sheets in landscape." example:"false"`
-		Profile          string `toml:"profile" doc:"Path of the rule profile (relative to this file); must exist. Default: the rule defaults." example:"site.profile.toml"`
-		Yields           string `toml:"yields" doc:"Path of a yields file with a [yields] table; must exist. Default: the built-in yields." example:"site.yields.toml"`
-		Logo             string `toml:"logo" doc:"PNG or JPEG for the title block and book cover: at most 1 MiB, 16 to 2048 pixels a side." example:"logo.png"`
-		Wells            string `toml:"wells" doc:"Directory (searched recursively) or glob of the well files; default wells." example:"wells"`
-		Output           string `toml:"output" doc:"Where sheets, the cache and tables go; default out." example:"out"`
+		Name             string   `toml:"name" required:"true" doc:"Project name; a well's project when it gives none." example:"Coldwater Mill groundwater investigation"`
+		Client           string   `toml:"client" doc:"Client; a well's client when it gives none." example:"Valley Water Authority"`
+		Site             string   `toml:"site" doc:"Site; a well's site when it gives none." example:"Former mill, Tannery Road"`
+		Units            string   `toml:"units" enum:"ft,m" doc:"Depth unit of the project-wide tables (summary, book); default the unit all wells share, else m. Each sheet keeps its well file's units." example:"ft"`
+		Datum            string   `toml:"datum" doc:"Elevation datum for wells whose [elevation] gives none." example:"NAVD88"`
+		CoordinateSystem string   `toml:"coordinate_system" doc:"Reference system for wells whose [location] gives none." example:"NAD83 / UTM zone 11N"`
+		CRS              string   `toml:"crs" doc:"EPSG code of the coordinates, for wells whose [location] gives no crs (docs/import.md lists the codes)." example:"EPSG:2227"`
+		North            string   `toml:"north" enum:"true,magnetic" doc:"What wall-feature azimuths are measured from, for wells whose file has no [orientation]." example:"magnetic"`
+		Declination      *float64 `toml:"declination" doc:"Degrees, east positive, with north = magnetic: added to a magnetic azimuth to make it true." example:"13.5"`
+		Page             string   `toml:"page" doc:"Page template of every sheet: letter, tabloid, a4 or a3." example:"letter"`
+		Landscape        bool     `toml:"landscape" doc:"Print sheets in landscape." example:"false"`
+		Profile          string   `toml:"profile" doc:"Path of the rule profile (relative to this file); must exist. Default: the rule defaults." example:"site.profile.toml"`
+		Yields           string   `toml:"yields" doc:"Path of a yields file with a [yields] table; must exist. Default: the built-in yields." example:"site.yields.toml"`
+		Logo             string   `toml:"logo" doc:"PNG or JPEG for the title block and book cover: at most 1 MiB, 16 to 2048 pixels a side." example:"logo.png"`
+		Wells            string   `toml:"wells" doc:"Directory (searched recursively) or glob of the well files; default wells." example:"wells"`
+		Output           string   `toml:"output" doc:"Where sheets, the cache and tables go; default out." example:"out"`
 
 		// title-block fields
 		Consultant string `toml:"consultant" doc:"Title block: the firm preparing the logs." example:"Example Hydrogeology"`
@@ -127,6 +129,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 			doc.Errorf("project.crs", "%v", err)
 		}
 	}
+	p.Orientation = readNorth(doc, pt)
 	if pt.Has("wells") && strings.TrimSpace(p.Wells) == "" {
 		doc.Errorf("project.wells", "wells must name a directory or a glob, e.g. \"wells\" or \"wells/*.toml\"")
 	}
@@ -220,4 +223,25 @@ func bendPoints(v any) [][2]float64 {
 		out = append(out, pt)
 	}
 	return out
+}
+
+// readNorth reads the project's azimuth reference for wall features:
+// north = "true" or "magnetic", with the declination (degrees, east
+// positive) for magnetic.
+func readNorth(doc *schema.Doc, pt *schema.Table) schema.Orientation {
+	o := schema.Orientation{North: schema.NorthReference(pt.Str("north")), Given: pt.Has("north")}
+	dec, hasDec := pt.Num("declination")
+	switch {
+	case o.North != "" && o.North != schema.TrueNorth && o.North != schema.MagneticNorth:
+		doc.Errorf("project.north", "north must be \"true\" or \"magnetic\", not %q", o.North)
+	case o.North == schema.MagneticNorth && !hasDec:
+		doc.Errorf("project.north", "north = \"magnetic\" needs the declination (degrees, east positive)")
+	case hasDec && o.North != schema.MagneticNorth:
+		doc.Errorf("project.declination", "declination applies to north = \"magnetic\" only")
+	case hasDec && (dec < -90 || dec > 90):
+		doc.Errorf("project.declination", "declination %v is outside -90..90 degrees", dec)
+	default:
+		o.Declination = dec
+	}
+	return o
 }

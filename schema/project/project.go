@@ -41,6 +41,10 @@ type Project struct {
 	CoordinateSystem string
 	CRS              string // an EPSG code, "EPSG:2227"; checked by package crs
 
+	// Orientation is the azimuth reference of wall features for wells
+	// whose file gives no [orientation]; North is "" when not set.
+	Orientation schema.Orientation
+
 	Page      string // page template name, "" for the default
 	Landscape bool
 

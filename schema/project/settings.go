@@ -20,6 +20,7 @@ func (p *Project) Settings() []byte {
 	line("datum", p.Datum)
 	line("coordinate_system", p.CoordinateSystem)
 	line("crs", p.CRS)
+	line("north", fmt.Sprintf("%s %v", p.Orientation.North, p.Orientation.Declination))
 	line("page", p.Page)
 	line("landscape", fmt.Sprint(p.Landscape))
 	line("profile", p.Profile)

@@ -54,12 +54,3 @@ func near(t *testing.T, what string, got, want, rel float64) {
 		t.Errorf("%s = %.6g, want %.6g (within %g)", what, got, want, rel)
 	}
 }
-
-// ft2 is an area in square feet from inch diameters: pi/4 (d^2) / 144.
-func ft2(d ...float64) float64 {
-	a := d[0] * d[0]
-	for _, x := range d[1:] {
-		a -= x * x
-	}
-	return math.Pi / 4 * a / 144
-}

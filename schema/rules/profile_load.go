@@ -1,14 +1,12 @@
 package rules
 
 import (
-	"errors"
 	"fmt"
 	"math"
 	"path/filepath"
 	"sort"
 	"strings"
 
-	"github.com/BurntSushi/toml"
 	"github.com/tremie-dev/tremie/schema"
 )
 
@@ -24,48 +22,36 @@ func LoadProfile(path string) (*Profile, error) {
 }
 
 // ParseProfile reads a profile's bytes; name is used in error positions.
+// The file is parsed and its errors placed, sorted and returned by the
+// one strict reader (schema.Doc); the walk below reads its rule and
+// purpose tables, whose names come from the registry.
 func ParseProfile(name string, data []byte) (*Profile, error) {
-	var raw map[string]any
-	if _, err := toml.Decode(string(data), &raw); err != nil {
-		var pe toml.ParseError
-		if errors.As(err, &pe) {
-			return nil, schema.ErrorList{{File: name, Line: pe.Position.Line, Col: pe.Position.Col, Msg: "TOML syntax: " + pe.Message}}
-		}
-		return nil, schema.ErrorList{{File: name, Msg: "TOML: " + err.Error()}}
+	doc, err := schema.ParseDoc(name, data, ProfileFile())
+	if err != nil {
+		return nil, err
 	}
-	pr := &profileReader{file: name, pos: schema.KeyPositions(string(data))}
+	root := doc.Root()
+	raw := map[string]any{}
+	for _, k := range root.Keys() {
+		raw[k], _ = root.Raw(k)
+	}
+	pr := &profileReader{file: name, doc: doc}
 	prof := pr.read(raw)
-	if len(pr.errs) > 0 {
-		sort.SliceStable(pr.errs, func(i, j int) bool {
-			if pr.errs[i].Line != pr.errs[j].Line {
-				return pr.errs[i].Line < pr.errs[j].Line
-			}
-			return pr.errs[i].Col < pr.errs[j].Col
-		})
-		return nil, pr.errs
+	if err := doc.Err(); err != nil {
+		return nil, err
 	}
 	return prof, nil
 }
 
 type profileReader struct {
 	file   string
-	pos    map[string]schema.Position // key path -> line, column
-	errs   schema.ErrorList
+	doc    *schema.Doc
 	groups map[string][]schema.Purpose // the profile's own [groups]
 	claims map[string]setting          // rule|purpose|key -> where it was set
 }
 
 func (r *profileReader) errAt(path, format string, args ...any) {
-	lc, ok := r.pos[path]
-	for p := path; !ok && p != ""; {
-		i := strings.LastIndex(p, ".")
-		if i < 0 {
-			break
-		}
-		p = p[:i]
-		lc, ok = r.pos[p]
-	}
-	r.errs = append(r.errs, &schema.Error{File: r.file, Line: lc.Line, Col: lc.Col, Key: path, Msg: fmt.Sprintf(format, args...)})
+	r.doc.Errorf(path, format, args...)
 }
 
 // tableOf returns v as a table, or reports that path should be one.

@@ -346,3 +346,20 @@ func (r *profileReader) paramNumber(kp string, prm Param, v any) (float64, bool)
 	}
 	return f, true
 }
+
+// DefaultFor is a parameter's default for a well of the purpose ("" for
+// one whose purpose is not given) with its source: the purpose's own
+// default, else the general one, else that of the parameter it falls back
+// to. def is in model units and defFt in feet or inches (0 = convert def),
+// as in Param.
+func (r *Rule) DefaultFor(prm Param, pu schema.Purpose) (def, defFt float64, source string) {
+	if d, ok := prm.defaultFor(pu); ok {
+		return d.Default, d.DefaultFt, d.Source
+	}
+	if prm.Default == 0 && prm.Fallback != "" {
+		if fb, ok := r.param(prm.Fallback); ok && fb.Name != prm.Name {
+			return r.DefaultFor(fb, pu)
+		}
+	}
+	return prm.Default, prm.DefaultFt, prm.Source
+}

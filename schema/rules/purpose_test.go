@@ -1,6 +1,7 @@
 package rules
 
 import (
+	"os"
 	"strings"
 	"testing"
 )
@@ -276,5 +277,19 @@ func TestCautionNamesProfile(t *testing.T) {
 	}
 	if strings.Contains(c, "defaults") || strings.Contains(c, "/somewhere") {
 		t.Errorf("caution under a profile: %q", c)
+	}
+}
+
+// PROFILE.md lists the built-in groups as the code defines them.
+func TestPurposeGroupsDocumented(t *testing.T) {
+	doc, err := os.ReadFile("PROFILE.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, g := range PurposeGroups {
+		row := "| `" + g.Name + "` | " + PurposeList(g.Purposes) + " |"
+		if !strings.Contains(string(doc), row) {
+			t.Errorf("PROFILE.md lacks the row %q", row)
+		}
 	}
 }

@@ -1,0 +1,182 @@
+package live
+
+import (
+	"context"
+	"crypto/sha256"
+	"fmt"
+	"io"
+	"io/fs"
+	"net/http"
+	"net/http/httptest"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+	"time"
+
+	"github.com/tremie-dev/tremie/cmd/tremie/demo"
+)
+
+// demoProject copies the demo project into a temporary directory.
+func demoProject(t *testing.T) string {
+	t.Helper()
+	dir := t.TempDir()
+	err := fs.WalkDir(demo.FS, ".", func(p string, d fs.DirEntry, err error) error {
+		if err != nil {
+			return err
+		}
+		if d.IsDir() {
+			return os.MkdirAll(filepath.Join(dir, p), 0o755)
+		}
+		data, err := demo.FS.ReadFile(p)
+		if err != nil {
+			return err
+		}
+		return os.WriteFile(filepath.Join(dir, p), data, 0o644)
+	})
+	if err != nil {
+		t.Fatal(err)
+	}
+	return dir
+}
+
+func get(t *testing.T, h http.Handler, path string) (int, string) {
+	t.Helper()
+	rec := httptest.NewRecorder()
+	h.ServeHTTP(rec, httptest.NewRequest("GET", path, nil))
+	b, _ := io.ReadAll(rec.Result().Body)
+	return rec.Code, string(b)
+}
+
+// TestServesOnlyItsOwnOutputs: the page, its parts and the sheets held in
+// memory answer; any path naming a file, inside the project or out of
+// it, does not.
+func TestServesOnlyItsOwnOutputs(t *testing.T) {
+	dir := demoProject(t)
+	before := tree(t, dir)
+	s, err := New(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	h := s.Handler()
+	if code, body := get(t, h, "/"); code != 200 || !strings.Contains(body, "MW-3") {
+		t.Errorf("page: %d", code)
+	}
+	if code, body := get(t, h, "/sheet/0/0.svg"); code != 200 || !strings.HasPrefix(strings.TrimSpace(body), "<") {
+		t.Errorf("sheet: %d", code)
+	}
+	for _, p := range []string{
+		"/project.toml", "/wells/MW-1.toml", "/sheet/../project.toml", "/sheet/0/../../project.toml",
+		"/../../etc/passwd", "/%2e%2e/%2e%2e/etc/passwd", "/sheet/%2e%2e/%2e%2e/etc/passwd", "/sheet/-1/0.svg",
+		"/sheet/99/0.svg", "/sheet/0/99.svg", "/sheet/0/x.svg", "/static/../project.toml", "/wells/../project.toml/",
+	} {
+		code, body := get(t, h, p)
+		if code == 200 && (strings.Contains(body, "[project]") || strings.Contains(body, "root:")) {
+			t.Errorf("%s served a file (%d)", p, code)
+		}
+		if code == 200 && p != "/wells" {
+			t.Errorf("%s: %d, want an error", p, code)
+		}
+	}
+	// and it wrote nothing into the project
+	if after := tree(t, dir); after != before {
+		t.Errorf("the project changed while served:\n%s\nnow:\n%s", before, after)
+	}
+}
+
+// tree lists every file under dir with its size and content hash.
+func tree(t *testing.T, dir string) string {
+	var b strings.Builder
+	err := filepath.WalkDir(dir, func(p string, d fs.DirEntry, err error) error {
+		if err != nil || d.IsDir() {
+			return err
+		}
+		data, err := os.ReadFile(p)
+		if err != nil {
+			return err
+		}
+		fmt.Fprintf(&b, "%s %d %x\n", p, len(data), sha256.Sum256(data))
+		return nil
+	})
+	if err != nil {
+		t.Fatal(err)
+	}
+	return b.String()
+}
+
+// TestRefreshIsIncremental: a change to one well file redraws that well
+// only; a change to the project file redraws every well; a syntax error
+// is shown with file and line and recovers.
+func TestRefreshIsIncremental(t *testing.T) {
+	dir := demoProject(t)
+	var redrawn []int
+	s, err := New(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	s.Prepared = func(n int) { redrawn = append(redrawn, n) }
+	if len(s.wells) != 7 {
+		t.Fatalf("%d wells", len(s.wells))
+	}
+	s.Refresh()
+	mw1 := filepath.Join(dir, "wells", "MW-1.toml")
+	src, _ := os.ReadFile(mw1)
+	os.WriteFile(mw1, []byte(strings.Replace(string(src), "dark brown", "reddish brown", 1)), 0o644)
+	s.Refresh()
+	prj := filepath.Join(dir, "project.toml")
+	psrc, _ := os.ReadFile(prj)
+	os.WriteFile(prj, []byte(strings.Replace(string(psrc), `revision = "0"`, `revision = "1"`, 1)), 0o644)
+	s.Refresh()
+	if want := []int{0, 1, 7}; len(redrawn) != 3 || redrawn[0] != want[0] || redrawn[1] != want[1] || redrawn[2] != want[2] {
+		t.Errorf("wells redrawn per refresh %v, want %v", redrawn, want)
+	}
+	var m *Well
+	for _, w := range s.wells {
+		if w.ID == "MW-1" {
+			m = w
+		}
+	}
+	if m == nil || !strings.Contains(string(m.Sheets[0]), "reddish") {
+		t.Fatal("MW-1 not redrawn with the change")
+	}
+	os.WriteFile(mw1, append([]byte(strings.Replace(string(src), "dark brown", "reddish brown", 1)), "x = = 1\n"...), 0o644)
+	s.Refresh()
+	_, body := get(t, s.Handler(), "/wells")
+	if !strings.Contains(body, "wells/MW-1.toml:") || !strings.Contains(body, "TOML syntax") {
+		t.Errorf("no file:line for the syntax error:\n%s", body)
+	}
+	os.WriteFile(mw1, src, 0o644)
+	s.Refresh()
+	for _, w := range s.wells {
+		if w.Key == "wells/MW-1.toml" && (w.Problems != nil || len(w.Sheets) == 0) {
+			t.Errorf("MW-1 did not recover: %v", w.Problems)
+		}
+	}
+}
+
+// TestServeStops: Serve returns when its context ends.
+func TestServeStops(t *testing.T) {
+	s, err := New(demoProject(t))
+	if err != nil {
+		t.Fatal(err)
+	}
+	ctx, cancel := context.WithCancel(context.Background())
+	done := make(chan error, 1)
+	addr := make(chan string, 1)
+	go func() { done <- s.Serve(ctx, "127.0.0.1:0", func(a string) { addr <- a }) }()
+	a := <-addr
+	resp, err := http.Get("http://" + a + "/")
+	if err != nil || resp.StatusCode != 200 {
+		t.Fatalf("GET: %v", err)
+	}
+	resp.Body.Close()
+	cancel()
+	select {
+	case err := <-done:
+		if err != nil {
+			t.Error(err)
+		}
+	case <-time.After(5 * time.Second):
+		t.Fatal("Serve did not stop")
+	}
+}

@@ -1,0 +1,259 @@
+package live
+
+import (
+	"context"
+	"errors"
+	"fmt"
+	"net"
+	"net/http"
+	"path/filepath"
+	"strconv"
+	"strings"
+	"sync"
+	"time"
+)
+
+// Server holds a project's wells as last prepared and the pages watching
+// them.
+type Server struct {
+	dir string
+
+	mu       sync.Mutex
+	settings *settings
+	wells    []*Well // in file order
+	problems []error // project-level problems: listing, settings
+	version  uint64  // bumped on every change the page shows
+	waiters  map[chan struct{}]bool
+
+	// Prepared is called after every refresh with the number of wells
+	// prepared again (tests wait on it); may be nil.
+	Prepared func(redrawn int)
+}
+
+// New prepares every well of the project in dir (a directory holding
+// project.toml, or any directory of well files).
+func New(dir string) (*Server, error) {
+	abs, err := filepath.Abs(dir)
+	if err != nil {
+		return nil, err
+	}
+	s := &Server{dir: abs, waiters: map[chan struct{}]bool{}}
+	s.Refresh()
+	return s, nil
+}
+
+// Refresh reads the settings again and prepares every well whose file or
+// setting changed; the others keep their sheets. It wakes the pages when
+// anything they show changed.
+func (s *Server) Refresh() {
+	st := loadSettings(s.dir)
+	problems := st.problems
+	s.mu.Lock()
+	prev := map[string]*Well{}
+	for _, w := range s.wells {
+		prev[w.Path] = w
+	}
+	s.mu.Unlock()
+	var wells []*Well
+	redrawn := 0
+	if st.run != nil {
+		for _, in := range st.run.Inputs {
+			w := prepare(st, in, prev[in.Path])
+			if w != prev[in.Path] {
+				redrawn++
+			}
+			wells = append(wells, w)
+		}
+	}
+	s.mu.Lock()
+	changed := redrawn > 0 || len(wells) != len(s.wells) || errText(problems) != errText(s.problems)
+	s.settings, s.wells, s.problems = st, wells, problems
+	if changed {
+		s.version++
+		for ch := range s.waiters {
+			select {
+			case ch <- struct{}{}:
+			default:
+			}
+		}
+	}
+	s.mu.Unlock()
+	if s.Prepared != nil {
+		s.Prepared(redrawn)
+	}
+}
+
+func errText(errs []error) string {
+	var b strings.Builder
+	for _, e := range errs {
+		b.WriteString(e.Error() + "\n")
+	}
+	return b.String()
+}
+
+// snapshot is what one page render shows.
+type snapshot struct {
+	Dir      string
+	Version  uint64
+	Wells    []*Well
+	Problems []error
+	Aspect   string // the sheets' width / height, to hold their place while they load
+}
+
+func (s *Server) snapshot() snapshot {
+	s.mu.Lock()
+	defer s.mu.Unlock()
+	snap := snapshot{Dir: s.dir, Version: s.version, Wells: s.wells, Problems: s.problems, Aspect: "8.5 / 11"}
+	if st := s.settings; st != nil && st.run != nil && len(st.run.Settings) > 0 {
+		if pg := st.run.Settings[0].Page; pg.Width > 0 && pg.Height > 0 {
+			snap.Aspect = fmt.Sprintf("%g / %g", pg.Width, pg.Height)
+		}
+	}
+	return snap
+}
+
+// Handler serves the page, its parts and the sheets. Every path it
+// answers is fixed or an index into the wells in memory: no request
+// names a file, so none can reach outside the project.
+func (s *Server) Handler() http.Handler {
+	mux := http.NewServeMux()
+	mux.HandleFunc("GET /{$}", s.servePage)
+	mux.HandleFunc("GET /wells", s.serveWells)
+	mux.HandleFunc("GET /events", s.serveEvents)
+	mux.HandleFunc("GET /sheet/{well}/{n}", s.serveSheet)
+	return mux
+}
+
+func (s *Server) servePage(w http.ResponseWriter, r *http.Request) {
+	w.Header().Set("Content-Type", "text/html; charset=utf-8")
+	w.Header().Set("Cache-Control", "no-store")
+	if err := pageTemplate.Execute(w, s.snapshot()); err != nil {
+		http.Error(w, err.Error(), http.StatusInternalServerError)
+	}
+}
+
+func (s *Server) serveWells(w http.ResponseWriter, r *http.Request) {
+	w.Header().Set("Content-Type", "text/html; charset=utf-8")
+	w.Header().Set("Cache-Control", "no-store")
+	if err := pageTemplate.ExecuteTemplate(w, "body", s.snapshot()); err != nil {
+		http.Error(w, err.Error(), http.StatusInternalServerError)
+	}
+}
+
+// serveSheet answers /sheet/WELL-INDEX/SHEET-INDEX.svg from memory.
+func (s *Server) serveSheet(w http.ResponseWriter, r *http.Request) {
+	i, err1 := strconv.Atoi(r.PathValue("well"))
+	n, err2 := strconv.Atoi(strings.TrimSuffix(r.PathValue("n"), ".svg"))
+	snap := s.snapshot()
+	if err1 != nil || err2 != nil || i < 0 || i >= len(snap.Wells) || n < 0 || n >= len(snap.Wells[i].Sheets) {
+		http.NotFound(w, r)
+		return
+	}
+	w.Header().Set("Content-Type", "image/svg+xml")
+	w.Header().Set("Cache-Control", "no-cache")
+	w.Header().Set("ETag", `"`+snap.Wells[i].Version+`"`)
+	w.Write(snap.Wells[i].Sheets[n])
+}
+
+// serveEvents streams one event per change to an open page.
+func (s *Server) serveEvents(w http.ResponseWriter, r *http.Request) {
+	fl, ok := w.(http.Flusher)
+	if !ok {
+		http.Error(w, "streaming unsupported", http.StatusInternalServerError)
+		return
+	}
+	ch := make(chan struct{}, 1)
+	s.mu.Lock()
+	s.waiters[ch] = true
+	s.mu.Unlock()
+	defer func() {
+		s.mu.Lock()
+		delete(s.waiters, ch)
+		s.mu.Unlock()
+	}()
+	w.Header().Set("Content-Type", "text/event-stream")
+	w.Header().Set("Cache-Control", "no-store")
+	fmt.Fprintf(w, "retry: 500\ndata: %d\n\n", s.snapshot().Version)
+	fl.Flush()
+	keep := time.NewTicker(15 * time.Second)
+	defer keep.Stop()
+	for {
+		select {
+		case <-r.Context().Done():
+			return
+		case <-ch:
+			fmt.Fprintf(w, "data: %d\n\n", s.snapshot().Version)
+		case <-keep.C:
+			fmt.Fprint(w, ": keep-alive\n\n")
+		}
+		fl.Flush()
+	}
+}
+
+// Serve listens on addr and serves until ctx ends, following the
+// project's files; ready is called with the address once listening.
+func (s *Server) Serve(ctx context.Context, addr string, ready func(addr string)) error {
+	ln, err := net.Listen("tcp", addr)
+	if err != nil {
+		return err
+	}
+	watch, err := newWatcher(s.dir, s.Refresh, s.watchDirs)
+	if err != nil {
+		ln.Close()
+		return err
+	}
+	defer watch.Close()
+	srv := &http.Server{Handler: s.Handler(), ReadHeaderTimeout: 10 * time.Second, BaseContext: func(net.Listener) context.Context { return ctx }}
+	done := make(chan error, 1)
+	go func() { done <- srv.Serve(ln) }()
+	if ready != nil {
+		ready(ln.Addr().String())
+	}
+	select {
+	case <-ctx.Done():
+		shut, cancel := context.WithTimeout(context.Background(), 2*time.Second)
+		defer cancel()
+		if err := srv.Shutdown(shut); err != nil {
+			srv.Close()
+		}
+		return nil
+	case err := <-done:
+		if errors.Is(err, http.ErrServerClosed) {
+			return nil
+		}
+		return err
+	}
+}
+
+// watchDirs are the directories whose files the page depends on: the
+// project's, the wells' (and their subfolders), and those of the profile
+// and yields files.
+func (s *Server) watchDirs() []string {
+	s.mu.Lock()
+	st, wells := s.settings, s.wells
+	s.mu.Unlock()
+	seen := map[string]bool{s.dir: true}
+	out := []string{s.dir}
+	add := func(d string) {
+		if d != "" && !seen[d] {
+			seen[d] = true
+			out = append(out, d)
+		}
+	}
+	for _, w := range wells {
+		add(filepath.Dir(w.Path))
+	}
+	if st != nil && st.run != nil {
+		for _, set := range st.run.Settings {
+			if p := set.Project; p != nil {
+				add(filepath.Clean(p.Path(p.Wells)))
+			}
+			for _, f := range []string{set.ProfileFile, set.YieldsFile} {
+				if f != "" {
+					add(filepath.Dir(f))
+				}
+			}
+		}
+	}
+	return out
+}

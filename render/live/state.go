@@ -1,0 +1,165 @@
+// Package live serves a project as a local web page that follows the
+// files on disk: every well with its status, sheets (SVG), findings with
+// file and line, and quantities. When a well, project, profile or yields
+// file changes, the wells it touches are checked and drawn again (an
+// unchanged well keeps its drawing: a content-hash cache) and the open
+// page updates itself over Server-Sent Events, keeping its scroll
+// position. Sheets are kept in memory: the server writes no file.
+package live
+
+import (
+	"crypto/sha256"
+	"errors"
+	"fmt"
+	"strings"
+
+	"github.com/tremie-dev/tremie/render/out"
+	"github.com/tremie-dev/tremie/render/pipeline"
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+// Status is a well's standing on the page.
+type Status string
+
+const (
+	Clean    Status = "clean"
+	Warnings Status = "warnings"
+	Errors   Status = "errors" // an unwaived error finding, or the file could not be read
+	Planned  Status = "planned"
+)
+
+// Well is one well file as the page shows it.
+type Well struct {
+	Key        string // path relative to the project, forward slashes
+	Path       string
+	ID         string
+	Status     Status
+	Problems   schema.ErrorList // why it could not be read or parsed; then no sheet
+	Findings   []rules.Finding
+	Quantities *quantity.Report
+	Sheets     [][]byte // SVG, one per sheet
+	Version    string   // hash of what it was made from: changes when it is redrawn
+}
+
+// settings reads the project through the pipeline: its wells, each with
+// the setting (profile, yields, page) it is judged with, a hash of each
+// setting's files, and what could not be read.
+type settings struct {
+	run      *pipeline.Run
+	hashes   map[*pipeline.Setting][32]byte
+	problems []error
+}
+
+func loadSettings(dir string) *settings {
+	st := &settings{hashes: map[*pipeline.Setting][32]byte{}}
+	run, _, err := pipeline.ResolveProject(dir, pipeline.Options{Quiet: true})
+	if err != nil {
+		st.problems = append(st.problems, err)
+		return st
+	}
+	st.run = run
+	st.problems = append(st.problems, run.Problems...)
+	for _, s := range run.Settings {
+		h := sha256.New()
+		if s.Project != nil {
+			data, _ := schema.ReadInput(s.Project.File, schema.MaxTextFile)
+			h.Write(data)
+		}
+		for _, f := range []string{s.ProfileFile, s.YieldsFile} {
+			h.Write([]byte{0})
+			if f != "" {
+				data, _ := schema.ReadInput(f, schema.MaxTextFile)
+				h.Write(data)
+			}
+		}
+		fmt.Fprintf(h, "\x00%s\x00%v", s.PageName, s.Landscape)
+		var sum [32]byte
+		h.Sum(sum[:0])
+		st.hashes[s] = sum
+	}
+	return st
+}
+
+// prepare checks, quantifies and draws one well through the pipeline.
+// prev is the last result for the same file: returned as it is when
+// neither the file nor its setting changed.
+func prepare(st *settings, in pipeline.Input, prev *Well) *Well {
+	data, rerr := schema.ReadInput(in.Path, schema.MaxTextFile)
+	sum := st.hashes[in.Setting]
+	h := sha256.New()
+	h.Write(sum[:])
+	h.Write(data)
+	version := fmt.Sprintf("%x", h.Sum(nil))[:16]
+	if prev != nil && prev.Version == version && rerr == nil {
+		return prev
+	}
+	w := &Well{Key: in.Key, Path: in.Path, Version: version, Status: Errors}
+	pw := pipeline.Prepare(in, pipeline.AllRules)
+	if pw.Err != nil {
+		w.Problems = problemsOf(pw.Err, in)
+		return w
+	}
+	w.ID = pw.ID
+	w.Quantities = pw.Quantities
+	w.Findings = pw.Findings
+	for i := range w.Findings {
+		if w.Findings[i].File == in.Path {
+			w.Findings[i].File = in.Key // name the file as the project does
+		}
+	}
+	w.Status = statusOf(pw.Well, w.Findings)
+	doc, err := pw.Layout(pipeline.LayoutOptions{})
+	if err != nil {
+		w.Problems = problemsOf(err, in)
+		return w
+	}
+	for i := range doc.Pages {
+		svg, err := out.SVG(doc, i)
+		if err != nil {
+			w.Problems = problemsOf(err, in)
+			return w
+		}
+		w.Sheets = append(w.Sheets, svg)
+	}
+	return w
+}
+
+// problemsOf is an error as the page lists it, each position naming the
+// file relative to the project.
+func problemsOf(err error, in pipeline.Input) schema.ErrorList {
+	var el schema.ErrorList
+	var one *schema.Error
+	switch {
+	case errors.As(err, &el):
+	case errors.As(err, &one):
+		el = schema.ErrorList{one}
+	default:
+		el = schema.ErrorList{{File: in.Path, Msg: err.Error()}}
+	}
+	out := make(schema.ErrorList, len(el))
+	for i, e := range el {
+		c := *e
+		if c.File == in.Path {
+			c.File = in.Key
+		}
+		out[i] = &c
+	}
+	return out
+}
+
+func statusOf(w *schema.Well, findings []rules.Finding) Status {
+	if rules.Blocking(findings) {
+		return Errors
+	}
+	if strings.EqualFold(strings.TrimSpace(w.Status), "planned") {
+		return Planned
+	}
+	for _, f := range findings {
+		if !f.Waived {
+			return Warnings
+		}
+	}
+	return Clean
+}
