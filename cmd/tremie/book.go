@@ -21,6 +21,7 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("book", stdout, stderr)
 	outFile := fset.String("o", "", "output PDF `file` (default OUTPUT/book.pdf, which replaces only a book tremie wrote)")
 	force := fset.Bool("force", false, "replace OUTPUT/book.pdf even if tremie did not write it")
+	issue := fset.Bool("issue", false, "bind the issued set: no rule IDs or file lines; refused while any well has unwaived error findings")
 	rest, code, ok := fset.parse(args)
 	if !ok {
 		return code
@@ -32,7 +33,16 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 	if p == nil {
 		return code
 	}
-	pdf, problems, err := run.Book(p, wells)
+	if *issue || p.Issue {
+		if refused := pipeline.NotIssuable(wells); len(refused) > 0 {
+			for _, w := range refused {
+				fmt.Fprintf(stderr, "tremie book: %s (%s): not issued: unwaived error findings; resolve or waive them (run tremie check %s)\n", w.Path, w.ID, w.Path)
+			}
+			fmt.Fprintf(stderr, "tremie book: no issued set while %d %s unwaived errors; tremie book without --issue binds the draft\n", len(refused), plural(len(refused), "well has", "wells have"))
+			return exitFindings
+		}
+	}
+	pdf, problems, err := run.Book(p, wells, *issue)
 	for _, e := range problems {
 		fmt.Fprintln(stderr, e)
 		code = worse(code, map[bool]int{true: exitOutput, false: exitInput}[pipeline.IsOutputError(e)])

@@ -40,7 +40,11 @@ func register(c *command) { commands[c.name] = c }
 // summaries and the caution are still printed.
 var quiet bool
 
-func main() { os.Exit(run(os.Args[1:], os.Stdout, os.Stderr)) }
+func main() {
+	stdout, stderr := terminalSafe()
+	stopOnSignal(stderr)
+	os.Exit(exitStatus(run(os.Args[1:], stdout, stderr)))
+}
 
 func run(args []string, stdout, stderr io.Writer) int {
 	quiet = false

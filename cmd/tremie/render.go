@@ -31,6 +31,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	landscape := fset.Bool("landscape", false, "turn the page to landscape")
 	scaleText := fset.String("scale", "", "vertical `scale`, such as 1in=5ft or 1:50, or fit for one sheet (default: automatic)")
 	strict := fset.Bool("strict", false, "refuse to draw a well with unwaived error findings")
+	issue := fset.Bool("issue", false, "draw the issued set: no rule IDs or file lines, a revision block and a seal space; wells with unwaived error findings are refused")
 	profilePath := fset.String("profile", "", "rule profile TOML `file` (default: the project's, else the defaults)")
 	yieldsPath := fset.String("yields", "", "TOML `file` with a [yields] table overriding the yields (default: the project's)")
 	dpi := fset.Float64("dpi", 150, "PNG resolution in `dots` per inch")
@@ -45,7 +46,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	if !(*dpi >= 10 && *dpi <= 1200) {
 		return fset.usageError("--dpi %g is outside 10–1200", *dpi)
 	}
-	opt := pipeline.RenderOptions{DPI: *dpi, Strict: *strict, Force: *force, Version: Version}
+	opt := pipeline.RenderOptions{DPI: *dpi, Strict: *strict, Issue: *issue, Force: *force, Version: Version}
 	var err error
 	if opt.Formats, err = out.ParseFormats(*formats); err != nil {
 		return fset.usageError("--format: %v", err)
@@ -108,6 +109,8 @@ func printRendered(stdout, stderr io.Writer, r pipeline.Rendered) int {
 		code = exitFindings
 	}
 	switch {
+	case r.Refused && r.Issue:
+		fmt.Fprintf(stderr, "tremie render: %s (%s): not issued: unwaived error findings; resolve or waive them (run tremie check %s)\n", f, r.ID, f)
 	case r.Refused:
 		fmt.Fprintf(stderr, "tremie render: %s (%s): refused under --strict: unwaived error findings (run tremie check %s)\n", f, r.ID, f)
 	case quiet && mark == "":

@@ -208,3 +208,34 @@ func sheetFiles(dir, id, ext string) []string {
 	many, _ := filepath.Glob(filepath.Join(dir, id+"-sheet*."+ext))
 	return append(one, many...)
 }
+
+// An issued set of the demo refuses MW-3 (unwaived errors) and draws the
+// others; a project may ask for the issued set with issue = true.
+func TestRenderIssueRefusesUnwaivedErrors(t *testing.T) {
+	dir := copyDemo(t)
+	for _, args := range [][]string{{"--issue"}, nil} {
+		if args == nil {
+			pf := filepath.Join(dir, "project.toml")
+			data, err := os.ReadFile(pf)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if err := os.WriteFile(pf, []byte(strings.Replace(string(data), "[project]\n", "[project]\nissue = true\n", 1)), 0o644); err != nil {
+				t.Fatal(err)
+			}
+		}
+		outDir := t.TempDir()
+		var stdout, stderr bytes.Buffer
+		code := run(append([]string{"render", "--format", "svg", dir, "-o", outDir}, args...), &stdout, &stderr)
+		if code != exitFindings || !strings.Contains(stderr.String(), "MW-3): not issued") {
+			t.Errorf("%v: exit %d, stderr:\n%s", args, code, stderr.String())
+		}
+		if _, err := os.Stat(filepath.Join(outDir, "MW-3.svg")); err == nil {
+			t.Errorf("%v: MW-3 was issued", args)
+		}
+		data, err := os.ReadFile(filepath.Join(outDir, "MW-1.svg"))
+		if err != nil || !strings.Contains(string(data), "SEAL AND SIGNATURE") {
+			t.Errorf("%v: MW-1 not drawn as issued (%v)", args, err)
+		}
+	}
+}

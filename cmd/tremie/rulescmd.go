@@ -70,6 +70,8 @@ func writeRule(b *strings.Builder, r *rules.Rule) {
 	if len(r.Purposes) > 0 {
 		wrap(b, "applies by default to "+rules.PurposeList(r.Purposes)+" wells, and to wells whose purpose is not given; "+
 			"a profile may switch it on for other purposes", "    ")
+	} else {
+		wrap(b, "applies to wells of every purpose", "    ")
 	}
 	for _, p := range r.Params {
 		def := paramDefault(p.Kind, p.Default, p.DefaultFt)

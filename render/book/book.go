@@ -31,6 +31,9 @@ type Input struct {
 	// the cover and contents; 0 means US Letter. Tables use it turned.
 	PageWidth, PageHeight float64
 	Caution               string // "" for Caution
+	// Issue binds the issued set: its findings table states waivers and
+	// remarks in plain words, with no rule IDs or file lines.
+	Issue bool
 }
 
 // Well is one well's part of the book.

@@ -24,7 +24,7 @@ import (
 )
 
 // demoInput binds the demo project, plus one file that cannot be read.
-func demoInput(t *testing.T) (Input, []int) {
+func demoInput(t testing.TB) (Input, []int) {
 	t.Helper()
 	pt, err := demo.FS.ReadFile("project.toml")
 	if err != nil {
@@ -230,4 +230,24 @@ func TestBookTakesAnyUnicode(t *testing.T) {
 	if printable("plain ±µ° Å") != "plain ±µ° Å" {
 		t.Error("printable changed text the face can print")
 	}
+}
+
+// FuzzBookText: any text in the project's name and a well's ID binds
+// into a book without a panic.
+func FuzzBookText(f *testing.F) {
+	f.Add("Coldwater 💧 Mill", "MW-\U0001F600")
+	f.Add("\x00\x1b[2J", "=cmd|' /C calc'!A0")
+	f.Add(strings.Repeat("W", 2000), "")
+	in, _ := demoInput(f)
+	f.Fuzz(func(t *testing.T, name, id string) {
+		c := in
+		pr := *in.Project
+		pr.Name = name
+		c.Project = &pr
+		c.Wells = append([]Well{}, in.Wells...)
+		c.Wells[0].ID = id
+		if _, err := Build(c); err != nil && !strings.Contains(err.Error(), "book") {
+			t.Fatalf("unexplained error: %v", err)
+		}
+	})
 }

@@ -63,20 +63,33 @@ func typesetTables(in Input, first int) ([]byte, int, int, error) {
 	}
 
 	findingsAt := f.PageNo() + 1
-	fg := newGrid(f, "Findings and waivers", []gridCol{
+	fcols := []gridCol{
 		{title: "Well", width: 1.2}, {title: "Rule", width: 2.4}, {title: "Status", width: 0.9},
 		{title: "Line", width: 0.6, right: true}, {title: "Finding", width: 7}, {title: "Waiver", width: 3.2},
-	}, 7)
+	}
+	if in.Issue {
+		fcols = []gridCol{{title: "Well", width: 1.2}, {title: "Status", width: 1.6}, {title: "Finding", width: 8.3}, {title: "Accepted because", width: 4.2}}
+	}
+	fg := newGrid(f, "Findings and waivers", fcols, 7)
 	fg.intro = tally(in)
 	fg.page(false)
 	for _, w := range in.Wells {
 		if w.Problem != "" && w.Sheets == nil {
-			fg.row([]string{w.Name(), "—", "not drawn", "", w.Problem, ""})
+			if in.Issue {
+				fg.row([]string{w.Name(), "not drawn", w.Problem, ""})
+			} else {
+				fg.row([]string{w.Name(), "—", "not drawn", "", w.Problem, ""})
+			}
 		}
 		for _, fd := range w.Findings {
 			waiver := ""
 			if fd.Waiver != nil {
 				waiver = strings.TrimSuffix(fd.Waiver.Reason+" — "+fd.Waiver.ApprovedBy+", "+fd.Waiver.Date, ", ")
+			}
+			if in.Issue {
+				status := map[bool]string{true: "accepted departure", false: "review remark"}[fd.Waived]
+				fg.row([]string{w.Name(), status, fd.Message, waiver})
+				continue
 			}
 			fg.row([]string{w.Name(), fd.Rule, fd.Label(), strconv.Itoa(fd.Line), fd.Message, waiver})
 		}
@@ -104,7 +117,7 @@ func tally(in Input) string {
 		}
 	}
 	var parts []string
-	for _, s := range []table.Status{table.Clean, table.Warnings, table.Errors, table.Waived, table.Unreadable} {
+	for _, s := range []table.Status{table.Clean, table.Warnings, table.Errors, table.Waived, table.Planned, table.Unreadable} {
 		if counts[s] > 0 {
 			parts = append(parts, fmt.Sprintf("%d %s", counts[s], s))
 		}

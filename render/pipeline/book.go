@@ -47,8 +47,11 @@ func Entries(wells []*Well) []table.Entry {
 // project's cross-sections and a project feature summary into one PDF. A
 // well or section that cannot be drawn is listed with its problem and
 // returned in problems (outputErr when the PDF could not be written);
-// the book is still made.
-func (r *Run) Book(p *project.Project, wells []*Well) (pdf []byte, problems []error, err error) {
+// the book is still made. An issued book (issue, or the project's issue
+// setting) draws every sheet as issued and states its findings in plain
+// words; the caller refuses it while NotIssuable names any well.
+func (r *Run) Book(p *project.Project, wells []*Well, issue bool) (pdf []byte, problems []error, err error) {
+	issue = issue || p.Issue
 	date := r.ProjectDate(p, wells)
 	stamp := date.Format(time.RFC3339)
 	page, prof := sheet.Letter, (*rules.Profile)(nil)
@@ -62,7 +65,7 @@ func (r *Run) Book(p *project.Project, wells []*Well) (pdf []byte, problems []er
 			bw.Problem = "could not be read"
 			return bw, batch.Skipped, nil
 		}
-		doc, err := w.Layout(LayoutOptions{Date: stamp})
+		doc, err := w.Layout(LayoutOptions{Date: stamp, Issue: issue})
 		if err == nil {
 			// The well's feature summary follows its sheets.
 			if fs := features.WellSummary(p.Key(w.Path), w.Well, pw, ph, doc.Date); fs != nil {
@@ -97,7 +100,7 @@ func (r *Run) Book(p *project.Project, wells []*Well) (pdf []byte, problems []er
 	}
 	pdf, err = book.Build(book.Input{
 		Project: p, Date: date, Table: Table(p, wells), Wells: bound, Sections: secs,
-		PageWidth: pw, PageHeight: ph, Caution: rules.Caution(prof),
+		PageWidth: pw, PageHeight: ph, Caution: rules.Caution(prof), Issue: issue,
 	})
 	return pdf, problems, err
 }

@@ -47,6 +47,22 @@ type Setting struct {
 	profileBytes, yieldsBytes []byte // for the output cache
 }
 
+// Issue reports whether the setting's wells are drawn as the issued set:
+// asked for on the command line, or by the project (issue = true).
+func (s *Setting) Issue(asked bool) bool { return asked || s.Project != nil && s.Project.Issue }
+
+// NotIssuable are the wells an issued set must refuse: read, with
+// unwaived error findings.
+func NotIssuable(wells []*Well) []*Well {
+	var out []*Well
+	for _, w := range wells {
+		if w.Well != nil && w.Blocking() {
+			out = append(out, w)
+		}
+	}
+	return out
+}
+
 // ProfileLabel names the profile in force, for every report.
 func (s *Setting) ProfileLabel() string {
 	if s.Profile.IsDefault() {

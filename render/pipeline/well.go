@@ -99,6 +99,8 @@ type LayoutOptions struct {
 	Date string
 	// SheetOffset and SheetTotal number the sheets within a bound set.
 	SheetOffset, SheetTotal int
+	// Issue draws the issued set (sheet.Options.Issue).
+	Issue bool
 }
 
 // SheetInputs is what the sheet shows besides the well: its findings,
@@ -118,7 +120,7 @@ func (w *Well) SheetInputs() (sheet.Inputs, error) {
 
 // SheetOptions are the drafting choices: the setting's page and opt.
 func (w *Well) SheetOptions(opt LayoutOptions) sheet.Options {
-	return sheet.Options{Page: w.Setting.Page, Scale: opt.Scale, Date: opt.Date, SheetOffset: opt.SheetOffset, SheetTotal: opt.SheetTotal}
+	return sheet.Options{Page: w.Setting.Page, Scale: opt.Scale, Date: opt.Date, SheetOffset: opt.SheetOffset, SheetTotal: opt.SheetTotal, Issue: opt.Issue}
 }
 
 // Layout lays a prepared well out on its setting's page with its

@@ -6,6 +6,7 @@ import (
 	"strings"
 
 	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
 )
 
@@ -240,6 +241,9 @@ func (l *layout) noteBlocks(width float64) []noteBlock {
 		return 1
 	}
 	sort.SliceStable(fs, func(i, j int) bool { return rank(fs[i]) < rank(fs[j]) })
+	if l.opt.Issue {
+		return append(out, l.issuedFindings(fs, width)...)
+	}
 	t := rules.Count(fs)
 	ne, nw, nv := t.Errors, t.Warnings, t.Waived
 	c := ink
@@ -267,6 +271,55 @@ func (l *layout) noteBlocks(width float64) []noteBlock {
 			col = grey
 		}
 		body(s, draw.Regular, col)
+	}
+	return out
+}
+
+// issuedFindings are the findings as an issued set states them: the
+// accepted departures (waivers) and the review remarks (warnings) in plain
+// words, with no rule IDs or file lines. An issued set has no errors.
+func (l *layout) issuedFindings(fs []rules.Finding, width float64) []noteBlock {
+	var out []noteBlock
+	add := func(s string, font draw.FontStyle, heading bool) {
+		var b textBlock
+		b.add(s, font, sizeSmall, width)
+		out = append(out, noteBlock{heading: heading, block: b, color: ink})
+	}
+	sentence := func(s string) string {
+		s = upperFirst(strings.TrimSpace(s))
+		if !strings.HasSuffix(s, ".") {
+			s += "."
+		}
+		return s
+	}
+	var waived, remarks []rules.Finding
+	for _, f := range fs {
+		switch {
+		case f.Waived:
+			waived = append(waived, f)
+		case !f.Blocking():
+			remarks = append(remarks, f)
+		}
+	}
+	if len(waived) > 0 {
+		add("ACCEPTED DEPARTURES FROM PRACTICE", draw.Bold, true)
+		for _, f := range waived {
+			s := sentence(f.Message)
+			if w := f.Waiver; w != nil {
+				s += " Accepted by " + w.ApprovedBy
+				if w.Date != "" {
+					s += " on " + w.Date
+				}
+				s += ": " + sentence(w.Reason)
+			}
+			add(s, draw.Regular, false)
+		}
+	}
+	if len(remarks) > 0 {
+		add("REVIEW REMARKS", draw.Bold, true)
+		for _, f := range remarks {
+			add(sentence(f.Message), draw.Regular, false)
+		}
 	}
 	return out
 }
@@ -357,6 +410,10 @@ func (l *layout) amountRows() [][]string {
 		if r.Fill.Gradation != "" {
 			name += " " + r.Fill.Gradation
 		}
+		if l.w.IsPlanned() {
+			rows = append(rows, []string{l.interval(r.Fill.Interval), name, l.calculated(r), l.toOrder(r), l.yield(r)})
+			continue
+		}
 		rows = append(rows, []string{l.interval(r.Fill.Interval), name, l.calculated(r), l.placed(r), ratio(r)})
 	}
 	return rows
@@ -383,14 +440,14 @@ var continueLineH = lineGap(sizeSmall) + 2
 // with the table's foot note or a continuation line.
 func (l *layout) amountsBoxHeight(w float64, rows [][]string, foot, more bool) float64 {
 	inner := w - 2*bandPad
-	_, hh := l.amountCells(amountHead(), inner, draw.Bold)
+	_, hh := l.amountCells(l.amountHead(), inner, draw.Bold)
 	h := bandHeadH + bandPad + hh
 	for _, r := range rows {
 		_, rh := l.amountCells(r, inner, draw.Regular)
 		h += rh
 	}
 	if foot {
-		f := amountsFoot(inner)
+		f := l.amountsFoot(inner)
 		h += 1 + f.height()
 	}
 	if more {
@@ -399,16 +456,25 @@ func (l *layout) amountsBoxHeight(w float64, rows [][]string, foot, more bool) f
 	return h + bandPad
 }
 
-func amountsFoot(width float64) textBlock {
+func (l *layout) amountsFoot(width float64) textBlock {
 	var foot textBlock
-	foot.add("Calculated: annulus between the recorded hole (or casing bore) and pipe outside diameters; bags at the yields in force.", draw.Italic, sizeTiny, width)
+	s := "Calculated: annulus between the recorded hole (or casing bore) and pipe outside diameters; bags at the yields in force."
+	if l.w.IsPlanned() {
+		s = fmt.Sprintf("Calculated: annulus between the design hole (or casing bore) and pipe outside diameters. To order: calculated plus %g %% (%s), rounded up to whole bags.", quantity.DefaultContingency, quantity.DefaultContingencySource)
+	}
+	foot.add(s, draw.Italic, sizeTiny, width)
 	return foot
 }
 
-func amountHead() []string {
+// amountHead is the amounts table's head: placed and ratio for a well as
+// built, to order and the yield for a design.
+func (l *layout) amountHead() []string {
 	h := make([]string, len(amountCols))
 	for i, c := range amountCols {
 		h[i] = c.head
+	}
+	if l.w.IsPlanned() {
+		h[3], h[4] = "To order", "Yield"
 	}
 	return h
 }
@@ -449,12 +515,12 @@ func (l *layout) amountBox(r draw.Rect, title string, rows [][]string, foot bool
 		y += rh
 		items = append(items, line(r.X+bandPad, y-1, r.Right()-bandPad, y-1, 0.3, lightGrey, ""))
 	}
-	drawRow(amountHead(), draw.Bold, "amounts-head")
+	drawRow(l.amountHead(), draw.Bold, "amounts-head")
 	for _, row := range rows {
 		drawRow(row, draw.Regular, "amounts-row")
 	}
 	if foot {
-		f := amountsFoot(inner)
+		f := l.amountsFoot(inner)
 		items = append(items, f.items(r.X+bandPad, y+1, grey, "amounts-note")...)
 		y += 1 + f.height()
 	}

@@ -283,8 +283,11 @@ func (l *layout) rawCallouts() []callout {
 		lines = append(lines, where)
 		if r, ok := l.amountRow(i); ok {
 			lines = append(lines, "calc. "+l.calculated(r))
-			if r.Recorded {
+			switch {
+			case r.Recorded:
 				lines = append(lines, "placed "+l.placed(r)+ratioSuffix(ratio(r)))
+			case l.w.IsPlanned():
+				lines = append(lines, "to order "+l.toOrder(r))
 			}
 		}
 		fi := f

@@ -151,6 +151,31 @@ func (l *layout) placed(r quantity.Row) string {
 	return l.volume(r.Placed)
 }
 
+// toOrder writes a design's order for an interval: "11 bags" (the
+// calculated volume with the contingency, in whole bags), or the volume
+// for a material without bags.
+func (l *layout) toOrder(r quantity.Row) string {
+	if n := r.BagsToOrder(quantity.DefaultContingency); n > 0 {
+		return fmt.Sprintf("%d %s", n, plural(n, "bag", "bags"))
+	}
+	if r.Err != nil || r.Calculated <= 0 {
+		return "—"
+	}
+	return l.volume(schema.Volume(float64(r.Calculated) * (1 + quantity.DefaultContingency/100)))
+}
+
+// yield writes the yield per bag in force: "0.5 ft³ per 50 lb".
+func (l *layout) yield(r quantity.Row) string {
+	if !r.HasYield || r.Yield.Volume <= 0 {
+		return "—"
+	}
+	s := l.volume(r.Yield.Volume) + "/bag"
+	if r.Yield.BagMass > 0 {
+		s = fmt.Sprintf("%s/%s %s", l.volume(r.Yield.Volume), schema.TrimFloat(r.Yield.BagMass.In(l.u.Mass), 1), l.u.Mass)
+	}
+	return s
+}
+
 func ratio(r quantity.Row) string {
 	if r.Ratio <= 0 {
 		return "—"

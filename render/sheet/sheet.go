@@ -7,7 +7,9 @@
 package sheet
 
 import (
+	"errors"
 	"fmt"
+	"strings"
 	"time"
 
 	"github.com/tremie-dev/tremie/render/draw"
@@ -44,7 +46,16 @@ type Options struct {
 	// Date is the document date written by backends (RFC 3339); "" takes
 	// the well's completed or drilled date. Never the clock.
 	Date string
+	// Issue draws the issued set rather than the draft: no rule IDs or
+	// file lines, waivers and remarks in plain words, a revision block and
+	// a space for the professional's seal and signature. A well with
+	// unwaived error findings is refused (ErrNotIssuable).
+	Issue bool
 }
+
+// ErrNotIssuable is returned (wrapped) by Layout for an issued set of a
+// well whose check found unwaived errors.
+var ErrNotIssuable = errors.New("not issuable")
 
 // Caution is printed on every sheet drawn under the default thresholds;
 // under a profile the footer names it (rules.Caution).
@@ -65,12 +76,16 @@ func Layout(w *schema.Well, in Inputs, opt Options) (*draw.Document, error) {
 	if err := pg.check(); err != nil {
 		return nil, err
 	}
+	if opt.Issue && rules.Blocking(in.Findings) {
+		n := rules.Count(in.Findings).Errors
+		return nil, fmt.Errorf("sheet %s: %w: %d unwaived error %s; resolve or waive them, or draw a draft without --issue", w.ID, ErrNotIssuable, n, plural(n, "finding", "findings"))
+	}
 	l := newLayout(w, in, opt, pg)
 	if err := l.plan(); err != nil {
 		return nil, fmt.Errorf("sheet %s: %w", w.ID, err)
 	}
 	doc := &draw.Document{
-		Title:   fmt.Sprintf("%s well construction log", w.ID),
+		Title:   fmt.Sprintf("%s %s", w.ID, strings.ToLower(l.sheetTitle())),
 		Subject: joinNonEmpty(" · ", w.Project, w.Site),
 		Author:  joinNonEmpty(", ", in.TitleBlock.Consultant, w.LoggedBy),
 		Date:    documentDate(w, opt.Date),

@@ -17,11 +17,18 @@ import (
 type field struct {
 	label, value string
 	scaleBar     bool // draw the vertical scale bar beside the value
+	// lines, when given, are the value's lines as set (a revision block);
+	// minW and minH reserve room (the seal and signature space).
+	lines      []string
+	minW, minH float64
 }
 
 // titleBlock is the grid of fields under the title row.
 type titleBlock struct {
 	rows [][]field
+	// sealW is the width of the column kept at the grid's right for the
+	// professional's seal and signature (issued sets), 0 for none.
+	sealW float64
 }
 
 const (
@@ -76,7 +83,30 @@ func (l *layout) titleFields() titleBlock {
 		rows = append(rows, []field{{label: "Prepared by", value: dash(joinNonEmpty(", ", tb.Consultant, tb.PreparedBy))}, {label: "Approved by", value: dash(tb.ApprovedBy)},
 			{label: "Report", value: dash(joinNonEmpty(" · job ", tb.ReportNumber, tb.JobNumber))}, {label: "Revision", value: dash(tb.Revision)}, {label: "Issued", value: dash(tb.Issued.String())}})
 	}
+	if l.opt.Issue {
+		rows = append(rows, l.issueRow())
+		return titleBlock{rows: rows, sealW: sealSpace + 6}
+	}
 	return titleBlock{rows: rows}
+}
+
+// sealSpace is the side of the square left for the professional's seal
+// and signature on an issued sheet: 1.5 in (common practice for a stamp
+// of 1.5 to 2 in across).
+const sealSpace = 108.0
+
+// issueRow is the revision block (revision, date, description, by) and
+// the space for the professional's seal and signature of an issued set.
+func (l *layout) issueRow() []field {
+	tb := l.in.TitleBlock
+	revs := []string{"REV · DATE · DESCRIPTION · BY"}
+	for _, r := range tb.Revisions {
+		revs = append(revs, joinNonEmpty(" · ", r.Rev, r.Date.String(), r.Description, r.By))
+	}
+	if len(tb.Revisions) == 0 {
+		revs = append(revs, joinNonEmpty(" · ", tb.Revision, tb.Issued.String(), "Issued", tb.ApprovedBy))
+	}
+	return []field{{label: "Revisions", lines: revs}}
 }
 
 // coordinates writes the location's coordinates with their system.
@@ -131,7 +161,10 @@ func (tb titleBlock) cellWidths(row []field, w float64) []float64 {
 		case "Horizontal exaggeration":
 			v = "×100 (diameters at 1:100)"
 		}
-		need[i] = max(draw.TextWidth(draw.Regular, sizeTiny, strings.ToUpper(f.label)), draw.TextWidth(draw.Regular, sizeBody, v)) + 10
+		need[i] = max(draw.TextWidth(draw.Regular, sizeTiny, strings.ToUpper(f.label)), draw.TextWidth(draw.Regular, sizeBody, v), f.minW) + 10
+		for _, s := range f.lines {
+			need[i] = max(need[i], draw.TextWidth(draw.Regular, sizeBody, s)+10)
+		}
 		idx[i] = i
 	}
 	sort.SliceStable(idx, func(a, b int) bool { return need[idx[a]] < need[idx[b]] })
@@ -142,14 +175,30 @@ func (tb titleBlock) cellWidths(row []field, w float64) []float64 {
 		rest -= out[i]
 		k--
 	}
-	// Hand what is left over to every cell alike.
-	for i := range out {
-		out[i] += rest / float64(len(row))
+	// Hand what is left over to every cell alike, but a reserved space
+	// (the seal's) keeps its size.
+	flex := 0
+	for _, f := range row {
+		if f.minW == 0 {
+			flex++
+		}
+	}
+	for i, f := range row {
+		if f.minW == 0 || flex == 0 {
+			out[i] += rest / float64(max(flex, 1))
+		}
 	}
 	return out
 }
 
 func (tb titleBlock) cellLines(f field, cw float64) []string {
+	if f.lines != nil {
+		var out []string
+		for _, s := range f.lines {
+			out = append(out, draw.Wrap(draw.Regular, sizeBody, s, cw-6)...)
+		}
+		return out
+	}
 	ls := draw.Wrap(draw.Regular, sizeBody, f.value, cw-6)
 	if len(ls) > fieldMaxLine {
 		ls = ls[:fieldMaxLine]
@@ -166,19 +215,30 @@ func (tb titleBlock) cellLines(f field, cw float64) []string {
 func (tb titleBlock) rowHeight(row []field, w float64) float64 {
 	cws := tb.cellWidths(row, w)
 	n := 1
+	minH := 0.0
 	for i, f := range row {
+		minH = max(minH, f.minH)
 		if f.scaleBar {
 			continue
 		}
 		n = max(n, len(tb.cellLines(f, cws[i])))
 	}
-	return fieldLabelH + float64(n)*lineGap(sizeBody) + 3
+	return max(fieldLabelH+float64(n)*lineGap(sizeBody)+3, fieldLabelH+minH)
 }
 
 func (tb titleBlock) height(w float64) float64 {
-	h := titleRowH
+	return titleRowH + tb.gridHeight(w)
+}
+
+// gridHeight is the height of the rows under the title row: their own,
+// or the seal's space when that is taller (the last row takes the rest).
+func (tb titleBlock) gridHeight(w float64) float64 {
+	h := 0.0
 	for _, r := range tb.rows {
-		h += tb.rowHeight(r, w)
+		h += tb.rowHeight(r, w-tb.sealW)
+	}
+	if tb.sealW > 0 {
+		h = max(h, fieldLabelH+sealSpace)
 	}
 	return h
 }
@@ -207,7 +267,7 @@ func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
 	}
 	idW := min(draw.TextWidth(draw.Bold, sizeTitle, id), r.W*0.4)
 	items = append(items, text(x, r.Y+20, fit(id, draw.Bold, sizeTitle, r.W*0.4), draw.Bold, sizeTitle, draw.Start, ink, "well-id"))
-	items = append(items, text(x+idW+8, r.Y+13, "WELL CONSTRUCTION LOG", draw.Bold, sizeHeading, draw.Start, ink, ""),
+	items = append(items, text(x+idW+8, r.Y+13, l.sheetTitle(), draw.Bold, sizeHeading, draw.Start, ink, "sheet-title"),
 		text(x+idW+8, r.Y+22, fit(subtitle, draw.Regular, sizeSmall, r.W*0.35), draw.Regular, sizeSmall, draw.Start, grey, ""))
 	// Sheet number, boxed at the right.
 	sheetW := 74.0
@@ -220,12 +280,24 @@ func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
 		items = append(items, box(st, alarm, 1.6, draw.RGB(253, 238, 228), "stamp:not-final"),
 			text(st.X+st.W/2, st.Y+st.H/2+draw.CapHeight(draw.Bold, 10)/2, NotFinal, draw.Bold, 10, draw.Middle, alarm, "stamp-text"))
 	}
-	// The grid.
+	// The grid, beside the seal's column on an issued sheet.
 	y := r.Y + titleRowH
-	for _, row := range l.title.rows {
-		rh := l.title.rowHeight(row, r.W)
-		cws := l.title.cellWidths(row, r.W)
-		items = append(items, line(r.X, y, r.Right(), y, 0.5, ink, ""))
+	gw := r.W - l.title.sealW
+	if l.title.sealW > 0 {
+		sx := r.X + gw
+		items = append(items, line(sx, y, r.Right(), y, 0.5, ink, ""), line(sx, y, sx, r.Bottom(), 0.5, ink, ""),
+			box(draw.Rect{X: sx, Y: y, W: l.title.sealW, H: r.Bottom() - y}, draw.Color{}, 0, draw.Color{}, "seal"),
+			text(sx+3, y+6.6, "SEAL AND SIGNATURE", draw.Regular, sizeTiny, draw.Start, grey, "field:seal"))
+	}
+	rest := l.title.gridHeight(r.W)
+	for k, row := range l.title.rows {
+		rh := l.title.rowHeight(row, gw)
+		if k == len(l.title.rows)-1 {
+			rh = rest
+		}
+		rest -= rh
+		cws := l.title.cellWidths(row, gw)
+		items = append(items, line(r.X, y, r.X+gw, y, 0.5, ink, ""))
 		cx := r.X
 		for c, f := range row {
 			cw := cws[c]
@@ -248,6 +320,15 @@ func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
 		y += rh
 	}
 	return items
+}
+
+// sheetTitle names the kind of sheet: the log of a well as built, or the
+// design of a planned one.
+func (l *layout) sheetTitle() string {
+	if l.w.IsPlanned() {
+		return "PROPOSED WELL DESIGN"
+	}
+	return "WELL CONSTRUCTION LOG"
 }
 
 // scaleBar draws a bar of a round length at the vertical scale, in

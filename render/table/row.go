@@ -26,6 +26,7 @@ const (
 	Errors     Status = "errors"
 	Waived     Status = "waived" // every finding is waived
 	Unreadable Status = "unreadable"
+	Planned    Status = "planned" // a design: nothing placed to check yet
 )
 
 // Entry is one well as the table receives it.
@@ -228,6 +229,9 @@ func rowOf(e Entry, u schema.DepthUnit) Row {
 		}
 	}
 	r.Status, r.Errors, r.Warnings, r.Waived = status(e.Findings)
+	if w.IsPlanned() && r.Status != Errors {
+		r.Status = Planned
+	}
 	return r
 }
 

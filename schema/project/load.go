@@ -47,8 +47,31 @@ type fileData struct {
 		Job        string `toml:"job" doc:"Title block: job number." example:"26-044"`
 		Revision   string `toml:"revision" doc:"Title block: revision." example:"0"`
 		Issued     any    `toml:"issued" type:"date" doc:"Title block: issue date of the set of sheets, a TOML date without quotes." example:"2026-06-15"`
+		Issue      bool   `toml:"issue" doc:"Draw the issued set (as render --issue): no rule IDs or file lines, wells with unwaived errors refused, a revision block and a seal space." example:"false"`
 	} `toml:"project" required:"true" doc:"The project's settings and title-block fields."`
-	Section []sectionData `toml:"section" doc:"A cross-section that tremie section draws and tremie book binds."`
+	Section  []sectionData  `toml:"section" doc:"A cross-section that tremie section draws and tremie book binds."`
+	Revision []revisionData `toml:"revision" doc:"A row of the revision block of an issued set, oldest first."`
+}
+
+type revisionData struct {
+	Rev         string `toml:"rev" required:"true" doc:"Revision letter or number." example:"A"`
+	Date        any    `toml:"date" type:"date" required:"true" doc:"Date of the revision, a TOML date without quotes." example:"2026-06-15"`
+	Description string `toml:"description" required:"true" doc:"What the revision is." example:"Issued for permit"`
+	By          string `toml:"by" doc:"Who made it (initials)." example:"RV"`
+}
+
+// readRevisions reads the [[revision]] tables of an issued set.
+func readRevisions(doc *schema.Doc, ts []*schema.Table) []Revision {
+	var out []Revision
+	for _, t := range ts {
+		r := Revision{Rev: t.Str("rev"), Date: t.Date("date"), Description: t.Str("description"), By: t.Str("by")}
+		if strings.TrimSpace(r.Rev) == "" || strings.TrimSpace(r.Description) == "" || r.Date.IsZero() {
+			doc.Errorf(t.Path(), "a [[revision]] needs rev, date and description")
+		}
+		t.Done()
+		out = append(out, r)
+	}
+	return out
 }
 
 // File is the key table of a project file, made from fileData.
@@ -115,6 +138,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 			Revision:     pt.Str("revision"),
 			Issued:       pt.Date("issued"),
 		},
+		Issue: pt.Bool("issue"),
 	}
 	if strings.TrimSpace(p.Name) == "" {
 		doc.Errorf("project", "[project] needs a name (name = \"...\")")
@@ -156,6 +180,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 	}
 	pt.Done()
 	sections := readSections(doc, root.List("section"))
+	p.TitleBlock.Revisions = readRevisions(doc, root.List("revision"))
 	root.Done()
 	if err := doc.Err(); err != nil {
 		return nil, err

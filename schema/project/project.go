@@ -52,6 +52,8 @@ type Project struct {
 	Yields  string // path of a [yields] table file, "" for the default yields
 
 	TitleBlock TitleBlock
+	// Issue asks for the issued set rather than the draft (issue = true).
+	Issue bool
 
 	LogoPath string // "" when none
 	Logo     *Logo  // nil when none
@@ -77,6 +79,17 @@ type TitleBlock struct {
 	JobNumber    string
 	Revision     string
 	Issued       schema.Date // issue date of the set of sheets
+	// Revisions is the revision history an issued set prints, oldest
+	// first ([[revision]] in the project file).
+	Revisions []Revision
+}
+
+// Revision is one row of an issued set's revision block.
+type Revision struct {
+	Rev         string
+	Date        schema.Date
+	Description string
+	By          string
 }
 
 // Logo is a checked logo image.

@@ -35,5 +35,9 @@ func (p *Project) Settings() []byte {
 	line("job", tb.JobNumber)
 	line("revision", tb.Revision)
 	line("issued", tb.Issued.String())
+	line("issue", fmt.Sprint(p.Issue))
+	for i, r := range tb.Revisions {
+		line(fmt.Sprintf("revision[%d]", i), strings.Join([]string{r.Rev, r.Date.String(), r.Description, r.By}, "\x1f"))
+	}
 	return []byte(b.String())
 }

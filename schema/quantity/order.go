@@ -2,7 +2,6 @@ package quantity
 
 import (
 	"sort"
-	"strings"
 
 	"github.com/tremie-dev/tremie/schema"
 )
@@ -21,7 +20,7 @@ const DefaultContingencySource = "Kuo, Practical Design Calculations for Groundw
 // reconciled: its status says planned, or none of its fills records an
 // amount placed.
 func Planned(w *schema.Well) bool {
-	if strings.EqualFold(strings.TrimSpace(w.Status), "planned") {
+	if w.IsPlanned() {
 		return true
 	}
 	for _, f := range w.Fills {
@@ -30,6 +29,16 @@ func Planned(w *schema.Well) bool {
 		}
 	}
 	return true
+}
+
+// BagsToOrder is the bags to order for the interval: its calculated
+// volume with contingency percent added, rounded up to whole bags; 0 for
+// a material without a yield per bag.
+func (r Row) BagsToOrder(contingency float64) int {
+	if r.Err != nil || !r.HasYield || r.Yield.Volume <= 0 {
+		return 0
+	}
+	return bagsUp(float64(r.Calculated) * (1 + contingency/100) / float64(r.Yield.Volume))
 }
 
 // Line is one material of a list, with one bag (the same yield per bag
@@ -118,9 +127,7 @@ func sumLines(reports []*Report, contingency float64) []*Line {
 		}
 		l.Calculated += row.Calculated
 		l.BagsNeeded += row.BagsNeeded
-		if row.HasYield && row.Yield.Volume > 0 {
-			l.BagsOrder += bagsUp(float64(row.Calculated) * (1 + contingency/100) / float64(row.Yield.Volume))
-		}
+		l.BagsOrder += row.BagsToOrder(contingency)
 		l.BagsPlaced += row.BagsPlaced
 		l.Placed += row.Placed
 		l.Intervals++

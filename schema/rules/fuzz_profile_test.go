@@ -1,0 +1,30 @@
+package rules
+
+import (
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+// FuzzParseProfile: no rule profile makes the loader panic; a rejected
+// one names the file.
+func FuzzParseProfile(f *testing.F) {
+	paths, _ := filepath.Glob("testdata/profiles/*.toml")
+	for _, p := range paths {
+		if b, err := os.ReadFile(p); err == nil {
+			f.Add(b)
+		}
+	}
+	f.Add([]byte("[profile]\nname = \"county\"\n[thresholds]\n\"SEAL-THICKNESS\".min = 3.0\n"))
+	f.Add([]byte("x = " + strings.Repeat("[", 500) + strings.Repeat("]", 500)))
+	f.Fuzz(func(t *testing.T, data []byte) {
+		p, err := ParseProfile("p.toml", data)
+		if err == nil && p == nil {
+			t.Fatal("nil profile without error")
+		}
+		if err != nil && !strings.Contains(err.Error(), "p.toml") {
+			t.Fatalf("error without the file's name: %v", err)
+		}
+	})
+}
