@@ -161,6 +161,9 @@ func (r *reader) well(root *table) *Well {
 	if t := root.sub("pump"); t != nil {
 		w.Pump = r.pump(t, w)
 	}
+	if t := root.sub("pumping_test"); t != nil {
+		w.PumpingTest = r.pumpingTest(t, w)
+	}
 	r.features(root, w)
 	for _, t := range root.list("waiver") {
 		wv := Waiver{Rule: t.reqStr("rule"), Reason: t.reqStr("reason"), ApprovedBy: t.reqStr("approved_by"), Date: t.date("date"), Pos: r.at(t.path)}
@@ -347,11 +350,18 @@ func (r *reader) section(t *table, u Units, prev Pipe) Section {
 	slot, hasSlot := t.positive("slot")
 	num, hasNum := t.positive("slot_number")
 	typ := t.oneOf("type")
+	open, hasOpen := t.positive("open_area")
 	if sec.Kind != ScreenSection {
-		if hasSlot || hasNum || typ != "" {
-			r.errAt(t.path, "slot, slot_number and type apply to screen sections only")
+		if hasSlot || hasNum || typ != "" || hasOpen {
+			r.errAt(t.path, "slot, slot_number, type and open_area apply to screen sections only")
 		}
 		return sec
+	}
+	if hasOpen {
+		if open >= 100 {
+			r.errAt(t.keyPath("open_area"), "open_area = %v is not a percentage below 100", open)
+		}
+		sec.OpenArea = open / 100
 	}
 	switch {
 	case hasSlot && hasNum:

@@ -99,3 +99,23 @@ func TestCrossSectionsWithin(t *testing.T) {
 		t.Errorf("slabs cover %v m, want the 36.5 ft from the riser top to total depth", sum)
 	}
 }
+
+// BoreholeAt follows the same convention: a stepped hole's section below
+// a step holds the step, and the hole ends above total depth.
+func TestBoreholeAtHalfOpen(t *testing.T) {
+	w := &Well{TotalDepth: ft(20), Boreholes: []BoreholeSection{
+		{Interval: Interval{Top: 0, Bottom: ft(10)}, Diameter: in(10)},
+		{Interval: Interval{Top: ft(10), Bottom: ft(20)}, Diameter: in(6)},
+	}}
+	secs := w.CrossSections()
+	for _, z := range []float64{0, 5, 10, 19.99, 20} {
+		b, ok := w.BoreholeAt(ft(z))
+		cs := secs.At(ft(z))
+		if ok != cs.HasHole || (ok && b.Diameter != cs.Hole) {
+			t.Errorf("%g ft: BoreholeAt %v %v, cross-section %v %v", z, b.Diameter, ok, cs.Hole, cs.HasHole)
+		}
+	}
+	if b, _ := w.BoreholeAt(ft(10)); b.Diameter != in(6) {
+		t.Errorf("at the step: %v, want the 6-in section below", b.Diameter.In(Inches))
+	}
+}

@@ -52,7 +52,8 @@ type Well struct {
 	// MeasuringPoint says what water levels and the surveyed measuring-
 	// point elevation refer to; see StickUp.
 	MeasuringPoint MeasuringPoint
-	Pump           *Pump // nil when no pump setting is recorded
+	Pump           *Pump        // nil when no pump setting is recorded
+	PumpingTest    *PumpingTest // nil when none is recorded (pumping.go)
 
 	// Open-hole wall features and the images they were picked on
 	// (feature.go); Orientation is their azimuth reference.
@@ -297,6 +298,7 @@ type Section struct {
 	Pipe Pipe
 	// Screen only:
 	Slot       Diameter   // slot width; 0 if not given
+	OpenArea   float64    // open area as a fraction of the screen's outer surface; 0 if not given
 	ScreenType ScreenType // slotted, continuous-wrap, prepacked
 	Pos        Pos
 	Path       string
@@ -581,13 +583,14 @@ type StringSection struct {
 	Section Section
 }
 
-// BoreholeAt returns the borehole section at depth d (the deepest one that
-// contains d), or false.
+// BoreholeAt returns the borehole section at depth d, or false. Like
+// every part in a CrossSection a section covers top <= d < bottom; where
+// sections overlap the last written wins.
 func (w *Well) BoreholeAt(d Length) (BoreholeSection, bool) {
 	var found BoreholeSection
 	ok := false
 	for _, b := range w.Boreholes {
-		if b.Contains(d) {
+		if covers(b.Interval, d) {
 			found, ok = b, true
 		}
 	}

@@ -112,6 +112,7 @@ func wellFile() *TableSpec {
 			{Name: "slot", Type: TypeNumber, Bound: Positive, Unit: UnitDiameter, Doc: "Screens: slot width.", Example: 0.010},
 			{Name: "slot_number", Type: TypeNumber, Bound: Positive, Unit: UnitSlotNo, Doc: "Screens: instead of slot, the slot number (10-slot = 0.010 in).", Example: 10},
 			{Name: "type", Type: TypeString, Enum: []string{string(Slotted), string(ContinuousWrap), string(Prepacked)}, Doc: "Screens: the screen type; default slotted.", Example: "slotted"},
+			{Name: "open_area", Type: TypeNumber, Bound: Positive, Doc: "Screens: open area, percent of the screen's outer surface (manufacturer's figure).", Example: 12.5},
 		})}
 	str := &TableSpec{Doc: "A well string: riser, screen(s) and sump in one column of pipe; a nested completion has one per well.", Keys: []KeySpec{
 		{Name: "name", Type: TypeString, Doc: "Name of the string, unique in the file; default main.", Example: "MW-3"},
@@ -235,6 +236,14 @@ func wellFile() *TableSpec {
 		{Name: "points", Type: TypeNumberPairs, Doc: "Picks instead of trace_high/trace_low: 3 to 360 [azimuth, depth] pairs along the trace.", Example: []any{[]any{0.0, 96.8}, []any{120.0, 97.3}, []any{240.0, 96.7}}},
 		{Name: "caliper", Type: TypeNumber, Bound: Positive, Unit: UnitDiameter, Doc: "Hole diameter at the feature, overriding the [[borehole]] section's.", Example: 6.0},
 	}}
+	pumpingTest := &TableSpec{Doc: "A supply well's pumping test and design rate. Rates in US gal/min in a file in feet, L/s in one in metres.", Keys: []KeySpec{
+		{Name: "rate", Type: TypeNumber, Bound: Positive, Doc: "Tested pumping rate (gal/min or L/s).", Example: 350.0},
+		{Name: "design_rate", Type: TypeNumber, Bound: Positive, Doc: "Design pumping rate (gal/min or L/s).", Example: 300.0},
+		{Name: "duration", Type: TypeNumber, Bound: Positive, Doc: "Duration of the test, hours.", Example: 24.0},
+		{Name: "static_level", Type: TypeNumber, Bound: NonNegative, Unit: UnitDepth, Doc: "Static level before pumping, below ground.", Example: 161.5},
+		{Name: "pumping_level", Type: TypeNumber, Bound: Positive, Unit: UnitDepth, Doc: "Pumping level at the end of the test, below ground.", Example: 192.0},
+		{Name: "specific_capacity", Type: TypeNumber, Bound: Positive, Doc: "Rate per unit drawdown (gal/min per ft, or L/s per m); default worked from the rate and levels.", Example: 11.5},
+	}}
 	return &TableSpec{Title: "tremie well file", Doc: "One groundwater well as built (or planned): units, construction, lithology, water levels. Depths are below ground surface in the file's depth unit; a height above ground is a negative depth.", Keys: []KeySpec{
 		{Name: "units", Type: TypeTable, Required: true, Doc: units.Doc, Table: units},
 		{Name: "well", Type: TypeTable, Required: true, Doc: well.Doc, Table: well},
@@ -250,6 +259,7 @@ func wellFile() *TableSpec {
 		{Name: "water_level", Type: TypeTables, Doc: water.Doc, Table: water},
 		{Name: "measuring_point", Type: TypeTable, Doc: measuringPoint.Doc, Table: measuringPoint},
 		{Name: "pump", Type: TypeTable, Doc: pump.Doc, Table: pump},
+		{Name: "pumping_test", Type: TypeTable, Doc: pumpingTest.Doc, Table: pumpingTest},
 		{Name: "surface", Type: TypeTable, Doc: surface.Doc, Table: surface},
 		{Name: "waiver", Type: TypeTables, Doc: waiver.Doc, Table: waiver},
 		{Name: "orientation", Type: TypeTable, Doc: orientation.Doc, Table: orientation},

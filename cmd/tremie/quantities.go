@@ -214,6 +214,9 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 	for _, v := range wq.Volumes {
 		fmt.Fprintf(w, "  well volume, %s: %s\n", v.String, wellVolumeLine(v, u))
 	}
+	if line := screenFlowLine(r.Well); line != "" {
+		fmt.Fprintf(w, "  screens: %s\n", line)
+	}
 	for _, fd := range wq.Findings {
 		fmt.Fprintf(w, "  %s %s (line %d): %s\n", fd.Label(), fd.Rule, fd.Line, fd.Message)
 	}
@@ -238,6 +241,33 @@ func mixLine(row quantity.Row, u schema.Units) string {
 		s += fmt.Sprintf("; measured %s %s (%+.1f %%)", schema.TrimFloat(got, 2), unit, (row.Fill.Density/d-1)*100)
 	}
 	return s
+}
+
+// screenFlowLine is a supply well's screen arithmetic at its pumping
+// rate and its specific capacity, or "".
+func screenFlowLine(wl *schema.Well) string {
+	u := wl.Units
+	var parts []string
+	if f, ok := quantity.Entrance(wl); ok {
+		area, aunit := f.OpenArea/(schema.MetresPerFoot*schema.MetresPerFoot), "ft2"
+		vel, vunit := f.Velocity/schema.MetresPerFoot, "ft/s"
+		if !u.Imperial() {
+			area, aunit, vel, vunit = f.OpenArea, "m2", f.Velocity*100, "cm/s"
+		}
+		capacity, qunit := schema.FlowIn(f.Capacity, u)
+		rate, _ := schema.FlowIn(f.Rate, u)
+		which := "tested"
+		if f.Design {
+			which = "design"
+		}
+		parts = append(parts, fmt.Sprintf("open area %s %s (half of it effective), transmitting %s %s at 0.1 ft/s (Driscoll 1986); entrance velocity %s %s at the %s rate of %s %s",
+			quantity.Number(area), aunit, quantity.Number(capacity), qunit, quantity.Number(vel), vunit, which, schema.TrimFloat(rate, 1), qunit))
+	}
+	if pt := wl.PumpingTest; pt != nil && pt.SpecificCapacity > 0 {
+		sc, qunit := schema.FlowIn(pt.SpecificCapacity*float64(schema.LengthFrom(1, u.Depth)), u)
+		parts = append(parts, fmt.Sprintf("specific capacity %s %s per %s of drawdown", quantity.Number(sc), qunit, u.Depth))
+	}
+	return strings.Join(parts, "; ")
 }
 
 // wellVolumeLine is one string's well and purge volumes.

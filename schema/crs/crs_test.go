@@ -193,3 +193,24 @@ func TestTransverseMercatorSnyderExample(t *testing.T) {
 	near(t, "x", x, 127106.5, 0.05)
 	near(t, "y", y, 4484124.4, 0.05)
 }
+
+// A published State Plane pair through NGS's NCAT: a section corner in
+// South Dakota North at N 735056.25 ftUS, E 1002231.06 ftUS (NAD 83(2011),
+// the same projection as EPSG:32134 in US survey feet) is UTM zone 13
+// N 5071141.376 m, E 594138.761 m (J. Mahun, Coordinate Systems self
+// study, question 1). Through longitude and latitude both ways: 1 cm.
+func TestStatePlaneToUTMPublishedPair(t *testing.T) {
+	sd, _ := Lookup(32134)
+	utm, _ := Lookup(26913)
+	ft := USSurveyFoot.Metres
+	lon, lat, err := sd.ToLonLat(1002231.06*ft, 735056.25*ft)
+	if err != nil {
+		t.Fatal(err)
+	}
+	e, n, err := utm.FromLonLat(lon, lat)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "UTM E", e, 594138.761, 0.01)
+	near(t, "UTM N", n, 5071141.376, 0.01)
+}

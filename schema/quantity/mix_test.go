@@ -70,3 +70,36 @@ func TestWellVolumeUSGS(t *testing.T) {
 		t.Errorf("dry well: %+v", vs)
 	}
 }
+
+// Entrance velocity by hand (Driscoll, Groundwater and Wells, ch. 13:
+// at most 0.1 ft/s through the effective open area, taken as half the
+// screen's): 10 ft of 6-in screen (OD 6.625 in) with 10 % open area has
+// pi x 6.625/12 x 10 = 17.345 ft2 of surface, 1.7345 ft2 open, 0.86723
+// ft2 effective; it transmits 0.086723 ft3/s = 38.92 gal/min at 0.1 ft/s
+// (1 ft3/s = 448.83 gal/min, NIST HB 44); at 50 gal/min water enters at
+// 0.11140 ft3/s / 0.86723 ft2 = 0.1285 ft/s.
+func TestEntranceVelocity(t *testing.T) {
+	w := imperial()
+	hole(w, 0, ft(40), in(12))
+	str(w, "main", ft(-1), ft(30), ft(40), pipe(in(6.625), in(6.065)))
+	for i := range w.Strings[0].Sections {
+		if w.Strings[0].Sections[i].Kind == schema.ScreenSection {
+			w.Strings[0].Sections[i].OpenArea = 0.10
+		}
+	}
+	if _, ok := Entrance(w); ok {
+		t.Error("no pumping test, yet a flow")
+	}
+	w.PumpingTest = &schema.PumpingTest{Rate: schema.FlowFrom(50, w.Units)}
+	f, ok := Entrance(w)
+	if !ok {
+		t.Fatal("no flow")
+	}
+	ft2 := schema.MetresPerFoot * schema.MetresPerFoot
+	near(t, "open ft2", f.OpenArea/ft2, 1.7345, 1e-4)
+	near(t, "capacity gal/min", f.Capacity/schema.CubicMetresPerSecondPerGPM, 38.92, 1e-3)
+	near(t, "velocity ft/s", f.Velocity/schema.MetresPerFoot, 0.1285, 1e-3)
+	if f.Design {
+		t.Error("tested rate taken as the design rate")
+	}
+}

@@ -39,8 +39,9 @@ type Rule struct {
 	Source   string   // where its threshold or requirement comes from
 	Params   []Param  // thresholds a profile may set
 	// Reconcile marks a rule that compares what was placed (amounts,
-	// tags) with the calculated quantities: the quantities report runs
-	// these rules alone, with the project's yields.
+	// tags) with the calculated quantities, or whose finding makes those
+	// quantities wrong (a unit slip): the quantities report runs these
+	// rules alone, with the project's yields.
 	Reconcile bool
 	Run       func(*Pass)
 	// Purposes are the well purposes the rule applies to by default; nil

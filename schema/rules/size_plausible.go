@@ -43,7 +43,9 @@ func init() {
 			Doc:    "largest plausible diameter of a drilled hole or a pipe",
 			Source: "common practice: 120 in (3 m), beyond large-diameter bucket-auger and caisson wells",
 		}},
-		Run: runSizePlausible,
+		// The quantities report runs it too: a slip there orders hundreds of bags.
+		Reconcile: true,
+		Run:       runSizePlausible,
 	})
 }
 

@@ -1,0 +1,62 @@
+package quantity
+
+import (
+	"math"
+
+	"github.com/tremie-dev/tremie/schema"
+)
+
+// EntranceVelocityLimit is the largest velocity at which water should
+// enter a supply well's screen, in m/s: 0.1 ft/s (3 cm/s), F. G. Driscoll,
+// Groundwater and Wells (2nd ed., 1986), chapter 13 (screen selection).
+const EntranceVelocityLimit = 0.1 * schema.MetresPerFoot
+
+// EffectiveOpenFraction is the share of a screen's open area that passes
+// water once the pack grains lie against it: about half (Driscoll,
+// Groundwater and Wells, chapter 13; from memory).
+const EffectiveOpenFraction = 0.5
+
+// ScreenFlow is the arithmetic of a supply well's screens at its pumping
+// rate, SI units.
+type ScreenFlow struct {
+	OpenArea  float64 // m2: outer surface x open fraction, every screen
+	Effective float64 // m2: OpenArea x EffectiveOpenFraction
+	// Capacity is the rate the screens transmit at EntranceVelocityLimit
+	// through the effective open area, m3/s.
+	Capacity float64
+	Rate     float64 // m3/s: the design rate, else the tested one
+	Design   bool    // Rate is the design rate
+	Velocity float64 // m/s: Rate / Effective
+}
+
+// Entrance works out the screens' open area, transmitting capacity and
+// entrance velocity; false unless the well records a pumping rate and
+// every screen its open area.
+func Entrance(w *schema.Well) (ScreenFlow, bool) {
+	pt := w.PumpingTest
+	if pt == nil || (pt.Rate <= 0 && pt.DesignRate <= 0) {
+		return ScreenFlow{}, false
+	}
+	var f ScreenFlow
+	scr := w.Screens()
+	if len(scr) == 0 {
+		return ScreenFlow{}, false
+	}
+	for _, s := range scr {
+		sec := s.Section
+		if sec.OpenArea <= 0 || sec.Pipe.OD <= 0 {
+			return ScreenFlow{}, false
+		}
+		f.OpenArea += math.Pi * sec.Pipe.OD.Metres() * float64(sec.Thickness()) * sec.OpenArea
+	}
+	f.Effective = f.OpenArea * EffectiveOpenFraction
+	f.Capacity = f.Effective * EntranceVelocityLimit
+	f.Rate, f.Design = pt.DesignRate, true
+	if f.Rate <= 0 {
+		f.Rate, f.Design = pt.Rate, false
+	}
+	if f.Effective > 0 {
+		f.Velocity = f.Rate / f.Effective
+	}
+	return f, true
+}

@@ -1,0 +1,51 @@
+package rules
+
+import (
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
+)
+
+// supplyPurposes are the wells pumped for supply, whose screens are sized
+// for a pumping rate.
+var supplyPurposes = map[schema.Purpose]bool{
+	schema.Domestic: true, schema.PublicSupply: true, schema.Industrial: true, schema.Irrigation: true,
+}
+
+func init() {
+	register(&Rule{
+		ID:    "ENTRANCE-VELOCITY",
+		Title: "Water enters a supply well's screen slowly enough",
+		Doc: "For a supply well (domestic, public-supply, industrial, irrigation) that records a pumping " +
+			"rate ([pumping_test] design_rate, else rate) and the open area of every screen, the rate over " +
+			"the effective open area (half the screens' open area, the rest blocked by pack grains) must not " +
+			"exceed the limit: a faster entrance velocity brings sand, encrustation and head loss.",
+		Severity: Warning,
+		Source:   "F. G. Driscoll, Groundwater and Wells (2nd ed., 1986), chapter 13: entrance velocity at most 0.1 ft/s (3 cm/s) through the effective open area",
+		Params: []Param{{Name: "limit", Kind: RatioParam, Default: 0.1,
+			Doc: "largest entrance velocity, ft/s (0.1 ft/s = 3.05 cm/s)", Source: "Driscoll (1986), ch. 13: 0.1 ft/s"}},
+		Run: runEntranceVelocity,
+	})
+}
+
+func runEntranceVelocity(p *Pass) {
+	w := p.Well
+	if !supplyPurposes[w.Purpose] {
+		return
+	}
+	f, ok := quantity.Entrance(w)
+	if !ok {
+		return
+	}
+	limit := p.Param("limit") * schema.MetresPerFoot // m/s
+	if f.Velocity <= limit*(1+1e-9) {
+		return
+	}
+	rate, unit := schema.FlowIn(f.Rate, w.Units)
+	capacity, _ := schema.FlowIn(f.Effective*limit, w.Units)
+	which := "tested"
+	if f.Design {
+		which = "design"
+	}
+	p.Reportf("pumping_test", nil, "at the %s rate of %s %s water enters the screens at %s ft/s, above %s ft/s; their effective open area transmits %s %s at that limit",
+		which, schema.TrimFloat(rate, 1), unit, schema.TrimFloat(f.Velocity/schema.MetresPerFoot, 3), schema.TrimFloat(p.Param("limit"), 3), schema.TrimFloat(capacity, 1), unit)
+}
