@@ -212,6 +212,10 @@ func (t *table) str(k string) string {
 	if !ok {
 		t.r.errAt(t.keyPath(k), "%s must be a string, not %s", k, typeName(v))
 	}
+	if len(s) > MaxText {
+		t.r.errAt(t.keyPath(k), "%s is %d bytes long; text in a well file is limited to %d", k, len(s), MaxText)
+		return s[:0]
+	}
 	return s
 }
 
@@ -442,6 +446,10 @@ func (t *table) list(k string) []*table {
 	default:
 		t.r.errAt(t.keyPath(k), "%s must be an array of tables ([[%s]]), not %s", k, stripIndex(t.keyPath(k)), typeName(v))
 		return nil
+	}
+	if len(maps) > MaxEntries {
+		t.r.errAt(fmt.Sprintf("%s[%d]", t.keyPath(k), MaxEntries), "more than %d [[%s]] tables; no well has that many, and drawing them would take minutes", MaxEntries, stripIndex(t.keyPath(k)))
+		maps = maps[:MaxEntries]
 	}
 	out := make([]*table, len(maps))
 	tables := make([]table, len(maps))

@@ -15,6 +15,12 @@ const (
 	MaxTextFile  = 8 << 20  // a well, project, profile or yields file
 	MaxImageFile = 64 << 20 // a wall image or logo, before its own checks
 	MaxNesting   = 64       // arrays and inline tables inside each other
+	// MaxEntries bounds each list of a well ([[lithology]], [[fill]],
+	// [[fill.tag]], [[water_level]], [[feature]]...): a 1,200-ft well
+	// logged foot by foot has 1,200 intervals.
+	MaxEntries = 2000
+	// MaxText bounds one text value (an ID, a description, a note).
+	MaxText = 4000
 )
 
 // ErrNotRegular is wrapped by ReadInput's error for a FIFO, device,

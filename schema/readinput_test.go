@@ -81,3 +81,25 @@ func TestCheckNesting(t *testing.T) {
 		t.Errorf("deep arrays: %v after %v", err, time.Since(start))
 	}
 }
+
+// TestCountAndTextLimits: valid but absurd input (ten thousand water
+// levels, an ID of ten thousand characters) is refused with a position
+// instead of taking minutes to draw.
+func TestCountAndTextLimits(t *testing.T) {
+	head := "[units]\ndepth = \"ft\"\ndiameter = \"in\"\n[well]\nid = \"A\"\npurpose = \"monitoring\"\ntotal_depth = 10.0\n[[borehole]]\ntop = 0.0\nbottom = 10.0\ndiameter = 8.0\n"
+	var b strings.Builder
+	b.WriteString(head)
+	for i := 0; i < 10000; i++ {
+		b.WriteString("[[water_level]]\ndepth = 5.0\n")
+	}
+	_, err := Load("many.toml", []byte(b.String()))
+	// The 2,001st [[water_level]] opens line 12 + 2 x 2000.
+	if err == nil || !strings.Contains(err.Error(), "many.toml:4012") || !strings.Contains(err.Error(), "more than 2000 [[water_level]]") {
+		t.Errorf("10,000 water levels: %v", err)
+	}
+	long := strings.Replace(head, "id = \"A\"", "id = \""+strings.Repeat("W", 10000)+"\"", 1)
+	_, err = Load("long.toml", []byte(long))
+	if err == nil || !strings.Contains(err.Error(), "long.toml:5") || !strings.Contains(err.Error(), "limited to 4000") {
+		t.Errorf("10,000-character ID: %v", err)
+	}
+}

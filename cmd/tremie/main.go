@@ -40,7 +40,11 @@ func register(c *command) { commands[c.name] = c }
 // summaries and the caution are still printed.
 var quiet bool
 
-func main() { os.Exit(run(os.Args[1:], os.Stdout, os.Stderr)) }
+func main() {
+	stdout, stderr := terminalSafe()
+	stopOnSignal(stderr)
+	os.Exit(exitStatus(run(os.Args[1:], stdout, stderr)))
+}
 
 func run(args []string, stdout, stderr io.Writer) int {
 	quiet = false
@@ -91,8 +95,14 @@ const Version = "0.1.0"
 // as the Go toolchain recorded it (go build and go install record it from
 // a git checkout; go run does not).
 func versionLine() string {
+	info, _ := debug.ReadBuildInfo()
+	return versionOf(info)
+}
+
+// versionOf is versionLine for the build information given (nil for none).
+func versionOf(info *debug.BuildInfo) string {
 	commit, modified, when := "", false, ""
-	if info, ok := debug.ReadBuildInfo(); ok {
+	if info != nil {
 		for _, s := range info.Settings {
 			switch s.Key {
 			case "vcs.revision":

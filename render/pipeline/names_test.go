@@ -49,3 +49,26 @@ func TestAssignNamesDedupes(t *testing.T) {
 		}
 	}
 }
+
+// TestAssignNamesReservesSheetNames: a well named like another well's
+// second sheet or feature summary gets a name of its own, in whichever
+// order the two come.
+func TestAssignNamesReservesSheetNames(t *testing.T) {
+	for _, ids := range [][]string{{"TWO", "TWO-sheet1"}, {"TWO-sheet1", "TWO"}, {"BR", "BR-features-page2"}} {
+		var wells []*Well
+		for i, id := range ids {
+			wells = append(wells, &Well{Input: Input{Path: string(rune('a'+i)) + ".toml"}, Well: &schema.Well{ID: id}})
+		}
+		got := AssignNames(wells)
+		short, long := wells[0], wells[1]
+		if len(ids[0]) > len(ids[1]) {
+			short, long = long, short
+		}
+		if got[short] != short.Well.ID {
+			t.Errorf("%v: %s renamed to %q", ids, short.Well.ID, got[short])
+		}
+		if got[long] != long.Well.ID+"-2" {
+			t.Errorf("%v: %s named %q, want %q", ids, long.Well.ID, got[long], long.Well.ID+"-2")
+		}
+	}
+}

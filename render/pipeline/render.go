@@ -1,6 +1,8 @@
 package pipeline
 
 import (
+	"crypto/sha256"
+	"encoding/hex"
 	"errors"
 	"fmt"
 	"os"
@@ -44,6 +46,8 @@ type Rendered struct {
 	// Err is why the well was not drawn: an *OutputError when a file
 	// could not be written, else an input error.
 	Err error
+
+	written []incremental.Output // what the cache records of the outputs
 }
 
 // RenderReport is the outcome of a render run.
@@ -93,6 +97,8 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 	}
 	defer lessEagerGC()()
 	rep := &RenderReport{}
+	// Temporary files of runs killed before they could clean up.
+	out.SweepTemps(r.OutDir)
 	cache, err := incremental.Load(r.OutDir)
 	if err != nil {
 		rep.Warnings = append(rep.Warnings, err)
@@ -144,11 +150,7 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 			cache.Forget(w.Key)
 			return rd, batch.Failed, err
 		}
-		rel := make([]string, len(rd.Outputs))
-		for k, o := range rd.Outputs {
-			rel[k] = relTo(r.OutDir, o)
-		}
-		cache.RecordFrom(w.Key, relTo(r.OutDir, w.Path), hash, rel)
+		cache.RecordOutputs(w.Key, relTo(r.OutDir, w.Path), hash, rd.written)
 		w.Well, w.Quantities = nil, nil // drawn: keep only what the report prints
 		return rd, batch.Done, nil
 	})
@@ -168,7 +170,11 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 	return rep, nil
 }
 
-// draw lays out one prepared well and writes it in every format.
+// draw lays out one prepared well, encodes it in every format (with its
+// wall-feature summary) and writes every file of the well together: all
+// are staged beside their destinations first, and only when every one is
+// staged are they renamed into place, so that a failure part-way leaves
+// the well's old outputs as they were, none of them mixed with new ones.
 func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt RenderOptions) error {
 	w := rd.Well
 	doc, err := w.Layout(LayoutOptions{Scale: opt.Scale, Date: r.SourceDate, Issue: rd.Issue})
@@ -176,52 +182,115 @@ func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt Rend
 		return err
 	}
 	rd.Sheets = len(doc.Pages)
+	var files []pending
+	counts := map[string]int{} // sheet files per extension, for the stale-sheet sweep
 	for _, f := range opt.Formats {
-		files, err := f.Encode(doc, out.EncodeOptions{DPI: opt.DPI})
+		enc, err := f.Encode(doc, out.EncodeOptions{DPI: opt.DPI})
 		if err != nil {
 			return &OutputError{fmt.Errorf("%s: %w", w.Path, err)}
 		}
-		for i, data := range files {
+		for i, data := range enc {
 			name := base + f.Ext
-			if len(files) > 1 {
+			if len(enc) > 1 {
 				name = fmt.Sprintf("%s-sheet%d%s", base, i+1, f.Ext)
 			}
-			if err := writeOwned(r.OutDir, name, data, cache, opt.Force); err != nil {
-				return err
-			}
-			rd.Outputs = append(rd.Outputs, filepath.Join(r.OutDir, name))
+			files = append(files, pending{name, data})
 		}
 		if f.PerSheet {
-			removeStaleSheets(r.OutDir, base, f.Ext, len(files), cache)
+			counts[f.Ext] = len(enc)
 		}
 	}
-	return r.drawFeatures(rd, base, cache, opt)
+	feats, err := r.featureFiles(w, base, opt)
+	if err != nil {
+		return err
+	}
+	files = append(files, feats...)
+	if err := commitAll(r.OutDir, files, cache, opt.Force); err != nil {
+		return err
+	}
+	for _, f := range files {
+		rd.Outputs = append(rd.Outputs, filepath.Join(r.OutDir, f.name))
+		sum := sha256.Sum256(f.data)
+		rd.written = append(rd.written, incremental.Output{Rel: f.name, Size: int64(len(f.data)), Sum: hex.EncodeToString(sum[:])})
+	}
+	for _, f := range opt.Formats {
+		if f.PerSheet {
+			removeStaleSheets(r.OutDir, base, f.Ext, counts[f.Ext], cache)
+		}
+	}
+	return nil
 }
 
-// drawFeatures writes the well's wall-feature summary beside its sheets
-// as BASE-features.EXT (BASE-features-pageN.EXT for several pages), when
-// it has features.
-func (r *Run) drawFeatures(rd *Rendered, base string, cache *incremental.Cache, opt RenderOptions) error {
-	w := rd.Well
+// pending is an encoded output not yet written.
+type pending struct {
+	name string
+	data []byte
+}
+
+// featureFiles encodes the well's wall-feature summary, when it has
+// features, as BASE-features.EXT (BASE-features-pageN.EXT for several
+// pages).
+func (r *Run) featureFiles(w *Well, base string, opt RenderOptions) ([]pending, error) {
 	pw, ph := portrait(w.Setting.Page)
 	doc := features.WellSummary(w.Path, w.Well, pw, ph, r.SourceDate)
 	if doc == nil {
-		return nil
+		return nil, nil
 	}
+	var files []pending
 	for _, f := range opt.Formats {
-		files, err := f.Encode(doc, out.EncodeOptions{DPI: opt.DPI})
+		enc, err := f.Encode(doc, out.EncodeOptions{DPI: opt.DPI})
 		if err != nil {
-			return &OutputError{fmt.Errorf("%s: feature summary: %w", w.Path, err)}
+			return nil, &OutputError{fmt.Errorf("%s: feature summary: %w", w.Path, err)}
 		}
-		for i, data := range files {
+		for i, data := range enc {
 			name := base + "-features" + f.Ext
-			if len(files) > 1 {
+			if len(enc) > 1 {
 				name = fmt.Sprintf("%s-features-page%d%s", base, i+1, f.Ext)
 			}
-			if err := writeOwned(r.OutDir, name, data, cache, opt.Force); err != nil {
-				return err
+			files = append(files, pending{name, data})
+		}
+	}
+	return files, nil
+}
+
+// commitAll writes files into dir all or nothing: each must be the
+// user's to replace (see writeOwned), each is staged, and only then are
+// they renamed into place.
+func commitAll(dir string, files []pending, cache *incremental.Cache, force bool) error {
+	for _, f := range files {
+		if err := mayReplace(dir, f.name, cache, force); err != nil {
+			return err
+		}
+	}
+	staged := make([]*out.Staged, 0, len(files))
+	for _, f := range files {
+		s, err := out.Stage(filepath.Join(dir, f.name), f.data)
+		if err != nil {
+			for _, done := range staged {
+				done.Abort()
 			}
-			rd.Outputs = append(rd.Outputs, filepath.Join(r.OutDir, name))
+			return &OutputError{err}
+		}
+		staged = append(staged, s)
+	}
+	for i, s := range staged {
+		if err := s.Commit(); err != nil {
+			for _, rest := range staged[i+1:] {
+				rest.Abort()
+			}
+			return &OutputError{err}
+		}
+	}
+	return nil
+}
+
+// mayReplace refuses to replace a file at dir/name that tremie did not
+// write (the cache does not know it), unless force.
+func mayReplace(dir, name string, cache *incremental.Cache, force bool) error {
+	dst := filepath.Join(dir, name)
+	if !force && !cache.Owns(name) {
+		if _, err := os.Lstat(dst); err == nil {
+			return &OutputError{fmt.Errorf("%s exists and was not written by tremie: not replaced (move it away, or use --force)", dst)}
 		}
 	}
 	return nil
@@ -231,13 +300,10 @@ func (r *Run) drawFeatures(rd *Rendered, base string, cache *incremental.Cache, 
 // tremie did not write (the cache does not know it) and force is off:
 // nothing of the user's is replaced unasked.
 func writeOwned(dir, name string, data []byte, cache *incremental.Cache, force bool) error {
-	dst := filepath.Join(dir, name)
-	if !force && !cache.Owns(name) {
-		if _, err := os.Lstat(dst); err == nil {
-			return &OutputError{fmt.Errorf("%s exists and was not written by tremie: not replaced (move it away, or use --force)", dst)}
-		}
+	if err := mayReplace(dir, name, cache, force); err != nil {
+		return err
 	}
-	if err := out.WriteFileAtomic(dst, data); err != nil {
+	if err := out.WriteFileAtomic(filepath.Join(dir, name), data); err != nil {
 		return &OutputError{err}
 	}
 	return nil

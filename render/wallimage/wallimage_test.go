@@ -6,6 +6,7 @@ import (
 	"hash/crc32"
 	"image"
 	"image/color"
+	"image/jpeg"
 	"image/png"
 	"os"
 	"path/filepath"
@@ -13,6 +14,7 @@ import (
 	"testing"
 
 	"github.com/tremie-dev/tremie/schema"
+	"golang.org/x/image/tiff"
 )
 
 func demoWell(t *testing.T) *schema.Well {
@@ -135,5 +137,26 @@ func TestStrip(t *testing.T) {
 	}
 	if _, err := im.Strip(0.5, 0.4, 20, 30); err == nil {
 		t.Error("inverted strip accepted")
+	}
+}
+
+// TIFF and JPEG read as well as PNG, each at its own size.
+func TestDecodeTIFFAndJPEG(t *testing.T) {
+	src := image.NewRGBA(image.Rect(0, 0, 36, 20))
+	var tb, jb bytes.Buffer
+	if err := tiff.Encode(&tb, src, nil); err != nil {
+		t.Fatal(err)
+	}
+	if err := jpeg.Encode(&jb, src, nil); err != nil {
+		t.Fatal(err)
+	}
+	for name, data := range map[string][]byte{"tiff": tb.Bytes(), "jpeg": jb.Bytes()} {
+		im, err := Decode(data)
+		if err != nil {
+			t.Fatalf("%s: %v", name, err)
+		}
+		if im.Format != name || im.Width != 36 || im.Height != 20 {
+			t.Errorf("%s read as %s %d×%d", name, im.Format, im.Width, im.Height)
+		}
 	}
 }

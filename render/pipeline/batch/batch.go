@@ -5,6 +5,7 @@
 package batch
 
 import (
+	"errors"
 	"fmt"
 	"io"
 	"runtime"
@@ -91,6 +92,11 @@ func Run[I, T any](items []I, opts Options, fn Func[I, T]) ([]Result[T], Summary
 				if i >= len(items) {
 					return
 				}
+				if interrupted.Load() {
+					var zero T
+					results[i] = Result[T]{Value: zero, Outcome: Failed, Err: ErrInterrupted}
+					continue
+				}
 				results[i] = call(fn, i, items[i])
 				bar.add()
 			}
@@ -152,3 +158,17 @@ func (s Summary) Format(done string) string {
 }
 
 func (s Summary) String() string { return s.Format("done") }
+
+// ErrInterrupted is the error of every item a run did not start because
+// it was interrupted (Ctrl-C or SIGTERM).
+var ErrInterrupted = errors.New("not started: the run was interrupted")
+
+var interrupted atomic.Bool
+
+// Interrupt makes every running batch finish the items under way and
+// start no more; their callers then save what was done (the render
+// cache, for one) and return. Called from the command's signal handler.
+func Interrupt() { interrupted.Store(true) }
+
+// Interrupted reports whether Interrupt was called.
+func Interrupted() bool { return interrupted.Load() }

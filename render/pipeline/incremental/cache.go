@@ -18,7 +18,7 @@ import (
 const FileName = ".tremie-cache.json"
 
 // format is the cache file's layout version; a different one is ignored.
-const format = 1
+const format = 2
 
 // Cache is the record of the last run in one output directory. Its methods
 // are safe for concurrent use by a batch's workers.
@@ -30,6 +30,9 @@ type Cache struct {
 	orphans map[string]bool // outputs no well claims any more
 	files   map[string]bool // other outputs tremie wrote here (a book, a table)
 	dirty   bool
+
+	journal       *os.File // see journal.go; opened on the first record
+	journalFailed bool
 }
 
 // entry is what was drawn for one well.
@@ -39,6 +42,37 @@ type entry struct {
 	// Source is the well file, relative to the output directory: a well
 	// left out of a run is stale only when this file is gone.
 	Source string `json:"source,omitempty"`
+	// Sizes and Sums are each output's length and SHA-256 as written: an
+	// output whose size has changed since (a file truncated by a crash or
+	// by hand) is drawn again.
+	Sizes map[string]int64  `json:"sizes,omitempty"`
+	Sums  map[string]string `json:"sums,omitempty"`
+}
+
+// Output is one file written for a well, as the cache records it.
+type Output struct {
+	Rel  string // relative to the output directory
+	Size int64
+	Sum  string // hex SHA-256 of the bytes written
+}
+
+// RecordOutputs is RecordFrom with each output's size and checksum, so
+// that a damaged output is noticed on the next run.
+func (c *Cache) RecordOutputs(key, source, hash string, outs []Output) {
+	rel := make([]string, len(outs))
+	sizes := make(map[string]int64, len(outs))
+	sums := make(map[string]string, len(outs))
+	for i, o := range outs {
+		r := filepath.ToSlash(o.Rel)
+		rel[i], sizes[r], sums[r] = r, o.Size, o.Sum
+	}
+	c.RecordFrom(key, source, hash, rel)
+	c.mu.Lock()
+	e := c.entries[key]
+	e.Sizes, e.Sums = sizes, sums
+	c.entries[key] = e
+	c.appendJournal(journalLine{Key: key, Entry: &e})
+	c.mu.Unlock()
 }
 
 type fileData struct {
@@ -57,6 +91,7 @@ func Load(outdir string) (*Cache, error) {
 	path := filepath.Join(outdir, FileName)
 	data, err := os.ReadFile(path)
 	if errors.Is(err, fs.ErrNotExist) {
+		c.replayJournal() // a first run that was interrupted
 		return c, nil
 	}
 	if err != nil {
@@ -80,6 +115,7 @@ func Load(outdir string) (*Cache, error) {
 	for _, f := range fd.Files {
 		c.files[f] = true
 	}
+	c.replayJournal()
 	return c, nil
 }
 
@@ -143,6 +179,7 @@ func (c *Cache) Forget(key string) {
 		}
 		delete(c.entries, key)
 		c.dirty = true
+		c.appendJournal(journalLine{Key: key, Forget: true})
 	}
 }
 
@@ -241,6 +278,7 @@ func (c *Cache) Save() error {
 		return fmt.Errorf("cache: %w", err)
 	}
 	c.dirty = false
+	c.closeJournal()
 	return nil
 }
 

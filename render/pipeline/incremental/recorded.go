@@ -7,7 +7,8 @@ import (
 )
 
 // Recorded returns the outputs recorded for key when they were drawn from
-// the same hash and are all still on disk. It serves callers that learn a
+// the same hash and are all still on disk, each of the size it was
+// written with (when that was recorded). It serves callers that learn a
 // well's outputs only by drawing it (a multi-sheet well has one file per
 // sheet), where Fresh needs them beforehand.
 func (c *Cache) Recorded(key, hash string) ([]string, bool) {
@@ -18,7 +19,11 @@ func (c *Cache) Recorded(key, hash string) ([]string, bool) {
 		return nil, false
 	}
 	for _, o := range e.Outputs {
-		if _, err := os.Stat(filepath.Join(c.dir, filepath.FromSlash(o))); err != nil {
+		st, err := os.Stat(filepath.Join(c.dir, filepath.FromSlash(o)))
+		if err != nil || !st.Mode().IsRegular() {
+			return nil, false
+		}
+		if size, ok := e.Sizes[o]; ok && st.Size() != size {
 			return nil, false
 		}
 	}

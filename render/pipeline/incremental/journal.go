@@ -1,0 +1,89 @@
+package incremental
+
+import (
+	"bufio"
+	"bytes"
+	"encoding/json"
+	"os"
+	"path/filepath"
+)
+
+// JournalName is the file beside the cache where each well's record is
+// appended as soon as its outputs are written. The cache itself is saved
+// once at the end of a run; if the run is interrupted (Ctrl-C, kill -9,
+// a crash) the journal still holds every well it finished, and the next
+// run replays it, so that only what was missing is drawn again.
+const JournalName = ".tremie-cache.journal"
+
+// journalLine is one record: a well drawn (Entry set) or forgotten.
+type journalLine struct {
+	Key    string `json:"key"`
+	Entry  *entry `json:"entry,omitempty"`
+	Forget bool   `json:"forget,omitempty"`
+}
+
+// appendJournal writes one line under c.mu. A journal that cannot be
+// written only loses the interruption safety, not the run, so errors are
+// dropped; the cache is still saved at the end.
+func (c *Cache) appendJournal(l journalLine) {
+	if c.journal == nil {
+		if c.journalFailed {
+			return
+		}
+		if err := os.MkdirAll(c.dir, 0o755); err != nil {
+			c.journalFailed = true
+			return
+		}
+		f, err := os.OpenFile(filepath.Join(c.dir, JournalName), os.O_CREATE|os.O_WRONLY|os.O_APPEND, 0o644)
+		if err != nil {
+			c.journalFailed = true
+			return
+		}
+		c.journal = f
+	}
+	b, err := json.Marshal(l)
+	if err != nil {
+		return
+	}
+	c.journal.Write(append(b, '\n'))
+}
+
+// replayJournal applies a journal left by an interrupted run; a torn
+// last line (the run died while writing it) is ignored.
+func (c *Cache) replayJournal() {
+	data, err := os.ReadFile(filepath.Join(c.dir, JournalName))
+	if err != nil || len(data) == 0 {
+		return
+	}
+	sc := bufio.NewScanner(bytes.NewReader(data))
+	sc.Buffer(make([]byte, 0, 64*1024), 16<<20)
+	for sc.Scan() {
+		var l journalLine
+		if json.Unmarshal(sc.Bytes(), &l) != nil || l.Key == "" {
+			continue
+		}
+		if l.Forget {
+			if e, ok := c.entries[l.Key]; ok {
+				for _, o := range e.Outputs {
+					c.orphans[o] = true
+				}
+				delete(c.entries, l.Key)
+			}
+		} else if l.Entry != nil {
+			for _, o := range l.Entry.Outputs {
+				delete(c.orphans, o)
+			}
+			c.entries[l.Key] = *l.Entry
+		}
+		c.dirty = true
+	}
+}
+
+// closeJournal ends the journal once the cache holds everything in it.
+func (c *Cache) closeJournal() {
+	if c.journal != nil {
+		c.journal.Close()
+		c.journal = nil
+	}
+	os.Remove(filepath.Join(c.dir, JournalName))
+}
