@@ -155,6 +155,9 @@ func (r *reader) well(root *table) *Well {
 	for _, t := range root.list("water_level") {
 		w.WaterLevels = append(w.WaterLevels, r.waterLevel(t, w))
 	}
+	for _, t := range root.list("sample") {
+		w.Samples = append(w.Samples, r.sample(t, w))
+	}
 	if t := root.sub("surface"); t != nil {
 		w.Surface = r.surface(t, w.Units)
 	}
@@ -420,7 +423,7 @@ func (r *reader) fill(t *table, w *Well) Fill {
 	if f.GrainMin > 0 && f.GrainMax > 0 && f.GrainMin > f.GrainMax {
 		r.errAt(t.keyPath("grain_max"), "grain_max is smaller than grain_min")
 	}
-	r.gradingCurve(t, &f)
+	r.gradingCurve(t, &f.D10, &f.D30, &f.D60)
 	f.Method = Placement(t.oneOf("method"))
 	f.Within = t.str("within")
 	if f.Within != "" {
@@ -582,12 +585,12 @@ func (r *reader) surface(t *table, u Units) Surface {
 // gradingCurve reads d10, d30 and d60 (mm, always), which must not
 // decrease: by definition 10 % of the mass is finer than d10, 30 % than
 // d30, 60 % than d60.
-func (r *reader) gradingCurve(t *table, f *Fill) {
+func (r *reader) gradingCurve(t *table, d10, d30, d60 *Diameter) {
 	prev, prevKey := Diameter(0), ""
 	for _, k := range []struct {
 		name string
 		to   *Diameter
-	}{{"d10", &f.D10}, {"d30", &f.D30}, {"d60", &f.D60}} {
+	}{{"d10", d10}, {"d30", d30}, {"d60", d60}} {
 		v, ok := t.positive(k.name)
 		if !ok {
 			continue

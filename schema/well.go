@@ -47,6 +47,7 @@ type Well struct {
 	OpenHoles   []OpenHole
 	Lithology   []Layer
 	WaterLevels []WaterLevel
+	Samples     []FormationSample // formation sieve analyses (sample.go)
 	Surface     Surface
 	Waivers     []Waiver
 	// MeasuringPoint says what water levels and the surveyed measuring-

@@ -166,6 +166,13 @@ func wellFile() *TableSpec {
 		{Name: "measured", Type: TypeDateTime, Doc: "When measured: a date or a local date-time.", Example: "2026-03-20T08:15:00"},
 		{Name: "kind", Type: TypeString, Enum: []string{string(FirstEncountered), string(Static), string(Pumping)}, Doc: "What the level is; default static.", Example: "static"},
 	}}
+	sample := &TableSpec{Doc: "A sieve analysis of the formation at one depth (ASTM D6913), for filter-pack design.", Keys: []KeySpec{
+		{Name: "depth", Type: TypeNumber, Required: true, Bound: NonNegative, Unit: UnitDepth, Doc: "Depth the sample was taken at, below ground.", Example: 30.0},
+		{Name: "d10", Type: TypeNumber, Bound: Positive, Unit: UnitGrain, Doc: "Grain size 10 % of the sample is finer than, by mass.", Example: 0.12},
+		{Name: "d30", Type: TypeNumber, Bound: Positive, Unit: UnitGrain, Doc: "Grain size 30 % of the sample is finer than; the pack's d30 is designed from it.", Example: 0.25},
+		{Name: "d60", Type: TypeNumber, Bound: Positive, Unit: UnitGrain, Doc: "Grain size 60 % of the sample is finer than.", Example: 0.40},
+		{Name: "note", Type: TypeString, Doc: "Free text.", Example: "split spoon, fine to medium sand"},
+	}}
 	protective := &TableSpec{Doc: "Stick-up: the protective casing.", Keys: joinKeys(
 		interval("protective casing", true, -3.0, 2.0),
 		[]KeySpec{
@@ -257,6 +264,7 @@ func wellFile() *TableSpec {
 		{Name: "open_hole", Type: TypeTables, Doc: openHole.Doc, Table: openHole},
 		{Name: "lithology", Type: TypeTables, Doc: layer.Doc, Table: layer},
 		{Name: "water_level", Type: TypeTables, Doc: water.Doc, Table: water},
+		{Name: "sample", Type: TypeTables, Doc: sample.Doc, Table: sample},
 		{Name: "measuring_point", Type: TypeTable, Doc: measuringPoint.Doc, Table: measuringPoint},
 		{Name: "pump", Type: TypeTable, Doc: pump.Doc, Table: pump},
 		{Name: "pumping_test", Type: TypeTable, Doc: pumpingTest.Doc, Table: pumpingTest},

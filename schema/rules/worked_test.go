@@ -512,3 +512,61 @@ func BenchmarkCheck(b *testing.B) {
 		Check(w, nil)
 	}
 }
+
+// Filter-pack design against the formation's sieve analysis (ASTM D5092
+// §6.3.3.1, from memory: the pack's d30 about 4 to 6 times the
+// formation's). By hand: 1.2 mm / 0.25 mm = 4.8, inside 4 to 6;
+// 1.2 mm / 0.15 mm = 8.0, above 6, so the pack is too coarse for it.
+func TestPackFormationRatioWorked(t *testing.T) {
+	well := func(formationD30 string) *schema.Well {
+		pack := "[[fill]]\ntop = 23.0\nbottom = 36.0\nmaterial = \"filter-pack\"\nd30 = 1.2\n"
+		sample := "[[sample]]\ndepth = 30.0\nd30 = " + formationD30 + "\n"
+		return load(t, monitoringWell("ft", "8.25", "36.0", pack+fill("20.0", "23.0", "bentonite-chips")+fill("0.0", "20.0", "neat-cement")+sample))
+	}
+	w := well("0.25")
+	if got := PackFormationRatio(&w.Fills[0], w.Samples[0]); math.Abs(got-4.8) > 1e-9 {
+		t.Errorf("1.2/0.25 = %v, want 4.8", got)
+	}
+	if fs := findings(w, nil, "PACK-FORMATION-RATIO"); len(fs) != 0 {
+		t.Errorf("ratio 4.8 flagged: %s", fs[0].Message)
+	}
+	w = well("0.15")
+	if got := PackFormationRatio(&w.Fills[0], w.Samples[0]); math.Abs(got-8.0) > 1e-9 {
+		t.Errorf("1.2/0.15 = %v, want 8.0", got)
+	}
+	fs := findings(w, nil, "PACK-FORMATION-RATIO")
+	if len(fs) != 1 || !strings.Contains(fs[0].Message, "8 times") || !strings.Contains(fs[0].Message, "too coarse") {
+		t.Errorf("ratio 8.0: %+v", fs)
+	}
+	// A supply well is not judged by the monitoring-well standard.
+	w = well("0.15")
+	w.Purpose = schema.PublicSupply
+	if fs := findings(w, nil, "PACK-FORMATION-RATIO"); len(fs) != 0 {
+		t.Errorf("public-supply well judged by ASTM D5092: %s", fs[0].Message)
+	}
+}
+
+// The pack's uniformity coefficient Cu = d60/d10 (ASTM D2487) below 2.5
+// (UFGS 02525N). By hand: 1.1/0.45 = 2.444 passes; 1.4/0.45 = 3.111 is
+// flagged.
+func TestPackUniformityWorked(t *testing.T) {
+	well := func(d60 string) *schema.Well {
+		pack := "[[fill]]\ntop = 23.0\nbottom = 36.0\nmaterial = \"filter-pack\"\nd10 = 0.45\nd60 = " + d60 + "\n"
+		return load(t, monitoringWell("ft", "8.25", "36.0", pack+fill("20.0", "23.0", "bentonite-chips")+fill("0.0", "20.0", "neat-cement")))
+	}
+	w := well("1.1")
+	if got := UniformityCoefficient(w.Fills[0].D10, w.Fills[0].D60); math.Abs(got-2.444) > 5e-4 {
+		t.Errorf("Cu 1.1/0.45 = %v, want 2.444", got)
+	}
+	if fs := findings(w, nil, "PACK-UNIFORMITY"); len(fs) != 0 {
+		t.Errorf("Cu 2.44 flagged: %s", fs[0].Message)
+	}
+	w = well("1.4")
+	if got := UniformityCoefficient(w.Fills[0].D10, w.Fills[0].D60); math.Abs(got-3.111) > 5e-4 {
+		t.Errorf("Cu 1.4/0.45 = %v, want 3.111", got)
+	}
+	fs := findings(w, nil, "PACK-UNIFORMITY")
+	if len(fs) != 1 || !strings.Contains(fs[0].Message, "= 3.11;") {
+		t.Errorf("Cu 3.11: %+v", fs)
+	}
+}

@@ -1,0 +1,75 @@
+package rules
+
+import (
+	"github.com/tremie-dev/tremie/schema"
+)
+
+func init() {
+	register(&Rule{
+		ID:    "PACK-FORMATION-RATIO",
+		Title: "The filter pack is graded to the formation",
+		Doc: "A filter pack is designed from the sieve analysis of the formation it screens: the pack's d30 (the " +
+			"size 30 % of it by mass is finer than) about 4 to 6 times the formation's d30. A finer pack chokes " +
+			"the well's yield; a coarser one lets the formation's fines through into the well. Each [[sample]] " +
+			"with a d30 whose depth lies within a screen is compared with every filter pack beside that screen " +
+			"that gives its d30. Wells without samples or without a pack d30 are skipped.",
+		Severity: Warning,
+		Source: "ASTM D5092 (Design and Installation of Groundwater Monitoring Wells), §6.3.3.1, filter pack design: the pack's 30 % finer size " +
+			"about 4 to 6 times the formation's (from memory; not confirmed against the standard's text). " +
+			"Monitoring wells and piezometers only by default, as the standard is written for them",
+		Purposes: observationWells,
+		Params: []Param{{
+			Name: "min_ratio", Kind: RatioParam, Default: 4,
+			Doc:    "least ratio of the pack's d30 to the formation's d30",
+			Source: "ASTM D5092 §6.3.3.1: 4 (from memory)",
+		}, {
+			Name: "max_ratio", Kind: RatioParam, Default: 6,
+			Doc:    "greatest ratio of the pack's d30 to the formation's d30",
+			Source: "ASTM D5092 §6.3.3.1: 6 (from memory)",
+		}},
+		Run: runPackFormationRatio,
+	})
+}
+
+// PackFormationRatio is the filter-pack design ratio: the pack's d30 over
+// the formation's d30 (ASTM D5092); 0 when either is unknown.
+func PackFormationRatio(pack *schema.Fill, s schema.FormationSample) float64 {
+	if pack.D30 <= 0 || s.D30 <= 0 {
+		return 0
+	}
+	return float64(pack.D30 / s.D30)
+}
+
+func runPackFormationRatio(p *Pass) {
+	w := p.Well
+	lo, hi := p.Param("min_ratio"), p.Param("max_ratio")
+	for _, sc := range w.Screens() {
+		sec := sc.Section
+		samples := w.SamplesWithin(sec.Interval)
+		if len(samples) == 0 {
+			continue
+		}
+		for _, f := range p.annulusFills(p.annulusAt(mid(sec.Interval))) {
+			if !isFilterPack(f) || f.D30 <= 0 {
+				continue
+			}
+			if _, ok := overlap(f.Interval, sec.Interval); !ok {
+				continue
+			}
+			for _, s := range samples {
+				ratio := PackFormationRatio(f, s)
+				if ratio == 0 || (ratio >= lo-1e-9 && ratio <= hi+1e-9) {
+					continue
+				}
+				why := "too fine: it holds back the formation's water as well as its grains"
+				if ratio > hi {
+					why = "too coarse: the formation's fines pass through it into the well"
+				}
+				p.Reportf(key(s.Path, "d30"), []schema.Length{s.Depth, sec.Top, sec.Bottom},
+					"the filter pack at %s beside the screen of string %q has d30 = %s mm, %s times the d30 = %s mm of the formation sampled at %s; %s to %s times is the design range, so the pack is %s",
+					p.span(f.Interval), sc.String.Name, schema.TrimFloat(float64(f.D30), 3), schema.TrimFloat(ratio, 2),
+					schema.TrimFloat(float64(s.D30), 3), p.D(s.Depth), schema.TrimFloat(lo, 2), schema.TrimFloat(hi, 2), why)
+			}
+		}
+	}
+}
