@@ -227,6 +227,9 @@ func (l *layout) noteBlocks(width float64) []noteBlock {
 		body(fmt.Sprintf("%d. %s", i+1, n), draw.Regular, ink)
 	}
 	body(fmt.Sprintf("%d. Depths are below ground surface; elevations above %s. Diameters are drawn to their own scale, wider than the depth scale (see horizontal exaggeration).", len(l.w.Notes)+1, datumOr(l.w.Elevation.Datum)), draw.Regular, ink)
+	if k := l.rockKey(); k != "" {
+		body(fmt.Sprintf("%d. %s", len(l.w.Notes)+2, k), draw.Regular, ink)
+	}
 	fs := append([]rules.Finding(nil), l.in.Findings...)
 	if len(fs) == 0 {
 		return out
@@ -553,7 +556,9 @@ func (l *layout) noteItems(blocks []noteBlock, r draw.Rect, more string) []draw.
 		y += n.block.height() + 1.5
 	}
 	if more != "" {
-		items = append(items, text(r.X+bandPad, y+lineGap(sizeSmall)-2, more, draw.Italic, sizeSmall, draw.Start, alarm, "notes-continued"))
+		// Within the box even when its notes fill it.
+		by := min(y+lineGap(sizeSmall)-2, r.Bottom()-bandPad/2-draw.Descent(draw.Italic, sizeSmall))
+		items = append(items, text(r.X+bandPad, by, more, draw.Italic, sizeSmall, draw.Start, alarm, "notes-continued"))
 	}
 	return items
 }
