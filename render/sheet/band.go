@@ -426,7 +426,13 @@ func (l *layout) amountCells(row []string, w float64, font draw.FontStyle) ([][]
 	cells := make([][]string, len(row))
 	n := 1
 	for i, s := range row {
-		cells[i] = draw.Wrap(font, sizeTiny, s, amountCols[i].frac*w-3)
+		cw := amountCols[i].frac*w - 3
+		if draw.TextWidth(font, sizeTiny, s) > cw {
+			// A range too wide for its cell breaks after its dash, never
+			// inside a number ("12.6–" / "12.9 m").
+			s = strings.ReplaceAll(s, "–", "– ")
+		}
+		cells[i] = draw.Wrap(font, sizeTiny, s, cw)
 		n = max(n, len(cells[i]))
 	}
 	return cells, float64(n)*lineGap(sizeTiny) + 2
