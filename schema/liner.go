@@ -1,5 +1,7 @@
 package schema
 
+import "strings"
+
 // Liner says how a well string hangs inside an outer casing: the string's
 // top lies within the casing named HungIn, and the overlap down to that
 // casing's bottom is the lap.
@@ -89,7 +91,7 @@ func (w *Well) MeasuringPointLabel() string {
 	case m.Pipe != "":
 		for _, c := range w.Casings {
 			if c.Name == m.Pipe {
-				return "top of " + c.Label() + " casing"
+				return "top of " + c.Called()
 			}
 		}
 		return "top of " + m.Pipe + " string"
@@ -97,4 +99,13 @@ func (w *Well) MeasuringPointLabel() string {
 		return "measuring point"
 	}
 	return "top of riser"
+}
+
+// Called names the casing in a sentence: "production casing", or its
+// name alone when the name already says casing ("well casing").
+func (c Casing) Called() string {
+	if strings.Contains(strings.ToLower(c.Label()), "casing") {
+		return c.Label()
+	}
+	return c.Label() + " casing"
 }

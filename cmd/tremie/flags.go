@@ -5,6 +5,7 @@ import (
 	"flag"
 	"fmt"
 	"io"
+	"regexp"
 	"strings"
 
 	"github.com/tremie-dev/tremie/render/pipeline"
@@ -28,11 +29,15 @@ func newFlags(name string, stdout, stderr io.Writer) *cmdFlags {
 		c = &command{name: name}
 	}
 	fs := flag.NewFlagSet(name, flag.ContinueOnError)
-	fs.SetOutput(stderr)
-	fs.Usage = func() {} // printed by parse, on the right stream
+	fs.SetOutput(io.Discard) // parse prints the error and the usage, on the right stream
+	fs.Usage = func() {}
 	fs.BoolVar(&quiet, "quiet", quiet, "print no progress and no line for a well that went well")
 	return &cmdFlags{FlagSet: fs, cmd: c, stdout: stdout, stderr: stderr}
 }
+
+// twoDashes finds a long flag written with one dash in the flag
+// package's messages ("-format"), to show it as it is documented.
+var twoDashes = regexp.MustCompile(`(^|\s)-([a-z][a-z0-9-]+)`)
 
 // describing, when set, receives a command's flag set instead of the
 // command running: shell completion learns every command's flags so.
@@ -53,6 +58,7 @@ func (f *cmdFlags) parse(args []string) (operands []string, code int, ok bool) {
 				f.writeUsage(f.stdout)
 				return nil, exitOK, false
 			}
+			fmt.Fprintf(f.stderr, "tremie %s: %s\n\n", f.cmd.name, twoDashes.ReplaceAllString(err.Error(), "$1--$2"))
 			f.writeUsage(f.stderr)
 			return nil, exitUsage, false
 		}

@@ -95,8 +95,14 @@ const Version = "0.1.0"
 // as the Go toolchain recorded it (go build and go install record it from
 // a git checkout; go run does not).
 func versionLine() string {
+	info, _ := debug.ReadBuildInfo()
+	return versionOf(info)
+}
+
+// versionOf is versionLine for the build information given (nil for none).
+func versionOf(info *debug.BuildInfo) string {
 	commit, modified, when := "", false, ""
-	if info, ok := debug.ReadBuildInfo(); ok {
+	if info != nil {
 		for _, s := range info.Settings {
 			switch s.Key {
 			case "vcs.revision":

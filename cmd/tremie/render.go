@@ -81,7 +81,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 		code = worse(code, printRendered(stdout, stderr, r))
 	}
 	for _, o := range rep.Stale {
-		fmt.Fprintf(stderr, "tremie render: stale output %s: its well file is gone (not deleted)\n", filepath.Join(run.OutDir, o))
+		fmt.Fprintf(stderr, "tremie render: stale output %s: no well file produces it any more (not deleted)\n", filepath.Join(run.OutDir, o))
 	}
 	if rep.SaveErr != nil {
 		fmt.Fprintf(stderr, "tremie render: %v\n", rep.SaveErr)

@@ -1,7 +1,6 @@
 package main
 
 import (
-	"flag"
 	"fmt"
 	"io"
 	"slices"
@@ -16,29 +15,25 @@ func init() {
 		name:    "rules",
 		summary: "list the rules tremie check applies, with sources and default thresholds",
 		run:     runRules,
+		args:    "[RULE-ID...]",
 	})
 }
 
 func runRules(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("rules", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	purpose := fset.String("purpose", "", "show the thresholds in force for wells of this purpose (monitoring, public-supply, ...)")
-	fset.Usage = func() {
-		fmt.Fprintln(stderr, "usage: tremie rules [--purpose PURPOSE] [RULE-ID...]")
-		fset.PrintDefaults()
-	}
-	if err := fset.Parse(args); err != nil {
-		return exitUsage
+	fset := newFlags("rules", stdout, stderr)
+	purpose := fset.String("purpose", "", "show the thresholds in force for wells of this `purpose` (monitoring, public-supply, ...)")
+	ids, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
 	pu := schema.Purpose(*purpose)
 	if pu != "" && !slices.Contains(schema.Purposes, pu) {
-		fmt.Fprintf(stderr, "tremie rules: unknown purpose %q (one of: %s)\n", *purpose, rules.PurposeList(schema.Purposes))
-		return exitUsage
+		return fset.usageError("unknown purpose %q (one of: %s)", *purpose, rules.PurposeList(schema.Purposes))
 	}
 	list := rules.All()
-	if fset.NArg() > 0 {
+	if len(ids) > 0 {
 		list = nil
-		for _, id := range fset.Args() {
+		for _, id := range ids {
 			r, ok := rules.Lookup(strings.ToUpper(id))
 			if !ok {
 				fmt.Fprintf(stderr, "tremie rules: no rule %q (tremie rules lists them)\n", id)

@@ -1,7 +1,6 @@
 package main
 
 import (
-	"flag"
 	"fmt"
 	"io"
 	"strings"
@@ -14,25 +13,23 @@ func init() {
 		name:    "schema",
 		summary: "print the JSON Schema of a well, project, profile or yields file, for TOML editors",
 		run:     runSchema,
+		args:    "[" + strings.Join(jsonschema.Kinds, "|") + "]",
+		about:   "The kind defaults to well.",
 	})
 }
 
 func runSchema(args []string, stdout, stderr io.Writer) int {
-	fset := flag.NewFlagSet("schema", flag.ContinueOnError)
-	fset.SetOutput(stderr)
-	fset.Usage = func() {
-		fmt.Fprintf(stderr, "usage: tremie schema [%s]   (default well)\n", strings.Join(jsonschema.Kinds, "|"))
+	fset := newFlags("schema", stdout, stderr)
+	rest, code, ok := fset.parse(args)
+	if !ok {
+		return code
 	}
-	if err := fset.Parse(args); err != nil {
-		return exitUsage
-	}
-	if fset.NArg() > 1 {
-		fset.Usage()
-		return exitUsage
+	if len(rest) > 1 {
+		return fset.usageError("name at most one kind of file")
 	}
 	kind := "well"
-	if fset.NArg() == 1 {
-		kind = fset.Arg(0)
+	if len(rest) == 1 {
+		kind = rest[0]
 	}
 	b, err := jsonschema.Generate(kind)
 	if err != nil {

@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io"
 	"path/filepath"
+	"strings"
 
 	"github.com/tremie-dev/tremie/render/pipeline"
 	"github.com/tremie-dev/tremie/render/table"
@@ -81,7 +82,9 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 		// the CSV holds data only; its caution goes to the terminal
 		fmt.Fprintln(stderr, table.Caution)
 	}
+	checked := strings.Join(run.ProfileLabels(), "; ") // the check status column's thresholds
 	if *outFile == "" && defaultName == "" {
+		fmt.Fprintf(stderr, "tremie table: wells checked with %s\n", checked)
 		if _, err := stdout.Write(buf.Bytes()); err != nil {
 			return exitOutput
 		}
@@ -92,7 +95,7 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie table: %v\n", err)
 		return exitOutput
 	}
-	fmt.Fprintf(stdout, "tremie table: %s written to %s\n", what, dst)
+	fmt.Fprintf(stdout, "tremie table: %s written to %s (checked with %s)\n", what, dst, checked)
 	return code
 }
 

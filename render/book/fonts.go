@@ -4,6 +4,7 @@ import (
 	"strings"
 	"sync"
 	"unicode"
+	"unicode/utf8"
 
 	"github.com/go-pdf/fpdf"
 	"golang.org/x/image/font/gofont/gobold"
@@ -64,7 +65,7 @@ func (d *doc) SetTitle(title string, isUTF8 bool) { d.Fpdf.SetTitle(printable(ti
 
 // printable replaces the runes the Go faces cannot print.
 func printable(s string) string {
-	ok := true
+	ok := utf8.ValidString(s) // fpdf's UTF-16 conversion fails on stray bytes too
 	for _, r := range s {
 		if !faceHas(r) {
 			ok = false

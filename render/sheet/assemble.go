@@ -96,9 +96,26 @@ func (l *layout) bodyFrame() []draw.Item {
 		if h.b == "" {
 			y = b.Y + 13
 		}
+		// A sub-head too wide for its column ("m DHHN2016") takes two
+		// lines rather than losing its end.
+		sub := []string{h.b}
+		if draw.TextWidth(draw.Regular, sizeTiny, h.b) > h.col.W-3 {
+			if u, rest, ok := strings.Cut(h.b, " "); ok {
+				sub = []string{u, rest}
+				y = b.Y + 7.5
+			}
+		}
 		items = append(items, text(h.col.Center(), y, fit(h.a, draw.Bold, sizeTiny, h.col.W-3), draw.Bold, sizeTiny, draw.Middle, ink, "column-head"))
-		if h.b != "" {
-			items = append(items, text(h.col.Center(), b.Y+17, fit(h.b, draw.Regular, sizeTiny, h.col.W-3), draw.Regular, sizeTiny, draw.Middle, grey, "column-head"))
+		for k, line := range sub {
+			if line == "" {
+				continue
+			}
+			sy := b.Y + 17 - float64(len(sub)-1-k)*lineGap(sizeTiny)*0.95 + float64(len(sub)-1)*2.5
+			size := sizeTiny
+			if w := draw.TextWidth(draw.Regular, size, line); w > h.col.W-3 {
+				size = max(size*(h.col.W-3)/w, 3.5)
+			}
+			items = append(items, text(h.col.Center(), sy, fit(line, draw.Regular, size, h.col.W-3), draw.Regular, size, draw.Middle, grey, "column-head"))
 		}
 	}
 	return items

@@ -227,6 +227,9 @@ func (l *layout) noteBlocks(width float64) []noteBlock {
 		body(fmt.Sprintf("%d. %s", i+1, n), draw.Regular, ink)
 	}
 	body(fmt.Sprintf("%d. Depths are below ground surface; elevations above %s. Diameters are drawn to their own scale, wider than the depth scale (see horizontal exaggeration).", len(l.w.Notes)+1, datumOr(l.w.Elevation.Datum)), draw.Regular, ink)
+	if k := l.rockKey(); k != "" {
+		body(fmt.Sprintf("%d. %s", len(l.w.Notes)+2, k), draw.Regular, ink)
+	}
 	fs := append([]rules.Finding(nil), l.in.Findings...)
 	if len(fs) == 0 {
 		return out
@@ -423,7 +426,13 @@ func (l *layout) amountCells(row []string, w float64, font draw.FontStyle) ([][]
 	cells := make([][]string, len(row))
 	n := 1
 	for i, s := range row {
-		cells[i] = draw.Wrap(font, sizeTiny, s, amountCols[i].frac*w-3)
+		cw := amountCols[i].frac*w - 3
+		if draw.TextWidth(font, sizeTiny, s) > cw {
+			// A range too wide for its cell breaks after its dash, never
+			// inside a number ("12.6–" / "12.9 m").
+			s = strings.ReplaceAll(s, "–", "– ")
+		}
+		cells[i] = draw.Wrap(font, sizeTiny, s, cw)
 		n = max(n, len(cells[i]))
 	}
 	return cells, float64(n)*lineGap(sizeTiny) + 2
@@ -553,7 +562,9 @@ func (l *layout) noteItems(blocks []noteBlock, r draw.Rect, more string) []draw.
 		y += n.block.height() + 1.5
 	}
 	if more != "" {
-		items = append(items, text(r.X+bandPad, y+lineGap(sizeSmall)-2, more, draw.Italic, sizeSmall, draw.Start, alarm, "notes-continued"))
+		// Within the box even when its notes fill it.
+		by := min(y+lineGap(sizeSmall)-2, r.Bottom()-bandPad/2-draw.Descent(draw.Italic, sizeSmall))
+		items = append(items, text(r.X+bandPad, by, more, draw.Italic, sizeSmall, draw.Start, alarm, "notes-continued"))
 	}
 	return items
 }

@@ -212,3 +212,29 @@ func countRowStarts(p *draw.Page) int {
 	}
 	return n
 }
+
+// An amounts cell too narrow for a depth range breaks it after the dash,
+// never inside a number (common practice: a figure is never split).
+func TestAmountCellsKeepNumbersWhole(t *testing.T) {
+	l := newLayout(simpleWell(30), Inputs{}, Options{}, Letter)
+	// The interval column is 0.19 of the width: wide enough for "12.9 m"
+	// but not for the whole range, as in a landscape band.
+	w := (draw.TextWidth(draw.Regular, sizeTiny, "12.9 m") + 4) / 0.19
+	cells, _ := l.amountCells([]string{"12.6–12.9 m", "Filter pack", "1.5 ft³", "2 bags", "1.00"}, w, draw.Regular)
+	for _, line := range cells[0] {
+		if strings.ContainsAny(strings.TrimSuffix(strings.TrimSuffix(line, "–"), " m"), "–") {
+			t.Errorf("interval cell %q", cells[0])
+		}
+	}
+	joined := strings.Join(cells[0], "|")
+	if !strings.Contains(joined, "12.6–") && !strings.Contains(joined, "12.6") {
+		t.Errorf("interval cell %q lost its first depth", cells[0])
+	}
+	for _, line := range cells[0] {
+		for _, f := range strings.Fields(strings.NewReplacer("–", " ", "m", " ").Replace(line)) {
+			if f != "12.6" && f != "12.9" {
+				t.Errorf("interval cell %q splits a number (%q)", cells[0], f)
+			}
+		}
+	}
+}

@@ -189,13 +189,10 @@ func (l *layout) rawCallouts() []callout {
 		if i == mpCasing {
 			r := float64(od(c.Pipe)) / 2 * h.ppmm
 			add(callout{key: "mp:" + pathOr(c.Path, "casing", i), iv: schema.Interval{Top: c.Top, Bottom: c.Top}, anchorX: fixed(h.cx + r), title: "Measuring point",
-				lines: l.mpLines(c.Label()+" casing", c.Top, ""), rank: 3})
+				lines: l.mpLines(c.Called(), c.Top, ""), rank: 3})
 		}
 		r := float64(od(c.Pipe)) / 2 * h.ppmm
-		title := strings.TrimSpace(string(c.Kind) + " casing")
-		if c.Name != "" && c.Name != string(c.Kind) {
-			title += " (" + c.Name + ")"
-		}
+		title := c.Called() // one name per part: the casing's own
 		add(callout{key: "casing:" + pathOr(c.Path, "casing", i), iv: c.Interval, anchorX: fixed(h.cx + r), title: upperFirst(title),
 			lines: []string{l.pipeLine(c.Pipe), l.pipeSizes(c.Pipe), l.interval(c.Interval)}, minor: map[int]bool{1: true}, where: 2, rank: 2})
 		if len(c.Centralizers) > 0 {

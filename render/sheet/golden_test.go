@@ -2,6 +2,7 @@ package sheet
 
 import (
 	"bytes"
+	"crypto/sha256"
 	"encoding/xml"
 	"flag"
 	"fmt"
@@ -173,5 +174,37 @@ func TestDemoSheetsContents(t *testing.T) {
 				t.Errorf("%s sheet %d: %d callouts", name, i+1, len(boxes(p, "callout:")))
 			}
 		}
+	}
+}
+
+// TestGoldenGallery keeps the gallery's sheets (testdata/gallery) as they
+// were reviewed: the SHA-256 of every sheet's SVG, one line per sheet, in
+// testdata/gallery/golden.sha256 (hashes rather than files: the 1,200-ft
+// well alone has eight sheets). Review a change by looking at the PNGs
+// (docs/gallery.md) and rewrite with -update.
+func TestGoldenGallery(t *testing.T) {
+	const path = "../../testdata/gallery/golden.sha256"
+	var b strings.Builder
+	for _, c := range galleryWells(t) {
+		doc := layoutOf(t, c.w, c.in, Options{Date: "2026-06-15T00:00:00Z"})
+		for i := range doc.Pages {
+			svg, err := out.SVG(doc, i)
+			if err != nil {
+				t.Fatal(err)
+			}
+			fmt.Fprintf(&b, "%x  %s sheet %d\n", sha256.Sum256(svg), c.name, i+1)
+		}
+	}
+	if *update {
+		if err := os.WriteFile(path, []byte(b.String()), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	want, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatalf("%v (run go test ./render/sheet -run Golden -update)", err)
+	}
+	if string(want) != b.String() {
+		t.Errorf("gallery sheets differ from %s: look at them (docs/gallery.md) and rewrite with -update\nnow:\n%s", path, b.String())
 	}
 }

@@ -105,7 +105,7 @@ func (lp lapPart) callouts(l *layout) []callout {
 	if lp.liner.Product != "" {
 		lines = append(lines, lp.liner.Product)
 	}
-	lines = append(lines, fmt.Sprintf("liner top at %s, in the %s casing", l.depth(lp.lap.Top), lp.host.Label()))
+	lines = append(lines, fmt.Sprintf("liner top at %s, in the %s", l.depth(lp.lap.Top), lp.host.Called()))
 	where := len(lines) - 1
 	lines = append(lines, fmt.Sprintf("lap %s (%s)", l.interval(lp.lap), l.depth(lp.lap.Thickness())))
 	switch {

@@ -102,16 +102,47 @@ func describe(ly schema.Layer) string {
 	return d
 }
 
-// rockAbbrev is a short rock label for the USCS column: the first word
-// of the rock type, when short enough.
+// rockAbbrev is our short rock label for the USCS column, at most four
+// letters so it always fits: the name's first letter and the consonants
+// after it, in capitals (granite GRNT, gneiss GNSS, sandstone SNDS), with
+// a lower-case w before it for weathered rock (wGNS). The notes explain
+// every one the sheet uses (rockKey).
 func rockAbbrev(rock string) string {
-	f := strings.Fields(rock)
+	f := strings.Fields(strings.ToLower(rock))
 	if len(f) == 0 {
 		return ""
 	}
-	w := f[len(f)-1]
-	if len(w) > 5 {
-		w = w[:4] + "."
+	prefix, n := "", 4
+	if f[0] == "weathered" && len(f) > 1 {
+		prefix, n, f = "w", 3, f[1:]
 	}
-	return strings.ToUpper(w[:1]) + w[1:]
+	name := strings.Join(f, "")
+	var b []rune
+	for k, r := range name {
+		if len(b) == n {
+			break
+		}
+		if k == 0 || (r >= 'a' && r <= 'z' && !strings.ContainsRune("aeiouy", r) && (len(b) == 0 || b[len(b)-1] != r-'a'+'A')) {
+			b = append(b, r)
+		}
+	}
+	return prefix + strings.ToUpper(string(b))
+}
+
+// rockKey explains the rock abbreviations the well's log uses, for the
+// notes: "USCS column, rocks: GNSS gneiss; GRNT granite", or "".
+func (l *layout) rockKey() string {
+	seen := map[string]bool{}
+	var parts []string
+	for _, ly := range l.w.Lithology {
+		if ly.Rock == "" || seen[ly.Rock] {
+			continue
+		}
+		seen[ly.Rock] = true
+		parts = append(parts, rockAbbrev(ly.Rock)+" "+strings.ToLower(ly.Rock))
+	}
+	if len(parts) == 0 {
+		return ""
+	}
+	return "USCS column, rocks (our abbreviations): " + strings.Join(parts, "; ") + "."
 }

@@ -34,5 +34,5 @@ func (s shoePart) callouts(l *layout) []callout {
 	c := l.w.Casings[s.ci]
 	x := l.hz.cx + float64(od(c.Pipe))/2*l.hz.ppmm + 1.2
 	return []callout{{key: "shoe:" + pathOr(c.Path, "casing", s.ci), iv: schema.Interval{Top: c.Bottom, Bottom: c.Bottom}, anchorX: fixed(x),
-		title: "Drive shoe", lines: []string{"on the " + c.Label() + " casing at " + l.depth(c.Bottom)}, rank: 2}}
+		title: "Drive shoe", lines: []string{"on the " + c.Called() + " at " + l.depth(c.Bottom)}, rank: 2}}
 }

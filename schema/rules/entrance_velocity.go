@@ -5,8 +5,9 @@ import (
 	"github.com/tremie-dev/tremie/schema/quantity"
 )
 
-// supplyPurposes are the wells pumped for supply, whose screens are sized
-// for a pumping rate.
+// supplyPurposes are the wells pumped for supply: their screens are sized
+// for a pumping rate and their water-well standard sets the pad
+// (SURFACE-PAD); a monitoring well's pad is left to the local code.
 var supplyPurposes = map[schema.Purpose]bool{
 	schema.Domestic: true, schema.PublicSupply: true, schema.Industrial: true, schema.Irrigation: true,
 }

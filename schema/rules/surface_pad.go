@@ -6,13 +6,6 @@ import "github.com/tremie-dev/tremie/schema"
 const surfacePadSource = "California DWR Bulletin 74-81 / 74-90, Part II section 10 (surface features, well pad): " +
 	"a concrete pad at least 4 in thick, extending at least 2 ft laterally in every direction from the outside of the boring"
 
-// padPurposes are the purposes the pad rule applies to by default: water
-// wells, whose standard sets the pad. A monitoring well's pad is left to
-// the local code (a flush-mount vault in a road often has none).
-var padPurposes = map[schema.Purpose]bool{
-	schema.Domestic: true, schema.PublicSupply: true, schema.Industrial: true, schema.Irrigation: true,
-}
-
 func init() {
 	register(&Rule{
 		ID:    "SURFACE-PAD",
@@ -40,7 +33,7 @@ const padTolerance = schema.Length(0.005)
 
 func runSurfacePad(p *Pass) {
 	w := p.Well
-	if !padPurposes[w.Purpose] {
+	if !supplyPurposes[w.Purpose] { // water wells, whose standard sets the pad
 		return
 	}
 	pad := w.Surface.Pad
