@@ -38,3 +38,21 @@ func (r *reader) sample(t *table, w *Well) FormationSample {
 	}
 	return s
 }
+
+// UniformityCoefficient is Cu = d60 / d10 of a grading curve (ASTM
+// D2487); 0 when either is unknown.
+func UniformityCoefficient(d10, d60 Diameter) float64 {
+	if d10 <= 0 || d60 <= 0 {
+		return 0
+	}
+	return float64(d60 / d10)
+}
+
+// PackFormationRatio is the filter-pack design ratio: the pack's d30 over
+// the formation sample's d30 (ASTM D5092); 0 when either is unknown.
+func PackFormationRatio(pack *Fill, s FormationSample) float64 {
+	if pack.D30 <= 0 || s.D30 <= 0 {
+		return 0
+	}
+	return float64(pack.D30 / s.D30)
+}

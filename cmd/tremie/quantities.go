@@ -217,6 +217,9 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 	if line := screenFlowLine(r.Well); line != "" {
 		fmt.Fprintf(w, "  screens: %s\n", line)
 	}
+	for _, d := range quantity.PackDesigns(r.Well) {
+		fmt.Fprintf(w, "  filter pack, fill %d: %s\n", d.Index+1, packDesignLine(d, u))
+	}
 	for _, fd := range wq.Findings {
 		fmt.Fprintf(w, "  %s %s (line %d): %s\n", fd.Label(), fd.Rule, fd.Line, fd.Message)
 	}
@@ -266,6 +269,24 @@ func screenFlowLine(wl *schema.Well) string {
 	if pt := wl.PumpingTest; pt != nil && pt.SpecificCapacity > 0 {
 		sc, qunit := schema.FlowIn(pt.SpecificCapacity*float64(schema.LengthFrom(1, u.Depth)), u)
 		parts = append(parts, fmt.Sprintf("specific capacity %s %s per %s of drawdown", quantity.Number(sc), qunit, u.Depth))
+	}
+	return strings.Join(parts, "; ")
+}
+
+// packDesignLine is a filter pack's uniformity coefficient and its d30
+// against the formation samples in its screens: "Cu = d60/d10 = 1.56
+// (rule PACK-UNIFORMITY); d30 5.0 times that of the sample at 28 ft
+// (rule PACK-FORMATION-RATIO)"; the thresholds are the rules'.
+func packDesignLine(d quantity.PackDesign, u schema.Units) string {
+	var parts []string
+	if d.Cu > 0 {
+		parts = append(parts, fmt.Sprintf("Cu = d60/d10 = %.2f (rule PACK-UNIFORMITY)", d.Cu))
+	}
+	for _, sr := range d.Ratios {
+		parts = append(parts, fmt.Sprintf("d30 %.1f times that of the sample at %s", sr.Ratio, u.FormatDepth(sr.Sample.Depth)))
+	}
+	if len(d.Ratios) > 0 {
+		parts[len(parts)-1] += " (rule PACK-FORMATION-RATIO)"
 	}
 	return strings.Join(parts, "; ")
 }

@@ -31,15 +31,6 @@ func init() {
 	})
 }
 
-// PackFormationRatio is the filter-pack design ratio: the pack's d30 over
-// the formation's d30 (ASTM D5092); 0 when either is unknown.
-func PackFormationRatio(pack *schema.Fill, s schema.FormationSample) float64 {
-	if pack.D30 <= 0 || s.D30 <= 0 {
-		return 0
-	}
-	return float64(pack.D30 / s.D30)
-}
-
 func runPackFormationRatio(p *Pass) {
 	w := p.Well
 	lo, hi := p.Param("min_ratio"), p.Param("max_ratio")
@@ -57,7 +48,7 @@ func runPackFormationRatio(p *Pass) {
 				continue
 			}
 			for _, s := range samples {
-				ratio := PackFormationRatio(f, s)
+				ratio := schema.PackFormationRatio(f, s)
 				if ratio == 0 || (ratio >= lo-1e-9 && ratio <= hi+1e-9) {
 					continue
 				}

@@ -25,15 +25,6 @@ func init() {
 	})
 }
 
-// UniformityCoefficient is Cu = d60 / d10 of a grading curve (ASTM
-// D2487); 0 when either is unknown.
-func UniformityCoefficient(d10, d60 schema.Diameter) float64 {
-	if d10 <= 0 || d60 <= 0 {
-		return 0
-	}
-	return float64(d60 / d10)
-}
-
 func runPackUniformity(p *Pass) {
 	limit := p.Param("max_cu")
 	for i := range p.Well.Fills {
@@ -41,7 +32,7 @@ func runPackUniformity(p *Pass) {
 		if !isFilterPack(f) {
 			continue
 		}
-		cu := UniformityCoefficient(f.D10, f.D60)
+		cu := schema.UniformityCoefficient(f.D10, f.D60)
 		if cu == 0 || cu < limit {
 			continue
 		}

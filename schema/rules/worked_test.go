@@ -524,14 +524,14 @@ func TestPackFormationRatioWorked(t *testing.T) {
 		return load(t, monitoringWell("ft", "8.25", "36.0", pack+fill("20.0", "23.0", "bentonite-chips")+fill("0.0", "20.0", "neat-cement")+sample))
 	}
 	w := well("0.25")
-	if got := PackFormationRatio(&w.Fills[0], w.Samples[0]); math.Abs(got-4.8) > 1e-9 {
+	if got := schema.PackFormationRatio(&w.Fills[0], w.Samples[0]); math.Abs(got-4.8) > 1e-9 {
 		t.Errorf("1.2/0.25 = %v, want 4.8", got)
 	}
 	if fs := findings(w, nil, "PACK-FORMATION-RATIO"); len(fs) != 0 {
 		t.Errorf("ratio 4.8 flagged: %s", fs[0].Message)
 	}
 	w = well("0.15")
-	if got := PackFormationRatio(&w.Fills[0], w.Samples[0]); math.Abs(got-8.0) > 1e-9 {
+	if got := schema.PackFormationRatio(&w.Fills[0], w.Samples[0]); math.Abs(got-8.0) > 1e-9 {
 		t.Errorf("1.2/0.15 = %v, want 8.0", got)
 	}
 	fs := findings(w, nil, "PACK-FORMATION-RATIO")
@@ -555,14 +555,14 @@ func TestPackUniformityWorked(t *testing.T) {
 		return load(t, monitoringWell("ft", "8.25", "36.0", pack+fill("20.0", "23.0", "bentonite-chips")+fill("0.0", "20.0", "neat-cement")))
 	}
 	w := well("1.1")
-	if got := UniformityCoefficient(w.Fills[0].D10, w.Fills[0].D60); math.Abs(got-2.444) > 5e-4 {
+	if got := schema.UniformityCoefficient(w.Fills[0].D10, w.Fills[0].D60); math.Abs(got-2.444) > 5e-4 {
 		t.Errorf("Cu 1.1/0.45 = %v, want 2.444", got)
 	}
 	if fs := findings(w, nil, "PACK-UNIFORMITY"); len(fs) != 0 {
 		t.Errorf("Cu 2.44 flagged: %s", fs[0].Message)
 	}
 	w = well("1.4")
-	if got := UniformityCoefficient(w.Fills[0].D10, w.Fills[0].D60); math.Abs(got-3.111) > 5e-4 {
+	if got := schema.UniformityCoefficient(w.Fills[0].D10, w.Fills[0].D60); math.Abs(got-3.111) > 5e-4 {
 		t.Errorf("Cu 1.4/0.45 = %v, want 3.111", got)
 	}
 	fs := findings(w, nil, "PACK-UNIFORMITY")
