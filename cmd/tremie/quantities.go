@@ -280,10 +280,10 @@ func screenFlowLine(wl *schema.Well) string {
 func packDesignLine(d quantity.PackDesign, u schema.Units) string {
 	var parts []string
 	if d.Cu > 0 {
-		parts = append(parts, fmt.Sprintf("Cu = d60/d10 = %.2f (rule PACK-UNIFORMITY)", d.Cu))
+		parts = append(parts, "Cu = d60/d10 = "+schema.TrimFloat(d.Cu, 2)+" (rule PACK-UNIFORMITY)")
 	}
 	for _, sr := range d.Ratios {
-		parts = append(parts, fmt.Sprintf("d30 %.1f times that of the sample at %s", sr.Ratio, u.FormatDepth(sr.Sample.Depth)))
+		parts = append(parts, fmt.Sprintf("d30 %s times that of the sample at %s", schema.TrimFloat(sr.Ratio, 2), u.FormatDepth(sr.Sample.Depth)))
 	}
 	if len(d.Ratios) > 0 {
 		parts[len(parts)-1] += " (rule PACK-FORMATION-RATIO)"
@@ -455,6 +455,17 @@ type jsonFill struct {
 	Tags        []jsonTag `json:"tags,omitempty"`
 	Mix         *jsonMix  `json:"mix,omitempty"`
 	Error       string    `json:"error,omitempty"`
+	// A filter pack's grading figures (quantity.PackDesigns).
+	Cu           *float64          `json:"uniformity_coefficient,omitempty"`
+	SampleRatios []jsonSampleRatio `json:"formation_d30_ratios,omitempty"`
+}
+
+// jsonSampleRatio is a pack's d30 over a formation sample's, the sample's
+// depth in depth_unit.
+type jsonSampleRatio struct {
+	Path  string  `json:"sample"`
+	Depth float64 `json:"depth"`
+	Ratio float64 `json:"ratio"`
 }
 
 type jsonTag struct {
@@ -531,6 +542,10 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 		mu := quantity.MassUnit(u)
 		jw := jsonWell{File: wq.File, Well: r.Well.ID, DepthUnit: string(u.Depth), VolumeUnit: string(p), VolumeUnit2: string(s), MassUnit: string(mu),
 			Fills: []jsonFill{}, Pipes: []jsonPipe{}, WellVolumes: []jsonWellVolume{}}
+		designs := map[int]quantity.PackDesign{}
+		for _, d := range quantity.PackDesigns(r.Well) {
+			designs[d.Index] = d
+		}
 		for _, v := range wq.Volumes {
 			jv := jsonWellVolume{String: v.String, Level: r4(v.Level.In(u.Depth)), Bottom: r4(v.Bottom.In(u.Depth)), Casing: r4(v.Casing.In(p)),
 				WellVolume: r4(v.Well().In(p)), Purge: r4(v.Purge().In(p)), PurgeTimes: quantity.PurgeWellVolumes}
@@ -566,6 +581,14 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 			}
 			if row.Ratio > 0 {
 				jf.Ratio = ptr(r4(row.Ratio))
+			}
+			if d, ok := designs[row.Index]; ok && !row.IsPad() {
+				if d.Cu > 0 {
+					jf.Cu = ptr(r4(d.Cu))
+				}
+				for _, sr := range d.Ratios {
+					jf.SampleRatios = append(jf.SampleRatios, jsonSampleRatio{Path: sr.Sample.Path, Depth: r4(sr.Sample.Depth.In(u.Depth)), Ratio: r4(sr.Ratio)})
+				}
 			}
 			if d, ok := row.Yield.Density(); ok && row.HasYield && f.Yield <= 0 {
 				m := &jsonMix{Water: r4(row.Yield.Water.In(schema.USGallons)), WaterUnit: "gal"}

@@ -413,3 +413,26 @@ func TestQuantitiesPurgeAndMix(t *testing.T) {
 		}
 	}
 }
+
+// The filter-pack figures on the fixture of PACK-FORMATION-RATIO: pack
+// d10 0.45, d30 0.55, d60 0.70 mm, samples in the screen with d30 0.25,
+// 0.11 and 0.08 mm. By hand: Cu = 0.70/0.45 = 1.556 (ASTM D2487's
+// definition); d30 ratios 0.55/0.25 = 2.2, 0.55/0.11 = 5, 0.55/0.08 =
+// 6.875 (ASTM D5092's design ratio).
+func TestQuantitiesPackDesign(t *testing.T) {
+	file := filepath.Join("..", "..", "schema", "rules", "testdata", "PACK-FORMATION-RATIO", "fail.toml")
+	code, out, errs := runQ(file)
+	if code != exitOK && code != exitFindings {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	want := "filter pack, fill 1: Cu = d60/d10 = 1.56 (rule PACK-UNIFORMITY); d30 2.2 times that of the sample at 26 ft; d30 5 times that of the sample at 30 ft; d30 6.88 times that of the sample at 34 ft (rule PACK-FORMATION-RATIO)"
+	if !strings.Contains(out, want) {
+		t.Errorf("output lacks %q:\n%s", want, out)
+	}
+	_, js, _ := runQ("--format", "json", file)
+	for _, s := range []string{`"uniformity_coefficient":1.5556`, `"ratio":6.875`, `"sample":"sample[0]","depth":26,"ratio":2.2`} {
+		if !strings.Contains(strings.Join(strings.Fields(js), ""), s) {
+			t.Errorf("JSON lacks %s", s)
+		}
+	}
+}

@@ -52,7 +52,7 @@ func runPackFormationRatio(p *Pass) {
 				if ratio == 0 || (ratio >= lo-1e-9 && ratio <= hi+1e-9) {
 					continue
 				}
-				why := "too fine: it holds back the formation's water as well as its grains"
+				why := "too fine: it slows the water entering the well"
 				if ratio > hi {
 					why = "too coarse: the formation's fines pass through it into the well"
 				}
