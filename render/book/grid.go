@@ -9,6 +9,9 @@ type gridCol struct {
 	title string
 	width float64
 	right bool // right-aligned (numbers)
+	// whole lists words of the column's cells that must not break, such
+	// as "public-supply"; the column is made at least as wide as each.
+	whole []string
 }
 
 // grid typesets rows that wrap within their cells, breaking pages and
@@ -49,6 +52,14 @@ func fitWidths(f *doc, cols []gridCol, size, avail float64) []float64 {
 			}
 		}
 		total += c.width
+	}
+	f.SetFont(family, "", size)
+	for i, c := range cols {
+		for _, word := range c.whole {
+			if w := f.GetStringWidth(word) + 1.6 + 2*f.GetCellMargin() + 0.2; w > minW[i] {
+				minW[i] = w
+			}
+		}
 	}
 	widths := make([]float64, len(cols))
 	// Columns whose share is below their minimum take the minimum; the rest

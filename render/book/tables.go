@@ -43,10 +43,19 @@ func typesetTables(in Input, first int) ([]byte, int, int, error) {
 			continue
 		}
 		numeric := false
+		var whole []string
 		for _, r := range in.Table.Rows {
-			numeric = numeric || c.Value(r).Num != nil
+			v := c.Value(r)
+			numeric = numeric || v.Num != nil
+			// Short words (a purpose, a status, a number) stay whole;
+			// long free text may still wrap inside a word.
+			for _, w := range strings.Fields(v.String()) {
+				if len([]rune(w)) <= 20 {
+					whole = append(whole, w)
+				}
+			}
 		}
-		gc = append(gc, gridCol{title: c.Title(), width: sc.width, right: numeric})
+		gc = append(gc, gridCol{title: c.Title(), width: sc.width, right: numeric, whole: whole})
 		picked = append(picked, c)
 	}
 	g := newGrid(f, fmt.Sprintf("Construction summary (depths below ground and elevations in %s)", in.Table.Units), gc, 6)
