@@ -214,17 +214,15 @@ func (r *reader) tracePoints(t *table, u Units) []TracePoint {
 			r.errAt(t.keyPath(k), "points[%d] must be an [azimuth, depth] pair", i)
 			return nil
 		}
-		var nums [2]float64
-		for j, x := range pair {
-			switch n := x.(type) {
-			case int64:
-				nums[j] = float64(n)
-			case float64:
-				nums[j] = n
-			default:
-				r.errAt(t.keyPath(k), "points[%d] must hold two numbers, found %s", i, typeName(x))
-				return nil
+		nums, ok := NumberPair(pair)
+		if !ok {
+			for _, x := range pair {
+				if _, isNum := Number(x); !isNum {
+					r.errAt(t.keyPath(k), "points[%d] must hold two numbers, found %s", i, typeName(x))
+					break
+				}
 			}
+			return nil
 		}
 		if !(nums[0] >= 0 && nums[0] <= 360) || !(nums[1] >= 0 && nums[1] < 1e6) {
 			r.errAt(t.keyPath(k), "points[%d] = [%v, %v]: azimuth must be 0..360 degrees and depth at or below ground", i, nums[0], nums[1])

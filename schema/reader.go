@@ -388,13 +388,8 @@ func (t *table) numbers(k string) []float64 {
 	}
 	out := make([]float64, 0, len(arr))
 	for _, e := range arr {
-		var f float64
-		switch x := e.(type) {
-		case int64:
-			f = float64(x)
-		case float64:
-			f = x
-		default:
+		f, ok := Number(e)
+		if !ok {
 			t.r.errAt(t.keyPath(k), "%s must hold only numbers, found %s", k, typeName(e))
 			return nil
 		}

@@ -115,7 +115,7 @@ func (l *layout) datum() string {
 
 // groundLine joins the ground surface between neighbouring columns.
 func (l *layout) groundLine() []draw.Item {
-	ws := drawnOrder(l.wells)
+	ws := l.ordered
 	var items []draw.Item
 	for i := 1; i < len(ws); i++ {
 		a, b := ws[i-1], ws[i]

@@ -33,13 +33,18 @@ var (
 
 // layout holds the geometry of one section sheet.
 type layout struct {
-	in     Input
-	units  []string // the section's units, in order of first appearance
-	tpl    *templates.Template
-	wells  []*placed
-	line   polyline
-	method string
-	u      schema.DepthUnit // the unit elevations and distances are written in
+	in Input
+	// ordered is the wells left to right, and joins and units the units
+	// joined between them and every unit named, in order of first
+	// appearance; worked out once the columns are placed.
+	ordered []*placed
+	joins   []unitJoin
+	units   []string
+	tpl     *templates.Template
+	wells   []*placed
+	line    polyline
+	method  string
+	u       schema.DepthUnit // the unit elevations and distances are written in
 
 	frame, body, plot, panel, titleBox draw.Rect
 	vs, hs                             scale
@@ -63,7 +68,8 @@ func newLayout(in Input, tpl *templates.Template, wells []*placed, line polyline
 	}
 	l.regions()
 	l.scales()
-	_, l.units = correlate(drawnOrder(wells))
+	l.ordered = drawnOrder(wells)
+	l.joins, l.units = correlate(l.ordered)
 	l.water = chooseWater(in.Section.WaterDate, wells)
 	l.collectNotes()
 	return l

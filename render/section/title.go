@@ -56,7 +56,7 @@ func (l *layout) titleItems() []draw.Item {
 		items = append(items, draw.Shape{Points: []draw.Point{{X: c.X, Y: c.Y}, {X: c.X, Y: c.Bottom()}}, Style: draw.Style{Stroke: ink, StrokeWidth: 0.5}})
 	}
 	var ids []string
-	for _, p := range drawnOrder(l.wells) {
+	for _, p := range l.ordered {
 		ids = append(ids, p.w.ID)
 	}
 	pr := l.in.Project

@@ -89,11 +89,9 @@ func tintOf(names []string, name string) draw.Color {
 // the right edge of one column to the left edge of the next, its top and
 // bottom straight lines.
 func (l *layout) unitBands() []draw.Item {
-	ws := drawnOrder(l.wells)
-	joins, _ := correlate(ws)
-	names := l.units
+	ws, names := l.ordered, l.units
 	var items []draw.Item
-	for _, j := range joins {
+	for _, j := range l.joins {
 		xa, xb := ws[j.left].x+colWidth/2, ws[j.right].x-colWidth/2
 		if xb <= xa {
 			continue

@@ -69,7 +69,7 @@ func (wl waterLine) levelOn(p *placed) (float64, bool) {
 // a small open mark.
 func (l *layout) waterItems() []draw.Item {
 	var items []draw.Item
-	ws := drawnOrder(l.wells)
+	ws := l.ordered
 	mark := symbols.MustPart(symbols.WaterLevel)
 	var prev *placed
 	var prevZ float64

@@ -230,20 +230,9 @@ func bendPoints(v any) [][2]float64 {
 	}
 	out := make([][2]float64, 0, len(arr))
 	for _, e := range arr {
-		pair, ok := e.([]any)
-		if !ok || len(pair) != 2 {
+		pt, ok := schema.NumberPair(e)
+		if !ok {
 			return nil
-		}
-		var pt [2]float64
-		for j, c := range pair {
-			switch n := c.(type) {
-			case int64:
-				pt[j] = float64(n)
-			case float64:
-				pt[j] = n
-			default:
-				return nil
-			}
 		}
 		out = append(out, pt)
 	}

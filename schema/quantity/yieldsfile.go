@@ -118,20 +118,10 @@ func positiveNumber(doc *schema.Doc, t *schema.Table, k string) (float64, bool) 
 	if !ok {
 		return 0, false
 	}
-	n, ok := number(v)
+	n, ok := schema.Number(v)
 	if !ok || !(n > 0) || math.IsInf(n, 0) {
 		doc.Errorf(t.Path()+"."+k, "%s must be a positive number, not %v", k, v)
 		return 0, false
 	}
 	return n, true
-}
-
-func number(v any) (float64, bool) {
-	switch n := v.(type) {
-	case int64:
-		return float64(n), true
-	case float64:
-		return n, true
-	}
-	return 0, false
 }
