@@ -38,7 +38,7 @@ func PDF(doc *draw.Document) ([]byte, error) {
 		if i > 0 {
 			r.NewPage(p.Width*mmPerPt, p.Height*mmPerPt)
 		}
-		if err := paintPage(pdfRenderer{r}, p, fonts); err != nil {
+		if err := paintPage(pdfRenderer{r}, p, fonts, &rasterPatterns{}); err != nil {
 			return nil, fmt.Errorf("pdf page %d: %w", i+1, err)
 		}
 	}

@@ -30,7 +30,8 @@ func SVG(doc *draw.Document, i int) ([]byte, error) {
 	r := svg.New(&buf, p.Width*mmPerPt, p.Height*mmPerPt, &opts)
 	fonts := takeFonts()
 	defer fonts.giveBack()
-	if err := paintPage(r, p, fonts); err != nil {
+	patterns := newSVGPatterns(&buf)
+	if err := paintPage(r, p, fonts, patterns); err != nil {
 		return nil, fmt.Errorf("svg page %d: %w", i+1, err)
 	}
 	if err := r.Close(); err != nil {
@@ -40,7 +41,7 @@ func SVG(doc *draw.Document, i int) ([]byte, error) {
 	if err != nil {
 		return nil, fmt.Errorf("svg page %d: %w", i+1, err)
 	}
-	return addTitle(sortFontFaces(b), doc.Title), nil
+	return addTitle(sortFontFaces(patterns.insertDefs(b)), doc.Title), nil
 }
 
 // svgFontData opens and svgFontEnd closes each embedded font canvas writes.
