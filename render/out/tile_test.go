@@ -3,7 +3,6 @@ package out
 import (
 	"bytes"
 	"image"
-	"image/png"
 	"math"
 	"os"
 	"os/exec"
@@ -115,7 +114,11 @@ func TestPatternSVGMatchesPNG(t *testing.T) {
 	if out, err := exec.Command(rsvg, "-d", "144", "-p", "144", "-b", "white", "-o", outPNG, in).CombinedOutput(); err != nil {
 		t.Fatalf("rsvg-convert: %v\n%s", err, out)
 	}
-	theirs := readPNGFile(t, outPNG)
+	rb, err := os.ReadFile(outPNG)
+	if err != nil {
+		t.Fatal(err)
+	}
+	theirs := decodePNG(t, rb)
 	ours := decodePNG(t, must(PNG(doc, 0, 144)))
 	compareRasters(t, "rsvg", theirs, ours)
 }
@@ -162,19 +165,6 @@ func lumaAt(img image.Image, x, y int) float64 {
 	b := img.Bounds()
 	r, g, bl, _ := img.At(b.Min.X+x, b.Min.Y+y).RGBA()
 	return (0.2126*float64(r) + 0.7152*float64(g) + 0.0722*float64(bl)) / 0xffff
-}
-
-func readPNGFile(t *testing.T, name string) image.Image {
-	t.Helper()
-	b, err := os.ReadFile(name)
-	if err != nil {
-		t.Fatal(err)
-	}
-	img, err := png.Decode(bytes.NewReader(b))
-	if err != nil {
-		t.Fatal(err)
-	}
-	return img
 }
 
 // TestPatternBoundedByThePage: a pattern region a million points wide
