@@ -24,10 +24,29 @@ func init() {
 	})
 }
 
-// quantitiesCaution goes with every quantities report.
-const quantitiesCaution = "Figures and checks support, and never replace, the review of a licensed professional and " +
+// quantitiesCautionBase goes with every quantities report, followed by
+// which rule thresholds were in force (quantitiesCaution).
+const quantitiesCautionBase = "Figures and checks support, and never replace, the review of a licensed professional and " +
 	"the governing local well code. Yields marked common practice or from memory are defaults: set them from the " +
-	"product sheets (--yields FILE); rule thresholds are defaults to be set to the local rules."
+	"product sheets (--yields FILE); "
+
+// quantitiesCaution is the report's caution, true to the thresholds in
+// force: "rule thresholds are defaults ..." only where no profile is, else
+// each profile named once, in order of first use.
+func quantitiesCaution(run *pipeline.Run) string {
+	var notes []string
+	seen := map[string]bool{}
+	for _, s := range run.Settings {
+		if n := s.Profile.ThresholdNote(); !seen[n] {
+			seen[n] = true
+			notes = append(notes, n)
+		}
+	}
+	if len(notes) == 0 {
+		notes = append(notes, (*rules.Profile)(nil).ThresholdNote())
+	}
+	return quantitiesCautionBase + strings.Join(notes, "; ") + "."
+}
 
 // wellQuantities is one readable well's report and its reconciliation
 // findings.
@@ -89,15 +108,15 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 		reports = append(reports, w.Quantities)
 	}
 	order := quantity.Totals(reports, *contingency)
-	profiles := run.ProfileLabels()
+	profiles, caution := run.ProfileLabels(), quantitiesCaution(run)
 	var werr error
 	switch *format {
 	case "json":
-		werr = writeQuantitiesJSON(stdout, wells, order, profiles)
+		werr = writeQuantitiesJSON(stdout, wells, order, profiles, caution)
 	case "csv":
-		werr = writeQuantitiesCSV(stdout, wells, order, profiles)
+		werr = writeQuantitiesCSV(stdout, wells, order, profiles, caution)
 	default:
-		werr = writeQuantitiesText(stdout, wells, order, profiles)
+		werr = writeQuantitiesText(stdout, wells, order, profiles, caution)
 	}
 	if werr != nil {
 		fmt.Fprintf(stderr, "tremie quantities: writing the report: %v\n", werr)
@@ -111,7 +130,7 @@ type total = quantity.Line
 
 // --- text ---
 
-func writeQuantitiesText(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
+func writeQuantitiesText(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string, caution string) error {
 	ew := &errWriter{w: w}
 	fmt.Fprintf(ew, "Reconciliation checked with %s.\n\n", strings.Join(profiles, "; "))
 	for i, wq := range wells {
@@ -125,7 +144,7 @@ func writeQuantitiesText(w io.Writer, wells []wellQuantities, order *quantity.Or
 		writeOrderText(ew, order)
 	}
 	fmt.Fprintln(ew)
-	fmt.Fprintln(ew, quantitiesCaution)
+	fmt.Fprintln(ew, caution)
 	return ew.err
 }
 
@@ -531,8 +550,8 @@ func r4(v float64) float64 { return math.Round(v*1e4) / 1e4 }
 
 func ptr[T any](v T) *T { return &v }
 
-func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
-	out := jsonQuantities{Caution: quantitiesCaution, Profiles: profiles, Contingency: order.Contingency, Wells: []jsonWell{}, Totals: jsonTotals(order.Lines),
+func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string, caution string) error {
+	out := jsonQuantities{Caution: caution, Profiles: profiles, Contingency: order.Contingency, Wells: []jsonWell{}, Totals: jsonTotals(order.Lines),
 		OrderingFor: append([]string{}, order.For...), ForPlanned: order.Planned, AsBuiltFor: append([]string{}, order.AsBuilt...),
 		AsBuilt: jsonTotals(order.AsBuiltLines), Findings: []rules.Finding{}}
 	for _, wq := range wells {
@@ -633,7 +652,7 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 var quantitiesCSVHeader = []string{"kind", "file", "well", "fill", "material", "within", "top", "bottom", "depth_unit",
 	"calculated", "volume_unit", "yield", "yield_basis", "bag_mass", "mass_unit", "bags_needed", "bags_to_order", "bags_placed", "placed", "ratio", "note"}
 
-func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
+func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string, cautionText string) error {
 	cw := csv.NewWriter(w)
 	cw.Write(quantitiesCSVHeader)
 	num := func(v float64) string { return strconv.FormatFloat(r4(v), 'f', -1, 64) }
@@ -681,7 +700,7 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Ord
 	lines("order", order.Lines, order.For)
 	lines("as-built", order.AsBuiltLines, order.AsBuilt)
 	caution := make([]string, len(quantitiesCSVHeader))
-	caution[0], caution[20] = "caution", quantitiesCaution
+	caution[0], caution[20] = "caution", cautionText
 	prof := make([]string, len(quantitiesCSVHeader))
 	prof[0], prof[20] = "profile", strings.Join(profiles, "; ")
 	cw.Write(prof)
