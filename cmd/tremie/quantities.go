@@ -55,6 +55,9 @@ type wellQuantities struct {
 	Report   *quantity.Report
 	Findings []rules.Finding
 	Volumes  []quantity.WellVolume // water standing in each string, for purging
+	// Collapse are the grout columns' loads on PVC casing, with the
+	// project's yields (rule COLLAPSE-LOAD judges them).
+	Collapse []quantity.CollapseLoad
 }
 
 func runQuantities(args []string, stdout, stderr io.Writer) int {
@@ -95,7 +98,8 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 			continue
 		}
 		// the checks of placed amounts and tags, with the same yields
-		wq := wellQuantities{File: w.Path, Report: w.Quantities, Findings: w.Findings, Volumes: quantity.WellVolumes(w.Well, *porosity)}
+		wq := wellQuantities{File: w.Path, Report: w.Quantities, Findings: w.Findings, Volumes: quantity.WellVolumes(w.Well, *porosity),
+			Collapse: quantity.CollapseLoads(w.Well, w.Setting.Profile.Yields)}
 		for _, r := range wq.Report.Rows {
 			if r.Err != nil {
 				fmt.Fprintf(stderr, "%s:%d: %v\n", w.Path, w.Well.Line(r.Fill.Path), r.Err)
@@ -232,6 +236,10 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 	}
 	for _, v := range wq.Volumes {
 		fmt.Fprintf(w, "  well volume, %s: %s\n", v.String, wellVolumeLine(v, u))
+	}
+	for _, c := range wq.Collapse {
+		fmt.Fprintf(w, "  collapse load, fill %d: %s; net %s, %s of the rating (ASTM F480; rule COLLAPSE-LOAD)\n",
+			fillNumber(r.Well, c.Fills[len(c.Fills)-1]), c.Describe(u), quantity.FormatPressure(c.Differential(), u), schema.TrimFloat(c.Fraction(), 2))
 	}
 	if line := screenFlowLine(r.Well); line != "" {
 		fmt.Fprintf(w, "  screens: %s\n", line)
@@ -430,6 +438,24 @@ type jsonWell struct {
 	Pipes       []jsonPipe `json:"pipes"`
 	// WellVolumes are in volume_unit, levels in depth_unit.
 	WellVolumes []jsonWellVolume `json:"well_volumes"`
+	// CollapseLoads are in pressure_unit (psi, or kPa in a well in metres).
+	CollapseLoads []jsonCollapse `json:"collapse_loads"`
+}
+
+// jsonCollapse is a grout column's worst load on PVC casing.
+type jsonCollapse struct {
+	Fill         int     `json:"fill"` // the column's lowest fill, from 1
+	Top          float64 `json:"top"`
+	Bottom       float64 `json:"bottom"`
+	At           float64 `json:"at"`
+	Pipe         string  `json:"pipe"`
+	Outside      float64 `json:"outside"`
+	Inside       float64 `json:"inside"`
+	WaterStated  bool    `json:"water_inside_stated"`
+	Differential float64 `json:"differential"`
+	Rating       float64 `json:"rating"`
+	Fraction     float64 `json:"fraction_of_rating"`
+	Unit         string  `json:"pressure_unit"`
 }
 
 type jsonWellVolume struct {
@@ -560,7 +586,17 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 		p, s := quantity.VolumeUnits(u)
 		mu := quantity.MassUnit(u)
 		jw := jsonWell{File: wq.File, Well: r.Well.ID, DepthUnit: string(u.Depth), VolumeUnit: string(p), VolumeUnit2: string(s), MassUnit: string(mu),
-			Fills: []jsonFill{}, Pipes: []jsonPipe{}, WellVolumes: []jsonWellVolume{}}
+			Fills: []jsonFill{}, Pipes: []jsonPipe{}, WellVolumes: []jsonWellVolume{}, CollapseLoads: []jsonCollapse{}}
+		for _, c := range wq.Collapse {
+			k, unit := 1/quantity.PsiPa, "psi"
+			if !u.Imperial() {
+				k, unit = 1e-3, "kPa"
+			}
+			jw.CollapseLoads = append(jw.CollapseLoads, jsonCollapse{Fill: fillNumber(r.Well, c.Fills[len(c.Fills)-1]),
+				Top: r4(c.Top.In(u.Depth)), Bottom: r4(c.Bottom.In(u.Depth)), At: r4(c.At.In(u.Depth)), Pipe: c.Pipe.Label(),
+				Outside: r4(c.Outside * k), Inside: r4(c.Inside * k), WaterStated: c.WaterStated, Differential: r4(c.Differential() * k),
+				Rating: r4(c.Rating * k), Fraction: r4(c.Fraction()), Unit: unit})
+		}
 		designs := map[int]quantity.PackDesign{}
 		for _, d := range quantity.PackDesigns(r.Well) {
 			designs[d.Index] = d
@@ -741,4 +777,14 @@ func countOf(n int, word string) string {
 		return "1 " + word
 	}
 	return strconv.Itoa(n) + " " + word + "s"
+}
+
+// fillNumber is a fill's number in its well, from 1, as the reports count.
+func fillNumber(w *schema.Well, f *schema.Fill) int {
+	for i := range w.Fills {
+		if &w.Fills[i] == f {
+			return i + 1
+		}
+	}
+	return 0
 }
