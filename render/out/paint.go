@@ -255,16 +255,10 @@ func (p *painter) text(t draw.Text, clip *draw.Rect, path string) {
 	if strings.TrimSpace(s) == "" || t.Size <= 0 {
 		return
 	}
-	cf, err := p.fonts.font(t.Font)
-	if err != nil {
-		p.fail(path, "%v", err)
-		return
-	}
 	col := t.Color
 	if col.None() {
 		col = draw.Black
 	}
-	face := cf.Face(t.Size, rgba(col))
 	// The anchor shift uses the same measure layout used, so a centred or
 	// right-aligned label lands where layout put it.
 	w := draw.TextWidth(t.Font, t.Size, s)
@@ -289,7 +283,12 @@ func (p *painter) text(t draw.Text, clip *draw.Rect, path string) {
 		default:
 			// Cut glyph outlines: the visible part stays exact, at the cost
 			// of this one label not being searchable text.
-			outline, _, err := face.ToPath(s)
+			cf, err := p.fonts.font(t.Font)
+			if err != nil {
+				p.fail(path, "%v", err)
+				return
+			}
+			outline, _, err := cf.Face(t.Size, rgba(col)).ToPath(s)
 			if err != nil {
 				p.fail(path, "text %q: %v", t.Role, err)
 				return
@@ -302,7 +301,12 @@ func (p *painter) text(t draw.Text, clip *draw.Rect, path string) {
 			return
 		}
 	}
-	p.r.RenderText(canvas.NewTextLine(face, s, canvas.Left), m)
+	line, err := p.fonts.line(t.Font, t.Size, rgba(col), s)
+	if err != nil {
+		p.fail(path, "%v", err)
+		return
+	}
+	p.r.RenderText(line, m)
 }
 
 // cleanText makes a one-line string: line and paragraph breaks and other
