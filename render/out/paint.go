@@ -276,6 +276,18 @@ func (p *painter) text(t draw.Text, clip *draw.Rect, path string) {
 	case draw.End:
 		shift = -w
 	}
+	// Spaces at the ends go: SVG viewers drop them (xml:space default), so
+	// a run that starts with one is moved by its width instead.
+	if trimmed := strings.TrimLeft(s, " "); len(trimmed) < len(s) {
+		lead := w - draw.TextWidth(t.Font, t.Size, trimmed)
+		shift += lead
+		w -= lead
+		s = trimmed
+	}
+	if trimmed := strings.TrimRight(s, " "); len(trimmed) < len(s) {
+		w = draw.TextWidth(t.Font, t.Size, trimmed)
+		s = trimmed
+	}
 	at := p.pos(t.At.X, t.At.Y)
 	m := canvas.Identity.Translate(at.X, at.Y).Rotate(t.Rotate).Translate(shift*mmPerPt, 0)
 
