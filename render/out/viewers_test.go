@@ -139,8 +139,8 @@ func (p planes) blur() planes {
 
 // rasterDiff is how far two rasters of one page are apart.
 type rasterDiff struct {
-	meanAbs  float64 // mean absolute difference per channel, 0-255
-	differ   float64 // share of pixels where some channel differs by more than diffLevel
+	meanAbs   float64 // mean absolute difference per channel, 0-255
+	differ    float64 // share of pixels where some channel differs by more than diffLevel
 	worstTile float64 // mean absolute difference of the worst tile, 0-255
 	inkA      float64 // share of non-white pixels in each raster, a sanity check
 	inkB      float64
