@@ -127,7 +127,7 @@ func (ip *inkedPage) keep(items []draw.Item, clip *draw.Rect) []draw.Item {
 			}
 			r := textExtent(it)
 			if clip != nil {
-				r = intersect(r, *clip)
+				r = out.Intersect(r, *clip)
 			}
 			ip.boxes = append(ip.boxes, textBox{s: it.S, r: r})
 			it.Color = inkOf(len(ip.boxes))
@@ -135,7 +135,7 @@ func (ip *inkedPage) keep(items []draw.Item, clip *draw.Rect) []draw.Item {
 		case draw.Clip:
 			c := it.Rect
 			if clip != nil {
-				c = intersect(c, *clip)
+				c = out.Intersect(c, *clip)
 			}
 			if inner := ip.keep(it.Items, &c); len(inner) > 0 {
 				kept = append(kept, draw.Clip{Rect: it.Rect, Items: inner})
@@ -169,12 +169,6 @@ func textExtent(tx draw.Text) draw.Rect {
 		minY, maxY = math.Min(minY, y), math.Max(maxY, y)
 	}
 	return draw.Rect{X: minX, Y: minY, W: maxX - minX, H: maxY - minY}
-}
-
-func intersect(a, b draw.Rect) draw.Rect {
-	x0, y0 := math.Max(a.X, b.X), math.Max(a.Y, b.Y)
-	x1, y1 := math.Min(a.Right(), b.Right()), math.Min(a.Bottom(), b.Bottom())
-	return draw.Rect{X: x0, Y: y0, W: math.Max(0, x1-x0), H: math.Max(0, y1-y0)}
 }
 
 // slackPt is how far a fully covered pixel's centre may lie outside its
