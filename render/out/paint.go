@@ -256,16 +256,10 @@ func (p *painter) text(t draw.Text, clip *draw.Rect, path string) {
 	if strings.TrimSpace(s) == "" || t.Size <= 0 {
 		return
 	}
-	cf, err := p.fonts.font(t.Font)
-	if err != nil {
-		p.fail(path, "%v", err)
-		return
-	}
 	col := t.Color
 	if col.None() {
 		col = draw.Black
 	}
-	face := cf.Face(t.Size, rgba(col))
 	// The anchor shift uses the same measure layout used, so a centred or
 	// right-aligned label lands where layout put it.
 	w := draw.TextWidth(t.Font, t.Size, s)
@@ -307,10 +301,20 @@ func (p *painter) text(t draw.Text, clip *draw.Rect, path string) {
 		}
 	}
 	if cut == nil && !p.textAs.outlines() {
-		p.r.RenderText(canvas.NewTextLine(face, s, canvas.Left), m)
+		line, err := p.fonts.line(t.Font, t.Size, rgba(col), s)
+		if err != nil {
+			p.fail(path, "%v", err)
+			return
+		}
+		p.r.RenderText(line, m)
 		return
 	}
-	outline, _, err := face.ToPath(s)
+	cf, err := p.fonts.font(t.Font)
+	if err != nil {
+		p.fail(path, "%v", err)
+		return
+	}
+	outline, _, err := cf.Face(t.Size, rgba(col)).ToPath(s)
 	if err != nil {
 		p.fail(path, "text %q: %v", t.Role, err)
 		return

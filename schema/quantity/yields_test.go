@@ -225,7 +225,7 @@ func TestLoadYieldsReportsEveryError(t *testing.T) {
 	list := schema.Errors("", err)
 	want := []string{
 		p + `:2:10: yields volume unit must be one of ft3, gal, L, m3, not "cuft"`,
-		p + `:4:1: unknown key "filter-pak" in [yields] (did you mean "filter-pack"?)`,
+		p + `:4:9: unknown key "filter-pak" in [yields] (did you mean "filter-pack"?)`,
 		p + `:9:1: unknown key "bagmass" in [yields.neat-cement] (did you mean "bag_mass"?)`,
 	}
 	if len(list) != len(want) {
