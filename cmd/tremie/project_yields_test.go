@@ -94,7 +94,7 @@ func TestProjectYieldsGroutMix(t *testing.T) {
 	// water for a dry material, or water without a bag, is an error with its line
 	put(t, dir, "site.yields.toml", "[yields]\n[yields.bentonite-chips]\nyield = 0.7\nwater = 1\n\n[yields.neat-cement]\nyield = 1.2\nwater = 5\n")
 	code, _, errb := runTremie("quantities", dir)
-	if code != exitInput || !strings.Contains(errb, "site.yields.toml:2:") || !strings.Contains(errb, "not a grout") ||
+	if code != exitInput || !strings.Contains(errb, `site.yields.toml:4:1: unknown key "water" in [yields.bentonite-chips]`) ||
 		!strings.Contains(errb, "site.yields.toml:8:") || !strings.Contains(errb, "needs the bag") {
 		t.Errorf("exit %d, stderr %q", code, errb)
 	}

@@ -159,8 +159,7 @@ func readMix(doc *schema.Doc, e *schema.Table, entry *Yield, m schema.Material, 
 	}
 	path := e.Path()
 	if m.Group() != schema.GroutGroup {
-		doc.Errorf(path, "%s is not a grout: water, solids and density are for neat-cement, cement-bentonite, sand-cement and bentonite-grout", m)
-		return
+		return // not in a dry material's key table: Done reports the key
 	}
 	if n, ok := positiveNumber(doc, e, "water"); ok {
 		entry.Water = schema.VolumeFrom(n, wu)

@@ -19,13 +19,17 @@ func YieldsFile() *schema.TableSpec {
 	return yieldsFile.spec
 }
 
+// groutEntry is a grout's yield with its mix.
+var groutEntry = &schema.TableSpec{Doc: "The yield of one grout, overriding the built-in figure, with its mix.", Keys: append(append([]schema.KeySpec{}, yieldEntry.Keys...),
+	schema.KeySpec{Name: "water", Type: schema.TypeNumber, Bound: schema.Positive, Unit: "[yields] water_unit", Doc: "A grout's mix water per bag (gal where masses are in lb, L where in kg, unless water_unit says).", Example: 5.2},
+	schema.KeySpec{Name: "solids", Type: schema.TypeNumber, Bound: schema.Positive, Unit: "[yields] mass unit", Doc: "A grout's dry mass per bag with its additives; default bag_mass.", Example: 98.7},
+	schema.KeySpec{Name: "density", Type: schema.TypeNumber, Bound: schema.Positive, Doc: "A grout's expected slurry density from its mix sheet: lb/gal where masses are in lb, kg/L where in kg; default worked from water, solids and yield.", Example: 15.6},
+)}
+
 // yieldEntry is the table of one material's yield.
 var yieldEntry = &schema.TableSpec{Doc: "The yield of one material, overriding the built-in figure.", Keys: []schema.KeySpec{
 	{Name: "yield", Type: schema.TypeNumber, Required: true, Bound: schema.Positive, Unit: "[yields] volume unit", Doc: "Volume one bag fills in place.", Example: 0.45},
 	{Name: "bag_mass", Type: schema.TypeNumber, Bound: schema.Positive, Unit: "[yields] mass unit", Doc: "Mass of the bag the yield is for; omit for per bag as placed.", Example: 50},
-	{Name: "water", Type: schema.TypeNumber, Bound: schema.Positive, Unit: "[yields] water_unit", Doc: "A grout's mix water per bag (gal where masses are in lb, L where in kg, unless water_unit says).", Example: 5.2},
-	{Name: "solids", Type: schema.TypeNumber, Bound: schema.Positive, Unit: "[yields] mass unit", Doc: "A grout's dry mass per bag with its additives; default bag_mass.", Example: 98.7},
-	{Name: "density", Type: schema.TypeNumber, Bound: schema.Positive, Doc: "A grout's expected slurry density from its mix sheet: lb/gal where masses are in lb, kg/L where in kg; default worked from water, solids and yield.", Example: 15.6},
 	{Name: "note", Type: schema.TypeString, Doc: "Where the figure comes from.", Example: "supplier data sheet, 2026"},
 }}
 
@@ -36,7 +40,11 @@ func yieldsSpec() *schema.TableSpec {
 		{Name: "water_unit", Type: schema.TypeString, Enum: []string{string(schema.CubicFeet), string(schema.USGallons), string(schema.Litres), string(schema.CubicMetres)}, Doc: "Unit of each grout's mix water; default gal with lb, L with kg.", Example: "gal"},
 	}}
 	for _, m := range schema.Materials {
-		t.Keys = append(t.Keys, schema.KeySpec{Name: string(m), Type: schema.TypeTable, Doc: "Yield of " + string(m) + ".", Table: yieldEntry})
+		entry := yieldEntry
+		if m.Group() == schema.GroutGroup {
+			entry = groutEntry
+		}
+		t.Keys = append(t.Keys, schema.KeySpec{Name: string(m), Type: schema.TypeTable, Doc: "Yield of " + string(m) + ".", Table: entry})
 	}
 	return &schema.TableSpec{Title: "tremie yields file", Doc: "Material yields per bag for a project, named by project.toml's yields key.", Keys: []schema.KeySpec{
 		{Name: "yields", Type: schema.TypeTable, Required: true, Doc: t.Doc, Table: t},
