@@ -261,11 +261,17 @@ func mixLine(row quantity.Row, u schema.Units) string {
 		return ""
 	}
 	want, unit := schema.SlurryDensityIn(d, u)
-	water := quantity.Number(row.Yield.Water.In(schema.USGallons)) + " gal"
-	if !u.Imperial() {
-		water = quantity.Number(row.Yield.Water.In(schema.Litres)) + " L"
+	s := fmt.Sprintf("expected %.2f %s", want, unit)
+	if row.Yield.Water > 0 {
+		water := quantity.Number(row.Yield.Water.In(schema.USGallons)) + " gal"
+		if !u.Imperial() {
+			water = quantity.Number(row.Yield.Water.In(schema.Litres)) + " L"
+		}
+		s = fmt.Sprintf("%s water per %s, %s", water, quantity.FormatBag(row.Yield.BagMass, u), s)
 	}
-	s := fmt.Sprintf("%s water per %s, expected %.2f %s", water, quantity.FormatBag(row.Yield.BagMass, u), want, unit)
+	if row.Yield.Stated > 0 {
+		s += " (stated in the yields file)"
+	}
 	if row.Fill.Density > 0 {
 		got, _ := schema.SlurryDensityIn(row.Fill.Density, u)
 		s += fmt.Sprintf("; measured %s %s (%+.1f %%)", schema.TrimFloat(got, 2), unit, (row.Fill.Density/d-1)*100)
@@ -478,6 +484,9 @@ type jsonMix struct {
 	Expected    float64  `json:"expected_density"`
 	Measured    *float64 `json:"measured_density,omitempty"`
 	DensityUnit string   `json:"density_unit"`
+	// Stated: the expected density is the yields file's, not worked from
+	// the mix; water_per_bag is 0 where the file gives no water.
+	Stated bool `json:"density_stated"`
 }
 
 type jsonFill struct {
@@ -646,7 +655,7 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 				}
 			}
 			if d, ok := row.Yield.Density(); ok && row.HasYield && f.Yield <= 0 {
-				m := &jsonMix{Water: r4(row.Yield.Water.In(schema.USGallons)), WaterUnit: "gal"}
+				m := &jsonMix{Water: r4(row.Yield.Water.In(schema.USGallons)), WaterUnit: "gal", Stated: row.Yield.Stated > 0}
 				if !u.Imperial() {
 					m.Water, m.WaterUnit = r4(row.Yield.Water.In(schema.Litres)), "L"
 				}
