@@ -94,3 +94,18 @@ func notesHeight(blocks []noteBlock) float64 {
 	}
 	return h
 }
+
+// numberNotes gives each label that left words off a reference mark,
+// C1, C2, ... from start in depth order, and resets its text with the
+// mark; it returns the next number.
+func numberNotes(vis []placedCallout, width float64, start int) int {
+	for i := range vis {
+		if vis[i].rest == "" {
+			continue
+		}
+		vis[i].mark = fmt.Sprintf("C%d", start)
+		start++
+		vis[i].block = vis[i].c.block(vis[i].form, width, vis[i].mark)
+	}
+	return start
+}
