@@ -27,7 +27,8 @@ type Format struct {
 
 // EncodeOptions are the settings a format may use.
 type EncodeOptions struct {
-	DPI float64 // raster resolution (PNG)
+	DPI  float64  // raster resolution (PNG)
+	Text TextMode // how vector formats write words; "" is TextAsText
 }
 
 var (
@@ -109,11 +110,11 @@ func perSheet(name, ext string, one func(doc *draw.Document, i int, opt EncodeOp
 }
 
 func init() {
-	RegisterFormat(perSheet("svg", ".svg", func(doc *draw.Document, i int, _ EncodeOptions) ([]byte, error) { return SVG(doc, i) }))
+	RegisterFormat(perSheet("svg", ".svg", func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) { return SVGWith(doc, i, opt) }))
 	RegisterFormat(perSheet("png", ".png", func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) { return PNG(doc, i, opt.DPI) }))
 	RegisterFormat(Format{Name: "pdf", Ext: ".pdf",
-		Encode: func(doc *draw.Document, _ EncodeOptions) ([][]byte, error) {
-			b, err := PDF(doc)
+		Encode: func(doc *draw.Document, opt EncodeOptions) ([][]byte, error) {
+			b, err := PDFWith(doc, opt)
 			if err != nil {
 				return nil, fmt.Errorf("pdf: %w", err)
 			}

@@ -35,7 +35,7 @@ type encodePart struct {
 // document order, then format order, then sheet order, whatever order
 // the parts finished in.
 func encodeAll(path string, docs []outputDoc, opt RenderOptions) ([]pending, error) {
-	eo := out.EncodeOptions{DPI: opt.DPI}
+	eo := out.EncodeOptions{DPI: opt.DPI, Text: opt.Text}
 	var parts []encodePart
 	for i := range docs {
 		d := &docs[i]

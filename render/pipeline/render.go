@@ -22,6 +22,7 @@ import (
 type RenderOptions struct {
 	Formats []out.Format // in the order given
 	DPI     float64      // for raster formats
+	Text    out.TextMode // how SVG and PDF write words ("" is text)
 	Scale   *sheet.Scale // nil: automatic
 	Strict  bool         // refuse to draw a well with unwaived error findings
 	// Issue draws the issued set (a project may ask for it too): no rule
@@ -360,6 +361,7 @@ func (r *Run) shared(s *Setting, opt RenderOptions) incremental.Shared {
 	sh.Options = []string{
 		"formats=" + strings.Join(names, ","),
 		fmt.Sprintf("dpi=%g", opt.DPI),
+		"text=" + string(opt.Text),
 		"scale=" + scale,
 		fmt.Sprintf("strict=%v", opt.Strict),
 		fmt.Sprintf("issue=%v", opt.Issue),
