@@ -31,7 +31,7 @@ func TestUnknownTableDidYouMean(t *testing.T) {
 	src := "[units]\ndepth = \"m\"\n[well]\nid = \"X\"\npurpose = \"monitoring\"\ntotal_depth = 10.0\n[[borehole]]\ntop = 0.0\nbottom = 10.0\ndiameter = 150\n\n[[fil]]\ntop = 0.0\n"
 	_, err := Load("x.toml", []byte(src))
 	list := Errors("x.toml", err)
-	if len(list) != 1 || list[0].Error() != `x.toml:12:1: unknown key "fil" at top level (did you mean "fill"?)` {
+	if len(list) != 1 || list[0].Error() != `x.toml:12:3: unknown key "fil" at top level (did you mean "fill"?)` {
 		t.Fatalf("got %v", err)
 	}
 	if !strings.Contains(list[0].Hint, "borehole") || !strings.Contains(err.Error(), "\n\tthe file takes: ") {

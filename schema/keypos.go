@@ -5,9 +5,14 @@ import (
 	"strings"
 )
 
-// keyPos is where a key sits in a file: its line and the column its value
-// starts at.
-type keyPos struct{ line, col, keyCol int }
+// keyPos is where a key sits in a file: its line, the column its value
+// starts at and the column of its name. implicit marks a table that a
+// dotted key makes (extra in "extra.thing = 1"): it sits at that key's
+// line, unless a header or an earlier key placed it already.
+type keyPos struct {
+	line, col, keyCol int
+	implicit          bool
+}
 
 // scanKeyPositions maps every key path in a TOML text, with array-of-table
 // indices ("string[0].section[1].top"), to its position. The TOML library
@@ -15,7 +20,11 @@ type keyPos struct{ line, col, keyCol int }
 // needs to be right for files the parser has already accepted.
 func scanKeyPositions(src string) map[string]keyPos {
 	out := map[string]keyPos{}
-	scanKeys(src, false, func(path string, p keyPos) { out[path] = p })
+	scanKeys(src, false, func(path string, p keyPos) {
+		if _, seen := out[path]; !seen || !p.implicit {
+			out[path] = p
+		}
+	})
 	return out
 }
 
@@ -23,7 +32,11 @@ func scanKeyPositions(src string) map[string]keyPos {
 // Columns are needed only to report an error.
 func scanKeyLines(src string) map[string]int {
 	out := make(map[string]int, strings.Count(src, "=")+8)
-	scanKeys(src, false, func(path string, p keyPos) { out[path] = p.line })
+	scanKeys(src, false, func(path string, p keyPos) {
+		if _, seen := out[path]; !seen || !p.implicit {
+			out[path] = p.line
+		}
+	})
 	return out
 }
 
@@ -88,7 +101,7 @@ func scanLine(line string, lineNo int, current, inMulti *string, counts map[stri
 		counts[base] = idx + 1
 		*current = paths.indexed(base, idx)
 		c := strings.Index(line, "[[") + 1
-		visit(*current, keyPos{lineNo, c, c})
+		visit(*current, keyPos{line: lineNo, col: c, keyCol: c + 2 + lastSegment(trimmed[2:end])})
 		return
 	}
 	if trimmed[0] == '[' {
@@ -98,7 +111,7 @@ func scanLine(line string, lineNo int, current, inMulti *string, counts map[stri
 		}
 		*current = resolveTable(cleanKey(trimmed[1:end]), counts)
 		c := strings.IndexByte(line, '[') + 1
-		visit(*current, keyPos{lineNo, c, c})
+		visit(*current, keyPos{line: lineNo, col: c, keyCol: c + 1 + lastSegment(trimmed[1:end])})
 		return
 	}
 	if headersOnly && !strings.Contains(line, `"""`) && !strings.Contains(line, `'''`) {
@@ -133,7 +146,66 @@ func visitKey(line string, lineNo, eq int, current string, paths *pathArena, vis
 		col++
 	}
 	keyCol := len(line) - len(strings.TrimLeft(line, " \t")) + 1
-	visit(path, keyPos{lineNo, col, keyCol})
+	if strings.IndexByte(key, '.') >= 0 {
+		// extra.thing = 1: the tables it opens are at this line, each
+		// named at its own segment
+		starts := segmentStarts(line[:eq])
+		parts := strings.Split(key, ".")
+		prefix := current
+		for i, p := range parts[:len(parts)-1] {
+			if prefix == "" {
+				prefix = p
+			} else {
+				prefix = paths.join(prefix, p)
+			}
+			if i < len(starts) {
+				visit(prefix, keyPos{line: lineNo, col: starts[i] + 1, keyCol: starts[i] + 1, implicit: true})
+			}
+		}
+	}
+	visit(path, keyPos{line: lineNo, col: col, keyCol: keyCol})
+}
+
+// segmentStarts gives the offset where each segment of a dotted key
+// starts (its first character after any blank), quotes respected:
+// ` a . "b.c"` gives 1 and 5.
+func segmentStarts(raw string) []int {
+	var out []int
+	quote := byte(0)
+	want := true // looking for the next segment's first character
+	for i := 0; i < len(raw); i++ {
+		c := raw[i]
+		switch {
+		case quote != 0:
+			if c == quote {
+				quote = 0
+			}
+			continue
+		case c == ' ' || c == '\t':
+			continue
+		case c == '.':
+			want = true
+			continue
+		}
+		if want {
+			out = append(out, i)
+			want = false
+		}
+		if c == '"' || c == '\'' {
+			quote = c
+		}
+	}
+	return out
+}
+
+// lastSegment is the offset of a dotted name's last segment within it
+// (" string . sectoin " gives 10), where an unknown table is named.
+func lastSegment(raw string) int {
+	starts := segmentStarts(raw)
+	if len(starts) == 0 {
+		return 0
+	}
+	return starts[len(starts)-1]
 }
 
 // pathArena builds the key paths of one file in a single growing buffer:

@@ -457,6 +457,9 @@ func (r *reader) fill(t *table, w *Well) Fill {
 	if d, ok := t.positive("size"); ok {
 		f.Size = DiameterFrom(d, u.Diameter)
 	}
+	if d, ok := t.nonNegative("water_inside"); ok {
+		f.WaterInside, f.HasWaterInside = LengthFrom(d, u.Depth), true
+	}
 	for _, tt := range t.list("tag") {
 		tag := Tag{Pos: r.at(tt.path), Path: tt.path}
 		if _, ok := tt.m["after_bags"]; !ok {

@@ -427,3 +427,23 @@ func TestRockNamesDocumented(t *testing.T) {
 		}
 	}
 }
+
+// A key names its line and column, and a dotted key the tables it opens at
+// its own line, each at its own segment, not at the enclosing header; an
+// array table names its last segment (where a misspelt name is).
+func TestKeyPositionsOfNames(t *testing.T) {
+	src := "[[borehole]]\ntop = 0\n\n  extra . \"a\".c = 1\n[[ string . sectoin ]]\n"
+	pos := scanKeyPositions(src)
+	want := map[string]keyPos{
+		"borehole[0]":           {line: 1, col: 1, keyCol: 3},
+		"borehole[0].extra":     {line: 4, col: 3, keyCol: 3, implicit: true},
+		"borehole[0].extra.a":   {line: 4, col: 11, keyCol: 11, implicit: true},
+		"borehole[0].extra.a.c": {line: 4, col: 19, keyCol: 3},
+		"string.sectoin[0]":     {line: 5, col: 1, keyCol: 13},
+	}
+	for k, w := range want {
+		if got, ok := pos[k]; !ok || got != w {
+			t.Errorf("%s: got %+v (found %v), want %+v", k, got, ok, w)
+		}
+	}
+}

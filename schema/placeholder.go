@@ -34,7 +34,7 @@ func findPlaceholders(src string) []Placeholder {
 	}
 	var out []Placeholder
 	scanKeys(src, false, func(path string, p keyPos) {
-		if marked[p.line] {
+		if marked[p.line] && !p.implicit {
 			out = append(out, Placeholder{Path: path, Line: p.line})
 		}
 	})

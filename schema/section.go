@@ -76,8 +76,9 @@ func pathOr(p, made string) string {
 // Top <= z < Bottom.
 type CrossSection struct {
 	Interval
-	Hole    Diameter // borehole diameter; 0 when no borehole section covers the slab
-	HasHole bool
+	Hole     Diameter // borehole diameter; 0 when no borehole section covers the slab
+	HasHole  bool
+	Borehole *BoreholeSection // the borehole section giving Hole (the last written that covers the slab), nil when none
 	// Casings are the outer casings present, outermost (widest) first;
 	// each stands inside the one before it.
 	Casings []HolePipe
@@ -151,9 +152,9 @@ func covers(part Interval, mid Length) bool { return part.Top <= mid && mid < pa
 func (w *Well) slab(iv Interval, pipes []HolePipe) CrossSection {
 	mid := iv.Top + (iv.Bottom-iv.Top)/2
 	cs := CrossSection{Interval: iv}
-	for _, b := range w.Boreholes {
-		if covers(b.Interval, mid) {
-			cs.Hole, cs.HasHole = b.Diameter, true // the last written wins
+	for i := range w.Boreholes {
+		if b := &w.Boreholes[i]; covers(b.Interval, mid) {
+			cs.Hole, cs.HasHole, cs.Borehole = b.Diameter, true, b // the last written wins
 		}
 	}
 	lastString := -1

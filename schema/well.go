@@ -341,6 +341,12 @@ type Fill struct {
 	// Density is the slurry's density measured with a mud balance, in
 	// kg/m3; 0 if not recorded.
 	Density float64
+	// WaterInside is the depth of the water standing inside the casing
+	// while a grout was placed and set (0: filled to the top); HasWaterInside
+	// is false when not recorded, and the collapse load then takes the
+	// casing as empty.
+	WaterInside    Length
+	HasWaterInside bool
 	// Size is the nominal size of bentonite chips or pellets (3/8 in,
 	// say); 0 if not given.
 	Size Diameter

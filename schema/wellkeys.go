@@ -148,6 +148,7 @@ func wellFile() *TableSpec {
 			{Name: "yield", Type: TypeNumber, Bound: Positive, Unit: UnitVolume, Doc: "Volume one bag (or batch) fills in place, overriding the material default.", Example: 0.5},
 			{Name: "size", Type: TypeNumber, Bound: Positive, Unit: UnitDiameter, Doc: "Nominal size of bentonite chips or pellets, in the diameter unit (0.375 for 3/8-in chips).", Example: 0.375},
 			{Name: "density", Type: TypeNumber, Bound: Positive, Doc: "Slurry density measured with a mud balance: lb/gal in a file in feet, kg/L in one in metres.", Example: 15.2},
+			{Name: "water_inside", Type: TypeNumber, Bound: NonNegative, Unit: UnitDepth, Doc: "With grout: depth of the water standing inside the casing while the grout was placed and set (0 = filled to the top); rule COLLAPSE-LOAD takes the casing as empty when it is not given.", Example: 0.0},
 			{Name: "tag", Type: TypeTables, Doc: "Weighted-tape tags of the top of the fill.", Table: tag},
 		})}
 	openHole := &TableSpec{Doc: "An uncased interval below the casing (rock completion).", Keys: interval("open hole", false, 60.0, 150.0)}

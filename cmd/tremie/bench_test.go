@@ -12,6 +12,7 @@ import (
 
 	"github.com/BurntSushi/toml"
 
+	"github.com/tremie-dev/tremie/cmd/tremie/demo"
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/pipeline"
@@ -285,4 +286,44 @@ func BenchmarkCheckCommand1000(b *testing.B) {
 		}
 	}
 	wellsPerSecond(b, 1000)
+}
+
+// benchRenderCommand runs `tremie render WELLS -o OUT --format FORMATS
+// --force --quiet` in the process, as compare.sh times the binary (less
+// the process start-up), and reports wells per second.
+func benchRenderCommand(b *testing.B, wells string, n int, formats string) {
+	outDir := b.TempDir()
+	for b.Loop() {
+		code := run([]string{"render", wells, "-o", outDir, "--format", formats, "--force", "--quiet"}, io.Discard, io.Discard)
+		if code != exitOK && code != exitFindings {
+			b.Fatalf("exit %d", code)
+		}
+	}
+	wellsPerSecond(b, n)
+}
+
+// BenchmarkRenderDemo: the seven demo wells as SVG and PDF, the first
+// pair compare.sh times against the matplotlib reference.
+func BenchmarkRenderDemo(b *testing.B) {
+	dir := b.TempDir()
+	if err := demo.Write(dir, true); err != nil {
+		b.Fatal(err)
+	}
+	benchRenderCommand(b, dir+"/wells", 7, "svg,pdf")
+}
+
+// BenchmarkRender100: 100 synthetic wells as SVG and PDF, the second
+// pair compare.sh times.
+func BenchmarkRender100(b *testing.B) {
+	dir := b.TempDir()
+	if err := synth.Project(dir, 100); err != nil {
+		b.Fatal(err)
+	}
+	benchRenderCommand(b, dir+"/wells", 100, "svg,pdf")
+}
+
+// BenchmarkRenderDeepWell: the 1,200-ft, 150-layer gallery well as SVG,
+// PDF and PNG (target: under 1 s).
+func BenchmarkRenderDeepWell(b *testing.B) {
+	benchRenderCommand(b, "../../testdata/gallery/DS-1200.toml", 1, "svg,pdf,png")
 }

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"fmt"
 	"os"
 	"os/exec"
 	"path/filepath"
@@ -78,36 +79,67 @@ func TestVersionOfBuildInfo(t *testing.T) {
 	}
 }
 
-// A binary built from a git checkout names its commit. The Go toolchain
-// stamps it only from a checkout whose .git is a directory (not from a
-// git worktree, whose .git is a file) and unless GOFLAGS turns it off.
+// `go install ./cmd/tremie` in a git checkout gives a binary whose
+// --version names the checkout's commit. The Go toolchain stamps the
+// commit only where .git is a directory (not in a git worktree, whose .git
+// is a file) and unless GOFLAGS says -buildvcs=false (as this machine's
+// go env does), so the test copies the tracked files into a fresh
+// repository, commits them and installs from there with the toolchain's
+// default -buildvcs=auto, as a user's checkout would be built.
 func TestVersionNamesTheCommit(t *testing.T) {
 	if testing.Short() {
-		t.Skip("builds the command")
+		t.Skip("builds the command in a copy of the repository")
 	}
-	top, err := exec.Command("git", "rev-parse", "--show-toplevel").Output()
+	git, err := exec.LookPath("git")
 	if err != nil {
-		t.Skip("not a git checkout:", err)
+		t.Skip("SKIP: git is not installed, so no commit can be stamped:", err)
 	}
-	if st, err := os.Stat(filepath.Join(strings.TrimSpace(string(top)), ".git")); err != nil || !st.IsDir() {
-		t.Skip("a git worktree: the Go toolchain records no commit for it")
-	}
-	head, err := exec.Command("git", "rev-parse", "HEAD").Output()
+	files, err := exec.Command(git, "-C", "../..", "ls-files", "-z").Output()
 	if err != nil {
-		t.Skip(err)
+		t.Skip("SKIP: not in a git checkout:", err)
 	}
-	bin := filepath.Join(t.TempDir(), "tremie")
-	build := exec.Command("go", "build", "-o", bin, ".")
-	build.Env = append(os.Environ(), "GOFLAGS=-buildvcs=true")
-	if out, err := build.CombinedOutput(); err != nil {
-		t.Skipf("go build: %v\n%s", err, out)
+	repo := t.TempDir()
+	for _, f := range strings.Split(strings.TrimRight(string(files), "\x00"), "\x00") {
+		data, err := os.ReadFile(filepath.Join("../..", f))
+		if err != nil {
+			continue // deleted in the working tree
+		}
+		dst := filepath.Join(repo, filepath.FromSlash(f))
+		if err := os.MkdirAll(filepath.Dir(dst), 0o755); err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(dst, data, 0o644); err != nil {
+			t.Fatal(err)
+		}
 	}
-	out, err := exec.Command(bin, "--version").Output()
+	gitIn := func(args ...string) string {
+		cmd := exec.Command(git, append([]string{"-C", repo, "-c", "user.name=Test", "-c", "user.email=test@example.invalid", "-c", "commit.gpgsign=false"}, args...)...)
+		out, err := cmd.CombinedOutput()
+		if err != nil {
+			t.Fatalf("git %v: %v\n%s", args, err, out)
+		}
+		return strings.TrimSpace(string(out))
+	}
+	gitIn("init", "-q")
+	gitIn("add", "-A")
+	gitIn("commit", "-q", "-m", "copy of the working tree")
+	head := gitIn("rev-parse", "HEAD")
+	bin := t.TempDir()
+	install := exec.Command("go", "install", "./cmd/tremie")
+	install.Dir = repo
+	// -buildvcs=auto is the toolchain's default, which this machine's go
+	// env file turns off
+	install.Env = append(os.Environ(), "GOFLAGS=-buildvcs=auto", "GOBIN="+bin)
+	if out, err := install.CombinedOutput(); err != nil {
+		t.Fatalf("go install ./cmd/tremie: %v\n%s", err, out)
+	}
+	out, err := exec.Command(filepath.Join(bin, "tremie"), "--version").Output()
 	if err != nil {
 		t.Fatal(err)
 	}
-	if !strings.Contains(string(out), strings.TrimSpace(string(head))) {
-		t.Errorf("--version %q does not name HEAD %s", out, head)
+	want := "tremie " + Version + " (commit " + head + " of "
+	if !strings.HasPrefix(string(out), want) || strings.Contains(string(out), "uncommitted") {
+		t.Errorf("--version = %q, want it to start %q and name no uncommitted changes", out, want)
 	}
 }
 
@@ -130,24 +162,29 @@ func TestQuiet(t *testing.T) {
 	}
 }
 
-// tremie completion bash prints a script bash accepts (bash -n) and that
-// completes commands and a command's flags from the registry.
+// tremie completion SHELL prints a script its shell accepts (bash -n,
+// zsh -n, fish --no-execute) and that completes commands and a command's
+// flags from the registry. A shell that is not installed is skipped with
+// a printed message (.ci/run installs zsh and fish).
 func TestCompletion(t *testing.T) {
 	for _, sh := range []string{"bash", "zsh", "fish"} {
 		code, out, errb := runTremie("completion", sh)
 		if code != exitOK || errb != "" || !strings.Contains(out, "render") || !strings.Contains(out, "strict") {
 			t.Errorf("completion %s: exit %d, stderr %q", sh, code, errb)
 		}
-		if path, err := exec.LookPath(sh); err == nil {
-			f := filepath.Join(t.TempDir(), "c")
-			os.WriteFile(f, []byte(out), 0o644)
-			flag := "-n"
-			if sh == "fish" {
-				flag = "--no-execute"
-			}
-			if b, err := exec.Command(path, flag, f).CombinedOutput(); err != nil {
-				t.Errorf("%s %s rejects the script: %v\n%s", sh, flag, err, b)
-			}
+		path, err := exec.LookPath(sh)
+		if err != nil {
+			t.Logf("SKIP: %s is not installed; its completion script is not syntax-checked", sh)
+			continue
+		}
+		f := filepath.Join(t.TempDir(), "c")
+		os.WriteFile(f, []byte(out), 0o644)
+		flag := "-n"
+		if sh == "fish" {
+			flag = "--no-execute"
+		}
+		if b, err := exec.Command(path, flag, f).CombinedOutput(); err != nil {
+			t.Errorf("%s %s rejects the script: %v\n%s", sh, flag, err, b)
 		}
 	}
 	bash, err := exec.LookPath("bash")
@@ -178,3 +215,77 @@ func TestCompletion(t *testing.T) {
 		t.Errorf("completion tcsh: exit %d", code)
 	}
 }
+
+// The zsh and fish scripts complete as the bash one does, tried in the
+// shells themselves: fish's complete -C lists what a command line
+// completes to; zsh runs the script from its fpath under compinit in a
+// pseudo-terminal (zsh/zpty), types the words and a TAB, and a key bound
+// to a widget writes the edited line to a file.
+func TestCompletionInShells(t *testing.T) {
+	cases := []struct{ typed, zshLine, fishWant string }{
+		{"tremie ren", "tremie render ", "render\tdraw well files"},
+		{"tremie render --st", "tremie render --strict ", "--strict\trefuse to draw"},
+		{"tremie completion z", "tremie completion zsh ", "zsh"},
+		{"tremie help bo", "tremie help book ", "book"},
+		{"tremie check --form", "tremie check --format ", "--format\toutput format"},
+	}
+	t.Run("fish", func(t *testing.T) {
+		fish, err := exec.LookPath("fish")
+		if err != nil {
+			t.Skip("SKIP: fish is not installed")
+		}
+		_, script, _ := runTremie("completion", "fish")
+		f := filepath.Join(t.TempDir(), "tremie.fish")
+		os.WriteFile(f, []byte(script), 0o644)
+		for _, c := range cases {
+			out, err := exec.Command(fish, "--no-config", "-c", "source $argv[1]; complete -C $argv[2]", f, c.typed).CombinedOutput()
+			if err != nil {
+				t.Fatalf("%s: %v\n%s", c.typed, err, out)
+			}
+			lines := strings.Split(strings.TrimSpace(string(out)), "\n")
+			if len(lines) != 1 || !strings.HasPrefix(lines[0], c.fishWant) {
+				t.Errorf("fish: %s<TAB> = %q, want one completion starting %q", c.typed, out, c.fishWant)
+			}
+		}
+	})
+	t.Run("zsh", func(t *testing.T) {
+		zsh, err := exec.LookPath("zsh")
+		if err != nil {
+			t.Skip("SKIP: zsh is not installed")
+		}
+		if err := exec.Command(zsh, "-f", "-c", "zmodload zsh/zpty").Run(); err != nil {
+			t.Skip("SKIP: zsh has no zsh/zpty module:", err)
+		}
+		dir := t.TempDir()
+		_, script, _ := runTremie("completion", "zsh")
+		os.WriteFile(filepath.Join(dir, "_tremie"), []byte(script), 0o644)
+		driver := filepath.Join(dir, "drive.zsh")
+		os.WriteFile(driver, []byte(zshDriver), 0o644)
+		for i, c := range cases {
+			out := filepath.Join(dir, fmt.Sprintf("line%d", i))
+			b, err := exec.Command(zsh, "-f", driver, dir, out, c.typed).CombinedOutput()
+			if err != nil {
+				t.Fatalf("%s: %v\n%s", c.typed, err, b)
+			}
+			if got := strings.TrimSuffix(string(b), "\n"); got != c.zshLine {
+				t.Errorf("zsh: %s<TAB> = %q, want %q", c.typed, got, c.zshLine)
+			}
+		}
+	})
+}
+
+// zshDriver types $3 and a TAB into an interactive zsh whose fpath holds
+// $1/_tremie, then Ctrl-X, bound to write the edited line to $2, and
+// prints that line (waiting at most 10 s).
+const zshDriver = `zmodload zsh/zpty || exit 3
+zpty z 'zsh -f -i'
+zpty -w z "PS1=''; fpath=($1 \$fpath); autoload -Uz compinit; compinit -u -D"
+zpty -w z "dump() { print -r -- \"\$BUFFER\" > $2; }; zle -N dump; bindkey '^X' dump"
+zpty -w -n z "$3"$'\t\C-x'
+for i in {1..100}; do
+  [[ -s $2 ]] && break
+  sleep 0.1
+done
+zpty -d z
+cat $2
+`

@@ -63,3 +63,39 @@ func TestProjectYieldsReachCheck(t *testing.T) {
 		t.Errorf("MW-1 not flagged with the project's yields:\n%s\n%s", after, errb)
 	}
 }
+
+// A yields file gives a grout's mix, and the grout-mix lines use it. Neat
+// cement at 1.25 ft3 per 94-lb sack with 6.0 US gal of water (an invented
+// mix sheet) weighs (94 + 6.0 x 8.3417) / (1.25 x 7.48052) = 144.05 lb /
+// 9.3507 gal = 15.41 lb/gal (water at 62.4 lb/ft3, 7.48052 gal/ft3, NIST
+// HB 44); MW-2's mud balance read 15.3 lb/gal, 15.3 / 15.405 - 1 = -0.7 %.
+// Cement-bentonite stated at 13.9 lb/gal with no water is shown as
+// stated.
+func TestProjectYieldsGroutMix(t *testing.T) {
+	dir := t.TempDir()
+	if err := demo.Write(dir, false); err != nil {
+		t.Fatal(err)
+	}
+	put(t, dir, "site.yields.toml", "[yields]\n[yields.neat-cement]\nyield = 1.25\nbag_mass = 94\nwater = 6.0\n\n[yields.cement-bentonite]\nyield = 1.6\nbag_mass = 94\ndensity = 13.9\n")
+	prj := filepath.Join(dir, "project.toml")
+	data, _ := os.ReadFile(prj)
+	if err := os.WriteFile(prj, []byte(strings.Replace(string(data), "[project]\n", "[project]\nyields = \"site.yields.toml\"\n", 1)), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	_, out, errb := runTremie("quantities", filepath.Join(dir, "wells", "MW-2.toml"), filepath.Join(dir, "wells", "MW-1.toml"))
+	for _, s := range []string{
+		"grout mix, fill 3: 6.000 gal water per 94-lb bag, expected 15.41 lb/gal; measured 15.3 lb/gal (-0.7 %)",
+		"grout mix, fill 4: expected 13.90 lb/gal (stated in the yields file)",
+	} {
+		if !strings.Contains(out, s) {
+			t.Errorf("output lacks %q:\n%s\n%s", s, out, errb)
+		}
+	}
+	// water for a dry material, or water without a bag, is an error with its line
+	put(t, dir, "site.yields.toml", "[yields]\n[yields.bentonite-chips]\nyield = 0.7\nwater = 1\n\n[yields.neat-cement]\nyield = 1.2\nwater = 5\n")
+	code, _, errb := runTremie("quantities", dir)
+	if code != exitInput || !strings.Contains(errb, `site.yields.toml:4:1: unknown key "water" in [yields.bentonite-chips]`) ||
+		!strings.Contains(errb, "site.yields.toml:8:") || !strings.Contains(errb, "needs the bag") {
+		t.Errorf("exit %d, stderr %q", code, errb)
+	}
+}

@@ -24,10 +24,29 @@ func init() {
 	})
 }
 
-// quantitiesCaution goes with every quantities report.
-const quantitiesCaution = "Figures and checks support, and never replace, the review of a licensed professional and " +
+// quantitiesCautionBase goes with every quantities report, followed by
+// which rule thresholds were in force (quantitiesCaution).
+const quantitiesCautionBase = "Figures and checks support, and never replace, the review of a licensed professional and " +
 	"the governing local well code. Yields marked common practice or from memory are defaults: set them from the " +
-	"product sheets (--yields FILE); rule thresholds are defaults to be set to the local rules."
+	"product sheets (--yields FILE); "
+
+// quantitiesCaution is the report's caution, true to the thresholds in
+// force: "rule thresholds are defaults ..." only where no profile is, else
+// each profile named once, in order of first use.
+func quantitiesCaution(run *pipeline.Run) string {
+	var notes []string
+	seen := map[string]bool{}
+	for _, s := range run.Settings {
+		if n := s.Profile.ThresholdNote(); !seen[n] {
+			seen[n] = true
+			notes = append(notes, n)
+		}
+	}
+	if len(notes) == 0 {
+		notes = append(notes, (*rules.Profile)(nil).ThresholdNote())
+	}
+	return quantitiesCautionBase + strings.Join(notes, "; ") + "."
+}
 
 // wellQuantities is one readable well's report and its reconciliation
 // findings.
@@ -36,6 +55,9 @@ type wellQuantities struct {
 	Report   *quantity.Report
 	Findings []rules.Finding
 	Volumes  []quantity.WellVolume // water standing in each string, for purging
+	// Collapse are the grout columns' loads on PVC casing, with the
+	// project's yields (rule COLLAPSE-LOAD judges them).
+	Collapse []quantity.CollapseLoad
 }
 
 func runQuantities(args []string, stdout, stderr io.Writer) int {
@@ -76,7 +98,8 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 			continue
 		}
 		// the checks of placed amounts and tags, with the same yields
-		wq := wellQuantities{File: w.Path, Report: w.Quantities, Findings: w.Findings, Volumes: quantity.WellVolumes(w.Well, *porosity)}
+		wq := wellQuantities{File: w.Path, Report: w.Quantities, Findings: w.Findings, Volumes: quantity.WellVolumes(w.Well, *porosity),
+			Collapse: quantity.CollapseLoads(w.Well, w.Setting.Profile.Yields)}
 		for _, r := range wq.Report.Rows {
 			if r.Err != nil {
 				fmt.Fprintf(stderr, "%s:%d: %v\n", w.Path, w.Well.Line(r.Fill.Path), r.Err)
@@ -89,15 +112,15 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 		reports = append(reports, w.Quantities)
 	}
 	order := quantity.Totals(reports, *contingency)
-	profiles := run.ProfileLabels()
+	profiles, caution := run.ProfileLabels(), quantitiesCaution(run)
 	var werr error
 	switch *format {
 	case "json":
-		werr = writeQuantitiesJSON(stdout, wells, order, profiles)
+		werr = writeQuantitiesJSON(stdout, wells, order, profiles, caution)
 	case "csv":
-		werr = writeQuantitiesCSV(stdout, wells, order, profiles)
+		werr = writeQuantitiesCSV(stdout, wells, order, profiles, caution)
 	default:
-		werr = writeQuantitiesText(stdout, wells, order, profiles)
+		werr = writeQuantitiesText(stdout, wells, order, profiles, caution)
 	}
 	if werr != nil {
 		fmt.Fprintf(stderr, "tremie quantities: writing the report: %v\n", werr)
@@ -111,7 +134,7 @@ type total = quantity.Line
 
 // --- text ---
 
-func writeQuantitiesText(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
+func writeQuantitiesText(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string, caution string) error {
 	ew := &errWriter{w: w}
 	fmt.Fprintf(ew, "Reconciliation checked with %s.\n\n", strings.Join(profiles, "; "))
 	for i, wq := range wells {
@@ -125,7 +148,7 @@ func writeQuantitiesText(w io.Writer, wells []wellQuantities, order *quantity.Or
 		writeOrderText(ew, order)
 	}
 	fmt.Fprintln(ew)
-	fmt.Fprintln(ew, quantitiesCaution)
+	fmt.Fprintln(ew, caution)
 	return ew.err
 }
 
@@ -214,6 +237,10 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 	for _, v := range wq.Volumes {
 		fmt.Fprintf(w, "  well volume, %s: %s\n", v.String, wellVolumeLine(v, u))
 	}
+	for _, c := range wq.Collapse {
+		fmt.Fprintf(w, "  collapse load, fill %d: %s; net %s, %s of the rating (ASTM F480; rule COLLAPSE-LOAD)\n",
+			fillNumber(r.Well, c.Fills[len(c.Fills)-1]), c.Describe(u), quantity.FormatPressure(c.Differential(), u), schema.TrimFloat(c.Fraction(), 2))
+	}
 	if line := screenFlowLine(r.Well); line != "" {
 		fmt.Fprintf(w, "  screens: %s\n", line)
 	}
@@ -234,11 +261,17 @@ func mixLine(row quantity.Row, u schema.Units) string {
 		return ""
 	}
 	want, unit := schema.SlurryDensityIn(d, u)
-	water := quantity.Number(row.Yield.Water.In(schema.USGallons)) + " gal"
-	if !u.Imperial() {
-		water = quantity.Number(row.Yield.Water.In(schema.Litres)) + " L"
+	s := fmt.Sprintf("expected %.2f %s", want, unit)
+	if row.Yield.Water > 0 {
+		water := quantity.Number(row.Yield.Water.In(schema.USGallons)) + " gal"
+		if !u.Imperial() {
+			water = quantity.Number(row.Yield.Water.In(schema.Litres)) + " L"
+		}
+		s = fmt.Sprintf("%s water per %s, %s", water, quantity.FormatBag(row.Yield.BagMass, u), s)
 	}
-	s := fmt.Sprintf("%s water per %s, expected %.2f %s", water, quantity.FormatBag(row.Yield.BagMass, u), want, unit)
+	if row.Yield.Stated > 0 {
+		s += " (stated in the yields file)"
+	}
 	if row.Fill.Density > 0 {
 		got, _ := schema.SlurryDensityIn(row.Fill.Density, u)
 		s += fmt.Sprintf("; measured %s %s (%+.1f %%)", schema.TrimFloat(got, 2), unit, (row.Fill.Density/d-1)*100)
@@ -411,6 +444,24 @@ type jsonWell struct {
 	Pipes       []jsonPipe `json:"pipes"`
 	// WellVolumes are in volume_unit, levels in depth_unit.
 	WellVolumes []jsonWellVolume `json:"well_volumes"`
+	// CollapseLoads are in pressure_unit (psi, or kPa in a well in metres).
+	CollapseLoads []jsonCollapse `json:"collapse_loads"`
+}
+
+// jsonCollapse is a grout column's worst load on PVC casing.
+type jsonCollapse struct {
+	Fill         int     `json:"fill"` // the column's lowest fill, from 1
+	Top          float64 `json:"top"`
+	Bottom       float64 `json:"bottom"`
+	At           float64 `json:"at"`
+	Pipe         string  `json:"pipe"`
+	Outside      float64 `json:"outside"`
+	Inside       float64 `json:"inside"`
+	WaterStated  bool    `json:"water_inside_stated"`
+	Differential float64 `json:"differential"`
+	Rating       float64 `json:"rating"`
+	Fraction     float64 `json:"fraction_of_rating"`
+	Unit         string  `json:"pressure_unit"`
 }
 
 type jsonWellVolume struct {
@@ -433,6 +484,9 @@ type jsonMix struct {
 	Expected    float64  `json:"expected_density"`
 	Measured    *float64 `json:"measured_density,omitempty"`
 	DensityUnit string   `json:"density_unit"`
+	// Stated: the expected density is the yields file's, not worked from
+	// the mix; water_per_bag is 0 where the file gives no water.
+	Stated bool `json:"density_stated"`
 }
 
 type jsonFill struct {
@@ -531,8 +585,8 @@ func r4(v float64) float64 { return math.Round(v*1e4) / 1e4 }
 
 func ptr[T any](v T) *T { return &v }
 
-func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
-	out := jsonQuantities{Caution: quantitiesCaution, Profiles: profiles, Contingency: order.Contingency, Wells: []jsonWell{}, Totals: jsonTotals(order.Lines),
+func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string, caution string) error {
+	out := jsonQuantities{Caution: caution, Profiles: profiles, Contingency: order.Contingency, Wells: []jsonWell{}, Totals: jsonTotals(order.Lines),
 		OrderingFor: append([]string{}, order.For...), ForPlanned: order.Planned, AsBuiltFor: append([]string{}, order.AsBuilt...),
 		AsBuilt: jsonTotals(order.AsBuiltLines), Findings: []rules.Finding{}}
 	for _, wq := range wells {
@@ -541,7 +595,17 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 		p, s := quantity.VolumeUnits(u)
 		mu := quantity.MassUnit(u)
 		jw := jsonWell{File: wq.File, Well: r.Well.ID, DepthUnit: string(u.Depth), VolumeUnit: string(p), VolumeUnit2: string(s), MassUnit: string(mu),
-			Fills: []jsonFill{}, Pipes: []jsonPipe{}, WellVolumes: []jsonWellVolume{}}
+			Fills: []jsonFill{}, Pipes: []jsonPipe{}, WellVolumes: []jsonWellVolume{}, CollapseLoads: []jsonCollapse{}}
+		for _, c := range wq.Collapse {
+			k, unit := 1/quantity.PsiPa, "psi"
+			if !u.Imperial() {
+				k, unit = 1e-3, "kPa"
+			}
+			jw.CollapseLoads = append(jw.CollapseLoads, jsonCollapse{Fill: fillNumber(r.Well, c.Fills[len(c.Fills)-1]),
+				Top: r4(c.Top.In(u.Depth)), Bottom: r4(c.Bottom.In(u.Depth)), At: r4(c.At.In(u.Depth)), Pipe: c.Pipe.Label(),
+				Outside: r4(c.Outside * k), Inside: r4(c.Inside * k), WaterStated: c.WaterStated, Differential: r4(c.Differential() * k),
+				Rating: r4(c.Rating * k), Fraction: r4(c.Fraction()), Unit: unit})
+		}
 		designs := map[int]quantity.PackDesign{}
 		for _, d := range quantity.PackDesigns(r.Well) {
 			designs[d.Index] = d
@@ -591,7 +655,7 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 				}
 			}
 			if d, ok := row.Yield.Density(); ok && row.HasYield && f.Yield <= 0 {
-				m := &jsonMix{Water: r4(row.Yield.Water.In(schema.USGallons)), WaterUnit: "gal"}
+				m := &jsonMix{Water: r4(row.Yield.Water.In(schema.USGallons)), WaterUnit: "gal", Stated: row.Yield.Stated > 0}
 				if !u.Imperial() {
 					m.Water, m.WaterUnit = r4(row.Yield.Water.In(schema.Litres)), "L"
 				}
@@ -633,7 +697,7 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 var quantitiesCSVHeader = []string{"kind", "file", "well", "fill", "material", "within", "top", "bottom", "depth_unit",
 	"calculated", "volume_unit", "yield", "yield_basis", "bag_mass", "mass_unit", "bags_needed", "bags_to_order", "bags_placed", "placed", "ratio", "note"}
 
-func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string) error {
+func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string, cautionText string) error {
 	cw := csv.NewWriter(w)
 	cw.Write(quantitiesCSVHeader)
 	num := func(v float64) string { return strconv.FormatFloat(r4(v), 'f', -1, 64) }
@@ -681,7 +745,7 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Ord
 	lines("order", order.Lines, order.For)
 	lines("as-built", order.AsBuiltLines, order.AsBuilt)
 	caution := make([]string, len(quantitiesCSVHeader))
-	caution[0], caution[20] = "caution", quantitiesCaution
+	caution[0], caution[20] = "caution", cautionText
 	prof := make([]string, len(quantitiesCSVHeader))
 	prof[0], prof[20] = "profile", strings.Join(profiles, "; ")
 	cw.Write(prof)
@@ -722,4 +786,14 @@ func countOf(n int, word string) string {
 		return "1 " + word
 	}
 	return strconv.Itoa(n) + " " + word + "s"
+}
+
+// fillNumber is a fill's number in its well, from 1, as the reports count.
+func fillNumber(w *schema.Well, f *schema.Fill) int {
+	for i := range w.Fills {
+		if &w.Fills[i] == f {
+			return i + 1
+		}
+	}
+	return 0
 }

@@ -436,3 +436,20 @@ func TestQuantitiesPackDesign(t *testing.T) {
 		}
 	}
 }
+
+// The collapse load of the COLLAPSE-LOAD fixture (worked in its comment:
+// 95.4 psi of neat cement on SDR 26 PVC rated 59.8 psi by ASTM F480),
+// and of the passing one, whose casing was kept full of water (120 ft x
+// 0.4333 psi/ft = 52.0 psi inside).
+func TestQuantitiesCollapseLoad(t *testing.T) {
+	dir := filepath.Join("..", "..", "schema", "rules", "testdata", "COLLAPSE-LOAD")
+	_, out, errs := runQ(filepath.Join(dir, "fail.toml"))
+	if !strings.Contains(out, "collapse load, fill 3: neat cement 2–120 ft at 15.56 lb/gal (its mix), on string \"FX-1\" riser (PVC, rated 59.8 psi) at 120 ft: 95.4 psi outside, the casing taken as empty") ||
+		!strings.Contains(out, "net 95.4 psi, 1.59 of the rating") {
+		t.Errorf("output:\n%s%s", out, errs)
+	}
+	_, out, _ = runQ(filepath.Join(dir, "pass.toml"))
+	if !strings.Contains(out, "less 52 psi of water inside from 0 ft; net 43.4 psi, 0.73 of the rating") {
+		t.Errorf("output:\n%s", out)
+	}
+}

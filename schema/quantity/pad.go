@@ -28,8 +28,9 @@ func PadInterval(s schema.Surface) (schema.Interval, bool) {
 // it. A flush pad is poured into the top of the hole, whose bore the
 // annular fills and the vault already account for, so the footprint is
 // the wider of the hole and the vault; a pad on grade surrounds the
-// protective casing (or, without one, the widest pipe at ground).
-func PadVolume(w *schema.Well) (schema.Volume, error) {
+// protective casing (or, without one, the widest pipe standing in it).
+// What stands where is read from the well's cross-sections (secs).
+func PadVolume(w *schema.Well, secs *schema.Sections) (schema.Volume, error) {
 	s := w.Surface
 	iv, ok := PadInterval(s)
 	if !ok {
@@ -41,8 +42,8 @@ func PadVolume(w *schema.Well) (schema.Volume, error) {
 	}
 	var foot schema.Diameter
 	if s.Kind == schema.FlushMount {
-		if b, ok := w.BoreholeAt(0); ok {
-			foot = b.Diameter
+		if cs := secs.At(0); cs.HasHole {
+			foot = cs.Hole
 		}
 		if v := s.Vault; v != nil {
 			foot = max(foot, v.Diameter)
@@ -50,7 +51,7 @@ func PadVolume(w *schema.Well) (schema.Volume, error) {
 	} else if pc := s.Protective; pc != nil && pc.Diameter > 0 {
 		foot = pc.Diameter
 	} else {
-		foot = widestAtGround(w)
+		foot = widestWithin(secs, iv)
 	}
 	slab := float64(p.Length) * float64(p.Width)
 	hole := circle(foot)
@@ -61,20 +62,16 @@ func PadVolume(w *schema.Well) (schema.Volume, error) {
 	return schema.Volume((slab - hole) * float64(iv.Thickness())), nil
 }
 
-// widestAtGround is the outside diameter of the widest pipe that passes
-// ground level.
-func widestAtGround(w *schema.Well) schema.Diameter {
+// widestWithin is the outside diameter of the widest pipe standing
+// anywhere in iv (top <= z < bottom, as every part covers its depths).
+func widestWithin(secs *schema.Sections, iv schema.Interval) schema.Diameter {
 	var d schema.Diameter
-	for _, c := range w.Casings {
-		if c.Top < 0 && c.Bottom > 0 {
-			d = max(d, c.Pipe.OD)
+	for _, cs := range secs.Within(iv.Top, iv.Bottom) {
+		for _, p := range cs.Casings {
+			d = max(d, p.OD)
 		}
-	}
-	for _, st := range w.Strings {
-		for _, sec := range st.Sections {
-			if sec.Top < 0 && sec.Bottom > 0 {
-				d = max(d, sec.Pipe.OD)
-			}
+		for _, p := range cs.Strings {
+			d = max(d, p.OD)
 		}
 	}
 	return d
@@ -83,14 +80,14 @@ func widestAtGround(w *schema.Well) schema.Diameter {
 // padRow is the pad as a row of concrete, counted in bags like a fill;
 // Index is -1 and Fill.Path is PadPath. The pad records no amount of its
 // own: its concrete is counted with the concrete fill's, if any.
-func padRow(w *schema.Well, y *Yields) *Row {
+func padRow(w *schema.Well, secs *schema.Sections, y *Yields) *Row {
 	iv, ok := PadInterval(w.Surface)
 	if !ok {
 		return nil
 	}
 	f := schema.Fill{Interval: iv, Material: schema.Concrete, Path: PadPath, Pos: w.Surface.Pad.Pos}
 	r := &Row{Index: -1, Fill: f}
-	r.Calculated, r.Err = PadVolume(w)
+	r.Calculated, r.Err = PadVolume(w, secs)
 	if r.Err != nil {
 		r.Err = fmt.Errorf("%s: %w", PadPath, r.Err)
 		r.Calculated = 0

@@ -85,7 +85,7 @@ func Compute(w *schema.Well, y *Yields) *Report {
 	for i, f := range w.Fills {
 		r.Rows = append(r.Rows, row(w, secs, y, i, f))
 	}
-	r.Pad = padRow(w, y)
+	r.Pad = padRow(w, secs, y)
 	for _, p := range w.HolePipes() {
 		pv := PipeVolume{Path: p.Path, Interval: p.Interval}
 		if p.Casing != nil {

@@ -28,12 +28,18 @@ type Yield struct {
 	// (the bag, and bentonite or sand added to it); 0 for a dry material.
 	Water  schema.Volume
 	Solids schema.Mass
+	// Stated is the slurry's expected density in kg/m3 as a yields file
+	// states it (its mix sheet's figure); 0 works it out from the mix.
+	Stated float64
 }
 
-// Density is the slurry's expected density in kg/m3: the mix's mass over
-// its yield, water at 62.4 lb/ft3 (999.6 kg/m3); false for a dry
-// material or a yield with no mix.
+// Density is the slurry's expected density in kg/m3: the density a yields
+// file states, else the mix's mass over its yield, water at 62.4 lb/ft3
+// (999.6 kg/m3); false for a dry material or a yield with no mix.
 func (y Yield) Density() (float64, bool) {
+	if y.Stated > 0 {
+		return y.Stated, true
+	}
 	if y.Water <= 0 || y.Solids <= 0 || y.Volume <= 0 {
 		return 0, false
 	}

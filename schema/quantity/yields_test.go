@@ -225,7 +225,7 @@ func TestLoadYieldsReportsEveryError(t *testing.T) {
 	list := schema.Errors("", err)
 	want := []string{
 		p + `:2:10: yields volume unit must be one of ft3, gal, L, m3, not "cuft"`,
-		p + `:4:1: unknown key "filter-pak" in [yields] (did you mean "filter-pack"?)`,
+		p + `:4:9: unknown key "filter-pak" in [yields] (did you mean "filter-pack"?)`,
 		p + `:9:1: unknown key "bagmass" in [yields.neat-cement] (did you mean "bag_mass"?)`,
 	}
 	if len(list) != len(want) {
@@ -257,5 +257,32 @@ func TestLoadYields(t *testing.T) {
 	}
 	if _, err := LoadYields(filepath.Join(dir, "missing.toml")); err == nil || !strings.Contains(err.Error(), "missing.toml") {
 		t.Errorf("missing file: %v", err)
+	}
+}
+
+// A yields file in kilograms gives a grout's mix in litres and its density
+// in kg/L: 25 kg of cement with 11 L of water in 19 L of slurry is (25 +
+// 11 x 0.99955) / 19 = 1.8945 kg/L (water at 62.4 lb/ft3 = 999.55 kg/m3);
+// a stated density wins over the mix's.
+func TestParseYieldsMix(t *testing.T) {
+	y, err := ParseYields("y.toml", []byte("[yields]\nvolume = \"L\"\nmass = \"kg\"\n[yields.neat-cement]\nyield = 19\nbag_mass = 25\nwater = 11\n[yields.sand-cement]\nyield = 40\nbag_mass = 25\nsolids = 75\nwater = 18\ndensity = 1.9\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	neat, _ := y.Get(schema.NeatCement)
+	near(t, "water L", neat.Water.In(schema.Litres), 11, 1e-12)
+	near(t, "solids kg", float64(neat.Solids), 25, 1e-12)
+	d, ok := neat.Density()
+	if !ok {
+		t.Fatal("no density")
+	}
+	near(t, "neat kg/m3", d, 1894.5, 1e-4)
+	sc, _ := y.Get(schema.SandCement)
+	if d, _ := sc.Density(); d != 1900 || float64(sc.Solids) != 75 {
+		t.Errorf("sand-cement stated density %v, solids %v", d, sc.Solids)
+	}
+	// a 50-kg bag keeps the stated density and doubles the water
+	if s := sc.Scaled(50); s.Stated != 1900 || math.Abs(s.Water.In(schema.Litres)-36) > 1e-9 {
+		t.Errorf("scaled: %+v", s)
 	}
 }

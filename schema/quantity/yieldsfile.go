@@ -17,6 +17,13 @@ import (
 //	yield = 0.45          # volume one bag fills in place
 //	bag_mass = 50         # the bag it is for; omit for "per bag as placed"
 //	note = "supplier data sheet, 2026"
+//
+//	[yields.neat-cement]  # a grout may give its mix
+//	yield = 1.18
+//	bag_mass = 94
+//	water = 5.2           # mix water per bag, in water_unit (gal with lb, L with kg)
+//	solids = 94           # dry mass per bag with additives (default bag_mass)
+//	density = 15.6        # expected slurry density, lb/gal with lb, kg/L with kg
 
 // LoadYields reads a TOML file that holds a [yields] table and returns the
 // defaults overridden by it. A file without the table is an error: the user
@@ -66,6 +73,7 @@ func parseYields(name string, data []byte, whole bool) (*Yields, bool, error) {
 
 func readYields(doc *schema.Doc, t *schema.Table, y *Yields) {
 	vu, mu := schema.CubicFeet, schema.Pounds
+	wu := schema.VolumeUnit("")
 	if s := t.Str("volume"); s != "" {
 		switch u := schema.VolumeUnit(s); u {
 		case schema.CubicFeet, schema.USGallons, schema.Litres, schema.CubicMetres:
@@ -82,8 +90,22 @@ func readYields(doc *schema.Doc, t *schema.Table, y *Yields) {
 			doc.Errorf("yields.mass", "yields mass unit must be lb or kg, not %q", s)
 		}
 	}
+	if s := t.Str("water_unit"); s != "" {
+		switch u := schema.VolumeUnit(s); u {
+		case schema.CubicFeet, schema.USGallons, schema.Litres, schema.CubicMetres:
+			wu = u
+		default:
+			doc.Errorf("yields.water_unit", "yields water unit must be one of ft3, gal, L, m3, not %q", s)
+		}
+	}
+	if wu == "" { // US gallons with pounds, litres with kilograms
+		wu = schema.USGallons
+		if mu == schema.Kilograms {
+			wu = schema.Litres
+		}
+	}
 	for _, k := range t.Keys() {
-		if k == "volume" || k == "mass" {
+		if k == "volume" || k == "mass" || k == "water_unit" {
 			continue
 		}
 		path := "yields." + k
@@ -103,6 +125,7 @@ func readYields(doc *schema.Doc, t *schema.Table, y *Yields) {
 		if n, ok := positiveNumber(doc, e, "bag_mass"); ok {
 			entry.BagMass = schema.MassFrom(n, mu)
 		}
+		readMix(doc, e, &entry, schema.Material(k), wu, mu)
 		e.Done()
 		if entry.Volume > 0 {
 			y.Set(schema.Material(k), entry)
@@ -124,4 +147,36 @@ func positiveNumber(doc *schema.Doc, t *schema.Table, k string) (float64, bool) 
 		return 0, false
 	}
 	return n, true
+}
+
+// readMix reads a grout's mix from its yields entry: water and solids per
+// bag, and the expected density (lb/gal where masses are in pounds, kg/L
+// where in kilograms). A dry material takes none.
+func readMix(doc *schema.Doc, e *schema.Table, entry *Yield, m schema.Material, wu schema.VolumeUnit, mu schema.MassUnit) {
+	has := e.Has("water") || e.Has("solids") || e.Has("density")
+	if !has {
+		return
+	}
+	path := e.Path()
+	if m.Group() != schema.GroutGroup {
+		return // not in a dry material's key table: Done reports the key
+	}
+	if n, ok := positiveNumber(doc, e, "water"); ok {
+		entry.Water = schema.VolumeFrom(n, wu)
+	}
+	if n, ok := positiveNumber(doc, e, "solids"); ok {
+		entry.Solids = schema.MassFrom(n, mu)
+	} else if !e.Has("solids") {
+		entry.Solids = entry.BagMass
+	}
+	if entry.Water > 0 && entry.Solids <= 0 {
+		doc.Errorf(path+".water", "water per bag needs the bag: give bag_mass or solids")
+	}
+	if n, ok := positiveNumber(doc, e, "density"); ok {
+		kg := n * 1000 // kg/L
+		if mu == schema.Pounds {
+			kg = float64(schema.MassFrom(n, schema.Pounds)) / float64(schema.VolumeFrom(1, schema.USGallons))
+		}
+		entry.Stated = kg
+	}
 }

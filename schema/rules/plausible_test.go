@@ -76,3 +76,23 @@ func TestUnitSlipInchHole(t *testing.T) {
 		t.Errorf("10-in hole: %d findings", n)
 	}
 }
+
+// The hole a ratio is reported against is the one the cross-section
+// stands in (schema.Sections: the last borehole section written that
+// covers a depth, each covering top <= z < bottom). A 150 mm pilot hole to
+// 12 m reamed, as written after it, to "2000" mm (a slip for 200) down to
+// 9 m: 2000 / 60.325 = 33.2 times the DN50 string (OD 60.325 mm, ASTM
+// D1785) over 0-9 m, reported at the reamed section's diameter (line 16),
+// not at the pilot's; below the boundary at 9 m the 150 mm pilot hole
+// (2.5 times) is plausible.
+func TestHoleRatioAtTheSectionInForce(t *testing.T) {
+	src := strings.Replace(metricWell("150", "0.25"), "[[string]]\n", "[[borehole]]\ntop = 0.0\nbottom = 9.0\ndiameter = 2000\n[[string]]\n", 1)
+	w := load(t, src)
+	fs := findings(w, nil, "SIZE-PLAUSIBLE")
+	if len(fs) != 1 {
+		t.Fatalf("%d findings, want 1: %+v", len(fs), fs)
+	}
+	if fs[0].Line != 16 || !strings.Contains(fs[0].Message, "33.2 times") || !strings.Contains(fs[0].Message, "hole at 0–9 m") {
+		t.Errorf("finding at line %d: %s; want line 16, 33.2 times, the hole at 0–9 m", fs[0].Line, fs[0].Message)
+	}
+}

@@ -142,7 +142,7 @@ func (p *Pass) checkHoleRatio(maxHole schema.Diameter) {
 		hole  schema.Diameter
 		pipes string
 	}
-	found := map[int]*worst{}
+	found := map[*schema.BoreholeSection]*worst{} // the borehole section each slab's hole comes from
 	segs, sections := p.segments()
 	for i, seg := range segs {
 		cs := sections[i]
@@ -154,7 +154,7 @@ func (p *Pass) checkHoleRatio(maxHole schema.Diameter) {
 		if r <= maxRatio {
 			continue
 		}
-		b := boreholeIndex(p.Well, mid(seg))
+		b := cs.Borehole
 		if f := found[b]; f == nil || r > f.ratio {
 			names := ""
 			for j, q := range out {
@@ -167,11 +167,11 @@ func (p *Pass) checkHoleRatio(maxHole schema.Diameter) {
 		}
 	}
 	for b := range p.Well.Boreholes {
-		f := found[b]
+		bh := &p.Well.Boreholes[b]
+		f := found[bh]
 		if f == nil {
 			continue
 		}
-		bh := p.Well.Boreholes[b]
 		if bh.Diameter > maxHole {
 			continue // already reported as wider than any drilled well
 		}
@@ -183,14 +183,4 @@ func (p *Pass) checkHoleRatio(maxHole schema.Diameter) {
 		p.Reportf(key(bh.Path, "diameter"), depths(bh.Interval), "the %s hole at %s is %s times the %s OD of %s standing in it (more than %s): %s",
 			p.Dia(f.hole), p.span(bh.Interval), schema.TrimFloat(f.ratio, 1), p.Dia(f.od), f.pipes, schema.TrimFloat(maxRatio, 1), cause)
 	}
-}
-
-// boreholeIndex is the index of the borehole section holding depth d.
-func boreholeIndex(w *schema.Well, d schema.Length) int {
-	for i, b := range w.Boreholes {
-		if b.Contains(d) {
-			return i
-		}
-	}
-	return -1
 }
