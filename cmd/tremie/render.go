@@ -34,6 +34,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	issue := fset.Bool("issue", false, "draw the issued set: no rule IDs or file lines, a revision block and a seal space; wells with unwaived error findings are refused")
 	profilePath := fset.String("profile", "", "rule profile TOML `file` (default: the project's, else the defaults)")
 	yieldsPath := fset.String("yields", "", "TOML `file` with a [yields] table overriding the yields (default: the project's)")
+	textMode := fset.String("text", "text", "how SVG and PDF write words: `mode` text (searchable) or outlines (for viewers that ignore embedded fonts)")
 	dpi := fset.Float64("dpi", 150, "PNG resolution in `dots` per inch")
 	force := fset.Bool("force", false, "redraw every well, even those unchanged, and replace files tremie did not write")
 	paths, code, ok := fset.parse(args)
@@ -48,6 +49,9 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	}
 	opt := pipeline.RenderOptions{DPI: *dpi, Strict: *strict, Issue: *issue, Force: *force, Version: Version}
 	var err error
+	if opt.Text, err = out.ParseTextMode(*textMode); err != nil {
+		return fset.usageError("--text: %v", err)
+	}
 	if opt.Formats, err = out.ParseFormats(*formats); err != nil {
 		return fset.usageError("--format: %v", err)
 	}

@@ -24,7 +24,8 @@ type Format struct {
 
 // EncodeOptions are the settings a format may use.
 type EncodeOptions struct {
-	DPI float64 // raster resolution (PNG)
+	DPI  float64  // raster resolution (PNG)
+	Text TextMode // how vector formats write words; "" is TextAsText
 }
 
 var (
@@ -98,12 +99,12 @@ func perSheet(name string, one func(doc *draw.Document, i int, opt EncodeOptions
 
 func init() {
 	RegisterFormat(Format{Name: "svg", Ext: ".svg", PerSheet: true,
-		Encode: perSheet("svg", func(doc *draw.Document, i int, _ EncodeOptions) ([]byte, error) { return SVG(doc, i) })})
+		Encode: perSheet("svg", func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) { return SVGWith(doc, i, opt) })})
 	RegisterFormat(Format{Name: "png", Ext: ".png", PerSheet: true,
 		Encode: perSheet("png", func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) { return PNG(doc, i, opt.DPI) })})
 	RegisterFormat(Format{Name: "pdf", Ext: ".pdf",
-		Encode: func(doc *draw.Document, _ EncodeOptions) ([][]byte, error) {
-			b, err := PDF(doc)
+		Encode: func(doc *draw.Document, opt EncodeOptions) ([][]byte, error) {
+			b, err := PDFWith(doc, opt)
 			if err != nil {
 				return nil, fmt.Errorf("pdf: %w", err)
 			}

@@ -27,14 +27,15 @@ type painter struct {
 	r      canvas.Renderer
 	height float64 // page height, points
 	fonts  *fontSet
+	textAs TextMode
 	err    error
 }
 
 // paintPage draws every item of p on r; it reports the first item that
 // cannot be drawn (a non-finite number, undecodable image bytes) and draws
 // the rest.
-func paintPage(r canvas.Renderer, p *draw.Page, fonts *fontSet) error {
-	pt := &painter{r: r, height: p.Height, fonts: fonts}
+func paintPage(r canvas.Renderer, p *draw.Page, fonts *fontSet, text TextMode) error {
+	pt := &painter{r: r, height: p.Height, fonts: fonts, textAs: text}
 	pt.items(p.Items, nil, "")
 	return pt.err
 }
@@ -269,9 +270,22 @@ func (p *painter) text(t draw.Text, clip *draw.Rect, path string) {
 	case draw.End:
 		shift = -w
 	}
+	// Spaces at the ends go: SVG viewers drop them (xml:space default), so
+	// a run that starts with one is moved by its width instead.
+	if trimmed := strings.TrimLeft(s, " "); len(trimmed) < len(s) {
+		lead := w - draw.TextWidth(t.Font, t.Size, trimmed)
+		shift += lead
+		w -= lead
+		s = trimmed
+	}
+	if trimmed := strings.TrimRight(s, " "); len(trimmed) < len(s) {
+		w = draw.TextWidth(t.Font, t.Size, trimmed)
+		s = trimmed
+	}
 	at := p.pos(t.At.X, t.At.Y)
 	m := canvas.Identity.Translate(at.X, at.Y).Rotate(t.Rotate).Translate(shift*mmPerPt, 0)
 
+	var cut *canvas.Rect // the clip, where it cuts the text
 	if clip != nil {
 		asc, desc := draw.Ascent(t.Font, t.Size), draw.Descent(t.Font, t.Size)
 		box := canvas.Rect{X0: 0, Y0: -desc * mmPerPt, X1: w * mmPerPt, Y1: asc * mmPerPt}.Transform(m)
@@ -283,30 +297,38 @@ func (p *painter) text(t draw.Text, clip *draw.Rect, path string) {
 		default:
 			// Cut glyph outlines: the visible part stays exact, at the cost
 			// of this one label not being searchable text.
-			cf, err := p.fonts.font(t.Font)
-			if err != nil {
-				p.fail(path, "%v", err)
-				return
-			}
-			outline, _, err := cf.Face(t.Size, rgba(col)).ToPath(s)
-			if err != nil {
-				p.fail(path, "text %q: %v", t.Role, err)
-				return
-			}
-			st := canvas.DefaultStyle
-			st.Fill = canvas.Paint{Color: rgba(col)}
-			if part := clipToRect(outline.Transform(m), cr); !part.Empty() {
-				p.r.RenderPath(part, st, canvas.Identity)
-			}
-			return
+			cut = &cr
 		}
 	}
-	line, err := p.fonts.line(t.Font, t.Size, rgba(col), s)
+	if cut == nil && !p.textAs.outlines() {
+		line, err := p.fonts.line(t.Font, t.Size, rgba(col), s)
+		if err != nil {
+			p.fail(path, "%v", err)
+			return
+		}
+		p.r.RenderText(line, m)
+		return
+	}
+	cf, err := p.fonts.font(t.Font)
 	if err != nil {
 		p.fail(path, "%v", err)
 		return
 	}
-	p.r.RenderText(line, m)
+	outline, _, err := cf.Face(t.Size, rgba(col)).ToPath(s)
+	if err != nil {
+		p.fail(path, "text %q: %v", t.Role, err)
+		return
+	}
+	outline = outline.Transform(m)
+	if cut != nil {
+		outline = clipToRect(outline, *cut)
+	}
+	if outline.Empty() {
+		return
+	}
+	st := canvas.DefaultStyle
+	st.Fill = canvas.Paint{Color: rgba(col)}
+	p.r.RenderPath(outline, st, canvas.Identity)
 }
 
 // cleanText makes a one-line string: line and paragraph breaks and other

@@ -14,7 +14,10 @@ import (
 // PDF writes every page of doc into one PDF. Text is real text in
 // embedded, subset TrueType faces with a Unicode map, so it can be
 // searched and copied. The creation date is doc.Date.
-func PDF(doc *draw.Document) ([]byte, error) {
+func PDF(doc *draw.Document) ([]byte, error) { return PDFWith(doc, EncodeOptions{}) }
+
+// PDFWith writes doc as PDF with the text mode of opt.
+func PDFWith(doc *draw.Document, opt EncodeOptions) ([]byte, error) {
 	if doc == nil || len(doc.Pages) == 0 {
 		return nil, errors.New("pdf: the document has no pages")
 	}
@@ -38,7 +41,7 @@ func PDF(doc *draw.Document) ([]byte, error) {
 		if i > 0 {
 			r.NewPage(p.Width*mmPerPt, p.Height*mmPerPt)
 		}
-		if err := paintPage(pdfRenderer{r}, p, fonts); err != nil {
+		if err := paintPage(pdfRenderer{r}, p, fonts, opt.Text); err != nil {
 			return nil, fmt.Errorf("pdf page %d: %w", i+1, err)
 		}
 	}

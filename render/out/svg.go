@@ -15,7 +15,10 @@ import (
 // SVG writes page i (0-based) of doc as a self-contained SVG: text stays
 // text, set in the embedded faces, which travel inside the file as
 // base64 font data. Sizes are in millimetres.
-func SVG(doc *draw.Document, i int) ([]byte, error) {
+func SVG(doc *draw.Document, i int) ([]byte, error) { return SVGWith(doc, i, EncodeOptions{}) }
+
+// SVGWith writes page i as SVG with the text mode of opt.
+func SVGWith(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) {
 	p, err := pageOf(doc, i)
 	if err != nil {
 		return nil, fmt.Errorf("svg: %w", err)
@@ -30,7 +33,7 @@ func SVG(doc *draw.Document, i int) ([]byte, error) {
 	r := svg.New(&buf, p.Width*mmPerPt, p.Height*mmPerPt, &opts)
 	fonts := takeFonts()
 	defer fonts.giveBack()
-	if err := paintPage(r, p, fonts); err != nil {
+	if err := paintPage(r, p, fonts, opt.Text); err != nil {
 		return nil, fmt.Errorf("svg page %d: %w", i+1, err)
 	}
 	if err := r.Close(); err != nil {

@@ -22,6 +22,7 @@ import (
 type RenderOptions struct {
 	Formats []out.Format // in the order given
 	DPI     float64      // for raster formats
+	Text    out.TextMode // how SVG and PDF write words ("" is text)
 	Scale   *sheet.Scale // nil: automatic
 	Strict  bool         // refuse to draw a well with unwaived error findings
 	// Issue draws the issued set (a project may ask for it too): no rule
@@ -185,7 +186,7 @@ func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt Rend
 	var files []pending
 	counts := map[string]int{} // sheet files per extension, for the stale-sheet sweep
 	for _, f := range opt.Formats {
-		enc, err := f.Encode(doc, out.EncodeOptions{DPI: opt.DPI})
+		enc, err := f.Encode(doc, out.EncodeOptions{DPI: opt.DPI, Text: opt.Text})
 		if err != nil {
 			return &OutputError{fmt.Errorf("%s: %w", w.Path, err)}
 		}
@@ -238,7 +239,7 @@ func (r *Run) featureFiles(w *Well, base string, opt RenderOptions) ([]pending, 
 	}
 	var files []pending
 	for _, f := range opt.Formats {
-		enc, err := f.Encode(doc, out.EncodeOptions{DPI: opt.DPI})
+		enc, err := f.Encode(doc, out.EncodeOptions{DPI: opt.DPI, Text: opt.Text})
 		if err != nil {
 			return nil, &OutputError{fmt.Errorf("%s: feature summary: %w", w.Path, err)}
 		}
@@ -394,6 +395,7 @@ func (r *Run) shared(s *Setting, opt RenderOptions) incremental.Shared {
 	sh.Options = []string{
 		"formats=" + strings.Join(names, ","),
 		fmt.Sprintf("dpi=%g", opt.DPI),
+		"text=" + string(opt.Text),
 		"scale=" + scale,
 		fmt.Sprintf("strict=%v", opt.Strict),
 		fmt.Sprintf("issue=%v", opt.Issue),

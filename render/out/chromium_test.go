@@ -1,0 +1,202 @@
+package out_test
+
+import (
+	"bytes"
+	"context"
+	"fmt"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"strings"
+	"testing"
+	"time"
+
+	"github.com/chromedp/chromedp"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/out"
+)
+
+// chromiumDPI is the resolution both rasters are made at: Chromium at a
+// device scale of 2 (CSS pixels are 1/96 in), pdftoppm at 192 dpi.
+const chromiumDPI = 192
+
+// Stated tolerance of a browser raster against the PDF page, after the
+// 3 × 3 blur. Two rasterisers of one drawing differ at every edge: Skia
+// sets glyphs and hairlines a little darker than poppler, so on the
+// demo's sheets the mean difference measured 1.1-3.5 of 255, the worst
+// half-inch tile 8.5-11.8 and the share of plainly differing pixels
+// 1.1-3.2 %. The same sheet with its text in a substitute face measured
+// 7.9, 40.5 and 8.8 % (TestChromiumComparisonSeesAFallbackFont): a
+// misplaced or re-set label piles its difference up in its tile.
+const (
+	maxMeanAbs = 5.0  // per channel, of 255
+	maxTile    = 20.0 // mean |Δ| of the worst tile, of 255
+	maxDiffer  = 0.05 // share of pixels differing by more than diffLevel
+)
+
+// TestChromiumMatchesPDF opens each demo sheet's SVG in headless Chromium
+// (Debian's chromium package, the browser most readers use) and compares
+// its raster with the same page of the PDF rasterised by pdftoppm
+// (poppler), within the stated tolerance. TREMIE_LOOK=DIR keeps both
+// rasters of each sheet.
+func TestChromiumMatchesPDF(t *testing.T) {
+	exe := tool(t, "Chromium-vs-PDF raster test", "chromium", "chromium", "chromium-browser", "google-chrome")
+	pdftoppm := tool(t, "Chromium-vs-PDF raster test", "poppler-utils", "pdftoppm")
+	browser := startChromium(t, exe)
+	for _, nd := range demoDocs(t) {
+		pdf, err := out.PDF(nd.doc)
+		if err != nil {
+			t.Fatal(err)
+		}
+		for i := range nd.doc.Pages {
+			name := fmt.Sprintf("%s sheet %d", nd.name, i+1)
+			svg, err := out.SVG(nd.doc, i)
+			if err != nil {
+				t.Fatal(err)
+			}
+			web := browser.raster(t, svg, nd.doc.Pages[i])
+			paper := pdfPage(t, pdftoppm, pdf, i)
+			look(t, name, "chromium", web)
+			look(t, name, "pdf", paper)
+			d, err := compareRasters(planesOf(decodePNG(t, web)), planesOf(decodePNG(t, paper)))
+			if err != nil {
+				t.Fatalf("%s: %v", name, err)
+			}
+			t.Logf("%s: mean |Δ| %.2f of 255, worst tile %.1f, %.2f %% of pixels differ by more than %d (ink %.1f %% / %.1f %%)",
+				name, d.meanAbs, d.worstTile, 100*d.differ, diffLevel, 100*d.inkA, 100*d.inkB)
+			if d.inkA < 0.02 || d.inkB < 0.02 {
+				t.Errorf("%s: a raster is nearly blank (ink %.2f %% / %.2f %%)", name, 100*d.inkA, 100*d.inkB)
+			}
+			if d.meanAbs > maxMeanAbs || d.worstTile > maxTile || d.differ > maxDiffer {
+				t.Errorf("%s: Chromium's raster differs from the PDF page: mean |Δ| %.2f (max %.1f), worst tile %.1f (max %.0f), %.2f %% of pixels (max %.0f %%)",
+					name, d.meanAbs, maxMeanAbs, d.worstTile, maxTile, 100*d.differ, 100*maxDiffer)
+			}
+		}
+	}
+}
+
+// TestChromiumComparisonSeesAFallbackFont shows the comparison has teeth:
+// the same sheet with its text set in a face the SVG does not carry (as a
+// viewer that ignores embedded fonts would) falls outside the tolerance.
+func TestChromiumComparisonSeesAFallbackFont(t *testing.T) {
+	exe := tool(t, "Chromium-vs-PDF raster test", "chromium", "chromium", "chromium-browser", "google-chrome")
+	pdftoppm := tool(t, "Chromium-vs-PDF raster test", "poppler-utils", "pdftoppm")
+	browser := startChromium(t, exe)
+	nd := demoDocs(t)[1] // MW-1
+	svg, err := out.SVG(nd.doc, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pdf, err := out.PDF(nd.doc)
+	if err != nil {
+		t.Fatal(err)
+	}
+	// Name a family no machine has in every text style: Chromium then
+	// falls back to its default face, as rsvg-convert does.
+	swapped := svg
+	for _, fam := range []string{"GoRegular", "Go-Bold", "Go-Italic", "GoMono"} {
+		swapped = bytes.ReplaceAll(swapped, []byte("px "+fam+";"), []byte("px NoSuchFace;"))
+	}
+	if bytes.Equal(swapped, svg) {
+		t.Fatal("found no font names to swap: the SVG's text styles changed")
+	}
+	paper := pdfPage(t, pdftoppm, pdf, 0)
+	web := browser.raster(t, swapped, nd.doc.Pages[0])
+	look(t, nd.name+" substitute", "chromium", web)
+	look(t, nd.name+" substitute", "pdf", paper)
+	d, err := compareRasters(planesOf(decodePNG(t, web)), planesOf(decodePNG(t, paper)))
+	if err != nil {
+		t.Fatal(err)
+	}
+	t.Logf("%s in a substitute face: mean |Δ| %.2f, worst tile %.1f, %.2f %% of pixels differ", nd.name, d.meanAbs, d.worstTile, 100*d.differ)
+	if d.worstTile <= maxTile {
+		t.Errorf("the comparison did not see the substitute face (worst tile %.1f, max %.0f)", d.worstTile, maxTile)
+	}
+}
+
+// chromiumTab is one headless browser tab.
+type chromiumTab struct {
+	ctx context.Context
+	dir string
+}
+
+func startChromium(t *testing.T, exe string) *chromiumTab {
+	t.Helper()
+	opts := append(chromedp.DefaultExecAllocatorOptions[:], chromedp.ExecPath(exe), chromedp.NoSandbox,
+		chromedp.DisableGPU, chromedp.Flag("hide-scrollbars", true), chromedp.Flag("font-render-hinting", "none"))
+	actx, acancel := chromedp.NewExecAllocator(context.Background(), opts...)
+	t.Cleanup(acancel)
+	ctx, cancel := chromedp.NewContext(actx)
+	t.Cleanup(cancel)
+	// The first action starts the browser and must run without a timeout.
+	if err := chromedp.Do(ctx, chromedp.Navigate("about:blank")); err != nil {
+		t.Fatalf("start Chromium: %v", err)
+	}
+	return &chromiumTab{ctx: ctx, dir: t.TempDir()}
+}
+
+// raster opens an SVG file in the tab at the page's size and returns a
+// screenshot at chromiumDPI once its fonts have loaded.
+func (c *chromiumTab) raster(t *testing.T, svg []byte, p *draw.Page) []byte {
+	t.Helper()
+	path := filepath.Join(c.dir, "sheet.svg")
+	if err := os.WriteFile(path, svg, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	// CSS pixels: 96 per inch, 72 points per inch.
+	w, h := int(p.Width*96/72+0.5), int(p.Height*96/72+0.5)
+	ctx, cancel := context.WithTimeout(c.ctx, 60*time.Second)
+	defer cancel()
+	err := chromedp.Do(ctx,
+		chromedp.EmulateViewport(int64(w), int64(h), chromedp.EmulateScale(chromiumDPI/96.0)),
+		chromedp.Navigate("file://"+path+"?"+fmt.Sprint(time.Now().UnixNano())),
+	)
+	if err == nil {
+		// The embedded faces load asynchronously, even from data URLs.
+		_, err = chromedp.Run(ctx, chromedp.Evaluate[bool](`document.fonts.ready.then(() => true)`, chromedp.EvalAwaitPromise))
+	}
+	var shot []byte
+	if err == nil {
+		shot, err = chromedp.Run(ctx, chromedp.CaptureScreenshot())
+	}
+	if err != nil {
+		t.Fatalf("Chromium: %v", err)
+	}
+	return shot
+}
+
+// pdfPage rasterises page i (0-based) of a PDF with pdftoppm.
+func pdfPage(t *testing.T, pdftoppm string, pdf []byte, i int) []byte {
+	t.Helper()
+	dir := t.TempDir()
+	in := filepath.Join(dir, "doc.pdf")
+	if err := os.WriteFile(in, pdf, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	n := fmt.Sprint(i + 1)
+	cmd := exec.Command(pdftoppm, "-r", fmt.Sprint(chromiumDPI), "-png", "-singlefile", "-f", n, "-l", n, in, filepath.Join(dir, "page"))
+	if msg, err := cmd.CombinedOutput(); err != nil {
+		t.Fatalf("pdftoppm: %v: %s", err, msg)
+	}
+	b, err := os.ReadFile(filepath.Join(dir, "page.png"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	return b
+}
+
+// look keeps a raster in $TREMIE_LOOK, to open and compare by eye.
+func look(t *testing.T, sheet, viewer string, png []byte) {
+	dir := os.Getenv("TREMIE_LOOK")
+	if dir == "" {
+		return
+	}
+	name := strings.NewReplacer(".toml", "", " ", "-").Replace(sheet) + "-" + viewer + ".png"
+	if err := os.MkdirAll(dir, 0o755); err != nil {
+		t.Fatal(err)
+	}
+	if err := os.WriteFile(filepath.Join(dir, name), png, 0o644); err != nil {
+		t.Fatal(err)
+	}
+}

@@ -1,0 +1,236 @@
+package out_test
+
+import (
+	"fmt"
+	"image"
+	"math"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/render/out"
+)
+
+// rsvgDPI is the resolution of the rsvg-convert rasters: a 6-pt label's
+// stems are then two or more pixels wide, so every glyph has fully
+// covered pixels whose colour is exactly its own text's.
+const rsvgDPI = 200
+
+// TestRsvgTextStaysInItsBox opens every demo sheet in rsvg-convert
+// (librsvg: an independent SVG renderer; version 2.54 ignores @font-face
+// and sets text in a fontconfig fallback, here a wider face) and checks,
+// with text written as outlines (--text outlines), that no text leaves
+// the box layout measured for it. Written as text, it reports how many
+// would: the reason the option exists.
+func TestRsvgTextStaysInItsBox(t *testing.T) {
+	rsvg := tool(t, "rsvg-convert text-box test", "librsvg2-bin", "rsvg-convert")
+	docs := demoDocs(t)
+	for _, mode := range []out.TextMode{out.TextAsOutlines, out.TextAsText} {
+		total, escaped := 0, 0
+		for _, nd := range docs {
+			for i, p := range nd.doc.Pages {
+				name := fmt.Sprintf("%s sheet %d (%s)", nd.name, i+1, mode)
+				inked := inkTexts(t, p)
+				img := rsvgRaster(t, rsvg, inked.page, mode)
+				look(t, name, "rsvg", img)
+				escapes := inked.escapes(decodePNG(t, img))
+				total += len(inked.boxes)
+				escaped += len(escapes)
+				if mode != out.TextAsOutlines {
+					continue
+				}
+				for _, e := range escapes {
+					t.Errorf("%s: %s", name, e)
+				}
+			}
+		}
+		t.Logf("rsvg-convert, text as %s: %d of %d texts leave their box", mode, escaped, total)
+	}
+}
+
+// TestRsvgCheckSeesATextOutOfItsBox shows the check has teeth: one label
+// moved 12 pt right of where its box says is reported, and only it.
+func TestRsvgCheckSeesATextOutOfItsBox(t *testing.T) {
+	rsvg := tool(t, "rsvg-convert text-box test", "librsvg2-bin", "rsvg-convert")
+	p := demoDocs(t)[1].doc.Pages[0] // MW-1
+	inked := inkTexts(t, p)
+	moved := -1
+	for i, it := range inked.page.Items {
+		if tx, ok := it.(draw.Text); ok && tx.Rotate == 0 && len(tx.S) > 10 {
+			tx.At.X += 12
+			inked.page.Items[i] = tx
+			moved = i
+			break
+		}
+	}
+	if moved < 0 {
+		t.Fatal("no text to move")
+	}
+	escapes := inked.escapes(decodePNG(t, rsvgRaster(t, rsvg, inked.page, out.TextAsOutlines)))
+	if len(escapes) != 1 {
+		t.Fatalf("%d texts reported out of their box, want the 1 moved: %v", len(escapes), escapes)
+	}
+	t.Logf("reported: %s", escapes[0])
+}
+
+// inkedPage is a sheet's text alone, each text in a colour of its own,
+// with the box layout measured for it.
+type inkedPage struct {
+	page  *draw.Page
+	boxes []textBox
+}
+
+type textBox struct {
+	s string
+	r draw.Rect // page points: the text's extent, cut by its clip
+}
+
+// inkLevels is the step between the colour levels that name a text: 16
+// levels a channel, 4,095 texts a sheet. A pixel blended from two texts
+// seldom lands on the grid in all three channels.
+const inkStep = 17
+
+func inkOf(k int) draw.Color {
+	return draw.Color{R: uint8(inkStep * (k % 16)), G: uint8(inkStep * (k / 16 % 16)), B: uint8(inkStep * (k / 256 % 16)), A: 255}
+}
+
+// indexOf reads a text's number back from a fully covered pixel.
+func indexOf(r, g, b uint8) (int, bool) {
+	if r%inkStep != 0 || g%inkStep != 0 || b%inkStep != 0 {
+		return 0, false
+	}
+	k := int(r/inkStep) + 16*int(g/inkStep) + 256*int(b/inkStep)
+	return k, k > 0
+}
+
+// inkTexts keeps a page's texts, under their clips, in their colours.
+func inkTexts(t *testing.T, p *draw.Page) *inkedPage {
+	t.Helper()
+	ip := &inkedPage{page: &draw.Page{Width: p.Width, Height: p.Height}}
+	ip.page.Items = ip.keep(p.Items, nil)
+	if len(ip.boxes) >= 16*16*16 {
+		t.Fatalf("%d texts on one sheet: more than the colours that name them", len(ip.boxes))
+	}
+	return ip
+}
+
+func (ip *inkedPage) keep(items []draw.Item, clip *draw.Rect) []draw.Item {
+	var kept []draw.Item
+	for _, it := range items {
+		switch it := it.(type) {
+		case draw.Text:
+			if strings.TrimSpace(it.S) == "" || it.Size <= 0 {
+				continue
+			}
+			r := textExtent(it)
+			if clip != nil {
+				r = out.Intersect(r, *clip)
+			}
+			ip.boxes = append(ip.boxes, textBox{s: it.S, r: r})
+			it.Color = inkOf(len(ip.boxes))
+			kept = append(kept, it)
+		case draw.Clip:
+			c := it.Rect
+			if clip != nil {
+				c = out.Intersect(c, *clip)
+			}
+			if inner := ip.keep(it.Items, &c); len(inner) > 0 {
+				kept = append(kept, draw.Clip{Rect: it.Rect, Items: inner})
+			}
+		}
+	}
+	return kept
+}
+
+// textExtent is the rectangle layout gives a text: its measured width
+// from the anchor, ascent above and descent below the baseline, turned
+// by its rotation (degrees, counter-clockwise on the page).
+func textExtent(tx draw.Text) draw.Rect {
+	w := draw.TextWidth(tx.Font, tx.Size, tx.S)
+	x0 := 0.0
+	switch tx.Anchor {
+	case draw.Middle:
+		x0 = -w / 2
+	case draw.End:
+		x0 = -w
+	}
+	asc, desc := draw.Ascent(tx.Font, tx.Size), draw.Descent(tx.Font, tx.Size)
+	sin, cos := math.Sincos(tx.Rotate * math.Pi / 180)
+	minX, minY, maxX, maxY := math.Inf(1), math.Inf(1), math.Inf(-1), math.Inf(-1)
+	for _, c := range [][2]float64{{x0, -asc}, {x0 + w, -asc}, {x0, desc}, {x0 + w, desc}} {
+		// local y points down the page; a turn counter-clockwise on the
+		// page is clockwise in these coordinates
+		x := tx.At.X + c[0]*cos + c[1]*sin
+		y := tx.At.Y - c[0]*sin + c[1]*cos
+		minX, maxX = math.Min(minX, x), math.Max(maxX, x)
+		minY, maxY = math.Min(minY, y), math.Max(maxY, y)
+	}
+	return draw.Rect{X: minX, Y: minY, W: maxX - minX, H: maxY - minY}
+}
+
+// slackPt is how far a fully covered pixel's centre may lie outside its
+// text's box: one pixel of rounding and a quarter point for glyphs that
+// reach past the face's ascent (accents) or the advance (italics).
+const slackPt = 72.0/rsvgDPI + 0.25
+
+// escapes names each text with fully covered pixels outside its box,
+// with how far the furthest lies.
+func (ip *inkedPage) escapes(img image.Image) []string {
+	b := img.Bounds()
+	far := make([]float64, len(ip.boxes)+1)
+	count := make([]int, len(ip.boxes)+1)
+	for y := b.Min.Y; y < b.Max.Y; y++ {
+		for x := b.Min.X; x < b.Max.X; x++ {
+			r, g, bl, a := img.At(x, y).RGBA()
+			if a != 0xffff {
+				continue
+			}
+			k, ok := indexOf(uint8(r>>8), uint8(g>>8), uint8(bl>>8))
+			if !ok || k > len(ip.boxes) {
+				continue
+			}
+			box := ip.boxes[k-1].r
+			px := (float64(x-b.Min.X) + 0.5) * 72 / rsvgDPI
+			py := (float64(y-b.Min.Y) + 0.5) * 72 / rsvgDPI
+			d := math.Max(math.Max(box.X-px, px-box.Right()), math.Max(box.Y-py, py-box.Bottom()))
+			if d > slackPt {
+				count[k]++
+				far[k] = math.Max(far[k], d)
+			}
+		}
+	}
+	var out []string
+	for k := 1; k < len(count); k++ {
+		if count[k] >= 3 { // a stray pixel or two is rounding
+			out = append(out, fmt.Sprintf("%q leaves its box by %.1f pt (%d pixels)", ip.boxes[k-1].s, far[k], count[k]))
+		}
+	}
+	return out
+}
+
+// rsvgRaster writes the page as SVG and rasterises it with rsvg-convert
+// on a transparent ground.
+func rsvgRaster(t *testing.T, rsvg string, p *draw.Page, mode out.TextMode) []byte {
+	t.Helper()
+	svg, err := out.SVGWith(&draw.Document{Pages: []*draw.Page{p}}, 0, out.EncodeOptions{Text: mode})
+	if err != nil {
+		t.Fatal(err)
+	}
+	dir := t.TempDir()
+	in, res := filepath.Join(dir, "sheet.svg"), filepath.Join(dir, "sheet.png")
+	if err := os.WriteFile(in, svg, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	dpi := fmt.Sprint(rsvgDPI)
+	if msg, err := exec.Command(rsvg, "--dpi-x", dpi, "--dpi-y", dpi, "-o", res, in).CombinedOutput(); err != nil {
+		t.Fatalf("rsvg-convert: %v: %s", err, msg)
+	}
+	b, err := os.ReadFile(res)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return b
+}
