@@ -63,4 +63,3 @@ func ClipSegment(r Rect, p, q Point) (a, b Point, ok bool) {
 	}
 	return Point{X: x0 + t0*dx, Y: y0 + t0*dy}, Point{X: x0 + t1*dx, Y: y0 + t1*dy}, true
 }
-

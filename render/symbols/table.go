@@ -450,7 +450,9 @@ func madeGround(p *pen) {
 }
 
 // unclassified: sparse dashed diagonals, a pattern that claims nothing.
-func unclassified(p *pen) { p.hatch(135, diagonal(7), markWidth, []float64{diagonal(7) / 2, diagonal(7) / 2}) }
+func unclassified(p *pen) {
+	p.hatch(135, diagonal(7), markWidth, []float64{diagonal(7) / 2, diagonal(7) / 2})
+}
 
 // unrecognisedFill: the same, leaning the other way, for a fill material.
 func unrecognisedFill(p *pen) {
