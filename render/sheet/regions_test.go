@@ -104,11 +104,13 @@ func TestEveryTextInsideItsRegion(t *testing.T) {
 				bad := 0
 				for i, p := range doc.Pages {
 					notesSheet := i >= len(l.sheets)
+					var placed []draw.Text
 					p.Walk(func(it draw.Item) {
 						tx, ok := it.(draw.Text)
 						if !ok || bad > 5 {
 							return
 						}
+						placed = append(placed, tx)
 						r := textRect(tx)
 						region, known := l.textRegion(tx.Role)
 						if notesSheet && known && region != l.header && region != l.caution {
@@ -129,10 +131,36 @@ func TestEveryTextInsideItsRegion(t *testing.T) {
 							}
 						}
 					})
+					for _, o := range overlappingContinueLines(placed) {
+						bad++
+						t.Errorf("%s sheet %d: %s", tag, i+1, o)
+					}
 				}
 			}
 		}
 	}
+}
+
+// overlappingContinueLines names each "continue" line of a box whose
+// text touches another text: it must stand clear below the last row.
+func overlappingContinueLines(placed []draw.Text) []string {
+	var out []string
+	for _, c := range placed {
+		if c.Role != "notes-continued" && c.Role != "amounts-continued" {
+			continue
+		}
+		cr := textRect(c)
+		for _, o := range placed {
+			if o == c {
+				continue
+			}
+			or := textRect(o)
+			if or.X < cr.Right() && cr.X < or.Right() && or.Y < cr.Bottom()+0.5 && cr.Y < or.Bottom()+0.5 {
+				out = append(out, fmt.Sprintf("%q touches %s %q", c.S, o.Role, o.S))
+			}
+		}
+	}
+	return out
 }
 
 // The 1,200-ft well's 150 descriptions are all readable at the automatic
