@@ -86,6 +86,7 @@ func TestEveryTextInsideItsRegion(t *testing.T) {
 	wells = append(wells, galleryWells(t)...)
 	cw, cin := crowdedWell()
 	wells = append(wells, corpusWell{"crowded", cw, cin})
+	wells = append(wells, absurdWells(t)...)
 	for _, name := range []string{"letter", "tabloid", "a4", "a3"} {
 		for _, land := range []bool{false, true} {
 			tpl, err := templates.Load(name, land)
@@ -139,6 +140,22 @@ func TestEveryTextInsideItsRegion(t *testing.T) {
 			}
 		}
 	}
+}
+
+// absurdWells are the demo's MW-1 with a borehole diameter that a slip of
+// units or a stray keystroke gives (the rules report it): the sheet
+// still draws, and its long numbers stay in their columns.
+func absurdWells(t *testing.T) []corpusWell {
+	var out []corpusWell
+	for _, d := range []float64{1.2345678901234525e14, 1e300} {
+		w := *demoWells(t)["MW-1.toml"].w
+		w.Boreholes = append([]schema.BoreholeSection(nil), w.Boreholes...)
+		for i := range w.Boreholes {
+			w.Boreholes[i].Diameter = schema.DiameterFrom(d, schema.Inches)
+		}
+		out = append(out, corpusWell{fmt.Sprintf("MW-1 with a %g-in hole", d), &w, Inputs{Findings: rules.Check(&w, nil), Quantities: quantity.Compute(&w, nil)}})
+	}
+	return out
 }
 
 // overlappingContinueLines names each "continue" line of a box whose
