@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"fmt"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -55,5 +56,55 @@ func TestCheckReportsEverySettingsError(t *testing.T) {
 	}
 	if !strings.Contains(out, `"file": "`+prof+`"`) || strings.Count(out, `"message"`) != 3 {
 		t.Errorf("profile errors missing from the JSON report:\n%s", out)
+	}
+}
+
+// A project file, the profile and the yields file it names, with three
+// mistakes each (testdata/nine-mistakes): one run reports all nine,
+// sorted by file, line and column, in the one printed form on stderr and
+// in the JSON report, though the project file itself is rejected.
+func TestCheckReportsProjectProfileAndYieldsErrorsTogether(t *testing.T) {
+	t.Chdir(filepath.Join("testdata", "nine-mistakes"))
+	want := []string{
+		`project.toml:4:9: units must be "ft" or "m", not "yd"`,
+		`project.toml:7:1: unknown key "landscpe" in [project] (did you mean "landscape"?)`,
+		`project.toml:8:1: unknown key "wels" in [project] (did you mean "wells"?)`,
+		`site.profile.toml:2:9: units must be "ft" or "m" (got yd)`,
+		`site.profile.toml:4:1: unknown rule "SEAL-THICKNES" (tremie rules lists them) (did you mean "SEAL-THICKNESS"?)`,
+		`site.profile.toml:8:6: rule ANNULAR-SPACE has no parameter "mn" (it takes severity, min, min_pack) (did you mean "min"?)`,
+		`site.yields.toml:5:9: unknown key "filter-pak" in [yields] (did you mean "filter-pack"?)`,
+		`site.yields.toml:9:9: yield must be a positive number, not -1`,
+		`site.yields.toml:10:1: unknown key "bag_mas" in [yields.bentonite-chips] (did you mean "bag_mass"?)`,
+	}
+	code, _, errb := runTremie("check", ".")
+	var lines []string
+	for _, l := range strings.Split(strings.TrimSpace(errb), "\n") {
+		if !strings.HasPrefix(l, "\t") { // a hint
+			lines = append(lines, l)
+		}
+	}
+	if code != exitInput || strings.Join(lines, "\n") != strings.Join(want, "\n") {
+		t.Errorf("exit %d, stderr:\n%s\nwant the lines:\n%s", code, errb, strings.Join(want, "\n"))
+	}
+	code, out, _ := runTremie("check", "--format", "json", ".")
+	var report []struct {
+		File   string `json:"file"`
+		Errors []struct {
+			Line    int    `json:"line"`
+			Col     int    `json:"col"`
+			Message string `json:"message"`
+		} `json:"errors"`
+	}
+	if err := json.Unmarshal([]byte(out), &report); err != nil {
+		t.Fatalf("not JSON: %v\n%s", err, out)
+	}
+	var got []string
+	for _, r := range report {
+		for _, e := range r.Errors {
+			got = append(got, fmt.Sprintf("%s:%d:%d: %s", r.File, e.Line, e.Col, e.Message))
+		}
+	}
+	if code != exitInput || strings.Join(got, "\n") != strings.Join(want, "\n") {
+		t.Errorf("JSON report: exit %d, errors:\n%s\nwant:\n%s", code, strings.Join(got, "\n"), strings.Join(want, "\n"))
 	}
 }

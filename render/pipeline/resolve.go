@@ -1,10 +1,12 @@
 package pipeline
 
 import (
+	"cmp"
 	"errors"
 	"fmt"
 	"os"
 	"path/filepath"
+	"slices"
 
 	"github.com/tremie-dev/tremie/render/sheet"
 	"github.com/tremie-dev/tremie/schema"
@@ -185,7 +187,25 @@ func Resolve(paths []string, opt Options) (*Run, error) {
 			add(f, p)
 		}
 	}
+	sortProblems(r.Problems)
 	return r, nil
+}
+
+// sortProblems orders the problems of a run by the file, line and column
+// of their first error, so that the errors of a project file, its profile
+// and its yields file read as one sorted list; a problem without a file
+// keeps its place before them.
+func sortProblems(ps []error) {
+	first := func(e error) *schema.Error {
+		if l := schema.Errors("", e); len(l) > 0 {
+			return l[0]
+		}
+		return &schema.Error{}
+	}
+	slices.SortStableFunc(ps, func(a, b error) int {
+		x, y := first(a), first(b)
+		return cmp.Or(cmp.Compare(x.File, y.File), cmp.Compare(x.Line, y.Line), cmp.Compare(x.Col, y.Col))
+	})
 }
 
 // useOutput takes the first project's output directory when none was given.
@@ -214,10 +234,28 @@ func (r *Run) projectAt(dir string) (*project.Project, bool) {
 	p, err := project.Load(dir)
 	if err != nil {
 		r.Problems = append(r.Problems, err)
+		r.checkLinked(dir)
 		p = nil
 	}
 	r.projects[abs] = p
 	return p, true
+}
+
+// checkLinked reads the profile and yields file a rejected project file
+// names (unless the command line names its own), so that their errors are
+// reported with the project file's in the same run.
+func (r *Run) checkLinked(dir string) {
+	prof, yields := project.Linked(dir)
+	if st, err := os.Stat(prof); err == nil && !st.IsDir() && r.opts.Profile == "" {
+		if _, err := r.profile(prof); err != nil {
+			r.Problems = append(r.Problems, err)
+		}
+	}
+	if st, err := os.Stat(yields); err == nil && !st.IsDir() && r.opts.Yields == "" {
+		if _, err := r.yieldsFile(yields); err != nil {
+			r.Problems = append(r.Problems, err)
+		}
+	}
 }
 
 // enclosingProject is the project a well file belongs to: a project.toml
@@ -285,11 +323,12 @@ func (r *Run) setting(p *project.Project) *Setting {
 	}
 	page, err := PageFor(s.PageName, s.Landscape)
 	if err != nil {
-		where := "page"
 		if p != nil {
-			where = fmt.Sprintf("%s:%d: page %q", p.File, p.Keys["project.page"], s.PageName)
+			err = schema.ErrorList{{File: p.File, Line: schema.LineOf(p.Keys, "project.page"), Key: "project.page", Msg: fmt.Sprintf("page %q: %v", s.PageName, err)}}
+		} else {
+			err = fmt.Errorf("page: %w", err)
 		}
-		errs = append(errs, fmt.Errorf("%s: %w", where, err))
+		errs = append(errs, err)
 	}
 	s.Page = page
 	if len(errs) > 0 {

@@ -40,7 +40,7 @@ func (l *layout) page(i int) *draw.Page {
 
 	p := l.painter(sp, first, last)
 	pg.Add(l.bodyFrame()...)
-	pg.Add(p.lithology()...)
+	pg.Add(p.paintLayers(layerLog, layerLog)...)
 	pg.Add(p.depthAxis()...)
 	pg.Add(p.elevationAxis()...)
 	pg.Add(p.well()...)
@@ -48,7 +48,7 @@ func (l *layout) page(i int) *draw.Page {
 	pg.Add(p.calloutItems(l.sheetCallouts[i])...)
 	pg.Add(l.matchLines(p, i)...)
 
-	pg.Add(l.legendItems(sortedSymbols(p.used))...)
+	pg.Add(l.legendItems(l.legendOf(p.window()))...)
 	pg.Add(l.amountItems()...)
 	more := ""
 	nn, _ := l.number(len(l.sheets) + l.firstNotesPage())

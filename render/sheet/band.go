@@ -44,20 +44,6 @@ const (
 
 func (l *layout) hasAmounts() bool { return l.in.Quantities != nil && len(l.in.Quantities.Rows) > 0 }
 
-// legendFor paints the whole range once, without keeping the drawing,
-// to learn which symbols it uses.
-func (l *layout) legendFor(sp span) []symbol {
-	// A scale is needed to paint; any will do for the set of symbols, and
-	// a very small one paints the fewest marks.
-	saved := l.scale
-	l.scale = Metric(1e6)
-	p := l.painter(sp, true, true)
-	p.lithology()
-	p.well()
-	l.scale = saved
-	return sortedSymbols(p.used)
-}
-
 func sortedSymbols(m map[string]symbol) []symbol {
 	out := make([]symbol, 0, len(m))
 	for _, s := range m {

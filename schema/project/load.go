@@ -259,3 +259,37 @@ func readNorth(doc *schema.Doc, pt *schema.Table) schema.Orientation {
 	}
 	return o
 }
+
+// Linked is the rule profile and the yields file a project file names,
+// as paths, read from a project file that may be rejected: a run that
+// cannot use the project still reports the errors of the files it names
+// with its own, so that all are fixed at once. Each is "" when not named
+// or not a string, and both when the file cannot be read or parsed.
+func Linked(dir string) (profile, yields string) {
+	file := dir
+	if st, err := os.Stat(dir); err == nil && st.IsDir() {
+		file = filepath.Join(dir, FileName)
+	} else {
+		dir = filepath.Dir(dir)
+	}
+	data, err := schema.ReadInput(file, schema.MaxTextFile)
+	if err != nil {
+		return "", ""
+	}
+	doc, err := schema.ParseDoc(file, data, File)
+	if err != nil {
+		return "", ""
+	}
+	pt := doc.Root().Sub("project")
+	if pt == nil {
+		return "", ""
+	}
+	p := &Project{Dir: dir}
+	if s, ok := pt.Raw("profile"); ok {
+		p.Profile, _ = s.(string)
+	}
+	if s, ok := pt.Raw("yields"); ok {
+		p.Yields, _ = s.(string)
+	}
+	return p.ProfilePath(), p.YieldsPath()
+}
