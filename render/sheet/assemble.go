@@ -40,7 +40,7 @@ func (l *layout) page(i int) *draw.Page {
 
 	p := l.painter(sp, first, last)
 	pg.Add(l.bodyFrame()...)
-	pg.Add(p.lithology()...)
+	pg.Add(p.paintLayers(layerLog, layerLog)...)
 	pg.Add(p.depthAxis()...)
 	pg.Add(p.elevationAxis()...)
 	pg.Add(p.well()...)
@@ -48,7 +48,7 @@ func (l *layout) page(i int) *draw.Page {
 	pg.Add(p.calloutItems(l.sheetCallouts[i])...)
 	pg.Add(l.matchLines(p, i)...)
 
-	pg.Add(l.legendItems(sortedSymbols(p.used))...)
+	pg.Add(l.legendItems(l.legendOf(p.window()))...)
 	pg.Add(l.amountItems()...)
 	more := ""
 	nn, _ := l.number(len(l.sheets) + l.firstNotesPage())
@@ -88,7 +88,7 @@ func (l *layout) bodyFrame() []draw.Item {
 		{c.lith, "LITH.", ""},
 		{c.uscs, "USCS", ""},
 		{c.desc, "DESCRIPTION", ""},
-		{c.well, "WELL CONSTRUCTION", fmt.Sprintf("widths ×%s", schema.TrimFloat(l.hz.exaggerationFor(l.scale), 1))},
+		{c.well, "WELL CONSTRUCTION", fmt.Sprintf("widths ×%s", figure(l.hz.exaggerationFor(l.scale)))},
 		{c.call, "COMPONENTS", ""},
 	}
 	for _, h := range heads {

@@ -44,20 +44,6 @@ const (
 
 func (l *layout) hasAmounts() bool { return l.in.Quantities != nil && len(l.in.Quantities.Rows) > 0 }
 
-// legendFor paints the whole range once, without keeping the drawing,
-// to learn which symbols it uses.
-func (l *layout) legendFor(sp span) []symbol {
-	// A scale is needed to paint; any will do for the set of symbols, and
-	// a very small one paints the fewest marks.
-	saved := l.scale
-	l.scale = Metric(1e6)
-	p := l.painter(sp, true, true)
-	p.lithology()
-	p.well()
-	l.scale = saved
-	return sortedSymbols(p.used)
-}
-
 func sortedSymbols(m map[string]symbol) []symbol {
 	out := make([]symbol, 0, len(m))
 	for _, s := range m {
@@ -110,7 +96,7 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 		if nh > bp.height {
 			// Keep what fits; the rest goes on a notes sheet after the
 			// drawings, and the band says so.
-			bp.notes, bp.overflow = notesThatFit(notes, bp.height-(bandHeadH+bandPad+continueLineH))
+			bp.notes, bp.overflow = notesThatFit(notes, bp.height-(bandHeadH+bandPad+continueLineH+bandPad))
 		}
 		score := bp.height
 		if len(bp.overflow) > 0 {
@@ -167,7 +153,7 @@ func (l *layout) planSideBand(legend []symbol) bandPlan {
 	notes := l.noteBlocks(w - 2*bandPad)
 	bp.notes = notes
 	if bandHeadH+bandPad+notesHeight(notes) > notesAvail {
-		bp.notes, bp.overflow = notesThatFit(notes, notesAvail-(bandHeadH+bandPad+continueLineH))
+		bp.notes, bp.overflow = notesThatFit(notes, notesAvail-(bandHeadH+bandPad+continueLineH+bandPad))
 	}
 	return bp
 }
@@ -177,6 +163,10 @@ func (l *layout) planSideBand(legend []symbol) bandPlan {
 func notesThatFit(blocks []noteBlock, h float64) (fit, rest []noteBlock) {
 	for i := range blocks {
 		if notesHeight(blocks[:i+1]) > h {
+			// A heading goes with the first block under it.
+			for i > 0 && blocks[i-1].heading {
+				i--
+			}
 			return blocks[:i], blocks[i:]
 		}
 	}

@@ -67,6 +67,32 @@ func (l *layout) frameOf(f *schema.Feature) schema.WallImage {
 	return l.frame()
 }
 
+// featuresPart is the wall-feature column of a well with features.
+type featuresPart struct{}
+
+func (featuresPart) stack() stack { return on(layerFeatures) }
+
+func (featuresPart) callouts(*layout) []callout { return nil }
+
+func (featuresPart) legend(l *layout, v window) []symbol {
+	if l.cols.feat.W == 0 {
+		return nil
+	}
+	var out []symbol
+	for i := range l.w.Features {
+		f := &l.w.Features[i]
+		if fit, _, ok := traceOf(l.w, f); ok && v.showsAt(Length(fit.A)) {
+			out = append(out, traceSymbol())
+		}
+		if f.Orient.HasAttitude && v.showsAt(f.Depth) {
+			out = append(out, featureSymbol(features.MarkFor(f)), tickSymbol())
+		}
+	}
+	return out
+}
+
+func (featuresPart) paint(p *painter) []draw.Item { return p.featureTrack() }
+
 // featureTrack paints the feature column of one sheet.
 func (p *painter) featureTrack() []draw.Item {
 	l := p.l
@@ -154,7 +180,6 @@ func (p *painter) traces(g featureGeom) []draw.Item {
 		}
 		halo := draw.Style{Stroke: draw.White, StrokeWidth: st.StrokeWidth + 1.2}
 		items = append(items, draw.Shape{Style: halo, Points: pts}, draw.Shape{Style: st, Points: pts, Role: "feature-trace:" + f.Path})
-		p.use(traceSymbol())
 	}
 	return items
 }
@@ -203,8 +228,6 @@ func (p *painter) dipTrack(g featureGeom, y0, y1 float64) []draw.Item {
 		}
 		at := draw.Point{X: g.dip.X + o.Dip/90*g.dip.W, Y: p.y(f.Depth)}
 		mk := features.MarkFor(f)
-		p.use(featureSymbol(mk))
-		p.use(tickSymbol())
 		t := o.DipDirection * math.Pi / 180
 		const tick = 7.0
 		items = append(items, draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.7}, Points: []draw.Point{at, {X: at.X + tick*math.Sin(t), Y: at.Y - tick*math.Cos(t)}}, Role: "feature-tick:" + f.Path})

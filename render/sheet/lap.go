@@ -9,30 +9,35 @@ import (
 	"github.com/tremie-dev/tremie/schema"
 )
 
-// lapPart is a liner's lap inside the casing it hangs in: the lap seal
-// painted in the gap, the packer or hanger at the liner's top, and a
-// callout naming them.
+// lapPart is a liner's lap inside the casing it hangs in: the packer or
+// hanger at the liner's top, painted above the pipes, and a callout
+// naming them; lapSealPart is the seal in the lap's gap.
 type lapPart struct {
-	si     int // the liner's string
-	host   schema.Casing
-	lap    schema.Interval
-	liner  *schema.Liner
-	hostID schema.Diameter
+	si       int // the liner's string
+	host     schema.Casing
+	hostRank int // the host's place among the casings, outermost first
+	lap      schema.Interval
+	liner    *schema.Liner
+	hostID   schema.Diameter
 }
 
-func newLapPart(l *layout, si int) (lapPart, bool) {
+// newLapPart is the lap of string si, when it is a liner hung in one of
+// the casings; rank is each casing's place, outermost first.
+func newLapPart(l *layout, si int, rank []int) (lapPart, bool) {
 	s := l.w.Strings[si]
 	lap, ok := l.w.Lap(s)
 	if !ok {
 		return lapPart{}, false
 	}
-	for _, c := range l.w.Casings {
+	for ci, c := range l.w.Casings {
 		if c.Name == s.Liner.HungIn {
-			return lapPart{si: si, host: c, lap: lap, liner: s.Liner, hostID: id(c.Pipe)}, true
+			return lapPart{si: si, host: c, hostRank: rank[ci], lap: lap, liner: s.Liner, hostID: id(c.Pipe)}, true
 		}
 	}
 	return lapPart{}, false
 }
+
+func (lapPart) stack() stack { return on(layerMark) }
 
 func (lp lapPart) hangerSymbol() symbol {
 	if lp.liner.Hanger == schema.Packer {
@@ -41,12 +46,11 @@ func (lp lapPart) hangerSymbol() symbol {
 	return partSymbol(symbols.Hanger)
 }
 
-func (lp lapPart) legend() []symbol {
-	out := []symbol{lp.hangerSymbol()}
-	if lp.liner.LapSeal != "" {
-		out = append(out, materialSymbol(lp.liner.LapSeal))
+func (lp lapPart) legend(_ *layout, v window) []symbol {
+	if !v.showsAt(lp.lap.Top) {
+		return nil
 	}
-	return out
+	return []symbol{lp.hangerSymbol()}
 }
 
 // gaps are the two rectangles between the liner's outside and the host
@@ -60,11 +64,23 @@ func (lp lapPart) gaps(p *painter, y0, y1 float64) (left, right draw.Rect) {
 		draw.Rect{X: x + ro, Y: y0, W: (h.cx + rc) - (x + ro), H: y1 - y0}
 }
 
-// paintSeal fills the lap's gap with its seal; it goes under the liner.
-func (lp lapPart) paintSeal(p *painter) []draw.Item {
-	if lp.liner.LapSeal == "" {
+// lapSealPart is the seal placed in a lap's gap, painted with its host
+// casing's bore, under the liner. The lap's label names it.
+type lapSealPart struct{ lapPart }
+
+func (sp lapSealPart) stack() stack { return stack{layer: layerCasing, sub: 3*sp.hostRank + 2} }
+
+func (lapSealPart) callouts(*layout) []callout { return nil }
+
+func (sp lapSealPart) legend(_ *layout, v window) []symbol {
+	if !v.shows(sp.lap.Top, sp.lap.Bottom) {
 		return nil
 	}
+	return []symbol{materialSymbol(sp.liner.LapSeal)}
+}
+
+func (sp lapSealPart) paint(p *painter) []draw.Item {
+	lp := sp.lapPart
 	y0, y1, ok := p.vis(lp.lap.Top, lp.lap.Bottom)
 	if !ok {
 		return nil
@@ -88,7 +104,7 @@ func (lp lapPart) paint(p *painter) []draw.Item {
 		hgt = 5
 	}
 	a, b := lp.gaps(p, y, y+hgt)
-	sym := p.use(lp.hangerSymbol())
+	sym := lp.hangerSymbol()
 	role := "hanger:" + p.l.w.Strings[lp.si].Label()
 	items := []draw.Item{draw.Box{Rect: draw.Rect{X: a.X, Y: a.Y, W: b.Right() - a.X, H: hgt}, Role: role}}
 	items = append(items, sym.paint(a)...)

@@ -40,7 +40,8 @@ type layout struct {
 	title     titleBlock
 	bandPlan  bandPlan
 	legendAll []symbol // every symbol the well's sheets use
-	parts     []part   // the supply-well parts (see part.go)
+	parts     []part   // the well's parts in reading order (part.go)
+	painted   []part   // the same in paint order
 
 	sheetDescs      [][]descEntry     // each sheet's lithology descriptions
 	sheetCallouts   [][]placedCallout // each sheet's labels
@@ -76,7 +77,8 @@ func newLayout(w *schema.Well, in Inputs, opt Options, pg Page) *layout {
 	}
 	l.content = draw.Rect{X: pg.Margin, Y: pg.Margin, W: pg.Width - 2*pg.Margin, H: pg.Height - 2*pg.Margin}
 	l.blocking = rules.Blocking(in.Findings)
-	l.parts = l.supplyParts()
+	l.parts = l.assemble()
+	l.painted = paintOrder(l.parts)
 	return l
 }
 
@@ -104,7 +106,7 @@ func (l *layout) plan() error {
 
 	// The band is sized for the whole well's legend, so every sheet has
 	// the same body and the depth per sheet is constant.
-	l.legendAll = l.legendFor(span{l.top, l.bot})
+	l.legendAll = l.legendOf(everywhere)
 	l.bandPlan = l.planBand(l.legendAll)
 	l.body = draw.Rect{X: l.content.X, Y: l.header.Bottom() + 6, W: bodyW}
 	if l.pg.LegendRight > 0 {

@@ -7,10 +7,27 @@ import (
 	"github.com/tremie-dev/tremie/schema"
 )
 
-// lithology paints the pattern column, the USCS column and the
-// descriptions, each level with its layer (or as near as the layers above
-// and below allow, with a leader), in the forms planDescriptions chose.
-func (p *painter) lithology() []draw.Item {
+// lithologyPart is the log beside the well: the pattern column, the USCS
+// column and the descriptions, each level with its layer (or as near as
+// the layers above and below allow, with a leader), in the forms
+// planDescriptions chose.
+type lithologyPart struct{}
+
+func (lithologyPart) stack() stack { return on(layerLog) }
+
+func (lithologyPart) callouts(*layout) []callout { return nil }
+
+func (lithologyPart) legend(l *layout, v window) []symbol {
+	var out []symbol
+	for _, ly := range l.w.Lithology {
+		if v.shows(ly.Top, ly.Bottom) {
+			out = append(out, layerSymbol(ly))
+		}
+	}
+	return out
+}
+
+func (lithologyPart) paint(p *painter) []draw.Item {
 	l := p.l
 	lc, uc, dc := l.cols.lith, l.cols.uscs, l.cols.desc
 	y0c, y1c := p.clipY()
@@ -53,7 +70,7 @@ func (p *painter) lithology() []draw.Item {
 }
 
 // descriptions are the sheet's planned descriptions, or for a painter
-// outside the plan (the legend's) its own fitting, unnumbered.
+// outside the plan its own fitting, unnumbered.
 func (p *painter) descriptions() []descEntry {
 	for i, sp := range p.l.sheets {
 		if sp == p.sp && i < len(p.l.sheetDescs) {

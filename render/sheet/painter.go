@@ -6,19 +6,17 @@ import (
 )
 
 // painter draws the depth-scaled columns of one sheet. It maps depth to
-// page y, knows which depths the sheet shows, and records every symbol
-// it paints so the legend can list exactly those.
+// page y and knows which depths the sheet shows.
 type painter struct {
 	l           *layout
 	sp          span
 	first, last bool
 	y0, ppm     float64
 	dlo, dhi    schema.Length // depths visible, pads included at the ends
-	used        map[string]symbol
 }
 
 func (l *layout) painter(sp span, first, last bool) *painter {
-	p := &painter{l: l, sp: sp, first: first, last: last, y0: l.plot.Y + plotPadTop, ppm: l.scale.PointsPerMetre(), dlo: sp.Top, dhi: sp.Bottom, used: map[string]symbol{}}
+	p := &painter{l: l, sp: sp, first: first, last: last, y0: l.plot.Y + plotPadTop, ppm: l.scale.PointsPerMetre(), dlo: sp.Top, dhi: sp.Bottom}
 	if first {
 		p.dlo -= schema.Length(plotPadTop / p.ppm)
 	}
@@ -56,15 +54,11 @@ func (p *painter) clipY() (y0, y1 float64) {
 	return y0, y1
 }
 
-// use records a symbol for the legend and returns it.
-func (p *painter) use(s symbol) symbol {
-	p.used[s.key] = s
-	return s
-}
+// window is the depths the sheet shows.
+func (p *painter) window() window { return window{p.dlo, p.dhi} }
 
-// paint fills a rectangle with a symbol and records it.
+// paint fills a rectangle with a symbol under a box naming the part.
 func (p *painter) paint(s symbol, r draw.Rect, role string) []draw.Item {
-	p.use(s)
 	out := []draw.Item{draw.Box{Rect: r, Role: role}}
 	return append(out, s.paint(r)...)
 }

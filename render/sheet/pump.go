@@ -9,7 +9,14 @@ import (
 // pumpPart marks the pump intake on the well's centre line.
 type pumpPart struct{}
 
-func (pumpPart) legend() []symbol { return []symbol{partSymbol(symbols.Pump)} }
+func (pumpPart) stack() stack { return on(layerMark) }
+
+func (pumpPart) legend(l *layout, v window) []symbol {
+	if !v.showsAt(l.w.Pump.Intake) {
+		return nil
+	}
+	return []symbol{partSymbol(symbols.Pump)}
+}
 
 func (pumpPart) box(p *painter) draw.Rect {
 	y := p.y(p.l.w.Pump.Intake)
@@ -23,7 +30,7 @@ func (pp pumpPart) paint(p *painter) []draw.Item {
 	}
 	r := pp.box(p)
 	items := []draw.Item{draw.Box{Rect: r, Role: "pump"}}
-	return append(items, p.use(partSymbol(symbols.Pump)).paint(r)...)
+	return append(items, partSymbol(symbols.Pump).paint(r)...)
 }
 
 func (pumpPart) callouts(l *layout) []callout {

@@ -10,7 +10,14 @@ import (
 // wider than the casing, and a line in the casing's callout.
 type shoePart struct{ ci int }
 
-func (shoePart) legend() []symbol { return []symbol{partSymbol(symbols.DriveShoe)} }
+func (shoePart) stack() stack { return on(layerMark) }
+
+func (s shoePart) legend(l *layout, v window) []symbol {
+	if !v.showsAt(l.w.Casings[s.ci].Bottom) {
+		return nil
+	}
+	return []symbol{partSymbol(symbols.DriveShoe)}
+}
 
 func (s shoePart) paint(p *painter) []draw.Item {
 	c := p.l.w.Casings[s.ci]
@@ -22,7 +29,7 @@ func (s shoePart) paint(p *painter) []draw.Item {
 	wall := max(float64(od(c.Pipe)-id(c.Pipe))/2*h.ppmm, minWall)
 	y := p.y(c.Bottom)
 	const ht, lip = 4.0, 1.2
-	sym := p.use(partSymbol(symbols.DriveShoe))
+	sym := partSymbol(symbols.DriveShoe)
 	left := draw.Rect{X: h.cx - ro - lip, Y: y - ht, W: wall + lip, H: ht}
 	right := draw.Rect{X: h.cx + ro - wall, Y: y - ht, W: wall + lip, H: ht}
 	items := []draw.Item{draw.Box{Rect: draw.Rect{X: left.X, Y: left.Y, W: right.Right() - left.X, H: ht}, Role: "shoe:" + pathOr(c.Path, "casing", s.ci)}}

@@ -37,7 +37,41 @@ func fromTable(s symbols.Symbol) symbol {
 			order = 0
 		}
 	}
-	return symbol{key: s.ID, label: s.Name, order: int(s.Kind)*10000 + order, paint: s.Paint, swatch: s.Swatch}
+	paint := func(r draw.Rect) []draw.Item { return marked(s.ID, s.Paint(r)) }
+	return symbol{key: s.ID, label: s.Name, order: int(s.Kind)*10000 + order, paint: paint, swatch: s.Swatch}
+}
+
+// marked names every item a symbol paints on the drawing after the
+// symbol ("symbol KEY"), so that what a sheet shows can be read back
+// from its items (TestLegendIsWhatIsPainted). Roles are not written to
+// any output. The items are copied: a symbol may share its marks.
+func marked(key string, items []draw.Item) []draw.Item {
+	role := "symbol " + key
+	out := make([]draw.Item, len(items))
+	for i, it := range items {
+		switch v := it.(type) {
+		case draw.Box:
+			v.Role = role
+			it = v
+		case draw.Shape:
+			v.Role = role
+			it = v
+		case draw.Circle:
+			v.Role = role
+			it = v
+		case draw.Path:
+			v.Role = role
+			it = v
+		case draw.Image:
+			v.Role = role
+			it = v
+		case draw.Clip:
+			v.Items = marked(key, v.Items)
+			it = v
+		}
+		out[i] = it
+	}
+	return out
 }
 
 func materialSymbol(m schema.Material) symbol { return fromTable(symbols.ForMaterial(m)) }

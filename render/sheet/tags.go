@@ -13,7 +13,16 @@ import (
 // off, the depth the bags should have reached.
 type tagPart struct{ fi int }
 
-func (tagPart) legend() []symbol { return []symbol{partSymbol(symbols.Tag)} }
+func (tagPart) stack() stack { return on(layerMark) }
+
+func (t tagPart) legend(l *layout, v window) []symbol {
+	for _, tg := range l.w.Fills[t.fi].Tags {
+		if v.showsAt(tg.Depth) {
+			return []symbol{partSymbol(symbols.Tag)}
+		}
+	}
+	return nil
+}
 
 func (t tagPart) paint(p *painter) []draw.Item {
 	f := p.l.w.Fills[t.fi]
@@ -27,7 +36,7 @@ func (t tagPart) paint(p *painter) []draw.Item {
 		y := p.y(tg.Depth)
 		r := draw.Rect{X: x - 3, Y: y - 8, W: 6, H: 8}
 		items = append(items, draw.Box{Rect: r, Role: fmt.Sprintf("tag:%s[%d]", pathOr(f.Path, "fill", t.fi), k)})
-		items = append(items, p.use(sym).paint(r)...)
+		items = append(items, sym.paint(r)...)
 	}
 	return items
 }

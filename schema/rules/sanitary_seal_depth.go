@@ -34,7 +34,7 @@ func sanitarySealParam() Param {
 	for _, s := range sanitarySealFt {
 		prm.ByPurpose = append(prm.ByPurpose, PurposeDefault{
 			Purposes: []schema.Purpose{s.purpose},
-			Default:  float64(schema.LengthFrom(s.ft, schema.Feet)), DefaultFt: s.ft,
+			Default:  metresFromFeet(s.ft), DefaultFt: s.ft,
 			Source: s.source,
 		})
 	}

@@ -116,7 +116,8 @@ func TestSealThicknessTI81401(t *testing.T) {
 }
 
 // DWR Bulletin 74-81 §9: 50 ft for community supply, 20 ft for
-// monitoring; in metres the same depths exactly: 15.24 m and 6.096 m.
+// monitoring; in metres the same depths to the nearest 5 cm: 15.25 m
+// (15.24 m) and 6.1 m (6.096 m).
 func TestSanitarySealDWR7481(t *testing.T) {
 	supply := func(sealFt string) string {
 		return `[units]
@@ -156,14 +157,14 @@ slot_number = 40
 		t.Errorf("finding depths %v–%v %s, want 49–50 ft", top, bottom, fs[0].Units)
 	}
 
-	// A metric monitoring well: 6.096 m needed. Grout to 6.1 m, then
+	// A metric monitoring well: 6.1 m needed. Grout to 6.1 m, then
 	// backfill, passes; grout to 6.0 m falls short.
 	metric := func(groutBottom string) string {
 		return monitoringWell("m", "210", "11.0", fill("6.9", "11.0", "filter-pack")+fill("6.3", "6.9", "bentonite-chips")+
 			fill(groutBottom, "6.3", "native-backfill")+fill("0.0", groutBottom, "neat-cement"))
 	}
 	if n := len(findings(load(t, metric("6.1")), nil, "SANITARY-SEAL-DEPTH")); n != 0 {
-		t.Errorf("metric seal to 6.1 m: %d findings, want 0 (6.096 m needed)", n)
+		t.Errorf("metric seal to 6.1 m: %d findings, want 0 (6.1 m needed)", n)
 	}
 	fs = findings(load(t, metric("6.0")), nil, "SANITARY-SEAL-DEPTH")
 	if len(fs) != 1 || !strings.Contains(fs[0].Message, "6.1 m") {
