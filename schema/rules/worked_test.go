@@ -349,12 +349,12 @@ func TestProfileErrors(t *testing.T) {
 		line      int
 	}{
 		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNES]\nmin = 2\n", `unknown rule "SEAL-THICKNES"`, 3},
-		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nminimum = 2\n", `no parameter "minimum"`, 4},
-		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nseverity = \"fatal\"\n", `severity must be`, 4},
+		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nminimum = 2\n", `unknown key "minimum" in [rule.SEAL-THICKNESS]`, 4},
+		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nseverity = \"fatal\"\n", `severity = "fatal" is not one of: error, warning, off`, 4},
 		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nmin = \"2\"\n", `must be a number`, 4},
 		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nmin = -1\n", `must not be negative`, 4},
 		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nmin = nan\n", `finite`, 4},
-		{"[profile]\nunits = \"yd\"\n", `units must be`, 2},
+		{"[profile]\nunits = \"yd\"\n", `units = "yd" is not one of: ft, m`, 2},
 		{"[rule.SEAL-THICKNESS]\nmin = 2\n", `give units`, 0},
 		{"[profile]\nunits = \"ft\"\n[sanitary_seal]\nmonitoring = 20\nsupply = 50\n", `unknown purpose "supply"`, 5},
 		{"[profile]\nunits = \"ft\"\nnmae = \"x\"\n", `unknown key "nmae"`, 3},
