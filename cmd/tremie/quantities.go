@@ -296,8 +296,12 @@ func screenFlowLine(wl *schema.Well) string {
 		if f.Design {
 			which = "design"
 		}
-		parts = append(parts, fmt.Sprintf("open area %s %s (half of it effective), transmitting %s %s at 0.1 ft/s (Driscoll 1986); entrance velocity %s %s at the %s rate of %s %s",
-			quantity.Number(area), aunit, quantity.Number(capacity), qunit, quantity.Number(vel), vunit, which, schema.TrimFloat(rate, 1), qunit))
+		limit := "0.1 ft/s"
+		if !u.Imperial() {
+			limit = "3.05 cm/s (0.1 ft/s)"
+		}
+		parts = append(parts, fmt.Sprintf("open area %s %s (half of it effective), transmitting %s %s at %s (Driscoll 1986); entrance velocity %s %s at the %s rate of %s %s",
+			quantity.Number(area), aunit, quantity.Number(capacity), qunit, limit, quantity.Number(vel), vunit, which, schema.TrimFloat(rate, 1), qunit))
 	}
 	if pt := wl.PumpingTest; pt != nil && pt.SpecificCapacity > 0 {
 		sc, qunit := schema.FlowIn(pt.SpecificCapacity*float64(schema.LengthFrom(1, u.Depth)), u)

@@ -20,6 +20,9 @@ type Format struct {
 	PerSheet bool
 	// Encode writes a document: one file per sheet, or one for all.
 	Encode func(doc *draw.Document, opt EncodeOptions) ([][]byte, error)
+	// Sheet, in a PerSheet format, writes sheet i (0-based) alone, as
+	// Encode writes it, so that a caller may write sheets at once.
+	Sheet func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error)
 }
 
 // EncodeOptions are the settings a format may use.
@@ -82,26 +85,33 @@ func ParseFormats(list string) ([]Format, error) {
 	return fs, nil
 }
 
-// perSheet encodes each sheet of a document on its own.
-func perSheet(name string, one func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error)) func(*draw.Document, EncodeOptions) ([][]byte, error) {
-	return func(doc *draw.Document, opt EncodeOptions) ([][]byte, error) {
-		files := make([][]byte, 0, len(doc.Pages))
-		for i := range doc.Pages {
-			b, err := one(doc, i, opt)
-			if err != nil {
-				return nil, fmt.Errorf("%s sheet %d: %w", name, i+1, err)
-			}
-			files = append(files, b)
+// perSheet registers a format that writes each sheet of a document to a
+// file of its own, with one to write a sheet.
+func perSheet(name, ext string, one func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error)) Format {
+	sheet := func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) {
+		b, err := one(doc, i, opt)
+		if err != nil {
+			return nil, fmt.Errorf("%s sheet %d: %w", name, i+1, err)
 		}
-		return files, nil
+		return b, nil
 	}
+	return Format{Name: name, Ext: ext, PerSheet: true, Sheet: sheet,
+		Encode: func(doc *draw.Document, opt EncodeOptions) ([][]byte, error) {
+			files := make([][]byte, 0, len(doc.Pages))
+			for i := range doc.Pages {
+				b, err := sheet(doc, i, opt)
+				if err != nil {
+					return nil, err
+				}
+				files = append(files, b)
+			}
+			return files, nil
+		}}
 }
 
 func init() {
-	RegisterFormat(Format{Name: "svg", Ext: ".svg", PerSheet: true,
-		Encode: perSheet("svg", func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) { return SVGWith(doc, i, opt) })})
-	RegisterFormat(Format{Name: "png", Ext: ".png", PerSheet: true,
-		Encode: perSheet("png", func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) { return PNG(doc, i, opt.DPI) })})
+	RegisterFormat(perSheet("svg", ".svg", func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) { return SVGWith(doc, i, opt) }))
+	RegisterFormat(perSheet("png", ".png", func(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) { return PNG(doc, i, opt.DPI) }))
 	RegisterFormat(Format{Name: "pdf", Ext: ".pdf",
 		Encode: func(doc *draw.Document, opt EncodeOptions) ([][]byte, error) {
 			b, err := PDFWith(doc, opt)

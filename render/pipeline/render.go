@@ -55,6 +55,9 @@ type Rendered struct {
 type RenderReport struct {
 	Wells   []Rendered // in input order
 	Summary batch.Summary
+	// Refused counts the wells refused under --strict or in an issued set:
+	// nothing was drawn for them, so Summary.Done leaves them out.
+	Refused int
 	// Stale are outputs in the output directory (relative to it) whose
 	// well file is gone or that a well no longer produces; never deleted.
 	Stale []string
@@ -155,7 +158,6 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 		w.Well, w.Quantities = nil, nil // drawn: keep only what the report prints
 		return rd, batch.Done, nil
 	})
-	rep.Summary = sum
 	rep.Wells = make([]Rendered, len(res))
 	present := make([]string, len(jobs))
 	for i, x := range res {
@@ -165,7 +167,12 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 			rep.Wells[i].Well = jobs[i].well
 		}
 		present[i] = jobs[i].well.Key
+		if rep.Wells[i].Refused {
+			rep.Refused++
+			sum.Done--
+		}
 	}
+	rep.Summary = sum
 	rep.Stale = cache.Stale(present)
 	rep.SaveErr = cache.Save()
 	return rep, nil
@@ -183,29 +190,21 @@ func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt Rend
 		return err
 	}
 	rd.Sheets = len(doc.Pages)
-	var files []pending
 	counts := map[string]int{} // sheet files per extension, for the stale-sheet sweep
 	for _, f := range opt.Formats {
-		enc, err := f.Encode(doc, out.EncodeOptions{DPI: opt.DPI, Text: opt.Text})
-		if err != nil {
-			return &OutputError{fmt.Errorf("%s: %w", w.Path, err)}
-		}
-		for i, data := range enc {
-			name := base + f.Ext
-			if len(enc) > 1 {
-				name = fmt.Sprintf("%s-sheet%d%s", base, i+1, f.Ext)
-			}
-			files = append(files, pending{name, data})
-		}
 		if f.PerSheet {
-			counts[f.Ext] = len(enc)
+			counts[f.Ext] = len(doc.Pages)
 		}
 	}
-	feats, err := r.featureFiles(w, base, opt)
+	docs := []outputDoc{{doc: doc, base: base, several: "-sheet"}}
+	pw, ph := portrait(w.Setting.Page)
+	if feats := features.WellSummary(w.Path, w.Well, pw, ph, r.SourceDate); feats != nil {
+		docs = append(docs, outputDoc{doc: feats, base: base + "-features", several: "-features-page", what: "feature summary: "})
+	}
+	files, err := encodeAll(w.Path, docs, opt)
 	if err != nil {
 		return err
 	}
-	files = append(files, feats...)
 	if err := commitAll(r.OutDir, files, cache, opt.Force); err != nil {
 		return err
 	}
@@ -226,32 +225,6 @@ func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt Rend
 type pending struct {
 	name string
 	data []byte
-}
-
-// featureFiles encodes the well's wall-feature summary, when it has
-// features, as BASE-features.EXT (BASE-features-pageN.EXT for several
-// pages).
-func (r *Run) featureFiles(w *Well, base string, opt RenderOptions) ([]pending, error) {
-	pw, ph := portrait(w.Setting.Page)
-	doc := features.WellSummary(w.Path, w.Well, pw, ph, r.SourceDate)
-	if doc == nil {
-		return nil, nil
-	}
-	var files []pending
-	for _, f := range opt.Formats {
-		enc, err := f.Encode(doc, out.EncodeOptions{DPI: opt.DPI, Text: opt.Text})
-		if err != nil {
-			return nil, &OutputError{fmt.Errorf("%s: feature summary: %w", w.Path, err)}
-		}
-		for i, data := range enc {
-			name := base + "-features" + f.Ext
-			if len(enc) > 1 {
-				name = fmt.Sprintf("%s-features-page%d%s", base, i+1, f.Ext)
-			}
-			files = append(files, pending{name, data})
-		}
-	}
-	return files, nil
 }
 
 // commitAll writes files into dir all or nothing: each must be the

@@ -188,3 +188,13 @@ func TestNoMostlyBlankSecondSheet(t *testing.T) {
 		}
 	}
 }
+
+// A ratio of any size writes short: powers of ten past 10⁵ (common
+// practice: scientific notation for figures a slip of units makes huge).
+func TestFigure(t *testing.T) {
+	for v, want := range map[float64]string{1.5: "1.5", 24: "24", 0.06: "0.06", 2e14: "2 × 10¹⁴", 1e300: "10³⁰⁰", 9.96e5: "10⁶", 2.5e-7: "2.5 × 10⁻⁷"} {
+		if got := figure(v); got != want {
+			t.Errorf("figure(%g) = %q, want %q", v, got, want)
+		}
+	}
+}

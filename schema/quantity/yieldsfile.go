@@ -74,13 +74,8 @@ func parseYields(name string, data []byte, whole bool) (*Yields, bool, error) {
 func readYields(doc *schema.Doc, t *schema.Table, y *Yields) {
 	vu, mu := schema.CubicFeet, schema.Pounds
 	wu := schema.VolumeUnit("")
-	if s := t.Str("volume"); s != "" {
-		switch u := schema.VolumeUnit(s); u {
-		case schema.CubicFeet, schema.USGallons, schema.Litres, schema.CubicMetres:
-			vu = u
-		default:
-			doc.Errorf("yields.volume", "yields volume unit must be one of ft3, gal, L, m3, not %q", s)
-		}
+	if u, ok := volumeUnit(doc, t, "volume", "volume"); ok {
+		vu = u
 	}
 	if s := t.Str("mass"); s != "" {
 		switch u := schema.MassUnit(s); u {
@@ -90,13 +85,8 @@ func readYields(doc *schema.Doc, t *schema.Table, y *Yields) {
 			doc.Errorf("yields.mass", "yields mass unit must be lb or kg, not %q", s)
 		}
 	}
-	if s := t.Str("water_unit"); s != "" {
-		switch u := schema.VolumeUnit(s); u {
-		case schema.CubicFeet, schema.USGallons, schema.Litres, schema.CubicMetres:
-			wu = u
-		default:
-			doc.Errorf("yields.water_unit", "yields water unit must be one of ft3, gal, L, m3, not %q", s)
-		}
+	if u, ok := volumeUnit(doc, t, "water_unit", "water"); ok {
+		wu = u
 	}
 	if wu == "" { // US gallons with pounds, litres with kilograms
 		wu = schema.USGallons
@@ -179,4 +169,19 @@ func readMix(doc *schema.Doc, e *schema.Table, entry *Yield, m schema.Material, 
 		}
 		entry.Stated = kg
 	}
+}
+
+// volumeUnit reads a volume unit key of the [yields] table; false when it
+// is not given or not one of ft3, gal, L, m3 (then reported).
+func volumeUnit(doc *schema.Doc, t *schema.Table, key, what string) (schema.VolumeUnit, bool) {
+	s := t.Str(key)
+	if s == "" {
+		return "", false
+	}
+	switch u := schema.VolumeUnit(s); u {
+	case schema.CubicFeet, schema.USGallons, schema.Litres, schema.CubicMetres:
+		return u, true
+	}
+	doc.Errorf("yields."+key, "yields %s unit must be one of ft3, gal, L, m3, not %q", what, s)
+	return "", false
 }

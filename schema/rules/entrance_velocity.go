@@ -47,6 +47,16 @@ func runEntranceVelocity(p *Pass) {
 	if f.Design {
 		which = "design"
 	}
-	p.Reportf("pumping_test", nil, "at the %s rate of %s %s water enters the screens at %s ft/s, above %s ft/s; their effective open area transmits %s %s at that limit",
-		which, schema.TrimFloat(rate, 1), unit, schema.TrimFloat(f.Velocity/schema.MetresPerFoot, 3), schema.TrimFloat(p.Param("limit"), 3), schema.TrimFloat(capacity, 1), unit)
+	p.Reportf("pumping_test", nil, "at the %s rate of %s %s water enters the screens at %s, above %s; their effective open area transmits %s %s at that limit",
+		which, schema.TrimFloat(rate, 1), unit, velocityText(f.Velocity, w.Units), velocityText(limit, w.Units), schema.TrimFloat(capacity, 1), unit)
+}
+
+// velocityText writes a velocity (m/s) in the well's units: ft/s to the
+// thousandth in a file in feet, cm/s to the hundredth in one in metres
+// (the 0.1 ft/s limit is 3.05 cm/s).
+func velocityText(v float64, u schema.Units) string {
+	if u.Imperial() {
+		return schema.TrimFloat(v/schema.MetresPerFoot, 3) + " ft/s"
+	}
+	return schema.TrimFloat(v*100, 2) + " cm/s"
 }

@@ -87,6 +87,9 @@ func Run[I, T any](items []I, opts Options, fn Func[I, T]) ([]Result[T], Summary
 		wg.Add(1)
 		go func() {
 			defer wg.Done()
+			if tryTakeCPU() {
+				defer giveCPU()
+			}
 			for {
 				i := int(next.Add(1) - 1)
 				if i >= len(items) {
@@ -116,7 +119,11 @@ func call[I, T any](fn Func[I, T], i int, item I) (r Result[T]) {
 	defer func() {
 		if e := recover(); e != nil {
 			var zero T
-			r = Result[T]{Value: zero, Outcome: Failed, Err: &PanicError{Value: e, Stack: string(debug.Stack())}}
+			pe, ok := e.(*PanicError) // raised again by Each, with the part's stack
+			if !ok {
+				pe = &PanicError{Value: e, Stack: string(debug.Stack())}
+			}
+			r = Result[T]{Value: zero, Outcome: Failed, Err: pe}
 		}
 	}()
 	v, o, err := fn(i, item)
