@@ -117,7 +117,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 		Name:             pt.Str("name"),
 		Client:           pt.Str("client"),
 		Site:             pt.Str("site"),
-		Units:            schema.DepthUnit(pt.Str("units")),
+		Units:            schema.DepthUnit(pt.OneOf("units")),
 		Datum:            pt.Str("datum"),
 		CoordinateSystem: pt.Str("coordinate_system"),
 		CRS:              pt.Str("crs"),
@@ -142,11 +142,6 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 	}
 	if strings.TrimSpace(p.Name) == "" {
 		doc.Errorf("project", "[project] needs a name (name = \"...\")")
-	}
-	switch p.Units {
-	case "", schema.Feet, schema.Metres:
-	default:
-		doc.Errorf("project.units", "units must be \"ft\" or \"m\", not %q", p.Units)
 	}
 	if p.CRS != "" {
 		if _, err := crs.Parse(p.CRS); err != nil {
