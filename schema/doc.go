@@ -97,6 +97,10 @@ func (t *table) Str(k string) string { return t.str(k) }
 // ReqStr reads a string that must be present and not blank.
 func (t *table) ReqStr(k string) string { return t.reqStr(k) }
 
+// OneOf reads a string that must be one of the values the key table
+// allows ("" when absent or not allowed, the error recorded).
+func (t *table) OneOf(k string) string { return t.oneOf(k) }
+
 // Num reads a finite number, and whether it was given and valid.
 func (t *table) Num(k string) (float64, bool) { return t.num(k) }
 
@@ -155,7 +159,8 @@ func (t *table) Done() { t.done() }
 
 // Suggest returns the known word closest to word, if it is close enough
 // to be a slip of the keyboard (an edit distance of 1 for short words, 2
-// from five letters on, 3 from nine; case is ignored), else "".
+// from five letters on, 3 from nine, where two neighbouring letters
+// swapped count as one slip; case is ignored), else "".
 func Suggest(word string, known []string) string {
 	w := strings.ToLower(word)
 	limit := 1
@@ -170,7 +175,7 @@ func Suggest(word string, known []string) string {
 		if k == word {
 			continue
 		}
-		if d := editDistance(w, strings.ToLower(k)); d < bestD {
+		if d := slipDistance(w, strings.ToLower(k)); d < bestD {
 			best, bestD = k, d
 		}
 	}
@@ -184,4 +189,30 @@ func DidYouMean(word string, known []string) string {
 		return " (did you mean \"" + s + "\"?)"
 	}
 	return ""
+}
+
+// slipDistance is the optimal-string-alignment distance (Damerau): the
+// fewest letters inserted, deleted, changed or swapped with a neighbour
+// that turn a into b. "nmae" is one slip from "name", not two.
+func slipDistance(a, b string) int {
+	// rows i-2, i-1 and i of the table
+	pp, prev, cur := make([]int, len(b)+1), make([]int, len(b)+1), make([]int, len(b)+1)
+	for j := range prev {
+		prev[j] = j
+	}
+	for i := 1; i <= len(a); i++ {
+		cur[0] = i
+		for j := 1; j <= len(b); j++ {
+			cost := 1
+			if a[i-1] == b[j-1] {
+				cost = 0
+			}
+			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
+			if i > 1 && j > 1 && a[i-1] == b[j-2] && a[i-2] == b[j-1] {
+				cur[j] = min(cur[j], pp[j-2]+1)
+			}
+		}
+		pp, prev, cur = prev, cur, pp
+	}
+	return prev[len(b)]
 }

@@ -5,14 +5,18 @@ import (
 	"testing"
 )
 
-// Suggest names a known word one or two keystrokes away (Levenshtein
-// distance; a transposition counts two), and nothing farther.
+// Suggest names a known word one or two keystrokes away, and nothing
+// farther. Two neighbouring letters swapped count as one slip: Damerau
+// (Communications of the ACM 7(3), 1964; from memory) found most
+// misspellings to be one letter inserted, deleted, changed or swapped
+// with its neighbour.
 func TestSuggest(t *testing.T) {
 	known := []string{"top", "bottom", "material", "within", "gradation", "bag_mass"}
 	for _, c := range []struct{ word, want string }{
 		{"botom", "bottom"},       // one deletion
 		{"Bottom", "bottom"},      // case
-		{"tpo", ""},               // a transposition is distance 2; a 3-letter word allows 1
+		{"tpo", "top"},            // neighbours swapped: one slip
+		{"pot", ""},               // two letters changed; a 3-letter word allows 1
 		{"materail", "material"},  // transposition in a long word
 		{"gradaton", "gradation"}, // one deletion
 		{"bagmass", "bag_mass"},

@@ -84,6 +84,30 @@ type TableSpec struct {
 	Doc   string
 	Keys  []KeySpec
 	Other *KeySpec // the form of keys named by the user (a profile's groups), or nil: no others
+	// Noun is what the table's keys are called in an "unknown" message
+	// ("rule", "purpose"); "" for "key".
+	Noun string
+	// Hint replaces the list of keys in an unknown key's hint, for a table
+	// whose keys are too many to list (every rule ID); "" lists them.
+	Hint string
+}
+
+// spec is the spec of key name: its own, or the form of keys named by the
+// user; nil when the table takes neither.
+func (t *TableSpec) spec(name string) *KeySpec {
+	if ks := t.Key(name); ks != nil {
+		return ks
+	}
+	if t == nil {
+		return nil
+	}
+	return t.Other
+}
+
+// takes reports whether a key of the spec (or its other form, Alt) is of
+// type want.
+func (k *KeySpec) takes(want ValueType) bool {
+	return k.Type == want || (k.Alt != nil && k.Alt.Type == want)
 }
 
 // Key returns the spec of key name, or nil when the table has no such key.

@@ -93,8 +93,9 @@ func TestPipeDimensions(t *testing.T) {
 			}
 		}
 	}
-	// NPS 10 and 12 (ASTM D1785 inch table, from memory): OD 10.750 and
-	// 12.750 in; Sch 40 walls 0.365 and 0.406 in; Sch 80 0.593 and 0.687 in.
+	// NPS 10 and 12 (ASTM D1785 dimensions as tabulated in the PVC pipe data
+	// of sd-w.com/channel_flow/pipe_data: OD 10.750 and 12.750 in; Sch 40
+	// minimum walls 0.365 and 0.406 in; Sch 80 0.593 and 0.687 in).
 	// ASME B36.10M Table 1 gives steel Sch 80 walls of 0.594 and 0.688 in
 	// (and the same Sch 40 walls): steel pipe takes those.
 	for _, c := range []struct {

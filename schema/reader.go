@@ -105,7 +105,7 @@ func (t *table) get(k string, want ValueType) (any, bool) {
 	if t.r.onRead != nil {
 		t.r.onRead(t.path, k)
 	}
-	if ks := t.spec.Key(k); t.spec != nil && (ks == nil || ks.Type != want) {
+	if ks := t.spec.spec(k); t.spec != nil && (ks == nil || !ks.takes(want)) {
 		t.r.errAt(t.path, "internal: the loader reads %q in [%s] as %v, which schema/wellkeys.go does not declare", k, stripIndex(t.path), want)
 	}
 	v, ok := t.m[k]
@@ -114,7 +114,7 @@ func (t *table) get(k string, want ValueType) (any, bool) {
 
 // childSpec is the key table of sub-table k.
 func (t *table) childSpec(k string) *TableSpec {
-	if ks := t.spec.Key(k); ks != nil {
+	if ks := t.spec.spec(k); ks != nil {
 		return ks.Table
 	}
 	return nil
@@ -123,22 +123,30 @@ func (t *table) childSpec(k string) *TableSpec {
 // bounded checks that the key table gives key k the bound the loader
 // enforces.
 func (t *table) bounded(k string, b Bound) {
-	if ks := t.spec.Key(k); ks != nil && ks.Bound != b {
+	ks := t.spec.spec(k)
+	if ks != nil && ks.Type == TypeTable && ks.Alt != nil {
+		ks = ks.Alt // a number given in place of the table
+	}
+	if ks != nil && ks.Bound != b {
 		t.r.errAt(t.path, "internal: the loader bounds %q in [%s] other than schema/wellkeys.go declares", k, stripIndex(t.path))
 	}
 }
 
 // done reports every key of the table that its key table does not
-// declare (or, for a table without one, that no reader asked for), naming
-// the known key it is closest to and, as a hint, every key the table
-// takes.
+// declare (or, for a table without one or a key of a form the user names,
+// such as a profile's groups, that no reader asked for), naming the known
+// key it is closest to and, as a hint, every key the table takes.
 func (t *table) done() {
 	if t == nil {
 		return
 	}
 	var unknown []string
 	for k := range t.m {
-		if (t.spec != nil && t.spec.Key(k) == nil) || (t.spec == nil && !t.isUsed(k)) {
+		known := t.isUsed(k) // a table without a key table, or a key of the Other form
+		if t.spec != nil && (t.spec.Key(k) != nil || t.spec.Other == nil) {
+			known = t.spec.Key(k) != nil
+		}
+		if !known {
 			unknown = append(unknown, k)
 		}
 	}
@@ -149,7 +157,8 @@ func (t *table) done() {
 	var known []string
 	if t.spec != nil {
 		known = t.spec.Names()
-	} else {
+	}
+	if t.spec == nil || t.spec.Other != nil {
 		known = append(known, t.used...)
 	}
 	sort.Strings(known)
@@ -159,11 +168,20 @@ func (t *table) done() {
 		where = "in [" + stripIndex(t.path) + "]"
 		hint = "[" + stripIndex(t.path) + "] takes: " + strings.Join(known, ", ")
 	}
-	if len(known) == 0 {
+	noun := "key"
+	if t.spec != nil {
+		if t.spec.Hint != "" {
+			hint = t.spec.Hint
+		}
+		if t.spec.Noun != "" {
+			noun = t.spec.Noun
+		}
+	}
+	if len(known) == 0 && (t.spec == nil || t.spec.Hint == "") {
 		hint = ""
 	}
 	for _, k := range unknown {
-		t.r.errAtKey(t.keyPath(k), hint, "unknown key %q %s%s", k, where, DidYouMean(k, known))
+		t.r.errAtKey(t.keyPath(k), hint, "unknown %s %q %s%s", noun, k, where, DidYouMean(k, known))
 	}
 }
 
@@ -240,7 +258,7 @@ func (t *table) oneOf(k string) string {
 		return ""
 	}
 	var allowed []string
-	if ks := t.spec.Key(k); ks != nil {
+	if ks := t.spec.spec(k); ks != nil {
 		allowed = ks.Enum
 	}
 	for _, a := range allowed {

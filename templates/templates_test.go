@@ -181,3 +181,28 @@ func TestParseReportsEveryError(t *testing.T) {
 		}
 	}
 }
+
+// A template is read by the shared strict reader: every mistake is named
+// at name.toml:line:col, an unknown key with the closest known one and the
+// keys its table takes.
+func TestTemplateErrorsPositioned(t *testing.T) {
+	src := "title = \"T\"\nwidth = \"8.5in\"\nheight = \"11 furlongs\"\nmargin = \"0.4in\"\n[legend]\nsied = \"bottom\"\nside = \"bottom\"\n[columns]\ndepth = 0.5\nwell = \"half\"\n"
+	_, err := Parse("odd", []byte(src), false)
+	list := schema.Errors("", err)
+	want := []string{
+		`odd.toml:3:10: height: length "11 furlongs": give a unit (in, mm, cm, pt)`,
+		`odd.toml:6:1: unknown key "sied" in [legend] (did you mean "side"?)`,
+		`odd.toml:10:8: well must be a number, not a string`,
+	}
+	if len(list) != len(want) {
+		t.Fatalf("%d errors, want %d:\n%v", len(list), len(want), err)
+	}
+	for i, e := range list {
+		if e.Error() != want[i] {
+			t.Errorf("error %d:\n got %s\nwant %s", i, e, want[i])
+		}
+	}
+	if list[1].Hint != "[legend] takes: side, size" {
+		t.Errorf("hint %q", list[1].Hint)
+	}
+}

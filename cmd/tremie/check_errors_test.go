@@ -18,7 +18,7 @@ func TestCheckReportsEverySettingsError(t *testing.T) {
 	code, out, errb := runTremie("check", "--format", "json", dir)
 	file := filepath.Join(dir, "project.toml")
 	for _, want := range []string{
-		file + `:3:9: units must be "ft" or "m", not "yd"`,
+		file + `:3:9: units = "yd" is not one of: ft, m`,
 		file + `:4:1: unknown key "landscpe" in [project] (did you mean "landscape"?)`,
 		file + `:5:1: unknown key "wels" in [project] (did you mean "wells"?)`,
 		"\t[project] takes: ",
@@ -66,12 +66,12 @@ func TestCheckReportsEverySettingsError(t *testing.T) {
 func TestCheckReportsProjectProfileAndYieldsErrorsTogether(t *testing.T) {
 	t.Chdir(filepath.Join("testdata", "nine-mistakes"))
 	want := []string{
-		`project.toml:4:9: units must be "ft" or "m", not "yd"`,
+		`project.toml:4:9: units = "yd" is not one of: ft, m`,
 		`project.toml:7:1: unknown key "landscpe" in [project] (did you mean "landscape"?)`,
 		`project.toml:8:1: unknown key "wels" in [project] (did you mean "wells"?)`,
-		`site.profile.toml:2:9: units must be "ft" or "m" (got yd)`,
-		`site.profile.toml:4:1: unknown rule "SEAL-THICKNES" (tremie rules lists them) (did you mean "SEAL-THICKNESS"?)`,
-		`site.profile.toml:8:6: rule ANNULAR-SPACE has no parameter "mn" (it takes severity, min, min_pack) (did you mean "min"?)`,
+		`site.profile.toml:2:9: units = "yd" is not one of: ft, m`,
+		`site.profile.toml:4:7: unknown rule "SEAL-THICKNES" in [rule] (did you mean "SEAL-THICKNESS"?)`,
+		`site.profile.toml:8:1: unknown key "mn" in [rule.ANNULAR-SPACE] (did you mean "min"?)`,
 		`site.yields.toml:5:9: unknown key "filter-pak" in [yields] (did you mean "filter-pack"?)`,
 		`site.yields.toml:9:9: yield must be a positive number, not -1`,
 		`site.yields.toml:10:1: unknown key "bag_mas" in [yields.bentonite-chips] (did you mean "bag_mass"?)`,

@@ -91,7 +91,11 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie render: %v\n", rep.SaveErr)
 		code = worse(code, exitOutput)
 	}
-	fmt.Fprintf(stdout, "%d rendered, %d unchanged, %d failed (%s)\n", rep.Summary.Done, rep.Summary.Skipped, rep.Summary.Failed, strings.Join(run.ProfileLabels(), "; "))
+	refused := ""
+	if rep.Refused > 0 {
+		refused = fmt.Sprintf("%d refused, ", rep.Refused)
+	}
+	fmt.Fprintf(stdout, "%d rendered, %s%d unchanged, %d failed (%s)\n", rep.Summary.Done, refused, rep.Summary.Skipped, rep.Summary.Failed, strings.Join(run.ProfileLabels(), "; "))
 	fmt.Fprintln(stdout, "Sheets support, and never replace, the review of a licensed professional and the governing local well code.")
 	return code
 }

@@ -233,6 +233,10 @@ func TestRenderIssueRefusesUnwaivedErrors(t *testing.T) {
 		if _, err := os.Stat(filepath.Join(outDir, "MW-3.svg")); err == nil {
 			t.Errorf("%v: MW-3 was issued", args)
 		}
+		// the refused well is not counted as rendered
+		if !strings.Contains(stdout.String(), "6 rendered, 1 refused, 0 unchanged, 0 failed") {
+			t.Errorf("%v: summary line:\n%s", args, stdout.String())
+		}
 		data, err := os.ReadFile(filepath.Join(outDir, "MW-1.svg"))
 		if err != nil || !strings.Contains(string(data), "SEAL AND SIGNATURE") {
 			t.Errorf("%v: MW-1 not drawn as issued (%v)", args, err)

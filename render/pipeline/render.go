@@ -55,6 +55,9 @@ type Rendered struct {
 type RenderReport struct {
 	Wells   []Rendered // in input order
 	Summary batch.Summary
+	// Refused counts the wells refused under --strict or in an issued set:
+	// nothing was drawn for them, so Summary.Done leaves them out.
+	Refused int
 	// Stale are outputs in the output directory (relative to it) whose
 	// well file is gone or that a well no longer produces; never deleted.
 	Stale []string
@@ -155,7 +158,6 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 		w.Well, w.Quantities = nil, nil // drawn: keep only what the report prints
 		return rd, batch.Done, nil
 	})
-	rep.Summary = sum
 	rep.Wells = make([]Rendered, len(res))
 	present := make([]string, len(jobs))
 	for i, x := range res {
@@ -165,7 +167,12 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 			rep.Wells[i].Well = jobs[i].well
 		}
 		present[i] = jobs[i].well.Key
+		if rep.Wells[i].Refused {
+			rep.Refused++
+			sum.Done--
+		}
 	}
+	rep.Summary = sum
 	rep.Stale = cache.Stale(present)
 	rep.SaveErr = cache.Save()
 	return rep, nil

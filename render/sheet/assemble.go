@@ -88,7 +88,7 @@ func (l *layout) bodyFrame() []draw.Item {
 		{c.lith, "LITH.", ""},
 		{c.uscs, "USCS", ""},
 		{c.desc, "DESCRIPTION", ""},
-		{c.well, "WELL CONSTRUCTION", fmt.Sprintf("widths ×%s", schema.TrimFloat(l.hz.exaggerationFor(l.scale), 1))},
+		{c.well, "WELL CONSTRUCTION", fmt.Sprintf("widths ×%s", figure(l.hz.exaggerationFor(l.scale)))},
 		{c.call, "COMPONENTS", ""},
 	}
 	for _, h := range heads {

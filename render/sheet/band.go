@@ -96,7 +96,7 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 		if nh > bp.height {
 			// Keep what fits; the rest goes on a notes sheet after the
 			// drawings, and the band says so.
-			bp.notes, bp.overflow = notesThatFit(notes, bp.height-(bandHeadH+bandPad+continueLineH))
+			bp.notes, bp.overflow = notesThatFit(notes, bp.height-(bandHeadH+bandPad+continueLineH+bandPad))
 		}
 		score := bp.height
 		if len(bp.overflow) > 0 {
@@ -153,7 +153,7 @@ func (l *layout) planSideBand(legend []symbol) bandPlan {
 	notes := l.noteBlocks(w - 2*bandPad)
 	bp.notes = notes
 	if bandHeadH+bandPad+notesHeight(notes) > notesAvail {
-		bp.notes, bp.overflow = notesThatFit(notes, notesAvail-(bandHeadH+bandPad+continueLineH))
+		bp.notes, bp.overflow = notesThatFit(notes, notesAvail-(bandHeadH+bandPad+continueLineH+bandPad))
 	}
 	return bp
 }
@@ -163,6 +163,10 @@ func (l *layout) planSideBand(legend []symbol) bandPlan {
 func notesThatFit(blocks []noteBlock, h float64) (fit, rest []noteBlock) {
 	for i := range blocks {
 		if notesHeight(blocks[:i+1]) > h {
+			// A heading goes with the first block under it.
+			for i > 0 && blocks[i-1].heading {
+				i--
+			}
 			return blocks[:i], blocks[i:]
 		}
 	}

@@ -30,7 +30,7 @@ func (l *layout) planCallouts() {
 	r := l.bandPlan.noteR
 	noteW := r.W - 2*bandPad
 	used := bandHeadH + bandPad + notesHeight(l.bandPlan.notes)
-	reserve := lineGap(sizeSmall) + 2 // the "continue on sheet" line
+	reserve := continueLineH + bandPad // the "continue on sheet" line, clear of the box's foot
 	next := 1
 	descNotes := l.planDescriptions(noteW)
 	l.sheetCallouts = make([][]placedCallout, len(l.sheets))
@@ -80,6 +80,11 @@ func (l *layout) planCallouts() {
 			l.calloutOverflow = append(l.calloutOverflow, head(fmt.Sprintf("%s ON SHEET %d, CONTINUED", strings.TrimSuffix(title, ", CONTINUED"), n)))
 			l.calloutOverflow = append(l.calloutOverflow, entries[k:]...)
 		}
+	}
+	if len(l.calloutOverflow) > 0 && len(l.bandPlan.overflow) == 0 && used+reserve > r.H {
+		// The notes fill the box to its foot: the last of them join the
+		// notes sheet, leaving room for the line that points to it.
+		l.bandPlan.notes, l.bandPlan.overflow = notesThatFit(l.bandPlan.notes, r.H-bandHeadH-bandPad-reserve)
 	}
 }
 

@@ -72,11 +72,18 @@ func (l *layout) horizontal() hgeom {
 	avail := col.W - 30 // room for rough walls, centralizers and leader starts
 	d := float64(widest(l.w))
 	h := hgeom{cx: col.Center()}
+	fits := false
 	for _, r := range horizontalRatios {
 		h.ratio = r
-		if d*72/25.4/r <= avail {
+		if fits = d*72/25.4/r <= avail; fits {
 			break
 		}
+	}
+	// A diameter past every round ratio (a slip of units the rules
+	// report) still draws within the column: 1:500, 1:1000, 1:2000, ...
+	for step := 0; !fits && step < 3*320; step++ {
+		h.ratio *= []float64{2.5, 2, 2}[step%3]
+		fits = d*72/25.4/h.ratio <= avail
 	}
 	h.ppmm = 72 / 25.4 / h.ratio
 	h.strX = l.stringCentres(h)

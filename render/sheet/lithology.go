@@ -69,19 +69,15 @@ func (lithologyPart) paint(p *painter) []draw.Item {
 	return append(out, items...)
 }
 
-// descriptions are the sheet's planned descriptions, or for a painter
-// outside the plan its own fitting, unnumbered.
+// descriptions are the sheet's descriptions as planDescriptions fitted
+// them.
 func (p *painter) descriptions() []descEntry {
 	for i, sp := range p.l.sheets {
 		if sp == p.sp && i < len(p.l.sheetDescs) {
 			return p.l.sheetDescs[i]
 		}
 	}
-	es := p.descEntries()
-	_, width := p.l.descText()
-	lo, hi := p.descBounds()
-	fitDescs(es, width, lo, hi)
-	return es
+	return nil
 }
 
 // columnSymbol is what the USCS column shows for a layer h points tall:

@@ -86,6 +86,7 @@ func TestEveryTextInsideItsRegion(t *testing.T) {
 	wells = append(wells, galleryWells(t)...)
 	cw, cin := crowdedWell()
 	wells = append(wells, corpusWell{"crowded", cw, cin})
+	wells = append(wells, absurdWells(t)...)
 	for _, name := range []string{"letter", "tabloid", "a4", "a3"} {
 		for _, land := range []bool{false, true} {
 			tpl, err := templates.Load(name, land)
@@ -104,11 +105,13 @@ func TestEveryTextInsideItsRegion(t *testing.T) {
 				bad := 0
 				for i, p := range doc.Pages {
 					notesSheet := i >= len(l.sheets)
+					var placed []draw.Text
 					p.Walk(func(it draw.Item) {
 						tx, ok := it.(draw.Text)
 						if !ok || bad > 5 {
 							return
 						}
+						placed = append(placed, tx)
 						r := textRect(tx)
 						region, known := l.textRegion(tx.Role)
 						if notesSheet && known && region != l.header && region != l.caution {
@@ -129,10 +132,52 @@ func TestEveryTextInsideItsRegion(t *testing.T) {
 							}
 						}
 					})
+					for _, o := range overlappingContinueLines(placed) {
+						bad++
+						t.Errorf("%s sheet %d: %s", tag, i+1, o)
+					}
 				}
 			}
 		}
 	}
+}
+
+// absurdWells are the demo's MW-1 with a borehole diameter that a slip of
+// units or a stray keystroke gives (the rules report it): the sheet
+// still draws, and its long numbers stay in their columns.
+func absurdWells(t *testing.T) []corpusWell {
+	var out []corpusWell
+	for _, d := range []float64{1.2345678901234525e14, 1e300} {
+		w := *demoWells(t)["MW-1.toml"].w
+		w.Boreholes = append([]schema.BoreholeSection(nil), w.Boreholes...)
+		for i := range w.Boreholes {
+			w.Boreholes[i].Diameter = schema.DiameterFrom(d, schema.Inches)
+		}
+		out = append(out, corpusWell{fmt.Sprintf("MW-1 with a %g-in hole", d), &w, Inputs{Findings: rules.Check(&w, nil), Quantities: quantity.Compute(&w, nil)}})
+	}
+	return out
+}
+
+// overlappingContinueLines names each "continue" line of a box whose
+// text touches another text: it must stand clear below the last row.
+func overlappingContinueLines(placed []draw.Text) []string {
+	var out []string
+	for _, c := range placed {
+		if c.Role != "notes-continued" && c.Role != "amounts-continued" {
+			continue
+		}
+		cr := textRect(c)
+		for _, o := range placed {
+			if o == c {
+				continue
+			}
+			or := textRect(o)
+			if or.X < cr.Right() && cr.X < or.Right() && or.Y < cr.Bottom()+0.5 && cr.Y < or.Bottom()+0.5 {
+				out = append(out, fmt.Sprintf("%q touches %s %q", c.S, o.Role, o.S))
+			}
+		}
+	}
+	return out
 }
 
 // The 1,200-ft well's 150 descriptions are all readable at the automatic

@@ -6,7 +6,9 @@ import (
 	"image"
 	_ "image/jpeg" // logo formats the project accepts
 	_ "image/png"
+	"math"
 	"sort"
+	"strconv"
 	"strings"
 
 	"github.com/tremie-dev/tremie/render/draw"
@@ -129,6 +131,10 @@ func (l *layout) coordinates() string {
 	return s
 }
 
+// exaggerationSized is the longest horizontal exaggeration the title
+// block makes room for in one line.
+const exaggerationSized = "×100 (diameters at 1:100)"
+
 // fill completes the fields known only once the scale is fixed.
 func (l *layout) scaleFields() {
 	for r := range l.title.rows {
@@ -138,7 +144,11 @@ func (l *layout) scaleFields() {
 			case "Vertical scale":
 				f.value = l.scale.String()
 			case "Horizontal exaggeration":
-				f.value = fmt.Sprintf("×%s (diameters at 1:%s)", schema.TrimFloat(l.hz.exaggerationFor(l.scale), 1), schema.TrimFloat(l.hz.ratio, 1))
+				x, r := figure(l.hz.exaggerationFor(l.scale)), figure(l.hz.ratio)
+				f.value = fmt.Sprintf("×%s (diameters at 1:%s)", x, r)
+				if draw.TextWidth(draw.Regular, sizeBody, f.value) > draw.TextWidth(draw.Regular, sizeBody, exaggerationSized) {
+					f.value = fmt.Sprintf("×%s (1:%s)", x, r) // within the width the cell was given
+				}
 			}
 		}
 	}
@@ -159,7 +169,7 @@ func (tb titleBlock) cellWidths(row []field, w float64) []float64 {
 		case "Vertical scale":
 			v = "1 in = 100 ft  0 ——— 100 ft"
 		case "Horizontal exaggeration":
-			v = "×100 (diameters at 1:100)"
+			v = exaggerationSized
 		}
 		need[i] = max(draw.TextWidth(draw.Regular, sizeTiny, strings.ToUpper(f.label)), draw.TextWidth(draw.Regular, sizeBody, v), f.minW) + 10
 		for _, s := range f.lines {
@@ -352,4 +362,28 @@ func (l *layout) scaleBar(x0, y, x1 float64) []draw.Item {
 		box(draw.Rect{X: bx + half, Y: by, W: half, H: 3.4}, ink, 0.4, draw.White, "scalebar"),
 		text(bx+w+2, y, schema.TrimFloat(length, 2)+" "+string(l.u.Depth), draw.Regular, sizeTiny, draw.Start, ink, "scalebar-length"),
 	}
+}
+
+// figure writes a ratio short enough for its cell whatever its size: 1.5
+// or 0.06 as such, and one past 10⁵ or below 10⁻³ (a diameter off by a
+// slip of units) as a power of ten, "2 × 10¹⁴".
+func figure(v float64) string {
+	switch {
+	case !(v > 0) || math.IsInf(v, 0):
+		return schema.TrimFloat(v, 1)
+	case v >= 1e5 || v < 1e-3:
+		e := math.Floor(math.Log10(v))
+		m := v / math.Pow(10, e)
+		if m >= 9.95 { // rounding up to the next power
+			m, e = 1, e+1
+		}
+		sup := strings.NewReplacer("-", "⁻", "0", "⁰", "1", "¹", "2", "²", "3", "³", "4", "⁴", "5", "⁵", "6", "⁶", "7", "⁷", "8", "⁸", "9", "⁹").Replace(strconv.Itoa(int(e)))
+		if ms := schema.TrimFloat(m, 1); ms != "1" {
+			return ms + " × 10" + sup
+		}
+		return "10" + sup
+	case v < 1:
+		return strconv.FormatFloat(v, 'g', 2, 64)
+	}
+	return schema.TrimFloat(v, 1)
 }

@@ -80,12 +80,7 @@ var File = schema.SpecOf("tremie project file", "A project's settings shared by 
 // Load reads dir/project.toml (dir may also be the file itself) and the
 // logo it names. Errors carry the file and line.
 func Load(dir string) (*Project, error) {
-	file := dir
-	if st, err := os.Stat(dir); err == nil && st.IsDir() {
-		file = filepath.Join(dir, FileName)
-	} else {
-		dir = filepath.Dir(dir)
-	}
+	dir, file := locate(dir)
 	data, err := schema.ReadInput(file, schema.MaxTextFile)
 	if err != nil {
 		if errors.Is(err, fs.ErrNotExist) {
@@ -117,7 +112,7 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 		Name:             pt.Str("name"),
 		Client:           pt.Str("client"),
 		Site:             pt.Str("site"),
-		Units:            schema.DepthUnit(pt.Str("units")),
+		Units:            schema.DepthUnit(pt.OneOf("units")),
 		Datum:            pt.Str("datum"),
 		CoordinateSystem: pt.Str("coordinate_system"),
 		CRS:              pt.Str("crs"),
@@ -142,11 +137,6 @@ func Parse(dir, file string, data []byte) (*Project, error) {
 	}
 	if strings.TrimSpace(p.Name) == "" {
 		doc.Errorf("project", "[project] needs a name (name = \"...\")")
-	}
-	switch p.Units {
-	case "", schema.Feet, schema.Metres:
-	default:
-		doc.Errorf("project.units", "units must be \"ft\" or \"m\", not %q", p.Units)
 	}
 	if p.CRS != "" {
 		if _, err := crs.Parse(p.CRS); err != nil {
@@ -266,12 +256,7 @@ func readNorth(doc *schema.Doc, pt *schema.Table) schema.Orientation {
 // with its own, so that all are fixed at once. Each is "" when not named
 // or not a string, and both when the file cannot be read or parsed.
 func Linked(dir string) (profile, yields string) {
-	file := dir
-	if st, err := os.Stat(dir); err == nil && st.IsDir() {
-		file = filepath.Join(dir, FileName)
-	} else {
-		dir = filepath.Dir(dir)
-	}
+	dir, file := locate(dir)
 	data, err := schema.ReadInput(file, schema.MaxTextFile)
 	if err != nil {
 		return "", ""
@@ -292,4 +277,12 @@ func Linked(dir string) (profile, yields string) {
 		p.Yields, _ = s.(string)
 	}
 	return p.ProfilePath(), p.YieldsPath()
+}
+
+// locate is the project's directory and file, given either.
+func locate(path string) (dir, file string) {
+	if st, err := os.Stat(path); err == nil && st.IsDir() {
+		return path, filepath.Join(path, FileName)
+	}
+	return filepath.Dir(path), path
 }

@@ -93,7 +93,7 @@ func TestLoadErrorsNameTheLine(t *testing.T) {
 		{"syntax", "[project]\nname = \"x\n", 2, ""},
 		{"no name", "[project]\nclient = \"c\"\n", 1, "needs a name"},
 		{"no table", "name = \"x\"\n", 1, ""},
-		{"bad units", "[project]\nname = \"x\"\nunits = \"yd\"\n", 3, `"ft" or "m"`},
+		{"bad units", "[project]\nname = \"x\"\nunits = \"yd\"\n", 3, `units = "yd" is not one of: ft, m`},
 		{"empty wells", "[project]\nname = \"x\"\nwells = \"\"\n", 3, "wells must name"},
 		{"date as text", "[project]\nname = \"x\"\nissued = \"March\"\n", 3, "must be a date"},
 		{"missing profile", "[project]\nname = \"x\"\nprofile = \"nope.profile.toml\"\n", 3, "not found"},
@@ -127,7 +127,7 @@ func TestLoadReportsEveryError(t *testing.T) {
 	list := schema.Errors("", err)
 	file := filepath.Join(dir, FileName)
 	want := []string{
-		file + `:3:9: units must be "ft" or "m", not "yd"`,
+		file + `:3:9: units = "yd" is not one of: ft, m`,
 		file + `:4:1: unknown key "landscpe" in [project] (did you mean "landscape"?)`,
 		file + `:9:14: max_offset must be a number, not a string`,
 	}

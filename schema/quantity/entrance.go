@@ -8,7 +8,9 @@ import (
 
 // EntranceVelocityLimit is the largest velocity at which water should
 // enter a supply well's screen, in m/s: 0.1 ft/s (3 cm/s), F. G. Driscoll,
-// Groundwater and Wells (2nd ed., 1986), chapter 13 (screen selection).
+// Groundwater and Wells (2nd ed., 1986), chapter 13 (screen selection);
+// British Columbia's Guidelines for Minimum Standards in Water Well
+// Construction (1982), appendix 2, give the same 0.1 ft/s.
 const EntranceVelocityLimit = 0.1 * schema.MetresPerFoot
 
 // EffectiveOpenFraction is the share of a screen's open area that passes

@@ -12,10 +12,16 @@ const kgPerM3PerLbPerGal = 0.45359237 / 3.785411784 * 1000
 
 // The expected densities of the default grouts against published
 // figures: neat cement at 5.2 US gal per 94-lb sack weighs about 15.6
-// lb/gal (API/cementing tables for Class A/Type I at 5.2 gal/sk: 15.6
-// lb/gal, 1.18 ft3/sk, from memory) and meets Ohio Adm. Code 3745-9-07
-// (at most 5.2 gal per sack, at least 15 lb/gal).
+// lb/gal and meets Ohio Adm. Code 3745-9-07 (at most 5.2 gal per sack, at
+// least 15 lb/gal). The cementing worked example of "Cement Slurries"
+// (eng-info-tech, from a drilling handbook) takes a sack with 5.18 gal:
+// 0.478 + 0.693 = 1.171 ft3 weighing 137.2 lb, 117.1 lb/ft3 = 15.7
+// lb/gal; the same arithmetic here gives those figures, and the default's
+// 1.18 ft3 (air entrained in the sack) puts it at 15.56 lb/gal.
 func TestGroutDensity(t *testing.T) {
+	worked := SandCementYield(94, 0, 5.18)
+	near(t, "worked example ft3", worked, 1.171, 5e-4)
+	near(t, "worked example lb/gal", (94+5.18*waterLbPerFt3/galPerFt3)/(worked*galPerFt3), 15.7, 5e-3)
 	y := DefaultYields()
 	neat, _ := y.Get(schema.NeatCement)
 	d, ok := neat.Density()

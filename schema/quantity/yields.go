@@ -148,7 +148,7 @@ func lb(v float64) schema.Mass    { return schema.MassFrom(v, schema.Pounds) }
 const (
 	waterLbPerFt3 = 62.4
 	galPerFt3     = 1728.0 / 231
-	cementSG      = 3.15 // Portland cement, ASTM C188 typical (common practice)
+	cementSG      = 3.15 // Portland cement (Concrete Construction, "Volume of grout"; ASTM C188 measures it)
 	bentoniteSG   = 2.6  // sodium montmorillonite (from memory)
 	quartzSG      = 2.65 // silica sand (common practice)
 )

@@ -33,8 +33,9 @@ var plugGuide = []struct{ dia, cementFt, chipsFt float64 }{
 //   - neat cement, 94-lb sack with 5.2 gal: the absolute-volume sum is
 //     1.173 ft3 (checked below); Concrete Construction's weighed batch (117
 //     lb/ft3) came out 1.3 % above its sum (1.16 against 1.145 ft3), which
-//     puts the sack at 1.173 to 1.188 ft3 (the cementing tables' 1.18,
-//     from memory).
+//     puts the sack at 1.173 to 1.188 ft3 (the cementing tables' 1.18;
+//     a drilling handbook's worked sack with 5.18 gal is 1.171 ft3,
+//     TestGroutDensity).
 func TestDefaultYields(t *testing.T) {
 	y := DefaultYields()
 	for _, m := range schema.Materials {

@@ -9,8 +9,9 @@ import (
 
 // annularSpaceSource is where the 2-in figure comes from.
 const annularSpaceSource = "California DWR Bulletin 74-90 §9.E (monitoring wells) and 74-81 §9 (water wells): at least 2 in " +
-	"of seal between every casing and the borehole wall and between casings in one hole; ASTM D5092 (monitoring wells): " +
-	"a hole at least 4 in larger than the casing OD (from memory). Local codes differ (some accept about 1.8 in for 2-in " +
+	"of seal between every casing and the borehole wall and between casings in one hole. For monitoring wells in soil " +
+	"US Army TM 5-814-7 (as reproduced in UFC 3-280-02A) and Wisconsin NR 141.19(1) ask for a boring at least 4 in " +
+	"wider than the casing's inside diameter. Local codes differ (some accept about 1.8 in for 2-in " +
 	"monitoring wells, 1.5 in for domestic wells in rock): set min per purpose in the profile"
 
 func init() {
@@ -36,7 +37,7 @@ func init() {
 			Source: "as min, except for supply wells",
 			ByPurpose: []PurposeDefault{{
 				Purposes: supplyWells, Default: 75, DefaultFt: 3,
-				Source: "US Army Corps of Engineers TI 814-01 (1998): at least 3 in of filter pack around a supply-well screen (from memory; 75 mm for wells in metres)",
+				Source: "US EPA, Private Water Systems (gravel-pack design): a pack three inches thick is practical to place all round a screen, more than 8 in no better (75 mm for wells in metres)",
 			}},
 		}},
 		Run: runAnnularSpace,

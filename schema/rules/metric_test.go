@@ -43,25 +43,26 @@ func TestMetricThresholdsRound(t *testing.T) {
 	}
 }
 
-// A metric public-supply well: DWR's 50 ft is 15.25 m (15.24 m to the
-// nearest 5 cm) in the message; a profile in metres that sets 15 m, the
-// round figure of a metric code, is used as written.
+// A metric public-supply well gets the metres DWR Bulletin 74-81 §9.A
+// gives beside its feet: 50 ft (15 m), so 14.9 m falls short of 15 m; a
+// profile in metres that sets 14 m, a metric code's round figure, is used
+// as written.
 func TestMetricSanitarySealMessage(t *testing.T) {
 	src := strings.Replace(monitoringWell("m", "210", "20.0", fill("16.0", "20.0", "filter-pack")+fill("15.2", "16.0", "bentonite-chips")+
-		fill("15.0", "15.2", "native-backfill")+fill("0.0", "15.0", "neat-cement")), `purpose = "monitoring"`, `purpose = "public-supply"`, 1)
+		fill("14.9", "15.2", "native-backfill")+fill("0.0", "14.9", "neat-cement")), `purpose = "monitoring"`, `purpose = "public-supply"`, 1)
 	src = strings.Replace(src, "top = 7.5\nbottom = 10.5", "top = 17.0\nbottom = 19.5", 1)
 	src = strings.Replace(src, "bottom = 7.5\nsize", "bottom = 17.0\nsize", 1)
 	w := load(t, src)
 	fs := findings(w, nil, "SANITARY-SEAL-DEPTH")
-	if len(fs) != 1 || !strings.Contains(fs[0].Message, "reaches 15 m; a public-supply well needs at least 15.25 m") {
+	if len(fs) != 1 || !strings.Contains(fs[0].Message, "reaches 14.9 m; a public-supply well needs at least 15 m") {
 		t.Fatalf("findings %+v", fs)
 	}
-	prof, err := ParseProfile("eu.profile.toml", []byte("[profile]\nname = \"metric code\"\nunits = \"m\"\n[sanitary_seal]\npublic-supply = 15\n"))
+	prof, err := ParseProfile("eu.profile.toml", []byte("[profile]\nname = \"metric code\"\nunits = \"m\"\n[sanitary_seal]\npublic-supply = 14\n"))
 	if err != nil {
 		t.Fatal(err)
 	}
 	if fs := findings(w, prof, "SANITARY-SEAL-DEPTH"); len(fs) != 0 {
-		t.Errorf("15 m under a 15 m profile: %+v", fs)
+		t.Errorf("14.9 m under a 14 m profile: %+v", fs)
 	}
 }
 

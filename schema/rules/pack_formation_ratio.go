@@ -14,18 +14,19 @@ func init() {
 			"with a d30 whose depth lies within a screen is compared with every filter pack beside that screen " +
 			"that gives its d30. Wells without samples or without a pack d30 are skipped.",
 		Severity: Warning,
-		Source: "ASTM D5092 (Design and Installation of Groundwater Monitoring Wells), §6.3.3.1, filter pack design: the pack's 30 % finer size " +
-			"about 4 to 6 times the formation's (from memory; not confirmed against the standard's text). " +
+		Source: "ASTM D5092-04 (Design and Installation of Ground Water Monitoring Wells), §6.3.3.1, filter pack design: the pack's d-30 " +
+			"about 4 to 6 times the formation's d-30, 4 for a fine, uniform formation and 6 for a coarse, poorly sorted one " +
+			"(as the standard's text is reproduced; TI 814-01 and Wisconsin NR 812.16 use 4 to 6 on the 70 % retained size). " +
 			"Monitoring wells and piezometers only by default, as the standard is written for them",
 		Purposes: observationWells,
 		Params: []Param{{
 			Name: "min_ratio", Kind: RatioParam, Default: 4,
 			Doc:    "least ratio of the pack's d30 to the formation's d30",
-			Source: "ASTM D5092 §6.3.3.1: 4 (from memory)",
+			Source: "ASTM D5092-04 §6.3.3.1: 4, for fine, uniform formations",
 		}, {
 			Name: "max_ratio", Kind: RatioParam, Default: 6,
 			Doc:    "greatest ratio of the pack's d30 to the formation's d30",
-			Source: "ASTM D5092 §6.3.3.1: 6 (from memory)",
+			Source: "ASTM D5092-04 §6.3.3.1: 6, for coarse, poorly sorted formations",
 		}},
 		Run: runPackFormationRatio,
 	})

@@ -1,8 +1,6 @@
 package rules
 
 import (
-	"math"
-
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/quantity"
 )
@@ -64,12 +62,3 @@ func (p *Profile) severity(r *Rule) Severity {
 }
 
 func (p *Profile) disabled(r *Rule) bool { return p.Off[r.ID] }
-
-// metresFromFeet is the default for wells in metres of a threshold a
-// source gives in feet: the conversion to the nearest 5 cm, a step finer
-// than a weighted tape reads (0.15 m, TAG-EXPECTED-TOP) and within 2.5 cm
-// of the source, so no message shows "6.096 m". A profile in metres sets
-// round values of its own (6 m, say) where the local rules are metric.
-func metresFromFeet(ft float64) float64 {
-	return math.Round(ft*schema.MetresPerFoot/0.05) * 0.05
-}

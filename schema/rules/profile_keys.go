@@ -1,6 +1,7 @@
 package rules
 
 import (
+	"strings"
 	"sync"
 
 	"github.com/tremie-dev/tremie/schema"
@@ -32,7 +33,8 @@ func profileSpec() *schema.TableSpec {
 		{Name: "units", Type: schema.TypeString, Enum: []string{"ft", "m"}, Doc: "ft: lengths in feet, diameters in inches; m: lengths in metres, diameters in millimetres. Required when any number is set.", Example: "ft"},
 		{Name: "source", Type: schema.TypeString, Doc: "The code the values follow.", Example: "Example County Code, chapter 9"},
 	}}
-	ruleTable := &schema.TableSpec{Doc: "Thresholds and severities by rule ID (tremie rules lists them)."}
+	ruleTable := &schema.TableSpec{Doc: "Thresholds and severities by rule ID (tremie rules lists them).", Noun: "rule",
+		Hint: "[rule.RULE-ID] takes the ID of a rule: tremie rules lists them"}
 	for _, rl := range All() {
 		settings := []schema.KeySpec{
 			{Name: "severity", Type: schema.TypeString, Enum: []string{"error", "warning", "off"}, Doc: "Severity of the rule's findings, or off.", Example: rl.Severity.String()},
@@ -40,7 +42,8 @@ func profileSpec() *schema.TableSpec {
 		for _, p := range rl.Params {
 			settings = append(settings, schema.KeySpec{Name: p.Name, Type: schema.TypeNumber, Bound: schema.NonNegative, Unit: paramUnit(p.Kind), Doc: p.Doc + " Source of the default: " + p.Source + ".", Example: p.exampleFt()})
 		}
-		t := &schema.TableSpec{Doc: rl.Title + ". " + rl.Doc, Keys: settings}
+		t := &schema.TableSpec{Doc: rl.Title + ". " + rl.Doc, Keys: settings,
+			Hint: "[rule." + rl.ID + "] takes: " + settingNames(settings) + "; and [rule." + rl.ID + ".PURPOSE] or [rule." + rl.ID + ".GROUP] for some wells only"}
 		// [rule.ID.PURPOSE] and [rule.ID.GROUP]: the same settings for those wells only
 		forSome := &schema.TableSpec{Doc: "The rule's settings for wells of these purposes only.", Keys: settings}
 		var short *schema.KeySpec
@@ -55,7 +58,7 @@ func profileSpec() *schema.TableSpec {
 	}
 	groups := &schema.TableSpec{Doc: "Groups of purposes of the profile's own, usable as [rule.RULE-ID.NAME].", Other: &schema.KeySpec{
 		Type: schema.TypeStrings, Enum: purposeStrings(), Doc: "The purposes of the group.", Example: []any{"domestic", "irrigation"}}}
-	seal := &schema.TableSpec{Doc: "Minimum sanitary-seal depth by well purpose (the same as the purpose parameters of [rule.SANITARY-SEAL-DEPTH]; give each in one place)."}
+	seal := &schema.TableSpec{Noun: "purpose", Doc: "Minimum sanitary-seal depth by well purpose (the same as the purpose parameters of [rule.SANITARY-SEAL-DEPTH]; give each in one place)."}
 	for _, p := range schema.Purposes {
 		seal.Keys = append(seal.Keys, schema.KeySpec{Name: string(p), Type: schema.TypeNumber, Bound: schema.NonNegative, Unit: profileLength, Doc: "Minimum sanitary-seal depth of a " + string(p) + " well.", Example: 20.0})
 	}
@@ -65,6 +68,15 @@ func profileSpec() *schema.TableSpec {
 		{Name: "rule", Type: schema.TypeTable, Doc: ruleTable.Doc, Table: ruleTable},
 		{Name: "sanitary_seal", Type: schema.TypeTable, Doc: seal.Doc, Table: seal},
 	}}
+}
+
+// settingNames lists a rule table's own keys: severity and parameters.
+func settingNames(settings []schema.KeySpec) string {
+	names := make([]string, len(settings))
+	for i, k := range settings {
+		names[i] = k.Name
+	}
+	return strings.Join(names, ", ")
 }
 
 func purposeStrings() []string {

@@ -1,10 +1,7 @@
 package rules
 
 import (
-	"fmt"
-	"math"
 	"path/filepath"
-	"sort"
 	"strings"
 
 	"github.com/tremie-dev/tremie/schema"
@@ -22,21 +19,18 @@ func LoadProfile(path string) (*Profile, error) {
 }
 
 // ParseProfile reads a profile's bytes; name is used in error positions.
-// The file is parsed and its errors placed, sorted and returned by the
-// one strict reader (schema.Doc); the walk below reads its rule and
-// purpose tables, whose names come from the registry.
+// It is read by the one strict reader (schema.Doc) against the profile's
+// key table (ProfileFile, made from the rule registry): every table and
+// value, the rule and purpose tables too, is read through a schema.Table,
+// so every error has its line and column, an unknown key its "did you
+// mean" and a hint of what the table takes, and all come back sorted.
 func ParseProfile(name string, data []byte) (*Profile, error) {
 	doc, err := schema.ParseDoc(name, data, ProfileFile())
 	if err != nil {
 		return nil, err
 	}
-	root := doc.Root()
-	raw := map[string]any{}
-	for _, k := range root.Keys() {
-		raw[k], _ = root.Raw(k)
-	}
-	pr := &profileReader{file: name, doc: doc}
-	prof := pr.read(raw)
+	pr := &profileReader{doc: doc}
+	prof := pr.read(name, doc.Root())
 	if err := doc.Err(); err != nil {
 		return nil, err
 	}
@@ -44,226 +38,149 @@ func ParseProfile(name string, data []byte) (*Profile, error) {
 }
 
 type profileReader struct {
-	file   string
-	doc    *schema.Doc
-	groups map[string][]schema.Purpose // the profile's own [groups]
-	claims map[string]setting          // rule|purpose|key -> where it was set
+	doc     *schema.Doc
+	groups  map[string][]schema.Purpose // the profile's own [groups]
+	claims  map[string]setting          // rule|purpose|key -> where it was set
+	numbers bool                        // a threshold is set, so units matter
 }
 
-func (r *profileReader) errAt(path, format string, args ...any) {
-	r.doc.Errorf(path, format, args...)
-}
-
-// tableOf returns v as a table, or reports that path should be one.
-func (r *profileReader) tableOf(path string, v any) (map[string]any, bool) {
-	m, ok := v.(map[string]any)
-	if !ok {
-		r.errAt(path, "%s must be a table, as [%s]", path, path)
-	}
-	return m, ok
-}
-
-// number reads a finite, non-negative number.
-func (r *profileReader) number(path string, v any) (float64, bool) {
-	var f float64
-	switch n := v.(type) {
-	case int64:
-		f = float64(n)
-	case float64:
-		f = n
-	default:
-		r.errAt(path, "%s must be a number, not %s", path, tomlType(v))
-		return 0, false
-	}
-	if math.IsNaN(f) || math.IsInf(f, 0) {
-		r.errAt(path, "%s must be a finite number", path)
-		return 0, false
-	}
-	if f < 0 {
-		r.errAt(path, "%s = %v must not be negative", path, f)
-		return 0, false
-	}
-	return f, true
-}
-
-func (r *profileReader) read(raw map[string]any) *Profile {
+func (r *profileReader) read(file string, root *schema.Table) *Profile {
 	prof := &Profile{
-		Name:       profileNameOf(r.file),
-		File:       r.file,
+		Name:       profileNameOf(file),
+		File:       file,
 		Values:     map[string]map[string]float64{},
 		Severities: map[string]Severity{},
 		Off:        map[string]bool{},
 	}
-	if v, ok := raw["profile"]; ok {
-		if m, ok := r.tableOf("profile", v); ok {
-			r.header(prof, m)
+	unitsWritten := false
+	if h := root.Sub("profile"); h != nil {
+		if n := h.Str("name"); n != "" {
+			prof.Name = n
 		}
+		prof.Source = h.Str("source")
+		unitsWritten = h.Has("units")
+		prof.Units = schema.DepthUnit(h.OneOf("units"))
+		h.Done()
 	}
-	if v, ok := raw["groups"]; ok {
-		if m, ok := r.tableOf("groups", v); ok {
-			r.readGroups(m)
-		}
+	if g := root.Sub("groups"); g != nil {
+		r.readGroups(g)
 	}
-	numbers := r.hasNumbers(raw)
-	// units written but wrong are reported where they are written
-	if pt, _ := raw["profile"].(map[string]any); numbers && prof.Units == "" && pt["units"] == nil {
-		r.errAt("profile", "give units = \"ft\" or \"m\" in [profile]: the profile sets thresholds")
-	}
-	if v, ok := raw["rule"]; ok {
-		if m, ok := r.tableOf("rule", v); ok {
-			for _, id := range sortedKeys(m) {
-				r.rule(prof, id, m[id])
+	if rt := root.Sub("rule"); rt != nil {
+		for _, id := range rt.Keys() {
+			if rl, ok := Lookup(id); ok {
+				if t := rt.Sub(id); t != nil {
+					r.rule(prof, rl, t)
+				}
 			}
 		}
+		rt.Done() // an unknown rule ID, with the closest known one
 	}
-	if v, ok := raw["sanitary_seal"]; ok {
-		if m, ok := r.tableOf("sanitary_seal", v); ok {
-			r.sanitarySeal(prof, m)
-		}
+	if t := root.Sub("sanitary_seal"); t != nil {
+		r.sanitarySeal(prof, t)
 	}
-	for _, k := range sortedKeys(raw) {
-		switch k {
-		case "profile", "rule", "sanitary_seal", "groups":
-		default:
-			r.errAt(k, "unknown key %q at top level (expected [profile], [groups], [rule.RULE-ID] or [sanitary_seal])%s", k,
-				schema.DidYouMean(k, []string{"profile", "groups", "rule", "sanitary_seal"}))
-		}
+	root.Done()
+	// units written but wrong are reported where they are written
+	if r.numbers && prof.Units == "" && !unitsWritten {
+		r.doc.Errorf("profile", "give units = \"ft\" or \"m\" in [profile]: the profile sets thresholds")
 	}
 	return prof
 }
 
-func (r *profileReader) header(prof *Profile, m map[string]any) {
-	for _, k := range sortedKeys(m) {
-		path := "profile." + k
-		switch k {
-		case "name", "source":
-			s, ok := m[k].(string)
-			if !ok {
-				r.errAt(path, "%s must be a string, not %s", path, tomlType(m[k]))
-				continue
-			}
-			if k == "name" {
-				prof.Name = s
-			} else {
-				prof.Source = s
-			}
-		case "units":
-			s, _ := m[k].(string)
-			if s != "ft" && s != "m" {
-				r.errAt(path, "units must be \"ft\" or \"m\" (got %v)", m[k])
-				continue
-			}
-			prof.Units = schema.DepthUnit(s)
-		default:
-			names := ProfileFile().Key("profile").Table.Names()
-			r.errAt(path, "unknown key %q in [profile] (expected %s)%s", k, strings.Join(names, ", "), schema.DidYouMean(k, names))
-		}
-	}
-}
-
-// hasNumbers reports whether any threshold is set, so that units matter.
-func (r *profileReader) hasNumbers(raw map[string]any) bool {
-	if m, ok := raw["sanitary_seal"].(map[string]any); ok && len(m) > 0 {
-		return true
-	}
-	rules, _ := raw["rule"].(map[string]any)
-	for _, v := range rules {
-		if m, ok := v.(map[string]any); ok && setsNumber(m) {
-			return true
-		}
-	}
-	return false
-}
-
-// setsNumber reports whether a rule table, or a purpose table in it, sets
-// anything but a severity.
-func setsNumber(m map[string]any) bool {
-	for k, v := range m {
-		if sub, ok := v.(map[string]any); ok {
-			if setsNumber(sub) {
-				return true
-			}
-			continue
-		}
-		if k != "severity" {
-			return true
-		}
-	}
-	return false
-}
-
-func (r *profileReader) rule(prof *Profile, id string, v any) {
-	path := "rule." + id
-	m, ok := r.tableOf(path, v)
-	if !ok {
-		return
-	}
-	rl, ok := Lookup(id)
-	if !ok {
-		r.errAt(path, "unknown rule %q (tremie rules lists them)%s", id, schema.DidYouMean(id, ruleIDs()))
-		return
-	}
-	for _, k := range sortedKeys(m) {
-		kp := path + "." + k
+// rule reads [rule.ID]: a severity, the rule's parameters, and for some
+// purposes [rule.ID.PURPOSE] tables or, for a rule of one parameter,
+// PURPOSE = N.
+func (r *profileReader) rule(prof *Profile, rl *Rule, t *schema.Table) {
+	for _, k := range t.Keys() {
 		if k == "severity" {
-			if sev, off, ok := r.severityValue(kp, m[k]); ok {
+			if sev, off, ok := r.severity(t); ok {
 				if off {
-					prof.Off[id] = true
+					prof.Off[rl.ID] = true
 				} else {
-					prof.Severities[id] = sev
+					prof.Severities[rl.ID] = sev
 				}
 			}
 			continue
 		}
-		prm, ok := rl.param(k)
-		if !ok && r.isPurposeOrGroup(k) {
-			if sub, isTable := m[k].(map[string]any); isTable {
+		if prm, ok := rl.param(k); ok {
+			if f, ok := r.paramNumber(t, prm); ok {
+				if prof.Values[rl.ID] == nil {
+					prof.Values[rl.ID] = map[string]float64{}
+				}
+				prof.Values[rl.ID][k] = prof.toModel(prm.Kind, f)
+			}
+			continue
+		}
+		if !r.isPurposeOrGroup(k) {
+			continue // not read: Done names it
+		}
+		if v, _ := t.Raw(k); isTable(v) || len(rl.Params) != 1 {
+			if sub := t.Sub(k); sub != nil {
 				r.purposeTable(prof, rl, k, sub)
-				continue
 			}
-			if len(rl.Params) == 1 {
-				// [rule.X] purpose = N: the rule's one parameter, for those purposes
-				r.purposeTable(prof, rl, k, map[string]any{rl.Params[0].Name: m[k]})
-				continue
-			}
-		}
-		if !ok {
-			r.errAt(kp, "rule %s has no parameter %q%s%s", id, k, rl.paramList(), schema.DidYouMean(k, rl.paramNames()))
 			continue
 		}
-		f, ok := r.paramNumber(kp, prm, m[k])
-		if !ok {
-			continue
+		// [rule.X] purpose = N: the rule's one parameter, for those purposes
+		prm := rl.Params[0]
+		if f, ok := r.number(t, k, prm); ok {
+			r.setForPurposes(prof, rl, k, prm, f, t.Path()+"."+k)
 		}
-		if prof.Values[id] == nil {
-			prof.Values[id] = map[string]float64{}
-		}
-		prof.Values[id][k] = prof.toModel(prm.Kind, f)
 	}
+	t.Done()
 }
 
 // sanitarySeal reads [sanitary_seal], the short form of
 // [rule.SANITARY-SEAL-DEPTH.PURPOSE] depth = N.
-func (r *profileReader) sanitarySeal(prof *Profile, m map[string]any) {
+func (r *profileReader) sanitarySeal(prof *Profile, t *schema.Table) {
 	rl, ok := Lookup("SANITARY-SEAL-DEPTH")
 	if !ok {
+		t.Done()
 		return
 	}
-	for _, k := range sortedKeys(m) {
-		kp := "sanitary_seal." + k
+	prm, _ := rl.param("depth")
+	for _, k := range t.Keys() {
 		if !isPurpose(k) {
-			r.errAt(kp, "unknown purpose %q in [sanitary_seal] (one of: %s)%s", k, purposeNames(), schema.DidYouMean(k, strings.Split(purposeNames(), ", ")))
-			continue
+			continue // not read: Done names it, with the closest purpose
 		}
-		f, ok := r.number(kp, m[k])
-		if ok && r.claim(rl.ID, schema.Purpose(k), "depth", kp, true) {
-			o := prof.overridesOf(schema.Purpose(k))
-			if o.Values[rl.ID] == nil {
-				o.Values[rl.ID] = map[string]float64{}
-			}
-			o.Values[rl.ID]["depth"] = prof.toModel(LengthParam, f)
+		if f, ok := r.number(t, k, prm); ok {
+			r.setForPurposes(prof, rl, k, prm, f, "sanitary_seal."+k)
 		}
 	}
+	t.Done()
+}
+
+// number reads a threshold: finite and not negative; a fraction stays
+// within 0 to 1.
+func (r *profileReader) number(t *schema.Table, k string, prm Param) (float64, bool) {
+	r.numbers = true
+	f, ok := t.NonNegative(k)
+	if ok && prm.Kind == RatioParam && prm.Fraction && f > 1 {
+		r.doc.Errorf(t.Path()+"."+k, "%s is a fraction from 0 to 1 (0.9 = 90 %%), not %v", k, f)
+		return 0, false
+	}
+	return f, ok
+}
+
+// paramNumber reads parameter prm of a rule or purpose table.
+func (r *profileReader) paramNumber(t *schema.Table, prm Param) (float64, bool) {
+	return r.number(t, prm.Name, prm)
+}
+
+// severity reads "error", "warning" or "off".
+func (r *profileReader) severity(t *schema.Table) (sev Severity, off, ok bool) {
+	switch t.OneOf("severity") {
+	case "error":
+		return Error, false, true
+	case "warning":
+		return Warning, false, true
+	case "off":
+		return 0, true, true
+	}
+	return 0, false, false
+}
+
+func isTable(v any) bool {
+	_, ok := v.(map[string]any)
+	return ok
 }
 
 // profileNameOf names a profile by its file when [profile] gives no name:
@@ -302,58 +219,4 @@ func (rl *Rule) param(name string) (Param, bool) {
 		}
 	}
 	return Param{}, false
-}
-
-func (rl *Rule) paramList() string {
-	if len(rl.Params) == 0 {
-		return " (it takes only severity)"
-	}
-	var names []string
-	for _, p := range rl.Params {
-		names = append(names, p.Name)
-	}
-	return " (it takes severity, " + strings.Join(names, ", ") + ")"
-}
-
-func sortedKeys(m map[string]any) []string {
-	out := make([]string, 0, len(m))
-	for k := range m {
-		out = append(out, k)
-	}
-	sort.Strings(out)
-	return out
-}
-
-func tomlType(v any) string {
-	switch v.(type) {
-	case string:
-		return "a string"
-	case bool:
-		return "a boolean"
-	case int64, float64:
-		return "a number"
-	case map[string]any:
-		return "a table"
-	case []any, []map[string]any:
-		return "an array"
-	}
-	return fmt.Sprintf("%T", v)
-}
-
-// ruleIDs lists every registered rule's ID, for "did you mean".
-func ruleIDs() []string {
-	out := make([]string, len(registry))
-	for i, r := range registry {
-		out[i] = r.ID
-	}
-	return out
-}
-
-// paramNames lists the keys a [rule.ID] table takes, for "did you mean".
-func (rl *Rule) paramNames() []string {
-	out := []string{"severity"}
-	for _, p := range rl.Params {
-		out = append(out, p.Name)
-	}
-	return out
 }

@@ -199,13 +199,12 @@ type setting struct {
 
 // purposeTable reads [rule.ID.NAME]: NAME is a purpose or a group; its keys
 // are the rule's parameters and severity, for those purposes only.
-func (r *profileReader) purposeTable(prof *Profile, rl *Rule, name string, m map[string]any) {
-	path := "rule." + rl.ID + "." + name
+func (r *profileReader) purposeTable(prof *Profile, rl *Rule, name string, t *schema.Table) {
 	targets, exact := r.purposesOf(name)
-	for _, k := range sortedKeys(m) {
-		kp := path + "." + k
+	for _, k := range t.Keys() {
+		kp := t.Path() + "." + k
 		if k == "severity" {
-			sev, off, ok := r.severityValue(kp, m[k])
+			sev, off, ok := r.severity(t)
 			if !ok {
 				continue
 			}
@@ -226,21 +225,26 @@ func (r *profileReader) purposeTable(prof *Profile, rl *Rule, name string, m map
 		}
 		prm, ok := rl.param(k)
 		if !ok {
-			r.errAt(kp, "rule %s has no parameter %q%s", rl.ID, k, rl.paramList())
-			continue
+			continue // not read: Done names it
 		}
-		f, ok := r.paramNumber(kp, prm, m[k])
-		if !ok {
-			continue
+		if f, ok := r.paramNumber(t, prm); ok {
+			r.setForPurposes(prof, rl, name, prm, f, kp)
 		}
-		for _, pu := range targets {
-			if r.claim(rl.ID, pu, k, kp, exact) {
-				o := prof.overridesOf(pu)
-				if o.Values[rl.ID] == nil {
-					o.Values[rl.ID] = map[string]float64{}
-				}
-				o.Values[rl.ID][k] = prof.toModel(prm.Kind, f)
+	}
+	t.Done()
+}
+
+// setForPurposes sets parameter prm of a rule to f (profile units) for the
+// purposes of a purpose or group name, written at key path kp.
+func (r *profileReader) setForPurposes(prof *Profile, rl *Rule, name string, prm Param, f float64, kp string) {
+	targets, exact := r.purposesOf(name)
+	for _, pu := range targets {
+		if r.claim(rl.ID, pu, prm.Name, kp, exact) {
+			o := prof.overridesOf(pu)
+			if o.Values[rl.ID] == nil {
+				o.Values[rl.ID] = map[string]float64{}
 			}
+			o.Values[rl.ID][prm.Name] = prof.toModel(prm.Kind, f)
 		}
 	}
 }
@@ -261,7 +265,7 @@ func (r *profileReader) claim(rule string, pu schema.Purpose, k, kp string, exac
 	case prev.exact && !exact:
 		return false // the purpose's own value stands
 	}
-	r.errAt(kp, "%s for %s wells is set twice: here and at %s", k, pu, prev.at)
+	r.doc.Errorf(kp, "%s for %s wells is set twice: here and at line %d (%s)", k, pu, r.doc.Line(prev.at), prev.at)
 	return false
 }
 
@@ -289,24 +293,25 @@ func (r *profileReader) isPurposeOrGroup(name string) bool {
 }
 
 // readGroups reads [groups]: name = ["purpose", ...].
-func (r *profileReader) readGroups(m map[string]any) {
+func (r *profileReader) readGroups(t *schema.Table) {
 	r.groups = map[string][]schema.Purpose{}
-	for _, k := range sortedKeys(m) {
-		kp := "groups." + k
+	for _, k := range t.Keys() {
+		kp := t.Path() + "." + k
+		list := t.Strings(k)
 		if isPurpose(k) {
-			r.errAt(kp, "group %q has the name of a purpose", k)
+			r.doc.Errorf(kp, "group %q has the name of a purpose", k)
 			continue
 		}
-		list, ok := m[k].([]any)
-		if !ok || len(list) == 0 {
-			r.errAt(kp, "%s must be a list of purposes, e.g. [\"domestic\", \"irrigation\"]", kp)
+		if len(list) == 0 {
+			if v, _ := t.Raw(k); isEmptyList(v) { // another type is reported by Strings
+				r.doc.Errorf(kp, "%s must be a list of purposes, e.g. [\"domestic\", \"irrigation\"]", k)
+			}
 			continue
 		}
 		var ps []schema.Purpose
-		for _, v := range list {
-			s, _ := v.(string)
+		for _, s := range list {
 			if !isPurpose(s) {
-				r.errAt(kp, "unknown purpose %v in %s (one of: %s)", v, kp, purposeNames())
+				r.doc.Errorf(kp, "unknown purpose %q in group %s (one of: %s)%s", s, k, purposeNames(), schema.DidYouMean(s, purposeStrings()))
 				ps = nil
 				break
 			}
@@ -317,34 +322,7 @@ func (r *profileReader) readGroups(m map[string]any) {
 			r.groups[k] = ps
 		}
 	}
-}
-
-// severityValue reads "error", "warning" or "off".
-func (r *profileReader) severityValue(kp string, v any) (sev Severity, off, ok bool) {
-	switch v {
-	case "error":
-		return Error, false, true
-	case "warning":
-		return Warning, false, true
-	case "off":
-		return 0, true, true
-	}
-	r.errAt(kp, "severity must be \"error\", \"warning\" or \"off\" (got %v)", v)
-	return 0, false, false
-}
-
-// paramNumber reads a parameter's value: a finite, non-negative number; a
-// fraction stays within 0 to 1.
-func (r *profileReader) paramNumber(kp string, prm Param, v any) (float64, bool) {
-	f, ok := r.number(kp, v)
-	if !ok {
-		return 0, false
-	}
-	if prm.Kind == RatioParam && prm.Fraction && f > 1 {
-		r.errAt(kp, "%s is a fraction from 0 to 1 (0.9 = 90 %%)", kp)
-		return 0, false
-	}
-	return f, true
+	t.Done()
 }
 
 // DefaultFor is a parameter's default for a well of the purpose ("" for
@@ -362,4 +340,9 @@ func (r *Rule) DefaultFor(prm Param, pu schema.Purpose) (def, defFt float64, sou
 		}
 	}
 	return prm.Default, prm.DefaultFt, prm.Source
+}
+
+func isEmptyList(v any) bool {
+	l, ok := v.([]any)
+	return ok && len(l) == 0
 }

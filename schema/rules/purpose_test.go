@@ -143,8 +143,8 @@ severity = "off"
 func TestProfileByPurposeErrors(t *testing.T) {
 	cases := []struct{ src, want string }{
 		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS.supply]\nmin = 2\n[rule.SEAL-THICKNESS.production]\nmin = 3\n", "set twice"},
-		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS.domestik]\nmin = 2\n", `no parameter "domestik"`},
-		{"[profile]\nunits = \"ft\"\n[groups]\nfarm = [\"domestic\", \"orchard\"]\n", `unknown purpose orchard`},
+		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS.domestik]\nmin = 2\n", `unknown key "domestik" in [rule.SEAL-THICKNESS] (did you mean "domestic"?)`},
+		{"[profile]\nunits = \"ft\"\n[groups]\nfarm = [\"domestic\", \"orchard\"]\n", `unknown purpose "orchard" in group farm`},
 		{"[profile]\nunits = \"ft\"\n[groups]\ndomestic = [\"irrigation\"]\n", `name of a purpose`},
 		{"[rule.SEAL-THICKNESS.domestic]\nmin = 2\n", "give units"},
 		{"[profile]\nunits = \"ft\"\n[rule.SLOT-RETAINS-PACK.supply]\nmin_retained = 85\n", "fraction"},

@@ -3,25 +3,28 @@ package rules
 import "github.com/tremie-dev/tremie/schema"
 
 // sanitarySealSource is where the default sanitary-seal depths come from.
-const sanitarySealSource = "California DWR Bulletin 74-81, section 9 (from memory): annular seal at least 50 ft deep for " +
-	"community water supply and industrial wells, 20 ft for individual domestic, agricultural and monitoring wells"
+const sanitarySealSource = "California DWR Bulletin 74-81, section 9.A (minimum depth of seal below ground surface), as reproduced " +
+	"in a county's well-permit record: community water supply and industrial wells 50 ft (15 m); individual domestic, " +
+	"agricultural, air-conditioning and observation and monitoring wells 20 ft (6.1 m)"
 
-// sanitarySealFt is the default minimum seal depth in feet for each
-// purpose. Piezometers and recovery wells are taken as monitoring wells
-// and injection wells as industrial ones: our mapping, not DWR's.
+// sanitarySealFt is the default minimum seal depth for each purpose, in
+// feet and in the metres the bulletin itself gives beside them (so a well
+// in metres gets 15 m, not 15.24 m). Piezometers and recovery wells are
+// taken as monitoring wells and injection wells as industrial ones: our
+// mapping, not DWR's.
 var sanitarySealFt = []struct {
 	purpose schema.Purpose
-	ft      float64
+	ft, m   float64
 	source  string
 }{
-	{schema.Monitoring, 20, "DWR 74-81 §9: monitoring, 20 ft"},
-	{schema.Piezometer, 20, "taken as a monitoring well (DWR 74-81 §9: 20 ft)"},
-	{schema.Recovery, 20, "taken as a monitoring well (DWR 74-81 §9: 20 ft)"},
-	{schema.Domestic, 20, "DWR 74-81 §9: individual domestic, 20 ft"},
-	{schema.Irrigation, 20, "DWR 74-81 §9: agricultural, 20 ft"},
-	{schema.PublicSupply, 50, "DWR 74-81 §9: community water supply, 50 ft"},
-	{schema.Industrial, 50, "DWR 74-81 §9: industrial, 50 ft"},
-	{schema.Injection, 50, "taken as an industrial well (DWR 74-81 §9: 50 ft)"},
+	{schema.Monitoring, 20, 6.1, "DWR 74-81 §9.A: observation and monitoring, 20 ft (6.1 m)"},
+	{schema.Piezometer, 20, 6.1, "taken as a monitoring well (DWR 74-81 §9.A: 20 ft, 6.1 m)"},
+	{schema.Recovery, 20, 6.1, "taken as a monitoring well (DWR 74-81 §9.A: 20 ft, 6.1 m)"},
+	{schema.Domestic, 20, 6.1, "DWR 74-81 §9.A: individual domestic, 20 ft (6.1 m)"},
+	{schema.Irrigation, 20, 6.1, "DWR 74-81 §9.A: agricultural, 20 ft (6.1 m)"},
+	{schema.PublicSupply, 50, 15, "DWR 74-81 §9.A: community water supply, 50 ft (15 m)"},
+	{schema.Industrial, 50, 15, "DWR 74-81 §9.A: industrial, 50 ft (15 m)"},
+	{schema.Injection, 50, 15, "taken as an industrial well (DWR 74-81 §9.A: 50 ft, 15 m)"},
 }
 
 // sanitarySealParam is the one parameter, with a default per purpose.
@@ -34,7 +37,7 @@ func sanitarySealParam() Param {
 	for _, s := range sanitarySealFt {
 		prm.ByPurpose = append(prm.ByPurpose, PurposeDefault{
 			Purposes: []schema.Purpose{s.purpose},
-			Default:  metresFromFeet(s.ft), DefaultFt: s.ft,
+			Default:  s.m, DefaultFt: s.ft,
 			Source: s.source,
 		})
 	}

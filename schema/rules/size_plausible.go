@@ -10,14 +10,17 @@ import (
 // size. Each is stated with where it comes from.
 const (
 	// smallestPipeIn is the OD of NPS 1/8, the smallest nominal pipe size
-	// (0.405 in; ASME B36.10M, ASTM D1785).
+	// (0.405 in; ASME B36.10M, ASTM D1785 as tabulated in the PVC pipe data
+	// of sd-w.com/channel_flow/pipe_data).
 	smallestPipeIn = 0.405
 	// largestSlotIn: continuous-wrap and slotted screens are made to about
 	// 0.250 in (250-slot); twice that is taken as the largest plausible
 	// (common practice).
 	largestSlotIn = 0.5
-	// smallestSlotIn: 0.002 in (2-slot) is about the finest screen slot
-	// made (common practice); below it a value is taken as a slip.
+	// smallestSlotIn: ASTM D5092-04 §6.3.3 (as its text is reproduced)
+	// names 0.004 in (4-slot, continuous wire-wound) and 0.006 in (slotted
+	// casing) the finest screens made; half the finest, 0.002 in, is the
+	// bound (ours), below which a value is taken as a slip.
 	smallestSlotIn = 0.002
 )
 
@@ -32,8 +35,8 @@ func init() {
 			"0.405 in = 10.3 mm); a slot wider than any screen slot made or finer than 0.002 in.",
 		Severity: Error,
 		Source: "common practice: bits and augers for a casing are rarely more than a few times its OD; NPS 1/8 " +
-			"(OD 0.405 in) is the smallest nominal pipe size (ASME B36.10M, ASTM D1785); screen slots run from " +
-			"about 0.006 to 0.250 in",
+			"(OD 0.405 in) is the smallest nominal pipe size (ASME B36.10M, ASTM D1785); the finest screens made are " +
+			"0.004-in wire-wound and 0.006-in slotted (ASTM D5092-04 §6.3.3), the widest slots about 0.250 in (common practice)",
 		Params: []Param{{
 			Name: "max_ratio", Kind: RatioParam, Default: 10,
 			Doc:    "largest plausible ratio of a hole's diameter to the summed OD of the pipes standing in it",

@@ -115,9 +115,8 @@ func TestSealThicknessTI81401(t *testing.T) {
 	}
 }
 
-// DWR Bulletin 74-81 §9: 50 ft for community supply, 20 ft for
-// monitoring; in metres the same depths to the nearest 5 cm: 15.25 m
-// (15.24 m) and 6.1 m (6.096 m).
+// DWR Bulletin 74-81 §9.A: 50 ft (15 m) for community supply, 20 ft
+// (6.1 m) for monitoring; a well in metres takes the bulletin's metres.
 func TestSanitarySealDWR7481(t *testing.T) {
 	supply := func(sealFt string) string {
 		return `[units]
@@ -350,12 +349,12 @@ func TestProfileErrors(t *testing.T) {
 		line      int
 	}{
 		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNES]\nmin = 2\n", `unknown rule "SEAL-THICKNES"`, 3},
-		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nminimum = 2\n", `no parameter "minimum"`, 4},
-		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nseverity = \"fatal\"\n", `severity must be`, 4},
+		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nminimum = 2\n", `unknown key "minimum" in [rule.SEAL-THICKNESS]`, 4},
+		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nseverity = \"fatal\"\n", `severity = "fatal" is not one of: error, warning, off`, 4},
 		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nmin = \"2\"\n", `must be a number`, 4},
 		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nmin = -1\n", `must not be negative`, 4},
 		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nmin = nan\n", `finite`, 4},
-		{"[profile]\nunits = \"yd\"\n", `units must be`, 2},
+		{"[profile]\nunits = \"yd\"\n", `units = "yd" is not one of: ft, m`, 2},
 		{"[rule.SEAL-THICKNESS]\nmin = 2\n", `give units`, 0},
 		{"[profile]\nunits = \"ft\"\n[sanitary_seal]\nmonitoring = 20\nsupply = 50\n", `unknown purpose "supply"`, 5},
 		{"[profile]\nunits = \"ft\"\nnmae = \"x\"\n", `unknown key "nmae"`, 3},
@@ -514,9 +513,9 @@ func BenchmarkCheck(b *testing.B) {
 	}
 }
 
-// Filter-pack design against the formation's sieve analysis (ASTM D5092
-// §6.3.3.1, from memory: the pack's d30 about 4 to 6 times the
-// formation's). By hand: 1.2 mm / 0.25 mm = 4.8, inside 4 to 6;
+// Filter-pack design against the formation's sieve analysis (ASTM D5092-04
+// §6.3.3.1 as its text is reproduced: the pack's d-30 about 4 to 6 times
+// the formation's d-30). By hand: 1.2 mm / 0.25 mm = 4.8, inside 4 to 6;
 // 1.2 mm / 0.15 mm = 8.0, above 6, so the pack is too coarse for it.
 func TestPackFormationRatioWorked(t *testing.T) {
 	well := func(formationD30 string) *schema.Well {
