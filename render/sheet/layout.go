@@ -245,32 +245,6 @@ func (l *layout) paginateAt(s Scale, usable float64) error {
 	return nil
 }
 
-// depthRange is the depth range the sheets must show: from the highest
-// thing above ground (or the ground) to the deepest thing drawn.
-func (l *layout) depthRange() (top, bot schema.Length) {
-	w := l.w
-	bot = w.TotalDepth
-	consider := func(iv schema.Interval) {
-		top = min(top, iv.Top)
-		bot = max(bot, iv.Bottom)
-	}
-	w.EachConstructionInterval(consider)
-	for _, ly := range w.Lithology {
-		consider(ly.Interval)
-	}
-	if p := w.Surface.Protective; p != nil {
-		consider(p.Interval)
-	}
-	if p := w.Surface.Pad; p != nil && w.Surface.Kind != schema.FlushMount {
-		top = min(top, -p.Thickness)
-	}
-	for _, wl := range w.WaterLevels {
-		bot = max(bot, wl.Depth)
-		top = min(top, wl.Depth)
-	}
-	return top, bot
-}
-
 // layColumns divides the body width by the page's column fractions.
 func (l *layout) layColumns(width float64) {
 	f := l.pg.columns()
