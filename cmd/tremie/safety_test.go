@@ -154,7 +154,7 @@ func TestDuplicateWellIDs(t *testing.T) {
 // sheets alone; they are stale only once their well file is gone.
 func TestStaleOnlyWhenTheWellFileIsGone(t *testing.T) {
 	dir := profiledProject(t)
-	if code, _, errb := runTremie("render", "."); code != exitFindings {
+	if code, _, errb := runTremie("render", ".", "--format", "svg"); code != exitFindings {
 		t.Fatalf("exit %d %s", code, errb)
 	}
 	_, _, errb := runTremie("render", "wells/OK-1.toml", "--format", "svg", "--force")
