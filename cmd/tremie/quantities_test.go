@@ -453,3 +453,31 @@ func TestQuantitiesCollapseLoad(t *testing.T) {
 		t.Errorf("output:\n%s", out)
 	}
 }
+
+// A planned metric well with a 2000 mm hole for 50 mm pipe (DN50, OD
+// 60.3 mm, ASTM D1785) is reported as a likely unit slip (33.2 times the
+// OD, above the common-practice 10) and left out of the order, which
+// would otherwise buy some 800 bags of sand for it; the other planned
+// well (wellTOML) is still ordered for.
+func TestQuantitiesHoldBackUnitSlip(t *testing.T) {
+	dir := t.TempDir()
+	code, out, errs := runTremie("new", "SL-1", "--kind", "planned", "--units", "m", "-o", dir)
+	if code != exitOK {
+		t.Fatalf("new: %d %s %s", code, out, errs)
+	}
+	p := filepath.Join(dir, "SL-1.toml")
+	b, _ := os.ReadFile(p)
+	if !strings.Contains(string(b), "diameter = 210.0") {
+		t.Fatal("the starter's hole is not 210 mm")
+	}
+	writeFile(t, dir, "SL-1.toml", strings.Replace(string(b), "diameter = 210.0", "diameter = 2000.0", 1))
+	writeFile(t, dir, "PL-1.toml", wellTOML)
+	_, out, errs = runQ(dir)
+	for _, s := range []string{"error SIZE-PLAUSIBLE", "33.2 times the 60.3 mm OD", "Order for the planned wells PL-1\n",
+		"Left out of both lists: SL-1, whose sizes are likely a unit slip (rule SIZE-PLAUSIBLE)"} {
+		if !strings.Contains(out, s) {
+			t.Errorf("output lacks %q:\n%s%s", s, out, errs)
+		}
+	}
+}
+
