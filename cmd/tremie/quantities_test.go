@@ -480,4 +480,3 @@ func TestQuantitiesHoldBackUnitSlip(t *testing.T) {
 		}
 	}
 }
-
