@@ -7,6 +7,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"regexp"
 	"strings"
 	"testing"
 )
@@ -478,5 +479,24 @@ func TestQuantitiesHoldBackUnitSlip(t *testing.T) {
 		if !strings.Contains(out, s) {
 			t.Errorf("output lacks %q:\n%s%s", s, out, errs)
 		}
+	}
+}
+
+// The demo's order list (the planned MW-4) carries its pad. By hand (8.25-in
+// hole, 6-in protective casing to 2 ft; pi/4 d^2/144 ft2 for d in inches):
+// concrete 0-1 ft beside the casing pi/4 (68.0625 - 36)/144 x 1 = 0.17487
+// ft3; pad 3 x 3 x 0.33 less the casing pi/4 x 36/144 x 0.33 = 2.97 -
+// 0.06480 = 2.90520 ft3; together 3.08007 ft3. At 0.6 ft3 per 80-lb bag,
+// each interval rounded up: 1 + 5 = 6 bags; with the 10 % contingency
+// before rounding: ceil(0.19236/0.6) + ceil(3.19572/0.6) = 1 + 6 = 7.
+func TestQuantitiesDemoOrderHasPad(t *testing.T) {
+	code, out, errs := runQ(filepath.Join("demo", "wells"))
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	order := out[strings.Index(out, "Order for the planned wells MW-4"):]
+	order = order[:strings.Index(order, "\n\n")]
+	if !regexp.MustCompile(`concrete\s+0\.600 ft3 per 80-lb bag \(from memory\)\s+2\s+3\.080 ft3 \(23\.04 gal\)\s+6\s+7`).MatchString(order) {
+		t.Errorf("the order's concrete line lacks MW-4's pad:\n%s", order)
 	}
 }
