@@ -129,7 +129,7 @@ func SuggestRock(s string) string {
 	name, _, _ := ParseRock(s)
 	bestD := len(name)/3 + 1
 	for _, n := range sortedRockNames() {
-		if d := editDistance(name, n); d < bestD {
+		if d := slipDistance(name, n); d < bestD {
 			best, bestD = n, d
 		}
 	}
@@ -144,27 +144,6 @@ func sortedRockNames() []string {
 	}
 	sort.Strings(out)
 	return out
-}
-
-// editDistance is the Levenshtein distance of two short strings.
-func editDistance(a, b string) int {
-	prev := make([]int, len(b)+1)
-	cur := make([]int, len(b)+1)
-	for j := range prev {
-		prev[j] = j
-	}
-	for i := 1; i <= len(a); i++ {
-		cur[0] = i
-		for j := 1; j <= len(b); j++ {
-			cost := 1
-			if a[i-1] == b[j-1] {
-				cost = 0
-			}
-			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
-		}
-		prev, cur = cur, prev
-	}
-	return prev[len(b)]
 }
 
 // RockGrade is the layer's weathering grade: its weathering key, else the

@@ -22,99 +22,140 @@ var circleCCW = canvas.Circle(1).CCW()
 // subpaths all turn the same way, so under the non-zero rule overlapping
 // marks stay filled as they would be drawn one by one.
 func (p *painter) compound(it draw.Path, clip *draw.Rect, path string) {
-	st, fill, stroke := p.style(it.Style)
-	if !fill && !stroke {
-		return
+	if c := p.newCompound(it.Style, clip); c != nil {
+		c.add(it, 0, 0, path)
+		c.flush()
 	}
-	var cr canvas.Rect
-	if clip != nil {
-		cr = p.rect(*clip)
-	}
-	whole := &canvas.Path{}
-	cutFill := &canvas.Path{}
-	cutStroke := &canvas.Path{} // stroke outlines of cut straight segments, as area
-	var cutOutlines []*canvas.Path
-	half := st.StrokeWidth / 2
+}
 
+// A compoundPath gathers the marks of one style, possibly from many
+// paths (a pattern's tile laid cell by cell), into the few canvas paths
+// that flush draws.
+type compoundPath struct {
+	p            *painter
+	st           canvas.Style
+	fill, stroke bool
+	clip         *draw.Rect
+	cr           canvas.Rect
+	whole        *canvas.Path
+	cutFill      *canvas.Path
+	cutStroke    *canvas.Path // stroke outlines of cut straight segments, as area
+	cutOutlines  []*canvas.Path
+	half         float64
+	cubic        bool
+	pts          []canvas.Point
+	seg          [2]draw.Point
+}
+
+// newCompound starts gathering marks of style s under clip; nil when the
+// style paints nothing.
+func (p *painter) newCompound(s draw.Style, clip *draw.Rect) *compoundPath {
+	st, fill, stroke := p.style(s)
+	if !fill && !stroke {
+		return nil
+	}
+	c := &compoundPath{p: p, st: st, fill: fill, stroke: stroke, clip: clip,
+		whole: &canvas.Path{}, cutFill: &canvas.Path{}, cutStroke: &canvas.Path{},
+		half: st.StrokeWidth / 2, pts: make([]canvas.Point, 0, 8)}
+	if clip != nil {
+		c.cr = p.rect(*clip)
+	}
 	// PDF has no arcs, and canvas's own replacement of them is
 	// quadratic in a long path, so circles go to PDF as Béziers.
-	_, cubic := p.r.(pdfRenderer)
+	_, c.cubic = p.r.(pdfRenderer)
+	return c
+}
 
-	// place sorts one subpath by where it lies: b bounds it (canvas
-	// millimetres), build adds it to a path.
-	place := func(b canvas.Rect, build func(*canvas.Path), closed, joins bool, seg []canvas.Point) {
-		if clip == nil {
-			build(whole)
-			return
-		}
-		reach := 0.0
-		if stroke {
-			reach = half
-			if joins {
-				reach = 2 * st.StrokeWidth
-			}
-		}
-		b = b.Expand(reach)
-		var quad *canvas.Path
-		if stroke && seg != nil && len(st.Dashes) == 0 {
-			// A straight segment's stroke is exactly this rectangle, so
-			// one ending square on the clip edge counts as inside.
-			quad = segmentOutline(seg[0], seg[1], half)
-			b = quad.FastBounds()
-		}
-		switch {
-		case cr.Expand(edgeSlack).Contains(b):
-			build(whole)
-			return
-		case !cr.Overlaps(b):
-			return
-		}
-		sub := &canvas.Path{}
-		build(sub)
-		if fill {
-			area := sub
-			if !closed {
-				area = sub.Copy()
-				area.Close()
-			}
-			cutFill = cutFill.Append(clipToRect(area, cr))
-		}
-		if !stroke {
-			return
-		}
-		if quad != nil {
-			cutStroke = cutStroke.Append(clipToRect(quad, cr))
-			return
-		}
-		outline := sub
-		if len(st.Dashes) > 0 {
-			outline = outline.Dash(0, st.Dashes...)
-		}
-		outline = outline.Stroke(st.StrokeWidth, canvas.ButtCap, canvas.MiterJoin, canvas.Tolerance)
-		if part := clipToRect(outline, cr); !part.Empty() {
-			cutOutlines = append(cutOutlines, part)
+// place sorts one subpath by where it lies: b bounds it (canvas
+// millimetres), build adds it to a path.
+func (c *compoundPath) place(b canvas.Rect, build func(*canvas.Path), closed, joins bool, seg []canvas.Point) {
+	if c.clip == nil {
+		build(c.whole)
+		return
+	}
+	reach := 0.0
+	if c.stroke {
+		reach = c.half
+		if joins {
+			reach = 2 * c.st.StrokeWidth
 		}
 	}
+	b = b.Expand(reach)
+	var quad *canvas.Path
+	if c.stroke && seg != nil && len(c.st.Dashes) == 0 {
+		// A straight segment's stroke is exactly this rectangle, so
+		// one ending square on the clip edge counts as inside.
+		quad = segmentOutline(seg[0], seg[1], c.half)
+		b = quad.FastBounds()
+	}
+	switch {
+	case c.cr.Expand(edgeSlack).Contains(b):
+		build(c.whole)
+		return
+	case !c.cr.Overlaps(b):
+		return
+	}
+	sub := &canvas.Path{}
+	build(sub)
+	if c.fill {
+		area := sub
+		if !closed {
+			area = sub.Copy()
+			area.Close()
+		}
+		c.cutFill = c.cutFill.Append(clipToRect(area, c.cr))
+	}
+	if !c.stroke {
+		return
+	}
+	if quad != nil {
+		c.cutStroke = c.cutStroke.Append(clipToRect(quad, c.cr))
+		return
+	}
+	outline := sub
+	if len(c.st.Dashes) > 0 {
+		outline = outline.Dash(0, c.st.Dashes...)
+	}
+	outline = outline.Stroke(c.st.StrokeWidth, canvas.ButtCap, canvas.MiterJoin, canvas.Tolerance)
+	if part := clipToRect(outline, c.cr); !part.Empty() {
+		c.cutOutlines = append(c.cutOutlines, part)
+	}
+}
 
-	pts := make([]canvas.Point, 0, 8)
+// add gathers the marks of it, moved by (dx, dy) points.
+func (c *compoundPath) add(it draw.Path, dx, dy float64, path string) {
+	p := c.p
 	for j, sp := range it.Subpaths {
 		if len(sp.Points) < 2 {
 			continue
 		}
-		pts = pts[:0]
+		pts := c.pts[:0]
 		ok := true
-		for _, q := range sp.Points {
+		src := sp.Points
+		if c.clip != nil && len(src) == 2 && !sp.Closed && finite(src[0].X, src[0].Y, src[1].X, src[1].Y) {
+			// A straight mark is cut to the clip first, as a pattern
+			// drawn straight onto the page cuts it, so that its stroke
+			// is a rectangle ending on the edge (see place).
+			a, e, in := draw.ClipSegment(draw.Rect{X: c.clip.X - dx, Y: c.clip.Y - dy, W: c.clip.W, H: c.clip.H}, src[0], src[1])
+			if !in {
+				continue
+			}
+			c.seg = [2]draw.Point{a, e}
+			src = c.seg[:]
+		}
+		for _, q := range src {
 			if !finite(q.X, q.Y) {
 				ok = false
 				break
 			}
-			pts = append(pts, p.pos(q.X, q.Y))
+			pts = append(pts, p.pos(q.X+dx, q.Y+dy))
 		}
+		c.pts = pts
 		if !ok {
 			p.fail(path, "path %q subpath %d is not finite", it.Role, j)
 			continue
 		}
-		if fill && len(pts) > 2 && (signedArea(pts) > 0) != circleCCW {
+		if c.fill && len(pts) > 2 && (signedArea(pts) > 0) != circleCCW {
 			for a, b := 0, len(pts)-1; a < b; a, b = a+1, b-1 {
 				pts[a], pts[b] = pts[b], pts[a]
 			}
@@ -137,38 +178,42 @@ func (p *painter) compound(it draw.Path, clip *draw.Rect, path string) {
 		if len(pts) == 2 && !closed {
 			seg = pts[:2]
 		}
-		place(b, build, closed, closed || len(pts) > 2, seg)
+		c.place(b, build, closed, closed || len(pts) > 2, seg)
 	}
-	for j, c := range it.Circles {
-		if !finite(c.Center.X, c.Center.Y, c.R) {
+	for j, d := range it.Circles {
+		if !finite(d.Center.X, d.Center.Y, d.R) {
 			p.fail(path, "path %q circle %d is not finite", it.Role, j)
 			continue
 		}
-		if c.R <= 0 {
+		if d.R <= 0 {
 			continue
 		}
-		q, r := p.pos(c.Center.X, c.Center.Y), c.R*mmPerPt
+		q, r := p.pos(d.Center.X+dx, d.Center.Y+dy), d.R*mmPerPt
 		b := canvas.Rect{X0: q.X - r, Y0: q.Y - r, X1: q.X + r, Y1: q.Y + r}
-		place(b, func(dst *canvas.Path) { addCircle(dst, q, r, cubic) }, true, false, nil)
+		c.place(b, func(dst *canvas.Path) { addCircle(dst, q, r, c.cubic) }, true, false, nil)
 	}
+}
 
-	if !cutFill.Empty() {
+// flush draws what was gathered.
+func (c *compoundPath) flush() {
+	r := c.p.r
+	if !c.cutFill.Empty() {
 		fs := canvas.DefaultStyle
-		fs.Fill = st.Fill
-		p.r.RenderPath(cutFill, fs, canvas.Identity)
+		fs.Fill = c.st.Fill
+		r.RenderPath(c.cutFill, fs, canvas.Identity)
 	}
-	if !whole.Empty() {
-		p.r.RenderPath(whole, st, canvas.Identity)
+	if !c.whole.Empty() {
+		r.RenderPath(c.whole, c.st, canvas.Identity)
 	}
 	ss := canvas.DefaultStyle
-	ss.Fill = st.Stroke
-	if !cutStroke.Empty() {
-		p.r.RenderPath(cutStroke, ss, canvas.Identity)
+	ss.Fill = c.st.Stroke
+	if !c.cutStroke.Empty() {
+		r.RenderPath(c.cutStroke, ss, canvas.Identity)
 	}
 	// Outlines canvas computed may hold holes (a ring's); each is drawn
 	// alone so one's hole never cancels another's ink.
-	for _, o := range cutOutlines {
-		p.r.RenderPath(o, ss, canvas.Identity)
+	for _, o := range c.cutOutlines {
+		r.RenderPath(o, ss, canvas.Identity)
 	}
 }
 

@@ -24,18 +24,20 @@ const (
 
 // painter translates one page's items into calls on a canvas renderer.
 type painter struct {
-	r      canvas.Renderer
-	height float64 // page height, points
-	fonts  *fontSet
-	textAs TextMode
-	err    error
+	r         canvas.Renderer
+	height    float64 // page height, points
+	pageWidth float64
+	fonts     *fontSet
+	textAs    TextMode
+	patterns  patternPainter
+	err       error
 }
 
-// paintPage draws every item of p on r; it reports the first item that
-// cannot be drawn (a non-finite number, undecodable image bytes) and draws
-// the rest.
-func paintPage(r canvas.Renderer, p *draw.Page, fonts *fontSet, text TextMode) error {
-	pt := &painter{r: r, height: p.Height, fonts: fonts, textAs: text}
+// paintPage draws every item of p on r, text as text says and pattern
+// fills through pp; it reports the first item that cannot be drawn (a
+// non-finite number, undecodable image bytes) and draws the rest.
+func paintPage(r canvas.Renderer, p *draw.Page, fonts *fontSet, text TextMode, pp patternPainter) error {
+	pt := &painter{r: r, height: p.Height, pageWidth: p.Width, fonts: fonts, textAs: text, patterns: pp}
 	pt.items(p.Items, nil, "")
 	return pt.err
 }
@@ -98,6 +100,22 @@ func (p *painter) items(items []draw.Item, clip *draw.Rect, prefix string) {
 			p.path(canvas.Circle(it.R*mmPerPt).Translate(c.X, c.Y), it.Style, clip, false)
 		case draw.Path:
 			p.compound(it, clip, path)
+		case draw.Pattern:
+			if !finite(it.X, it.Y, it.W, it.H) {
+				p.fail(path, "pattern %q has a non-finite coordinate", it.Role)
+				continue
+			}
+			r := normRect(it.Rect)
+			if clip != nil {
+				r = intersect(r, *clip)
+			}
+			// Only the part on the page can show, and no more than that
+			// is ever drawn, however large the region.
+			r = intersect(r, draw.Rect{W: p.pageWidth, H: p.height})
+			if r.W <= 0 || r.H <= 0 {
+				continue
+			}
+			p.patterns.fill(p, it.Tile, r, path)
 		case draw.Text:
 			if !finite(it.At.X, it.At.Y, it.Size, it.Rotate) {
 				p.fail(path, "text %q is not finite", it.Role)
@@ -451,8 +469,18 @@ func cropImage(img image.Image, r, v draw.Rect) (image.Image, draw.Rect) {
 	}
 	// A fresh image at the origin: renderers assume bounds start at 0.
 	dst := image.NewRGBA(image.Rect(0, 0, crop.Dx(), crop.Dy()))
+	src, direct := img.(*image.RGBA) // a wall-image strip: copy bytes, not colours one by one
 	for y := 0; y < crop.Dy(); y++ {
 		srcY := b.Min.Y + int(float64(crop.Min.Y+y)/ky)
+		if direct {
+			row := dst.Pix[y*dst.Stride : y*dst.Stride+4*crop.Dx()]
+			for x := 0; x < crop.Dx(); x++ {
+				srcX := b.Min.X + int(float64(crop.Min.X+x)/kx)
+				at := src.PixOffset(srcX, srcY)
+				copy(row[4*x:4*x+4], src.Pix[at:at+4])
+			}
+			continue
+		}
 		for x := 0; x < crop.Dx(); x++ {
 			srcX := b.Min.X + int(float64(crop.Min.X+x)/kx)
 			dst.Set(x, y, img.At(srcX, srcY))

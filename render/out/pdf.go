@@ -41,7 +41,7 @@ func PDFWith(doc *draw.Document, opt EncodeOptions) ([]byte, error) {
 		if i > 0 {
 			r.NewPage(p.Width*mmPerPt, p.Height*mmPerPt)
 		}
-		if err := paintPage(pdfRenderer{r}, p, fonts, opt.Text); err != nil {
+		if err := paintPage(pdfRenderer{r}, p, fonts, opt.Text, &rasterPatterns{}); err != nil {
 			return nil, fmt.Errorf("pdf page %d: %w", i+1, err)
 		}
 	}

@@ -42,10 +42,13 @@ func PNG(doc *draw.Document, i int, dpi float64) ([]byte, error) {
 	r := rasterizer.FromImage(img, canvas.DPI(dpi), canvas.DefaultColorSpace)
 	fonts := takeFonts()
 	defer fonts.giveBack()
-	if err := paintPage(r, p, fonts, TextAsText); err != nil {
+	if err := paintPage(r, p, fonts, TextAsText, &rasterPatterns{}); err != nil {
 		return nil, fmt.Errorf("png page %d: %w", i+1, err)
 	}
 	r.Close()
+	if b, ok := encodeOpaquePNG(img); ok {
+		return b, nil
+	}
 	var buf bytes.Buffer
 	enc := png.Encoder{CompressionLevel: png.BestSpeed}
 	if err := enc.Encode(&buf, img); err != nil {

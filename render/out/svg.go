@@ -33,7 +33,8 @@ func SVGWith(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) {
 	r := svg.New(&buf, p.Width*mmPerPt, p.Height*mmPerPt, &opts)
 	fonts := takeFonts()
 	defer fonts.giveBack()
-	if err := paintPage(r, p, fonts, opt.Text); err != nil {
+	patterns := newSVGPatterns(&buf)
+	if err := paintPage(r, p, fonts, opt.Text, patterns); err != nil {
 		return nil, fmt.Errorf("svg page %d: %w", i+1, err)
 	}
 	if err := r.Close(); err != nil {
@@ -43,7 +44,7 @@ func SVGWith(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) {
 	if err != nil {
 		return nil, fmt.Errorf("svg page %d: %w", i+1, err)
 	}
-	return addTitle(sortFontFaces(b), doc.Title), nil
+	return addTitle(sortFontFaces(patterns.insertDefs(b)), doc.Title), nil
 }
 
 // svgFontData opens and svgFontEnd closes each embedded font canvas writes.

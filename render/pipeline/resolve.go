@@ -267,11 +267,13 @@ func (r *Run) enclosingProject(file string) *project.Project {
 		if p, ok := r.projectAt(dir); ok {
 			return p
 		}
-		parent := filepath.Dir(dir)
-		if parent == dir {
+		// up by "..", so that a file named from inside its project
+		// ("MW-1.toml" in wells/) finds it, as "../project.toml"
+		abs, err := filepath.Abs(dir)
+		if err != nil || filepath.Dir(abs) == abs {
 			break
 		}
-		dir = parent
+		dir = filepath.Join(dir, "..")
 	}
 	return nil
 }

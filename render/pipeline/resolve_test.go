@@ -43,6 +43,26 @@ func TestResolveFindsTheEnclosingProject(t *testing.T) {
 			t.Errorf("%s: page %q key %q out %q", arg, in.Setting.PageName, in.Key, r.OutDir)
 		}
 	}
+	// Named from inside the project, relative to the working directory:
+	// "X.toml" in wells/deep, "deep/X.toml" in wells, "../deep/X.toml"
+	// from a sibling folder.
+	write(t, filepath.Join(dir, "wells", "other", ".keep"), "")
+	for _, c := range []struct{ cwd, arg string }{
+		{filepath.Join(dir, "wells", "deep"), "X.toml"},
+		{filepath.Join(dir, "wells"), "deep/X.toml"},
+		{filepath.Join(dir, "wells", "other"), "../deep/X.toml"},
+		{filepath.Join(dir, "wells", "deep"), "."},
+	} {
+		t.Chdir(c.cwd)
+		r, err := Resolve([]string{c.arg}, Options{})
+		if err != nil || len(r.Problems) > 0 || len(r.Inputs) != 1 {
+			t.Fatalf("%s in %s: %v %v", c.arg, c.cwd, err, r.Problems)
+		}
+		in := r.Inputs[0]
+		if got := in.Setting.ProfileLabel(); got != "profile County" || in.Key != "wells/deep/X.toml" {
+			t.Errorf("%s in %s: %s, key %q", c.arg, c.cwd, got, in.Key)
+		}
+	}
 	// The command line's profile wins over the project's.
 	write(t, filepath.Join(dir, "other.profile.toml"), "[profile]\nname = \"Other\"\n")
 	r, err := Resolve([]string{dir}, Options{Profile: filepath.Join(dir, "other.profile.toml")})

@@ -31,8 +31,10 @@ func (p *painter) depthAxis() []draw.Item {
 		y := p.y(schema.LengthFrom(v, u))
 		isMajor := math.Abs(v/major-math.Round(v/major)) < 1e-6
 		if isMajor {
-			items = append(items, line(x-5, y, x, y, 0.6, ink, ""),
-				text(x-7, y+draw.CapHeight(draw.Regular, sizeSmall)/2, schema.TrimFloat(v, 2), draw.Regular, sizeSmall, draw.End, ink, "depth-label"))
+			items = append(items, line(x-5, y, x, y, 0.6, ink, ""))
+			if l.axisLabelFits(y) {
+				items = append(items, text(x-7, y+draw.CapHeight(draw.Regular, sizeSmall)/2, schema.TrimFloat(v, 2), draw.Regular, sizeSmall, draw.End, ink, "depth-label"))
+			}
 		} else {
 			items = append(items, line(x-2.5, y, x, y, 0.4, ink, ""))
 		}
@@ -69,13 +71,22 @@ func (p *painter) elevationAxis() []draw.Item {
 		e := k * minor
 		y := p.y(schema.LengthFrom(ground-e, u))
 		if math.Abs(e/major-math.Round(e/major)) < 1e-6 {
-			items = append(items, line(x, y, x+5, y, 0.6, ink, ""),
-				text(x+7, y+draw.CapHeight(draw.Regular, sizeSmall)/2, schema.TrimFloat(e, 2), draw.Regular, sizeSmall, draw.Start, ink, "elevation-label"))
+			items = append(items, line(x, y, x+5, y, 0.6, ink, ""))
+			if l.axisLabelFits(y) {
+				items = append(items, text(x+7, y+draw.CapHeight(draw.Regular, sizeSmall)/2, schema.TrimFloat(e, 2), draw.Regular, sizeSmall, draw.Start, ink, "elevation-label"))
+			}
 		} else {
 			items = append(items, line(x, y, x+2.5, y, 0.4, ink, ""))
 		}
 	}
 	return items
+}
+
+// axisLabelFits says whether an axis label centred on y stays within the
+// body; a tick at its very foot goes unlabelled rather than cross it.
+func (l *layout) axisLabelFits(y float64) bool {
+	base := y + draw.CapHeight(draw.Regular, sizeSmall)/2
+	return base-draw.Ascent(draw.Regular, sizeSmall) >= l.body.Y && base+draw.Descent(draw.Regular, sizeSmall) <= l.body.Bottom()
 }
 
 // minorStep divides a major interval into fifths, or quarters of a 2.

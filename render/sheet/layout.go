@@ -143,7 +143,7 @@ func (l *layout) plan() error {
 	default:
 		l.scale, l.fitsOne = autoScale(l.u.Imperial(), l.bot-l.top, usable)
 		if s, ok := l.economicalScale(usable); ok {
-			l.scale, l.fitsOne = s, true
+			l.scale, l.fitsOne = s, s.Points(l.bot-l.top) <= usable
 		}
 	}
 	if err := l.paginateAt(l.scale, usable); err != nil {
@@ -184,22 +184,36 @@ func moreDetailed(cs []Scale, s Scale) (Scale, bool) {
 	return best, ok
 }
 
-// economicalScale spares a second sheet that would stand mostly blank:
-// when the automatic scale needs two sheets and the second would be less
-// than half used, a scale up to twice the readable limit that holds the
-// well on one sheet is taken instead.
+// economicalScale spares a last sheet that would stand mostly blank:
+// when the automatic scale needs several sheets and the last would be
+// less than half used, the most detailed round scale up to twice the
+// readable limit that needs fewer sheets is taken instead.
 func (l *layout) economicalScale(usable float64) (Scale, bool) {
 	span := l.bot - l.top
 	sheets := l.scale.Points(span) / usable
-	if sheets <= 1 || sheets > 1.5 {
+	if sheets <= 1 || sheets-math.Floor(sheets) >= 0.5 {
 		return Scale{}, false
 	}
-	s, ok := fitScale(l.u.Imperial(), span, usable)
 	limit := imperialReadable * 12 * 2
 	if !l.u.Imperial() {
 		limit = metricReadable * 2
 	}
-	return s, ok && s.Ratio <= limit
+	need := len(l.sheetsAt(l.scale, usable))
+	for _, s := range allSteps(l.u.Imperial()) {
+		if s.Ratio <= l.scale.Ratio || s.Ratio > limit {
+			continue
+		}
+		if len(l.sheetsAt(s, usable)) < need {
+			return s, true
+		}
+	}
+	return Scale{}, false
+}
+
+// sheetsAt is how paginateAt would divide the depth range at scale s.
+func (l *layout) sheetsAt(s Scale, usable float64) []span {
+	per := schema.Length(usable / s.PointsPerMetre())
+	return paginate(l.top, l.bot, per, schema.LengthFrom(l.majorStepAt(s), l.u.Depth))
 }
 
 // paginateAt divides the depth range into sheets at a scale.
@@ -209,34 +223,8 @@ func (l *layout) paginateAt(s Scale, usable float64) error {
 		return fmt.Errorf("at %s the well needs %.0f sheets (more than %d); choose a smaller scale", s, math.Ceil(n), maxSheets)
 	}
 	l.scaleFields()
-	l.sheets = paginate(l.top, l.bot, per, schema.LengthFrom(l.majorStep(), l.u.Depth))
+	l.sheets = l.sheetsAt(s, usable)
 	return nil
-}
-
-// depthRange is the depth range the sheets must show: from the highest
-// thing above ground (or the ground) to the deepest thing drawn.
-func (l *layout) depthRange() (top, bot schema.Length) {
-	w := l.w
-	bot = w.TotalDepth
-	consider := func(iv schema.Interval) {
-		top = min(top, iv.Top)
-		bot = max(bot, iv.Bottom)
-	}
-	w.EachConstructionInterval(consider)
-	for _, ly := range w.Lithology {
-		consider(ly.Interval)
-	}
-	if p := w.Surface.Protective; p != nil {
-		consider(p.Interval)
-	}
-	if p := w.Surface.Pad; p != nil && w.Surface.Kind != schema.FlushMount {
-		top = min(top, -p.Thickness)
-	}
-	for _, wl := range w.WaterLevels {
-		bot = max(bot, wl.Depth)
-		top = min(top, wl.Depth)
-	}
-	return top, bot
 }
 
 // layColumns divides the body width by the page's column fractions.
@@ -260,8 +248,11 @@ func (l *layout) layColumns(width float64) {
 
 // majorStep is the depth-axis tick interval in the file's depth unit:
 // the smallest of 1, 2, 5 x 10^k that leaves at least 36 pt between ticks.
-func (l *layout) majorStep() float64 {
-	perUnit := l.scale.Points(schema.LengthFrom(1, l.u.Depth))
+func (l *layout) majorStep() float64 { return l.majorStepAt(l.scale) }
+
+// majorStepAt is the depth-axis tick interval at scale s.
+func (l *layout) majorStepAt(s Scale) float64 {
+	perUnit := s.Points(schema.LengthFrom(1, l.u.Depth))
 	return niceStep(36 / perUnit)
 }
 

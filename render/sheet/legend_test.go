@@ -1,6 +1,8 @@
 package sheet
 
 import (
+	"os"
+	"path/filepath"
 	"slices"
 	"sort"
 	"strings"
@@ -14,8 +16,9 @@ import (
 // The legend comes from the parts' own account of what they paint
 // (part.legend); these tests read what was actually painted from the
 // laid-out page items instead, and require the two to agree on every
-// sheet of the demo and the gallery: nothing painted is missing from the
-// legend, and the legend lists nothing the sheet does not show.
+// sheet of the demo, the gallery and the fixtures: nothing painted is
+// missing from the legend, and the legend lists nothing the sheet does
+// not show.
 
 func TestLegendIsWhatIsPainted(t *testing.T) {
 	type doc struct {
@@ -35,6 +38,33 @@ func TestLegendIsWhatIsPainted(t *testing.T) {
 	pre := simpleWell(300)
 	pre.Strings[0].Sections[1].ScreenType = schema.Prepacked
 	docs = append(docs, doc{"prepacked", pre, layoutOf(t, pre, Inputs{}, Options{Scale: &Scale{Ratio: 60}})})
+	// Every rule fixture and accepted file, cut into several sheets at
+	// 1:40, so that parts cross the windows' edges in every way.
+	files, err := filepath.Glob("../../schema/rules/testdata/*/*.toml")
+	more, err2 := filepath.Glob("../../testdata/good/*.toml")
+	if err != nil || err2 != nil || len(files) == 0 || len(more) == 0 {
+		t.Fatalf("fixtures: %v %v", err, err2)
+	}
+	drawn := 0
+	for _, f := range append(files, more...) {
+		data, err := os.ReadFile(f)
+		if err != nil {
+			t.Fatal(err)
+		}
+		w, err := schema.Load(f, data)
+		if err != nil {
+			continue // a fixture of the loader's errors
+		}
+		d, err := Layout(w, Inputs{}, Options{Scale: &Scale{Ratio: 40}})
+		if err != nil {
+			continue // nothing to draw
+		}
+		docs = append(docs, doc{f, w, d})
+		drawn++
+	}
+	if drawn < len(files)/2 {
+		t.Fatalf("only %d of %d fixtures drawn", drawn, len(files)+len(more))
+	}
 	sort.Slice(docs, func(i, j int) bool { return docs[i].name < docs[j].name })
 	kinds := map[string]bool{}
 	for _, d := range docs {

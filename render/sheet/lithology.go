@@ -17,6 +17,14 @@ func (lithologyPart) stack() stack { return on(layerLog) }
 
 func (lithologyPart) callouts(*layout) []callout { return nil }
 
+func (lithologyPart) extent(l *layout) (schema.Interval, bool) {
+	var ivs []schema.Interval
+	for _, ly := range l.w.Lithology {
+		ivs = append(ivs, ly.Interval)
+	}
+	return hull(ivs...)
+}
+
 func (lithologyPart) legend(l *layout, v window) []symbol {
 	var out []symbol
 	for _, ly := range l.w.Lithology {
@@ -69,19 +77,15 @@ func (lithologyPart) paint(p *painter) []draw.Item {
 	return append(out, items...)
 }
 
-// descriptions are the sheet's planned descriptions, or for a painter
-// outside the plan its own fitting, unnumbered.
+// descriptions are the sheet's descriptions as planDescriptions fitted
+// them.
 func (p *painter) descriptions() []descEntry {
 	for i, sp := range p.l.sheets {
 		if sp == p.sp && i < len(p.l.sheetDescs) {
 			return p.l.sheetDescs[i]
 		}
 	}
-	es := p.descEntries()
-	_, width := p.l.descText()
-	lo, hi := p.descBounds()
-	fitDescs(es, width, lo, hi)
-	return es
+	return nil
 }
 
 // columnSymbol is what the USCS column shows for a layer h points tall:

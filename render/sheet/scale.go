@@ -83,12 +83,20 @@ func ParseScale(s string) (Scale, error) {
 
 // Round scales, most detailed first. Automatic scaling walks these and
 // stops at the last readable one (index readable); past it the well goes
-// on over several sheets rather than shrinking further.
+// on over several sheets rather than shrinking further. Neighbouring steps
+// are at most 1.5 apart (but at the very ends), so the scale that holds a
+// well on one sheet fills at least two thirds of its body.
 var (
-	imperialSteps    = []float64{1, 2, 5, 10, 20, 30, 40, 50, 60, 100, 200, 500} // ft per in: 1-2-5 steps plus the 30, 40 and 60 of the engineer's scale (common practice)
-	metricSteps      = []float64{20, 25, 50, 100, 200, 250, 500, 1000, 2000}     // 1:N: ISO 5455 steps plus the 1:25 and 1:250 of building drawings (common practice)
-	imperialReadable = 50.0                                                      // 1 in = 50 ft: a 2-ft seal is 2.9 pt
-	metricReadable   = 500.0                                                     // 1:500: a 1-m seal is 5.7 pt
+	// ft per in: the faces of the engineer's scale (10 to 60 parts to the
+	// inch, read at 1, 10 and 100 ft a part), with 8 and 80 read on the
+	// 40 face at 2 parts a division and 15 and 150 on the 30 face at a
+	// half (common practice)
+	imperialSteps = []float64{1, 2, 3, 4, 5, 6, 8, 10, 15, 20, 30, 40, 50, 60, 80, 100, 150, 200, 300, 400, 500, 600}
+	// 1:N: ISO 5455 steps with the 1:25, 1:75, 1:125, 1:150 and 1:250 of
+	// metric scale rules (common practice)
+	metricSteps      = []float64{20, 25, 50, 75, 100, 125, 150, 200, 250, 500, 1000, 2000}
+	imperialReadable = 50.0  // 1 in = 50 ft: a 2-ft seal is 2.9 pt
+	metricReadable   = 500.0 // 1:500: a 1-m seal is 5.7 pt
 )
 
 // candidates lists the automatic scales for the units, most detailed
@@ -111,20 +119,27 @@ func candidates(imperial bool) []Scale {
 	return out
 }
 
+// allSteps is every round scale of the units, past the readable limit
+// too, most detailed first.
+func allSteps(imperial bool) []Scale {
+	var all []Scale
+	if imperial {
+		for _, ft := range append(imperialSteps, 800, 1000, 2000) {
+			all = append(all, Imperial(ft))
+		}
+		return all
+	}
+	for _, n := range append(metricSteps, 5000, 10000) {
+		all = append(all, Metric(n))
+	}
+	return all
+}
+
 // fitScale is the most detailed round scale of every step the units have
 // (past the readable limit too) at which a depth span fits the body, or
 // false when none does.
 func fitScale(imperial bool, span schema.Length, body float64) (Scale, bool) {
-	var all []Scale
-	if imperial {
-		for _, ft := range append(imperialSteps, 1000, 2000) {
-			all = append(all, Imperial(ft))
-		}
-	} else {
-		for _, n := range append(metricSteps, 5000, 10000) {
-			all = append(all, Metric(n))
-		}
-	}
+	all := allSteps(imperial)
 	for _, s := range all {
 		if s.Points(span) <= body {
 			return s, true

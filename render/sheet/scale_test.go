@@ -164,27 +164,43 @@ func TestFitScaleGivesOneSheet(t *testing.T) {
 			if len(l.sheets) != 1 {
 				t.Errorf("%s landscape=%v: %d sheets at %v", c.name, land, len(l.sheets), l.scale)
 			}
-			if next, ok := moreDetailed(append(candidates(true), Imperial(60), Imperial(100), Imperial(200), Imperial(500)), l.scale); ok && next.Points(l.bot-l.top) <= usable {
+			if next, ok := moreDetailed(allSteps(true), l.scale); ok && next.Points(l.bot-l.top) <= usable {
 				t.Errorf("%s landscape=%v: fit chose %v but %v holds the well", c.name, land, l.scale, next)
 			}
 		}
 	}
 }
 
-// A well whose second sheet would stand more than half blank at the
-// readable limit goes on one sheet at a less detailed round scale
-// instead (common practice: no sheet is issued mostly empty).
-func TestNoMostlyBlankSecondSheet(t *testing.T) {
-	for _, td := range []float64{300, 400} {
+// A well whose last sheet would stand more than half blank at the
+// readable limit goes on fewer sheets at a less detailed round scale, up
+// to twice the limit (common practice: no sheet is issued mostly empty);
+// and a well on one sheet fills at least two thirds of its body, since
+// neighbouring steps are at most 1.5 apart.
+func TestNoMostlyBlankSheet(t *testing.T) {
+	for _, td := range []float64{12, 30, 45, 70, 110, 170, 260, 300, 400, 625, 900, 1200} {
 		w := simpleWell(td)
 		l := newLayout(w, Inputs{}, Options{}, Letter)
 		if err := l.plan(); err != nil {
 			t.Fatal(err)
 		}
 		usable := l.plot.H - plotPadTop - plotPadBottom
-		at50 := Imperial(50).Points(l.bot-l.top) / usable
-		if at50 > 1 && at50 <= 1.5 && len(l.sheets) != 1 {
-			t.Errorf("%g-ft well: %d sheets at %v; at 1 in = 50 ft the second sheet would be %.0f %% used", td, len(l.sheets), l.scale, (at50-1)*100)
+		last := l.sheets[len(l.sheets)-1]
+		fill := l.scale.Points(last.Bottom-last.Top) / usable
+		switch {
+		case len(l.sheets) == 1 && fill < 2.0/3 && l.scale.Ratio > Imperial(2).Ratio:
+			t.Errorf("%g-ft well: one sheet at %v, %.0f %% of the body used", td, l.scale, 100*fill)
+		case len(l.sheets) > 1 && fill < 0.5:
+			for _, s := range allSteps(true) {
+				if s.Ratio > l.scale.Ratio && s.Ratio <= Imperial(100).Ratio && len(l.sheetsAt(s, usable)) < len(l.sheets) {
+					t.Errorf("%g-ft well: %d sheets at %v, the last %.0f %% used; %v needs fewer", td, len(l.sheets), l.scale, 100*fill, s)
+				}
+			}
+		}
+		t.Logf("%g ft: %v, %d sheets, last %.0f %% used", td, l.scale, len(l.sheets), 100*fill)
+	}
+	for i := 1; i < len(imperialSteps); i++ {
+		if r := imperialSteps[i] / imperialSteps[i-1]; r > 1.5 && imperialSteps[i] > 2 {
+			t.Errorf("1 in = %g ft follows 1 in = %g ft: a gap of %.2f", imperialSteps[i], imperialSteps[i-1], r)
 		}
 	}
 }

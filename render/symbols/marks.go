@@ -6,14 +6,27 @@ import (
 	"github.com/tremie-dev/tremie/render/draw"
 )
 
-// A pen collects the marks of a pattern as drawing primitives, dropping
-// what falls outside the target rectangle and cutting lines to it, so the
-// backends see few items that cross the edge. Marks of one style gather
-// into one draw.Path (see batch), so a pattern costs a backend a few
-// paths, not one per mark.
+// A pen collects the marks of a pattern as drawing primitives. Marks of
+// one style gather into one draw.Path (see batch), so a pattern costs a
+// backend a few paths, not one per mark.
+//
+// A pen draws either straight onto the page, dropping what falls outside
+// the target rectangle r and cutting lines to it, or, with tile set, one
+// repeat of a periodic pattern: r is then the tile's cell at the origin,
+// each mark is drawn once and whole (copies of the cell put it back
+// wherever it reaches), and cell grids run over exactly one period.
 type pen struct {
 	r     draw.Rect
 	items []draw.Item // *draw.Path while drawing; see done
+	// period is the size of the pattern's repeat, zero for a motif that
+	// does not repeat (a well part); cell numbers wrap round it, so that
+	// a motif varied cell by cell repeats with it.
+	period draw.Point
+	tile   bool
+	// rowsPerTile and misfit check, while a tile is drawn, that the
+	// motif's grid fits it (see tileMisfits).
+	rowsPerTile int
+	misfit      string
 }
 
 const (
@@ -29,9 +42,12 @@ func (p *pen) line(x0, y0, x1, y1, w float64) {
 }
 
 func (p *pen) lineStyled(x0, y0, x1, y1 float64, st draw.Style) {
-	a, b, ok := clipSegment(p.r, x0, y0, x1, y1)
-	if !ok {
-		return
+	a, b := draw.Point{X: x0, Y: y0}, draw.Point{X: x1, Y: y1}
+	if !p.tile {
+		var ok bool
+		if a, b, ok = draw.ClipSegment(p.r, draw.Point{X: x0, Y: y0}, draw.Point{X: x1, Y: y1}); !ok {
+			return
+		}
 	}
 	p.batch(st, draw.Subpath{Points: []draw.Point{a, b}}, nil)
 }
@@ -143,71 +159,81 @@ func sameStyle(a, b draw.Style) bool {
 	return true
 }
 
+// touches: a mark with these bounds may show. A tile keeps every mark.
 func (p *pen) touches(x, y, w, h float64) bool {
-	return p.r.Intersects(draw.Rect{X: x, Y: y, W: w, H: h})
+	return p.tile || p.r.Intersects(draw.Rect{X: x, Y: y, W: w, H: h})
 }
 
-// clipSegment cuts a segment to r (Liang–Barsky); ok is false when none
-// of it lies inside.
-func clipSegment(r draw.Rect, x0, y0, x1, y1 float64) (a, b draw.Point, ok bool) {
-	dx, dy := x1-x0, y1-y0
-	t0, t1 := 0.0, 1.0
-	for _, e := range [4][2]float64{
-		{-dx, x0 - r.X}, {dx, r.Right() - x0},
-		{-dy, y0 - r.Y}, {dy, r.Bottom() - y0},
-	} {
-		pp, q := e[0], e[1]
-		if pp == 0 {
-			if q < 0 {
-				return a, b, false
-			}
-			continue
-		}
-		t := q / pp
-		if pp < 0 {
-			if t > t1 {
-				return a, b, false
-			}
-			t0 = math.Max(t0, t)
-		} else {
-			if t < t0 {
-				return a, b, false
-			}
-			t1 = math.Min(t1, t)
+// cells calls fn for every cell of a w × h grid fixed to the page origin
+// that may put marks in the pen's rectangle (margin is how far, in
+// points, a cell's marks reach beyond the cell), or for a tile the cells
+// of one period. i and j number the cell's column and row, wrapped round
+// the period, so a motif can stagger odd rows or vary by cell and still
+// repeat; the period must hold a whole (and, for staggered rows, even)
+// number of cells.
+func (p *pen) cells(w, h, margin float64, fn func(x, y float64, i, j int)) {
+	ni, nj := p.count(w, p.period.X), p.count(h, p.period.Y)
+	if p.tile {
+		p.rowsPerTile = nj
+		if math.Abs(float64(ni)*w-p.period.X) > 1e-9 || math.Abs(float64(nj)*h-p.period.Y) > 1e-9 {
+			p.misfit = "the tile is not a whole number of cells"
 		}
 	}
-	if t1-t0 < 1e-9 {
-		return a, b, false
+	var i0, i1, j0, j1 int
+	if p.tile {
+		i0, i1, j0, j1 = 0, ni-1, 0, nj-1
+	} else {
+		r := p.r
+		i0 = int(math.Floor((r.X - margin) / w))
+		i1 = int(math.Floor((r.Right() + margin) / w))
+		j0 = int(math.Floor((r.Y - margin) / h))
+		j1 = int(math.Floor((r.Bottom() + margin) / h))
 	}
-	return draw.Point{X: x0 + t0*dx, Y: y0 + t0*dy}, draw.Point{X: x0 + t1*dx, Y: y0 + t1*dy}, true
-}
-
-// tiles calls fn for every cell of a w × h grid fixed to the page origin
-// that may put marks in r; i and j number the cell's column and row, so a
-// motif can stagger odd rows or vary by cell, the same on every sheet.
-// margin is how far (points) a cell's marks reach beyond the cell.
-func tiles(r draw.Rect, w, h, margin float64, fn func(x, y float64, i, j int)) {
-	i0 := int(math.Floor((r.X - margin) / w))
-	i1 := int(math.Floor((r.Right() + margin) / w))
-	j0 := int(math.Floor((r.Y - margin) / h))
-	j1 := int(math.Floor((r.Bottom() + margin) / h))
 	for j := j0; j <= j1; j++ {
 		for i := i0; i <= i1; i++ {
-			fn(float64(i)*w, float64(j)*h, i, j)
+			fn(float64(i)*w, float64(j)*h, wrap(i, ni), wrap(j, nj))
 		}
 	}
+}
+
+// count is how many cells of size c a period holds (0: no period).
+func (p *pen) count(c, period float64) int {
+	if period <= 0 {
+		return 0
+	}
+	return max(1, int(math.Round(period/c)))
+}
+
+// wrap numbers cell i within a period of n cells (n = 0: no wrapping).
+func wrap(i, n int) int {
+	if n <= 0 {
+		return i
+	}
+	return (i%n + n) % n
 }
 
 // rows calls fn for every row of height h, fixed to the page origin, that
-// meets r: for motifs that run the full width.
-func rows(r draw.Rect, h float64, fn func(y float64)) {
+// meets the pen's rectangle (for a tile, the rows of its cell): for
+// motifs that run the full width.
+func (p *pen) rows(h float64, fn func(y float64)) {
+	r := p.r
+	if p.tile && math.Abs(float64(p.count(h, r.H))*h-r.H) > 1e-9 {
+		p.misfit = "the tile is not a whole number of rows"
+	}
 	for j := int(math.Floor(r.Y / h)); float64(j)*h <= r.Bottom(); j++ {
+		if p.tile && float64(j)*h >= r.Bottom()-1e-9 {
+			break // the next cell's first row
+		}
 		fn(float64(j) * h)
 	}
 }
 
-// stagger is half a cell for odd rows: brick-like offsets.
-func stagger(j int, w float64) float64 {
+// stagger is half a cell for odd rows: brick-like offsets. A tile must
+// then hold an even number of rows.
+func (p *pen) stagger(j int, w float64) float64 {
+	if p.tile && p.rowsPerTile%2 != 0 {
+		p.misfit = "staggered rows need an even number of rows per tile"
+	}
 	if j&1 != 0 {
 		return w / 2
 	}
@@ -216,7 +242,9 @@ func stagger(j int, w float64) float64 {
 
 // hatch draws parallel lines at angle degrees (counter-clockwise from the
 // x axis, as seen on the page) spaced apart, on a family of lines fixed
-// to the page origin. dash, if set ({on, off} in points), dashes them
+// to the page origin. At 45° and 135° the lines repeat every
+// spacing·√2 along each axis: a tile's side must be a whole multiple of
+// that (see diagonal). dash, if set ({on, off} in points), dashes them
 // with the dashes also fixed to the page, so they too run on across
 // touching rectangles.
 func (p *pen) hatch(angle, spacing, w float64, dash []float64) {
@@ -243,15 +271,24 @@ func (p *pen) hatch(angle, spacing, w float64, dash []float64) {
 		if len(dash) != 2 {
 			x0, y0 := at(tlo - 1)
 			x1, y1 := at(thi + 1)
-			p.lineStyled(x0, y0, x1, y1, st)
+			p.hatchLine(x0, y0, x1, y1, st)
 			continue
 		}
 		period := dash[0] + dash[1]
 		for t := math.Floor(tlo/period) * period; t <= thi; t += period {
 			x0, y0 := at(t)
 			x1, y1 := at(t + dash[0])
-			p.lineStyled(x0, y0, x1, y1, st)
+			p.hatchLine(x0, y0, x1, y1, st)
 		}
+	}
+}
+
+// hatchLine draws a piece of a hatch line cut to the rectangle, in a tile
+// too: the pieces of one line in neighbouring cells meet end to end.
+func (p *pen) hatchLine(x0, y0, x1, y1 float64, st draw.Style) {
+	a, b, ok := draw.ClipSegment(p.r, draw.Point{X: x0, Y: y0}, draw.Point{X: x1, Y: y1})
+	if ok {
+		p.batch(st, draw.Subpath{Points: []draw.Point{a, b}}, nil)
 	}
 }
 

@@ -80,7 +80,7 @@ func tagBob(p *pen) {
 func slots(p *pen) {
 	const pitch, slot = 2.4, 0.8
 	inset := math.Min(0.6, p.r.W*0.2)
-	rows(p.r, pitch, func(y float64) {
+	p.rows(pitch, func(y float64) {
 		p.lineStyled(p.r.X+inset, y+pitch/2, p.r.Right()-inset, y+pitch/2, draw.Style{Stroke: slotWhite, StrokeWidth: slot})
 	})
 }
@@ -90,7 +90,7 @@ func slots(p *pen) {
 // wall.
 func wireWrap(p *pen) {
 	const pitch, slant = 1.2, 0.9
-	rows(p.r, pitch, func(y float64) {
+	p.rows(pitch, func(y float64) {
 		// Each turn climbs slant points across the strip's width.
 		p.line(p.r.X, y+slant, p.r.Right(), y, 0.4)
 	})

@@ -35,13 +35,17 @@ type Symbol struct {
 	Fill draw.Color // ground colour under the marks; zero for a part drawn as marks alone
 
 	marks  func(p *pen)                  // the pattern, laid on the page grid
+	period draw.Point                    // the pattern's repeat (points), or zero: marks drawn into each region
+	tile   *draw.Tile                    // the repeat as a tile, made once from marks and period (see makeTile)
 	paint  func(r draw.Rect) []draw.Item // overrides the ground+marks painting (dual soils)
 	swatch func(r draw.Rect) []draw.Item // overrides the legend swatch (well parts)
 }
 
 // Paint fills r with the symbol: the ground colour, then the marks,
 // clipped exactly to r. The marks sit on a grid fixed to the page, so
-// touching rectangles of one symbol join seamlessly.
+// touching rectangles of one symbol join seamlessly. A periodic pattern
+// (every soil, rock and fill material) is one draw.Pattern of its tile,
+// which backends define once and fill by reference.
 func (s Symbol) Paint(r draw.Rect) []draw.Item {
 	if !(r.W > 0 && r.H > 0) || math.IsInf(r.W, 0) || math.IsInf(r.H, 0) {
 		return nil
@@ -59,14 +63,39 @@ func (s Symbol) Paint(r draw.Rect) []draw.Item {
 	if !s.Fill.None() {
 		items = append(items, draw.Box{Rect: r, Style: draw.Style{Fill: s.Fill}, Role: "symbol " + s.ID})
 	}
-	if s.marks != nil {
-		p := &pen{r: r}
-		s.marks(p)
-		if marks := p.done(); len(marks) > 0 {
-			items = append(items, draw.Clip{Rect: r, Items: marks})
-		}
+	switch {
+	case s.tile != nil:
+		items = append(items, draw.Pattern{Rect: r, Tile: s.tile, Role: "pattern " + s.ID})
+	case s.marks != nil:
+		items = append(items, s.direct(r)...)
 	}
 	return items
+}
+
+// direct draws the marks straight into r, clipped to it: how a well
+// part's motif, which does not repeat, is drawn.
+func (s Symbol) direct(r draw.Rect) []draw.Item {
+	p := &pen{r: r, period: s.period}
+	s.marks(p)
+	if marks := p.done(); len(marks) > 0 {
+		return []draw.Item{draw.Clip{Rect: r, Items: marks}}
+	}
+	return nil
+}
+
+// tileMisfits lists the symbols whose motif does not fit their tile
+// (a test fails on any).
+var tileMisfits []string
+
+// makeTile draws one repeat of a periodic pattern: the marks of the cells
+// of one period, each once and whole.
+func makeTile(s Symbol) *draw.Tile {
+	p := &pen{r: draw.Rect{W: s.period.X, H: s.period.Y}, period: s.period, tile: true}
+	s.marks(p)
+	if p.misfit != "" {
+		tileMisfits = append(tileMisfits, s.ID+": "+p.misfit)
+	}
+	return &draw.Tile{ID: s.ID, W: s.period.X, H: s.period.Y, Items: p.done()}
 }
 
 // Swatch is the symbol as the legend shows it in r: the pattern in a thin

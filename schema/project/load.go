@@ -80,12 +80,7 @@ var File = schema.SpecOf("tremie project file", "A project's settings shared by 
 // Load reads dir/project.toml (dir may also be the file itself) and the
 // logo it names. Errors carry the file and line.
 func Load(dir string) (*Project, error) {
-	file := dir
-	if st, err := os.Stat(dir); err == nil && st.IsDir() {
-		file = filepath.Join(dir, FileName)
-	} else {
-		dir = filepath.Dir(dir)
-	}
+	dir, file := locate(dir)
 	data, err := schema.ReadInput(file, schema.MaxTextFile)
 	if err != nil {
 		if errors.Is(err, fs.ErrNotExist) {
@@ -261,12 +256,7 @@ func readNorth(doc *schema.Doc, pt *schema.Table) schema.Orientation {
 // with its own, so that all are fixed at once. Each is "" when not named
 // or not a string, and both when the file cannot be read or parsed.
 func Linked(dir string) (profile, yields string) {
-	file := dir
-	if st, err := os.Stat(dir); err == nil && st.IsDir() {
-		file = filepath.Join(dir, FileName)
-	} else {
-		dir = filepath.Dir(dir)
-	}
+	dir, file := locate(dir)
 	data, err := schema.ReadInput(file, schema.MaxTextFile)
 	if err != nil {
 		return "", ""
@@ -287,4 +277,12 @@ func Linked(dir string) (profile, yields string) {
 		p.Yields, _ = s.(string)
 	}
 	return p.ProfilePath(), p.YieldsPath()
+}
+
+// locate is the project's directory and file, given either.
+func locate(path string) (dir, file string) {
+	if st, err := os.Stat(path); err == nil && st.IsDir() {
+		return path, filepath.Join(path, FileName)
+	}
+	return filepath.Dir(path), path
 }

@@ -45,7 +45,18 @@ func isWellFile(path string) bool { return schema.IsWellFile(path) }
 // Key is a well file's name relative to the project directory, with
 // forward slashes: stable across machines, for caches and messages.
 func (p *Project) Key(file string) string {
-	if rel, err := filepath.Rel(p.Dir, file); err == nil && !strings.HasPrefix(rel, "..") {
+	dir, f := p.Dir, file
+	if filepath.IsAbs(dir) != filepath.IsAbs(f) || strings.HasPrefix(filepath.Clean(dir), "..") {
+		// one absolute, or the project above the working directory:
+		// compare them as absolute paths
+		if a, err := filepath.Abs(dir); err == nil {
+			dir = a
+		}
+		if a, err := filepath.Abs(f); err == nil {
+			f = a
+		}
+	}
+	if rel, err := filepath.Rel(dir, f); err == nil && !strings.HasPrefix(rel, "..") {
 		return filepath.ToSlash(rel)
 	}
 	return filepath.ToSlash(file)

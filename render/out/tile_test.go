@@ -1,0 +1,212 @@
+package out
+
+import (
+	"bytes"
+	"image"
+	"math"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"regexp"
+	"strings"
+	"testing"
+	"time"
+
+	"github.com/tremie-dev/tremie/render/draw"
+)
+
+// testTiles are two small patterns whose marks reach past their cell:
+// a line across the cell, a dot on a corner, a filled triangle on an
+// edge, a ring.
+var testTiles = func() [2]*draw.Tile {
+	ink := draw.RGB(20, 20, 20)
+	a := &draw.Tile{ID: "soil:T1", W: 6, H: 5, Items: []draw.Item{
+		draw.Path{Style: draw.Style{Stroke: ink, StrokeWidth: 0.5}, Subpaths: []draw.Subpath{{Points: []draw.Point{{X: 0, Y: 1}, {X: 6, Y: 3}}}}},
+		draw.Path{Style: draw.Style{Fill: ink}, Circles: []draw.Disc{{Center: draw.Point{X: 5.8, Y: 4.8}, R: 0.7}},
+			Subpaths: []draw.Subpath{{Closed: true, Points: []draw.Point{{X: 2, Y: 4.5}, {X: 3.5, Y: 5.8}, {X: 1, Y: 5.6}}}}},
+	}}
+	b := &draw.Tile{ID: "fill:T/2", W: 4, H: 4, Items: []draw.Item{
+		draw.Circle{Style: draw.Style{Stroke: ink, StrokeWidth: 0.4}, Center: draw.Point{X: 2, Y: 2}, R: 1.2},
+		draw.Box{Style: draw.Style{Fill: ink}, Rect: draw.Rect{X: 3.5, Y: -0.3, W: 1, H: 0.6}},
+	}}
+	return [2]*draw.Tile{a, b}
+}()
+
+func tileDoc() *draw.Document {
+	a, b := testTiles[0], testTiles[1]
+	p := &draw.Page{Width: 200, Height: 150}
+	p.Add(
+		draw.Box{Rect: draw.Rect{X: 10, Y: 10, W: 80, H: 60}, Style: draw.Style{Fill: draw.RGB(240, 220, 150)}},
+		draw.Pattern{Rect: draw.Rect{X: 10, Y: 10, W: 80, H: 60}, Tile: a, Role: "pattern a"},
+		draw.Clip{Rect: draw.Rect{X: 100, Y: 0, W: 50, H: 100}, Items: []draw.Item{
+			draw.Pattern{Rect: draw.Rect{X: 90.5, Y: 20.25, W: 80, H: 60}, Tile: a, Role: "pattern a, clipped"},
+		}},
+		draw.Pattern{Rect: draw.Rect{X: 20, Y: 80, W: 170, H: 60}, Tile: b, Role: "pattern b"},
+		draw.Box{Rect: draw.Rect{X: 60, Y: 100, W: 40, H: 20}, Style: draw.Style{Fill: draw.White}},
+	)
+	return &draw.Document{Title: "tiles", Pages: []*draw.Page{p}}
+}
+
+// TestSVGPatternsDefinedOnce: each tile is one <pattern> in <defs>, in
+// user space, and each fill one path referring to it, cut to its clip,
+// in painting order.
+func TestSVGPatternsDefinedOnce(t *testing.T) {
+	b, err := SVG(tileDoc(), 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	_, elements := svgText(t, b)
+	if elements["pattern"] != 2 || elements["defs"] != 1 {
+		t.Fatalf("%d patterns in %d defs, want 2 in 1", elements["pattern"], elements["defs"])
+	}
+	s := string(b)
+	for _, want := range []string{
+		`<pattern id="tile-soil-T1" patternUnits="userSpaceOnUse" width="2.1166666666666667" height="1.763888888888889" viewBox="0 0 6 5">`,
+		`<pattern id="tile-fill-T-2" patternUnits="userSpaceOnUse"`,
+		// The first fill, then the clipped one (x 100–150 pt, y 20.25–80.25 pt, in mm).
+		`<path d="M3.528 3.528H31.75V24.694H3.528z" fill="url(#tile-soil-T1)"/>`,
+		`<path d="M35.278 7.144H52.917V28.31H35.278z" fill="url(#tile-soil-T1)"/>`,
+	} {
+		if !strings.Contains(s, want) {
+			t.Errorf("no %s", want)
+		}
+	}
+	if n := strings.Count(s, `fill="url(#tile-soil-T1)"`); n != 2 {
+		t.Errorf("%d fills with tile 1, want 2", n)
+	}
+	if strings.Index(s, "tile-fill-T-2)") < strings.Index(s, "M35.278") || strings.Index(s, "tile-fill-T-2)") > strings.LastIndex(s, `fill="#fff"`) {
+		t.Error("fills are not in painting order")
+	}
+	// The dot on the corner (5.8, 4.8), r 0.7, shows in all four corners
+	// of the cell; the line and the triangle in one cell and the next.
+	def := s[strings.Index(s, `<pattern id="tile-soil-T1"`):]
+	def = def[:strings.Index(def, "</pattern>")]
+	for _, want := range []string{"M6.5 4.8A", "M0.5 4.8A", "M6.5 -0.2A", "M0.5 -0.2A", "M0 1L6 3", "M2 4.5L", "M2 -0.5L"} {
+		if !strings.Contains(def, want) {
+			t.Errorf("tile 1 has no %s: %s", want, def)
+		}
+	}
+	again, _ := SVG(tileDoc(), 0)
+	if !bytes.Equal(b, again) {
+		t.Error("two writes of one document differ")
+	}
+}
+
+// TestPatternSVGMatchesPNG: the SVG's patterns, as librsvg (an SVG
+// renderer outside the project) draws them, look like tremie's own
+// raster of the same page: every cell joined without seams, every mark
+// where it belongs.
+func TestPatternSVGMatchesPNG(t *testing.T) {
+	rsvg, err := exec.LookPath("rsvg-convert")
+	if err != nil {
+		t.Skip("rsvg-convert not installed")
+	}
+	doc := tileDoc()
+	b, err := SVG(doc, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	dir := t.TempDir()
+	in, outPNG := filepath.Join(dir, "t.svg"), filepath.Join(dir, "t.png")
+	if err := os.WriteFile(in, b, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if out, err := exec.Command(rsvg, "-d", "144", "-p", "144", "-b", "white", "-o", outPNG, in).CombinedOutput(); err != nil {
+		t.Fatalf("rsvg-convert: %v\n%s", err, out)
+	}
+	rb, err := os.ReadFile(outPNG)
+	if err != nil {
+		t.Fatal(err)
+	}
+	theirs := decodePNG(t, rb)
+	ours := decodePNG(t, must(PNG(doc, 0, 144)))
+	compareRasters(t, "rsvg", theirs, ours)
+}
+
+// compareRasters fails when two rasters of one page differ by more than
+// anti-aliasing and resampling (librsvg draws a pattern's cell offscreen
+// and resamples it, softening the marks): a mean luma difference over
+// 3 %, or any 3 × 3 block whose mean differs by over half of full luma,
+// as a missing, extra or shifted mark does.
+func compareRasters(t *testing.T, name string, a, b image.Image) {
+	t.Helper()
+	// A renderer may round the page up to a whole pixel more.
+	w, h := min(a.Bounds().Dx(), b.Bounds().Dx()), min(a.Bounds().Dy(), b.Bounds().Dy())
+	if max(a.Bounds().Dx(), b.Bounds().Dx())-w > 1 || max(a.Bounds().Dy(), b.Bounds().Dy())-h > 1 {
+		t.Fatalf("%s: %v against %v pixels", name, a.Bounds().Size(), b.Bounds().Size())
+	}
+	d := make([]float64, w*h)
+	sum := 0.0
+	for y := 0; y < h; y++ {
+		for x := 0; x < w; x++ {
+			v := lumaAt(a, x, y) - lumaAt(b, x, y)
+			d[y*w+x] = v
+			sum += math.Abs(v)
+		}
+	}
+	if mean := sum / float64(w*h); mean > 0.03 {
+		t.Errorf("%s: mean luma difference %.4f", name, mean)
+	}
+	for y := 1; y < h-1; y++ {
+		for x := 1; x < w-1; x++ {
+			s := 0.0
+			for k := -1; k <= 1; k++ {
+				s += d[(y+k)*w+x-1] + d[(y+k)*w+x] + d[(y+k)*w+x+1]
+			}
+			if math.Abs(s/9) > 0.5 {
+				t.Errorf("%s: the rasters differ around pixel (%d, %d)", name, x, y)
+				return
+			}
+		}
+	}
+}
+
+func lumaAt(img image.Image, x, y int) float64 {
+	b := img.Bounds()
+	r, g, bl, _ := img.At(b.Min.X+x, b.Min.Y+y).RGBA()
+	return (0.2126*float64(r) + 0.7152*float64(g) + 0.0722*float64(bl)) / 0xffff
+}
+
+// TestPatternBoundedByThePage: a pattern region a million points wide
+// (an absurd diameter) costs what the page costs: one path in SVG, the
+// page's cells in the raster.
+func TestPatternBoundedByThePage(t *testing.T) {
+	p := &draw.Page{Width: 300, Height: 300, Items: []draw.Item{
+		draw.Pattern{Rect: draw.Rect{X: -5e5, Y: -5e5, W: 1e6, H: 1e6}, Tile: testTiles[0]},
+	}}
+	doc := &draw.Document{Pages: []*draw.Page{p}}
+	start := time.Now()
+	b, err := SVG(doc, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !regexp.MustCompile(`<path d="M0 0H105.833V105.833H0z" fill="url\(#tile-soil-T1\)"/>`).Match(b) {
+		t.Errorf("the fill is not cut to the page: %s", b)
+	}
+	if _, err := PNG(doc, 0, 72); err != nil {
+		t.Fatal(err)
+	}
+	if d := time.Since(start); d > 5*time.Second {
+		t.Errorf("a huge pattern took %v", d)
+	}
+}
+
+// TestBadTiles: a tile too small, not finite, or holding what cannot be
+// a mark is reported, not drawn.
+func TestBadTiles(t *testing.T) {
+	for _, tile := range []*draw.Tile{
+		nil,
+		{ID: "tiny", W: 0.01, H: 5},
+		{ID: "nan", W: math.NaN(), H: 5},
+		{ID: "text", W: 5, H: 5, Items: []draw.Item{draw.Text{S: "x", Size: 5}}},
+		{ID: "inf", W: 5, H: 5, Items: []draw.Item{draw.Path{Style: draw.Style{Fill: draw.Black}, Circles: []draw.Disc{{R: math.Inf(1)}}}}},
+	} {
+		doc := &draw.Document{Pages: []*draw.Page{{Width: 50, Height: 50, Items: []draw.Item{draw.Pattern{Rect: draw.Rect{W: 20, H: 20}, Tile: tile}}}}}
+		if _, err := SVG(doc, 0); err == nil {
+			t.Errorf("SVG drew a bad tile %v", tile)
+		}
+		if _, err := PNG(doc, 0, 72); err == nil {
+			t.Errorf("PNG drew a bad tile %v", tile)
+		}
+	}
+}
