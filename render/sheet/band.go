@@ -42,7 +42,9 @@ const (
 	legendColW = 104.0
 )
 
-func (l *layout) hasAmounts() bool { return l.in.Quantities != nil && len(l.in.Quantities.AllRows()) > 0 }
+func (l *layout) hasAmounts() bool {
+	return l.in.Quantities != nil && len(l.in.Quantities.AllRows()) > 0
+}
 
 func sortedSymbols(m map[string]symbol) []symbol {
 	out := make([]symbol, 0, len(m))

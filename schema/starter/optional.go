@@ -24,7 +24,9 @@ var optionalKinds = map[string]func(Options) []part{
 	"monitoring": func(Options) []part { return []part{samplePart(30, 9.1)} },
 	"planned":    func(Options) []part { return []part{samplePart(30, 9.1)} },
 	"nested":     func(Options) []part { return []part{samplePart(35, 10.7), samplePart(75, 22.9)} },
-	"supply":     func(Options) []part { return []part{samplePart(95, 28.5), pumpingTestPart(45, 13.7, 62, 18.9, 60, 3.8)} },
+	"supply": func(Options) []part {
+		return []part{samplePart(95, 28.5), pumpingTestPart(45, 13.7, 62, 18.9, 60, 3.8)}
+	},
 	"rock": func(Options) []part {
 		return []part{
 			{path: "orientation", note: "The azimuth reference of the feature picks below.", vals: []value{
