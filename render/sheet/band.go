@@ -489,6 +489,9 @@ func (l *layout) amountItems() []draw.Item {
 		rows = rows[:k]
 		n, _ := l.number(len(l.sheets))
 		more = fmt.Sprintf("Amounts continue on sheet %d.", n)
+		if l.stripBoxes != nil {
+			more = "Amounts continue below."
+		}
 	}
 	return l.amountBox(l.bandPlan.amountR, "AMOUNTS PER FILL INTERVAL", rows, more == "", more)
 }

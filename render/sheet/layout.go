@@ -20,6 +20,11 @@ type layout struct {
 	opt Options
 	pg  Page
 	u   schema.Units
+	// strip is the height kept under the band for notes that would
+	// otherwise go on a notes sheet (see fitstrip.go); the boxes flowed
+	// into it are stripBoxes.
+	strip      float64
+	stripBoxes []sheetBox
 
 	secs *schema.Sections // what stands in the hole at each depth
 
@@ -84,6 +89,15 @@ func newLayout(w *schema.Well, in Inputs, opt Options, pg Page) *layout {
 
 // plan fixes everything but the drawing of each sheet.
 func (l *layout) plan() error {
+	if err := l.planOnce(); err != nil {
+		return err
+	}
+	l.notesOnTheSheet()
+	return nil
+}
+
+// planOnce plans the sheets with the strip as set.
+func (l *layout) planOnce() error {
 	l.top, l.bot = l.depthRange()
 	if !(l.bot > l.top) || math.IsInf(float64(l.bot-l.top), 0) || math.IsNaN(float64(l.bot-l.top)) {
 		return fmt.Errorf("nothing to draw: total depth %s", l.u.FormatDepth(l.w.TotalDepth))
@@ -114,7 +128,11 @@ func (l *layout) plan() error {
 		l.body.H = l.band.H
 	} else {
 		bh := l.bandPlan.height
-		l.band = draw.Rect{X: l.content.X, Y: l.caution.Y - 4 - bh, W: l.content.W, H: bh}
+		foot := l.caution.Y - 4
+		if l.strip > 0 {
+			foot -= l.strip + 4
+		}
+		l.band = draw.Rect{X: l.content.X, Y: foot - bh, W: l.content.W, H: bh}
 		l.body.H = l.band.Y - 6 - l.body.Y
 	}
 	l.placeBand()
@@ -169,7 +187,7 @@ func (l *layout) plan() error {
 	}
 	l.planCallouts()
 	l.planNotesSheets()
-	return nil
+	return l.flowIntoStrip()
 }
 
 // moreDetailed is the least detailed of the scales that is more detailed
