@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"io"
 	"os"
+	"path/filepath"
 	"runtime"
 	"sync"
 	"sync/atomic"
@@ -326,4 +327,45 @@ func BenchmarkRender100(b *testing.B) {
 // PDF and PNG (target: under 1 s).
 func BenchmarkRenderDeepWell(b *testing.B) {
 	benchRenderCommand(b, "../../testdata/gallery/DS-1200.toml", 1, "svg,pdf,png")
+}
+
+// BenchmarkCheckVsDecode1000 sets `tremie check` on a 1,000-well project
+// beside BurntSushi/toml alone decoding the same files, both as the
+// command works (every file read from disk, on every core), in the same
+// iteration, so that machine load touches both alike. The issue's target:
+// check-per-decode at most 1.3.
+func BenchmarkCheckVsDecode1000(b *testing.B) {
+	dir := b.TempDir()
+	if err := synth.Project(dir, 1000); err != nil {
+		b.Fatal(err)
+	}
+	files, err := filepath.Glob(filepath.Join(dir, "wells", "*.toml"))
+	if err != nil || len(files) != 1000 {
+		b.Fatalf("%d files, %v", len(files), err)
+	}
+	var decode, check time.Duration
+	for b.Loop() {
+		t0 := time.Now()
+		_, sum := batch.Run(files, batch.Options{}, func(_ int, f string) (struct{}, batch.Outcome, error) {
+			data, err := os.ReadFile(f)
+			if err != nil {
+				return struct{}{}, batch.Failed, err
+			}
+			var raw any
+			_, err = toml.Decode(string(data), &raw)
+			return struct{}{}, batch.Done, err
+		})
+		if sum.Failed > 0 {
+			b.Fatalf("%d files failed to decode", sum.Failed)
+		}
+		t1 := time.Now()
+		if code := runCheck([]string{dir}, io.Discard, io.Discard); code != exitOK {
+			b.Fatalf("check: exit %d", code)
+		}
+		decode += t1.Sub(t0)
+		check += time.Since(t1)
+	}
+	b.ReportMetric(float64(decode.Milliseconds())/float64(b.N), "decode-ms")
+	b.ReportMetric(float64(check.Milliseconds())/float64(b.N), "check-ms")
+	b.ReportMetric(check.Seconds()/decode.Seconds(), "check/decode")
 }

@@ -130,6 +130,24 @@ func TestDuplicateWellIDs(t *testing.T) {
 	if _, err := os.Stat(filepath.Join(dir, "out", "BAD-1.pdf")); err != nil {
 		t.Errorf("the other well was not drawn: %v", err)
 	}
+	// A well drawn before its copy appeared keeps its sheets, and they are
+	// not called stale: its file is still there; once the copy is gone it
+	// is drawn again.
+	os.Remove(filepath.Join(dir, "wells", "backup", "OK-1 copy.toml"))
+	if code, out, errb := runTremie("render", "."); code != exitFindings || !strings.Contains(out, "OK-1") {
+		t.Fatalf("render without the copy: exit %d\n%s\n%s", code, out, errb)
+	}
+	put(t, dir, "wells/backup/OK-1 copy.toml", sealedWell)
+	if _, _, errb := runTremie("render", "."); strings.Contains(errb, "stale") {
+		t.Errorf("a well refused for its duplicate ID has its sheets called stale:\n%s", errb)
+	}
+	if _, err := os.Stat(filepath.Join(dir, "out", "OK-1.svg")); err != nil {
+		t.Errorf("OK-1's sheet is gone: %v", err)
+	}
+	os.Remove(filepath.Join(dir, "wells", "backup", "OK-1 copy.toml"))
+	if _, out, _ := runTremie("render", "."); !strings.Contains(out, "OK-1.toml: OK-1, 1 sheet") {
+		t.Errorf("OK-1 not drawn again once its copy is gone:\n%s", out)
+	}
 }
 
 // Rendering some wells into a shared output folder leaves the others'

@@ -62,8 +62,9 @@ type face struct {
 	capHeight  float64
 	xHeight    float64
 
+	latin   [256]glyph // runes below U+0100, looked up at parse: most of every label
 	mu      sync.Mutex
-	advance map[rune]glyph // cache: measuring is on the layout hot path
+	advance map[rune]glyph // other runes, as first measured
 }
 
 type glyph struct {
@@ -105,7 +106,7 @@ func parseFace(data []byte) (*face, error) {
 	if err != nil {
 		return nil, fmt.Errorf("metrics: %w", err)
 	}
-	return &face{
+	fc := &face{
 		font:       f,
 		unitsPerEm: float64(upem),
 		ascent:     units(m.Ascent),
@@ -114,20 +115,37 @@ func parseFace(data []byte) (*face, error) {
 		capHeight:  units(m.CapHeight),
 		xHeight:    units(m.XHeight),
 		advance:    map[rune]glyph{},
-	}, nil
+	}
+	for r := range fc.latin {
+		fc.latin[r] = fc.lookUp(&b, rune(r))
+	}
+	return fc, nil
 }
 
 func units(v fixed.Int26_6) float64 { return float64(v) / 64 }
 
 // glyphOf returns the glyph and advance for a rune; a rune the font lacks
 // maps to glyph 0 (.notdef), which is also what the backends draw.
-func (fc *face) glyphOf(b *sfnt.Buffer, r rune) glyph {
+func (fc *face) glyphOf(r rune) glyph {
+	if r >= 0 && r < rune(len(fc.latin)) {
+		return fc.latin[r]
+	}
 	fc.mu.Lock()
 	g, ok := fc.advance[r]
 	fc.mu.Unlock()
 	if ok {
 		return g
 	}
+	var b sfnt.Buffer
+	g = fc.lookUp(&b, r)
+	fc.mu.Lock()
+	fc.advance[r] = g
+	fc.mu.Unlock()
+	return g
+}
+
+// lookUp reads a rune's glyph and advance from the font.
+func (fc *face) lookUp(b *sfnt.Buffer, r rune) glyph {
 	ppem := fixed.I(int(fc.unitsPerEm))
 	idx, err := fc.font.GlyphIndex(b, r)
 	if err != nil {
@@ -137,25 +155,23 @@ func (fc *face) glyphOf(b *sfnt.Buffer, r rune) glyph {
 	if err != nil {
 		adv = 0
 	}
-	g = glyph{index: idx, advance: units(adv)}
-	fc.mu.Lock()
-	fc.advance[r] = g
-	fc.mu.Unlock()
-	return g
+	return glyph{index: idx, advance: units(adv)}
 }
 
 // width is the advance of s in font units, with pair kerning where the
 // font has a kern table.
 func (fc *face) width(s string) float64 {
-	var b sfnt.Buffer
 	ppem := fixed.I(int(fc.unitsPerEm))
 	w := 0.0
 	prev := sfnt.GlyphIndex(0)
 	first := true
 	for _, r := range s {
-		g := fc.glyphOf(&b, r)
+		g := fc.glyphOf(r)
 		if !first {
-			if k, err := fc.font.Kern(&b, prev, g.index, ppem, font.HintingNone); err == nil {
+			// No buffer: sfnt makes one only for a font with a kern
+			// table, and a Buffer made here for every call was most
+			// of the time measuring took.
+			if k, err := fc.font.Kern(nil, prev, g.index, ppem, font.HintingNone); err == nil {
 				w += units(k)
 			}
 		}

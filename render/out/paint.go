@@ -469,8 +469,18 @@ func cropImage(img image.Image, r, v draw.Rect) (image.Image, draw.Rect) {
 	}
 	// A fresh image at the origin: renderers assume bounds start at 0.
 	dst := image.NewRGBA(image.Rect(0, 0, crop.Dx(), crop.Dy()))
+	src, direct := img.(*image.RGBA) // a wall-image strip: copy bytes, not colours one by one
 	for y := 0; y < crop.Dy(); y++ {
 		srcY := b.Min.Y + int(float64(crop.Min.Y+y)/ky)
+		if direct {
+			row := dst.Pix[y*dst.Stride : y*dst.Stride+4*crop.Dx()]
+			for x := 0; x < crop.Dx(); x++ {
+				srcX := b.Min.X + int(float64(crop.Min.X+x)/kx)
+				at := src.PixOffset(srcX, srcY)
+				copy(row[4*x:4*x+4], src.Pix[at:at+4])
+			}
+			continue
+		}
 		for x := 0; x < crop.Dx(); x++ {
 			srcX := b.Min.X + int(float64(crop.Min.X+x)/kx)
 			dst.Set(x, y, img.At(srcX, srcY))

@@ -115,13 +115,23 @@ func rebuild(spans [][]byte, replace map[int][]byte) []byte {
 		}
 	}
 	xref := out.Len()
-	fmt.Fprintf(&out, "xref\n0 %d\n0000000000 65535 f \n", len(spans))
+	b := make([]byte, 0, 64+20*len(spans))
+	b = append(b, "xref\n0 "...)
+	b = strconv.AppendInt(b, int64(len(spans)), 10)
+	b = append(b, "\n0000000000 65535 f \n"...)
 	for _, off := range offsets[1:] {
-		fmt.Fprintf(&out, "%010d 00000 n \n", off)
+		b = appendPadded(b, off, 10) // each entry exactly 20 bytes (ISO 32000-1, 7.5.4)
+		b = append(b, " 00000 n \n"...)
 	}
+	out.Write(b)
 	sum := sha256.Sum256(out.Bytes())
 	id := strings.ToUpper(hex.EncodeToString(sum[:16]))
-	fmt.Fprintf(&out, "trailer\n<</Size %d/Root 1 0 R/Info 2 0 R/ID [<%s><%s>]>>\nstartxref\n%d\n%%%%EOF\n", len(spans), id, id, xref)
+	b = append(b[:0], "trailer\n<</Size "...)
+	b = strconv.AppendInt(b, int64(len(spans)), 10)
+	b = append(b, "/Root 1 0 R/Info 2 0 R/ID [<"+id+"><"+id+">]>>\nstartxref\n"...)
+	b = strconv.AppendInt(b, int64(xref), 10)
+	b = append(b, "\n%%EOF\n"...)
+	out.Write(b)
 	return out.Bytes()
 }
 
@@ -228,4 +238,14 @@ func readXref(pdf []byte) (xrefAt int, offsets []int, err error) {
 		}
 	}
 	return xrefAt, offsets, nil
+}
+
+// appendPadded appends n in decimal, zero-padded to width digits.
+func appendPadded(b []byte, n, width int) []byte {
+	var digits [20]byte
+	d := strconv.AppendInt(digits[:0], int64(n), 10)
+	for i := len(d); i < width; i++ {
+		b = append(b, '0')
+	}
+	return append(b, d...)
 }

@@ -53,23 +53,27 @@ func pdfDate(s string) (string, error) {
 	_, off := t.Zone()
 	// UTC is written +00'00' rather than Z: both are allowed, and the
 	// signed form is what every reader (and pdfcpu) writes and expects.
-	sign := '+'
+	sign := byte('+')
 	if off < 0 {
 		sign, off = '-', -off
 	}
-	return fmt.Sprintf("%s%c%02d'%02d'", d, sign, off/3600, off%3600/60), nil
+	b := append([]byte(d), sign)
+	b = appendPadded(b, off/3600, 2)
+	b = append(b, '\'')
+	b = appendPadded(b, off%3600/60, 2)
+	return string(append(b, '\'')), nil
 }
 
 // text encodes a string as a hex string in UTF-16BE with a byte-order
 // mark, which every reader takes for any Unicode text (ISO 32000-1, 7.9.2.2).
 func pdfText(s string) string {
-	var b strings.Builder
-	b.WriteString("<FEFF")
+	const hexDigits = "0123456789ABCDEF"
+	b := make([]byte, 0, 6+4*len(s))
+	b = append(b, "<FEFF"...)
 	for _, u := range utf16.Encode([]rune(s)) {
-		fmt.Fprintf(&b, "%04X", u)
+		b = append(b, hexDigits[u>>12], hexDigits[u>>8&15], hexDigits[u>>4&15], hexDigits[u&15])
 	}
-	b.WriteString(">")
-	return b.String()
+	return string(append(b, '>'))
 }
 
 func (in *pdfInfo) object() []byte {
@@ -82,11 +86,12 @@ func (in *pdfInfo) object() []byte {
 	b.WriteString("2 0 obj\n<<")
 	for _, k := range keys {
 		v := in.entries[k]
+		b.WriteString("/" + k)
 		if strings.HasSuffix(k, "Date") {
 			// Dates are ASCII; written as literal strings, the usual form.
-			fmt.Fprintf(&b, "/%s (%s)", k, v)
+			b.WriteString(" (" + v + ")")
 		} else {
-			fmt.Fprintf(&b, "/%s %s", k, pdfText(v))
+			b.WriteString(" " + pdfText(v))
 		}
 	}
 	b.WriteString(">>\nendobj\n")

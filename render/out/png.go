@@ -46,6 +46,9 @@ func PNG(doc *draw.Document, i int, dpi float64) ([]byte, error) {
 		return nil, fmt.Errorf("png page %d: %w", i+1, err)
 	}
 	r.Close()
+	if b, ok := encodeOpaquePNG(img); ok {
+		return b, nil
+	}
 	var buf bytes.Buffer
 	enc := png.Encoder{CompressionLevel: png.BestSpeed}
 	if err := enc.Encode(&buf, img); err != nil {

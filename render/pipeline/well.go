@@ -71,11 +71,17 @@ func (w *Well) Prepare(checks Checks) {
 	s := w.Setting
 	project.Apply(s.Project, w.Well)
 	w.Quantities = quantity.Compute(w.Well, s.Yields)
+	rs := rules.All()
 	if checks == ReconcileRules {
-		w.Findings = rules.Run(w.Well, rules.Select(rules.Reconciling), s.Profile)
-	} else {
-		w.Findings = rules.Check(w.Well, s.Profile)
+		rs = rules.Select(rules.Reconciling)
 	}
+	// The rules reuse the quantities when they were computed with the
+	// yields the rules would use.
+	var q *quantity.Report
+	if prof := s.Profile; (prof == nil && s.Yields == nil) || (prof != nil && prof.Yields == s.Yields) {
+		q = w.Quantities
+	}
+	w.Findings = rules.RunWithQuantities(w.Well, rs, s.Profile, q)
 	if w.Findings == nil {
 		w.Findings = []rules.Finding{}
 	}

@@ -52,14 +52,19 @@ func (l *layout) page(i int) *draw.Page {
 	pg.Add(l.amountItems()...)
 	more := ""
 	nn, _ := l.number(len(l.sheets) + l.firstNotesPage())
+	where := fmt.Sprintf("on sheet %d", nn)
+	if l.stripBoxes != nil {
+		where = "below"
+	}
 	switch {
 	case len(l.bandPlan.overflow) > 0:
-		more = fmt.Sprintf("Notes and findings continue on sheet %d.", nn)
+		more = fmt.Sprintf("Notes and findings continue %s.", where)
 	case len(l.calloutOverflow) > 0:
-		more = fmt.Sprintf("Notes continue on sheet %d.", nn)
+		more = fmt.Sprintf("Notes continue %s.", where)
 	}
 	notes := append(append([]noteBlock(nil), l.bandPlan.notes...), l.sheetNotes[i]...)
 	pg.Add(l.noteItems(notes, l.bandPlan.noteR, more)...)
+	pg.Add(l.boxItems(l.stripBoxes)...)
 	pg.Add(l.cautionItems()...)
 	return pg
 }

@@ -2,6 +2,7 @@ package sheet
 
 import (
 	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
 )
 
 // boreholePart is one drilled interval: white ground, so fills and pipes
@@ -11,6 +12,10 @@ type boreholePart struct{ i int }
 func (boreholePart) stack() stack { return on(layerHole) }
 
 func (boreholePart) legend(*layout, window) []symbol { return nil }
+
+func (bp boreholePart) extent(l *layout) (schema.Interval, bool) {
+	return l.w.Boreholes[bp.i].Interval, true
+}
 
 func (bp boreholePart) paint(p *painter) []draw.Item {
 	b := p.l.w.Boreholes[bp.i]

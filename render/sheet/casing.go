@@ -16,6 +16,10 @@ type casingPart struct {
 
 func (cp casingPart) stack() stack { return stack{layer: layerCasing, sub: 3 * cp.rank} }
 
+func (cp casingPart) extent(l *layout) (schema.Interval, bool) {
+	return l.w.Casings[cp.ci].Interval, true
+}
+
 func (cp casingPart) legend(l *layout, v window) []symbol {
 	if c := l.w.Casings[cp.ci]; v.shows(c.Top, c.Bottom) {
 		return pipeSymbols(nil)

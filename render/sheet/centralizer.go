@@ -28,6 +28,22 @@ func (cp centralizerPart) stack() stack {
 	return on(layerString)
 }
 
+// depths are where the centralizers stand.
+func (cp centralizerPart) depths(l *layout) []schema.Length {
+	if cp.ci >= 0 {
+		return l.w.Casings[cp.ci].Centralizers
+	}
+	return l.w.Strings[cp.si].Centralizers
+}
+
+func (cp centralizerPart) extent(l *layout) (schema.Interval, bool) {
+	var ivs []schema.Interval
+	for _, z := range cp.depths(l) {
+		ivs = append(ivs, at(z))
+	}
+	return hull(ivs...)
+}
+
 // pipe is where the centralizers stand: their role, the pipe's axis and
 // outside diameter, their depths, and the title's suffix naming a string.
 func (cp centralizerPart) pipe(l *layout) (role string, x float64, d schema.Diameter, at []schema.Length, of string) {
@@ -40,8 +56,7 @@ func (cp centralizerPart) pipe(l *layout) (role string, x float64, d schema.Diam
 }
 
 func (cp centralizerPart) legend(l *layout, v window) []symbol {
-	_, _, _, at, _ := cp.pipe(l)
-	for _, z := range at {
+	for _, z := range cp.depths(l) {
 		if v.showsAt(z) {
 			return []symbol{partSymbol(symbols.Centralizer)}
 		}

@@ -74,6 +74,17 @@ func (featuresPart) stack() stack { return on(layerFeatures) }
 
 func (featuresPart) callouts(*layout) []callout { return nil }
 
+func (featuresPart) extent(l *layout) (schema.Interval, bool) {
+	var ivs []schema.Interval
+	for _, f := range l.w.Features {
+		ivs = append(ivs, at(f.Depth))
+	}
+	for _, wi := range l.w.WallImages {
+		ivs = append(ivs, wi.Interval)
+	}
+	return hull(ivs...)
+}
+
 func (featuresPart) legend(l *layout, v window) []symbol {
 	if l.cols.feat.W == 0 {
 		return nil

@@ -23,6 +23,8 @@ func (fp fillPart) stack() stack {
 	return on(layerFill)
 }
 
+func (fp fillPart) extent(l *layout) (schema.Interval, bool) { return l.w.Fills[fp.fi].Interval, true }
+
 type fillPiece struct {
 	iv schema.Interval
 	d  schema.Diameter

@@ -1,6 +1,9 @@
 package sheet
 
-import "github.com/tremie-dev/tremie/render/draw"
+import (
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
+)
 
 // groundPart is the ground line across the well column, broken where the
 // hole, pad or vault meets it, with short hatching below.
@@ -11,6 +14,8 @@ func (groundPart) stack() stack { return on(layerWalls) }
 func (groundPart) callouts(*layout) []callout { return nil }
 
 func (groundPart) legend(*layout, window) []symbol { return nil }
+
+func (groundPart) extent(*layout) (schema.Interval, bool) { return at(0), true }
 
 func (groundPart) paint(p *painter) []draw.Item {
 	if !p.visible(0) {

@@ -39,6 +39,8 @@ func newLapPart(l *layout, si int, rank []int) (lapPart, bool) {
 
 func (lapPart) stack() stack { return on(layerMark) }
 
+func (lp lapPart) extent(*layout) (schema.Interval, bool) { return lp.lap, true }
+
 func (lp lapPart) hangerSymbol() symbol {
 	if lp.liner.Hanger == schema.Packer {
 		return partSymbol(symbols.Packer)

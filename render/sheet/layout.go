@@ -20,6 +20,11 @@ type layout struct {
 	opt Options
 	pg  Page
 	u   schema.Units
+	// strip is the height kept under the band for notes that would
+	// otherwise go on a notes sheet (see fitstrip.go); the boxes flowed
+	// into it are stripBoxes.
+	strip      float64
+	stripBoxes []sheetBox
 
 	secs *schema.Sections // what stands in the hole at each depth
 
@@ -84,6 +89,15 @@ func newLayout(w *schema.Well, in Inputs, opt Options, pg Page) *layout {
 
 // plan fixes everything but the drawing of each sheet.
 func (l *layout) plan() error {
+	if err := l.planOnce(); err != nil {
+		return err
+	}
+	l.notesOnTheSheet()
+	return nil
+}
+
+// planOnce plans the sheets with the strip as set.
+func (l *layout) planOnce() error {
 	l.top, l.bot = l.depthRange()
 	if !(l.bot > l.top) || math.IsInf(float64(l.bot-l.top), 0) || math.IsNaN(float64(l.bot-l.top)) {
 		return fmt.Errorf("nothing to draw: total depth %s", l.u.FormatDepth(l.w.TotalDepth))
@@ -110,11 +124,11 @@ func (l *layout) plan() error {
 	l.bandPlan = l.planBand(l.legendAll)
 	l.body = draw.Rect{X: l.content.X, Y: l.header.Bottom() + 6, W: bodyW}
 	if l.pg.LegendRight > 0 {
-		l.band = draw.Rect{X: l.content.Right() - l.pg.LegendRight, Y: l.body.Y, W: l.pg.LegendRight, H: l.caution.Y - 4 - l.body.Y}
+		l.band = draw.Rect{X: l.content.Right() - l.pg.LegendRight, Y: l.body.Y, W: l.pg.LegendRight, H: l.bandFoot() - l.body.Y}
 		l.body.H = l.band.H
 	} else {
 		bh := l.bandPlan.height
-		l.band = draw.Rect{X: l.content.X, Y: l.caution.Y - 4 - bh, W: l.content.W, H: bh}
+		l.band = draw.Rect{X: l.content.X, Y: l.bandFoot() - bh, W: l.content.W, H: bh}
 		l.body.H = l.band.Y - 6 - l.body.Y
 	}
 	l.placeBand()
@@ -169,7 +183,7 @@ func (l *layout) plan() error {
 	}
 	l.planCallouts()
 	l.planNotesSheets()
-	return nil
+	return l.flowIntoStrip()
 }
 
 // moreDetailed is the least detailed of the scales that is more detailed
@@ -178,6 +192,18 @@ func moreDetailed(cs []Scale, s Scale) (Scale, bool) {
 	best, ok := Scale{}, false
 	for _, c := range cs {
 		if c.Ratio < s.Ratio && (!ok || c.Ratio > best.Ratio) {
+			best, ok = c, true
+		}
+	}
+	return best, ok
+}
+
+// lessDetailed is the most detailed of the scales that is less detailed
+// than s.
+func lessDetailed(cs []Scale, s Scale) (Scale, bool) {
+	best, ok := Scale{}, false
+	for _, c := range cs {
+		if c.Ratio > s.Ratio && (!ok || c.Ratio < best.Ratio) {
 			best, ok = c, true
 		}
 	}
@@ -225,32 +251,6 @@ func (l *layout) paginateAt(s Scale, usable float64) error {
 	l.scaleFields()
 	l.sheets = l.sheetsAt(s, usable)
 	return nil
-}
-
-// depthRange is the depth range the sheets must show: from the highest
-// thing above ground (or the ground) to the deepest thing drawn.
-func (l *layout) depthRange() (top, bot schema.Length) {
-	w := l.w
-	bot = w.TotalDepth
-	consider := func(iv schema.Interval) {
-		top = min(top, iv.Top)
-		bot = max(bot, iv.Bottom)
-	}
-	w.EachConstructionInterval(consider)
-	for _, ly := range w.Lithology {
-		consider(ly.Interval)
-	}
-	if p := w.Surface.Protective; p != nil {
-		consider(p.Interval)
-	}
-	if p := w.Surface.Pad; p != nil && w.Surface.Kind != schema.FlushMount {
-		top = min(top, -p.Thickness)
-	}
-	for _, wl := range w.WaterLevels {
-		bot = max(bot, wl.Depth)
-		top = min(top, wl.Depth)
-	}
-	return top, bot
 }
 
 // layColumns divides the body width by the page's column fractions.

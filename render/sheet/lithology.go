@@ -17,6 +17,14 @@ func (lithologyPart) stack() stack { return on(layerLog) }
 
 func (lithologyPart) callouts(*layout) []callout { return nil }
 
+func (lithologyPart) extent(l *layout) (schema.Interval, bool) {
+	var ivs []schema.Interval
+	for _, ly := range l.w.Lithology {
+		ivs = append(ivs, ly.Interval)
+	}
+	return hull(ivs...)
+}
+
 func (lithologyPart) legend(l *layout, v window) []symbol {
 	var out []symbol
 	for _, ly := range l.w.Lithology {

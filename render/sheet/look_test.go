@@ -6,6 +6,7 @@ import (
 	"path/filepath"
 	"testing"
 
+	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/render/out"
 )
 
@@ -24,14 +25,29 @@ func TestLook(t *testing.T) {
 			w = deepWell()
 		}
 		doc := layoutOf(t, w, Inputs{}, opt)
-		for i := range doc.Pages {
-			b, err := out.PNG(doc, i, 100)
-			if err != nil {
-				t.Fatal(err)
-			}
-			if err := os.WriteFile(filepath.Join(dir, fmt.Sprintf("%s-%d.png", name, i+1)), b, 0o644); err != nil {
-				t.Fatal(err)
-			}
+		write(t, dir, name, doc)
+	}
+	// notes kept on the drawing in a strip (fitstrip_test.go)
+	fit := Fitted
+	for name, c := range map[string]struct {
+		td  float64
+		k   int
+		opt Options
+	}{"noted": {70, 12, Options{}}, "noted-fit": {30, 14, Options{Scale: &fit}}} {
+		w, in := notedWell(c.td, c.k)
+		write(t, dir, name, layoutOf(t, w, in, c.opt))
+	}
+}
+
+// write keeps every page of doc as name-N.png in dir.
+func write(t *testing.T, dir, name string, doc *draw.Document) {
+	for i := range doc.Pages {
+		b, err := out.PNG(doc, i, 100)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if err := os.WriteFile(filepath.Join(dir, fmt.Sprintf("%s-%d.png", name, i+1)), b, 0o644); err != nil {
+			t.Fatal(err)
 		}
 	}
 }

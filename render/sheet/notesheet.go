@@ -41,22 +41,27 @@ func (l *layout) planNotesSheets() {
 	if len(rows) == 0 && len(notes) == 0 {
 		return
 	}
-	area := l.notesArea()
+	l.notesPages = l.flowNotes(l.notesArea(), rows, notes)
+}
+
+// flowNotes flows amounts rows and notes down columns of area, onto as
+// many pages of that area as they need.
+func (l *layout) flowNotes(area draw.Rect, rows [][]string, notes []noteBlock) [][]sheetBox {
 	colW := max(l.bandPlan.noteW, l.bandPlan.amountW)
 	colW = min(colW, area.W)
 	perPage := max(1, int((area.W+sheetColGap)/(colW+sheetColGap)+1e-9))
 	page, col, y := 0, 0, area.Y
-	l.notesPages = [][]sheetBox{nil}
+	pages := [][]sheetBox{nil}
 	nextCol := func() {
 		col++
 		if col == perPage {
 			col, page = 0, page+1
-			l.notesPages = append(l.notesPages, nil)
+			pages = append(pages, nil)
 		}
 		y = area.Y
 	}
 	add := func(b sheetBox) {
-		l.notesPages[page] = append(l.notesPages[page], b)
+		pages[page] = append(pages[page], b)
 		y = b.r.Bottom() + sheetColGap
 	}
 	x := func() float64 { return area.X + float64(col)*(colW+sheetColGap) }
@@ -104,11 +109,11 @@ func (l *layout) planNotesSheets() {
 		notes = notes[k:]
 		nextCol()
 	}
-	if len(l.notesPages[len(l.notesPages)-1]) == 0 {
-		l.notesPages = l.notesPages[:len(l.notesPages)-1]
+	if len(pages[len(pages)-1]) == 0 {
+		pages = pages[:len(pages)-1]
 	}
 	// A box whose run goes on in a later sheet's box says which.
-	for p, boxes := range l.notesPages {
+	for p, boxes := range pages {
 		for i := range boxes {
 			if boxes[i].last {
 				continue
@@ -118,12 +123,20 @@ func (l *layout) planNotesSheets() {
 			}
 		}
 	}
+	return pages
 }
 
 // notesSheet draws notes sheet k (0-based) as page n of m.
 func (l *layout) notesSheet(pg *draw.Page, k, n, m int) {
 	pg.Add(l.headerItems(n, m, "Notes and check findings, continued")...)
-	for _, b := range l.notesPages[k] {
+	pg.Add(l.boxItems(l.notesPages[k])...)
+	pg.Add(l.cautionItems()...)
+}
+
+// boxItems draws the boxes of a notes sheet or of a drawing's strip.
+func (l *layout) boxItems(boxes []sheetBox) []draw.Item {
+	var items []draw.Item
+	for _, b := range boxes {
 		more := ""
 		if b.cont >= 0 {
 			next, _ := l.number(len(l.sheets) + b.cont)
@@ -132,12 +145,12 @@ func (l *layout) notesSheet(pg *draw.Page, k, n, m int) {
 			more = "Continued in the next column."
 		}
 		if b.amounts != nil {
-			pg.Add(l.amountBox(b.r, "AMOUNTS, CONTINUED", b.amounts, b.foot, more)...)
+			items = append(items, l.amountBox(b.r, "AMOUNTS, CONTINUED", b.amounts, b.foot, more)...)
 			continue
 		}
-		pg.Add(l.noteItems(b.notes, b.r, more)...)
+		items = append(items, l.noteItems(b.notes, b.r, more)...)
 	}
-	pg.Add(l.cautionItems()...)
+	return items
 }
 
 // firstNotesPage is the index of the first notes sheet holding notes (not

@@ -1,6 +1,9 @@
 package sheet
 
-import "github.com/tremie-dev/tremie/render/draw"
+import (
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
+)
 
 // openHolePart is an uncased interval: paper inside, and its label; the
 // walls part draws its rough walls.
@@ -9,6 +12,10 @@ type openHolePart struct{ i int }
 func (openHolePart) stack() stack { return on(layerOpenHole) }
 
 func (openHolePart) legend(*layout, window) []symbol { return nil }
+
+func (op openHolePart) extent(l *layout) (schema.Interval, bool) {
+	return l.w.OpenHoles[op.i].Interval, true
+}
 
 func (op openHolePart) paint(p *painter) []draw.Item {
 	o := p.l.w.OpenHoles[op.i]

@@ -14,6 +14,8 @@ type padPart struct{}
 
 func (padPart) stack() stack { return on(layerPad) }
 
+func (padPart) extent(l *layout) (schema.Interval, bool) { return padInterval(l.w.Surface) }
+
 // padInterval is where the concrete pad stands, as the quantities count it.
 func padInterval(s schema.Surface) (schema.Interval, bool) { return quantity.PadInterval(s) }
 

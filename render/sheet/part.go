@@ -11,10 +11,11 @@ import (
 // part is one piece of the well as the sheet shows it: a borehole, a
 // fill, a casing, a string, the lithology log... It paints itself on one
 // sheet (clipping with the painter's vis/visible), labels itself with
-// callouts, and names the legend symbols it paints on a sheet showing a
-// window of depths, so the legend is known without painting.
+// callouts, names the legend symbols it paints on a sheet showing a
+// window of depths, so the legend is known without painting, and reports
+// the depths it spans, which the sheets must show.
 //
-// To add one: a type in its own file with these four methods, listed by
+// To add one: a type in its own file with these five methods, listed by
 // layout.assemble at its place in the reading order, in the layer it is
 // painted in. The legend must name exactly what paint paints:
 // TestLegendIsWhatIsPainted compares the two on the demo and the gallery.
@@ -25,6 +26,36 @@ type part interface {
 	paint(p *painter) []draw.Item
 	callouts(l *layout) []callout
 	legend(l *layout, v window) []symbol
+	// extent is the depths the part spans; false for none of its own.
+	extent(l *layout) (schema.Interval, bool)
+}
+
+// hull is the smallest interval holding every one of ivs.
+func hull(ivs ...schema.Interval) (schema.Interval, bool) {
+	if len(ivs) == 0 {
+		return schema.Interval{}, false
+	}
+	h := ivs[0]
+	for _, iv := range ivs[1:] {
+		h.Top, h.Bottom = min(h.Top, iv.Top), max(h.Bottom, iv.Bottom)
+	}
+	return h, true
+}
+
+// at is the interval of a point.
+func at(d schema.Length) schema.Interval { return schema.Interval{Top: d, Bottom: d} }
+
+// depthRange is the depth range the sheets must show: from the highest
+// part above ground (or the ground) to the total depth or the deepest
+// part.
+func (l *layout) depthRange() (top, bot schema.Length) {
+	bot = l.w.TotalDepth
+	for _, pt := range l.parts {
+		if iv, ok := pt.extent(l); ok {
+			top, bot = min(top, iv.Top), max(bot, iv.Bottom)
+		}
+	}
+	return top, bot
 }
 
 // layer is a stage of the drawing, bottom first.

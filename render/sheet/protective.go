@@ -11,6 +11,10 @@ type protectivePart struct{}
 
 func (protectivePart) stack() stack { return on(layerSurface) }
 
+func (protectivePart) extent(l *layout) (schema.Interval, bool) {
+	return l.w.Surface.Protective.Interval, true
+}
+
 func (protectivePart) legend(l *layout, v window) []symbol {
 	pc := l.w.Surface.Protective
 	if !v.shows(pc.Top, pc.Bottom) {

@@ -11,6 +11,8 @@ type pumpPart struct{}
 
 func (pumpPart) stack() stack { return on(layerMark) }
 
+func (pumpPart) extent(l *layout) (schema.Interval, bool) { return at(l.w.Pump.Intake), true }
+
 func (pumpPart) legend(l *layout, v window) []symbol {
 	if !v.showsAt(l.w.Pump.Intake) {
 		return nil

@@ -12,6 +12,10 @@ type shoePart struct{ ci int }
 
 func (shoePart) stack() stack { return on(layerMark) }
 
+func (s shoePart) extent(l *layout) (schema.Interval, bool) {
+	return at(l.w.Casings[s.ci].Bottom), true
+}
+
 func (s shoePart) legend(l *layout, v window) []symbol {
 	if !v.showsAt(l.w.Casings[s.ci].Bottom) {
 		return nil

@@ -15,6 +15,14 @@ type tagPart struct{ fi int }
 
 func (tagPart) stack() stack { return on(layerMark) }
 
+func (t tagPart) extent(l *layout) (schema.Interval, bool) {
+	var ivs []schema.Interval
+	for _, tg := range l.w.Fills[t.fi].Tags {
+		ivs = append(ivs, at(tg.Depth))
+	}
+	return hull(ivs...)
+}
+
 func (t tagPart) legend(l *layout, v window) []symbol {
 	for _, tg := range l.w.Fills[t.fi].Tags {
 		if v.showsAt(tg.Depth) {

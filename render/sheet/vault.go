@@ -14,6 +14,10 @@ type vaultPart struct{}
 
 func (vaultPart) stack() stack { return on(layerSurface) }
 
+func (vaultPart) extent(l *layout) (schema.Interval, bool) {
+	return schema.Interval{Top: 0, Bottom: l.w.Surface.Vault.Depth}, true
+}
+
 func (vaultPart) legend(l *layout, v window) []symbol {
 	if !v.shows(0, max(l.w.Surface.Vault.Depth, 0.01)) {
 		return nil

@@ -17,6 +17,9 @@ func (wallsPart) stack() stack { return on(layerWalls) }
 
 func (wallsPart) callouts(*layout) []callout { return nil }
 
+// The walls stand where the boreholes do.
+func (wallsPart) extent(*layout) (schema.Interval, bool) { return schema.Interval{}, false }
+
 func (wallsPart) legend(l *layout, v window) []symbol {
 	for _, b := range l.w.Boreholes {
 		for _, seg := range l.wallSegments(b.Interval) {

@@ -16,6 +16,10 @@ type waterPart struct{ i int }
 
 func (waterPart) stack() stack { return on(layerWater) }
 
+func (wp waterPart) extent(l *layout) (schema.Interval, bool) {
+	return at(l.w.WaterLevels[wp.i].Depth), true
+}
+
 func (wp waterPart) symbol(l *layout) symbol {
 	if l.w.WaterLevels[wp.i].Kind == schema.FirstEncountered {
 		return partSymbol(symbols.FirstWater)

@@ -20,6 +20,14 @@ type stringPart struct {
 
 func (stringPart) stack() stack { return on(layerString) }
 
+func (sp stringPart) extent(l *layout) (schema.Interval, bool) {
+	var ivs []schema.Interval
+	for _, sec := range l.w.Strings[sp.si].Sections {
+		ivs = append(ivs, sec.Interval)
+	}
+	return hull(ivs...)
+}
+
 func (sp stringPart) legend(l *layout, v window) []symbol {
 	s := l.w.Strings[sp.si]
 	var out []symbol

@@ -6,6 +6,7 @@ import (
 	"slices"
 
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
 )
 
 // Run is the one driver: it runs the given rules on a well under a profile
@@ -15,11 +16,19 @@ import (
 // quantities) through one shared value. A panic in one rule becomes an
 // error finding for it, so that no input stops the check.
 func Run(w *schema.Well, rs []*Rule, prof *Profile) []Finding {
+	return RunWithQuantities(w, rs, prof, nil)
+}
+
+// RunWithQuantities is Run for a caller that has already computed the
+// well's quantities under the profile's yields (prof.Yields, nil for the
+// built-in ones): the rules read q instead of computing it again. q must
+// not change while they run; nil computes it as Run does.
+func RunWithQuantities(w *schema.Well, rs []*Rule, prof *Profile, q *quantity.Report) []Finding {
 	if prof == nil {
 		prof = DefaultProfile()
 	}
 	var out []Finding
-	sh := &shared{yields: prof.Yields}
+	sh := &shared{yields: prof.Yields, report: q}
 	for _, r := range rs {
 		runOne(r, w, prof, sh, &out)
 	}

@@ -136,14 +136,13 @@ func register(r *Rule) *Rule {
 	return r
 }
 
-// All returns every rule sorted by ID.
+// All returns every rule sorted by ID, in a slice of the caller's own.
 func All() []*Rule {
-	out := append([]*Rule(nil), registry...)
-	sort.Slice(out, func(i, j int) bool { return out[i].ID < out[j].ID })
-	return out
+	return append([]*Rule(nil), sortedRules()...)
 }
 
-// sorted is All(), kept for Check; rules register only from init.
+// sorted is every rule sorted by ID, kept for Check; rules register only
+// from init.
 var sorted struct {
 	once  sync.Once
 	rules []*Rule
@@ -151,7 +150,10 @@ var sorted struct {
 
 // sortedRules returns every rule sorted by ID, sorted once.
 func sortedRules() []*Rule {
-	sorted.once.Do(func() { sorted.rules = All() })
+	sorted.once.Do(func() {
+		sorted.rules = append([]*Rule(nil), registry...)
+		sort.Slice(sorted.rules, func(i, j int) bool { return sorted.rules[i].ID < sorted.rules[j].ID })
+	})
 	return sorted.rules
 }
 

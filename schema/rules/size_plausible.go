@@ -56,14 +56,19 @@ func runSizePlausible(p *Pass) {
 	w := p.Well
 	maxHole := schema.Diameter(p.Param("max_hole"))
 	for _, b := range w.Boreholes {
-		p.checkSize(key(b.Path, "diameter"), "hole", b.Interval, b.Diameter, maxHole)
+		p.checkSize(func() string { return key(b.Path, "diameter") }, "hole", b.Interval, b.Diameter, maxHole)
 	}
 	for _, q := range w.HolePipes() {
-		k := key(q.Path, "od")
-		if !w.HasKey(k) {
-			k = key(q.Path, "size")
+		// The line to name is the od key if written, else the size's;
+		// asking the file is work (every key's line is found), so only
+		// for a finding.
+		given := func() string {
+			if k := key(q.Path, "od"); w.HasKey(k) {
+				return k
+			}
+			return key(q.Path, "size")
 		}
-		p.checkSize(k, q.Label()+" OD", q.Interval, q.OD, maxHole)
+		p.checkSize(given, q.Label()+" OD", q.Interval, q.OD, maxHole)
 	}
 	for _, sc := range w.Screens() {
 		sec := sc.Section
@@ -74,8 +79,9 @@ func runSizePlausible(p *Pass) {
 	p.checkHoleRatio(maxHole)
 }
 
-// checkSize flags a diameter beyond any hole or below any pipe.
-func (p *Pass) checkSize(path, what string, iv schema.Interval, d, maxHole schema.Diameter) {
+// checkSize flags a diameter beyond any hole or below any pipe; path
+// gives the key path of a finding.
+func (p *Pass) checkSize(path func() string, what string, iv schema.Interval, d, maxHole schema.Diameter) {
 	if d <= 0 {
 		return
 	}
@@ -83,10 +89,10 @@ func (p *Pass) checkSize(path, what string, iv schema.Interval, d, maxHole schem
 	written := d.In(u)
 	switch {
 	case d > maxHole:
-		p.Reportf(path, depths(iv), "the %s of %s at %s is larger than any drilled well (%s): %s",
+		p.Reportf(path(), depths(iv), "the %s of %s at %s is larger than any drilled well (%s): %s",
 			what, p.Dia(d), p.span(iv), p.Dia(maxHole), slipLarge(written, u))
 	case d < schema.DiameterFrom(smallestPipeIn, schema.Inches):
-		p.Reportf(path, depths(iv), "the %s of %s at %s is below the smallest pipe made (NPS 1/8, OD 0.405 in = 10.3 mm): %s",
+		p.Reportf(path(), depths(iv), "the %s of %s at %s is below the smallest pipe made (NPS 1/8, OD 0.405 in = 10.3 mm): %s",
 			what, p.Dia(d), p.span(iv), slipSmall(written, u))
 	}
 }
@@ -109,10 +115,6 @@ func slipSmall(v float64, u schema.DiameterUnit) string {
 
 // checkSlot flags a slot no screen is made with.
 func (p *Pass) checkSlot(sec *schema.Section, stringName string) {
-	path := key(sec.Path, "slot")
-	if !p.Well.HasKey(path) {
-		path = key(sec.Path, "slot_number")
-	}
 	inches := sec.Slot.Inches()
 	var why string
 	switch {
@@ -128,6 +130,10 @@ func (p *Pass) checkSlot(sec *schema.Section, stringName string) {
 		why = "a digit lost?"
 	default:
 		return
+	}
+	path := key(sec.Path, "slot")
+	if !p.Well.HasKey(path) {
+		path = key(sec.Path, "slot_number")
 	}
 	p.Reportf(path, depths(sec.Interval), "the slot of %s (%s in) of the screen of string %q at %s is outside the slots screens are made with (0.002 to 0.5 in): %s",
 		p.Dia(sec.Slot), schema.TrimFloat(inches, 4), stringName, p.span(sec.Interval), why)

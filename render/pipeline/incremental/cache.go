@@ -167,19 +167,18 @@ func (c *Cache) RecordFrom(key, source, hash string, outputs []string) {
 	c.dirty = true
 }
 
-// Forget drops a well's record, so that it is drawn next time; call it
-// when drawing a well failed. Its outputs stay recorded as orphans only
-// if they exist.
+// Forget marks a well's record out of date, so that it is drawn next
+// time; call it when a well could not be drawn (unreadable, not judged,
+// refused, failed). Its outputs stay its own: while its well file is
+// there its old sheets are not stale (Stale), only once the file is gone.
 func (c *Cache) Forget(key string) {
 	c.mu.Lock()
 	defer c.mu.Unlock()
-	if e, ok := c.entries[key]; ok {
-		for _, o := range e.Outputs {
-			c.orphans[o] = true
-		}
-		delete(c.entries, key)
+	if e, ok := c.entries[key]; ok && e.Hash != "" {
+		e.Hash = "" // matches no well's hash
+		c.entries[key] = e
 		c.dirty = true
-		c.appendJournal(journalLine{Key: key, Forget: true})
+		c.appendJournal(journalLine{Key: key, Entry: &e})
 	}
 }
 

@@ -1,0 +1,38 @@
+package out
+
+import (
+	"bytes"
+	"image"
+	"testing"
+
+	"github.com/tremie-dev/tremie/render/draw"
+)
+
+// opaqueImage hides an *image.RGBA behind the image.Image interface, so
+// cropImage takes its general path (At and Set, the standard library's
+// colour model) for the same pixels.
+type opaqueImage struct{ image.Image }
+
+// TestCropImageDirectCopy: cropping an RGBA wall-image strip by copying
+// its bytes gives exactly what cropping it colour by colour gives, for a
+// coarse image that is enlarged and for a fine one that is not.
+func TestCropImageDirectCopy(t *testing.T) {
+	src := image.NewRGBA(image.Rect(0, 0, 37, 23))
+	for i := range src.Pix {
+		src.Pix[i] = uint8(i * 31)
+	}
+	cases := []struct{ r, v draw.Rect }{
+		{draw.Rect{X: 10, Y: 20, W: 74, H: 46}, draw.Rect{X: 13.3, Y: 21.7, W: 50.2, H: 30.05}}, // 0.5 px/pt: enlarged
+		{draw.Rect{X: 0, Y: 0, W: 3.7, H: 2.3}, draw.Rect{X: 0.5, Y: 0, W: 2, H: 2.3}},          // 10 px/pt
+	}
+	for i, c := range cases {
+		fast, fr := cropImage(src, c.r, c.v)
+		slow, sr := cropImage(opaqueImage{src}, c.r, c.v)
+		if fr != sr || fast.Bounds() != slow.Bounds() {
+			t.Fatalf("case %d: placed %v %v, want %v %v", i, fr, fast.Bounds(), sr, slow.Bounds())
+		}
+		if !bytes.Equal(fast.(*image.RGBA).Pix, slow.(*image.RGBA).Pix) {
+			t.Errorf("case %d: the direct copy differs from the general path", i)
+		}
+	}
+}

@@ -1,0 +1,110 @@
+package sheet
+
+import (
+	"fmt"
+	"strings"
+	"testing"
+
+	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
+)
+
+// notedWell is a well of depth td ft with k field notes, each three
+// lines long: with a dozen, the band's notes box overflows.
+func notedWell(td float64, k int) (*schema.Well, Inputs) {
+	w := simpleWell(td)
+	for i := 0; i < k; i++ {
+		w.Notes = append(w.Notes, fmt.Sprintf("Note %d: a remark from the field long enough to wrap onto a second and a third line of the notes box.", i+1))
+	}
+	return w, Inputs{Findings: rules.Check(w, nil), Quantities: quantity.Compute(w, nil)}
+}
+
+// Notes that overflow the band of a one-sheet drawing go in a strip on
+// the drawing, not on a notes sheet of their own, when the drawing keeps
+// its scale (a 70-ft well drawn at 1 in = 20 ft fills 71 % of its body,
+// room for the strip), or with --scale fit at a less detailed scale (a
+// 30-ft well); every note is on the sheet, and every text in its region.
+func TestNotesStayOnTheSheet(t *testing.T) {
+	fit := Fitted
+	for _, c := range []struct {
+		td    float64
+		k     int
+		scale *Scale
+	}{{70, 12, nil}, {30, 14, &fit}} {
+		w, in := notedWell(c.td, c.k)
+		opt := Options{Page: Letter, Scale: c.scale}
+		alone := newLayout(w, in, opt, Letter)
+		if err := alone.planOnce(); err != nil {
+			t.Fatal(err)
+		}
+		if len(alone.notesPages) == 0 {
+			t.Fatalf("%d notes: the band holds them all; the test needs an overflow", c.k)
+		}
+		l := newLayout(w, in, opt, Letter)
+		if err := l.plan(); err != nil {
+			t.Fatal(err)
+		}
+		doc := layoutOf(t, w, in, opt)
+		if len(doc.Pages) != 1 {
+			t.Errorf("%d notes: %d pages, want the drawing alone", c.k, len(doc.Pages))
+			continue
+		}
+		if c.scale == nil && l.scale != alone.scale {
+			t.Errorf("%d notes: the scale moved from %v to %v", c.k, alone.scale, l.scale)
+		}
+		all := strings.Join(texts(doc.Pages[0], ""), " ")
+		for i := 1; i <= c.k; i++ {
+			if !strings.Contains(all, fmt.Sprintf("Note %d:", i)) {
+				t.Errorf("%d notes: note %d is not on the sheet", c.k, i)
+			}
+		}
+		if !strings.Contains(all, "continue below") {
+			t.Errorf("%d notes: the band does not say where its notes continue", c.k)
+		}
+		doc.Pages[0].Walk(func(it draw.Item) {
+			if tx, ok := it.(draw.Text); ok {
+				if r, known := l.textRegion(tx.Role); known && !within(textRect(tx), r) {
+					t.Errorf("%d notes: %s %q outside %+v", c.k, tx.Role, tx.S, r)
+				}
+			}
+		})
+		t.Logf("%d notes: one sheet at %v, strip %.0f pt", c.k, l.scale, l.strip)
+	}
+}
+
+// The 1,200-ft well's 150 descriptions cannot join its --scale fit
+// drawing on a Letter or Tabloid sheet: at 1 in = 300 ft (150 ft on
+// Tabloid) a layer is 2-4 pt high, so each description stands beside it
+// as a mark and goes whole to the notes, several hundred lines at the
+// sheets' 6.5-pt text, more than a page can hold beside the drawing
+// (the strip is tried and refused; the numbers are logged).
+func TestDeepWellFitKeepsItsNotesSheets(t *testing.T) {
+	var deep *corpusWell
+	for _, c := range galleryWells(t) {
+		if c.name == "DS-1200.toml" {
+			deep = &c
+		}
+	}
+	fit := Fitted
+	for _, pg := range []Page{Letter, Tabloid} {
+		opt := Options{Page: pg, Scale: &fit}
+		l := newLayout(deep.w, deep.in, opt, pg)
+		if err := l.plan(); err != nil {
+			t.Fatal(err)
+		}
+		if len(l.sheets) != 1 || len(l.notesPages) == 0 {
+			t.Errorf("%s: %d drawing and %d notes sheets", pg.Name, len(l.sheets), len(l.notesPages))
+		}
+		column := 0.0
+		for _, boxes := range l.notesPages {
+			for _, b := range boxes {
+				column += b.r.H
+			}
+		}
+		colW := max(l.bandPlan.noteW, l.bandPlan.amountW)
+		perRow := int((l.content.W + sheetColGap) / (colW + sheetColGap))
+		t.Logf("%s at %v: %d notes sheets, %.0f pt of %0.f-pt columns, %d abreast: a strip %.0f pt high beside a page of %.0f pt", pg.Name, l.scale, len(l.notesPages), column, colW, perRow, column/float64(perRow), l.content.H)
+	}
+}
