@@ -54,5 +54,8 @@ func newKindsAbout() string {
 	for _, k := range starter.Kinds {
 		fmt.Fprintf(&b, "\n  %-11s %s", k, starter.KindDoc(k))
 	}
+	b.WriteString("\nEach starter ends with the optional tables its kind may record, commented out: formation\n" +
+		"sieve analyses ([[sample]]), a pumping test ([pumping_test]) for supply and rock wells, and the\n" +
+		"wall's features ([orientation], [[feature]]) for a rock well.")
 	return b.String()
 }

@@ -91,6 +91,7 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 	}
 	var wells []wellQuantities
 	var reports []*quantity.Report
+	var held []string
 	for _, w := range run.PrepareAll(pipeline.ReconcileRules, "quantifying") {
 		if w.Err != nil {
 			printErr(stderr, "quantities", w.Err)
@@ -109,9 +110,14 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 			}
 		}
 		wells = append(wells, wq)
+		if slip := unitSlip(w.Findings); slip {
+			held = append(held, w.Well.ID)
+			continue // a likely unit slip orders hundreds of bags: left out of the totals
+		}
 		reports = append(reports, w.Quantities)
 	}
 	order := quantity.Totals(reports, *contingency)
+	order.Held = held
 	profiles, caution := run.ProfileLabels(), quantitiesCaution(run)
 	var werr error
 	switch *format {
@@ -360,6 +366,11 @@ func yieldNotes(r *quantity.Report) []string {
 
 func writeOrderText(w io.Writer, o *quantity.Order) {
 	c := schema.TrimFloat(o.Contingency, 2)
+	if len(o.For) == 0 && len(o.Held) > 0 {
+		fmt.Fprintf(w, "No order: every well is left out (below)\n")
+		fmt.Fprintf(w, "\nLeft out of both lists: %s, whose sizes are likely a unit slip (rule SIZE-PLAUSIBLE); correct them first\n", strings.Join(o.Held, ", "))
+		return
+	}
 	if o.Planned {
 		fmt.Fprintf(w, "Order for the planned wells %s\n", strings.Join(o.For, ", "))
 	} else {
@@ -371,6 +382,20 @@ func writeOrderText(w io.Writer, o *quantity.Order) {
 		fmt.Fprintf(w, "\nAs built, to reconcile: %s\n", strings.Join(o.AsBuilt, ", "))
 		writeLinesText(w, o.AsBuiltLines, false)
 	}
+	if len(o.Held) > 0 {
+		fmt.Fprintf(w, "\nLeft out of both lists: %s, whose sizes are likely a unit slip (rule SIZE-PLAUSIBLE); correct them first\n", strings.Join(o.Held, ", "))
+	}
+}
+
+// unitSlip reports whether a well's findings say its sizes are likely a
+// unit slip (rule SIZE-PLAUSIBLE, unwaived).
+func unitSlip(fs []rules.Finding) bool {
+	for _, f := range fs {
+		if f.Rule == "SIZE-PLAUSIBLE" && !f.Waived {
+			return true
+		}
+	}
+	return false
 }
 
 func writeLinesText(w io.Writer, lines []*total, order bool) {
@@ -425,16 +450,18 @@ func (e *errWriter) Write(p []byte) (int, error) {
 // --- json ---
 
 type jsonQuantities struct {
-	Caution     string          `json:"caution"`
-	Profiles    []string        `json:"profiles"` // the profiles in force: "default thresholds" or "profile NAME"
-	Contingency float64         `json:"contingency_pct"`
-	Wells       []jsonWell      `json:"wells"`
-	OrderingFor []string        `json:"ordering_for"`
-	ForPlanned  bool            `json:"ordering_for_planned"`
-	Totals      []jsonTotal     `json:"totals"`
-	AsBuiltFor  []string        `json:"as_built"`
-	AsBuilt     []jsonTotal     `json:"as_built_totals"`
-	Findings    []rules.Finding `json:"findings"`
+	Caution     string      `json:"caution"`
+	Profiles    []string    `json:"profiles"` // the profiles in force: "default thresholds" or "profile NAME"
+	Contingency float64     `json:"contingency_pct"`
+	Wells       []jsonWell  `json:"wells"`
+	OrderingFor []string    `json:"ordering_for"`
+	ForPlanned  bool        `json:"ordering_for_planned"`
+	Totals      []jsonTotal `json:"totals"`
+	AsBuiltFor  []string    `json:"as_built"`
+	// Held are wells left out of both lists: a likely unit slip.
+	Held     []string        `json:"held_back"`
+	AsBuilt  []jsonTotal     `json:"as_built_totals"`
+	Findings []rules.Finding `json:"findings"`
 }
 
 type jsonWell struct {
@@ -591,7 +618,7 @@ func ptr[T any](v T) *T { return &v }
 
 func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Order, profiles []string, caution string) error {
 	out := jsonQuantities{Caution: caution, Profiles: profiles, Contingency: order.Contingency, Wells: []jsonWell{}, Totals: jsonTotals(order.Lines),
-		OrderingFor: append([]string{}, order.For...), ForPlanned: order.Planned, AsBuiltFor: append([]string{}, order.AsBuilt...),
+		OrderingFor: append([]string{}, order.For...), ForPlanned: order.Planned, AsBuiltFor: append([]string{}, order.AsBuilt...), Held: append([]string{}, order.Held...),
 		AsBuilt: jsonTotals(order.AsBuiltLines), Findings: []rules.Finding{}}
 	for _, wq := range wells {
 		r := wq.Report

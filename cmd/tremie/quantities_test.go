@@ -7,6 +7,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"regexp"
 	"strings"
 	"testing"
 )
@@ -451,5 +452,51 @@ func TestQuantitiesCollapseLoad(t *testing.T) {
 	_, out, _ = runQ(filepath.Join(dir, "pass.toml"))
 	if !strings.Contains(out, "less 52 psi of water inside from 0 ft; net 43.4 psi, 0.73 of the rating") {
 		t.Errorf("output:\n%s", out)
+	}
+}
+
+// A planned metric well with a 2000 mm hole for 50 mm pipe (DN50, OD
+// 60.3 mm, ASTM D1785) is reported as a likely unit slip (33.2 times the
+// OD, above the common-practice 10) and left out of the order, which
+// would otherwise buy some 800 bags of sand for it; the other planned
+// well (wellTOML) is still ordered for.
+func TestQuantitiesHoldBackUnitSlip(t *testing.T) {
+	dir := t.TempDir()
+	code, out, errs := runTremie("new", "SL-1", "--kind", "planned", "--units", "m", "-o", dir)
+	if code != exitOK {
+		t.Fatalf("new: %d %s %s", code, out, errs)
+	}
+	p := filepath.Join(dir, "SL-1.toml")
+	b, _ := os.ReadFile(p)
+	if !strings.Contains(string(b), "diameter = 210.0") {
+		t.Fatal("the starter's hole is not 210 mm")
+	}
+	writeFile(t, dir, "SL-1.toml", strings.Replace(string(b), "diameter = 210.0", "diameter = 2000.0", 1))
+	writeFile(t, dir, "PL-1.toml", wellTOML)
+	_, out, errs = runQ(dir)
+	for _, s := range []string{"error SIZE-PLAUSIBLE", "33.2 times the 60.3 mm OD", "Order for the planned wells PL-1\n",
+		"Left out of both lists: SL-1, whose sizes are likely a unit slip (rule SIZE-PLAUSIBLE)"} {
+		if !strings.Contains(out, s) {
+			t.Errorf("output lacks %q:\n%s%s", s, out, errs)
+		}
+	}
+}
+
+// The demo's order list (the planned MW-4) carries its pad. By hand (8.25-in
+// hole, 6-in protective casing to 2 ft; pi/4 d^2/144 ft2 for d in inches):
+// concrete 0-1 ft beside the casing pi/4 (68.0625 - 36)/144 x 1 = 0.17487
+// ft3; pad 3 x 3 x 0.33 less the casing pi/4 x 36/144 x 0.33 = 2.97 -
+// 0.06480 = 2.90520 ft3; together 3.08007 ft3. At 0.6 ft3 per 80-lb bag,
+// each interval rounded up: 1 + 5 = 6 bags; with the 10 % contingency
+// before rounding: ceil(0.19236/0.6) + ceil(3.19572/0.6) = 1 + 6 = 7.
+func TestQuantitiesDemoOrderHasPad(t *testing.T) {
+	code, out, errs := runQ(filepath.Join("demo", "wells"))
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	order := out[strings.Index(out, "Order for the planned wells MW-4"):]
+	order = order[:strings.Index(order, "\n\n")]
+	if !regexp.MustCompile(`concrete\s+0\.600 ft3 per 80-lb bag \(from memory\)\s+2\s+3\.080 ft3 \(23\.04 gal\)\s+6\s+7`).MatchString(order) {
+		t.Errorf("the order's concrete line lacks MW-4's pad:\n%s", order)
 	}
 }

@@ -42,7 +42,9 @@ const (
 	legendColW = 104.0
 )
 
-func (l *layout) hasAmounts() bool { return l.in.Quantities != nil && len(l.in.Quantities.Rows) > 0 }
+func (l *layout) hasAmounts() bool {
+	return l.in.Quantities != nil && len(l.in.Quantities.AllRows()) > 0
+}
 
 func sortedSymbols(m map[string]symbol) []symbol {
 	out := make([]symbol, 0, len(m))
@@ -76,7 +78,7 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 	}
 	nRows := 0
 	if l.hasAmounts() {
-		nRows = len(l.in.Quantities.Rows)
+		nRows = len(l.in.Quantities.AllRows())
 	}
 	for cols := 1; cols <= 3; cols++ {
 		lw := float64(cols)*legendColW + 2*bandPad
@@ -117,7 +119,7 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 func (l *layout) planSideBand(legend []symbol) bandPlan {
 	w := l.pg.LegendRight
 	bp := bandPlan{legendW: w, noteW: w}
-	avail := l.caution.Y - 4 - (l.header.Bottom() + 6)
+	avail := l.bandFoot() - (l.header.Bottom() + 6)
 	lh := l.legendHeight(legend, w)
 	bp.height = lh
 	// A notes box holds at least its heading and the line that says
@@ -175,7 +177,7 @@ func notesThatFit(blocks []noteBlock, h float64) (fit, rest []noteBlock) {
 
 // amountsOverflow reports whether amounts rows continue on a notes sheet.
 func (l *layout) amountsOverflow() bool {
-	return l.hasAmounts() && l.bandPlan.amountsIn < len(l.in.Quantities.Rows)
+	return l.hasAmounts() && l.bandPlan.amountsIn < len(l.in.Quantities.AllRows())
 }
 
 // placeBand fixes the boxes' rectangles within the band.
@@ -398,8 +400,11 @@ var amountCols = []struct {
 
 func (l *layout) amountRows() [][]string {
 	var rows [][]string
-	for _, r := range l.in.Quantities.Rows {
+	for _, r := range l.in.Quantities.AllRows() { // the pad's concrete too, as the order counts it
 		name := materialName(r.Fill.Material)
+		if r.IsPad() {
+			name += " pad"
+		}
 		if r.Fill.Gradation != "" {
 			name += " " + r.Fill.Gradation
 		}

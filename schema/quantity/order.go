@@ -73,6 +73,10 @@ type Order struct {
 	// AsBuilt names the wells that record amounts, and their materials.
 	AsBuilt      []string
 	AsBuiltLines []*Line
+	// Held names the wells left out of both lists because a finding says
+	// their sizes are likely a unit slip (rule SIZE-PLAUSIBLE): a 2000 mm
+	// hole would order hundreds of bags. The caller sets it.
+	Held []string
 }
 
 // Totals sums the reports into an order with contingency percent.

@@ -87,7 +87,13 @@ func Well(o Options) ([]byte, error) {
 	wrap(&b, fmt.Sprintf("%s: starter well file from tremie new: %s, in %s.", o.ID, kindDoc[o.Kind], unitName))
 	wrap(&b, "Each value marked \"# FILL\" is a realistic example, not a record: replace it with what was measured or recorded, then delete the mark. tremie check names every mark left (rule FILL-IN). The key reference is schema/FORMAT.md; an editor reading the #:schema line completes keys and flags mistakes.")
 	wrap(&b, "Depths are below ground surface and grow downward; a height above ground (stick-up) is a negative depth.")
+	if optionalKinds[o.Kind] != nil {
+		wrap(&b, "At the end, commented out, are optional tables this kind of well may record ("+optionalNames(o)+").")
+	}
 	writeParts(&b, build(o), o.Units)
+	if opt := optionalKinds[o.Kind]; opt != nil {
+		writeOptional(&b, opt(o), o.Units)
+	}
 	return []byte(b.String()), nil
 }
 
@@ -199,12 +205,15 @@ func tableAt(t *schema.TableSpec, path string) *schema.TableSpec {
 }
 
 // wrap writes text as # comment lines of at most 78 columns.
-func wrap(b *strings.Builder, text string) {
-	line := "#"
+func wrap(b *strings.Builder, text string) { wrapWith(b, "#", text) }
+
+// wrapWith writes text as comment lines that begin with prefix.
+func wrapWith(b *strings.Builder, prefix, text string) {
+	line := prefix
 	for _, w := range strings.Fields(text) {
-		if len(line)+1+len(w) > 78 && line != "#" {
+		if len(line)+1+len(w) > 78 && line != prefix {
 			b.WriteString(line + "\n")
-			line = "#"
+			line = prefix
 		}
 		line += " " + w
 	}

@@ -210,3 +210,50 @@ func TestInitAndNew(t *testing.T) {
 		t.Errorf("loose schema line: %q", strings.SplitN(string(src), "\n", 2)[0])
 	}
 }
+
+// TestOptionalTables: the starters of kinds that may record formation
+// samples, a pumping test or wall features show them commented out; with
+// the first "#" of each line of that section deleted, as its note asks,
+// the file still loads, passes the well schema and checks with nothing
+// but its FILL marks reported.
+func TestOptionalTables(t *testing.T) {
+	want := map[string][]string{
+		"monitoring": {"# [[sample]]"}, "planned": {"# [[sample]]"}, "nested": {"# [[sample]]"},
+		"supply": {"# [[sample]]", "# [pumping_test]"}, "rock": {"# [orientation]", "# [[feature]]", "# [pumping_test]"},
+	}
+	each(t, func(t *testing.T, o Options, src []byte) {
+		s := string(src)
+		i := strings.Index(s, "\n## "+OptionalMark)
+		if i < 0 {
+			t.Fatalf("no optional section")
+		}
+		for _, w := range want[o.Kind] {
+			if !strings.Contains(s[i:], "\n"+w+"\n") {
+				t.Errorf("optional section lacks %s", w)
+			}
+		}
+		lines := strings.Split(s[i+1:], "\n")
+		for j, l := range lines {
+			if l != "" && !strings.HasPrefix(l, "#") {
+				t.Fatalf("optional line %q is not commented out", l)
+			}
+			lines[j] = strings.TrimPrefix(l, "#")
+		}
+		used := s[:i+1] + strings.Join(lines, "\n")
+		w, err := schema.Load("MW-9.toml", []byte(used))
+		if err != nil {
+			t.Fatalf("with the optional tables: %v\n%s", err, used[i:])
+		}
+		if err := jsonschema.Validate("well", []byte(used)); err != nil {
+			t.Errorf("with the optional tables the schema fails: %v", err)
+		}
+		for _, f := range rules.Check(w, nil) {
+			if f.Rule != "FILL-IN" {
+				t.Errorf("with the optional tables, line %d: %s %s", f.Line, f.Rule, f.Message)
+			}
+		}
+		if len(w.Samples)+len(w.Features) == 0 && w.PumpingTest == nil {
+			t.Errorf("the optional tables were not read")
+		}
+	})
+}
