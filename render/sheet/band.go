@@ -119,7 +119,7 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 func (l *layout) planSideBand(legend []symbol) bandPlan {
 	w := l.pg.LegendRight
 	bp := bandPlan{legendW: w, noteW: w}
-	avail := l.caution.Y - 4 - (l.header.Bottom() + 6)
+	avail := l.bandFoot() - (l.header.Bottom() + 6)
 	lh := l.legendHeight(legend, w)
 	bp.height = lh
 	// A notes box holds at least its heading and the line that says

@@ -18,9 +18,18 @@ import (
 // errStripFull says the strip cannot hold what it was given.
 var errStripFull = errors.New("the notes do not fit the strip")
 
-// stripArea is the strip under the band.
+// bandFoot is where the band ends: above the caution, or above the strip.
+func (l *layout) bandFoot() float64 {
+	if l.strip > 0 {
+		return l.caution.Y - 4 - l.strip - 4
+	}
+	return l.caution.Y - 4
+}
+
+// stripArea is the strip under the band (and, on a landscape page,
+// under the drawing beside it).
 func (l *layout) stripArea() draw.Rect {
-	return draw.Rect{X: l.content.X, Y: l.band.Bottom() + 4, W: l.content.W, H: l.strip}
+	return draw.Rect{X: l.content.X, Y: l.bandFoot() + 4, W: l.content.W, H: l.strip}
 }
 
 // flowIntoStrip moves the notes sheets' boxes into the strip, when there
@@ -52,16 +61,25 @@ func (l *layout) flowIntoStrip() error {
 	return nil
 }
 
-// notesOnTheSheet gives a one-sheet drawing (portrait) the lowest strip
+// notesOnTheSheet gives a one-sheet drawing the lowest strip
 // that holds what would go on notes sheets, with every label still on
-// the drawing, at the same scale, or with --scale fit at any round scale
-// that keeps the well on the sheet; where none does, the notes sheets
-// stay.
+// the drawing, at the same scale or the next less detailed readable one,
+// or with --scale fit at any round scale that keeps the well on the
+// sheet; where none does, the notes sheets stay.
 func (l *layout) notesOnTheSheet() {
-	if l.pg.LegendRight > 0 || len(l.notesPages) == 0 || len(l.sheets) != 1 {
+	if len(l.notesPages) == 0 || len(l.sheets) != 1 {
 		return
 	}
 	fit := l.opt.Scale != nil && l.opt.Scale.Fit
+	// The drawing may go one round step less detailed, within the readable
+	// limit, rather than leave a few notes a sheet of their own; a scale
+	// given on the command line stays.
+	coarsest := l.scale
+	if l.opt.Scale == nil {
+		if next, ok := lessDetailed(candidates(l.u.Imperial()), l.scale); ok {
+			coarsest = next
+		}
+	}
 	// In steps of 2.5 lines, from the lowest: a taller strip leaves a
 	// smaller drawing (and so, at a coarser scale, more to hold).
 	for h := 2 * continueLineH; h < l.content.H; h += 2.5 * lineGap(sizeSmall) {
@@ -71,7 +89,7 @@ func (l *layout) notesOnTheSheet() {
 		if errors.Is(err, errStripFull) {
 			continue
 		}
-		if err != nil || len(alt.sheets) != 1 || (alt.scale != l.scale && !fit) {
+		if err != nil || len(alt.sheets) != 1 || (!fit && alt.scale.Ratio > coarsest.Ratio) {
 			return // the drawing no longer holds the well as it did
 		}
 		if len(alt.notesPages) == 0 && alt.textFits() {

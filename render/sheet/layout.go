@@ -124,15 +124,11 @@ func (l *layout) planOnce() error {
 	l.bandPlan = l.planBand(l.legendAll)
 	l.body = draw.Rect{X: l.content.X, Y: l.header.Bottom() + 6, W: bodyW}
 	if l.pg.LegendRight > 0 {
-		l.band = draw.Rect{X: l.content.Right() - l.pg.LegendRight, Y: l.body.Y, W: l.pg.LegendRight, H: l.caution.Y - 4 - l.body.Y}
+		l.band = draw.Rect{X: l.content.Right() - l.pg.LegendRight, Y: l.body.Y, W: l.pg.LegendRight, H: l.bandFoot() - l.body.Y}
 		l.body.H = l.band.H
 	} else {
 		bh := l.bandPlan.height
-		foot := l.caution.Y - 4
-		if l.strip > 0 {
-			foot -= l.strip + 4
-		}
-		l.band = draw.Rect{X: l.content.X, Y: foot - bh, W: l.content.W, H: bh}
+		l.band = draw.Rect{X: l.content.X, Y: l.bandFoot() - bh, W: l.content.W, H: bh}
 		l.body.H = l.band.Y - 6 - l.body.Y
 	}
 	l.placeBand()
@@ -196,6 +192,18 @@ func moreDetailed(cs []Scale, s Scale) (Scale, bool) {
 	best, ok := Scale{}, false
 	for _, c := range cs {
 		if c.Ratio < s.Ratio && (!ok || c.Ratio > best.Ratio) {
+			best, ok = c, true
+		}
+	}
+	return best, ok
+}
+
+// lessDetailed is the most detailed of the scales that is less detailed
+// than s.
+func lessDetailed(cs []Scale, s Scale) (Scale, bool) {
+	best, ok := Scale{}, false
+	for _, c := range cs {
+		if c.Ratio > s.Ratio && (!ok || c.Ratio < best.Ratio) {
 			best, ok = c, true
 		}
 	}
