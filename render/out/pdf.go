@@ -37,18 +37,19 @@ func PDFWith(doc *draw.Document, opt EncodeOptions) ([]byte, error) {
 	r := pdf.New(&buf, pages[0].Width*mmPerPt, pages[0].Height*mmPerPt, &opts)
 	fonts := takeFonts()
 	defer fonts.giveBack()
+	patterns := newPDFPatterns()
 	for i, p := range pages {
 		if i > 0 {
 			r.NewPage(p.Width*mmPerPt, p.Height*mmPerPt)
 		}
-		if err := paintPage(pdfRenderer{r}, p, fonts, opt.Text, &rasterPatterns{}); err != nil {
+		if err := paintPage(pdfRenderer{r}, p, fonts, opt.Text, patterns); err != nil {
 			return nil, fmt.Errorf("pdf page %d: %w", i+1, err)
 		}
 	}
 	if err := r.Close(); err != nil {
 		return nil, fmt.Errorf("pdf: %w", err)
 	}
-	out, err := fixPDF(buf.Bytes(), info.object())
+	out, err := fixPDF(buf.Bytes(), info.object(), patterns)
 	if err != nil {
 		return nil, fmt.Errorf("pdf: %w", err)
 	}

@@ -14,14 +14,15 @@ import (
 	"strings"
 )
 
-// fixPDF makes canvas's PDF output repeatable: it replaces object 2, the
+// fixPDF makes canvas's PDF output repeatable, and adds the pattern fills
+// canvas cannot write (setPatterns): it replaces object 2, the
 // information dictionary canvas writes with the clock's date, by info;
 // pins the date inside every embedded TrueType program (FontFile2
 // streams, see pinFontDate); compresses the streams canvas leaves
 // uncompressed; and rewrites the cross-reference table and
 // trailer, adding a file identifier hashed from the content. Anything
 // unexpected in canvas's layout is an error, not a silent guess.
-func fixPDF(pdf []byte, info []byte) ([]byte, error) {
+func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns) ([]byte, error) {
 	xrefAt, offsets, err := readXref(pdf)
 	if err != nil {
 		return nil, err
@@ -31,6 +32,9 @@ func fixPDF(pdf []byte, info []byte) ([]byte, error) {
 	}
 	spans, err := objectSpans(pdf, xrefAt, offsets)
 	if err != nil {
+		return nil, err
+	}
+	if spans, err = setPatterns(spans, patterns); err != nil {
 		return nil, err
 	}
 	replace := map[int][]byte{2: info}

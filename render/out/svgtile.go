@@ -119,7 +119,6 @@ func appendSVGMarks(b []byte, t *draw.Tile, g draw.Path) []byte {
 	if !fill && !stroke {
 		return b
 	}
-	reach := markReach(g.Style)
 	start := len(b)
 	b = append(b, `<path d="`...)
 	body := len(b)
@@ -128,60 +127,40 @@ func appendSVGMarks(b []byte, t *draw.Tile, g draw.Path) []byte {
 		b = append(b, ' ')
 		return appendNum(b, q.Y+dy, tileDecimals)
 	}
-	for _, sp := range g.Subpaths {
-		if len(sp.Points) < 2 {
-			continue
+	eachCopy(t, g, func(pts []draw.Point, closed bool, dx, dy float64) {
+		b = append(b, 'M')
+		b = pt(b, pts[0], dx, dy)
+		for _, q := range pts[1:] {
+			b = append(b, 'L')
+			b = pt(b, q, dx, dy)
 		}
-		pts := sp.Points
-		if fill && len(pts) > 2 && !clockwise(pts) {
-			pts = reversed(pts)
-		}
-		wrapCopies(t, subpathBounds(pts, reach), func(dx, dy float64) {
-			b = append(b, 'M')
-			b = pt(b, pts[0], dx, dy)
-			for _, q := range pts[1:] {
-				b = append(b, 'L')
-				b = pt(b, q, dx, dy)
-			}
-			if sp.Closed {
-				b = append(b, 'z')
-			}
-		})
-	}
-	for _, c := range g.Circles {
-		if c.R <= 0 {
-			continue
-		}
-		bounds := draw.Rect{X: c.Center.X - c.R - reach, Y: c.Center.Y - c.R - reach, W: 2 * (c.R + reach), H: 2 * (c.R + reach)}
-		wrapCopies(t, bounds, func(dx, dy float64) {
-			// Two half-circle arcs, turning clockwise on the page like
-			// the polygons.
-			r := appendNum(nil, c.R, tileDecimals)
-			arc := func(b []byte, x float64) []byte {
-				b = append(b, 'A')
-				b = append(b, r...)
-				b = append(b, ' ')
-				b = append(b, r...)
-				b = append(b, " 0 1 1 "...)
-				return pt(b, draw.Point{X: x, Y: c.Center.Y}, dx, dy)
-			}
-			b = append(b, 'M')
-			b = pt(b, draw.Point{X: c.Center.X + c.R, Y: c.Center.Y}, dx, dy)
-			b = arc(b, c.Center.X-c.R)
-			b = arc(b, c.Center.X+c.R)
+		if closed {
 			b = append(b, 'z')
-		})
-	}
+		}
+	}, func(c draw.Disc, dx, dy float64) {
+		// Two half-circle arcs, turning clockwise on the page like the
+		// polygons.
+		r := appendNum(nil, c.R, tileDecimals)
+		arc := func(b []byte, x float64) []byte {
+			b = append(b, 'A')
+			b = append(b, r...)
+			b = append(b, ' ')
+			b = append(b, r...)
+			b = append(b, " 0 1 1 "...)
+			return pt(b, draw.Point{X: x, Y: c.Center.Y}, dx, dy)
+		}
+		b = append(b, 'M')
+		b = pt(b, draw.Point{X: c.Center.X + c.R, Y: c.Center.Y}, dx, dy)
+		b = arc(b, c.Center.X-c.R)
+		b = arc(b, c.Center.X+c.R)
+		b = append(b, 'z')
+	})
 	if len(b) == body {
 		return b[:start] // nothing of it shows in the cell
 	}
 	b = append(b, `" fill="`...)
 	if fill {
 		b = appendSVGColor(b, g.Fill)
-		if g.Fill.A < 255 {
-			b = append(b, `" fill-opacity="`...)
-			b = appendNum(b, float64(g.Fill.A)/255, 3)
-		}
 	} else {
 		b = append(b, "none"...)
 	}
@@ -192,10 +171,6 @@ func appendSVGMarks(b []byte, t *draw.Tile, g draw.Path) []byte {
 		}
 		b = append(b, `" stroke="`...)
 		b = appendSVGColor(b, g.Stroke)
-		if g.Stroke.A < 255 {
-			b = append(b, `" stroke-opacity="`...)
-			b = appendNum(b, float64(g.Stroke.A)/255, 3)
-		}
 		b = append(b, `" stroke-width="`...)
 		b = appendNum(b, w, tileDecimals)
 		if d := validDash(g.Dash); d != nil {
@@ -229,12 +204,4 @@ func validDash(d []float64) []float64 {
 		return nil
 	}
 	return d
-}
-
-func reversed(pts []draw.Point) []draw.Point {
-	out := make([]draw.Point, len(pts))
-	for i, q := range pts {
-		out[len(pts)-1-i] = q
-	}
-	return out
 }

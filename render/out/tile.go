@@ -64,6 +64,10 @@ func marksOf(t *draw.Tile) (tileMarks, error) {
 		default:
 			return m, fmt.Errorf("tile %q mark %d: %T cannot be a pattern mark", t.ID, k, it)
 		}
+		if seeThrough(g.Fill) || seeThrough(g.Stroke) {
+			// Pattern streams carry no transparency state.
+			return m, fmt.Errorf("tile %q mark %d is translucent; pattern marks are opaque", t.ID, k)
+		}
 		reach := markReach(g.Style)
 		for _, sp := range g.Subpaths {
 			for _, q := range sp.Points {
@@ -194,4 +198,39 @@ func (rp *rasterPatterns) fill(p *painter, t *draw.Tile, area draw.Rect, path st
 		}
 		c.flush()
 	}
+}
+
+func seeThrough(c draw.Color) bool { return c.A > 0 && c.A < 255 }
+
+// eachCopy walks the marks of g as a vector writer lays them in the
+// tile's cell: every subpath (filled ones turned clockwise on the page,
+// so under the non-zero rule overlapping marks stay filled) and every
+// circle, once for each offset at which it shows in the cell.
+func eachCopy(t *draw.Tile, g draw.Path, sub func(pts []draw.Point, closed bool, dx, dy float64), disc func(d draw.Disc, dx, dy float64)) {
+	reach := markReach(g.Style)
+	for _, sp := range g.Subpaths {
+		if len(sp.Points) < 2 {
+			continue
+		}
+		pts := sp.Points
+		if !g.Fill.None() && len(pts) > 2 && !clockwise(pts) {
+			pts = reversed(pts)
+		}
+		wrapCopies(t, subpathBounds(pts, reach), func(dx, dy float64) { sub(pts, sp.Closed, dx, dy) })
+	}
+	for _, d := range g.Circles {
+		if d.R <= 0 {
+			continue
+		}
+		b := draw.Rect{X: d.Center.X - d.R - reach, Y: d.Center.Y - d.R - reach, W: 2 * (d.R + reach), H: 2 * (d.R + reach)}
+		wrapCopies(t, b, func(dx, dy float64) { disc(d, dx, dy) })
+	}
+}
+
+func reversed(pts []draw.Point) []draw.Point {
+	out := make([]draw.Point, len(pts))
+	for i, q := range pts {
+		out[len(pts)-1-i] = q
+	}
+	return out
 }
