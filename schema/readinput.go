@@ -48,9 +48,23 @@ func ReadInput(path string, limit int64) ([]byte, error) {
 	if st.Size() > limit {
 		return nil, &fs.PathError{Op: "read", Path: path, Err: fmt.Errorf("%d bytes, more than the %d a file of this kind may have", st.Size(), limit)}
 	}
-	data, err := io.ReadAll(io.LimitReader(f, limit+1))
-	if err != nil {
-		return nil, err
+	// Room for the size the file has now and a byte more, to see it grow
+	// past the limit while read: one read and no copying for a file that
+	// does not change.
+	data := make([]byte, 0, st.Size()+1)
+	r := io.LimitReader(f, limit+1)
+	for {
+		if len(data) == cap(data) {
+			data = append(data, 0)[:len(data)]
+		}
+		n, err := r.Read(data[len(data):cap(data)])
+		data = data[:len(data)+n]
+		if err == io.EOF {
+			break
+		}
+		if err != nil {
+			return nil, err
+		}
 	}
 	if int64(len(data)) > limit {
 		return nil, &fs.PathError{Op: "read", Path: path, Err: fmt.Errorf("more than the %d bytes a file of this kind may have", limit)}
