@@ -13,8 +13,8 @@ import (
 // Construction (1982), appendix 2, give the same 0.1 ft/s.
 const EntranceVelocityLimit = 0.1 * schema.MetresPerFoot
 
-// EntranceVelocityLimitMetric is the same limit as Driscoll gives it for
-// metric wells, 3 cm/s, in m/s: the default of a well in metres.
+// EntranceVelocityLimitMetric is the limit's round metric figure, 3 cm/s
+// (1.6 % under 0.1 ft/s), in m/s: the default of a well in metres.
 const EntranceVelocityLimitMetric = 0.03
 
 // EntranceLimit is the entrance-velocity limit for a well's units, m/s.

@@ -23,7 +23,7 @@ func init() {
 		Severity: Warning,
 		Source:   "F. G. Driscoll, Groundwater and Wells (2nd ed., 1986), chapter 13: entrance velocity at most 0.1 ft/s (3 cm/s) through the effective open area",
 		Params: []Param{{Name: "limit", Kind: VelocityParam, Default: quantity.EntranceVelocityLimitMetric, DefaultFt: 0.1,
-			Doc: "largest entrance velocity", Source: "Driscoll (1986), ch. 13: 0.1 ft/s, 3 cm/s as it gives it for metric wells"}},
+			Doc: "largest entrance velocity", Source: "Driscoll (1986), ch. 13, and BC Guidelines (1982): 0.1 ft/s; 3 cm/s for wells in metres (its round metric figure, 1.6 % under)"}},
 		Run: runEntranceVelocity,
 	})
 }
@@ -53,7 +53,7 @@ func runEntranceVelocity(p *Pass) {
 
 // velocityText writes a velocity (m/s) in the well's units: ft/s to the
 // thousandth in a file in feet, cm/s to the hundredth in one in metres
-// (Driscoll's 0.1 ft/s is 3 cm/s).
+// (the limit of a well in metres is 3 cm/s).
 func velocityText(v float64, u schema.Units) string {
 	if u.Imperial() {
 		return schema.TrimFloat(v/schema.MetresPerFoot, 3) + " ft/s"

@@ -66,8 +66,8 @@ func TestMetricSanitarySealMessage(t *testing.T) {
 	}
 }
 
-// Driscoll's limit (Groundwater and Wells, 1986, ch. 13: 0.1 ft/s, 3
-// cm/s) on a metric supply well is 3 cm/s, never in ft/s. By hand: 3 m of
+// Driscoll's limit (Groundwater and Wells, 1986, ch. 13: 0.1 ft/s) on a
+// metric supply well is its round metric figure, 3 cm/s, never in ft/s. By hand: 3 m of
 // 6-in screen (OD 168.275 mm) at 10 % open area has pi x 0.168275 x 3 x
 // 0.10 = 0.15859 m2 open, 0.079297 m2 effective; 3 L/s enters at 0.003 /
 // 0.079297 = 3.78 cm/s, and the area transmits 0.079297 x 0.03 = 2.4 L/s
