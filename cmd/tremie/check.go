@@ -64,12 +64,13 @@ type checkOptions struct {
 func parseCheckArgs(args []string, stdout, stderr io.Writer) (checkOptions, int, bool) {
 	var o checkOptions
 	fset := newFlags("check", stdout, stderr)
-	fset.StringVar(&o.format, "format", "text", "output `format`: text or json")
+	format := fset.choice("format", "text", []string{"text", "json"}, "output `format`: text or json")
 	fset.StringVar(&o.profile, "profile", "", "rule profile TOML `file` setting thresholds and severities (default: the project's)")
 	paths, code, ok := fset.parse(args)
 	if !ok {
 		return o, code, false
 	}
+	o.format = *format
 	if o.format != "text" && o.format != "json" {
 		return o, fset.usageError("--format must be text or json, not %q", o.format), false
 	}

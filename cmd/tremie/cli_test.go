@@ -211,6 +211,12 @@ func TestCompletion(t *testing.T) {
 	if got := try("tremie completion z", 2); got != "zsh" {
 		t.Errorf("tremie completion z<TAB> = %q", got)
 	}
+	if got := try("tremie check --format j", 3); got != "json" {
+		t.Errorf("tremie check --format j<TAB> = %q", got)
+	}
+	if got := try("tremie render x.toml --page tab", 4); got != "tabloid" {
+		t.Errorf("tremie render x.toml --page tab<TAB> = %q", got)
+	}
 	if code, _, _ := runTremie("completion", "tcsh"); code != exitUsage {
 		t.Errorf("completion tcsh: exit %d", code)
 	}
@@ -228,6 +234,8 @@ func TestCompletionInShells(t *testing.T) {
 		{"tremie completion z", "tremie completion zsh ", "zsh"},
 		{"tremie help bo", "tremie help book ", "book"},
 		{"tremie check --form", "tremie check --format ", "--format\toutput format"},
+		{"tremie check --format j", "tremie check --format json ", "json"},
+		{"tremie render x.toml --page tab", "tremie render x.toml --page tabloid ", "tabloid"},
 	}
 	t.Run("fish", func(t *testing.T) {
 		fish, err := exec.LookPath("fish")

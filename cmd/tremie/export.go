@@ -21,7 +21,7 @@ func init() {
 
 func runExport(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("export", stdout, stderr)
-	format := fset.String("format", "geojson", "`format`: geojson (RFC 7946, WGS 84) or csv")
+	format := fset.choice("format", "geojson", []string{"geojson", "csv"}, "`format`: geojson (RFC 7946, WGS 84) or csv")
 	outFile := fset.String("o", "", "output `file` (default: stdout)")
 	rest, code, ok := fset.parse(args)
 	if !ok {

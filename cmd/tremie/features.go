@@ -21,7 +21,7 @@ func init() {
 
 func runFeatures(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("features", stdout, stderr)
-	format := fset.String("format", "text", "output `format`: text, csv or json")
+	format := fset.choice("format", "text", []string{"text", "csv", "json"}, "output `format`: text, csv or json")
 	paths, code, ok := fset.parse(args)
 	if !ok {
 		return code

@@ -35,6 +35,31 @@ func newFlags(name string, stdout, stderr io.Writer) *cmdFlags {
 	return &cmdFlags{FlagSet: fs, cmd: c, stdout: stdout, stderr: stderr}
 }
 
+// choiceValue is a string flag whose values are few and known: the
+// command still checks the value (with its own message); shell completion
+// offers the values (commandSpecs reads Choices).
+type choiceValue struct {
+	s       *string
+	choices []string
+}
+
+func (c choiceValue) String() string {
+	if c.s == nil {
+		return ""
+	}
+	return *c.s
+}
+func (c choiceValue) Set(v string) error { *c.s = v; return nil }
+func (c choiceValue) Choices() []string  { return c.choices }
+
+// choice declares a string flag taking one of choices (def by default).
+func (f *cmdFlags) choice(name, def string, choices []string, usage string) *string {
+	s := new(string)
+	*s = def
+	f.Var(choiceValue{s, choices}, name, usage)
+	return s
+}
+
 // twoDashes finds a long flag written with one dash in the flag
 // package's messages ("-format"), to show it as it is documented.
 var twoDashes = regexp.MustCompile(`(^|\s)-([a-z][a-z0-9-]+)`)

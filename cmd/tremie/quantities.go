@@ -62,7 +62,7 @@ type wellQuantities struct {
 
 func runQuantities(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("quantities", stdout, stderr)
-	format := fset.String("format", "text", "output `format`: text, json or csv")
+	format := fset.choice("format", "text", []string{"text", "json", "csv"}, "output `format`: text, json or csv")
 	contingency := fset.Float64("contingency", quantity.DefaultContingency, "`percentage` added to each volume before it is rounded up to bags to order (default from "+quantity.DefaultContingencySource+")")
 	yieldsFile := fset.String("yields", "", "TOML `file` with a [yields] table overriding the yields (default: the project's)")
 	profileFile := fset.String("profile", "", "rule profile TOML `file` setting the reconciliation thresholds (default: the project's)")

@@ -2,6 +2,7 @@ package main
 
 import (
 	"fmt"
+	"github.com/tremie-dev/tremie/templates"
 	"io"
 	"path/filepath"
 	"strings"
@@ -27,14 +28,14 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("render", stdout, stderr)
 	outDir := fset.String("o", "", "output `directory` (default: the project's output directory)")
 	formats := fset.String("format", "svg,pdf,png", "comma-separated output `formats`: "+strings.Join(out.FormatNames(), ", "))
-	pageName := fset.String("page", "", "page `size`: letter, tabloid, a4 or a3 (default letter, or the project's)")
+	pageName := fset.choice("page", "", templates.Names(), "page `size`: letter, tabloid, a4 or a3 (default letter, or the project's)")
 	landscape := fset.Bool("landscape", false, "turn the page to landscape")
 	scaleText := fset.String("scale", "", "vertical `scale`, such as 1in=5ft or 1:50, or fit for one sheet (default: automatic)")
 	strict := fset.Bool("strict", false, "refuse to draw a well with unwaived error findings")
 	issue := fset.Bool("issue", false, "draw the issued set: no rule IDs or file lines, a revision block and a seal space; wells with unwaived error findings are refused")
 	profilePath := fset.String("profile", "", "rule profile TOML `file` (default: the project's, else the defaults)")
 	yieldsPath := fset.String("yields", "", "TOML `file` with a [yields] table overriding the yields (default: the project's)")
-	textMode := fset.String("text", "text", "how SVG and PDF write words: `mode` text (searchable) or outlines (for viewers that ignore embedded fonts)")
+	textMode := fset.choice("text", "text", []string{"text", "outlines"}, "how SVG and PDF write words: `mode` text (searchable) or outlines (for viewers that ignore embedded fonts)")
 	dpi := fset.Float64("dpi", 150, "PNG resolution in `dots` per inch")
 	force := fset.Bool("force", false, "redraw every well, even those unchanged, and replace files tremie did not write")
 	paths, code, ok := fset.parse(args)

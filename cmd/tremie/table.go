@@ -24,7 +24,7 @@ func init() {
 
 func runTable(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("table", stdout, stderr)
-	format := fset.String("format", "csv", "table `format`: csv, xlsx, md, or import-xlsx (the wells in tremie import's layout)")
+	format := fset.choice("format", "csv", []string{"csv", "xlsx", "md", "import-xlsx"}, "table `format`: csv, xlsx, md, or import-xlsx (the wells in tremie import's layout)")
 	outFile := fset.String("o", "", "output `file` (default: stdout for csv and md, OUTPUT/summary.xlsx for xlsx, OUTPUT/import.xlsx for import-xlsx)")
 	force := fset.Bool("force", false, "replace the default output file even if tremie did not write it")
 	rest, code, ok := fset.parse(args)

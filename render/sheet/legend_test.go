@@ -130,6 +130,8 @@ func paintedKeys(w *schema.Well, p *draw.Page) []string {
 				role = v.Role
 			case draw.Path:
 				role = v.Role
+			case draw.Pattern:
+				role = v.Role
 			case draw.Image:
 				role = v.Role
 			}

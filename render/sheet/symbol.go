@@ -62,6 +62,9 @@ func marked(key string, items []draw.Item) []draw.Item {
 		case draw.Path:
 			v.Role = role
 			it = v
+		case draw.Pattern:
+			v.Role = role
+			it = v
 		case draw.Image:
 			v.Role = role
 			it = v

@@ -16,7 +16,8 @@ func init() {
 			"casing where the fill states its level (water_inside; else the casing is taken as empty, the " +
 			"worst case) must not exceed the set fraction of the casing's rated collapse pressure, worked " +
 			"from its dimension ratio by the formula of ASTM F480. Cement's heat of hydration weakens PVC " +
-			"further, which the rating does not include. Steel casing is not rated here.",
+			"further, and slots weaken a screen; the rating, for blank pipe at room temperature, includes neither. " +
+			"Steel casing is not rated here.",
 		Severity: Warning,
 		Source:   quantity.CollapseRatingSource + "; COMAR 26.04.04.17 Table 1 (PVC depth limits by SDR and schedule) agrees with it",
 		Params: []Param{{

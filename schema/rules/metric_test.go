@@ -110,3 +110,20 @@ rate = 3.0
 		t.Errorf("findings %+v", fs)
 	}
 }
+
+// COLLAPSE-LOAD in a metric well speaks kPa. DN100 SDR 26 PVC (OD 114.3
+// mm) is rated 59.84 psi = 412.6 kPa by ASTM F480's formula (1 psi =
+// 6.894757 kPa, NIST SP 811); 35.4 m of neat cement at its mix's 1864.9
+// kg/m3 (15.56 lb/gal) presses 1864.9 x 9.80665 x 35.4 = 647.4 kPa on
+// the empty casing, 1.57 times the rating.
+func TestMetricCollapseLoadMessage(t *testing.T) {
+	src := strings.Replace(monitoringWell("m", "250", "40.0", fill("37.0", "40.0", "filter-pack")+fill("36.0", "37.0", "bentonite-chips")+
+		fill("0.6", "36.0", "neat-cement")+fill("0.0", "0.6", "concrete")), "size = \"2\"\nschedule = \"40\"", "material = \"PVC\"\nsize = \"DN100\"\nsdr = 26", 1)
+	src = strings.Replace(src, "top = 7.5\nbottom = 10.5", "top = 38.0\nbottom = 39.5", 1)
+	src = strings.Replace(src, "bottom = 7.5\nmaterial", "bottom = 38.0\nmaterial", 1)
+	fs := findings(load(t, src), nil, "COLLAPSE-LOAD")
+	if len(fs) != 1 || !strings.Contains(fs[0].Message, "puts 647 kPa on string \"main\" riser at 36 m, 1.57 times its rating (413 kPa)") ||
+		!strings.Contains(fs[0].Message, "at 1.86 kg/L (its mix)") {
+		t.Errorf("findings %+v", fs)
+	}
+}
