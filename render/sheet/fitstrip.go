@@ -48,13 +48,13 @@ func (l *layout) flowIntoStrip() error {
 	if len(pages) > 1 {
 		return errStripFull
 	}
-	for _, b := range append([]sheetBox(nil), firstPage(pages)...) {
-		if b.r.Bottom() > area.Bottom()+1e-9 { // a block taller than the strip
-			return errStripFull
-		}
-	}
 	l.stripBoxes, l.notesPages = nil, nil
 	if len(pages) == 1 {
+		for _, b := range pages[0] {
+			if b.r.Bottom() > area.Bottom()+1e-9 { // a block taller than the strip
+				return errStripFull
+			}
+		}
 		l.stripBoxes = pages[0]
 	}
 	l.band.H = area.Bottom() - l.band.Y
@@ -97,11 +97,4 @@ func (l *layout) notesOnTheSheet() {
 			return
 		}
 	}
-}
-
-func firstPage(pages [][]sheetBox) []sheetBox {
-	if len(pages) == 0 {
-		return nil
-	}
-	return pages[0]
 }
