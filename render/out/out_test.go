@@ -133,11 +133,27 @@ func TestSVGFontsCoverTheirText(t *testing.T) {
 		name, _ := orig.Name(nil, sfnt.NameIDPostScript)
 		originals[name] = fs
 	}
-	// <text ... style="font: ... NAME"><tspan ...>TEXT</tspan></text>
-	textRE := regexp.MustCompile(`<text[^>]*style="font:[^"]*?px ([A-Za-z-]+)[^"]*"><tspan[^>]*>([^<]*)</tspan></text>`)
+	// <text ... style="font: ... NAME"><tspan ...>TEXT</tspan></text>, or
+	// with the style as a class (compactSVG) and the text without a tspan.
+	classes := map[string]string{}
+	for _, m := range regexp.MustCompile(`\.([a-z0-9]+)\{([^}]*)\}`).FindAllSubmatch(b, -1) {
+		classes[string(m[1])] = string(m[2])
+	}
+	textRE := regexp.MustCompile(`<text[^>]*(?:style="([^"]*)"|class="([^"]*)")>(?:<tspan[^>]*>)?([^<]*)(?:</tspan>)?</text>`)
+	fontRE := regexp.MustCompile(`^font:[^;]*?px ([A-Za-z-]+)`)
 	var buf sfnt.Buffer
 	checked := 0
 	for _, m := range textRE.FindAllSubmatch(b, -1) {
+		st := string(m[1])
+		if len(m[2]) > 0 {
+			st = classes[string(m[2])]
+		}
+		fm := fontRE.FindStringSubmatch(st)
+		if fm == nil {
+			t.Errorf("text %q has no font in its style %q", m[3], st)
+			continue
+		}
+		m = [][]byte{m[0], []byte(fm[1]), m[3]}
 		name := string(m[1])
 		f, ok := faces[name]
 		if !ok {
