@@ -148,8 +148,11 @@ func visitKey(line string, lineNo, eq int, current string, paths *pathArena, vis
 	keyCol := len(line) - len(strings.TrimLeft(line, " \t")) + 1
 	if strings.IndexByte(key, '.') >= 0 {
 		// extra.thing = 1: the tables it opens are at this line, each
-		// named at its own segment
+		// named at its own segment, and the key at its last
 		starts := segmentStarts(line[:eq])
+		if len(starts) > 0 {
+			keyCol = starts[len(starts)-1] + 1
+		}
 		parts := strings.Split(key, ".")
 		prefix := current
 		for i, p := range parts[:len(parts)-1] {

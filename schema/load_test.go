@@ -439,7 +439,7 @@ func TestKeyPositionsOfNames(t *testing.T) {
 		"borehole[0]":           {line: 1, col: 1, keyCol: 3},
 		"borehole[0].extra":     {line: 4, col: 3, keyCol: 3, implicit: true},
 		"borehole[0].extra.a":   {line: 4, col: 11, keyCol: 11, implicit: true},
-		"borehole[0].extra.a.c": {line: 4, col: 19, keyCol: 3},
+		"borehole[0].extra.a.c": {line: 4, col: 19, keyCol: 15},
 		"string.sectoin[0]":     {line: 5, col: 1, keyCol: 13},
 	}
 	for k, w := range want {

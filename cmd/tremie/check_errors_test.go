@@ -27,19 +27,7 @@ func TestCheckReportsEverySettingsError(t *testing.T) {
 			t.Errorf("stderr lacks %q:\n%s", want, errb)
 		}
 	}
-	var got []struct {
-		File     string `json:"file"`
-		Readable bool   `json:"readable"`
-		Errors   []struct {
-			Line    int    `json:"line"`
-			Col     int    `json:"col"`
-			Message string `json:"message"`
-			Hint    string `json:"hint"`
-		} `json:"errors"`
-	}
-	if err := json.Unmarshal([]byte(out), &got); err != nil {
-		t.Fatalf("not JSON: %v\n%s", err, out)
-	}
+	got := readCheckReport(t, out)
 	if code != exitInput || len(got) == 0 {
 		t.Fatalf("exit %d, report %s", code, out)
 	}
@@ -87,17 +75,7 @@ func TestCheckReportsProjectProfileAndYieldsErrorsTogether(t *testing.T) {
 		t.Errorf("exit %d, stderr:\n%s\nwant the lines:\n%s", code, errb, strings.Join(want, "\n"))
 	}
 	code, out, _ := runTremie("check", "--format", "json", ".")
-	var report []struct {
-		File   string `json:"file"`
-		Errors []struct {
-			Line    int    `json:"line"`
-			Col     int    `json:"col"`
-			Message string `json:"message"`
-		} `json:"errors"`
-	}
-	if err := json.Unmarshal([]byte(out), &report); err != nil {
-		t.Fatalf("not JSON: %v\n%s", err, out)
-	}
+	report := readCheckReport(t, out)
 	var got []string
 	for _, r := range report {
 		for _, e := range r.Errors {
@@ -107,4 +85,25 @@ func TestCheckReportsProjectProfileAndYieldsErrorsTogether(t *testing.T) {
 	if code != exitInput || strings.Join(got, "\n") != strings.Join(want, "\n") {
 		t.Errorf("JSON report: exit %d, errors:\n%s\nwant:\n%s", code, strings.Join(got, "\n"), strings.Join(want, "\n"))
 	}
+}
+
+// checkReport is what the tests read of check --format json.
+type checkReport []struct {
+	File     string `json:"file"`
+	Readable bool   `json:"readable"`
+	Errors   []struct {
+		Line    int    `json:"line"`
+		Col     int    `json:"col"`
+		Message string `json:"message"`
+		Hint    string `json:"hint"`
+	} `json:"errors"`
+}
+
+func readCheckReport(t *testing.T, out string) checkReport {
+	t.Helper()
+	var r checkReport
+	if err := json.Unmarshal([]byte(out), &r); err != nil {
+		t.Fatalf("not JSON: %v\n%s", err, out)
+	}
+	return r
 }

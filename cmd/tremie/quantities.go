@@ -304,7 +304,7 @@ func screenFlowLine(wl *schema.Well) string {
 		}
 		limit := "0.1 ft/s"
 		if !u.Imperial() {
-			limit = "3.05 cm/s (0.1 ft/s)"
+			limit = "3 cm/s"
 		}
 		parts = append(parts, fmt.Sprintf("open area %s %s (half of it effective), transmitting %s %s at %s (Driscoll 1986); entrance velocity %s %s at the %s rate of %s %s",
 			quantity.Number(area), aunit, quantity.Number(capacity), qunit, limit, quantity.Number(vel), vunit, which, schema.TrimFloat(rate, 1), qunit))

@@ -118,6 +118,12 @@ func paramDefault(kind rules.ParamKind, def, defFt float64) string {
 			in = schema.Diameter(def).Inches()
 		}
 		return fmt.Sprintf("%s in (wells in ft), %s mm (wells in m)", schema.TrimFloat(in, 3), schema.TrimFloat(def, 1))
+	case rules.VelocityParam:
+		fts := defFt
+		if fts == 0 {
+			fts = def / schema.MetresPerFoot
+		}
+		return fmt.Sprintf("%s ft/s (wells in ft), %s m/s (wells in m)", schema.TrimFloat(fts, 3), schema.TrimFloat(def, 3))
 	}
 	return schema.TrimFloat(def, 3)
 }

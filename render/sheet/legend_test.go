@@ -132,6 +132,11 @@ func paintedKeys(w *schema.Well, p *draw.Page) []string {
 				role = v.Role
 			case draw.Pattern:
 				role = v.Role
+				if !strings.HasPrefix(role, "symbol ") {
+					// a pattern painted around the sheet's symbols: the
+					// comparison fails and names it
+					seen["unmarked pattern "+v.Tile.ID] = true
+				}
 			case draw.Image:
 				role = v.Role
 			}

@@ -13,6 +13,18 @@ import (
 // Construction (1982), appendix 2, give the same 0.1 ft/s.
 const EntranceVelocityLimit = 0.1 * schema.MetresPerFoot
 
+// EntranceVelocityLimitMetric is the limit's round metric figure, 3 cm/s
+// (1.6 % under 0.1 ft/s), in m/s: the default of a well in metres.
+const EntranceVelocityLimitMetric = 0.03
+
+// EntranceLimit is the entrance-velocity limit for a well's units, m/s.
+func EntranceLimit(u schema.Units) float64 {
+	if u.Imperial() {
+		return EntranceVelocityLimit
+	}
+	return EntranceVelocityLimitMetric
+}
+
 // EffectiveOpenFraction is the share of a screen's open area that passes
 // water once the pack grains lie against it: about half (Driscoll,
 // Groundwater and Wells, chapter 13; from memory).
@@ -23,7 +35,7 @@ const EffectiveOpenFraction = 0.5
 type ScreenFlow struct {
 	OpenArea  float64 // m2: outer surface x open fraction, every screen
 	Effective float64 // m2: OpenArea x EffectiveOpenFraction
-	// Capacity is the rate the screens transmit at EntranceVelocityLimit
+	// Capacity is the rate the screens transmit at EntranceLimit
 	// through the effective open area, m3/s.
 	Capacity float64
 	Rate     float64 // m3/s: the design rate, else the tested one
@@ -52,7 +64,7 @@ func Entrance(w *schema.Well) (ScreenFlow, bool) {
 		f.OpenArea += math.Pi * sec.Pipe.OD.Metres() * float64(sec.Thickness()) * sec.OpenArea
 	}
 	f.Effective = f.OpenArea * EffectiveOpenFraction
-	f.Capacity = f.Effective * EntranceVelocityLimit
+	f.Capacity = f.Effective * EntranceLimit(w.Units)
 	f.Rate, f.Design = pt.DesignRate, true
 	if f.Rate <= 0 {
 		f.Rate, f.Design = pt.Rate, false

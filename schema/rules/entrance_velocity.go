@@ -22,8 +22,8 @@ func init() {
 			"exceed the limit: a faster entrance velocity brings sand, encrustation and head loss.",
 		Severity: Warning,
 		Source:   "F. G. Driscoll, Groundwater and Wells (2nd ed., 1986), chapter 13: entrance velocity at most 0.1 ft/s (3 cm/s) through the effective open area",
-		Params: []Param{{Name: "limit", Kind: RatioParam, Default: 0.1,
-			Doc: "largest entrance velocity, ft/s (0.1 ft/s = 3.05 cm/s)", Source: "Driscoll (1986), ch. 13: 0.1 ft/s"}},
+		Params: []Param{{Name: "limit", Kind: VelocityParam, Default: quantity.EntranceVelocityLimitMetric, DefaultFt: 0.1,
+			Doc: "largest entrance velocity", Source: "Driscoll (1986), ch. 13, and BC Guidelines (1982): 0.1 ft/s; 3 cm/s for wells in metres (its round metric figure, 1.6 % under)"}},
 		Run: runEntranceVelocity,
 	})
 }
@@ -37,7 +37,7 @@ func runEntranceVelocity(p *Pass) {
 	if !ok {
 		return
 	}
-	limit := p.Param("limit") * schema.MetresPerFoot // m/s
+	limit := p.Param("limit") // m/s
 	if f.Velocity <= limit*(1+1e-9) {
 		return
 	}
@@ -53,7 +53,7 @@ func runEntranceVelocity(p *Pass) {
 
 // velocityText writes a velocity (m/s) in the well's units: ft/s to the
 // thousandth in a file in feet, cm/s to the hundredth in one in metres
-// (the 0.1 ft/s limit is 3.05 cm/s).
+// (the limit of a well in metres is 3 cm/s).
 func velocityText(v float64, u schema.Units) string {
 	if u.Imperial() {
 		return schema.TrimFloat(v/schema.MetresPerFoot, 3) + " ft/s"

@@ -19,7 +19,7 @@ func TestMetricThresholdsRound(t *testing.T) {
 	purposes := append([]schema.Purpose{""}, schema.Purposes...)
 	for _, r := range All() {
 		for _, prm := range r.Params {
-			if prm.Kind == RatioParam {
+			if prm.Kind == RatioParam || prm.Kind == VelocityParam {
 				continue
 			}
 			for _, pu := range purposes {
@@ -66,12 +66,13 @@ func TestMetricSanitarySealMessage(t *testing.T) {
 	}
 }
 
-// Driscoll's 0.1 ft/s (Groundwater and Wells, 1986, ch. 13) on a metric
-// supply well is written 3.05 cm/s (0.1 x 30.48 cm), never in ft/s. By
-// hand: 3 m of 6-in screen (OD 168.275 mm) at 10 % open area has pi x
-// 0.168275 x 3 x 0.10 = 0.15859 m2 open, 0.079297 m2 effective; 3 L/s
-// enters at 0.003 / 0.079297 = 3.78 cm/s, and the area transmits 0.079297
-// x 0.03048 = 2.4 L/s at the limit.
+// Driscoll's limit (Groundwater and Wells, 1986, ch. 13: 0.1 ft/s) on a
+// metric supply well is its round metric figure, 3 cm/s, never in ft/s. By hand: 3 m of
+// 6-in screen (OD 168.275 mm) at 10 % open area has pi x 0.168275 x 3 x
+// 0.10 = 0.15859 m2 open, 0.079297 m2 effective; 3 L/s enters at 0.003 /
+// 0.079297 = 3.78 cm/s, and the area transmits 0.079297 x 0.03 = 2.4 L/s
+// at the limit. A profile in feet sets the limit in ft/s, one in metres
+// in m/s: 0.05 m/s (5 cm/s) lets the 3.78 cm/s pass.
 func TestMetricEntranceVelocityMessage(t *testing.T) {
 	src := `[units]
 depth = "m"
@@ -105,9 +106,22 @@ open_area = 10.0
 [pumping_test]
 rate = 3.0
 `
-	fs := findings(load(t, src), nil, "ENTRANCE-VELOCITY")
-	if len(fs) != 1 || !strings.Contains(fs[0].Message, "tested rate of 3 L/s water enters the screens at 3.78 cm/s, above 3.05 cm/s; their effective open area transmits 2.4 L/s") {
+	w := load(t, src)
+	fs := findings(w, nil, "ENTRANCE-VELOCITY")
+	if len(fs) != 1 || !strings.Contains(fs[0].Message, "tested rate of 3 L/s water enters the screens at 3.78 cm/s, above 3 cm/s; their effective open area transmits 2.4 L/s") {
 		t.Errorf("findings %+v", fs)
+	}
+	for _, c := range []struct {
+		prof string
+		n    int
+	}{{"units = \"m\"\n[rule.ENTRANCE-VELOCITY]\nlimit = 0.05\n", 0}, {"units = \"ft\"\n[rule.ENTRANCE-VELOCITY]\nlimit = 0.1\n", 1}, {"units = \"ft\"\n[rule.ENTRANCE-VELOCITY]\nlimit = 0.15\n", 0}} {
+		prof, err := ParseProfile("v.profile.toml", []byte("[profile]\nname = \"v\"\n"+c.prof))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if got := len(findings(w, prof, "ENTRANCE-VELOCITY")); got != c.n {
+			t.Errorf("profile %q: %d findings, want %d", c.prof, got, c.n)
+		}
 	}
 }
 

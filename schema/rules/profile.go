@@ -47,6 +47,8 @@ func (p *Profile) value(r *Rule, name string, u schema.Units) float64 {
 				return float64(schema.LengthFrom(prm.DefaultFt, schema.Feet))
 			case DiameterParam:
 				return float64(schema.DiameterFrom(prm.DefaultFt, schema.Inches))
+			case VelocityParam:
+				return prm.DefaultFt * schema.MetresPerFoot
 			}
 		}
 		return prm.Default

@@ -12,6 +12,7 @@ const (
 	profileLength   = "profile length unit ([profile] units: ft or m)"
 	profileDiameter = "in with a ft profile, mm with a m profile"
 	profileRatio    = "a plain number (0.9 = 90 %)"
+	profileVelocity = "ft/s with a ft profile, m/s with a m profile"
 )
 
 var profileFile struct {
@@ -109,6 +110,8 @@ func paramUnit(k ParamKind) string {
 		return profileLength
 	case DiameterParam:
 		return profileDiameter
+	case VelocityParam:
+		return profileVelocity
 	}
 	return profileRatio
 }
@@ -123,6 +126,8 @@ func (p Param) exampleFt() float64 {
 		return schema.Length(p.Default).In(schema.Feet)
 	case DiameterParam:
 		return schema.Diameter(p.Default).In(schema.Inches)
+	case VelocityParam:
+		return p.Default / schema.MetresPerFoot
 	}
 	return p.Default
 }

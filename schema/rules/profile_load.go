@@ -208,6 +208,11 @@ func (p *Profile) toModel(kind ParamKind, v float64) float64 {
 			return float64(schema.DiameterFrom(v, schema.Inches))
 		}
 		return v
+	case VelocityParam:
+		if p.Units == schema.Feet {
+			return v * schema.MetresPerFoot
+		}
+		return v
 	}
 	return v
 }

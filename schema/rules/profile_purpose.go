@@ -106,6 +106,8 @@ func unitDefault(kind ParamKind, def, defFt float64, u schema.Units) float64 {
 			return float64(schema.LengthFrom(defFt, schema.Feet))
 		case DiameterParam:
 			return float64(schema.DiameterFrom(defFt, schema.Inches))
+		case VelocityParam:
+			return defFt * schema.MetresPerFoot
 		}
 	}
 	return def

@@ -56,6 +56,7 @@ const (
 	LengthParam   ParamKind = iota // a depth or thickness, profile depth units
 	DiameterParam                  // a diameter, profile diameter units
 	RatioParam                     // a plain number (ratio, fraction, count)
+	VelocityParam                  // a velocity: ft/s in a ft profile, m/s in a m profile; model m/s
 )
 
 // Param is one threshold of a rule. Default is in model units (metres for
