@@ -36,3 +36,17 @@ func TestCropImageDirectCopy(t *testing.T) {
 		}
 	}
 }
+
+// TestNearlySameRect: a clip that meets an image's rectangle but for
+// rounding (the demo's wall image: 51.66384 against 51.66383999999999 pt)
+// leaves the image uncut; a real cut, however thin, does not.
+func TestNearlySameRect(t *testing.T) {
+	r := draw.Rect{X: 252.56, Y: 293.5, W: 51.66384, H: 198}
+	v := intersect(r, draw.Rect{X: 252.56, Y: 293.5, W: 51.66383999999999, H: 198})
+	if !nearlySame(v, r) {
+		t.Errorf("%v and %v differ only by rounding", v, r)
+	}
+	if nearlySame(draw.Rect{X: 252.56, Y: 293.5, W: 51.6, H: 198}, r) {
+		t.Error("a cut of 0.06 pt taken for rounding")
+	}
+}

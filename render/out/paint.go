@@ -382,7 +382,9 @@ func (p *painter) image(im draw.Image, clip *draw.Rect, path string) {
 		if v.W <= 0 || v.H <= 0 {
 			return
 		}
-		if v != r {
+		// An image that fills its clip exactly comes out of intersect a
+		// rounding error smaller; cut, it would be enlarged for nothing.
+		if !nearlySame(v, r) {
 			img, r = cropImage(img, r, v)
 			if img == nil {
 				return
@@ -439,6 +441,14 @@ func intersect(a, b draw.Rect) draw.Rect {
 		y1 = y0
 	}
 	return draw.Rect{X: x0, Y: y0, W: x1 - x0, H: y1 - y0}
+}
+
+// nearlySame reports whether two rectangles differ by no more than
+// rounding: every edge within 1e-6 pt.
+func nearlySame(a, b draw.Rect) bool {
+	const tol = 1e-6
+	return math.Abs(a.X-b.X) <= tol && math.Abs(a.Y-b.Y) <= tol &&
+		math.Abs(a.Right()-b.Right()) <= tol && math.Abs(a.Bottom()-b.Bottom()) <= tol
 }
 
 // cropImage cuts the part of img (placed at r) that lies in v. Pixels are
