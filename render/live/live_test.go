@@ -180,3 +180,34 @@ func TestServeStops(t *testing.T) {
 		t.Fatal("Serve did not stop")
 	}
 }
+
+// TestPageNamesTheProfile: each well's findings name the thresholds they
+// were checked with: the defaults, or the project's profile by name, file
+// and the code it follows.
+func TestPageNamesTheProfile(t *testing.T) {
+	dir := demoProject(t)
+	s, err := New(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if _, body := get(t, s.Handler(), "/"); !strings.Contains(body, "Rule thresholds are defaults to be set to the local rules.") {
+		t.Errorf("defaults not named")
+	}
+	if err := os.WriteFile(filepath.Join(dir, "county.profile.toml"), []byte("[profile]\nname = \"Tarn County code\"\nsource = \"Tarn County Code ch. 7 (invented)\"\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	prj := filepath.Join(dir, "project.toml")
+	data, _ := os.ReadFile(prj)
+	if err := os.WriteFile(prj, []byte(strings.Replace(string(data), "[project]\n", "[project]\nprofile = \"county.profile.toml\"\n", 1)), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	s, err = New(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	_, body := get(t, s.Handler(), "/")
+	if !strings.Contains(body, "Rule thresholds from profile &#34;Tarn County code&#34; (county.profile.toml), following Tarn County Code ch. 7 (invented).") ||
+		strings.Contains(body, "thresholds are defaults") {
+		t.Errorf("the page does not name the profile in force")
+	}
+}

@@ -119,6 +119,7 @@ li.error b{color:#8c1d18}li.warning b{color:#7a5300}li.waived b{color:#666}
 <ul>{{range $w.Problems}}<li><code>{{.Error}}</code></li>{{end}}</ul></div>
 {{else}}
 <h3>Findings</h3>
+<p class="thresholds"><small>{{$w.Thresholds}}.</small></p>
 {{if $w.Findings}}<ul class="findings">{{range $w.Findings}}<li class="{{.Label}}"><code>{{.File}}:{{.Line}}</code> <b>{{.Label}} {{.Rule}}</b>: {{.Message}}</li>{{end}}</ul>{{else}}<p>No findings.</p>{{end}}
 {{with qrows $w.Quantities}}<h3>Quantities</h3>
 <table class="qty"><tr><th>#</th><th>material</th><th>interval</th><th>calculated</th><th>bags needed</th><th>placed</th><th>placed / calculated</th></tr>

@@ -40,7 +40,10 @@ type Well struct {
 	Findings   []rules.Finding
 	Quantities *quantity.Report
 	Sheets     [][]byte // SVG, one per sheet
-	Version    string   // hash of what it was made from: changes when it is redrawn
+	// Thresholds names the rule thresholds the well was checked with:
+	// the defaults, or the profile in force with its file and code.
+	Thresholds string
+	Version    string // hash of what it was made from: changes when it is redrawn
 }
 
 // settings reads the project through the pipeline: its wells, each with
@@ -102,6 +105,8 @@ func prepare(st *settings, in pipeline.Input, prev *Well) *Well {
 		return w
 	}
 	w.ID = pw.ID
+	note := in.Setting.Profile.ThresholdNote() // "rule thresholds ..."
+	w.Thresholds = strings.ToUpper(note[:1]) + note[1:]
 	w.Quantities = pw.Quantities
 	w.Findings = pw.Findings
 	for i := range w.Findings {

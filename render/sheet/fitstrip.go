@@ -10,26 +10,32 @@ import (
 // on a one-sheet drawing, what would continue on a notes sheet
 // (descriptions and component notes, notes, findings, amounts) is flowed
 // instead, in columns as wide as the band's boxes, into a strip kept
-// between the band and the caution. The drawing gives up the strip's
-// height where it has room to spare at its scale (with --scale fit, it
-// takes the round scale that still holds the well); the strip is the
+// above the caution: under the band (portrait), or under the drawing
+// beside the side band (landscape). The drawing gives up the strip's
+// height where it has room to spare at its scale or the next readable
+// one (with --scale fit, any round scale that holds the well); the strip is the
 // lowest that holds every box, so the drawing stays as large as it can.
 
 // errStripFull says the strip cannot hold what it was given.
 var errStripFull = errors.New("the notes do not fit the strip")
 
-// bandFoot is where the band ends: above the caution, or above the strip.
+// bandFoot is where a bottom band ends: above the caution, or above the
+// strip. A side band (landscape) always reaches the caution.
 func (l *layout) bandFoot() float64 {
-	if l.strip > 0 {
+	if l.strip > 0 && l.pg.LegendRight == 0 {
 		return l.caution.Y - 4 - l.strip - 4
 	}
 	return l.caution.Y - 4
 }
 
-// stripArea is the strip under the band (and, on a landscape page,
-// under the drawing beside it).
+// stripArea is the strip under the band, or on a landscape page under
+// the drawing, beside the side band.
 func (l *layout) stripArea() draw.Rect {
-	return draw.Rect{X: l.content.X, Y: l.bandFoot() + 4, W: l.content.W, H: l.strip}
+	r := draw.Rect{X: l.content.X, Y: l.caution.Y - 4 - l.strip, W: l.content.W, H: l.strip}
+	if l.pg.LegendRight > 0 {
+		r.W -= l.pg.LegendRight + 6
+	}
+	return r
 }
 
 // flowIntoStrip moves the notes sheets' boxes into the strip, when there
@@ -80,8 +86,8 @@ func (l *layout) notesOnTheSheet() {
 			coarsest = next
 		}
 	}
-	// In steps of 2.5 lines, from the lowest: a taller strip leaves a
-	// smaller drawing (and so, at a coarser scale, more to hold).
+	// In steps of 2.5 lines, from the lowest, so the drawing stays as
+	// large as it can.
 	for h := 2 * continueLineH; h < l.content.H; h += 2.5 * lineGap(sizeSmall) {
 		alt := newLayout(l.w, l.in, l.opt, l.pg)
 		alt.strip = h
@@ -89,10 +95,13 @@ func (l *layout) notesOnTheSheet() {
 		if errors.Is(err, errStripFull) {
 			continue
 		}
-		if err != nil || len(alt.sheets) != 1 || (!fit && alt.scale.Ratio > coarsest.Ratio) {
-			return // the drawing no longer holds the well as it did
+		if err != nil {
+			return // no room left for the drawing
 		}
-		if len(alt.notesPages) == 0 && alt.textFits() {
+		// The scale is not monotonic in the strip (the text may ask for a
+		// more detailed one over two sheets), so the walk goes on past a
+		// height that does not do.
+		if len(alt.sheets) == 1 && (fit || alt.scale.Ratio <= coarsest.Ratio) && len(alt.notesPages) == 0 && alt.textFits() {
 			*l = *alt
 			return
 		}

@@ -126,6 +126,9 @@ func (l *layout) planOnce() error {
 	if l.pg.LegendRight > 0 {
 		l.band = draw.Rect{X: l.content.Right() - l.pg.LegendRight, Y: l.body.Y, W: l.pg.LegendRight, H: l.bandFoot() - l.body.Y}
 		l.body.H = l.band.H
+		if l.strip > 0 {
+			l.body.H -= l.strip + 4 // the strip stands under the drawing
+		}
 	} else {
 		bh := l.bandPlan.height
 		l.band = draw.Rect{X: l.content.X, Y: l.bandFoot() - bh, W: l.content.W, H: bh}

@@ -18,7 +18,8 @@ import (
 // To add one: a type in its own file with these five methods, listed by
 // layout.assemble at its place in the reading order, in the layer it is
 // painted in. The legend must name exactly what paint paints:
-// TestLegendIsWhatIsPainted compares the two on the demo and the gallery.
+// TestLegendIsWhatIsPainted compares the two on the demo, the gallery and
+// the rule fixtures; TestPaintOrder reads the stacking from a layout.
 type part interface {
 	// stack is where the part is painted: by layer, then by sub within
 	// the layer; parts of one stack paint in the order they are listed.
