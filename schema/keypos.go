@@ -21,7 +21,9 @@ type keyPos struct {
 func scanKeyPositions(src string) map[string]keyPos {
 	out := map[string]keyPos{}
 	scanKeys(src, false, func(path string, p keyPos) {
-		if _, seen := out[path]; !seen || !p.implicit {
+		if !p.implicit {
+			out[path] = p
+		} else if _, seen := out[path]; !seen {
 			out[path] = p
 		}
 	})
@@ -33,7 +35,9 @@ func scanKeyPositions(src string) map[string]keyPos {
 func scanKeyLines(src string) map[string]int {
 	out := make(map[string]int, strings.Count(src, "=")+8)
 	scanKeys(src, false, func(path string, p keyPos) {
-		if _, seen := out[path]; !seen || !p.implicit {
+		if !p.implicit {
+			out[path] = p.line
+		} else if _, seen := out[path]; !seen {
 			out[path] = p.line
 		}
 	})

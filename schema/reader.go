@@ -142,9 +142,14 @@ func (t *table) done() {
 	}
 	var unknown []string
 	for k := range t.m {
-		known := t.isUsed(k) // a table without a key table, or a key of the Other form
-		if t.spec != nil && (t.spec.Key(k) != nil || t.spec.Other == nil) {
-			known = t.spec.Key(k) != nil
+		var known bool
+		switch {
+		case t.spec == nil:
+			known = t.isUsed(k) // a table without a key table: what the loader asked for
+		case t.spec.Key(k) != nil:
+			known = true
+		case t.spec.Other != nil:
+			known = t.isUsed(k) // a key the user names (a profile's group), once read
 		}
 		if !known {
 			unknown = append(unknown, k)

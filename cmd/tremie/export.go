@@ -2,6 +2,7 @@ package main
 
 import (
 	"fmt"
+	"github.com/tremie-dev/tremie/render/table"
 	"io"
 	"path/filepath"
 
@@ -55,6 +56,7 @@ func runExport(args []string, stdout, stderr io.Writer) int {
 		in[i] = gis.Input{Entry: entries[i], Sheets: gis.SheetFiles(p.Output, names[w])}
 	}
 	x := gis.Build(in, p.Units, projected, dir)
+	x.Caution = table.CautionFor(pipeline.ProfileOf(wells)) // names the profile in force
 	for _, s := range x.Skipped {
 		fmt.Fprintf(stderr, "%s: %s left out of the export: %s\n", s.File, or(s.ID, "well"), s.Reason)
 	}

@@ -11,10 +11,10 @@ import (
 
 // Every report of a project with a rule profile names that profile and
 // never says the thresholds are defaults: check, quantities (text, JSON,
-// CSV), the summary table, the sheets and the book.
+// CSV), the summary table, the GIS export, the sheets and the book.
 func TestReportsNameTheProfileInForce(t *testing.T) {
 	dir := t.TempDir()
-	put(t, dir, "project.toml", "[project]\nname = \"Profile trial (invented)\"\nunits = \"ft\"\nwells = \"wells\"\nprofile = \"county.profile.toml\"\n")
+	put(t, dir, "project.toml", "[project]\nname = \"Profile trial (invented)\"\nunits = \"ft\"\ncrs = \"EPSG:2227\"\nwells = \"wells\"\nprofile = \"county.profile.toml\"\n")
 	put(t, dir, "county.profile.toml", "[profile]\nname = \"Tarn County code\"\nunits = \"ft\"\nsource = \"Tarn County Code ch. 7 (invented)\"\n\n[rule.SEAL-THICKNESS]\nmin = 2\n")
 	for _, id := range []string{"MW-1", "MW-2"} {
 		b, err := os.ReadFile(filepath.Join("demo", "wells", id+".toml"))
@@ -41,6 +41,8 @@ func TestReportsNameTheProfileInForce(t *testing.T) {
 		{"quantities", "--format", "csv", dir},
 		{"quantities", filepath.Join(dir, "wells", "MW-1.toml")}, // a file of the project
 		{"table", "--format", "md", dir},
+		{"export", "--format", "csv", dir},
+		{"export", "--format", "geojson", dir},
 	} {
 		code, out, errb := runTremie(args...)
 		if code != exitOK && code != exitFindings {
@@ -53,6 +55,14 @@ func TestReportsNameTheProfileInForce(t *testing.T) {
 		switch args[len(args)-2] {
 		case "csv":
 			out = strings.ReplaceAll(out, `""`, `"`) // a CSV cell's doubled quotes
+		case "geojson":
+			var g struct {
+				Caution string `json:"caution"`
+			}
+			if err := json.Unmarshal([]byte(out), &g); err != nil {
+				t.Fatal(err)
+			}
+			out = g.Caution
 		case "json":
 			var q qJSON
 			if err := json.Unmarshal([]byte(out), &q); err != nil {

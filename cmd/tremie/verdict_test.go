@@ -1,6 +1,7 @@
 package main
 
 import (
+	"os"
 	"regexp"
 	"sort"
 	"strings"
@@ -92,6 +93,18 @@ func TestSameVerdictHoweverNamed(t *testing.T) {
 		if !want.MatchString(strings.Join(first, "\n")) {
 			t.Errorf("%s: %v lacks %s", file, first, want)
 		}
+		// and named from inside the wells folder, as "OK-1.toml"
+		dir, _ := os.Getwd()
+		t.Chdir("wells")
+		_, out, _ := runTremie("check", strings.TrimPrefix(file, "wells/"))
+		got := findingsFor(out, strings.TrimPrefix(file, "wells/"))
+		for i := range got {
+			got[i] = "wells/" + got[i]
+		}
+		if strings.Join(got, "\n") != strings.Join(first, "\n") {
+			t.Errorf("check %s from wells/ reports:\n%s\nbut from the project:\n%s", file, strings.Join(got, "\n"), strings.Join(first, "\n"))
+		}
+		t.Chdir(dir)
 	}
 }
 

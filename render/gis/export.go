@@ -17,6 +17,9 @@ type Export struct {
 	Columns   []table.Column
 	Points    []Point
 	Skipped   []Skipped
+	// Caution goes with the export, naming the thresholds the wells were
+	// checked with (table.CautionFor); Build sets the defaults' one.
+	Caution string
 }
 
 // Point is one monitoring point: a well, or one string of a nested well.
@@ -59,7 +62,7 @@ func Build(in []Input, units schema.DepthUnit, projected *crs.CRS, dir string) *
 		projected = SharedCRS(entries)
 	}
 	full := table.Build(entries, units)
-	x := &Export{Projected: projected}
+	x := &Export{Projected: projected, Caution: table.Caution}
 	for _, c := range full.Columns() {
 		if !asWritten[c.Header] {
 			x.Columns = append(x.Columns, c)

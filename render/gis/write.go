@@ -51,7 +51,7 @@ const (
 func (x *Export) GeoJSON() []byte {
 	var b bytes.Buffer
 	b.WriteString("{\n\"type\": \"FeatureCollection\",\n\"caution\": ")
-	b.Write(jsonString(table.Caution))
+	b.Write(jsonString(x.Caution))
 	b.WriteString(",\n\"features\": [")
 	for i, p := range x.Points {
 		if i > 0 {
@@ -143,7 +143,7 @@ func (x *Export) CSV() ([]byte, error) {
 			}
 			sheets += s
 		}
-		rec = append(rec, schema.TrimFloat(p.Pos.Lon, degreeDigits), schema.TrimFloat(p.Pos.Lat, degreeDigits), p.Pos.Source, sheets, table.Caution)
+		rec = append(rec, schema.TrimFloat(p.Pos.Lon, degreeDigits), schema.TrimFloat(p.Pos.Lat, degreeDigits), p.Pos.Source, sheets, x.Caution)
 		if err := w.Write(rec); err != nil {
 			return nil, fmt.Errorf("csv: %w", err)
 		}

@@ -2,6 +2,7 @@ package out
 
 import (
 	"bytes"
+	"encoding/base64"
 	"image"
 	"testing"
 
@@ -48,5 +49,29 @@ func TestNearlySameRect(t *testing.T) {
 	}
 	if nearlySame(draw.Rect{X: 252.56, Y: 293.5, W: 51.6, H: 198}, r) {
 		t.Error("a cut of 0.06 pt taken for rounding")
+	}
+}
+
+// TestSVGEmbedsImageBytes: an image drawn whole goes into the SVG as its
+// own bytes, not encoded again; one cut by its clip is encoded from the
+// cut pixels.
+func TestSVGEmbedsImageBytes(t *testing.T) {
+	data := testImage()
+	whole := &draw.Page{Width: 200, Height: 100, Items: []draw.Item{
+		draw.Image{Rect: draw.Rect{X: 10, Y: 10, W: 40, H: 20}, Data: data},
+	}}
+	own := base64.StdEncoding.EncodeToString(data)
+	b := must(SVG(&draw.Document{Pages: []*draw.Page{whole}}, 0))
+	if !bytes.Contains(b, []byte(own)) {
+		t.Error("the SVG does not carry the image's own bytes")
+	}
+	cut := &draw.Page{Width: 200, Height: 100, Items: []draw.Item{
+		draw.Clip{Rect: draw.Rect{X: 0, Y: 0, W: 30, H: 100}, Items: []draw.Item{
+			draw.Image{Rect: draw.Rect{X: 10, Y: 10, W: 40, H: 20}, Data: data},
+		}},
+	}}
+	b = must(SVG(&draw.Document{Pages: []*draw.Page{cut}}, 0))
+	if bytes.Contains(b, []byte(own)) || !bytes.Contains(b, []byte("data:image/png;base64,")) {
+		t.Error("a cut image should be embedded from its cut pixels")
 	}
 }

@@ -12,6 +12,7 @@ import (
 	"unicode"
 
 	"github.com/tdewolff/canvas"
+	"github.com/tdewolff/canvas/renderers/svg"
 
 	"github.com/tremie-dev/tremie/render/draw"
 )
@@ -372,11 +373,12 @@ func (p *painter) image(im draw.Image, clip *draw.Rect, path string) {
 	if r.W <= 0 || r.H <= 0 {
 		return
 	}
-	img, _, err := image.Decode(bytes.NewReader(im.Data))
+	img, format, err := image.Decode(bytes.NewReader(im.Data))
 	if err != nil {
 		p.fail(path, "image %q: %v", im.Role, err)
 		return
 	}
+	cut := false
 	if clip != nil {
 		v := intersect(r, *clip)
 		if v.W <= 0 || v.H <= 0 {
@@ -389,6 +391,7 @@ func (p *painter) image(im draw.Image, clip *draw.Rect, path string) {
 			if img == nil {
 				return
 			}
+			cut = true
 		}
 	}
 	b := img.Bounds()
@@ -397,6 +400,11 @@ func (p *painter) image(im draw.Image, clip *draw.Rect, path string) {
 	}
 	bl := p.pos(r.X, r.Bottom())
 	m := canvas.Identity.Translate(bl.X, bl.Y).Scale(r.W*mmPerPt/float64(b.Dx()), r.H*mmPerPt/float64(b.Dy()))
+	if _, ok := p.r.(*svg.SVG); ok && !cut && (format == "png" || format == "jpeg") {
+		// SVG embeds the image's own bytes: canvas would encode the
+		// decoded pixels again as PNG, at length, to the same picture.
+		img = canvas.Image{Image: img, Bytes: im.Data, Mimetype: "image/" + format}
+	}
 	p.r.RenderImage(img, m)
 }
 

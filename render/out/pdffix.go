@@ -181,12 +181,9 @@ func compressStream(obj []byte, pin func([]byte) ([]byte, error), level int) ([]
 		}
 	}
 	var z bytes.Buffer
-	zw, err := zlib.NewWriterLevel(&z, level)
-	if err != nil {
+	if err := deflate(&z, data, level); err != nil {
 		return nil, err
 	}
-	zw.Write(data)
-	zw.Close()
 
 	var out bytes.Buffer
 	out.Grow(len(obj))

@@ -23,13 +23,19 @@ import (
 // project's unit.
 func Table(p *project.Project, wells []*Well) *table.Table {
 	t := table.Build(Entries(wells), p.Units)
+	t.Profile = ProfileOf(wells) // the caution names the profile in force
+	return t
+}
+
+// ProfileOf is the rule profile a project's wells were checked with (that
+// of the first well whose setting could be read), nil for none.
+func ProfileOf(wells []*Well) *rules.Profile {
 	for _, w := range wells {
 		if w.Setting != nil && w.Setting.Err == nil {
-			t.Profile = w.Setting.Profile // the caution names the profile in force
-			break
+			return w.Setting.Profile
 		}
 	}
-	return t
+	return nil
 }
 
 // Entries are prepared wells as the summary table reads them.

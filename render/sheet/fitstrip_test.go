@@ -9,6 +9,7 @@ import (
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
+	"github.com/tremie-dev/tremie/templates"
 )
 
 // notedWell is a well of depth td ft with k field notes, each three
@@ -106,5 +107,42 @@ func TestDeepWellFitKeepsItsNotesSheets(t *testing.T) {
 		colW := max(l.bandPlan.noteW, l.bandPlan.amountW)
 		perRow := int((l.content.W + sheetColGap) / (colW + sheetColGap))
 		t.Logf("%s at %v: %d notes sheets, %.0f pt of %0.f-pt columns, %d abreast: a strip %.0f pt high beside a page of %.0f pt", pg.Name, l.scale, len(l.notesPages), column, colW, perRow, column/float64(perRow), l.content.H)
+	}
+}
+
+// On a Letter landscape page the side band of BR-1, MW-2 and MW-3 of the
+// demo overflows by a few notes: they go in the strip under the drawing,
+// which keeps its scale or takes the next readable one, and each well
+// stays on one sheet with every note and finding on it.
+func TestLandscapeNotesStayOnTheSheet(t *testing.T) {
+	tpl, err := templates.Load("letter", true)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pg := FromTemplate(tpl)
+	demo := demoWells(t)
+	for _, name := range []string{"BR-1.toml", "MW-2.toml", "MW-3.toml"} {
+		d := demo[name]
+		opt := Options{Page: pg}
+		alone := newLayout(d.w, d.in, opt, pg)
+		if err := alone.planOnce(); err != nil {
+			t.Fatal(err)
+		}
+		l := newLayout(d.w, d.in, opt, pg)
+		if err := l.plan(); err != nil {
+			t.Fatal(err)
+		}
+		if len(alone.notesPages) == 0 || l.sheetCount() != 1 || l.strip == 0 {
+			t.Errorf("%s: %d notes sheets alone; with the strip (%.0f pt) %d pages", name, len(alone.notesPages), l.strip, l.sheetCount())
+			continue
+		}
+		doc := layoutOf(t, d.w, d.in, opt)
+		all := strings.Join(strings.Fields(strings.Join(texts(doc.Pages[0], ""), " ")), " ")
+		for _, f := range d.in.Findings {
+			if words := strings.Fields(f.Message); !strings.Contains(all, strings.Join(words[:min(4, len(words))], " ")) {
+				t.Errorf("%s: finding %s is not on the sheet", name, f.Rule)
+			}
+		}
+		t.Logf("%s: one sheet at %v (alone %v and a notes sheet), strip %.0f pt", name, l.scale, alone.scale, l.strip)
 	}
 }

@@ -82,11 +82,15 @@ type Table struct {
 }
 
 // caution is the table's caution, true to the thresholds in force.
-func (t *Table) caution() string {
-	if t.Profile.IsDefault() {
+func (t *Table) caution() string { return CautionFor(t.Profile) }
+
+// CautionFor is the caution of a summary checked under prof (nil for the
+// defaults): Caution, or one naming the profile in force.
+func CautionFor(prof *rules.Profile) string {
+	if prof.IsDefault() {
 		return Caution
 	}
-	return "Caution: " + rules.Caution(t.Profile)
+	return "Caution: " + rules.Caution(prof)
 }
 
 // Build makes the table in the given unit; "" takes the unit every

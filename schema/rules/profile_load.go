@@ -41,7 +41,7 @@ type profileReader struct {
 	doc     *schema.Doc
 	groups  map[string][]schema.Purpose // the profile's own [groups]
 	claims  map[string]setting          // rule|purpose|key -> where it was set
-	numbers bool                        // a threshold is set, so units matter
+	numbers string                      // the key path of the first threshold set, which makes units matter
 }
 
 func (r *profileReader) read(file string, root *schema.Table) *Profile {
@@ -80,8 +80,12 @@ func (r *profileReader) read(file string, root *schema.Table) *Profile {
 	}
 	root.Done()
 	// units written but wrong are reported where they are written
-	if r.numbers && prof.Units == "" && !unitsWritten {
-		r.doc.Errorf("profile", "give units = \"ft\" or \"m\" in [profile]: the profile sets thresholds")
+	if r.numbers != "" && prof.Units == "" && !unitsWritten {
+		at := "profile" // at [profile], else at the first threshold
+		if !root.Has("profile") {
+			at = r.numbers
+		}
+		r.doc.Errorf(at, "give units = \"ft\" or \"m\" in [profile]: the profile sets thresholds")
 	}
 	return prof
 }
@@ -151,7 +155,9 @@ func (r *profileReader) sanitarySeal(prof *Profile, t *schema.Table) {
 // number reads a threshold: finite and not negative; a fraction stays
 // within 0 to 1.
 func (r *profileReader) number(t *schema.Table, k string, prm Param) (float64, bool) {
-	r.numbers = true
+	if r.numbers == "" {
+		r.numbers = t.Path() + "." + k
+	}
 	f, ok := t.NonNegative(k)
 	if ok && prm.Kind == RatioParam && prm.Fraction && f > 1 {
 		r.doc.Errorf(t.Path()+"."+k, "%s is a fraction from 0 to 1 (0.9 = 90 %%), not %v", k, f)

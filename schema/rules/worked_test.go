@@ -355,7 +355,7 @@ func TestProfileErrors(t *testing.T) {
 		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nmin = -1\n", `must not be negative`, 4},
 		{"[profile]\nunits = \"ft\"\n[rule.SEAL-THICKNESS]\nmin = nan\n", `finite`, 4},
 		{"[profile]\nunits = \"yd\"\n", `units = "yd" is not one of: ft, m`, 2},
-		{"[rule.SEAL-THICKNESS]\nmin = 2\n", `give units`, 0},
+		{"[rule.SEAL-THICKNESS]\nmin = 2\n", `give units`, 2},
 		{"[profile]\nunits = \"ft\"\n[sanitary_seal]\nmonitoring = 20\nsupply = 50\n", `unknown purpose "supply"`, 5},
 		{"[profile]\nunits = \"ft\"\nnmae = \"x\"\n", `unknown key "nmae"`, 3},
 		{"[profile]\nunits = \"ft\"\n[rules]\n", `unknown key "rules"`, 3},
