@@ -31,6 +31,11 @@ type noteBlock struct {
 	block   textBlock
 	color   draw.Color
 	role    string // the items' role, when not told by the text
+	// standard marks the sheet's standing note (depths below ground,
+	// datum, diameters to their own scale): the title block states the
+	// same facts, so it is the one note a sheet may leave off rather
+	// than open a notes sheet for it alone (see notesWithout).
+	standard bool
 }
 
 const (
@@ -99,6 +104,7 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 			// Keep what fits; the rest goes on a notes sheet after the
 			// drawings, and the band says so.
 			bp.notes, bp.overflow = notesThatFit(notes, bp.height-(bandHeadH+bandPad+continueLineH+bandPad))
+			bp.notes, bp.overflow = notesWithout(bp.notes, bp.overflow, bp.height-(bandHeadH+bandPad))
 		}
 		score := bp.height
 		if len(bp.overflow) > 0 {
@@ -156,6 +162,7 @@ func (l *layout) planSideBand(legend []symbol) bandPlan {
 	bp.notes = notes
 	if bandHeadH+bandPad+notesHeight(notes) > notesAvail {
 		bp.notes, bp.overflow = notesThatFit(notes, notesAvail-(bandHeadH+bandPad+continueLineH+bandPad))
+		bp.notes, bp.overflow = notesWithout(bp.notes, bp.overflow, notesAvail-(bandHeadH+bandPad))
 	}
 	return bp
 }
@@ -173,6 +180,20 @@ func notesThatFit(blocks []noteBlock, h float64) (fit, rest []noteBlock) {
 		}
 	}
 	return blocks, nil
+}
+
+// notesWithout leaves the standing note off when it is all that would
+// continue on a notes sheet and the rest fits height h without the
+// "continue" line: a sheet of its own for facts the title block already
+// gives (units, datum, horizontal exaggeration) is the waste a drafter
+// would not hand over. The standing note comes after the well's own
+// notes and before the rock key, so leaving it off alone leaves no gap
+// in the numbering.
+func notesWithout(fit, rest []noteBlock, h float64) ([]noteBlock, []noteBlock) {
+	if len(rest) != 1 || !rest[0].standard || notesHeight(fit) > h {
+		return fit, rest
+	}
+	return fit, nil
 }
 
 // amountsOverflow reports whether amounts rows continue on a notes sheet.
@@ -219,6 +240,7 @@ func (l *layout) noteBlocks(width float64) []noteBlock {
 		body(fmt.Sprintf("%d. %s", i+1, n), draw.Regular, ink)
 	}
 	body(fmt.Sprintf("%d. Depths are below ground surface; elevations above %s. Diameters are drawn to their own scale, wider than the depth scale (see horizontal exaggeration).", len(l.w.Notes)+1, datumOr(l.w.Elevation.Datum)), draw.Regular, ink)
+	out[len(out)-1].standard = true
 	if k := l.rockKey(); k != "" {
 		body(fmt.Sprintf("%d. %s", len(l.w.Notes)+2, k), draw.Regular, ink)
 	}

@@ -146,3 +146,42 @@ func TestLandscapeNotesStayOnTheSheet(t *testing.T) {
 		t.Logf("%s: one sheet at %v (alone %v and a notes sheet), strip %.0f pt", name, l.scale, alone.scale, l.strip)
 	}
 }
+
+// PW-1 of the demo on a Letter landscape page: its own notes fill the
+// side band and only the standing note (depths below ground, datum,
+// diameters to their own scale) is left over, facts the title block's
+// units and horizontal-exaggeration cells already give. The sheet leaves
+// it off instead of opening a notes sheet for it alone, and keeps the
+// well's own notes.
+func TestStandingNoteOpensNoSheetAlone(t *testing.T) {
+	tpl, err := templates.Load("letter", true)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pg := FromTemplate(tpl)
+	d := demoWells(t)["PW-1.toml"]
+	opt := Options{Page: pg}
+	doc := layoutOf(t, d.w, d.in, opt)
+	if len(doc.Pages) != 1 {
+		t.Fatalf("PW-1 landscape: %d pages, want 1", len(doc.Pages))
+	}
+	all := strings.Join(strings.Fields(strings.Join(texts(doc.Pages[0], ""), " ")), " ")
+	for i, n := range d.w.Notes {
+		words := strings.Fields(n)
+		if !strings.Contains(all, strings.Join(words[:min(4, len(words))], " ")) {
+			t.Errorf("note %d is not on the sheet", i+1)
+		}
+	}
+	if strings.Contains(all, "continue") {
+		t.Errorf("the sheet still points to a notes sheet")
+	}
+	// In portrait the band has room: the standing note stays.
+	port, err := templates.Load("letter", false)
+	if err != nil {
+		t.Fatal(err)
+	}
+	pdoc := layoutOf(t, d.w, d.in, Options{Page: FromTemplate(port)})
+	if got := strings.Join(texts(pdoc.Pages[0], ""), " "); !strings.Contains(got, "Depths are below ground surface") {
+		t.Errorf("portrait PW-1 lost its standing note")
+	}
+}
