@@ -82,9 +82,10 @@ func (c *compoundPath) place(b canvas.Rect, build func(*canvas.Path), closed, jo
 	}
 	b = b.Expand(reach)
 	var quad *canvas.Path
-	if c.stroke && seg != nil && len(c.st.Dashes) == 0 {
-		// A straight segment's stroke is exactly this rectangle, so
-		// one ending square on the clip edge counts as inside.
+	if c.stroke && seg != nil {
+		// A straight segment's stroke is exactly this rectangle (its
+		// dashes parts of it), so one ending square on the clip edge
+		// counts as inside.
 		quad = segmentOutline(seg[0], seg[1], c.half)
 		b = quad.FastBounds()
 	}
@@ -97,6 +98,15 @@ func (c *compoundPath) place(b canvas.Rect, build func(*canvas.Path), closed, jo
 	}
 	sub := &canvas.Path{}
 	build(sub)
+	if c.stroke && quad == nil && joins && strokeInside(sub, c.st, c.cr) {
+		// The reach above is a bound for the joins; the stroke itself
+		// stays inside, so the subpath is drawn stroked, not outlined.
+		build(c.whole)
+		return
+	}
+	if len(c.st.Dashes) > 0 {
+		quad = nil // a cut dashed segment is outlined dash by dash below
+	}
 	if c.fill {
 		area := sub
 		if !closed {
@@ -114,7 +124,7 @@ func (c *compoundPath) place(b canvas.Rect, build func(*canvas.Path), closed, jo
 	}
 	outline := sub
 	if len(c.st.Dashes) > 0 {
-		outline = outline.Dash(0, c.st.Dashes...)
+		outline = outline.Dash(0, dashLengths(c.st)...)
 	}
 	outline = outline.Stroke(c.st.StrokeWidth, canvas.ButtCap, canvas.MiterJoin, canvas.Tolerance)
 	if part := clipToRect(outline, c.cr); !part.Empty() {

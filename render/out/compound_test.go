@@ -124,3 +124,27 @@ func TestPathInEveryBackend(t *testing.T) {
 		}
 	}
 }
+
+// A dashed polyline whose stroke stays inside its clip (though within
+// the miter reach of the edge) is written as one stroked path with its
+// dash array, in the page's own lengths: SVG 1.1 §11.4 reads
+// stroke-dasharray in user units, here millimetres, so a dash of 4 pt is
+// 4 × 25.4/72 = 1.41111 mm whatever the stroke's width.
+func TestDashedStrokeKeptAsStroke(t *testing.T) {
+	p := &draw.Page{Width: 100, Height: 100, Items: []draw.Item{
+		draw.Clip{Rect: draw.Rect{X: 10, Y: 10, W: 50, H: 50}, Items: []draw.Item{
+			draw.Path{Style: draw.Style{Stroke: draw.Black, StrokeWidth: 2, Dash: []float64{4, 2}},
+				Subpaths: []draw.Subpath{{Points: []draw.Point{{X: 12, Y: 20}, {X: 30, Y: 24}, {X: 58, Y: 20}}}}},
+		}},
+	}}
+	b, err := SVG(&draw.Document{Date: "2024-01-01T00:00:00Z", Pages: []*draw.Page{p}}, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !bytes.Contains(b, []byte("stroke-dasharray:1.41111 .705556")) {
+		t.Errorf("no stroked path with a 4-pt, 2-pt dash array in\n%s", b)
+	}
+	if bytes.Count(b, []byte("<path")) != 1 {
+		t.Errorf("want the polyline as one path, got %d", bytes.Count(b, []byte("<path")))
+	}
+}

@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"image"
 	"image/color"
+	stddraw "image/draw"
 	_ "image/jpeg" // Image items may hold JPEG bytes
 	_ "image/png"
 	"math"
@@ -198,9 +199,22 @@ func (p *painter) style(s draw.Style) (st canvas.Style, fill, stroke bool) {
 	if stroke {
 		st.Stroke = canvas.Paint{Color: rgba(s.Stroke)}
 		st.StrokeWidth = width * mmPerPt
+		// canvas's renderers read a style's dashes in stroke widths
+		// (each scales them by the width: canvas.ScaleDash).
 		st.Dashes = dashes(s.Dash)
+		for i := range st.Dashes {
+			st.Dashes[i] /= st.StrokeWidth
+		}
 	}
 	return st, fill, stroke
+}
+
+// strokeInside says whether the area st's stroke of cp paints (its
+// outline undashed, with the style's own caps and joins: dashes only take
+// parts of it) lies within cr. Then the clip cuts nothing.
+func strokeInside(cp *canvas.Path, st canvas.Style, cr canvas.Rect) bool {
+	outline := cp.Stroke(st.StrokeWidth, st.StrokeCapper, st.StrokeJoiner, canvas.Tolerance)
+	return cr.Expand(edgeSlack).Contains(outline.FastBounds())
 }
 
 // clipped draws a path cut exactly to the clip rectangle.
@@ -222,6 +236,11 @@ func (p *painter) clipped(cp *canvas.Path, st canvas.Style, fill, stroke bool, c
 		return
 	case !cr.Overlaps(b):
 		return
+	case stroke && strokeInside(cp, st, cr):
+		// The reach above is a bound; the stroke itself stays inside,
+		// so the path is drawn as a stroke, not as its cut outline.
+		p.r.RenderPath(cp, st, canvas.Identity)
+		return
 	}
 	if fill {
 		fs := canvas.DefaultStyle
@@ -238,7 +257,7 @@ func (p *painter) clipped(cp *canvas.Path, st canvas.Style, fill, stroke bool, c
 	if stroke {
 		outline := cp
 		if len(st.Dashes) > 0 {
-			outline = outline.Dash(0, st.Dashes...)
+			outline = outline.Dash(0, dashLengths(st)...)
 		}
 		outline = outline.Stroke(st.StrokeWidth, canvas.ButtCap, canvas.MiterJoin, canvas.Tolerance)
 		ss := canvas.DefaultStyle
@@ -251,6 +270,13 @@ func (p *painter) clipped(cp *canvas.Path, st canvas.Style, fill, stroke bool, c
 
 // dashes converts a dash pattern to millimetres, dropping one that would
 // draw nothing or never end (no positive length).
+// dashLengths are st's dashes in canvas millimetres, for cutting a path
+// into its dashes here.
+func dashLengths(st canvas.Style) []float64 {
+	_, d := canvas.ScaleDash(st.StrokeWidth, 0, st.Dashes)
+	return d
+}
+
 func dashes(d []float64) []float64 {
 	if len(d) == 0 {
 		return nil
@@ -407,9 +433,15 @@ func (p *painter) image(im draw.Image, clip *draw.Rect, path string) {
 	}
 	if pr, ok := p.r.(pdfRenderer); ok && format == "jpeg" {
 		// A JPEG stays JPEG in the PDF (DCTDecode): canvas encodes it
-		// again at its own quality, which the layout's strips share
-		// (wallimage.StripJPEGQuality), rather than as Flate pixels
+		// again at its own quality (75, finer than the layout's strips,
+		// wallimage.StripJPEGQuality), rather than as Flate pixels
 		// several times the size.
+		if g, ok := img.(*image.Gray); ok {
+			// canvas writes every image as DeviceRGB: three components.
+			rgb := image.NewRGBA(g.Bounds())
+			stddraw.Draw(rgb, rgb.Bounds(), g, g.Bounds().Min, stddraw.Src)
+			img = rgb
+		}
 		pr.SetImageEncoding(canvas.Lossy)
 		defer pr.SetImageEncoding(canvas.Lossless)
 	}

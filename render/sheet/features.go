@@ -158,8 +158,56 @@ func (p *painter) wallStrips(g featureGeom) []draw.Item {
 	return append(items, lines)
 }
 
-// traceSteps is the number of segments a sinusoid is drawn with.
-const traceSteps = 120
+// traceSteps is the finest division of a sinusoid; traceTolerance (pt)
+// how far its drawn polyline may stray from it, a twentieth of the
+// thinnest trace's width, so a flat trace takes a few points, not 121.
+const (
+	traceSteps     = 120
+	traceTolerance = 0.04
+)
+
+// sampleCurve samples at(u), u from 0 to 1, on a grid of steps segments,
+// keeping only the grid points needed for the polyline through them to
+// stay within tol of every grid point (Douglas–Peucker over the grid).
+func sampleCurve(at func(u float64) draw.Point, steps int, tol float64) []draw.Point {
+	grid := make([]draw.Point, steps+1)
+	for k := range grid {
+		grid[k] = at(float64(k) / float64(steps))
+	}
+	keep := make([]bool, len(grid))
+	keep[0], keep[steps] = true, true
+	var simplify func(i, j int)
+	simplify = func(i, j int) {
+		a, b := grid[i], grid[j]
+		dx, dy := b.X-a.X, b.Y-a.Y
+		n := math.Hypot(dx, dy)
+		far, worst := -1, tol
+		for k := i + 1; k < j; k++ {
+			q := grid[k]
+			d := math.Hypot(q.X-a.X, q.Y-a.Y)
+			if n > 0 {
+				d = math.Abs(dx*(q.Y-a.Y)-dy*(q.X-a.X)) / n
+			}
+			if d > worst {
+				far, worst = k, d
+			}
+		}
+		if far < 0 {
+			return
+		}
+		keep[far] = true
+		simplify(i, far)
+		simplify(far, j)
+	}
+	simplify(0, steps)
+	out := make([]draw.Point, 0, 16)
+	for k, q := range grid {
+		if keep[k] {
+			out = append(out, q)
+		}
+	}
+	return out
+}
 
 // traces draws each feature's sinusoid across the strip: solid from
 // picks, dashed where only a dip was given (the trace it implies).
@@ -176,12 +224,10 @@ func (p *painter) traces(g featureGeom) []draw.Item {
 			continue
 		}
 		fr := l.frameOf(f)
-		var pts []draw.Point
-		for k := 0; k <= traceSteps; k++ {
-			u := float64(k) / traceSteps
-			az := fr.AzimuthAt(u)
-			pts = append(pts, draw.Point{X: g.strip.X + u*g.strip.W, Y: p.y(fit.DepthAt(az))})
+		at := func(u float64) draw.Point {
+			return draw.Point{X: g.strip.X + u*g.strip.W, Y: p.y(fit.DepthAt(fr.AzimuthAt(u)))}
 		}
+		pts := sampleCurve(at, traceSteps, traceTolerance)
 		st := draw.Style{Stroke: ink, StrokeWidth: 0.8}
 		if f.IsWaterBearing() {
 			st = draw.Style{Stroke: waterBlue, StrokeWidth: 1.1}

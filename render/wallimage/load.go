@@ -35,9 +35,12 @@ const (
 	workWidth  = 720
 	workHeight = 16384
 	// StripJPEGQuality is the quality a photographic strip is embedded
-	// at: canvas's PDF writer encodes JPEG at this quality too, so the
-	// strip it re-encodes loses next to nothing more.
-	StripJPEGQuality = 75
+	// at: at 200 dpi as printed its artefacts are below what a sheet
+	// shows (compared by eye with the lossless strip on the demo's BR-1),
+	// and it brings that sheet within issue 15's size targets. canvas's
+	// PDF writer encodes the decoded pixels again at its fixed quality
+	// 75, finer than this.
+	StripJPEGQuality = 65
 	// lineArtColours: an image of at most this many colours is line art
 	// or a flat palette, kept lossless (PNG) where JPEG would smear it.
 	lineArtColours = 16
@@ -183,7 +186,11 @@ func (im *Image) Strip(top, bottom float64, w, h int) ([]byte, error) {
 	xdraw.CatmullRom.Scale(dst, dst.Bounds(), im.Pix, src, xdraw.Src, nil)
 	var buf bytes.Buffer
 	if !im.LineArt && opaque(dst) {
-		if err := jpeg.Encode(&buf, dst, &jpeg.Options{Quality: StripJPEGQuality}); err != nil {
+		var pic image.Image = dst
+		if g := grey(dst); g != nil {
+			pic = g // one component, not three
+		}
+		if err := jpeg.Encode(&buf, pic, &jpeg.Options{Quality: StripJPEGQuality}); err != nil {
 			return nil, err
 		}
 		return buf.Bytes(), nil
@@ -192,6 +199,18 @@ func (im *Image) Strip(top, bottom float64, w, h int) ([]byte, error) {
 		return nil, err
 	}
 	return buf.Bytes(), nil
+}
+
+// grey is im as one channel when every pixel is a grey (R = G = B), else nil.
+func grey(im *image.RGBA) *image.Gray {
+	g := image.NewGray(im.Bounds())
+	for i, j := 0, 0; i+3 < len(im.Pix); i, j = i+4, j+1 {
+		if im.Pix[i] != im.Pix[i+1] || im.Pix[i] != im.Pix[i+2] {
+			return nil
+		}
+		g.Pix[j] = im.Pix[i]
+	}
+	return g
 }
 
 // opaque says whether every pixel is fully opaque: JPEG has no alpha.
