@@ -405,6 +405,14 @@ func (p *painter) image(im draw.Image, clip *draw.Rect, path string) {
 		// decoded pixels again as PNG, at length, to the same picture.
 		img = canvas.Image{Image: img, Bytes: im.Data, Mimetype: "image/" + format}
 	}
+	if pr, ok := p.r.(pdfRenderer); ok && format == "jpeg" {
+		// A JPEG stays JPEG in the PDF (DCTDecode): canvas encodes it
+		// again at its own quality, which the layout's strips share
+		// (wallimage.StripJPEGQuality), rather than as Flate pixels
+		// several times the size.
+		pr.SetImageEncoding(canvas.Lossy)
+		defer pr.SetImageEncoding(canvas.Lossless)
+	}
 	p.r.RenderImage(img, m)
 }
 

@@ -10,7 +10,7 @@ import (
 	"fmt"
 	"image"
 	"image/draw"
-	_ "image/jpeg" // wall images may be JPEG
+	"image/jpeg"
 	"image/png"
 	"io"
 	"os"
@@ -34,6 +34,13 @@ const (
 	// by 16384 rows at most, 47 MiB of RGBA at worst.
 	workWidth  = 720
 	workHeight = 16384
+	// StripJPEGQuality is the quality a photographic strip is embedded
+	// at: canvas's PDF writer encodes JPEG at this quality too, so the
+	// strip it re-encodes loses next to nothing more.
+	StripJPEGQuality = 75
+	// lineArtColours: an image of at most this many colours is line art
+	// or a flat palette, kept lossless (PNG) where JPEG would smear it.
+	lineArtColours = 16
 )
 
 // Image is a decoded wall image at working resolution.
@@ -41,6 +48,9 @@ type Image struct {
 	Pix           *image.RGBA
 	Format        string // png, jpeg or tiff
 	Width, Height int    // of the file, as decoded
+	// LineArt: a palette image or one of few colours, whose strips are
+	// PNG; a photographic (continuous-tone) image's strips are JPEG.
+	LineArt bool
 }
 
 // ErrFormat is returned for a file that is not a PNG, JPEG or TIFF.
@@ -103,7 +113,26 @@ func Decode(data []byte) (*Image, error) {
 	if b.Dx() != cfg.Width || b.Dy() != cfg.Height {
 		return nil, fmt.Errorf("%s image decodes to %d×%d pixels but its header says %d×%d", format, b.Dx(), b.Dy(), cfg.Width, cfg.Height)
 	}
-	return &Image{Pix: working(src), Format: format, Width: b.Dx(), Height: b.Dy()}, nil
+	pix := working(src)
+	_, paletted := src.(*image.Paletted)
+	return &Image{Pix: pix, Format: format, Width: b.Dx(), Height: b.Dy(), LineArt: paletted || fewColours(pix, lineArtColours)}, nil
+}
+
+// fewColours says whether im has at most n distinct colours; it stops
+// counting at n+1, so the set stays small whatever the image.
+func fewColours(im *image.RGBA, n int) bool {
+	seen := make(map[[4]uint8]struct{}, n+1)
+	b := im.Bounds()
+	for y := b.Min.Y; y < b.Max.Y; y++ {
+		row := im.Pix[im.PixOffset(b.Min.X, y):im.PixOffset(b.Max.X, y)]
+		for i := 0; i+3 < len(row); i += 4 {
+			seen[[4]uint8{row[i], row[i+1], row[i+2], row[i+3]}] = struct{}{}
+			if len(seen) > n {
+				return false
+			}
+		}
+	}
+	return true
 }
 
 func checkSize(w, h int) error {
@@ -132,7 +161,10 @@ func working(src image.Image) *image.RGBA {
 }
 
 // Strip cuts the rows between fractions top and bottom of the image's
-// height (0 top, 1 bottom) and resamples them to w × h pixels, as PNG.
+// height (0 top, 1 bottom) and resamples them to w × h pixels: as JPEG
+// at StripJPEGQuality for a photographic image, as PNG for line art (see
+// Image.LineArt). The caller sizes w × h to the strip as printed, so the
+// bytes embedded in every format are the ones drawn.
 func (im *Image) Strip(top, bottom float64, w, h int) ([]byte, error) {
 	if im == nil || im.Pix == nil {
 		return nil, errors.New("no image")
@@ -150,10 +182,26 @@ func (im *Image) Strip(top, bottom float64, w, h int) ([]byte, error) {
 	dst := image.NewRGBA(image.Rect(0, 0, w, h))
 	xdraw.CatmullRom.Scale(dst, dst.Bounds(), im.Pix, src, xdraw.Src, nil)
 	var buf bytes.Buffer
-	if err := (&png.Encoder{CompressionLevel: png.BestSpeed}).Encode(&buf, dst); err != nil {
+	if !im.LineArt && opaque(dst) {
+		if err := jpeg.Encode(&buf, dst, &jpeg.Options{Quality: StripJPEGQuality}); err != nil {
+			return nil, err
+		}
+		return buf.Bytes(), nil
+	}
+	if err := (&png.Encoder{CompressionLevel: png.BestCompression}).Encode(&buf, dst); err != nil {
 		return nil, err
 	}
 	return buf.Bytes(), nil
+}
+
+// opaque says whether every pixel is fully opaque: JPEG has no alpha.
+func opaque(im *image.RGBA) bool {
+	for i := 3; i < len(im.Pix); i += 4 {
+		if im.Pix[i] != 0xff {
+			return false
+		}
+	}
+	return true
 }
 
 // LoadAll reads every [[wall_image]] of a well, the files named relative

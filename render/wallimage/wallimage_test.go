@@ -160,3 +160,42 @@ func TestDecodeTIFFAndJPEG(t *testing.T) {
 		}
 	}
 }
+
+// A continuous-tone image's strip is JPEG at the stated quality, a
+// few-colour one's PNG: JPEG's own header (SOI marker FF D8, from the
+// JFIF/ITU T.81 standard) and PNG's signature (RFC 2083) tell them apart.
+func TestStripEncoding(t *testing.T) {
+	photo := image.NewRGBA(image.Rect(0, 0, 64, 64))
+	for y := range 64 {
+		for x := range 64 {
+			photo.Set(x, y, color.RGBA{uint8(x * 4), uint8(y * 4), uint8((x + y) * 2), 255})
+		}
+	}
+	lines := image.NewGray(image.Rect(0, 0, 64, 64))
+	for x := range 64 {
+		lines.SetGray(x, 32, color.Gray{Y: 255})
+	}
+	for _, c := range []struct {
+		name string
+		im   image.Image
+		head []byte
+	}{{"photographic", photo, []byte{0xff, 0xd8}}, {"line art", lines, []byte("\x89PNG")}} {
+		var buf bytes.Buffer
+		png.Encode(&buf, c.im)
+		im, err := Decode(buf.Bytes())
+		if err != nil {
+			t.Fatal(err)
+		}
+		data, err := im.Strip(0, 1, 16, 16)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if !bytes.HasPrefix(data, c.head) {
+			t.Errorf("%s strip starts % x", c.name, data[:4])
+		}
+		again, _ := im.Strip(0, 1, 16, 16)
+		if !bytes.Equal(data, again) {
+			t.Errorf("%s strip differs between runs", c.name)
+		}
+	}
+}
