@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"io/fs"
 	"os"
+	"path"
 	"path/filepath"
 	"slices"
 	"sort"
@@ -155,9 +156,20 @@ func (c *Cache) RecordFrom(key, source, hash string, outputs []string) {
 	outs := sorted(outputs)
 	c.mu.Lock()
 	defer c.mu.Unlock()
+	drawn := map[string]bool{} // the kinds of file this run wrote
+	for _, o := range outs {
+		drawn[path.Ext(o)] = true
+	}
 	for _, o := range c.entries[key].Outputs {
-		if !slices.Contains(outs, o) {
-			c.orphans[o] = true
+		switch {
+		case slices.Contains(outs, o):
+		case drawn[path.Ext(o)]:
+			c.orphans[o] = true // a name the well no longer draws
+		default:
+			// A format this run did not ask for (render --format svg
+			// after svg,pdf): the file is still the well's last drawing
+			// in that format, not stale, and stays tremie's to replace.
+			c.files[o] = true
 		}
 	}
 	for _, o := range outs {

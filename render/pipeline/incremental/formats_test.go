@@ -1,0 +1,38 @@
+package incremental
+
+import (
+	"fmt"
+	"os"
+	"path/filepath"
+	"testing"
+)
+
+// A well drawn as SVG and PDF, then as SVG alone (render --format svg):
+// its PDF is still its last drawing in that format, not a stale output
+// of a well that is gone, and stays tremie's to replace. A name the well
+// no longer draws in a format it did draw (one sheet, then two) is stale.
+func TestFewerFormatsLeaveNoStaleOutput(t *testing.T) {
+	dir := t.TempDir()
+	src := filepath.Join(dir, "MW-1.toml")
+	for _, f := range []string{"MW-1.toml", "MW-1.svg", "MW-1.pdf", "MW-1-sheet1.svg", "MW-1-sheet2.svg"} {
+		if err := os.WriteFile(filepath.Join(dir, f), []byte("x"), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	c, err := Load(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	c.RecordFrom("MW-1", src, "h1", []string{"MW-1.svg", "MW-1.pdf"})
+	c.RecordFrom("MW-1", src, "h2", []string{"MW-1.svg"})
+	if s := c.Stale([]string{"MW-1"}); len(s) != 0 {
+		t.Errorf("after --format svg: stale %v, want none", s)
+	}
+	if !c.Owns("MW-1.pdf") {
+		t.Error("the PDF tremie wrote is no longer known as its own")
+	}
+	c.RecordFrom("MW-1", src, "h3", []string{"MW-1-sheet1.svg", "MW-1-sheet2.svg"})
+	if s := c.Stale([]string{"MW-1"}); fmt.Sprint(s) != "[MW-1.svg]" {
+		t.Errorf("after the well went to two sheets: stale %v, want [MW-1.svg]", s)
+	}
+}
