@@ -365,22 +365,20 @@ func yieldNotes(r *quantity.Report) []string {
 }
 
 func writeOrderText(w io.Writer, o *quantity.Order) {
-	c := schema.TrimFloat(o.Contingency, 2)
 	if len(o.For) == 0 && len(o.Held) > 0 {
 		fmt.Fprintf(w, "No order: every well is left out (below)\n")
-		fmt.Fprintf(w, "\nLeft out of both lists: %s, whose sizes are likely a unit slip (rule SIZE-PLAUSIBLE); correct them first\n", strings.Join(o.Held, ", "))
-		return
-	}
-	if o.Planned {
-		fmt.Fprintf(w, "Order for the planned wells %s\n", strings.Join(o.For, ", "))
 	} else {
-		fmt.Fprintf(w, "Order (no well is planned: ordering for all %d wells)\n", len(o.For))
-	}
-	fmt.Fprintf(w, "  bags to order add %s %% to each volume before rounding up to whole bags\n", c)
-	writeLinesText(w, o.Lines, true)
-	if len(o.AsBuilt) > 0 {
-		fmt.Fprintf(w, "\nAs built, to reconcile: %s\n", strings.Join(o.AsBuilt, ", "))
-		writeLinesText(w, o.AsBuiltLines, false)
+		if o.Planned {
+			fmt.Fprintf(w, "Order for the planned wells %s\n", strings.Join(o.For, ", "))
+		} else {
+			fmt.Fprintf(w, "Order (no well is planned: ordering for all %d wells)\n", len(o.For))
+		}
+		fmt.Fprintf(w, "  bags to order add %s %% to each volume before rounding up to whole bags\n", schema.TrimFloat(o.Contingency, 2))
+		writeLinesText(w, o.Lines, true)
+		if len(o.AsBuilt) > 0 {
+			fmt.Fprintf(w, "\nAs built, to reconcile: %s\n", strings.Join(o.AsBuilt, ", "))
+			writeLinesText(w, o.AsBuiltLines, false)
+		}
 	}
 	if len(o.Held) > 0 {
 		fmt.Fprintf(w, "\nLeft out of both lists: %s, whose sizes are likely a unit slip (rule SIZE-PLAUSIBLE); correct them first\n", strings.Join(o.Held, ", "))
