@@ -59,18 +59,10 @@ func (p *painter) rasterLine(s draw.Shape) bool {
 		return false
 	}
 	a, b := p.pos(s.Points[0].X, s.Points[0].Y), p.pos(s.Points[1].X, s.Points[1].Y)
-	d := b.Sub(a)
-	n := d.Norm(st.StrokeWidth / 2) // a zero-length segment paints nothing, as with a butt cap
-	if n.X == 0 && n.Y == 0 {
+	q := segmentOutline(a, b, st.StrokeWidth/2) // empty for a zero-length segment, as with a butt cap
+	if q.Empty() {
 		return true
 	}
-	n = n.Rot90CCW()
-	q := &canvas.Path{}
-	q.MoveTo(a.X+n.X, a.Y+n.Y)
-	q.LineTo(b.X+n.X, b.Y+n.Y)
-	q.LineTo(b.X-n.X, b.Y-n.Y)
-	q.LineTo(a.X-n.X, a.Y-n.Y)
-	q.Close()
 	fs := canvas.DefaultStyle
 	fs.Fill = st.Stroke
 	fs.Stroke = canvas.Paint{}
