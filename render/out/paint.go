@@ -306,8 +306,6 @@ func (p *painter) clipped(cp *canvas.Path, st canvas.Style, fill, stroke bool, c
 	}
 }
 
-// dashes converts a dash pattern to millimetres, dropping one that would
-// draw nothing or never end (no positive length).
 // dashLengths are st's dashes in canvas millimetres, for cutting a path
 // into its dashes here.
 func dashLengths(st canvas.Style) []float64 {
@@ -315,6 +313,8 @@ func dashLengths(st canvas.Style) []float64 {
 	return d
 }
 
+// dashes converts a dash pattern to millimetres, dropping one that would
+// draw nothing or never end (no positive length).
 func dashes(d []float64) []float64 {
 	if len(d) == 0 {
 		return nil
