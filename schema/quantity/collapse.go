@@ -133,6 +133,8 @@ func CollapseLoads(w *schema.Well, y *Yields) []CollapseLoad {
 	var out []CollapseLoad
 	sections := w.CrossSections()
 	for _, col := range groutColumns(w) {
+		dens := columnDensities(col, y, w.Units)
+		low := col[len(col)-1]
 		var best CollapseLoad
 		found := false
 		for _, cs := range sections.Within(col[0].Top, col[len(col)-1].Bottom) {
@@ -147,11 +149,10 @@ func CollapseLoads(w *schema.Well, y *Yields) []CollapseLoad {
 				continue
 			}
 			at := cs.Bottom
-			outside, ok := columnPressure(col, at, y, w.Units)
+			outside, ok := columnPressure(col, dens, at)
 			if !ok {
 				break
 			}
-			low := col[len(col)-1]
 			inside := 0.0
 			if low.HasWaterInside && at > low.WaterInside {
 				inside = waterKgPerM3 * gravity * float64(at-low.WaterInside)
@@ -163,8 +164,8 @@ func CollapseLoads(w *schema.Well, y *Yields) []CollapseLoad {
 					continue
 				}
 				c := CollapseLoad{Fills: col, Top: col[0].Top, Bottom: low.Bottom, At: at, Pipe: p,
-					Outside: outside, Inside: inside, WaterStated: low.HasWaterInside, WaterTop: low.WaterInside, Rating: rating}
-				c.Density, c.Measured, _ = slurryDensity(low, y, w.Units)
+					Outside: outside, Inside: inside, WaterStated: low.HasWaterInside, WaterTop: low.WaterInside, Rating: rating,
+					Density: dens[len(dens)-1].kgm3, Measured: dens[len(dens)-1].measured}
 				if !found || c.Fraction() > best.Fraction()+1e-12 {
 					best, found = c, true
 				}
@@ -177,20 +178,36 @@ func CollapseLoads(w *schema.Well, y *Yields) []CollapseLoad {
 	return out
 }
 
+// density is one fill's slurry density as slurryDensity gives it.
+type density struct {
+	kgm3            float64
+	measured, known bool
+}
+
+// columnDensities are the slurry densities of a column's fills, in its
+// order, worked once per column rather than once per slab and pipe.
+func columnDensities(col []*schema.Fill, y *Yields, u schema.Units) []density {
+	out := make([]density, len(col))
+	for i, f := range col {
+		d := &out[i]
+		d.kgm3, d.measured, d.known = slurryDensity(f, y, u)
+	}
+	return out
+}
+
 // columnPressure is the pressure of a grout column at depth at: each
-// fill's slurry density x g x its height above at. False when a fill's
-// density is not known.
-func columnPressure(col []*schema.Fill, at schema.Length, y *Yields, u schema.Units) (float64, bool) {
+// fill's slurry density (dens, from columnDensities) x g x its height
+// above at. False when a fill's density is not known.
+func columnPressure(col []*schema.Fill, dens []density, at schema.Length) (float64, bool) {
 	var p float64
-	for _, f := range col {
+	for i, f := range col {
 		if f.Top >= at {
 			break
 		}
-		d, _, ok := slurryDensity(f, y, u)
-		if !ok {
+		if !dens[i].known {
 			return 0, false
 		}
-		p += d * gravity * float64(min(f.Bottom, at)-f.Top)
+		p += dens[i].kgm3 * gravity * float64(min(f.Bottom, at)-f.Top)
 	}
 	return p, true
 }

@@ -1,7 +1,6 @@
 package starter
 
 import (
-	"fmt"
 	"strings"
 
 	"github.com/tremie-dev/tremie/schema"
@@ -58,26 +57,7 @@ func writeOptional(b *strings.Builder, parts []part, u schema.DepthUnit) {
 	b.WriteString("\n")
 	wrapWith(b, "##", OptionalMark+" this kind of well may record. To use one, delete the first \"#\" of each of its lines and write the recorded values; the reference is schema/FORMAT.md.")
 	for _, p := range parts {
-		spec := tableAt(schema.WellFile, p.path)
-		b.WriteString("#\n")
-		if p.note != "" {
-			wrapWith(b, "##", p.note)
-		} else if spec != nil && spec.Doc != "" {
-			wrapWith(b, "##", spec.Doc)
-		}
-		if p.array {
-			fmt.Fprintf(b, "# [[%s]]\n", p.path)
-		} else {
-			fmt.Fprintf(b, "# [%s]\n", p.path)
-		}
-		for _, v := range p.vals {
-			k := spec.Key(v.key)
-			if k == nil {
-				panic("starter: " + p.path + "." + v.key + " is not a well key") // caught by every test
-			}
-			wrapWith(b, "##", keyComment(k, u))
-			fmt.Fprintf(b, "# %s = %s\n", v.key, schema.TOMLValue(k.Type, v.in(u)))
-		}
+		writeTable(b, p, u, true)
 	}
 }
 

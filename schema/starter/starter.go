@@ -128,35 +128,47 @@ func (v value) in(u schema.DepthUnit) any {
 
 func writeParts(b *strings.Builder, parts []part, u schema.DepthUnit) {
 	for _, p := range parts {
-		spec := tableAt(schema.WellFile, p.path)
-		b.WriteString("\n")
-		if p.note != "" {
-			wrap(b, p.note)
-		} else if spec != nil && spec.Doc != "" {
-			wrap(b, spec.Doc)
+		writeTable(b, p, u, false)
+	}
+}
+
+// writeTable writes one table: its note (else the table's own doc), its
+// header and each value with its key's comment. commented writes it as
+// the optional section does: every line begins with "#", a TOML line
+// with "# " and its explanation with "##".
+func writeTable(b *strings.Builder, p part, u schema.DepthUnit, commented bool) {
+	sep, cmt, lead := "\n", "#", ""
+	if commented {
+		sep, cmt, lead = "#\n", "##", "# "
+	}
+	spec := tableAt(schema.WellFile, p.path)
+	b.WriteString(sep)
+	if p.note != "" {
+		wrapWith(b, cmt, p.note)
+	} else if spec != nil && spec.Doc != "" {
+		wrapWith(b, cmt, spec.Doc)
+	}
+	if p.array {
+		fmt.Fprintf(b, "%s[[%s]]\n", lead, p.path)
+	} else {
+		fmt.Fprintf(b, "%s[%s]\n", lead, p.path)
+	}
+	for _, v := range p.vals {
+		k := spec.Key(v.key)
+		if k == nil {
+			panic("starter: " + p.path + "." + v.key + " is not a well key") // caught by every test
 		}
-		if p.array {
-			fmt.Fprintf(b, "[[%s]]\n", p.path)
-		} else {
-			fmt.Fprintf(b, "[%s]\n", p.path)
+		wrapWith(b, cmt, keyComment(k, u))
+		line := lead + v.key + " = " + schema.TOMLValue(k.Type, v.in(u))
+		switch {
+		case v.fill && v.inline != "":
+			line += "  # " + schema.FillMark + ": " + v.inline
+		case v.fill:
+			line += "  # " + schema.FillMark
+		case v.inline != "":
+			line += "  # " + v.inline
 		}
-		for _, v := range p.vals {
-			k := spec.Key(v.key)
-			if k == nil {
-				panic("starter: " + p.path + "." + v.key + " is not a well key") // caught by every test
-			}
-			wrap(b, keyComment(k, u))
-			line := v.key + " = " + schema.TOMLValue(k.Type, v.in(u))
-			switch {
-			case v.fill && v.inline != "":
-				line += "  # " + schema.FillMark + ": " + v.inline
-			case v.fill:
-				line += "  # " + schema.FillMark
-			case v.inline != "":
-				line += "  # " + v.inline
-			}
-			b.WriteString(line + "\n")
-		}
+		b.WriteString(line + "\n")
 	}
 }
 
