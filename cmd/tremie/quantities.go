@@ -269,11 +269,8 @@ func mixLine(row quantity.Row, u schema.Units) string {
 	want, unit := schema.SlurryDensityIn(d, u)
 	s := fmt.Sprintf("expected %.2f %s", want, unit)
 	if row.Yield.Water > 0 {
-		water := quantity.Number(row.Yield.Water.In(schema.USGallons)) + " gal"
-		if !u.Imperial() {
-			water = quantity.Number(row.Yield.Water.In(schema.Litres)) + " L"
-		}
-		s = fmt.Sprintf("%s water per %s, %s", water, quantity.FormatBag(row.Yield.BagMass, u), s)
+		water, wunit := waterPerBag(row.Yield, u)
+		s = fmt.Sprintf("%s %s water per %s, %s", quantity.Number(water), wunit, quantity.FormatBag(row.Yield.BagMass, u), s)
 	}
 	if row.Yield.Stated > 0 {
 		s += " (stated in the yields file)"
@@ -283,6 +280,15 @@ func mixLine(row quantity.Row, u schema.Units) string {
 		s += fmt.Sprintf("; measured %s %s (%+.1f %%)", schema.TrimFloat(got, 2), unit, (row.Fill.Density/d-1)*100)
 	}
 	return s
+}
+
+// waterPerBag is a grout's mix water per bag, in gallons, or litres in a
+// well in metres.
+func waterPerBag(y quantity.Yield, u schema.Units) (float64, string) {
+	if u.Imperial() {
+		return y.Water.In(schema.USGallons), "gal"
+	}
+	return y.Water.In(schema.Litres), "L"
 }
 
 // screenFlowLine is a supply well's screen arithmetic at its pumping
@@ -365,22 +371,20 @@ func yieldNotes(r *quantity.Report) []string {
 }
 
 func writeOrderText(w io.Writer, o *quantity.Order) {
-	c := schema.TrimFloat(o.Contingency, 2)
 	if len(o.For) == 0 && len(o.Held) > 0 {
 		fmt.Fprintf(w, "No order: every well is left out (below)\n")
-		fmt.Fprintf(w, "\nLeft out of both lists: %s, whose sizes are likely a unit slip (rule SIZE-PLAUSIBLE); correct them first\n", strings.Join(o.Held, ", "))
-		return
-	}
-	if o.Planned {
-		fmt.Fprintf(w, "Order for the planned wells %s\n", strings.Join(o.For, ", "))
 	} else {
-		fmt.Fprintf(w, "Order (no well is planned: ordering for all %d wells)\n", len(o.For))
-	}
-	fmt.Fprintf(w, "  bags to order add %s %% to each volume before rounding up to whole bags\n", c)
-	writeLinesText(w, o.Lines, true)
-	if len(o.AsBuilt) > 0 {
-		fmt.Fprintf(w, "\nAs built, to reconcile: %s\n", strings.Join(o.AsBuilt, ", "))
-		writeLinesText(w, o.AsBuiltLines, false)
+		if o.Planned {
+			fmt.Fprintf(w, "Order for the planned wells %s\n", strings.Join(o.For, ", "))
+		} else {
+			fmt.Fprintf(w, "Order (no well is planned: ordering for all %d wells)\n", len(o.For))
+		}
+		fmt.Fprintf(w, "  bags to order add %s %% to each volume before rounding up to whole bags\n", schema.TrimFloat(o.Contingency, 2))
+		writeLinesText(w, o.Lines, true)
+		if len(o.AsBuilt) > 0 {
+			fmt.Fprintf(w, "\nAs built, to reconcile: %s\n", strings.Join(o.AsBuilt, ", "))
+			writeLinesText(w, o.AsBuiltLines, false)
+		}
 	}
 	if len(o.Held) > 0 {
 		fmt.Fprintf(w, "\nLeft out of both lists: %s, whose sizes are likely a unit slip (rule SIZE-PLAUSIBLE); correct them first\n", strings.Join(o.Held, ", "))
@@ -686,10 +690,8 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 				}
 			}
 			if d, ok := row.Yield.Density(); ok && row.HasYield && f.Yield <= 0 {
-				m := &jsonMix{Water: r4(row.Yield.Water.In(schema.USGallons)), WaterUnit: "gal", Stated: row.Yield.Stated > 0}
-				if !u.Imperial() {
-					m.Water, m.WaterUnit = r4(row.Yield.Water.In(schema.Litres)), "L"
-				}
+				water, wunit := waterPerBag(row.Yield, u)
+				m := &jsonMix{Water: r4(water), WaterUnit: wunit, Stated: row.Yield.Stated > 0}
 				var want float64
 				want, m.DensityUnit = schema.SlurryDensityIn(d, u)
 				m.Expected = r4(want)

@@ -67,13 +67,12 @@ func (c *Cache) RecordOutputs(key, source, hash string, outs []Output) {
 		r := filepath.ToSlash(o.Rel)
 		rel[i], sizes[r], sums[r] = r, o.Size, o.Sum
 	}
-	c.RecordFrom(key, source, hash, rel)
 	c.mu.Lock()
-	e := c.entries[key]
+	defer c.mu.Unlock()
+	e := c.record(key, source, hash, rel)
 	e.Sizes, e.Sums = sizes, sums
 	c.entries[key] = e
 	c.appendJournal(journalLine{Key: key, Entry: &e})
-	c.mu.Unlock()
 }
 
 type fileData struct {
@@ -153,9 +152,14 @@ func (c *Cache) Record(key, hash string, outputs []string) {
 // RecordFrom is Record for a well read from source (a path relative to
 // the output directory), which Stale consults.
 func (c *Cache) RecordFrom(key, source, hash string, outputs []string) {
-	outs := sorted(outputs)
 	c.mu.Lock()
 	defer c.mu.Unlock()
+	c.record(key, source, hash, outputs)
+}
+
+// record is RecordFrom under c.mu; it returns the entry it stored.
+func (c *Cache) record(key, source, hash string, outputs []string) entry {
+	outs := sorted(outputs)
 	drawn := map[string]bool{} // the kinds of file this run wrote
 	for _, o := range outs {
 		drawn[path.Ext(o)] = true
@@ -175,8 +179,10 @@ func (c *Cache) RecordFrom(key, source, hash string, outputs []string) {
 	for _, o := range outs {
 		delete(c.orphans, o)
 	}
-	c.entries[key] = entry{Hash: hash, Outputs: outs, Source: filepath.ToSlash(source)}
+	e := entry{Hash: hash, Outputs: outs, Source: filepath.ToSlash(source)}
+	c.entries[key] = e
 	c.dirty = true
+	return e
 }
 
 // Forget marks a well's record out of date, so that it is drawn next

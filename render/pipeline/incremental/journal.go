@@ -15,11 +15,11 @@ import (
 // run replays it, so that only what was missing is drawn again.
 const JournalName = ".tremie-cache.journal"
 
-// journalLine is one record: a well drawn (Entry set) or forgotten.
+// journalLine is one well's record as drawn, or as forgotten (Forget
+// journals the entry with its hash cleared).
 type journalLine struct {
-	Key    string `json:"key"`
-	Entry  *entry `json:"entry,omitempty"`
-	Forget bool   `json:"forget,omitempty"`
+	Key   string `json:"key"`
+	Entry *entry `json:"entry,omitempty"`
 }
 
 // appendJournal writes one line under c.mu. A journal that cannot be
@@ -59,22 +59,13 @@ func (c *Cache) replayJournal() {
 	sc.Buffer(make([]byte, 0, 64*1024), 16<<20)
 	for sc.Scan() {
 		var l journalLine
-		if json.Unmarshal(sc.Bytes(), &l) != nil || l.Key == "" {
+		if json.Unmarshal(sc.Bytes(), &l) != nil || l.Key == "" || l.Entry == nil {
 			continue
 		}
-		if l.Forget {
-			if e, ok := c.entries[l.Key]; ok {
-				for _, o := range e.Outputs {
-					c.orphans[o] = true
-				}
-				delete(c.entries, l.Key)
-			}
-		} else if l.Entry != nil {
-			for _, o := range l.Entry.Outputs {
-				delete(c.orphans, o)
-			}
-			c.entries[l.Key] = *l.Entry
+		for _, o := range l.Entry.Outputs {
+			delete(c.orphans, o)
 		}
+		c.entries[l.Key] = *l.Entry
 		c.dirty = true
 	}
 }
