@@ -98,11 +98,15 @@ func (c *compoundPath) place(b canvas.Rect, build func(*canvas.Path), closed, jo
 	}
 	sub := &canvas.Path{}
 	build(sub)
-	if c.stroke && quad == nil && joins && strokeInside(sub, c.st, c.cr) {
-		// The reach above is a bound for the joins; the stroke itself
-		// stays inside, so the subpath is drawn stroked, not outlined.
-		build(c.whole)
-		return
+	var outline *canvas.Path // the stroke's area, computed once
+	if c.stroke && quad == nil && joins {
+		outline = strokeOutline(sub, c.st, false)
+		if fitsIn(outline, c.cr) {
+			// The reach above is a bound for the joins; the stroke itself
+			// stays inside, so the subpath is drawn stroked, not outlined.
+			build(c.whole)
+			return
+		}
 	}
 	if len(c.st.Dashes) > 0 {
 		quad = nil // a cut dashed segment is outlined dash by dash below
@@ -122,11 +126,9 @@ func (c *compoundPath) place(b canvas.Rect, build func(*canvas.Path), closed, jo
 		c.cutStroke = c.cutStroke.Append(clipToRect(quad, c.cr))
 		return
 	}
-	outline := sub
-	if len(c.st.Dashes) > 0 {
-		outline = outline.Dash(0, dashLengths(c.st)...)
+	if outline == nil || len(c.st.Dashes) > 0 {
+		outline = strokeOutline(sub, c.st, true)
 	}
-	outline = outline.Stroke(c.st.StrokeWidth, canvas.ButtCap, canvas.MiterJoin, canvas.Tolerance)
 	if part := clipToRect(outline, c.cr); !part.Empty() {
 		c.cutOutlines = append(c.cutOutlines, part)
 	}

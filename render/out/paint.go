@@ -59,18 +59,10 @@ func (p *painter) rasterLine(s draw.Shape) bool {
 		return false
 	}
 	a, b := p.pos(s.Points[0].X, s.Points[0].Y), p.pos(s.Points[1].X, s.Points[1].Y)
-	d := b.Sub(a)
-	n := d.Norm(st.StrokeWidth / 2) // a zero-length segment paints nothing, as with a butt cap
-	if n.X == 0 && n.Y == 0 {
+	q := segmentOutline(a, b, st.StrokeWidth/2) // empty for a zero-length segment, as with a butt cap
+	if q.Empty() {
 		return true
 	}
-	n = n.Rot90CCW()
-	q := &canvas.Path{}
-	q.MoveTo(a.X+n.X, a.Y+n.Y)
-	q.LineTo(b.X+n.X, b.Y+n.Y)
-	q.LineTo(b.X-n.X, b.Y-n.Y)
-	q.LineTo(a.X-n.X, a.Y-n.Y)
-	q.Close()
 	fs := canvas.DefaultStyle
 	fs.Fill = st.Stroke
 	fs.Stroke = canvas.Paint{}
@@ -246,11 +238,17 @@ func (p *painter) style(s draw.Style) (st canvas.Style, fill, stroke bool) {
 	return st, fill, stroke
 }
 
-// strokeInside says whether the area st's stroke of cp paints (its
-// outline undashed, with the style's own caps and joins: dashes only take
-// parts of it) lies within cr. Then the clip cuts nothing.
-func strokeInside(cp *canvas.Path, st canvas.Style, cr canvas.Rect) bool {
-	outline := cp.Stroke(st.StrokeWidth, st.StrokeCapper, st.StrokeJoiner, canvas.Tolerance)
+// strokeOutline is the area st's stroke of cp paints: undashed (dashes
+// only take parts of it), or cut into st's dashes when dashed says so.
+func strokeOutline(cp *canvas.Path, st canvas.Style, dashed bool) *canvas.Path {
+	if dashed && len(st.Dashes) > 0 {
+		cp = cp.Dash(0, dashLengths(st)...)
+	}
+	return cp.Stroke(st.StrokeWidth, st.StrokeCapper, st.StrokeJoiner, canvas.Tolerance)
+}
+
+// fitsIn says whether outline lies within cr: then the clip cuts nothing.
+func fitsIn(outline *canvas.Path, cr canvas.Rect) bool {
 	return cr.Expand(edgeSlack).Contains(outline.FastBounds())
 }
 
@@ -273,11 +271,19 @@ func (p *painter) clipped(cp *canvas.Path, st canvas.Style, fill, stroke bool, c
 		return
 	case !cr.Overlaps(b):
 		return
-	case stroke && strokeInside(cp, st, cr):
-		// The reach above is a bound; the stroke itself stays inside,
-		// so the path is drawn as a stroke, not as its cut outline.
-		p.r.RenderPath(cp, st, canvas.Identity)
-		return
+	}
+	var outline *canvas.Path // the stroke's area, computed once
+	if stroke {
+		outline = strokeOutline(cp, st, false)
+		if fitsIn(outline, cr) {
+			// The reach above is a bound; the stroke itself stays inside,
+			// so the path is drawn as a stroke, not as its cut outline.
+			p.r.RenderPath(cp, st, canvas.Identity)
+			return
+		}
+		if len(st.Dashes) > 0 {
+			outline = strokeOutline(cp, st, true)
+		}
 	}
 	if fill {
 		fs := canvas.DefaultStyle
@@ -292,11 +298,6 @@ func (p *painter) clipped(cp *canvas.Path, st canvas.Style, fill, stroke bool, c
 		}
 	}
 	if stroke {
-		outline := cp
-		if len(st.Dashes) > 0 {
-			outline = outline.Dash(0, dashLengths(st)...)
-		}
-		outline = outline.Stroke(st.StrokeWidth, canvas.ButtCap, canvas.MiterJoin, canvas.Tolerance)
 		ss := canvas.DefaultStyle
 		ss.Fill = st.Stroke
 		if part := clipToRect(outline, cr); !part.Empty() {
@@ -305,8 +306,6 @@ func (p *painter) clipped(cp *canvas.Path, st canvas.Style, fill, stroke bool, c
 	}
 }
 
-// dashes converts a dash pattern to millimetres, dropping one that would
-// draw nothing or never end (no positive length).
 // dashLengths are st's dashes in canvas millimetres, for cutting a path
 // into its dashes here.
 func dashLengths(st canvas.Style) []float64 {
@@ -314,6 +313,8 @@ func dashLengths(st canvas.Style) []float64 {
 	return d
 }
 
+// dashes converts a dash pattern to millimetres, dropping one that would
+// draw nothing or never end (no positive length).
 func dashes(d []float64) []float64 {
 	if len(d) == 0 {
 		return nil
