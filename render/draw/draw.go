@@ -154,3 +154,39 @@ func walk(items []Item, fn func(Item)) {
 		}
 	}
 }
+
+// WithRole returns it named role; a clip's items are named instead, in a
+// copy (items may share their marks).
+func WithRole(it Item, role string) Item {
+	switch v := it.(type) {
+	case Shape:
+		v.Role = role
+		return v
+	case Box:
+		v.Role = role
+		return v
+	case Circle:
+		v.Role = role
+		return v
+	case Text:
+		v.Role = role
+		return v
+	case Image:
+		v.Role = role
+		return v
+	case Path:
+		v.Role = role
+		return v
+	case Pattern:
+		v.Role = role
+		return v
+	case Clip:
+		items := make([]Item, len(v.Items))
+		for i, c := range v.Items {
+			items[i] = WithRole(c, role)
+		}
+		v.Items = items
+		return v
+	}
+	return it
+}

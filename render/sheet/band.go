@@ -99,13 +99,7 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 		notes := l.noteBlocks(nw - 2*bandPad)
 		nh := bandHeadH + bandPad + notesHeight(notes)
 		bp.height = max(h, min(nh, limit), 60)
-		bp.notes = notes
-		if nh > bp.height {
-			// Keep what fits; the rest goes on a notes sheet after the
-			// drawings, and the band says so.
-			bp.notes, bp.overflow = notesThatFit(notes, bp.height-(bandHeadH+bandPad+continueLineH+bandPad))
-			bp.notes, bp.overflow = notesWithout(bp.notes, bp.overflow, bp.height-(bandHeadH+bandPad))
-		}
+		bp.notes, bp.overflow = notesInBox(notes, bp.height)
 		score := bp.height
 		if len(bp.overflow) > 0 {
 			score += 1000 // a notes sheet only when nothing else fits
@@ -159,12 +153,19 @@ func (l *layout) planSideBand(legend []symbol) bandPlan {
 	}
 	notesAvail := avail - bp.height
 	notes := l.noteBlocks(w - 2*bandPad)
-	bp.notes = notes
-	if bandHeadH+bandPad+notesHeight(notes) > notesAvail {
-		bp.notes, bp.overflow = notesThatFit(notes, notesAvail-(bandHeadH+bandPad+continueLineH+bandPad))
-		bp.notes, bp.overflow = notesWithout(bp.notes, bp.overflow, notesAvail-(bandHeadH+bandPad))
-	}
+	bp.notes, bp.overflow = notesInBox(notes, notesAvail)
 	return bp
+}
+
+// notesInBox splits blocks into those a notes box of height h shows
+// under its heading and those that continue on a notes sheet after the
+// drawings (the box then says so on a line of its own).
+func notesInBox(blocks []noteBlock, h float64) (fit, rest []noteBlock) {
+	if bandHeadH+bandPad+notesHeight(blocks) <= h {
+		return blocks, nil
+	}
+	fit, rest = notesThatFit(blocks, h-(bandHeadH+bandPad+continueLineH+bandPad))
+	return notesWithout(fit, rest, h-(bandHeadH+bandPad))
 }
 
 // notesThatFit splits blocks into the first ones that fit height h and

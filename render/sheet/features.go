@@ -289,13 +289,8 @@ func (p *painter) dipTrack(g featureGeom, y0, y1 float64) []draw.Item {
 		const tick = 7.0
 		items = append(items, draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.7}, Points: []draw.Point{at, {X: at.X + tick*math.Sin(t), Y: at.Y - tick*math.Cos(t)}}, Role: "feature-tick:" + f.Path})
 		for k, it := range mk.Draw(at, 5) {
-			if c, ok := it.(draw.Circle); ok && k == 0 {
-				c.Role = "feature-dip:" + f.Path
-				it = c
-			}
-			if s, ok := it.(draw.Shape); ok && k == 0 {
-				s.Role = "feature-dip:" + f.Path
-				it = s
+			if k == 0 {
+				it = draw.WithRole(it, "feature-dip:"+f.Path)
 			}
 			items = append(items, it)
 		}

@@ -44,11 +44,7 @@ func (l *layout) flowIntoStrip() error {
 	if l.strip <= 0 {
 		return nil
 	}
-	var rows [][]string
-	if l.amountsOverflow() {
-		rows = l.amountRows()[l.bandPlan.amountsIn:]
-	}
-	notes := append(append([]noteBlock(nil), l.bandPlan.overflow...), l.calloutOverflow...)
+	rows, notes := l.overflow()
 	area := l.stripArea()
 	pages := l.flowNotes(area, rows, notes)
 	if len(pages) > 1 {

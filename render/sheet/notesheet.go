@@ -33,15 +33,21 @@ func (l *layout) notesArea() draw.Rect {
 // planNotesSheets flows the band's overflow onto notes sheets.
 func (l *layout) planNotesSheets() {
 	l.notesPages = nil
-	var rows [][]string
-	if l.amountsOverflow() {
-		rows = l.amountRows()[l.bandPlan.amountsIn:]
-	}
-	notes := append(append([]noteBlock(nil), l.bandPlan.overflow...), l.calloutOverflow...)
+	rows, notes := l.overflow()
 	if len(rows) == 0 && len(notes) == 0 {
 		return
 	}
 	l.notesPages = l.flowNotes(l.notesArea(), rows, notes)
+}
+
+// overflow is what the band could not hold: its amounts rows, then its
+// notes and the callouts' notes.
+func (l *layout) overflow() (rows [][]string, notes []noteBlock) {
+	if l.amountsOverflow() {
+		rows = l.amountRows()[l.bandPlan.amountsIn:]
+	}
+	notes = append(append([]noteBlock(nil), l.bandPlan.overflow...), l.calloutOverflow...)
+	return rows, notes
 }
 
 // flowNotes flows amounts rows and notes down columns of area, onto as

@@ -49,30 +49,7 @@ func marked(key string, items []draw.Item) []draw.Item {
 	role := "symbol " + key
 	out := make([]draw.Item, len(items))
 	for i, it := range items {
-		switch v := it.(type) {
-		case draw.Box:
-			v.Role = role
-			it = v
-		case draw.Shape:
-			v.Role = role
-			it = v
-		case draw.Circle:
-			v.Role = role
-			it = v
-		case draw.Path:
-			v.Role = role
-			it = v
-		case draw.Pattern:
-			v.Role = role
-			it = v
-		case draw.Image:
-			v.Role = role
-			it = v
-		case draw.Clip:
-			v.Items = marked(key, v.Items)
-			it = v
-		}
-		out[i] = it
+		out[i] = draw.WithRole(it, role)
 	}
 	return out
 }
