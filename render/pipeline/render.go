@@ -190,12 +190,6 @@ func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt Rend
 		return err
 	}
 	rd.Sheets = len(doc.Pages)
-	counts := map[string]int{} // sheet files per extension, for the stale-sheet sweep
-	for _, f := range opt.Formats {
-		if f.PerSheet {
-			counts[f.Ext] = len(doc.Pages)
-		}
-	}
 	docs := []outputDoc{{doc: doc, base: base, several: "-sheet"}}
 	pw, ph := portrait(w.Setting.Page)
 	if feats := features.WellSummary(w.Path, w.Well, pw, ph, r.SourceDate); feats != nil {
@@ -215,7 +209,7 @@ func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt Rend
 	}
 	for _, f := range opt.Formats {
 		if f.PerSheet {
-			removeStaleSheets(r.OutDir, base, f.Ext, counts[f.Ext], cache)
+			removeStaleSheets(r.OutDir, base, f.Ext, len(doc.Pages), cache)
 		}
 	}
 	return nil

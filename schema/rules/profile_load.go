@@ -106,7 +106,7 @@ func (r *profileReader) rule(prof *Profile, rl *Rule, t *schema.Table) {
 			continue
 		}
 		if prm, ok := rl.param(k); ok {
-			if f, ok := r.paramNumber(t, prm); ok {
+			if f, ok := r.number(t, k, prm); ok {
 				if prof.Values[rl.ID] == nil {
 					prof.Values[rl.ID] = map[string]float64{}
 				}
@@ -164,11 +164,6 @@ func (r *profileReader) number(t *schema.Table, k string, prm Param) (float64, b
 		return 0, false
 	}
 	return f, ok
-}
-
-// paramNumber reads parameter prm of a rule or purpose table.
-func (r *profileReader) paramNumber(t *schema.Table, prm Param) (float64, bool) {
-	return r.number(t, prm.Name, prm)
 }
 
 // severity reads "error", "warning" or "off".

@@ -229,7 +229,7 @@ func (r *profileReader) purposeTable(prof *Profile, rl *Rule, name string, t *sc
 		if !ok {
 			continue // not read: Done names it
 		}
-		if f, ok := r.paramNumber(t, prm); ok {
+		if f, ok := r.number(t, k, prm); ok {
 			r.setForPurposes(prof, rl, name, prm, f, kp)
 		}
 	}
