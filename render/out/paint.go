@@ -316,20 +316,13 @@ func dashLengths(st canvas.Style) []float64 {
 // dashes converts a dash pattern to millimetres, dropping one that would
 // draw nothing or never end (no positive length).
 func dashes(d []float64) []float64 {
-	if len(d) == 0 {
+	d = validDash(d)
+	if d == nil {
 		return nil
 	}
-	out := make([]float64, 0, len(d))
-	total := 0.0
-	for _, v := range d {
-		if !finite(v) || v < 0 {
-			return nil
-		}
-		out = append(out, v*mmPerPt)
-		total += v
-	}
-	if total <= 0 {
-		return nil
+	out := make([]float64, len(d))
+	for i, v := range d {
+		out[i] = v * mmPerPt
 	}
 	return out
 }
