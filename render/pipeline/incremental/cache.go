@@ -43,6 +43,10 @@ type entry struct {
 	// Source is the well file, relative to the output directory: a well
 	// left out of a run is stale only when this file is gone.
 	Source string `json:"source,omitempty"`
+	// Kept are outputs in formats the last run did not ask for (render
+	// --format svg after svg,pdf): still the well's last drawing in that
+	// format, so neither stale while the well is there nor another's.
+	Kept []string `json:"kept,omitempty"`
 	// Sizes and Sums are each output's length and SHA-256 as written: an
 	// output whose size has changed since (a file truncated by a crash or
 	// by hand) is drawn again.
@@ -157,6 +161,15 @@ func (c *Cache) RecordFrom(key, source, hash string, outputs []string) {
 	c.record(key, source, hash, outputs)
 }
 
+// owned is every file the entry stands for: its outputs and those kept
+// from formats the last run did not draw.
+func (e entry) owned() []string {
+	if len(e.Kept) == 0 {
+		return e.Outputs
+	}
+	return append(slices.Clone(e.Outputs), e.Kept...)
+}
+
 // record is RecordFrom under c.mu; it returns the entry it stored.
 func (c *Cache) record(key, source, hash string, outputs []string) entry {
 	outs := sorted(outputs)
@@ -164,22 +177,20 @@ func (c *Cache) record(key, source, hash string, outputs []string) entry {
 	for _, o := range outs {
 		drawn[path.Ext(o)] = true
 	}
-	for _, o := range c.entries[key].Outputs {
+	var kept []string
+	for _, o := range c.entries[key].owned() {
 		switch {
 		case slices.Contains(outs, o):
 		case drawn[path.Ext(o)]:
 			c.orphans[o] = true // a name the well no longer draws
 		default:
-			// A format this run did not ask for (render --format svg
-			// after svg,pdf): the file is still the well's last drawing
-			// in that format, not stale, and stays tremie's to replace.
-			c.files[o] = true
+			kept = append(kept, o)
 		}
 	}
 	for _, o := range outs {
 		delete(c.orphans, o)
 	}
-	e := entry{Hash: hash, Outputs: outs, Source: filepath.ToSlash(source)}
+	e := entry{Hash: hash, Outputs: outs, Source: filepath.ToSlash(source), Kept: sorted(kept)}
 	c.entries[key] = e
 	c.dirty = true
 	return e
@@ -216,7 +227,7 @@ func (c *Cache) Stale(present []string) []string {
 	claimed := map[string]bool{}
 	for k, e := range c.entries {
 		if here[k] {
-			for _, o := range e.Outputs {
+			for _, o := range e.owned() {
 				claimed[o] = true
 			}
 		}
@@ -240,14 +251,14 @@ func (c *Cache) Stale(present []string) []string {
 		}
 		if e.Source != "" {
 			if _, err := os.Stat(filepath.Join(c.dir, filepath.FromSlash(e.Source))); err == nil {
-				for _, o := range e.Outputs {
+				for _, o := range e.owned() {
 					claimed[o] = true
 				}
 				continue // its well is still there, only not in this run
 			}
 		}
 		alive := false
-		for _, o := range e.Outputs {
+		for _, o := range e.owned() {
 			if consider(o) || seen[o] {
 				alive = true
 			}
@@ -320,7 +331,7 @@ func (c *Cache) Owns(rel string) bool {
 		return true
 	}
 	for _, e := range c.entries {
-		if slices.Contains(e.Outputs, rel) {
+		if slices.Contains(e.owned(), rel) {
 			return true
 		}
 	}

@@ -36,3 +36,27 @@ func TestFewerFormatsLeaveNoStaleOutput(t *testing.T) {
 		t.Errorf("after the well went to two sheets: stale %v, want [MW-1.svg]", s)
 	}
 }
+
+// The PDF kept from a run of more formats is the well's: once the well
+// file is gone, it is stale with the rest of the well's outputs.
+func TestKeptFormatIsStaleWhenTheWellIsGone(t *testing.T) {
+	dir := t.TempDir()
+	src := filepath.Join(dir, "MW-1.toml")
+	for _, f := range []string{"MW-1.toml", "MW-1.svg", "MW-1.pdf"} {
+		if err := os.WriteFile(filepath.Join(dir, f), []byte("x"), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	c, err := Load(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	c.RecordFrom("MW-1", src, "h1", []string{"MW-1.svg", "MW-1.pdf"})
+	c.RecordFrom("MW-1", src, "h2", []string{"MW-1.svg"})
+	if err := os.Remove(src); err != nil {
+		t.Fatal(err)
+	}
+	if s := c.Stale(nil); fmt.Sprint(s) != "[MW-1.pdf MW-1.svg]" {
+		t.Errorf("after the well file went: stale %v, want [MW-1.pdf MW-1.svg]", s)
+	}
+}
