@@ -101,6 +101,15 @@ func (f *cmdFlags) parse(args []string) (operands []string, code int, ok bool) {
 
 // usageError reports a bad command line with the usage; it returns
 // exitUsage.
+// operandOr is a command's one optional operand, or def when none is
+// given (the caller has refused more than one).
+func operandOr(operands []string, def string) string {
+	if len(operands) > 0 {
+		return operands[0]
+	}
+	return def
+}
+
 func (f *cmdFlags) usageError(format string, args ...any) int {
 	fmt.Fprintf(f.stderr, "tremie %s: %s\n\n", f.cmd.name, fmt.Sprintf(format, args...))
 	f.writeUsage(f.stderr)

@@ -27,10 +27,7 @@ func runSchema(args []string, stdout, stderr io.Writer) int {
 	if len(rest) > 1 {
 		return fset.usageError("name at most one kind of file")
 	}
-	kind := "well"
-	if len(rest) == 1 {
-		kind = rest[0]
-	}
+	kind := operandOr(rest, "well")
 	b, err := jsonschema.Generate(kind)
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie schema: %v\n", err)

@@ -30,10 +30,7 @@ func runServe(args []string, stdout, stderr io.Writer) int {
 	if len(pos) > 1 {
 		return fset.usageError("name one project directory")
 	}
-	dir := "."
-	if len(pos) == 1 {
-		dir = pos[0]
-	}
+	dir := operandOr(pos, ".")
 	if st, err := os.Stat(dir); err != nil || !st.IsDir() {
 		fmt.Fprintf(stderr, "tremie serve: %s is not a directory\n", dir)
 		return exitInput

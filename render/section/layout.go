@@ -68,7 +68,6 @@ func newLayout(in Input, tpl *templates.Template, wells []*placed, line polyline
 	}
 	l.regions()
 	l.scales()
-	l.ordered = drawnOrder(wells)
 	l.joins, l.units = correlate(l.ordered)
 	l.water = chooseWater(in.Section.WaterDate, wells)
 	l.collectNotes()
@@ -137,9 +136,9 @@ func (l *layout) xAt(c float64) float64 { return l.xOrigin + l.hs.points(c-l.cha
 // order; the moved ones are noted on the sheet, since they no longer
 // stand at their true distance.
 func (l *layout) spreadColumns() {
-	order := make([]*placed, len(l.wells))
-	copy(order, l.wells)
-	sortByX(order)
+	// Spreading keeps the order, so it is the drawn order too.
+	l.ordered = drawnOrder(l.wells)
+	order := l.ordered
 	minGap := colWidth + 6
 	for i := 1; i < len(order); i++ {
 		if order[i].x-order[i-1].x < minGap {
