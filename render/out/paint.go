@@ -221,10 +221,7 @@ func (p *painter) style(s draw.Style) (st canvas.Style, fill, stroke bool) {
 	if fill {
 		st.Fill = canvas.Paint{Color: rgba(s.Fill)}
 	}
-	width := s.StrokeWidth
-	if width <= 0 {
-		width = hairline
-	}
+	width := strokeWidth(s)
 	if stroke {
 		st.Stroke = canvas.Paint{Color: rgba(s.Stroke)}
 		st.StrokeWidth = width * mmPerPt
@@ -236,6 +233,15 @@ func (p *painter) style(s draw.Style) (st canvas.Style, fill, stroke bool) {
 		}
 	}
 	return st, fill, stroke
+}
+
+// strokeWidth is the width s strokes at, in points: a hairline where s
+// gives none.
+func strokeWidth(s draw.Style) float64 {
+	if s.StrokeWidth <= 0 {
+		return hairline
+	}
+	return s.StrokeWidth
 }
 
 // strokeOutline is the area st's stroke of cp paints: undashed (dashes

@@ -201,10 +201,7 @@ func appendPDFMarks(c []byte, t *draw.Tile, g draw.Path) []byte {
 		c = append(c, " rg"...)
 	}
 	if stroke {
-		w := g.StrokeWidth
-		if w <= 0 {
-			w = hairline
-		}
+		w := strokeWidth(g.Style)
 		c = append(c, ' ')
 		c = appendPDFColor(c, g.Stroke)
 		c = append(c, " RG "...)

@@ -165,10 +165,7 @@ func appendSVGMarks(b []byte, t *draw.Tile, g draw.Path) []byte {
 		b = append(b, "none"...)
 	}
 	if stroke {
-		w := g.StrokeWidth
-		if w <= 0 {
-			w = hairline
-		}
+		w := strokeWidth(g.Style)
 		b = append(b, `" stroke="`...)
 		b = appendSVGColor(b, g.Stroke)
 		b = append(b, `" stroke-width="`...)

@@ -97,11 +97,7 @@ func markReach(s draw.Style) float64 {
 	if s.Stroke.None() {
 		return 0
 	}
-	w := s.StrokeWidth
-	if w <= 0 {
-		w = hairline
-	}
-	return 2 * w
+	return 2 * strokeWidth(s)
 }
 
 // cellsOver gives the range of tile cells (i0..i1, j0..j1) whose copy of
