@@ -12,7 +12,6 @@ import (
 	"image/draw"
 	"image/jpeg"
 	"image/png"
-	"io"
 	"os"
 	"path/filepath"
 
@@ -61,22 +60,9 @@ var ErrFormat = errors.New("not a PNG, JPEG or TIFF image")
 
 // Load reads and checks an image file.
 func Load(path string) (*Image, error) {
-	f, err := os.Open(path)
-	if err != nil {
-		return nil, err
-	}
-	defer f.Close()
-	st, err := f.Stat()
-	if err != nil {
-		return nil, err
-	}
-	if st.IsDir() {
-		return nil, fmt.Errorf("%s is a directory, not an image", path)
-	}
-	if st.Size() > MaxFileBytes {
-		return nil, fmt.Errorf("%s is %d bytes; the limit is %d (64 MiB)", path, st.Size(), MaxFileBytes)
-	}
-	data, err := io.ReadAll(io.LimitReader(f, MaxFileBytes+1))
+	// Only a regular file, within the limit: a FIFO named as the image
+	// would block the render for ever, /dev/zero would never end.
+	data, err := schema.ReadInput(path, MaxFileBytes)
 	if err != nil {
 		return nil, err
 	}

@@ -3,6 +3,7 @@ package wallimage
 import (
 	"bytes"
 	"encoding/binary"
+	"errors"
 	"hash/crc32"
 	"image"
 	"image/color"
@@ -11,7 +12,9 @@ import (
 	"os"
 	"path/filepath"
 	"strings"
+	"syscall"
 	"testing"
+	"time"
 
 	"github.com/tremie-dev/tremie/schema"
 	"golang.org/x/image/tiff"
@@ -197,5 +200,35 @@ func TestStripEncoding(t *testing.T) {
 		if !bytes.Equal(data, again) {
 			t.Errorf("%s strip differs between runs", c.name)
 		}
+	}
+}
+
+// TestLoadRefusesWhatNeverEnds: a FIFO or a device named as a wall image
+// is refused at once (issue 15's reproducer: a FIFO blocked render for
+// ever), and a directory gets a message naming it.
+func TestLoadRefusesWhatNeverEnds(t *testing.T) {
+	dir := t.TempDir()
+	fifo := filepath.Join(dir, "wall.png")
+	if err := syscall.Mkfifo(fifo, 0o644); err != nil {
+		t.Skipf("no FIFOs here: %v", err)
+	}
+	done := make(chan error, 1)
+	go func() { _, err := Load(fifo); done <- err }()
+	select {
+	case err := <-done:
+		if !errors.Is(err, schema.ErrNotRegular) || !strings.Contains(err.Error(), "named pipe") {
+			t.Errorf("FIFO: err = %v, want a named pipe refused", err)
+		}
+	case <-time.After(5 * time.Second):
+		t.Fatal("loading a FIFO as a wall image blocked")
+	}
+	link := filepath.Join(dir, "zero.png")
+	if err := os.Symlink("/dev/zero", link); err == nil {
+		if _, err := Load(link); !errors.Is(err, schema.ErrNotRegular) {
+			t.Errorf("/dev/zero: err = %v, want it refused", err)
+		}
+	}
+	if _, err := Load(dir); !errors.Is(err, schema.ErrNotRegular) || !strings.Contains(err.Error(), dir) {
+		t.Errorf("directory: err = %v, want it refused by name", err)
 	}
 }

@@ -2,7 +2,6 @@ package exchange
 
 import (
 	"fmt"
-	"os"
 	"slices"
 	"sort"
 	"strconv"
@@ -10,6 +9,8 @@ import (
 	"time"
 
 	"github.com/BurntSushi/toml"
+
+	"github.com/tremie-dev/tremie/schema"
 )
 
 // value is one cell to write: a number or text ("" = blank).
@@ -36,7 +37,7 @@ type book struct {
 func Layout(files []string) (*Workbook, error) {
 	b := &book{}
 	for _, f := range files {
-		data, err := os.ReadFile(f)
+		data, err := schema.ReadInput(f, schema.MaxTextFile)
 		if err != nil {
 			return nil, err
 		}

@@ -5,10 +5,10 @@ import (
 	"encoding/csv"
 	"fmt"
 	"io"
-	"os"
 	"path/filepath"
 	"strings"
 
+	"github.com/tremie-dev/tremie/schema"
 	"github.com/xuri/excelize/v2"
 )
 
@@ -54,14 +54,9 @@ func (e *CellError) Error() string { return e.Cell.String() + ": " + e.Msg }
 // (which of the two it is, its header tells: an Intervals CSV has a kind
 // column).
 func readFile(path string) ([]*sheet, error) {
-	st, err := os.Stat(path)
-	if err != nil {
-		return nil, err
-	}
-	if st.Size() > maxFileBytes {
-		return nil, fmt.Errorf("%s: %d bytes, more than the %d MiB tremie reads", path, st.Size(), maxFileBytes>>20)
-	}
-	data, err := os.ReadFile(path)
+	// Only a regular file within the limit: a FIFO or /dev/zero named as
+	// the workbook would block or never end.
+	data, err := schema.ReadInput(path, maxFileBytes)
 	if err != nil {
 		return nil, err
 	}
