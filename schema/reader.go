@@ -19,6 +19,9 @@ type reader struct {
 	lines map[string]int    // key path -> line, for every key; scanned when needed
 	pos   map[string]keyPos // with columns; scanned on the first error
 	errs  ErrorList
+	// entries counts the tables of each array kind read so far in the
+	// well ("fill.tag" over every fill), for MaxEntries.
+	entries map[string]int
 
 	onRead func(path, key string) // tests: called for every key the loader reads
 }
@@ -237,7 +240,7 @@ func (t *table) str(k string) string {
 	}
 	if len(s) > MaxText {
 		t.r.errAt(t.keyPath(k), "%s is %d bytes long; text in a well file is limited to %d", k, len(s), MaxText)
-		return s[:0]
+		return s[:MaxText] // not empty: one message, not a second "must not be empty"
 	}
 	return s
 }
@@ -465,9 +468,22 @@ func (t *table) list(k string) []*table {
 		t.r.errAt(t.keyPath(k), "%s must be an array of tables ([[%s]]), not %s", k, stripIndex(t.keyPath(k)), typeName(v))
 		return nil
 	}
-	if len(maps) > MaxEntries {
-		t.r.errAt(fmt.Sprintf("%s[%d]", t.keyPath(k), MaxEntries), "more than %d [[%s]] tables; no well has that many, and drawing them would take minutes", MaxEntries, stripIndex(t.keyPath(k)))
-		maps = maps[:MaxEntries]
+	// The bound is per well and kind: [[fill.tag]] counts the tags of
+	// every fill together, so that 100 fills of 2,000 tags each cannot
+	// run past it (that file is 7 MB and took minutes to check).
+	kind := stripIndex(t.keyPath(k))
+	if t.r.entries == nil {
+		t.r.entries = map[string]int{}
+	}
+	switch left := MaxEntries - t.r.entries[kind]; {
+	case left < 0: // reported once already
+		maps = nil
+	case len(maps) > left:
+		t.r.errAt(fmt.Sprintf("%s[%d]", t.keyPath(k), left), "more than %d [[%s]] tables in the well; no well has that many, and drawing them would take minutes", MaxEntries, kind)
+		maps = maps[:left]
+		t.r.entries[kind] = MaxEntries + 1
+	default:
+		t.r.entries[kind] += len(maps)
 	}
 	out := make([]*table, len(maps))
 	tables := make([]table, len(maps))

@@ -2,6 +2,7 @@ package schema
 
 import (
 	"errors"
+	"fmt"
 	"os"
 	"path/filepath"
 	"strings"
@@ -101,5 +102,30 @@ func TestCountAndTextLimits(t *testing.T) {
 	_, err = Load("long.toml", []byte(long))
 	if err == nil || !strings.Contains(err.Error(), "long.toml:5") || !strings.Contains(err.Error(), "limited to 4000") {
 		t.Errorf("10,000-character ID: %v", err)
+	}
+	if strings.Contains(err.Error(), "must not be empty") {
+		t.Errorf("a too-long ID is also called empty: %v", err)
+	}
+	// The bound is per well: 4 fills of 800 tags are 3,200 tags, and the
+	// 2,001st (the 401st of the third fill) is refused where it stands,
+	// once.
+	// Unbounded, 100 fills of 2,000 tags took minutes to check.
+	b.Reset()
+	b.WriteString(head)
+	for f := 0; f < 4; f++ {
+		fmt.Fprintf(&b, "[[fill]]\ntop = %d.0\nbottom = %d.0\nmaterial = \"filter-pack\"\n", f, f+1)
+		for i := 0; i < 800; i++ {
+			b.WriteString("[[fill.tag]]\nafter_bags = 1\ndepth = 1.0\n")
+		}
+	}
+	start := time.Now()
+	_, err = Load("tags.toml", []byte(b.String()))
+	// Line 12 + 2 x (4 + 2,400) + 4 opens the third fill's tags; its 401st
+	// tag is 400 x 3 lines further.
+	wantLine := fmt.Sprintf("tags.toml:%d", 12+2*(4+2400)+4+400*3)
+	if err == nil || !strings.Contains(err.Error(), wantLine) || !strings.Contains(err.Error(), "more than 2000 [[fill.tag]] tables in the well") || time.Since(start) > 5*time.Second {
+		t.Errorf("3,200 tags over 4 fills (want %s): %v after %v", wantLine, err, time.Since(start))
+	} else if n := strings.Count(err.Error(), "more than 2000"); n != 1 {
+		t.Errorf("the limit is reported %d times, want once: %v", n, err)
 	}
 }
