@@ -11,6 +11,7 @@ import (
 	"text/tabwriter"
 
 	"github.com/tremie-dev/tremie/render/pipeline"
+	"github.com/tremie-dev/tremie/render/table"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
@@ -747,7 +748,7 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Ord
 			rec[10], rec[14] = string(p), string(mu)
 			if row.Err != nil {
 				rec[20] = row.Err.Error()
-				cw.Write(rec)
+				cw.Write(table.InertRecord(rec))
 				continue
 			}
 			rec[9] = num(row.Calculated.In(p))
@@ -767,7 +768,7 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Ord
 			if row.Ratio > 0 {
 				rec[19] = num(row.Ratio)
 			}
-			cw.Write(rec)
+			cw.Write(table.InertRecord(rec))
 		}
 	}
 	lines := func(kind string, ts []*total, wells []string) {
@@ -781,7 +782,7 @@ func writeQuantitiesCSV(w io.Writer, wells []wellQuantities, order *quantity.Ord
 	caution[0], caution[20] = "caution", cautionText
 	prof := make([]string, len(quantitiesCSVHeader))
 	prof[0], prof[20] = "profile", strings.Join(profiles, "; ")
-	cw.Write(prof)
+	cw.Write(table.InertRecord(prof))
 	cw.Write(caution)
 	cw.Flush()
 	return cw.Error()
@@ -809,7 +810,7 @@ func csvTotal(cw *csv.Writer, kind string, t *total, note string) {
 		if t.Placed > 0 {
 			rec[18] = num(t.Placed.In(p))
 		}
-		cw.Write(rec)
+		cw.Write(table.InertRecord(rec))
 	}
 }
 

@@ -8,6 +8,7 @@ import (
 	"strconv"
 	"text/tabwriter"
 
+	"github.com/tremie-dev/tremie/render/table"
 	"github.com/tremie-dev/tremie/schema"
 )
 
@@ -84,10 +85,11 @@ func writeCSV(w io.Writer, rows []Row) error {
 	cw.Write(csvHeader)
 	for _, r := range rows {
 		f := r.Feature
-		cw.Write([]string{r.File, strconv.Itoa(r.Line), r.WellID, num(&r.Depth, 4), num(r.Elevation, 4), string(r.Units.Depth), string(f.Kind),
+		// Every field made inert: an ID or note a spreadsheet would run.
+		cw.Write(table.InertRecord([]string{r.File, strconv.Itoa(r.Line), r.WellID, num(&r.Depth, 4), num(r.Elevation, 4), string(r.Units.Depth), string(f.Kind),
 			num(r.Dip, 2), num(r.DipDir, 2), num(r.Strike, 2), num(r.PoleTrend, 2), num(r.PolePl, 2),
 			num(r.Aperture, 4), string(r.Units.Diameter), num(r.Inflow, 4), r.FlowUnit, string(f.Confidence), r.Method,
-			num(r.Hole, 4), num(r.Residual, 4), r.North, f.Note})
+			num(r.Hole, 4), num(r.Residual, 4), r.North, f.Note}))
 	}
 	cw.Write([]string{"caution", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", Caution})
 	cw.Flush()

@@ -490,3 +490,31 @@ func TestCSVCellsAreInert(t *testing.T) {
 		t.Errorf("a negative number became %q", got)
 	}
 }
+
+// TestInertField: in a record of strings a plain decimal number stays a
+// number, while anything a spreadsheet would evaluate is neutralised
+// (OWASP, "CSV Injection": =, +, -, @, tab, carriage return).
+func TestInertField(t *testing.T) {
+	for in, want := range map[string]string{
+		"-2.5":         "-2.5",
+		"1e-3":         "1e-3",
+		"-121.5846":    "-121.5846",
+		"12":           "12",
+		"-2+3":         "'-2+3",
+		"-1e-3+A1":     "'-1e-3+A1",
+		"+1":           "'+1",
+		"-":            "'-",
+		"-.":           "'-.",
+		"=1+1":         "'=1+1",
+		"@cmd":         "'@cmd",
+		"\r=x":         "'\r=x",
+		"MW-1":         "MW-1",
+		"-Inf":         "'-Inf",
+		"-0x1p-2":      "'-0x1p-2",
+		"wells/W.toml": "wells/W.toml",
+	} {
+		if got := InertField(in); got != want {
+			t.Errorf("InertField(%q) = %q, want %q", in, got, want)
+		}
+	}
+}
