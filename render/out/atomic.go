@@ -64,17 +64,89 @@ func (s *Staged) Commit() error {
 		os.Remove(s.tmp)
 		return fmt.Errorf("write %s: %w", s.dst, err)
 	}
-	// Sync the directory so the rename itself survives a crash; not every
-	// system allows it, and the data is already safe, so failure is ignored.
-	if d, derr := os.Open(filepath.Dir(s.dst)); derr == nil {
+	syncDir(filepath.Dir(s.dst))
+	return nil
+}
+
+// syncDir syncs a directory so that a rename in it survives a crash; not
+// every system allows it, and the data is already safe, so failure is
+// ignored.
+func syncDir(dir string) {
+	if d, err := os.Open(dir); err == nil {
 		d.Sync()
 		d.Close()
 	}
-	return nil
 }
 
 // Abort removes the staged file, leaving the destination as it was.
 func (s *Staged) Abort() { os.Remove(s.tmp) }
+
+// CommitAll puts every staged file in place, or none: each destination
+// that exists is first kept under a second name (a hard link, or where
+// the file system has none, the file moved aside; named as a temporary
+// file of this process, so that SweepTemps removes it if the run dies
+// here), and when a rename fails part-way (a directory stands where an
+// output goes, the disk is full) the files already renamed are put back.
+// The staged files are removed either way.
+func CommitAll(staged []*Staged) error {
+	type old struct {
+		name  string // "" where the destination was new
+		moved bool   // moved aside rather than linked: put back on failure
+	}
+	kept := make([]old, len(staged))
+	undo := func(renamed int) {
+		for i := range staged {
+			k := kept[i]
+			switch {
+			case i < renamed && k.name != "":
+				os.Rename(k.name, staged[i].dst)
+			case i < renamed:
+				os.Remove(staged[i].dst)
+			default:
+				staged[i].Abort()
+				if k.moved {
+					os.Rename(k.name, staged[i].dst)
+				} else if k.name != "" {
+					os.Remove(k.name)
+				}
+			}
+		}
+	}
+	for i, s := range staged {
+		st, err := os.Lstat(s.dst)
+		if err != nil {
+			continue // nothing there yet
+		}
+		if st.IsDir() {
+			undo(0)
+			return fmt.Errorf("write %s: a directory stands there", s.dst)
+		}
+		name := s.tmp + "0" // unique as the staged name is, and of its pattern
+		if err := os.Link(s.dst, name); err == nil {
+			kept[i] = old{name: name}
+		} else if err := os.Rename(s.dst, name); err == nil {
+			kept[i] = old{name: name, moved: true}
+		} else {
+			undo(0)
+			return fmt.Errorf("write %s: keeping the old file until all are written: %w", s.dst, err)
+		}
+	}
+	for i, s := range staged {
+		if err := os.Rename(s.tmp, s.dst); err != nil {
+			undo(i)
+			return fmt.Errorf("write %s: %w (none of the files written with it replaced)", s.dst, err)
+		}
+	}
+	for _, k := range kept {
+		if k.name != "" {
+			os.Remove(k.name)
+		}
+	}
+	if len(staged) > 0 {
+		syncDir(filepath.Dir(staged[0].dst))
+	}
+	return nil
+}
 
 // tempName matches the temporary files Stage makes; group 1 is the PID.
 var tempName = regexp.MustCompile(`^\..+\.tmp-([0-9]+)-[0-9]+$`)

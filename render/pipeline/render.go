@@ -205,7 +205,11 @@ func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt Rend
 	for _, f := range files {
 		rd.Outputs = append(rd.Outputs, filepath.Join(r.OutDir, f.name))
 		sum := sha256.Sum256(f.data)
-		rd.written = append(rd.written, incremental.Output{Rel: f.name, Size: int64(len(f.data)), Sum: hex.EncodeToString(sum[:])})
+		o := incremental.Output{Rel: f.name, Size: int64(len(f.data)), Sum: hex.EncodeToString(sum[:])}
+		if st, err := os.Stat(filepath.Join(r.OutDir, f.name)); err == nil {
+			o.ModTime = st.ModTime().UnixNano() // the time Recorded compares before hashing
+		}
+		rd.written = append(rd.written, o)
 	}
 	for _, f := range opt.Formats {
 		if f.PerSheet {
@@ -241,13 +245,8 @@ func commitAll(dir string, files []pending, cache *incremental.Cache, force bool
 		}
 		staged = append(staged, s)
 	}
-	for i, s := range staged {
-		if err := s.Commit(); err != nil {
-			for _, rest := range staged[i+1:] {
-				rest.Abort()
-			}
-			return &OutputError{err}
-		}
+	if err := out.CommitAll(staged); err != nil {
+		return &OutputError{err}
 	}
 	return nil
 }
