@@ -72,6 +72,9 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 		return code
 	}
 	if run.OutDir == "" {
+		if len(run.Problems) > 0 {
+			return exitInput // the project file that names it could not be read: printed above
+		}
 		return fset.usageError("name the output directory with -o OUTDIR")
 	}
 	rep, err := run.Render(opt)

@@ -2,6 +2,7 @@ package pipeline
 
 import (
 	"fmt"
+	"os"
 
 	"github.com/tremie-dev/tremie/schema/project"
 )
@@ -11,6 +12,12 @@ import (
 // belongs to; a directory whose wells belong to no project (or to
 // several) is taken with every default, as project.Default describes.
 func ResolveProject(dir string, opt Options) (*Run, *project.Project, error) {
+	// A well file named where the project is wanted would be taken as a
+	// project of one well, or of none when its project file is broken,
+	// and written all the same: refuse it at once.
+	if st, err := os.Stat(dir); err == nil && !st.IsDir() {
+		return nil, nil, fmt.Errorf("%s is a file; name the project's directory (the one holding project.toml)", dir)
+	}
 	r, err := Resolve([]string{dir}, opt)
 	if err != nil {
 		return nil, nil, err

@@ -34,7 +34,7 @@ func Select(p *project.Project, wells []*schema.Well, name string, ids []string)
 		}
 		s, ok := p.Section(name)
 		if !ok {
-			return nil, fmt.Errorf("%s: no section named %q (%s)", p.File, name, known(p))
+			return nil, fmt.Errorf("no section named %q (%s)", name, known(p))
 		}
 		defs = []project.Section{s}
 	default:
