@@ -36,6 +36,21 @@ func TestRenderIncremental(t *testing.T) {
 	if got := rendered(out); len(got) != 0 || !strings.Contains(out, "0 rendered, 7 unchanged, 0 failed") {
 		t.Fatalf("warm run drew %v\n%s", got, out)
 	}
+	// An output damaged without a change of size (one byte flipped) is
+	// drawn again; the other wells are not.
+	svg := filepath.Join(dir, "out", "MW-1.svg")
+	sheet, err := os.ReadFile(svg)
+	if err != nil {
+		t.Fatal(err)
+	}
+	sheet[len(sheet)/2] ^= 0x01
+	if err := os.WriteFile(svg, sheet, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	_, out, _ = runTremie(args...)
+	if got := rendered(out); len(got) != 1 || got[0] != "MW-1" {
+		t.Fatalf("after flipping a byte of MW-1.svg the run drew %v, want exactly MW-1\n%s", got, out)
+	}
 	// Saving a file with the same bytes changes nothing; a changed byte does.
 	mw2 := filepath.Join(dir, "wells", "MW-2.toml")
 	data, _ := os.ReadFile(mw2)

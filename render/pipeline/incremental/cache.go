@@ -47,18 +47,22 @@ type entry struct {
 	// --format svg after svg,pdf): still the well's last drawing in that
 	// format, so neither stale while the well is there nor another's.
 	Kept []string `json:"kept,omitempty"`
-	// Sizes and Sums are each output's length and SHA-256 as written: an
-	// output whose size has changed since (a file truncated by a crash or
-	// by hand) is drawn again.
+	// Sizes and Sums are each output's length and SHA-256 as written, and
+	// Times its modification time once in place (Unix nanoseconds): an
+	// output of another size, or of another time whose bytes no longer
+	// hash to its sum (a file truncated by a crash, damaged or edited), is
+	// drawn again (see Recorded).
 	Sizes map[string]int64  `json:"sizes,omitempty"`
 	Sums  map[string]string `json:"sums,omitempty"`
+	Times map[string]int64  `json:"times,omitempty"`
 }
 
 // Output is one file written for a well, as the cache records it.
 type Output struct {
-	Rel  string // relative to the output directory
-	Size int64
-	Sum  string // hex SHA-256 of the bytes written
+	Rel     string // relative to the output directory
+	Size    int64
+	Sum     string // hex SHA-256 of the bytes written
+	ModTime int64  // Unix nanoseconds, as the file system gives it once in place; 0 if unknown
 }
 
 // RecordOutputs is RecordFrom with each output's size and checksum, so
@@ -67,14 +71,18 @@ func (c *Cache) RecordOutputs(key, source, hash string, outs []Output) {
 	rel := make([]string, len(outs))
 	sizes := make(map[string]int64, len(outs))
 	sums := make(map[string]string, len(outs))
+	times := make(map[string]int64, len(outs))
 	for i, o := range outs {
 		r := filepath.ToSlash(o.Rel)
 		rel[i], sizes[r], sums[r] = r, o.Size, o.Sum
+		if o.ModTime != 0 {
+			times[r] = o.ModTime
+		}
 	}
 	c.mu.Lock()
 	defer c.mu.Unlock()
 	e := c.record(key, source, hash, rel)
-	e.Sizes, e.Sums = sizes, sums
+	e.Sizes, e.Sums, e.Times = sizes, sums, times
 	c.entries[key] = e
 	c.appendJournal(journalLine{Key: key, Entry: &e})
 }

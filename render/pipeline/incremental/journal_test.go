@@ -10,11 +10,12 @@ import (
 // saved its cache (killed) are known to the next run; a truncated output
 // is not.
 func TestJournalSurvivesAnInterruptedRun(t *testing.T) {
+	const svgSum = "d4dc56669143034f31aa309635d4113d9ad76a02b1739da22c965ed2049be9e6" // SHA-256 of "<svg/>"
 	dir := t.TempDir()
 	c, _ := Load(dir)
 	for _, k := range []string{"a", "b"} {
 		os.WriteFile(filepath.Join(dir, k+".svg"), []byte("<svg/>"), 0o644)
-		c.RecordOutputs(k, k+".toml", "h-"+k, []Output{{Rel: k + ".svg", Size: 6, Sum: "x"}})
+		c.RecordOutputs(k, k+".toml", "h-"+k, []Output{{Rel: k + ".svg", Size: 6, Sum: svgSum}})
 	}
 	// No Save: the run was killed. A torn line follows.
 	f, _ := os.OpenFile(filepath.Join(dir, JournalName), os.O_APPEND|os.O_WRONLY, 0)
