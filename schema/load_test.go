@@ -2,6 +2,7 @@ package schema
 
 import (
 	"errors"
+	"fmt"
 	"math"
 	"os"
 	"path/filepath"
@@ -398,6 +399,37 @@ func FuzzLoad(f *testing.F) {
 			f.Add(b)
 		}
 	}
+	// Reproducers of issue 15's bad-input campaign, each refused with a
+	// position (or loaded) at once.
+	head := "[units]\ndepth = \"ft\"\ndiameter = \"in\"\n[well]\nid = \"%s\"\npurpose = \"monitoring\"\ntotal_depth = 10.0\n[[borehole]]\ntop = 0.0\nbottom = 10.0\ndiameter = %s\n"
+	well := func(id, dia, extra string) { f.Add([]byte(fmt.Sprintf(head, id, dia) + extra)) }
+	well("MW-\U0001F6B0", "8.0", "")                // astral-plane text
+	well(`MW-\u001b]0;x\u0007\u001b[2J`, "8.0", "") // terminal escapes
+	well("=HYPERLINK(1)", "8.0", "")                // a formula for a spreadsheet
+	well("TWO-sheet1", "8.0", "")                   // a name another well's sheets take
+	well(strings.Repeat("W", 10000), "8.0", "")     // text past MaxText
+	well("HUGE", "1e6", "")                         // a hole a mile wide
+	well("X", "8.0", "[[lithology]]\ntop = 0.0\nbottom = 10.0\nuscs = \"SM\"\nextra.thing = 1\n")
+	for _, deep := range []int{10000, 100000} {
+		well("X", "8.0", "x = "+strings.Repeat("{a=", deep)+"1"+strings.Repeat("}", deep)+"\n")
+		well("X", "8.0", "x = "+strings.Repeat("[", deep)+"1"+strings.Repeat("]", deep)+"\n")
+	}
+	var many strings.Builder
+	for i := 0; i < 10000; i++ {
+		many.WriteString("[[water_level]]\ndepth = 5.0\n")
+	}
+	well("LEVELS", "8.0", many.String())
+	many.Reset()
+	for fill := 0; fill < 3; fill++ { // 2,100 tags over three fills
+		fmt.Fprintf(&many, "[[fill]]\ntop = %d.0\nbottom = %d.0\nmaterial = \"filter-pack\"\n", fill, fill+1)
+		for i := 0; i < 700; i++ {
+			many.WriteString("[[fill.tag]]\nafter_bags = 1\ndepth = 1.0\n")
+		}
+	}
+	well("TAGS", "8.0", many.String())
+	f.Add([]byte{})                                          // an empty file
+	f.Add([]byte("[well]\nid = \"A\"\n"))                    // no [units], no [[borehole]]
+	f.Add([]byte("[units]\ndepth = \"ft\"\n[[borehole]]\n")) // no [well]
 	f.Fuzz(func(t *testing.T, data []byte) {
 		w, err := Load("fuzz.toml", data)
 		if err == nil && w == nil {

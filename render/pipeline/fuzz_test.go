@@ -56,6 +56,23 @@ func FuzzWellToSVG(f *testing.F) {
 	f.Add(tenFoot("MW-\x1b]0;x\x07", "8.0", ""))
 	f.Add(tenFoot("DEEP", "8.0", "\n[extra]\nx = "+strings.Repeat("[", 10000)+strings.Repeat("]", 10000)+"\n"))
 	f.Add([]byte("x = " + strings.Repeat("[", 10000) + strings.Repeat("]", 10000) + "\n"))
+	for _, deep := range []int{10000, 100000} {
+		f.Add(tenFoot("NEST", "8.0", "\nx = "+strings.Repeat("{a=", deep)+"1"+strings.Repeat("}", deep)+"\n"))
+	}
+	f.Add(tenFoot("TWO-sheet1", "8.0", ""))
+	f.Add(tenFoot("=HYPERLINK(1)", "8.0", ""))
+	f.Add(tenFoot(strings.Repeat("W", 10000), "8.0", ""))
+	f.Add(tenFoot("X", "8.0", "\n[[lithology]]\ntop = 0.0\nbottom = 10.0\nuscs = \"SM\"\nextra.thing = 1\n"))
+	var tags strings.Builder
+	for fill := 0; fill < 3; fill++ { // 2,100 tags over three fills: refused
+		tags.WriteString("\n[[fill]]\ntop = 0.0\nbottom = 10.0\nmaterial = \"filter-pack\"\n")
+		for i := 0; i < 700; i++ {
+			tags.WriteString("[[fill.tag]]\nafter_bags = 1\ndepth = 1.0\n")
+		}
+	}
+	f.Add(tenFoot("TAGS", "8.0", tags.String()))
+	f.Add([]byte{})
+	f.Add([]byte("[well]\nid = \"A\"\n"))
 
 	svg, ok := out.LookupFormat("svg")
 	if !ok {

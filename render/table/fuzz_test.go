@@ -22,7 +22,11 @@ func FuzzTable(f *testing.F) {
 			f.Add(b)
 		}
 	}
-	f.Add([]byte("[units]\ndepth = \"ft\"\n[well]\nid = \"=HYPERLINK(1)\"\npurpose = \"monitoring\"\ntotal_depth = 10.0\n[[borehole]]\ntop = 0.0\nbottom = 10.0\ndiameter = 8.0\n"))
+	// Issue 15: cells a spreadsheet would run (=, +, -, @), terminal
+	// escapes and astral-plane text in the ID.
+	for _, id := range []string{"=HYPERLINK(1)", "+SUM(1)", "-2+3", "@cmd", `\u001b]0;x\u0007`, "MW-\U0001F6B0"} {
+		f.Add([]byte("[units]\ndepth = \"ft\"\n[well]\nid = \"" + id + "\"\npurpose = \"monitoring\"\ntotal_depth = 10.0\n[[borehole]]\ntop = 0.0\nbottom = 10.0\ndiameter = 8.0\n"))
+	}
 	f.Fuzz(func(t *testing.T, data []byte) {
 		w, err := schema.Load("fuzz.toml", data)
 		if err != nil {
@@ -39,6 +43,13 @@ func FuzzTable(f *testing.F) {
 		}
 		if len(recs) != 1+len(tb.Rows) {
 			t.Fatalf("%d records for %d rows", len(recs), len(tb.Rows))
+		}
+		for _, rec := range recs[1:] {
+			for _, field := range rec {
+				if InertField(field) != field {
+					t.Fatalf("a cell a spreadsheet would run: %q", field)
+				}
+			}
 		}
 		if err := tb.Markdown(&bytes.Buffer{}); err != nil {
 			t.Fatal(err)
