@@ -89,8 +89,8 @@ func TestPNGRendererPaintsLikeCanvas(t *testing.T) {
 func TestStrokeAreaPaintsLikeCanvasStroker(t *testing.T) {
 	const w = 0.5
 	polys := [][]canvas.Point{
-		{{X: 5, Y: 5}, {X: 15, Y: 5}, {X: 10, Y: 13}},    // mitred
-		{{X: 20, Y: 5}, {X: 40, Y: 7}, {X: 20, Y: 9}},    // one corner past the limit
+		{{X: 5, Y: 5}, {X: 15, Y: 5}, {X: 10, Y: 13}},     // mitred
+		{{X: 20, Y: 5}, {X: 40, Y: 7}, {X: 20, Y: 9}},     // one corner past the limit
 		{{X: 45, Y: 5}, {X: 46, Y: 5}, {X: 45.5, Y: 5.8}}, // the stroke fills it
 		{{X: 5, Y: 20}, {X: 5, Y: 30}, {X: 15, Y: 30}, {X: 15, Y: 20}},
 	}
