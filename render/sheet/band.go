@@ -507,7 +507,7 @@ func (l *layout) amountHead() []string {
 }
 
 // amountItems draws the band's table of calculated and placed amounts.
-func (l *layout) amountItems() []draw.Item {
+func (l *layout) amountItems(i int) []draw.Item {
 	if l.bandPlan.amountW == 0 {
 		return nil
 	}
@@ -515,11 +515,7 @@ func (l *layout) amountItems() []draw.Item {
 	more := ""
 	if k := l.bandPlan.amountsIn; k < len(rows) {
 		rows = rows[:k]
-		n, _ := l.number(len(l.sheets))
-		more = fmt.Sprintf("Amounts continue on sheet %d.", n)
-		if l.stripBoxes != nil {
-			more = "Amounts continue below."
-		}
+		more = fmt.Sprintf("Amounts continue %s.", l.continuesWhere(i, true))
 	}
 	return l.amountBox(l.bandPlan.amountR, "AMOUNTS PER FILL INTERVAL", rows, more == "", more)
 }
