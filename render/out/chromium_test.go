@@ -102,10 +102,12 @@ func TestChromiumComparisonSeesAFallbackFont(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	// Name a family no machine has in every text style: Chromium then
-	// falls back to its default face, as rsvg-convert does.
+	// Name a family no machine has in every text style, in place of the
+	// whole stack (the embedded face, the installed Go fonts, the
+	// generic family): Chromium then falls back to its default face, as
+	// a viewer that has neither the embedded nor the installed face does.
 	swapped := svg
-	for _, fam := range []string{"GoRegular", "Go-Bold", "Go-Italic", "GoMono"} {
+	for _, fam := range []string{"GoRegular,Go,sans-serif", "Go-Bold,Go,sans-serif", "Go-Italic,Go,sans-serif", "GoMono,Go Mono,monospace"} {
 		swapped = bytes.ReplaceAll(swapped, []byte("px "+fam+";"), []byte("px NoSuchFace;"))
 	}
 	if bytes.Equal(swapped, svg) {

@@ -7,8 +7,13 @@ import (
 	"os"
 	"os/exec"
 	"path/filepath"
+	"sort"
 	"strings"
 	"testing"
+
+	"golang.org/x/image/font"
+	"golang.org/x/image/font/sfnt"
+	"golang.org/x/image/math/fixed"
 
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/render/out"
@@ -21,14 +26,20 @@ const rsvgDPI = 200
 
 // TestRsvgTextStaysInItsBox opens every demo sheet in rsvg-convert
 // (librsvg: an independent SVG renderer; version 2.54 ignores @font-face
-// and sets text in a fontconfig fallback, here a wider face) and checks,
-// with text written as outlines (--text outlines), that no text leaves
-// the box layout measured for it. Written as text, it reports how many
-// would: the reason the option exists.
+// and looks each text's font-family up among the system's fonts through
+// Pango and fontconfig) and checks that no text leaves the box layout
+// measured for it. With text written as outlines (--text outlines) that
+// must hold everywhere. With text written as text (the default) it must
+// hold where the Go fonts are installed (Debian: fonts-go), since the
+// SVG's font stack names them after the embedded face (svgfontstack.go);
+// without them the text falls back to a wider face, and the count of
+// texts leaving their box is printed and the text part skipped.
 func TestRsvgTextStaysInItsBox(t *testing.T) {
 	rsvg := tool(t, "rsvg-convert text-box test", "librsvg2-bin", "rsvg-convert")
 	docs := demoDocs(t)
+	installed, why := installedGoFonts(t)
 	for _, mode := range []out.TextMode{out.TextAsOutlines, out.TextAsText} {
+		must := mode == out.TextAsOutlines || installed
 		total, escaped := 0, 0
 		for _, nd := range docs {
 			for i, p := range nd.doc.Pages {
@@ -39,7 +50,7 @@ func TestRsvgTextStaysInItsBox(t *testing.T) {
 				escapes := inked.escapes(decodePNG(t, img))
 				total += len(inked.boxes)
 				escaped += len(escapes)
-				if mode != out.TextAsOutlines {
+				if !must {
 					continue
 				}
 				for _, e := range escapes {
@@ -48,7 +59,126 @@ func TestRsvgTextStaysInItsBox(t *testing.T) {
 			}
 		}
 		t.Logf("rsvg-convert, text as %s: %d of %d texts leave their box", mode, escaped, total)
+		if !must {
+			msg := fmt.Sprintf("rsvg-convert text-box test of text as text skipped: %s (Debian: apt-get install fonts-go; .ci/run installs it); --text outlines is the remedy where they cannot be", why)
+			fmt.Println(msg)
+			t.Log(msg)
+		}
 	}
+}
+
+// installedGoFonts says whether fontconfig, which rsvg-convert asks (via
+// Pango) for the families an SVG names, resolves the installed family
+// of every face, in its weight and style, to a Go font whose advance
+// widths are those of the embedded face for every character the demo
+// sheets print, or narrower (Debian's fonts-go is version 2.008 of the
+// Go fonts, the embedded faces 2.010: 2.008 sets ¹ ² ³ ⁿ narrower and
+// lacks the other super- and subscript digits, which the sheets do not
+// print). why says what is missing.
+func installedGoFonts(t *testing.T) (ok bool, why string) {
+	t.Helper()
+	fcMatch, err := exec.LookPath("fc-match")
+	if err != nil {
+		return false, "no fc-match on PATH to ask fontconfig for the Go fonts (Debian: fontconfig)"
+	}
+	printed := demoRunes(t)
+	for _, f := range draw.FontStyles {
+		family, _ := out.SystemFamily(f)
+		pattern, style := family, "Regular"
+		switch f {
+		case draw.Bold:
+			pattern, style = family+":bold", "Bold"
+		case draw.Italic:
+			pattern, style = family+":italic", "Italic"
+		}
+		res, err := exec.Command(fcMatch, "-f", "%{family[0]}\t%{style[0]}\t%{file}", pattern).Output()
+		if err != nil {
+			return false, fmt.Sprintf("fc-match %q: %v", pattern, err)
+		}
+		got := strings.Split(string(res), "\t")
+		if len(got) != 3 || got[0] != family || got[1] != style {
+			return false, fmt.Sprintf("the Go fonts are not installed: fontconfig gives %q for %q", res, pattern)
+		}
+		if diff := advanceDiffs(t, f, got[2], printed); diff != "" {
+			return false, fmt.Sprintf("the installed %s (%s) is not the embedded face: %s", draw.FontName(f), got[2], diff)
+		}
+	}
+	return true, ""
+}
+
+// demoRunes is every character the demo sheets print.
+func demoRunes(t *testing.T) map[rune]bool {
+	t.Helper()
+	seen := map[rune]bool{}
+	var walk func(items []draw.Item)
+	walk = func(items []draw.Item) {
+		for _, it := range items {
+			switch it := it.(type) {
+			case draw.Text:
+				for _, r := range it.S {
+					seen[r] = true
+				}
+			case draw.Clip:
+				walk(it.Items)
+			}
+		}
+	}
+	for _, nd := range demoDocs(t) {
+		for _, p := range nd.doc.Pages {
+			walk(p.Items)
+		}
+	}
+	return seen
+}
+
+// advanceDiffs names the printed characters an installed font file lacks
+// or sets wider than the embedded face f: they would push a text past
+// the box layout measured with the embedded face. Characters it sets
+// narrower only end a text early, inside its box; they are logged.
+func advanceDiffs(t *testing.T, f draw.FontStyle, file string, printed map[rune]bool) string {
+	t.Helper()
+	b, err := os.ReadFile(file)
+	if err != nil {
+		return err.Error()
+	}
+	sys, err := sfnt.Parse(b)
+	if err != nil {
+		return err.Error()
+	}
+	emb, err := sfnt.Parse(draw.FontData(f))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var buf sfnt.Buffer
+	width := func(fnt *sfnt.Font, r rune) (fixed.Int26_6, bool) {
+		g, err := fnt.GlyphIndex(&buf, r)
+		if err != nil || g == 0 {
+			return 0, false
+		}
+		a, err := fnt.GlyphAdvance(&buf, g, fixed.I(int(fnt.UnitsPerEm())), font.HintingNone)
+		return a, err == nil
+	}
+	var wider, narrower []string
+	for r := range printed {
+		want, inEmb := width(emb, r)
+		got, inSys := width(sys, r)
+		switch {
+		case !inEmb:
+		case !inSys || got > want:
+			wider = append(wider, fmt.Sprintf("%q", r))
+		case got < want:
+			narrower = append(narrower, fmt.Sprintf("%q (%d of %d units)", r, got.Round(), want.Round()))
+		}
+	}
+	sort.Strings(wider)
+	sort.Strings(narrower)
+	if len(narrower) > 0 {
+		t.Logf("the installed %s sets narrower than the embedded face: %s", draw.FontName(f), strings.Join(narrower, ", "))
+	}
+	if len(wider) == 0 {
+		return ""
+	}
+	return "it lacks or sets wider " + strings.Join(wider, " ")
 }
 
 // TestRsvgCheckSeesATextOutOfItsBox shows the check has teeth: one label

@@ -45,7 +45,7 @@ func SVGWith(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) {
 	if err != nil {
 		return nil, fmt.Errorf("svg page %d: %w", i+1, err)
 	}
-	return addTitle(compactSVG(sortFontFaces(patterns.insertDefs(b))), doc.Title), nil
+	return addTitle(compactSVG(sortFontFaces(patterns.insertDefs(stackSVGFonts(b, fonts)))), doc.Title), nil
 }
 
 func init() {

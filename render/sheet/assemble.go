@@ -49,13 +49,9 @@ func (l *layout) page(i int) *draw.Page {
 	pg.Add(l.matchLines(p, i)...)
 
 	pg.Add(l.legendItems(l.legendOf(p.window()))...)
-	pg.Add(l.amountItems()...)
+	pg.Add(l.amountItems(i)...)
 	more := ""
-	nn, _ := l.number(len(l.sheets) + l.firstNotesPage())
-	where := fmt.Sprintf("on sheet %d", nn)
-	if l.stripBoxes != nil {
-		where = "below"
-	}
+	where := l.continuesWhere(i, false)
 	switch {
 	case len(l.bandPlan.overflow) > 0:
 		more = fmt.Sprintf("Notes and findings continue %s.", where)
@@ -65,8 +61,37 @@ func (l *layout) page(i int) *draw.Page {
 	notes := append(append([]noteBlock(nil), l.bandPlan.notes...), l.sheetNotes[i]...)
 	pg.Add(l.noteItems(notes, l.bandPlan.noteR, more)...)
 	pg.Add(l.boxItems(l.stripBoxes)...)
+	if last {
+		pg.Add(l.freeItems()...)
+	}
 	pg.Add(l.cautionItems()...)
 	return pg
+}
+
+// continuesWhere says, on drawing sheet i, where the band's amounts rows
+// (amounts) or notes go on: below, in the strip; at the foot of the log
+// of the last drawing sheet (named by its number on the others); or on
+// the first notes sheet holding them.
+func (l *layout) continuesWhere(i int, amounts bool) string {
+	if l.stripBoxes != nil {
+		return "below"
+	}
+	for _, b := range l.freeBoxes {
+		if (b.amounts != nil) != amounts {
+			continue
+		}
+		if i == len(l.sheets)-1 {
+			return "at the foot of the log"
+		}
+		n, _ := l.number(len(l.sheets) - 1)
+		return fmt.Sprintf("on sheet %d", n) // at the foot of its log: short, to fit a side band
+	}
+	k := 0
+	if !amounts {
+		k = l.firstNotesPage()
+	}
+	n, _ := l.number(len(l.sheets) + k)
+	return fmt.Sprintf("on sheet %d", n)
 }
 
 func (l *layout) cautionItems() []draw.Item {

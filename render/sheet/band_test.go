@@ -114,9 +114,9 @@ func TestBandStaysInItsRegion(t *testing.T) {
 					if i >= len(l.sheets) {
 						region = draw.Rect{X: l.content.X, Y: l.header.Bottom(), W: l.content.W, H: l.caution.Y - l.header.Bottom()}
 					}
-					// notes kept on a drawing stand in its strip (fitstrip.go)
+					// notes kept on a drawing stand in its strip (fitstrip.go) or its free room (freespace.go)
 					inRegion := func(r draw.Rect) bool {
-						return within(r, region) || (i < len(l.sheets) && l.strip > 0 && within(r, l.stripArea()))
+						return within(r, region) || l.keptOnDrawing(i, r)
 					}
 					blocks := boxes(p, "band:")
 					if len(blocks) == 0 {

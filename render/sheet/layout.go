@@ -25,6 +25,10 @@ type layout struct {
 	// into it are stripBoxes.
 	strip      float64
 	stripBoxes []sheetBox
+	// freeBoxes are the notes flowed into the free room freeR of the last
+	// drawing sheet's body (see freespace.go).
+	freeBoxes []sheetBox
+	freeR     draw.Rect
 
 	secs *schema.Sections // what stands in the hole at each depth
 
@@ -92,6 +96,7 @@ func (l *layout) plan() error {
 	if err := l.planOnce(); err != nil {
 		return err
 	}
+	l.notesInTheBody()
 	l.notesOnTheSheet()
 	return nil
 }

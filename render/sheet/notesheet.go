@@ -19,7 +19,12 @@ type sheetBox struct {
 	notes   []noteBlock
 	foot    bool // the amounts table ends here
 	cont    int  // the box's run continues on the notes sheet of this index (-1: here, or nowhere)
-	last    bool // the run ends in this box
+	// columns, when set, are the box's notes set in columns colW wide
+	// (the free room of a drawing, freespace.go).
+	columns  [][]noteBlock
+	colW     float64
+	untitled bool // no NOTES title: the first column opens with a heading
+	last     bool // the run ends in this box
 }
 
 const sheetColGap = 6.0
@@ -53,16 +58,40 @@ func (l *layout) overflow() (rows [][]string, notes []noteBlock) {
 // flowNotes flows amounts rows and notes down columns of area, onto as
 // many pages of that area as they need.
 func (l *layout) flowNotes(area draw.Rect, rows [][]string, notes []noteBlock) [][]sheetBox {
-	colW := max(l.bandPlan.noteW, l.bandPlan.amountW)
-	colW = min(colW, area.W)
-	perPage := max(1, int((area.W+sheetColGap)/(colW+sheetColGap)+1e-9))
-	page, col, y := 0, 0, area.Y
+	return l.flowNotesInto(nil, area, rows, notes)
+}
+
+// flowNotesInto flows amounts rows and notes down the columns of the
+// areas first (one page each: the free room of a drawing), then of as
+// many pages of area rest as they need. A box of a first area is never
+// taller than its area: what does not fit goes on. A box's cont counts
+// the pages after the first areas.
+func (l *layout) flowNotesInto(first []draw.Rect, rest draw.Rect, rows [][]string, notes []noteBlock) [][]sheetBox {
+	colW := l.bandPlan.noteW // the notes' wrapping width
+	if len(rows) > 0 {
+		colW = max(colW, l.bandPlan.amountW)
+	}
+	page, col := 0, 0
+	areaOf := func(p int) draw.Rect {
+		if p < len(first) {
+			return first[p]
+		}
+		return rest
+	}
+	area := areaOf(0)
+	perPage := func() int {
+		return max(1, int((area.W+sheetColGap)/(min(colW, area.W)+sheetColGap)+1e-9))
+	}
+	// bounded: a first area holds no box taller than itself.
+	bounded := func() bool { return page < len(first) }
+	y := area.Y
 	pages := [][]sheetBox{nil}
 	nextCol := func() {
 		col++
-		if col == perPage {
+		if col >= perPage() {
 			col, page = 0, page+1
 			pages = append(pages, nil)
+			area = areaOf(page)
 		}
 		y = area.Y
 	}
@@ -70,11 +99,12 @@ func (l *layout) flowNotes(area draw.Rect, rows [][]string, notes []noteBlock) [
 		pages[page] = append(pages[page], b)
 		y = b.r.Bottom() + sheetColGap
 	}
-	x := func() float64 { return area.X + float64(col)*(colW+sheetColGap) }
+	x := func() float64 { return area.X + float64(col)*(min(colW, area.W)+sheetColGap) }
 
 	// Amounts rows: as many as fit each column, the foot under the last.
-	aw := l.bandPlan.amountW
+	aw := min(l.bandPlan.amountW, area.W)
 	for len(rows) > 0 {
+		aw = min(l.bandPlan.amountW, area.W)
 		free := area.Bottom() - y
 		if h := l.amountsBoxHeight(aw, rows, true, false); h <= free {
 			add(sheetBox{r: draw.Rect{X: x(), Y: y, W: aw, H: h}, amounts: rows, foot: true, cont: -1, last: true})
@@ -84,7 +114,7 @@ func (l *layout) flowNotes(area draw.Rect, rows [][]string, notes []noteBlock) [
 		for k < len(rows) && l.amountsBoxHeight(aw, rows[:k+1], false, true) <= free {
 			k++
 		}
-		if k == 0 && y > area.Y {
+		if k == 0 && (y > area.Y || bounded()) {
 			nextCol()
 			continue
 		}
@@ -96,26 +126,33 @@ func (l *layout) flowNotes(area draw.Rect, rows [][]string, notes []noteBlock) [
 
 	// Notes and findings: the same, with a line for where they continue.
 	for len(notes) > 0 {
+		w := min(colW, area.W)
 		free := area.Bottom() - y
 		head := bandHeadH + bandPad + bandPad
 		if h := head + notesHeight(notes); h <= free {
-			add(sheetBox{r: draw.Rect{X: x(), Y: y, W: colW, H: h}, notes: notes, cont: -1, last: true})
+			add(sheetBox{r: draw.Rect{X: x(), Y: y, W: w, H: h}, notes: notes, cont: -1, last: true})
 			break
 		}
 		k := 0
 		for k < len(notes) && head+notesHeight(notes[:k+1])+continueLineH <= free {
 			k++
 		}
-		if k == 0 && y > area.Y {
+		for k > 1 && notes[k-1].heading { // a heading goes with the block under it
+			k--
+		}
+		if k == 1 && len(notes) > 1 && notes[0].heading {
+			k = 0
+		}
+		if k == 0 && (y > area.Y || bounded()) {
 			nextCol()
 			continue
 		}
 		k = max(k, 1)
-		add(sheetBox{r: draw.Rect{X: x(), Y: y, W: colW, H: head + notesHeight(notes[:k]) + continueLineH}, notes: notes[:k], cont: -1})
+		add(sheetBox{r: draw.Rect{X: x(), Y: y, W: w, H: head + notesHeight(notes[:k]) + continueLineH}, notes: notes[:k], cont: -1})
 		notes = notes[k:]
 		nextCol()
 	}
-	if len(pages[len(pages)-1]) == 0 {
+	for len(pages) > len(first) && len(pages[len(pages)-1]) == 0 {
 		pages = pages[:len(pages)-1]
 	}
 	// A box whose run goes on in a later sheet's box says which.
@@ -125,7 +162,7 @@ func (l *layout) flowNotes(area draw.Rect, rows [][]string, notes []noteBlock) [
 				continue
 			}
 			if i+1 == len(boxes) {
-				boxes[i].cont = p + 1
+				boxes[i].cont = p + 1 - len(first)
 			}
 		}
 	}
@@ -152,6 +189,10 @@ func (l *layout) boxItems(boxes []sheetBox) []draw.Item {
 		}
 		if b.amounts != nil {
 			items = append(items, l.amountBox(b.r, "AMOUNTS, CONTINUED", b.amounts, b.foot, more)...)
+			continue
+		}
+		if b.columns != nil {
+			items = append(items, l.columnItems(b, more)...)
 			continue
 		}
 		items = append(items, l.noteItems(b.notes, b.r, more)...)

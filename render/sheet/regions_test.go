@@ -117,8 +117,8 @@ func TestEveryTextInsideItsRegion(t *testing.T) {
 						if notesSheet && known && region != l.header && region != l.caution {
 							region = draw.Rect{X: l.content.X, Y: l.header.Bottom(), W: l.content.W, H: l.caution.Y - l.header.Bottom()}
 						}
-						if l.strip > 0 && isBandRole(tx.Role) && within(r, l.stripArea()) {
-							region = l.stripArea() // notes kept on the drawing (fitstrip.go)
+						if isBandRole(tx.Role) && l.keptOnDrawing(i, r) {
+							region = r // notes kept on the drawing (fitstrip.go, freespace.go)
 						}
 						if !within(r, region) {
 							bad++
@@ -143,6 +143,20 @@ func TestEveryTextInsideItsRegion(t *testing.T) {
 			}
 		}
 	}
+}
+
+// keptOnDrawing reports whether r lies where drawing sheet i keeps
+// notes that would otherwise go on a notes sheet: the strip above the
+// caution (fitstrip.go) or the free room of the last sheet's body
+// (freespace.go).
+func (l *layout) keptOnDrawing(i int, r draw.Rect) bool {
+	if i >= len(l.sheets) {
+		return false
+	}
+	if l.strip > 0 && within(r, l.stripArea()) {
+		return true
+	}
+	return len(l.freeBoxes) > 0 && i == len(l.sheets)-1 && within(r, l.freeR)
 }
 
 // absurdWells are the demo's MW-1 with a borehole diameter that a slip of
