@@ -2,6 +2,7 @@ package quantity
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"github.com/tremie-dev/tremie/schema"
