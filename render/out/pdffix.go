@@ -22,7 +22,7 @@ import (
 // uncompressed; and rewrites the cross-reference table and
 // trailer, adding a file identifier hashed from the content. Anything
 // unexpected in canvas's layout is an error, not a silent guess.
-func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns) ([]byte, error) {
+func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns, paths *pdfPaths) ([]byte, error) {
 	xrefAt, offsets, err := readXref(pdf)
 	if err != nil {
 		return nil, err
@@ -38,9 +38,10 @@ func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns) ([]byte, error) {
 		return nil, err
 	}
 	replace := map[int][]byte{2: info}
-	fonts := map[int]bool{}
+	fonts, contents := map[int]bool{}, map[int]bool{}
 	for _, span := range spans[1:] {
-		// Only dictionaries name font files; stream data is skipped.
+		// Only dictionaries name font files and content streams; stream
+		// data is skipped.
 		if at := bytes.Index(span, []byte(">>stream\n")); at >= 0 {
 			span = span[:at]
 		}
@@ -48,6 +49,12 @@ func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns) ([]byte, error) {
 			n, _ := strconv.Atoi(string(m[1]))
 			if n > 2 && n < len(offsets) {
 				fonts[n] = true
+			}
+		}
+		for _, m := range contentsRE.FindAllSubmatch(span, -1) {
+			n, _ := strconv.Atoi(string(m[1]))
+			if n > 2 && n < len(spans) {
+				contents[n] = true
 			}
 		}
 	}
@@ -60,8 +67,11 @@ func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns) ([]byte, error) {
 			continue
 		}
 		pin, level := (func([]byte) ([]byte, error))(nil), zlib.BestSpeed
-		if fonts[n] {
+		switch {
+		case fonts[n]:
 			pin, level = pinFontDate, zlib.DefaultCompression
+		case contents[n]:
+			pin = paths.fill
 		}
 		obj, err := compressStream(spans[n], pin, level)
 		if err != nil {
