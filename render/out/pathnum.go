@@ -1,6 +1,7 @@
 package out
 
 import (
+	"bytes"
 	"math"
 	"strconv"
 
@@ -174,4 +175,174 @@ func appendPDFPathData(b []byte, p *canvas.Path) []byte {
 		b = append(b[:start], b[start+1:]...)
 	}
 	return b
+}
+
+// svgMicrons is how finely our SVG path data places a point: a
+// micrometre (1/350 pt), far below what any printer or screen resolves.
+const svgMicrons = 1000 // per millimetre
+
+// maxCompactMM bounds the coordinates written in micrometre integers;
+// beyond it (no page comes near) canvas's absolute form is written.
+const maxCompactMM = 1e9
+
+// appendSVGPathCompact appends p (placed, millimetres) as SVG path data
+// in its short form: every point rounded to the micrometre, each
+// subpath after the first and every segment written relative to the
+// pen in micrometre steps, so that no rounding accumulates and the
+// points are those of canvas's absolute form to the micrometre; a
+// lineto letter is not repeated, and numbers are written without
+// leading zeros or separators a reader does not need (SVG 1.1, 8.3.9,
+// the path data grammar). A sheet's path data is about a third shorter.
+func appendSVGPathCompact(b []byte, p *canvas.Path) []byte {
+	for s := p.Scanner(); s.Scan(); {
+		e := s.End()
+		if !(math.Abs(e.X) < maxCompactMM && math.Abs(e.Y) < maxCompactMM) {
+			return appendSVGPathData(b, p)
+		}
+	}
+	w := svgPathWriter{b: b}
+	var startX, startY int64
+	for s := p.Scanner(); s.Scan(); {
+		x, y := microns(s.End().X), microns(s.End().Y)
+		switch s.Cmd() {
+		case canvas.MoveToCmd:
+			if w.started {
+				w.command('m')
+				w.num(x - w.x)
+				w.num(y - w.y)
+			} else {
+				w.command('M')
+				w.num(x)
+				w.num(y)
+			}
+			w.started = true
+			startX, startY = x, y
+		case canvas.LineToCmd:
+			switch dx, dy := x-w.x, y-w.y; {
+			case dx == 0 && dy == 0:
+				// canvas writes nothing for a segment of no length
+			case dx == 0:
+				w.command('v')
+				w.num(dy)
+			case dy == 0:
+				w.command('h')
+				w.num(dx)
+			default:
+				if w.last != 'l' && w.last != 'm' {
+					w.command('l')
+				}
+				w.last = 'l'
+				w.num(dx)
+				w.num(dy)
+			}
+		case canvas.QuadToCmd:
+			c := s.CP1()
+			w.command('q')
+			w.num(microns(c.X) - w.x)
+			w.num(microns(c.Y) - w.y)
+			w.num(x - w.x)
+			w.num(y - w.y)
+		case canvas.CubeToCmd:
+			c1, c2 := s.CP1(), s.CP2()
+			w.command('c')
+			w.num(microns(c1.X) - w.x)
+			w.num(microns(c1.Y) - w.y)
+			w.num(microns(c2.X) - w.x)
+			w.num(microns(c2.Y) - w.y)
+			w.num(x - w.x)
+			w.num(y - w.y)
+		case canvas.ArcToCmd:
+			rx, ry, rot, large, sweep := s.Arc()
+			if 90.0 <= rot {
+				rx, ry = ry, rx
+				rot -= 90.0
+			}
+			w.command('a')
+			// Radii and angle as canvas writes them: an arc's radius
+			// rounded apart from its ends would bend it.
+			w.canvasNum(rx)
+			w.canvasNum(ry)
+			w.canvasNum(rot)
+			w.flags(large, sweep)
+			w.num(x - w.x)
+			w.num(y - w.y)
+		case canvas.CloseCmd:
+			w.command('z')
+			x, y = startX, startY
+		}
+		w.x, w.y = x, y
+	}
+	return w.b
+}
+
+func microns(v float64) int64 { return int64(math.Round(v * svgMicrons)) }
+
+// svgPathWriter appends path data, keeping what the next separator
+// depends on.
+type svgPathWriter struct {
+	b       []byte
+	x, y    int64 // the pen, micrometres
+	started bool
+	last    byte // the last command letter
+	sep     bool // the last byte ends a number
+	dot     bool // that number has a decimal point
+}
+
+func (w *svgPathWriter) command(c byte) {
+	w.b = append(w.b, c)
+	w.last, w.sep = c, false
+}
+
+// flags writes an arc's two flags, which need no separator after them.
+func (w *svgPathWriter) flags(large, sweep bool) {
+	if w.sep {
+		w.b = append(w.b, ' ')
+	}
+	w.b = append(w.b, flag(large), flag(sweep))
+	w.sep = false
+}
+
+// canvasNum writes v as canvas does (appendCanvasG).
+func (w *svgPathWriter) canvasNum(v float64) {
+	var tmp [40]byte
+	d := appendCanvasG(tmp[:0], v)
+	w.put(d[0] == '-', d, bytes.IndexByte(d, '.') >= 0)
+}
+
+// num writes n micrometres as millimetres: "1.5", ".25", "-.004", "12".
+func (w *svgPathWriter) num(n int64) {
+	var digits [24]byte
+	neg := n < 0
+	if neg {
+		n = -n
+	}
+	whole, frac := n/svgMicrons, n%svgMicrons
+	d := digits[:0]
+	if whole > 0 || frac == 0 {
+		d = strconv.AppendInt(d, whole, 10)
+	}
+	dot := frac != 0
+	if dot {
+		f := strconv.AppendInt(make([]byte, 0, 4), frac+svgMicrons, 10)[1:] // zero-padded to 3
+		for len(f) > 0 && f[len(f)-1] == '0' {
+			f = f[:len(f)-1]
+		}
+		d = append(d, '.')
+		d = append(d, f...)
+	}
+	if neg {
+		d = append([]byte{'-'}, d...)
+	}
+	w.put(neg, d, dot)
+}
+
+// put writes one number's text d. A separator goes only where the number
+// could run into the last one: a sign starts a new number, and so does a
+// point after a number that has its point already.
+func (w *svgPathWriter) put(neg bool, d []byte, dot bool) {
+	if w.sep && !neg && !(d[0] == '.' && w.dot) {
+		w.b = append(w.b, ' ')
+	}
+	w.b = append(w.b, d...)
+	w.sep, w.dot = true, dot
 }

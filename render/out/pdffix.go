@@ -59,9 +59,9 @@ func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns, paths *pdfPaths) ([]
 		}
 	}
 	// Streams come from canvas uncompressed and are compressed here: page
-	// content at Flate's fastest level (it is most of the work, and the
-	// file grows by about a fifth), font programs at the default level,
-	// once, after their date is pinned.
+	// content at contentLevel, images and pattern tiles at Flate's fastest
+	// level, font programs at the default level, once, after their date
+	// is pinned.
 	for n := 3; n < len(spans); n++ {
 		if !bytes.Contains(spans[n], []byte(">>stream\n")) {
 			continue
@@ -71,7 +71,7 @@ func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns, paths *pdfPaths) ([]
 		case fonts[n]:
 			pin, level = pinFontDate, zlib.DefaultCompression
 		case contents[n]:
-			pin = paths.fill
+			pin, level = paths.fill, contentLevel
 		}
 		obj, err := compressStream(spans[n], pin, level)
 		if err != nil {
@@ -81,6 +81,12 @@ func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns, paths *pdfPaths) ([]
 	}
 	return rebuild(spans, replace), nil
 }
+
+// contentLevel compresses page content: Go's level 4 takes about the
+// time of its fastest level (a different, greedier matcher) and writes a
+// sheet's content about a sixth smaller (BR-1: 16.7 KB at level 1, 14.1
+// KB at 4, 13.5 KB at the default 6, which takes twice the time).
+const contentLevel = 4
 
 var fontFileRE = regexp.MustCompile(`/FontFile2 (\d+) 0 R`)
 

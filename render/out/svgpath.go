@@ -51,7 +51,7 @@ func (r *svgRenderer) RenderPath(path *canvas.Path, style canvas.Style, m canvas
 	}
 	placed := path.Copy().Transform(r.flip)
 	b := append(r.w.AvailableBuffer(), `<path d="`...)
-	b = appendSVGPathData(b, placed)
+	b = appendSVGPathCompact(b, placed)
 	if !style.HasStroke() {
 		if !style.HasFill() {
 			b = append(b, `" fill="none`...)
