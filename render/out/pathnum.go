@@ -258,11 +258,25 @@ func appendSVGPathCompact(b []byte, p *canvas.Path) []byte {
 				rot -= 90.0
 			}
 			w.command('a')
-			// Radii and angle as canvas writes them: an arc's radius
-			// rounded apart from its ends would bend it.
-			w.canvasNum(rx)
-			w.canvasNum(ry)
-			w.canvasNum(rot)
+			from := s.Start()
+			chord := math.Hypot(s.End().X-from.X, s.End().Y-from.Y)
+			if rx == ry && math.Abs(chord-2*rx) <= 1e-9*(1+rx) {
+				// Half a circle (as canvas draws circles): its ends, each
+				// rounded, may lie a little more or less than a diameter
+				// apart, which would turn the arc about a centre well off
+				// the circle's. A radius no more than half the rounded
+				// chord is scaled up to exactly that by every reader (SVG
+				// 1.1, F.6.6), so the arc is half a circle again.
+				r := int64(math.Hypot(float64(x-w.x), float64(y-w.y))) / 2
+				w.num(r)
+				w.num(r)
+				w.num(0)
+			} else {
+				// Radii and angle as canvas writes them.
+				w.canvasNum(rx)
+				w.canvasNum(ry)
+				w.canvasNum(rot)
+			}
 			w.flags(large, sweep)
 			w.num(x - w.x)
 			w.num(y - w.y)
