@@ -207,3 +207,59 @@ func compareRasters(a, b planes) (rasterDiff, error) {
 	d.inkB /= float64(n)
 	return d, nil
 }
+
+// viewerSheet is one sheet the viewer tests open: page i of doc.
+type viewerSheet struct {
+	name string
+	doc  *draw.Document
+	i    int
+}
+
+func (s viewerSheet) page() *draw.Page { return s.doc.Pages[s.i] }
+
+// galleryDir holds the gallery's invented wells, one of each kind.
+const galleryDir = "../../testdata/gallery"
+
+// galleryOpened bounds the time the viewer tests spend on the gallery:
+// every sheet of each gallery well is opened except DS-1200's sheets 2
+// to 7, which repeat its first sheet's layout down a deeper range (its
+// first sheet carries the title block and the legend; its last, the
+// notes and the bottom of the hole).
+func galleryOpened(well string, i, n int) bool {
+	return well != "DS-1200.toml" || i == 0 || i == n-1
+}
+
+// viewerSheets lists every demo sheet, then the gallery's (galleryOpened).
+func viewerSheets(t *testing.T) []viewerSheet {
+	t.Helper()
+	var sheets []viewerSheet
+	for _, nd := range demoDocs(t) {
+		for i := range nd.doc.Pages {
+			sheets = append(sheets, viewerSheet{name: fmt.Sprintf("%s sheet %d", nd.name, i+1), doc: nd.doc, i: i})
+		}
+	}
+	for _, nd := range projectDocs(t, galleryDir) {
+		for i := range nd.doc.Pages {
+			if galleryOpened(nd.name, i, len(nd.doc.Pages)) {
+				sheets = append(sheets, viewerSheet{name: fmt.Sprintf("gallery %s sheet %d", nd.name, i+1), doc: nd.doc, i: i})
+			}
+		}
+	}
+	return sheets
+}
+
+// nrgba gives an image's pixels as 8-bit non-premultiplied RGBA, the
+// form png.Decode returns for rsvg-convert's rasters, for fast reading.
+func nrgba(img image.Image) *image.NRGBA {
+	if n, ok := img.(*image.NRGBA); ok {
+		return n
+	}
+	b := img.Bounds()
+	n := image.NewNRGBA(image.Rect(0, 0, b.Dx(), b.Dy()))
+	for y := 0; y < b.Dy(); y++ {
+		for x := 0; x < b.Dx(); x++ {
+			n.Set(x, y, img.At(b.Min.X+x, b.Min.Y+y))
+		}
+	}
+	return n
+}
