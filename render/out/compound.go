@@ -41,6 +41,9 @@ type compoundPath struct {
 	cutFill      *canvas.Path
 	cutStroke    *canvas.Path // stroke outlines of cut straight segments, as area
 	cutOutlines  []*canvas.Path
+	raster       *pngRenderer // set when drawing a raster, for strokeArea
+	wholeFill    *canvas.Path // raster: fills of whole marks stroked through strokeArea
+	strokeArea   *canvas.Path // raster: the stroke of whole marks, as area
 	half         float64
 	cubic        bool
 	pts          []canvas.Point
@@ -63,12 +66,23 @@ func (p *painter) newCompound(s draw.Style, clip *draw.Rect) *compoundPath {
 	// PDF has no arcs, and canvas's own replacement of them is
 	// quadratic in a long path, so circles go to PDF as Béziers.
 	_, c.cubic = p.r.(pdfRenderer)
+	if r, ok := p.r.(*pngRenderer); ok {
+		c.raster, c.wholeFill, c.strokeArea = r, &canvas.Path{}, &canvas.Path{}
+	}
 	return c
 }
 
 // place sorts one subpath by where it lies: b bounds it (canvas
-// millimetres), build adds it to a path.
-func (c *compoundPath) place(b canvas.Rect, build func(*canvas.Path), closed, joins bool, seg []canvas.Point) {
+// millimetres), build adds it to a path. On a raster, area (if not nil)
+// is the subpath's stroke as area (see rasterStrokeArea).
+func (c *compoundPath) place(b canvas.Rect, build func(*canvas.Path), closed, joins bool, seg []canvas.Point, area *canvas.Path) {
+	if area != nil && (c.clip == nil || c.cr.Expand(edgeSlack).Contains(area.FastBounds())) {
+		c.strokeArea = c.strokeArea.Append(area)
+		if c.fill && closed {
+			build(c.wholeFill)
+		}
+		return
+	}
 	if c.clip == nil {
 		build(c.whole)
 		return
@@ -190,7 +204,11 @@ func (c *compoundPath) add(it draw.Path, dx, dy float64, path string) {
 		if len(pts) == 2 && !closed {
 			seg = pts[:2]
 		}
-		c.place(b, build, closed, closed || len(pts) > 2, seg)
+		var area *canvas.Path
+		if c.raster != nil && c.stroke && len(c.st.Dashes) == 0 {
+			area = rasterStrokeArea(pts, closed, c.half)
+		}
+		c.place(b, build, closed, closed || len(pts) > 2, seg, area)
 	}
 	for j, d := range it.Circles {
 		if !finite(d.Center.X, d.Center.Y, d.R) {
@@ -202,7 +220,11 @@ func (c *compoundPath) add(it draw.Path, dx, dy float64, path string) {
 		}
 		q, r := p.pos(d.Center.X+dx, d.Center.Y+dy), d.R*mmPerPt
 		b := canvas.Rect{X0: q.X - r, Y0: q.Y - r, X1: q.X + r, Y1: q.Y + r}
-		c.place(b, func(dst *canvas.Path) { addCircle(dst, q, r, c.cubic) }, true, false, nil)
+		var area *canvas.Path
+		if c.raster != nil && c.stroke && len(c.st.Dashes) == 0 {
+			area = c.raster.ringArea(q, r, c.half)
+		}
+		c.place(b, func(dst *canvas.Path) { addCircle(dst, q, r, c.cubic) }, true, false, nil, area)
 	}
 }
 
@@ -214,7 +236,10 @@ func (c *compoundPath) flush() {
 		fs.Fill = c.st.Fill
 		r.RenderPath(c.cutFill, fs, canvas.Identity)
 	}
-	if !c.whole.Empty() {
+	switch {
+	case c.raster != nil && !c.strokeArea.Empty():
+		c.raster.renderPath(c.whole, c.st, canvas.Identity, c.wholeFill, c.strokeArea)
+	case !c.whole.Empty():
 		r.RenderPath(c.whole, c.st, canvas.Identity)
 	}
 	ss := canvas.DefaultStyle

@@ -13,7 +13,6 @@ import (
 	"unicode"
 
 	"github.com/tdewolff/canvas"
-	"github.com/tdewolff/canvas/renderers/rasterizer"
 	"github.com/tdewolff/canvas/renderers/svg"
 
 	"github.com/tremie-dev/tremie/render/draw"
@@ -51,7 +50,7 @@ func paintPage(r canvas.Renderer, p *draw.Page, fonts *fontSet, text TextMode, p
 // pass (about a seventh of a deep well's PNG time, most sheets' lines
 // being single segments). It reports whether it drew the line.
 func (p *painter) rasterLine(s draw.Shape) bool {
-	if _, ok := p.r.(*rasterizer.Rasterizer); !ok {
+	if _, ok := p.r.(*pngRenderer); !ok {
 		return false
 	}
 	st, fill, stroke := p.style(s.Style)

@@ -9,7 +9,6 @@ import (
 	"math"
 
 	"github.com/tdewolff/canvas"
-	"github.com/tdewolff/canvas/renderers/rasterizer"
 
 	"github.com/tremie-dev/tremie/render/draw"
 )
@@ -39,7 +38,7 @@ func PNG(doc *draw.Document, i int, dpi float64) ([]byte, error) {
 	}
 	img := image.NewRGBA(image.Rect(0, 0, w, h))
 	imagedraw.Draw(img, img.Bounds(), image.White, image.Point{}, imagedraw.Src)
-	r := rasterizer.FromImage(img, canvas.DPI(dpi), canvas.DefaultColorSpace)
+	r := newPNGRenderer(img, canvas.DPI(dpi))
 	fonts := takeFonts()
 	defer fonts.giveBack()
 	if err := paintPage(r, p, fonts, TextAsText, &rasterPatterns{}); err != nil {

@@ -556,11 +556,10 @@ func (l *layout) amountBox(r draw.Rect, title string, rows [][]string, foot bool
 	return items
 }
 
-// noteItems draws the notes and findings box.
-func (l *layout) noteItems(blocks []noteBlock, r draw.Rect, more string) []draw.Item {
-	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, "band:notes"),
-		text(r.X+bandPad, r.Y+9, "NOTES", draw.Bold, sizeHeading, draw.Start, ink, "")}
-	y := r.Y + bandHeadH + bandPad
+// noteBlockItems sets blocks one under the other from (x, y) and
+// returns their items and the y under the last.
+func noteBlockItems(blocks []noteBlock, x, y float64) ([]draw.Item, float64) {
+	var items []draw.Item
 	for _, n := range blocks {
 		if n.heading {
 			y += 2
@@ -575,9 +574,18 @@ func (l *layout) noteItems(blocks []noteBlock, r draw.Rect, more string) []draw.
 		if n.role != "" {
 			role = n.role
 		}
-		items = append(items, n.block.items(r.X+bandPad, y, n.color, role)...)
+		items = append(items, n.block.items(x, y, n.color, role)...)
 		y += n.block.height() + 1.5
 	}
+	return items, y
+}
+
+// noteItems draws the notes and findings box.
+func (l *layout) noteItems(blocks []noteBlock, r draw.Rect, more string) []draw.Item {
+	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, "band:notes"),
+		text(r.X+bandPad, r.Y+9, "NOTES", draw.Bold, sizeHeading, draw.Start, ink, "")}
+	blockItems, y := noteBlockItems(blocks, r.X+bandPad, r.Y+bandHeadH+bandPad)
+	items = append(items, blockItems...)
 	if more != "" {
 		// Within the box even when its notes fill it.
 		by := min(y+lineGap(sizeSmall)-2, r.Bottom()-bandPad/2-draw.Descent(draw.Italic, sizeSmall))

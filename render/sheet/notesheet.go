@@ -19,7 +19,12 @@ type sheetBox struct {
 	notes   []noteBlock
 	foot    bool // the amounts table ends here
 	cont    int  // the box's run continues on the notes sheet of this index (-1: here, or nowhere)
-	last    bool // the run ends in this box
+	// columns, when set, are the box's notes set in columns colW wide
+	// (the free room of a drawing, freespace.go).
+	columns  [][]noteBlock
+	colW     float64
+	untitled bool // no NOTES title: the first column opens with a heading
+	last     bool // the run ends in this box
 }
 
 const sheetColGap = 6.0
@@ -184,6 +189,10 @@ func (l *layout) boxItems(boxes []sheetBox) []draw.Item {
 		}
 		if b.amounts != nil {
 			items = append(items, l.amountBox(b.r, "AMOUNTS, CONTINUED", b.amounts, b.foot, more)...)
+			continue
+		}
+		if b.columns != nil {
+			items = append(items, l.columnItems(b, more)...)
 			continue
 		}
 		items = append(items, l.noteItems(b.notes, b.r, more)...)

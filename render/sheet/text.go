@@ -82,6 +82,31 @@ func (b *textBlock) add(s string, font draw.FontStyle, size, width float64) {
 	}
 }
 
+// rewrapped is the block wrapped again at width: a block of one
+// paragraph in one font and size (its lead, if any, kept in front);
+// another block is returned as it is.
+func (b textBlock) rewrapped(width float64) textBlock {
+	if len(b.lines) == 0 {
+		return b
+	}
+	first := b.lines[0]
+	words := make([]string, 0, len(b.lines))
+	for i, ln := range b.lines {
+		if ln.font != first.font || ln.size != first.size || (i > 0 && ln.lead != "") {
+			return b
+		}
+		words = append(words, strings.TrimSpace(ln.s))
+	}
+	var out textBlock
+	s := strings.TrimSpace(strings.Join(words, " "))
+	if first.lead != "" {
+		out.addLead(first.lead, s, first.size, width)
+	} else {
+		out.add(s, first.font, first.size, width)
+	}
+	return out
+}
+
 // height is the block's height from the top of its first line to below
 // its last.
 func (b *textBlock) height() float64 {
