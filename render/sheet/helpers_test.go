@@ -1,11 +1,13 @@
 package sheet
 
 import (
+	"fmt"
 	"strings"
 	"testing"
 
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/templates"
 )
 
 // ft and in make model lengths from the units a test is written in.
@@ -74,4 +76,19 @@ func shapes(p *draw.Page, prefix string) []draw.Shape {
 		}
 	})
 	return out
+}
+
+// eachPage calls f with every page template, each size in portrait and
+// landscape, named "a4 landscape=true".
+func eachPage(t *testing.T, f func(name string, pg Page)) {
+	t.Helper()
+	for _, name := range []string{"letter", "tabloid", "a4", "a3"} {
+		for _, land := range []bool{false, true} {
+			tpl, err := templates.Load(name, land)
+			if err != nil {
+				t.Fatal(err)
+			}
+			f(fmt.Sprintf("%s landscape=%v", name, land), FromTemplate(tpl))
+		}
+	}
 }

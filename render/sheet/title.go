@@ -19,9 +19,10 @@ import (
 type field struct {
 	label, value string
 	scaleBar     bool // draw the vertical scale bar beside the value
-	// lines, when given, are the value's lines as set (a revision block);
-	// minW and minH reserve room (the seal and signature space).
-	lines      []string
+	// table, when given, is the value as rows of columns under their
+	// heads (table[0]), the heads written where the label goes: the
+	// revision block. minW and minH reserve room (the seal's space).
+	table      [][]string
 	minW, minH float64
 }
 
@@ -97,18 +98,76 @@ func (l *layout) titleFields() titleBlock {
 // of 1.5 to 2 in across).
 const sealSpace = 108.0
 
-// issueRow is the revision block (revision, date, description, by) and
-// the space for the professional's seal and signature of an issued set.
+// issueRow is the revision block of an issued set: a table of revision,
+// date, description and by, one row per revision, its columns aligned
+// (a field left out stays an empty cell, so no value moves into the
+// next column's place).
 func (l *layout) issueRow() []field {
 	tb := l.in.TitleBlock
-	revs := []string{"REV · DATE · DESCRIPTION · BY"}
+	revs := [][]string{{"Rev", "Date", "Revision description", "By"}}
 	for _, r := range tb.Revisions {
-		revs = append(revs, joinNonEmpty(" · ", r.Rev, r.Date.String(), r.Description, r.By))
+		revs = append(revs, []string{r.Rev, r.Date.String(), r.Description, r.By})
 	}
 	if len(tb.Revisions) == 0 {
-		revs = append(revs, joinNonEmpty(" · ", tb.Revision, tb.Issued.String(), "Issued", tb.ApprovedBy))
+		revs = append(revs, []string{tb.Revision, tb.Issued.String(), "Issued", tb.ApprovedBy})
 	}
-	return []field{{label: "Revisions", lines: revs}}
+	return []field{{label: "Revisions", table: revs}}
+}
+
+// revisionColumns gives the widths of a revision table's columns in a
+// cell of width cw: revision, date and by as wide as their widest entry,
+// the description the rest (at least a third of the cell).
+func revisionColumns(table [][]string, cw float64) []float64 {
+	if len(table) == 0 {
+		return nil
+	}
+	ws := make([]float64, len(table[0]))
+	for c := range ws {
+		for k, row := range table {
+			if c >= len(row) {
+				continue
+			}
+			if k == 0 {
+				ws[c] = max(ws[c], draw.TextWidth(draw.Regular, sizeTiny, strings.ToUpper(row[c]))+8)
+			} else {
+				ws[c] = max(ws[c], draw.TextWidth(draw.Regular, sizeBody, row[c])+8)
+			}
+		}
+	}
+	const desc = 2
+	fixed := 0.0
+	for c, w := range ws {
+		if c != desc {
+			fixed += w
+		}
+	}
+	inner := cw - 3
+	if fixed > inner*2/3 { // shrink the narrow columns alike
+		k := inner * 2 / 3 / fixed
+		for c := range ws {
+			if c != desc {
+				ws[c] *= k
+			}
+		}
+		fixed = inner * 2 / 3
+	}
+	ws[desc] = inner - fixed
+	return ws
+}
+
+// revisionCells wraps each cell of a revision row to its column.
+func revisionCells(row []string, ws []float64) ([][]string, int) {
+	cells := make([][]string, len(ws))
+	n := 1
+	for c := range ws {
+		s := ""
+		if c < len(row) {
+			s = row[c]
+		}
+		cells[c] = draw.Wrap(draw.Regular, sizeBody, s, ws[c]-4)
+		n = max(n, len(cells[c]))
+	}
+	return cells, n
 }
 
 // coordinates writes the location's coordinates with their system.
@@ -172,17 +231,23 @@ func (tb titleBlock) cellWidths(row []field, w float64) []float64 {
 			v = exaggerationSized
 		}
 		need[i] = max(draw.TextWidth(draw.Regular, sizeTiny, strings.ToUpper(f.label)), draw.TextWidth(draw.Regular, sizeBody, v), f.minW) + 10
-		for _, s := range f.lines {
-			need[i] = max(need[i], draw.TextWidth(draw.Regular, sizeBody, s)+10)
+		if f.table != nil {
+			need[i] = w // a revision block takes its row
 		}
 		idx[i] = i
 	}
-	sort.SliceStable(idx, func(a, b int) bool { return need[idx[a]] < need[idx[b]] })
+	// Every cell first gets room for its label and for its value in as
+	// few lines as the row allows (a label never runs across the next
+	// cell's rule; no value is cut while another cell has room to spare),
+	// then the rest goes to the cells by need, the least first.
+	floor, sum := tb.floors(row, need, w)
+	sort.SliceStable(idx, func(a, b int) bool { return need[idx[a]]-floor[idx[a]] < need[idx[b]]-floor[idx[b]] })
 	out := make([]float64, len(row))
-	rest, k := w, float64(len(row))
+	rest, k := w-sum, float64(len(row))
 	for _, i := range idx {
-		out[i] = min(need[i], rest/k)
-		rest -= out[i]
+		extra := min(need[i]-floor[i], rest/k)
+		out[i] = floor[i] + extra
+		rest -= extra
 		k--
 	}
 	// Hand what is left over to every cell alike, but a reserved space
@@ -201,11 +266,70 @@ func (tb titleBlock) cellWidths(row []field, w float64) []float64 {
 	return out
 }
 
+// floors are the least widths of a row's cells: for the fewest lines
+// (up to fieldMaxLine) in which every value fits within w, each cell as
+// narrow as its value's wrapping in that many lines and its label allow;
+// else room for the labels alone; else nothing.
+func (tb titleBlock) floors(row []field, need []float64, w float64) ([]float64, float64) {
+	floor := make([]float64, len(row))
+	labelW := func(f field) float64 { return draw.TextWidth(draw.Regular, sizeTiny, strings.ToUpper(f.label)) + 8 }
+	for n := 1; n <= fieldMaxLine; n++ {
+		sum := 0.0
+		for i, f := range row {
+			switch {
+			case f.scaleBar || f.table != nil || f.label == "Horizontal exaggeration":
+				floor[i] = need[i] // one line, sized for its longest value
+			default:
+				floor[i] = min(need[i], max(labelW(f), f.minW+10, wrapWidth(f.value, n)+6))
+			}
+			sum += floor[i]
+		}
+		if sum <= w {
+			return floor, sum
+		}
+	}
+	sum := 0.0
+	for i, f := range row {
+		floor[i] = min(need[i], labelW(f))
+		sum += floor[i]
+	}
+	if sum <= w {
+		return floor, sum
+	}
+	return make([]float64, len(row)), 0
+}
+
+// wrapWidth is the least width in which a title-block value wraps into
+// at most n lines (to half a point).
+func wrapWidth(s string, n int) float64 {
+	hi := draw.TextWidth(draw.Regular, sizeBody, s)
+	if n <= 1 || hi == 0 {
+		return hi
+	}
+	lo := 0.0
+	for _, word := range strings.Fields(s) {
+		lo = max(lo, draw.TextWidth(draw.Regular, sizeBody, word))
+	}
+	for hi-lo > 0.5 {
+		mid := (lo + hi) / 2
+		if len(draw.Wrap(draw.Regular, sizeBody, s, mid)) <= n {
+			hi = mid
+		} else {
+			lo = mid
+		}
+	}
+	return hi
+}
+
 func (tb titleBlock) cellLines(f field, cw float64) []string {
-	if f.lines != nil {
+	if f.table != nil {
+		ws := revisionColumns(f.table, cw)
 		var out []string
-		for _, s := range f.lines {
-			out = append(out, draw.Wrap(draw.Regular, sizeBody, s, cw-6)...)
+		for _, row := range f.table[1:] {
+			_, n := revisionCells(row, ws)
+			for range n {
+				out = append(out, "")
+			}
 		}
 		return out
 	}
@@ -317,7 +441,11 @@ func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
 			if c > 0 {
 				items = append(items, line(cx, y, cx, y+rh, 0.4, ink, ""))
 			}
-			items = append(items, text(cx+3, y+6.6, strings.ToUpper(f.label), draw.Regular, sizeTiny-0.0, draw.Start, grey, ""))
+			if f.table != nil {
+				items = append(items, revisionItems(f.table, cx, y, cw, rh)...)
+				continue
+			}
+			items = append(items, text(cx+3, y+6.6, fieldLabel(f.label, cw-6), draw.Regular, sizeTiny, draw.Start, grey, "label:"+f.label))
 			ty := y + fieldLabelH + draw.Ascent(draw.Regular, sizeBody)
 			for _, s := range l.title.cellLines(f, cw) {
 				items = append(items, text(cx+3, ty, s, draw.Regular, sizeBody, draw.Start, ink, "field:"+f.label))
@@ -328,6 +456,59 @@ func (l *layout) headerItems(n, m int, subtitle string) []draw.Item {
 			}
 		}
 		y += rh
+	}
+	return items
+}
+
+// shortLabels are the short forms of the longer field labels, for a
+// cell too narrow for the whole label (an issued sheet's grid beside the
+// seal).
+var shortLabels = map[string]string{
+	"Measuring point elevation": "MP elevation",
+	"Horizontal exaggeration":   "Horiz. exaggeration",
+	"Drilling contractor":       "Contractor",
+	"Drilling method":           "Method",
+	"Ground elevation":          "Ground elev.",
+}
+
+// fieldLabel is a field's label as printed in a cell of inner width w:
+// whole, else its short form, else cut to the width.
+func fieldLabel(label string, w float64) string {
+	s := strings.ToUpper(label)
+	if draw.TextWidth(draw.Regular, sizeTiny, s) <= w {
+		return s
+	}
+	if short, ok := shortLabels[label]; ok {
+		s = strings.ToUpper(short)
+	}
+	return fit(s, draw.Regular, sizeTiny, w)
+}
+
+// revisionItems draws a revision table in the cell at (x, y) of width cw
+// and height rh: the column heads where a label goes, each row's cells
+// below, a thin rule between columns.
+func revisionItems(table [][]string, x, y, cw, rh float64) []draw.Item {
+	ws := revisionColumns(table, cw)
+	var items []draw.Item
+	cx := x
+	for c, w := range ws {
+		if c > 0 {
+			items = append(items, line(cx, y+1.5, cx, y+rh-1.5, 0.3, lightGrey, ""))
+		}
+		items = append(items, text(cx+3, y+6.6, fit(strings.ToUpper(table[0][c]), draw.Regular, sizeTiny, w-4), draw.Regular, sizeTiny, draw.Start, grey, "field:Revisions"))
+		cx += w
+	}
+	ty := y + fieldLabelH + draw.Ascent(draw.Regular, sizeBody)
+	for _, row := range table[1:] {
+		cells, n := revisionCells(row, ws)
+		cx := x
+		for c, cell := range cells {
+			for k, s := range cell {
+				items = append(items, text(cx+3, ty+float64(k)*lineGap(sizeBody), s, draw.Regular, sizeBody, draw.Start, ink, "field:Revisions"))
+			}
+			cx += ws[c]
+		}
+		ty += float64(n) * lineGap(sizeBody)
 	}
 	return items
 }

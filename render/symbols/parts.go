@@ -89,10 +89,16 @@ func slots(p *pen) {
 // rods: a wound screen, where slotted pipe shows level slots in a solid
 // wall.
 func wireWrap(p *pen) {
-	const pitch, slant = 1.2, 0.9
+	const pitch, slant, w = 1.2, 0.9, 0.4
+	// Each turn climbs slant points across the strip's width. Its ends
+	// stop short of the strip's edges by as much as the stroke's square
+	// end leans out (under 0.1 pt, beneath the edge lines), so that a
+	// turn lies inside the strip and is written as a stroked line, not
+	// cut to an outline by the clip.
+	dx := p.r.W
+	inset := w/2*slant/math.Hypot(dx, slant) + 0.02
 	p.rows(pitch, func(y float64) {
-		// Each turn climbs slant points across the strip's width.
-		p.line(p.r.X, y+slant, p.r.Right(), y, 0.4)
+		p.line(p.r.X+inset, y+slant, p.r.Right()-inset, y, w)
 	})
 	p.line(p.r.X+0.3, p.r.Y, p.r.X+0.3, p.r.Bottom(), 0.6)
 	p.line(p.r.Right()-0.3, p.r.Y, p.r.Right()-0.3, p.r.Bottom(), 0.6)
