@@ -9,11 +9,11 @@ import (
 	_ "image/jpeg" // Image items may hold JPEG bytes
 	_ "image/png"
 	"math"
+	"strconv"
 	"strings"
 	"unicode"
 
 	"github.com/tdewolff/canvas"
-	"github.com/tdewolff/canvas/renderers/svg"
 
 	"github.com/tremie-dev/tremie/render/draw"
 )
@@ -78,7 +78,7 @@ func (p *painter) fail(path string, format string, args ...any) {
 // items draws a list under an optional clip rectangle (in points).
 func (p *painter) items(items []draw.Item, clip *draw.Rect, prefix string) {
 	for i, it := range items {
-		path := fmt.Sprint(i)
+		path := strconv.Itoa(i)
 		if prefix != "" {
 			path = prefix + "." + path
 		}
@@ -462,14 +462,26 @@ func (p *painter) image(im draw.Image, clip *draw.Rect, path string) {
 	}
 	bl := p.pos(r.X, r.Bottom())
 	m := canvas.Identity.Translate(bl.X, bl.Y).Scale(r.W*mmPerPt/float64(b.Dx()), r.H*mmPerPt/float64(b.Dy()))
-	if _, ok := p.r.(*svg.SVG); ok && !cut && (format == "png" || format == "jpeg") {
+	if _, ok := p.r.(*svgRenderer); ok && !cut && (format == "png" || format == "jpeg") {
 		// SVG embeds the image's own bytes: canvas would encode the
 		// decoded pixels again as PNG, at length, to the same picture.
 		img = canvas.Image{Image: img, Bytes: im.Data, Mimetype: "image/" + format}
 	}
+	if pr, ok := p.r.(pdfRenderer); ok && format == "jpeg" && !cut && pr.jpegs != nil {
+		// The JPEG's own bytes, when a PDF reader decodes them as they
+		// are: one component (gray) or three (YCbCr, as RGB).
+		switch img.(type) {
+		case *image.Gray, *image.YCbCr:
+			_, gray := img.(*image.Gray)
+			stand := pr.jpegs.standIn(im.Data, b.Dx(), b.Dy(), gray)
+			p.r.RenderImage(stand, placeStandIn(m, b.Dx(), b.Dy()))
+			return
+		}
+	}
 	if pr, ok := p.r.(pdfRenderer); ok && format == "jpeg" {
-		// A JPEG stays JPEG in the PDF (DCTDecode): canvas encodes it
-		// again at its own quality (75, finer than the layout's strips,
+		// A JPEG cut by its clip (or not gray or YCbCr) stays JPEG in
+		// the PDF (DCTDecode) too: canvas encodes it again at its own
+		// quality (75, finer than the layout's strips,
 		// wallimage.StripJPEGQuality), rather than as Flate pixels
 		// several times the size.
 		if g, ok := img.(*image.Gray); ok {
