@@ -1,19 +1,25 @@
 package live
 
 import (
+	"bytes"
 	"context"
 	"crypto/sha256"
 	"fmt"
+	"image"
+	"image/color"
+	"image/png"
 	"io"
 	"io/fs"
 	"net/http"
 	"net/http/httptest"
 	"os"
 	"path/filepath"
+	"slices"
 	"strings"
 	"testing"
 	"time"
 
+	"github.com/fsnotify/fsnotify"
 	"github.com/tremie-dev/tremie/cmd/tremie/demo"
 )
 
@@ -209,5 +215,72 @@ func TestPageNamesTheProfile(t *testing.T) {
 	if !strings.Contains(body, "Rule thresholds from profile &#34;Tarn County code&#34; (county.profile.toml), following Tarn County Code ch. 7 (invented).") ||
 		strings.Contains(body, "thresholds are defaults") {
 		t.Errorf("the page does not name the profile in force")
+	}
+}
+
+// TestWallImageRedrawsItsWell: a wall image changed on disk redraws the
+// well that shows it, and only that well, as a changed well file does;
+// the watcher takes an image's events and watches its folder.
+func TestWallImageRedrawsItsWell(t *testing.T) {
+	dir := demoProject(t)
+	var redrawn []int
+	s, err := New(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	s.Prepared = func(n int) { redrawn = append(redrawn, n) }
+	var before []byte
+	for _, w := range s.wells {
+		if w.ID == "BR-1" {
+			if len(w.Images) != 1 {
+				t.Fatalf("BR-1 names %v as its images, want its one wall image", w.Images)
+			}
+			before = w.Sheets[0]
+		}
+	}
+	img := filepath.Join(dir, "wells", "BR-1-wall.png")
+	data, err := os.ReadFile(img)
+	if err != nil {
+		t.Fatal(err)
+	}
+	s.Refresh()
+	// A darker copy of the image, so that the strip on the sheet changes.
+	src, err := png.Decode(bytes.NewReader(data))
+	if err != nil {
+		t.Fatal(err)
+	}
+	b := src.Bounds()
+	dark := image.NewGray(b)
+	for y := b.Min.Y; y < b.Max.Y; y++ {
+		for x := b.Min.X; x < b.Max.X; x++ {
+			r, _, _, _ := src.At(x, y).RGBA()
+			dark.SetGray(x, y, color.Gray{Y: uint8(r >> 10)})
+		}
+	}
+	var buf bytes.Buffer
+	if err := png.Encode(&buf, dark); err != nil {
+		t.Fatal(err)
+	}
+	if err := os.WriteFile(img, buf.Bytes(), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	later := time.Now().Add(time.Second) // a time of its own, whatever the clock's grain
+	os.Chtimes(img, later, later)
+	s.Refresh()
+	if len(redrawn) != 2 || redrawn[0] != 0 || redrawn[1] != 1 {
+		t.Errorf("wells redrawn per refresh %v, want [0 1]", redrawn)
+	}
+	for _, w := range s.wells {
+		if w.ID == "BR-1" && bytes.Equal(w.Sheets[0], before) {
+			t.Error("BR-1's sheet is the same after its wall image changed")
+		}
+	}
+	if !slices.Contains(s.watchDirs(), filepath.Join(dir, "wells")) {
+		t.Errorf("the image's folder is not watched: %v", s.watchDirs())
+	}
+	for name, want := range map[string]bool{"BR-1-wall.png": true, "core.JPG": true, "log.tiff": true, "notes.txt": false, ".BR-1-wall.png.swp": false} {
+		if got := relevant(fsnotify.Event{Name: filepath.Join(dir, name), Op: fsnotify.Write}); got != want {
+			t.Errorf("a write to %s is relevant: %v, want %v", name, got, want)
+		}
 	}
 }

@@ -242,6 +242,9 @@ func (s *Server) watchDirs() []string {
 	}
 	for _, w := range wells {
 		add(filepath.Dir(w.Path))
+		for _, im := range w.Images {
+			add(filepath.Dir(im))
+		}
 	}
 	if st != nil && st.run != nil {
 		for _, set := range st.run.Settings {

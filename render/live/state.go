@@ -15,6 +15,7 @@ import (
 
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/pipeline"
+	"github.com/tremie-dev/tremie/render/wallimage"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
@@ -44,6 +45,10 @@ type Well struct {
 	// the defaults, or the profile in force with its file and code.
 	Thresholds string
 	Version    string // hash of what it was made from: changes when it is redrawn
+	// Images are the well's wall image files: their size and time enter
+	// Version, so that a changed image redraws the sheet, and their
+	// folders are watched.
+	Images []string
 }
 
 // settings reads the project through the pipeline: its wells, each with
@@ -91,19 +96,31 @@ func loadSettings(dir string) *settings {
 func prepare(st *settings, in pipeline.Input, prev *Well) *Well {
 	data, rerr := schema.ReadInput(in.Path, schema.MaxTextFile)
 	sum := st.hashes[in.Setting]
-	h := sha256.New()
-	h.Write(sum[:])
-	h.Write(data)
-	version := fmt.Sprintf("%x", h.Sum(nil))[:16]
+	// The images the well named last time: if the file names others, its
+	// bytes changed and it is drawn again anyway.
+	var images []string
+	if prev != nil {
+		images = prev.Images
+	}
+	versionOf := func(images []string) string {
+		h := sha256.New()
+		h.Write(sum[:])
+		h.Write(data)
+		h.Write(wallimage.FingerprintOf(images))
+		return fmt.Sprintf("%x", h.Sum(nil))[:16]
+	}
+	version := versionOf(images)
 	if prev != nil && prev.Version == version && rerr == nil {
 		return prev
 	}
-	w := &Well{Key: in.Key, Path: in.Path, Version: version, Status: Errors}
+	w := &Well{Key: in.Key, Path: in.Path, Version: versionOf(nil), Status: Errors}
 	pw := pipeline.Prepare(in, pipeline.AllRules)
 	if pw.Err != nil {
 		w.Problems = problemsOf(pw.Err, in)
 		return w
 	}
+	w.Images = wallimage.Paths(in.Path, pw.Well)
+	w.Version = versionOf(w.Images)
 	w.ID = pw.ID
 	note := in.Setting.Profile.ThresholdNote() // "rule thresholds ..."
 	w.Thresholds = strings.ToUpper(note[:1]) + note[1:]

@@ -10,7 +10,9 @@ import (
 )
 
 // settle is how long the watcher waits after a change for more: an
-// editor's save is often several events (write, rename, chmod).
+// editor's save is often several events (write, rename, chmod), which
+// follow each other within a few milliseconds; 120 ms is common practice
+// for a file watcher's debounce, below what a person notices as a delay.
 const settle = 120 * time.Millisecond
 
 // watcher calls refresh after TOML files in the watched directories
@@ -64,13 +66,15 @@ func newWatcher(root string, refresh func(), dirs func() []string) (*watcher, er
 }
 
 // relevant reports whether an event may change what the page shows: a
-// TOML file, or a folder appearing or going.
+// TOML file, a wall image (PNG, JPEG, TIFF), or a folder appearing or
+// going.
 func relevant(ev fsnotify.Event) bool {
 	name := filepath.Base(ev.Name)
 	if strings.HasPrefix(name, ".") && !strings.HasSuffix(name, ".toml") {
 		return false // editor swap and lock files
 	}
-	if strings.HasSuffix(name, ".toml") {
+	switch strings.ToLower(filepath.Ext(name)) {
+	case ".toml", ".png", ".jpg", ".jpeg", ".tif", ".tiff":
 		return true
 	}
 	return ev.Has(fsnotify.Create) || ev.Has(fsnotify.Remove) || ev.Has(fsnotify.Rename)

@@ -215,11 +215,8 @@ func opaque(im *image.RGBA) bool {
 func LoadAll(wellFile string, w *schema.Well) (map[string]*Image, []error) {
 	out := map[string]*Image{}
 	var errs []error
-	for _, wi := range w.WallImages {
-		p := wi.File
-		if !filepath.IsAbs(p) {
-			p = filepath.Join(filepath.Dir(wellFile), filepath.FromSlash(p))
-		}
+	for i, p := range Paths(wellFile, w) {
+		wi := w.WallImages[i]
 		im, err := Load(p)
 		if err != nil {
 			errs = append(errs, &schema.Error{File: w.Pos.File, Line: w.Line(wi.Path + ".file"), Key: wi.Path + ".file", Msg: "wall image: " + err.Error()})
@@ -234,12 +231,27 @@ func LoadAll(wellFile string, w *schema.Well) (map[string]*Image, []error) {
 // modification time of each), for a cache key: a changed image redraws
 // the well without being read twice.
 func Fingerprint(wellFile string, w *schema.Well) []byte {
-	var b bytes.Buffer
+	return FingerprintOf(Paths(wellFile, w))
+}
+
+// Paths are the files of a well's [[wall_image]] tables, named relative
+// to the well file.
+func Paths(wellFile string, w *schema.Well) []string {
+	var out []string
 	for _, wi := range w.WallImages {
 		p := wi.File
 		if !filepath.IsAbs(p) {
 			p = filepath.Join(filepath.Dir(wellFile), filepath.FromSlash(p))
 		}
+		out = append(out, p)
+	}
+	return out
+}
+
+// FingerprintOf is Fingerprint of image files already named.
+func FingerprintOf(paths []string) []byte {
+	var b bytes.Buffer
+	for _, p := range paths {
 		fmt.Fprintf(&b, "\nwall_image %q", p)
 		if st, err := os.Stat(p); err == nil {
 			fmt.Fprintf(&b, " %d %d", st.Size(), st.ModTime().UnixNano())
