@@ -12,11 +12,7 @@ import (
 // wall and never past it, a nested well's off-centre strings too (common
 // practice: a centralizer's springs bear on the hole wall).
 func TestCentralizersInsideTheHole(t *testing.T) {
-	var wells []corpusWell
-	for n, d := range demoWells(t) {
-		wells = append(wells, corpusWell{n, d.w, d.in})
-	}
-	wells = append(wells, galleryWells(t)...)
+	wells := demoAndGallery(t)
 	seen := 0
 	eachPage(t, func(page string, pg Page) {
 		for _, c := range wells {
