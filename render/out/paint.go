@@ -9,11 +9,11 @@ import (
 	_ "image/jpeg" // Image items may hold JPEG bytes
 	_ "image/png"
 	"math"
+	"strconv"
 	"strings"
 	"unicode"
 
 	"github.com/tdewolff/canvas"
-	"github.com/tdewolff/canvas/renderers/svg"
 
 	"github.com/tremie-dev/tremie/render/draw"
 )
@@ -78,7 +78,7 @@ func (p *painter) fail(path string, format string, args ...any) {
 // items draws a list under an optional clip rectangle (in points).
 func (p *painter) items(items []draw.Item, clip *draw.Rect, prefix string) {
 	for i, it := range items {
-		path := fmt.Sprint(i)
+		path := strconv.Itoa(i)
 		if prefix != "" {
 			path = prefix + "." + path
 		}
@@ -462,7 +462,7 @@ func (p *painter) image(im draw.Image, clip *draw.Rect, path string) {
 	}
 	bl := p.pos(r.X, r.Bottom())
 	m := canvas.Identity.Translate(bl.X, bl.Y).Scale(r.W*mmPerPt/float64(b.Dx()), r.H*mmPerPt/float64(b.Dy()))
-	if _, ok := p.r.(*svg.SVG); ok && !cut && (format == "png" || format == "jpeg") {
+	if _, ok := p.r.(*svgRenderer); ok && !cut && (format == "png" || format == "jpeg") {
 		// SVG embeds the image's own bytes: canvas would encode the
 		// decoded pixels again as PNG, at length, to the same picture.
 		img = canvas.Image{Image: img, Bytes: im.Data, Mimetype: "image/" + format}

@@ -16,7 +16,10 @@ import (
 // opaque black fill and stroke, by degenerate paths that paint nothing
 // (ISO 32000-1, 8.5.3.2: a zero-length subpath with butt caps is not
 // painted), which the writer and the viewer then agree on.
-type pdfRenderer struct{ *pdf.PDF }
+type pdfRenderer struct {
+	*pdf.PDF
+	paths *pdfPaths // path data written for canvas (nil: canvas writes it)
+}
 
 var offPage = func() *canvas.Path {
 	p := &canvas.Path{}
@@ -38,7 +41,11 @@ func (r pdfRenderer) reset() {
 func translucent(p canvas.Paint) bool { return p.IsColor() && p.Color.A < 255 && p.Color.A > 0 }
 
 func (r pdfRenderer) RenderPath(path *canvas.Path, style canvas.Style, m canvas.Matrix) {
-	r.PDF.RenderPath(path, style, m)
+	if r.paths != nil && m == canvas.Identity && plainStyle(style) && !path.Empty() {
+		r.PDF.RenderPath(r.paths.standIn(path), style, m)
+	} else {
+		r.PDF.RenderPath(path, style, m)
+	}
 	if (style.HasFill() && translucent(style.Fill)) || (style.HasStroke() && translucent(style.Stroke)) {
 		r.reset()
 	}

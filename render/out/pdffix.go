@@ -22,7 +22,7 @@ import (
 // uncompressed; and rewrites the cross-reference table and
 // trailer, adding a file identifier hashed from the content. Anything
 // unexpected in canvas's layout is an error, not a silent guess.
-func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns) ([]byte, error) {
+func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns, paths *pdfPaths) ([]byte, error) {
 	xrefAt, offsets, err := readXref(pdf)
 	if err != nil {
 		return nil, err
@@ -38,9 +38,10 @@ func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns) ([]byte, error) {
 		return nil, err
 	}
 	replace := map[int][]byte{2: info}
-	fonts := map[int]bool{}
+	fonts, contents := map[int]bool{}, map[int]bool{}
 	for _, span := range spans[1:] {
-		// Only dictionaries name font files; stream data is skipped.
+		// Only dictionaries name font files and content streams; stream
+		// data is skipped.
 		if at := bytes.Index(span, []byte(">>stream\n")); at >= 0 {
 			span = span[:at]
 		}
@@ -50,18 +51,27 @@ func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns) ([]byte, error) {
 				fonts[n] = true
 			}
 		}
+		for _, m := range contentsRE.FindAllSubmatch(span, -1) {
+			n, _ := strconv.Atoi(string(m[1]))
+			if n > 2 && n < len(spans) {
+				contents[n] = true
+			}
+		}
 	}
 	// Streams come from canvas uncompressed and are compressed here: page
-	// content at Flate's fastest level (it is most of the work, and the
-	// file grows by about a fifth), font programs at the default level,
-	// once, after their date is pinned.
+	// content at contentLevel, images and pattern tiles at Flate's fastest
+	// level, font programs at the default level, once, after their date
+	// is pinned.
 	for n := 3; n < len(spans); n++ {
 		if !bytes.Contains(spans[n], []byte(">>stream\n")) {
 			continue
 		}
 		pin, level := (func([]byte) ([]byte, error))(nil), zlib.BestSpeed
-		if fonts[n] {
+		switch {
+		case fonts[n]:
 			pin, level = pinFontDate, zlib.DefaultCompression
+		case contents[n]:
+			pin, level = paths.fill, contentLevel
 		}
 		obj, err := compressStream(spans[n], pin, level)
 		if err != nil {
@@ -71,6 +81,12 @@ func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns) ([]byte, error) {
 	}
 	return rebuild(spans, replace), nil
 }
+
+// contentLevel compresses page content: Go's level 4 takes about the
+// time of its fastest level (a different, greedier matcher) and writes a
+// sheet's content about a sixth smaller (BR-1: 16.7 KB at level 1, 14.1
+// KB at 4, 13.5 KB at the default 6, which takes twice the time).
+const contentLevel = 4
 
 var fontFileRE = regexp.MustCompile(`/FontFile2 (\d+) 0 R`)
 

@@ -31,7 +31,7 @@ func SVGWith(doc *draw.Document, i int, opt EncodeOptions) ([]byte, error) {
 	// find every glyph the text names.
 	opts.EmbedFonts = true
 	opts.SubsetFonts = true
-	r := svg.New(&buf, p.Width*mmPerPt, p.Height*mmPerPt, &opts)
+	r := newSVGRenderer(&buf, p.Width*mmPerPt, p.Height*mmPerPt, &opts)
 	fonts := takeFonts()
 	defer fonts.giveBack()
 	patterns := newSVGPatterns(&buf)

@@ -98,38 +98,91 @@ func planesOf(img image.Image) planes {
 	for k := range p.c {
 		p.c[k] = make([]float64, p.w*p.h)
 	}
-	for y := 0; y < p.h; y++ {
-		for x := 0; x < p.w; x++ {
-			r, g, bl, a := img.At(b.Min.X+x, b.Min.Y+y).RGBA() // premultiplied, 16 bit
-			white := float64(0xffff-a) / 257
-			i := y*p.w + x
-			p.c[0][i] = float64(r)/257 + white
-			p.c[1][i] = float64(g)/257 + white
-			p.c[2][i] = float64(bl)/257 + white
+	set := func(i int, r, g, bl, a float64) { // non-premultiplied, 0-255
+		white := 255 - a
+		p.c[0][i] = r*a/255 + white
+		p.c[1][i] = g*a/255 + white
+		p.c[2][i] = bl*a/255 + white
+	}
+	switch img := img.(type) {
+	case *image.NRGBA:
+		for y := 0; y < p.h; y++ {
+			row := img.Pix[y*img.Stride:]
+			for x := 0; x < p.w; x++ {
+				q := row[4*x : 4*x+4]
+				set(y*p.w+x, float64(q[0]), float64(q[1]), float64(q[2]), float64(q[3]))
+			}
+		}
+	case *image.RGBA: // premultiplied
+		for y := 0; y < p.h; y++ {
+			row := img.Pix[y*img.Stride:]
+			for x := 0; x < p.w; x++ {
+				q := row[4*x : 4*x+4]
+				white := 255 - float64(q[3])
+				i := y*p.w + x
+				p.c[0][i] = float64(q[0]) + white
+				p.c[1][i] = float64(q[1]) + white
+				p.c[2][i] = float64(q[2]) + white
+			}
+		}
+	default:
+		for y := 0; y < p.h; y++ {
+			for x := 0; x < p.w; x++ {
+				r, g, bl, a := img.At(b.Min.X+x, b.Min.Y+y).RGBA() // premultiplied, 16 bit
+				white := float64(0xffff-a) / 257
+				i := y*p.w + x
+				p.c[0][i] = float64(r)/257 + white
+				p.c[1][i] = float64(g)/257 + white
+				p.c[2][i] = float64(bl)/257 + white
+			}
 		}
 	}
 	return p
 }
 
 // blur is a 3 × 3 box blur: it forgives a glyph edge or a hairline that
-// two rasterisers put half a pixel apart.
+// two rasterisers put half a pixel apart. It sums rows, then columns; at
+// the edges it averages the pixels that exist.
 func (p planes) blur() planes {
 	q := planes{w: p.w, h: p.h}
+	rows := make([]float64, p.w*p.h)
 	for k := range p.c {
 		src, dst := p.c[k], make([]float64, len(p.c[k]))
 		for y := 0; y < p.h; y++ {
-			for x := 0; x < p.w; x++ {
-				sum, n := 0.0, 0
-				for dy := -1; dy <= 1; dy++ {
-					for dx := -1; dx <= 1; dx++ {
-						xx, yy := x+dx, y+dy
-						if xx >= 0 && yy >= 0 && xx < p.w && yy < p.h {
-							sum += src[yy*p.w+xx]
-							n++
-						}
-					}
+			r := src[y*p.w : (y+1)*p.w]
+			out := rows[y*p.w : (y+1)*p.w]
+			for x := range r {
+				sum := r[x]
+				if x > 0 {
+					sum += r[x-1]
 				}
-				dst[y*p.w+x] = sum / float64(n)
+				if x+1 < p.w {
+					sum += r[x+1]
+				}
+				out[x] = sum
+			}
+		}
+		for y := 0; y < p.h; y++ {
+			ny := 1.0
+			if y > 0 {
+				ny++
+			}
+			if y+1 < p.h {
+				ny++
+			}
+			for x := 0; x < p.w; x++ {
+				nx := 3.0
+				if x == 0 || x+1 == p.w {
+					nx = 2
+				}
+				sum := rows[y*p.w+x]
+				if y > 0 {
+					sum += rows[(y-1)*p.w+x]
+				}
+				if y+1 < p.h {
+					sum += rows[(y+1)*p.w+x]
+				}
+				dst[y*p.w+x] = sum / (nx * ny)
 			}
 		}
 		q.c[k] = dst
@@ -206,4 +259,60 @@ func compareRasters(a, b planes) (rasterDiff, error) {
 	d.inkA /= float64(n)
 	d.inkB /= float64(n)
 	return d, nil
+}
+
+// viewerSheet is one sheet the viewer tests open: page i of doc.
+type viewerSheet struct {
+	name    string
+	doc     *draw.Document
+	i       int
+	gallery bool
+}
+
+func (s viewerSheet) page() *draw.Page { return s.doc.Pages[s.i] }
+
+// galleryDir holds the gallery's invented wells, one of each kind.
+const galleryDir = "../../testdata/gallery"
+
+// galleryOpened bounds the time the viewer tests spend on the gallery:
+// every sheet of each gallery well is opened except DS-1200's after the
+// first, which repeat its layout down a deeper range (TW-7's two sheets
+// have the match lines on both sides).
+func galleryOpened(well string, i int) bool {
+	return well != "DS-1200.toml" || i == 0
+}
+
+// viewerSheets lists every demo sheet, then the gallery's (galleryOpened).
+func viewerSheets(t *testing.T) []viewerSheet {
+	t.Helper()
+	var sheets []viewerSheet
+	for _, nd := range demoDocs(t) {
+		for i := range nd.doc.Pages {
+			sheets = append(sheets, viewerSheet{name: fmt.Sprintf("%s sheet %d", nd.name, i+1), doc: nd.doc, i: i})
+		}
+	}
+	for _, nd := range projectDocs(t, galleryDir) {
+		for i := range nd.doc.Pages {
+			if galleryOpened(nd.name, i) {
+				sheets = append(sheets, viewerSheet{name: fmt.Sprintf("gallery %s sheet %d", nd.name, i+1), doc: nd.doc, i: i, gallery: true})
+			}
+		}
+	}
+	return sheets
+}
+
+// nrgba gives an image's pixels as 8-bit non-premultiplied RGBA, the
+// form png.Decode returns for rsvg-convert's rasters, for fast reading.
+func nrgba(img image.Image) *image.NRGBA {
+	if n, ok := img.(*image.NRGBA); ok {
+		return n
+	}
+	b := img.Bounds()
+	n := image.NewNRGBA(image.Rect(0, 0, b.Dx(), b.Dy()))
+	for y := 0; y < b.Dy(); y++ {
+		for x := 0; x < b.Dx(); x++ {
+			n.Set(x, y, img.At(b.Min.X+x, b.Min.Y+y))
+		}
+	}
+	return n
 }

@@ -170,20 +170,32 @@ func (p *painter) totalDepth() []draw.Item {
 func (l *layout) matchLines(p *painter, i int) []draw.Item {
 	var items []draw.Item
 	st := draw.Style{Stroke: ink, StrokeWidth: 0.8, Dash: []float64{6, 2, 1.5, 2}}
-	b := l.body
 	if i > 0 {
 		y := p.y(p.sp.Top)
 		prev, _ := l.number(i - 1)
-		items = append(items, draw.Shape{Style: st, Points: []draw.Point{{X: b.X, Y: y}, {X: b.Right(), Y: y}}, Role: "matchline:top"},
-			l.matchText(y-4, p.sp.Top, "continued from", prev))
+		items = append(items, l.matchLine(st, y, "matchline:top")...)
+		items = append(items, l.matchText(y-4, p.sp.Top, "continued from", prev))
 	}
 	if i < len(l.sheets)-1 {
 		y := p.y(p.sp.Bottom)
 		next, _ := l.number(i + 1)
-		items = append(items, draw.Shape{Style: st, Points: []draw.Point{{X: b.X, Y: y}, {X: b.Right(), Y: y}}, Role: "matchline:bottom"},
-			l.matchText(y+9, p.sp.Bottom, "continued on", next))
+		items = append(items, l.matchLine(st, y, "matchline:bottom")...)
+		items = append(items, l.matchText(y+9, p.sp.Bottom, "continued on", next))
 	}
 	return items
+}
+
+// matchLine runs across the body at y, broken where the depth column
+// writes its labels: match lines fall on major ticks, and the depth there
+// is labelled beside its tick like every other, not struck through.
+func (l *layout) matchLine(st draw.Style, y float64, role string) []draw.Item {
+	b, col := l.body, l.cols.depth
+	gapL, gapR := col.X, col.Right()-7 // a major tick's left end; its label ends 2 pt short of it (depthAxis)
+	var items []draw.Item
+	if gapL > b.X {
+		items = append(items, draw.Shape{Style: st, Points: []draw.Point{{X: b.X, Y: y}, {X: gapL, Y: y}}, Role: role})
+	}
+	return append(items, draw.Shape{Style: st, Points: []draw.Point{{X: max(b.X, gapR), Y: y}, {X: b.Right(), Y: y}}, Role: role})
 }
 
 // matchText names a match line in the components column, shortened when
