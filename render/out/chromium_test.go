@@ -56,6 +56,9 @@ const (
 // pdftoppm (poppler), within the stated tolerance; pattern fills by
 // their tone. TREMIE_LOOK=DIR keeps both rasters of each sheet.
 func TestChromiumMatchesPDF(t *testing.T) {
+	// Run beside the other viewer test: each mostly waits on its
+	// renderer's processes.
+	t.Parallel()
 	exe := tool(t, "Chromium-vs-PDF raster test", "chromium", "chromium", "chromium-browser", "google-chrome")
 	pdftoppm := tool(t, "Chromium-vs-PDF raster test", "poppler-utils", "pdftoppm")
 	browser := startChromium(t, exe)

@@ -467,9 +467,21 @@ func (p *painter) image(im draw.Image, clip *draw.Rect, path string) {
 		// decoded pixels again as PNG, at length, to the same picture.
 		img = canvas.Image{Image: img, Bytes: im.Data, Mimetype: "image/" + format}
 	}
+	if pr, ok := p.r.(pdfRenderer); ok && format == "jpeg" && !cut && pr.jpegs != nil {
+		// The JPEG's own bytes, when a PDF reader decodes them as they
+		// are: one component (gray) or three (YCbCr, as RGB).
+		switch img.(type) {
+		case *image.Gray, *image.YCbCr:
+			_, gray := img.(*image.Gray)
+			stand := pr.jpegs.standIn(im.Data, b.Dx(), b.Dy(), gray)
+			p.r.RenderImage(stand, placeStandIn(m, b.Dx(), b.Dy()))
+			return
+		}
+	}
 	if pr, ok := p.r.(pdfRenderer); ok && format == "jpeg" {
-		// A JPEG stays JPEG in the PDF (DCTDecode): canvas encodes it
-		// again at its own quality (75, finer than the layout's strips,
+		// A JPEG cut by its clip (or not gray or YCbCr) stays JPEG in
+		// the PDF (DCTDecode) too: canvas encodes it again at its own
+		// quality (75, finer than the layout's strips,
 		// wallimage.StripJPEGQuality), rather than as Flate pixels
 		// several times the size.
 		if g, ok := img.(*image.Gray); ok {

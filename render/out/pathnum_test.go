@@ -119,7 +119,7 @@ func TestPDFPathsAreCanvas(t *testing.T) {
 		if err := w.Close(); err != nil {
 			t.Fatal(err)
 		}
-		out, err := fixPDF(buf.Bytes(), []byte("2 0 obj\n<<>>\nendobj\n"), nil, r.paths)
+		out, err := fixPDF(buf.Bytes(), []byte("2 0 obj\n<<>>\nendobj\n"), nil, r.paths, nil)
 		if err != nil {
 			t.Fatal(err)
 		}

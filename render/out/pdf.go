@@ -38,19 +38,19 @@ func PDFWith(doc *draw.Document, opt EncodeOptions) ([]byte, error) {
 	fonts := takeFonts()
 	defer fonts.giveBack()
 	patterns := newPDFPatterns()
-	paths := &pdfPaths{}
+	paths, jpegs := &pdfPaths{}, &pdfJPEGs{}
 	for i, p := range pages {
 		if i > 0 {
 			r.NewPage(p.Width*mmPerPt, p.Height*mmPerPt)
 		}
-		if err := paintPage(pdfRenderer{PDF: r, paths: paths}, p, fonts, opt.Text, patterns); err != nil {
+		if err := paintPage(pdfRenderer{PDF: r, paths: paths, jpegs: jpegs}, p, fonts, opt.Text, patterns); err != nil {
 			return nil, fmt.Errorf("pdf page %d: %w", i+1, err)
 		}
 	}
 	if err := r.Close(); err != nil {
 		return nil, fmt.Errorf("pdf: %w", err)
 	}
-	out, err := fixPDF(buf.Bytes(), info.object(), patterns, paths)
+	out, err := fixPDF(buf.Bytes(), info.object(), patterns, paths, jpegs)
 	if err != nil {
 		return nil, fmt.Errorf("pdf: %w", err)
 	}

@@ -19,6 +19,7 @@ import (
 type pdfRenderer struct {
 	*pdf.PDF
 	paths *pdfPaths // path data written for canvas (nil: canvas writes it)
+	jpegs *pdfJPEGs // JPEGs passed through (nil: canvas encodes them)
 }
 
 var offPage = func() *canvas.Path {

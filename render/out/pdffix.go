@@ -22,7 +22,7 @@ import (
 // uncompressed; and rewrites the cross-reference table and
 // trailer, adding a file identifier hashed from the content. Anything
 // unexpected in canvas's layout is an error, not a silent guess.
-func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns, paths *pdfPaths) ([]byte, error) {
+func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns, paths *pdfPaths, jpegs *pdfJPEGs) ([]byte, error) {
 	xrefAt, offsets, err := readXref(pdf)
 	if err != nil {
 		return nil, err
@@ -38,6 +38,7 @@ func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns, paths *pdfPaths) ([]
 		return nil, err
 	}
 	replace := map[int][]byte{2: info}
+	jpegs.replaceStandIns(spans, replace)
 	fonts, contents := map[int]bool{}, map[int]bool{}
 	for _, span := range spans[1:] {
 		// Only dictionaries name font files and content streams; stream
@@ -63,7 +64,7 @@ func fixPDF(pdf []byte, info []byte, patterns *pdfPatterns, paths *pdfPaths) ([]
 	// level, font programs at the default level, once, after their date
 	// is pinned.
 	for n := 3; n < len(spans); n++ {
-		if !bytes.Contains(spans[n], []byte(">>stream\n")) {
+		if _, done := replace[n]; done || !bytes.Contains(spans[n], []byte(">>stream\n")) {
 			continue
 		}
 		pin, level := (func([]byte) ([]byte, error))(nil), zlib.BestSpeed

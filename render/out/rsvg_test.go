@@ -40,6 +40,9 @@ const rsvgDPI = 200
 // is checked in the mode that must hold, text where the Go fonts are
 // installed, else outlines, and the demo's BR-1 and MW-1 in both.
 func TestRsvgTextStaysInItsBox(t *testing.T) {
+	// Run beside the other viewer test: each mostly waits on its
+	// renderer's processes.
+	t.Parallel()
 	rsvg := tool(t, "rsvg-convert text-box test", "librsvg2-bin", "rsvg-convert")
 	sheets := viewerSheets(t)
 	installed, why := installedGoFonts(t, sheets)

@@ -70,11 +70,6 @@ func itemRect(it draw.Item) (draw.Rect, string, bool) {
 	return draw.Rect{}, "", false
 }
 
-func within(in, out draw.Rect) bool {
-	const eps = 0.01
-	return in.X >= out.X-eps && in.Y >= out.Y-eps && in.Right() <= out.Right()+eps && in.Bottom() <= out.Bottom()+eps
-}
-
 // On every page size and orientation the band's contents stay inside
 // the band (on a drawing) or the notes area (on a notes sheet), inside
 // one of its boxes, and the boxes do not overlap (common practice: a

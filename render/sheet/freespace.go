@@ -7,97 +7,169 @@ import (
 // The last drawing sheet of a well usually ends above the foot of its
 // body: below the total depth the columns stand empty. What would go on
 // a notes sheet (amounts rows, notes, findings, description and
-// component notes) is flowed first into that free room, in columns as
-// wide as the band's boxes, so that notes never open a sheet of their
-// own when they fit on the drawing. The drawing is not changed for it.
+// component notes) is set first in that free room, so that notes never
+// open a sheet of their own when they fit on the drawing. The drawing is
+// not changed for it.
 
 // freeGap keeps the notes clear of the drawing and the body's frame.
 const freeGap = 3.0
 
-// tdLabelH is the height the total-depth label takes under its depth
-// (totalDepth: a 6.5-pt line whose baseline is 8 pt down).
-const tdLabelH = 10.0
+// underDepth is the height under the deepest depth drawn that its marks
+// may still take: the total-depth label (a 6.5-pt line set 8 pt down),
+// the axes' ticks in the sheet's bottom pad and a depth label there.
+const underDepth = plotPadBottom + 3
 
-// freeArea is the free room of the body on the last drawing sheet: under
-// everything drawn at depth, the descriptions and the total-depth label,
-// across the columns left of the labels, or across the whole body when
-// the labels end higher. ok is false when there is no such room.
-func (l *layout) freeArea() (draw.Rect, bool) {
+// freeRooms are the ways of finding free room in the body of the last
+// drawing sheet: the columns fall in four groups (axes, lithology and
+// USCS; the descriptions; features and well; the labels), each free from
+// the foot of what it shows on that sheet, and each way joins
+// neighbouring groups differently into rooms (left to right) as tall as
+// the shortest group's room. notesInTheBody takes the way that holds
+// the most.
+func (l *layout) freeRooms() [][]draw.Rect {
 	if len(l.sheets) == 0 || len(l.sheetDescs) != len(l.sheets) || len(l.sheetCallouts) != len(l.sheets) {
-		return draw.Rect{}, false
+		return nil
 	}
 	i := len(l.sheets) - 1
 	p := l.painter(l.sheets[i], i == 0, true)
-	top := p.y(l.bot) + tdLabelH
+	deepest := p.y(l.bot)
+	descs := deepest + 3 // the layers' boundary ticks
 	for _, e := range l.sheetDescs[i] {
 		if e.form != descNoted {
-			top = max(top, e.top+e.block.height())
+			descs = max(descs, e.top+e.block.height())
 		}
 	}
-	bottom := l.plot.Bottom() - freeGap
-	left, right := l.body.X+freeGap, l.cols.call.X-freeGap
-	labels := top
+	labels := deepest
 	for _, pc := range l.sheetCallouts[i] {
 		labels = max(labels, pc.box.Bottom())
 	}
-	// The whole width when the labels leave as much height as the
-	// narrower room would have.
-	if labels <= top+1e-9 {
-		right = l.body.Right() - freeGap
+	wellX := l.cols.well.X
+	if l.cols.feat.W > 0 {
+		wellX = min(wellX, l.cols.feat.X)
 	}
-	r := draw.Rect{X: left, Y: top + freeGap, W: right - left, H: bottom - (top + freeGap)}
-	if r.W < 2*bandPad+60 || r.H < bandHeadH+bandPad+continueLineH+bandPad {
-		return draw.Rect{}, false
+	groups := []struct{ x0, x1, top float64 }{
+		{l.body.X, l.cols.desc.X, deepest + underDepth},
+		{l.cols.desc.X, l.cols.desc.Right(), descs},
+		{wellX, l.cols.call.X, deepest + underDepth},
+		{l.cols.call.X, l.body.Right(), labels},
 	}
-	return r, true
+	bottom := l.plot.Bottom() - freeGap
+	room := func(a, b int) (draw.Rect, bool) { // groups a..b joined
+		top := 0.0
+		for g := a; g <= b; g++ {
+			top = max(top, groups[g].top)
+		}
+		x0, x1 := groups[a].x0+freeGap, groups[b].x1-freeGap
+		r := draw.Rect{X: x0, Y: top + freeGap, W: x1 - x0, H: bottom - (top + freeGap)}
+		return r, r.W >= 100 && r.H >= bandPad+2*continueLineH+bandPad
+	}
+	var ways [][]draw.Rect
+	n := len(groups)
+	for cuts := 0; cuts < 1<<(n-1); cuts++ { // bit g: a cut after group g
+		var rooms []draw.Rect
+		a := 0
+		for b := 0; b < n; b++ {
+			if b < n-1 && cuts&(1<<b) == 0 {
+				continue
+			}
+			if r, ok := room(a, b); ok {
+				rooms = append(rooms, r)
+			}
+			a = b + 1
+		}
+		if len(rooms) > 0 {
+			ways = append(ways, rooms)
+		}
+	}
+	return ways
 }
 
-// notesInTheBody moves what the notes sheets carry into the free room of
-// the last drawing sheet: all of it when it fits, else as much as fits
-// when that spares a notes sheet (or the scale was chosen to draw one
-// sheet, --scale fit, where every note kept on it counts). Notes alone
-// stand in one box of as many columns as the room holds, each note
-// wrapped again to its column; amounts rows flow in the band's widths.
+// notesInTheBody moves what the notes sheets carry into the free rooms
+// of the last drawing sheet: all of it when it fits, else as much as
+// fits when that spares a notes sheet (or the scale was chosen to draw
+// one sheet, --scale fit, where every note kept on it counts). Notes
+// alone stand in one box per room, in as many columns as it holds, each
+// note wrapped again to its column; amounts rows flow in the band's
+// widths.
 func (l *layout) notesInTheBody() {
 	if len(l.notesPages) == 0 || l.strip > 0 {
-		return
-	}
-	area, ok := l.freeArea()
-	if !ok {
 		return
 	}
 	fit := l.opt.Scale != nil && l.opt.Scale.Fit
 	rows, notes := l.overflow()
 	var here []sheetBox
 	var pages [][]sheetBox
-	if len(rows) > 0 {
-		all := l.flowNotesInto([]draw.Rect{area}, l.notesArea(), rows, notes)
-		here, pages = all[0], all[1:]
-	} else {
-		box, rest := l.columnsIn(area, notes)
-		if box == nil {
-			return
+	var areas []draw.Rect
+	left := 0
+	for _, way := range l.freeRooms() {
+		h, p, n := l.setInRooms(way, rows, notes)
+		if len(h) == 0 {
+			continue
 		}
-		if len(rest) > 0 {
-			pages = l.flowNotes(l.notesArea(), nil, rest)
-			box.cont = 0
-		} else {
-			box.last = true
+		if here == nil || len(p) < len(pages) || (len(p) == len(pages) && (n < left || (n == left && len(h) < len(here)))) {
+			here, pages, left, areas = h, p, n, way
 		}
-		here = []sheetBox{*box}
 	}
 	if len(here) == 0 || (len(pages) >= len(l.notesPages) && !fit) {
 		return // no sheet spared: the notes stay together on their sheets
 	}
-	// The boxes stand on the foot of the body, clear of the drawing.
-	low := area.Y
-	for _, b := range here {
-		low = max(low, b.r.Bottom())
+	// The boxes of each room stand on the foot of the body.
+	for _, a := range areas {
+		low := a.Y
+		for _, b := range here {
+			if within(b.r, a) {
+				low = max(low, b.r.Bottom())
+			}
+		}
+		for i := range here {
+			if within(here[i].r, a) {
+				here[i].r.Y += a.Bottom() - low
+			}
+		}
 	}
-	for i := range here {
-		here[i].r.Y += area.Bottom() - low
+	l.freeBoxes, l.freeRs, l.notesPages = here, areas, pages
+}
+
+// setInRooms sets rows and notes in the rooms, then on notes sheets: it
+// returns the rooms' boxes, the notes sheets' and how many notes did not
+// find room (rows flow in the band's widths, and count none).
+func (l *layout) setInRooms(rooms []draw.Rect, rows [][]string, notes []noteBlock) ([]sheetBox, [][]sheetBox, int) {
+	var here []sheetBox
+	if len(rows) > 0 {
+		all := l.flowNotesInto(rooms, l.notesArea(), rows, notes)
+		for _, p := range all[:len(rooms)] {
+			here = append(here, p...)
+		}
+		return here, all[len(rooms):], 0
 	}
-	l.freeBoxes, l.freeR, l.notesPages = here, area, pages
+	for _, a := range rooms {
+		box, rest := l.columnsIn(a, notes)
+		if box == nil {
+			continue
+		}
+		notes = rest
+		here = append(here, *box)
+		if len(notes) == 0 {
+			break
+		}
+	}
+	if len(here) == 0 {
+		return nil, nil, len(notes)
+	}
+	var pages [][]sheetBox
+	if len(notes) > 0 {
+		pages = l.flowNotes(l.notesArea(), nil, notes)
+		here[len(here)-1].cont = 0
+	} else {
+		here[len(here)-1].last = true
+	}
+	return here, pages, len(notes)
+}
+
+// within reports whether r lies inside o.
+func within(r, o draw.Rect) bool {
+	const eps = 0.01
+	return r.X >= o.X-eps && r.Y >= o.Y-eps && r.Right() <= o.Right()+eps && r.Bottom() <= o.Bottom()+eps
 }
 
 // columnsIn sets the first of notes in one box at the foot of area, in
@@ -153,7 +225,7 @@ func balance(blocks []noteBlock, k int, h float64) ([][]noteBlock, int, float64)
 			for j < len(blocks) && notesHeight(blocks[i:j+1]) <= limit {
 				j++
 			}
-			for j > i+1 && blocks[j-1].heading && j < len(blocks) {
+			for j > i && blocks[j-1].heading && j < len(blocks) {
 				j--
 			}
 			if j == i {
@@ -178,28 +250,23 @@ func balance(blocks []noteBlock, k int, h float64) ([][]noteBlock, int, float64)
 	return cols, n, tallest
 }
 
-// freeItems draws the notes in the body's free room, on a white ground
-// that hides the columns' rules under them.
+// freeItems draws the notes in the body's free rooms, each box on a
+// white ground reaching down to the body's frame (and to its side when
+// the box stands at it), so that the rules under it end at its top.
 func (l *layout) freeItems() []draw.Item {
-	if len(l.freeBoxes) == 0 {
-		return nil
+	var items []draw.Item
+	const g = 2.0
+	for _, b := range l.freeBoxes {
+		x0, x1 := b.r.X-g, b.r.Right()+g
+		if b.r.X <= l.body.X+freeGap+1e-9 {
+			x0 = l.body.X + 0.5
+		}
+		if b.r.Right() >= l.body.Right()-freeGap-1e-9 {
+			x1 = l.body.Right() - 0.5
+		}
+		y0 := b.r.Y - g
+		items = append(items, box(draw.Rect{X: x0, Y: y0, W: x1 - x0, H: l.body.Bottom() - 0.5 - y0}, draw.Color{}, 0, draw.White, "ground:notes"))
 	}
-	u := l.freeBoxes[0].r
-	for _, b := range l.freeBoxes[1:] {
-		x0, y0 := min(u.X, b.r.X), min(u.Y, b.r.Y)
-		x1, y1 := max(u.Right(), b.r.Right()), max(u.Bottom(), b.r.Bottom())
-		u = draw.Rect{X: x0, Y: y0, W: x1 - x0, H: y1 - y0}
-	}
-	// The ground reaches down to the body's frame (and to its left side
-	// when the boxes start there), so the rules under the notes end at
-	// their top.
-	g := 2.0
-	x0, y0 := u.X-g, u.Y-g
-	if u.X <= l.body.X+freeGap+1e-9 {
-		x0 = l.body.X + 0.5
-	}
-	ground := draw.Rect{X: x0, Y: y0, W: u.Right() + g - x0, H: l.body.Bottom() - 0.5 - y0}
-	items := []draw.Item{box(ground, draw.Color{}, 0, draw.White, "ground:notes")}
 	return append(items, l.boxItems(l.freeBoxes)...)
 }
 

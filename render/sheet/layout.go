@@ -25,10 +25,10 @@ type layout struct {
 	// into it are stripBoxes.
 	strip      float64
 	stripBoxes []sheetBox
-	// freeBoxes are the notes flowed into the free room freeR of the last
+	// freeBoxes are the notes set in the free rooms freeRs of the last
 	// drawing sheet's body (see freespace.go).
 	freeBoxes []sheetBox
-	freeR     draw.Rect
+	freeRs    []draw.Rect
 
 	secs *schema.Sections // what stands in the hole at each depth
 
@@ -223,25 +223,40 @@ func lessDetailed(cs []Scale, s Scale) (Scale, bool) {
 // less than half used, the most detailed round scale up to twice the
 // readable limit that needs fewer sheets is taken instead.
 func (l *layout) economicalScale(usable float64) (Scale, bool) {
-	span := l.bot - l.top
-	sheets := l.scale.Points(span) / usable
-	if sheets <= 1 || sheets-math.Floor(sheets) >= 0.5 {
+	// Judged on the sheets as paginated: match lines rounded to the
+	// axis ticks can leave a last sheet far emptier than the depth alone
+	// says (TW-7 on A4: 2.86 bodies of depth, four sheets, the last 11 %
+	// used).
+	halfUsed := func(s Scale, pages []span) bool {
+		last := pages[len(pages)-1]
+		return len(pages) == 1 || s.Points(last.Bottom-last.Top)/usable >= 0.5
+	}
+	pages := l.sheetsAt(l.scale, usable)
+	if len(pages) <= 1 || halfUsed(l.scale, pages) {
 		return Scale{}, false
 	}
 	limit := imperialReadable * 12 * 2
 	if !l.u.Imperial() {
 		limit = metricReadable * 2
 	}
-	need := len(l.sheetsAt(l.scale, usable))
+	// The most detailed scale that needs fewer sheets and uses at least
+	// half of its last; else the most detailed that needs fewer.
+	var fewer Scale
+	found := false
 	for _, s := range allSteps(l.u.Imperial()) {
 		if s.Ratio <= l.scale.Ratio || s.Ratio > limit {
 			continue
 		}
-		if len(l.sheetsAt(s, usable)) < need {
-			return s, true
+		if at := l.sheetsAt(s, usable); len(at) < len(pages) {
+			if halfUsed(s, at) {
+				return s, true
+			}
+			if !found {
+				fewer, found = s, true
+			}
 		}
 	}
-	return Scale{}, false
+	return fewer, found
 }
 
 // sheetsAt is how paginateAt would divide the depth range at scale s.

@@ -155,6 +155,9 @@ func (l *layout) flowNotesInto(first []draw.Rect, rest draw.Rect, rows [][]strin
 	for len(pages) > len(first) && len(pages[len(pages)-1]) == 0 {
 		pages = pages[:len(pages)-1]
 	}
+	for len(pages) < len(first) { // one page for every first area, used or not
+		pages = append(pages, nil)
+	}
 	// A box whose run goes on in a later sheet's box says which.
 	for p, boxes := range pages {
 		for i := range boxes {

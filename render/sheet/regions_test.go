@@ -156,7 +156,12 @@ func (l *layout) keptOnDrawing(i int, r draw.Rect) bool {
 	if l.strip > 0 && within(r, l.stripArea()) {
 		return true
 	}
-	return len(l.freeBoxes) > 0 && i == len(l.sheets)-1 && within(r, l.freeR)
+	for _, f := range l.freeRs {
+		if len(l.freeBoxes) > 0 && i == len(l.sheets)-1 && within(r, f) {
+			return true
+		}
+	}
+	return false
 }
 
 // absurdWells are the demo's MW-1 with a borehole diameter that a slip of

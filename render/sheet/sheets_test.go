@@ -36,7 +36,7 @@ func TestDeepWellSheetsCoverEveryDepth(t *testing.T) {
 	if err := l.plan(); err != nil {
 		t.Fatal(err)
 	}
-	if len(l.sheets) < 3 {
+	if len(l.sheets) < 2 { // at least one match line to check
 		t.Fatalf("a 1,000-ft well on %d sheets at %v", len(l.sheets), l.scale)
 	}
 	// Contiguous from the top of the drawing (the stick-up) to TD.
