@@ -131,6 +131,9 @@ func printRendered(stdout, stderr io.Writer, r pipeline.Rendered) int {
 	default:
 		fmt.Fprintf(stdout, "%s: %s, %d %s → %s%s\n", f, r.ID, r.Sheets, plural(r.Sheets, "sheet", "sheets"), strings.Join(r.Outputs, ", "), mark)
 	}
+	if r.FitNotes != nil {
+		fmt.Fprintf(stderr, "tremie render: %s\n", r.FitNotes)
+	}
 	return code
 }
 

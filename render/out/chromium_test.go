@@ -56,6 +56,9 @@ const (
 // pdftoppm (poppler), within the stated tolerance; pattern fills by
 // their tone. TREMIE_LOOK=DIR keeps both rasters of each sheet.
 func TestChromiumMatchesPDF(t *testing.T) {
+	// Run beside the other viewer test: each mostly waits on its
+	// renderer's processes.
+	t.Parallel()
 	exe := tool(t, "Chromium-vs-PDF raster test", "chromium", "chromium", "chromium-browser", "google-chrome")
 	pdftoppm := tool(t, "Chromium-vs-PDF raster test", "poppler-utils", "pdftoppm")
 	browser := startChromium(t, exe)
@@ -107,13 +110,19 @@ func TestChromiumMatchesPDF(t *testing.T) {
 	}
 }
 
-// TestChromiumToneSeesAMissingPattern shows the tone comparison has
-// teeth: MW-1's SVG with its pattern references broken (a viewer that
-// cannot paint the fills draws nothing there) falls outside it.
-func TestChromiumToneSeesAMissingPattern(t *testing.T) {
+// controlOf is the sheet the controls below spoil: MW-1, its SVG and
+// its PDF page's raster, with a browser to open the spoilt SVG.
+type controlOf struct {
+	nd      namedDoc
+	svg     []byte
+	paper   []byte
+	browser *chromiumTab
+}
+
+func controlSheet(t *testing.T) controlOf {
+	t.Helper()
 	exe := tool(t, "Chromium-vs-PDF raster test", "chromium", "chromium", "chromium-browser", "google-chrome")
 	pdftoppm := tool(t, "Chromium-vs-PDF raster test", "poppler-utils", "pdftoppm")
-	browser := startChromium(t, exe)
 	nd := demoDocs(t)[1] // MW-1
 	svg, err := out.SVG(nd.doc, 0)
 	if err != nil {
@@ -123,13 +132,22 @@ func TestChromiumToneSeesAMissingPattern(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
+	return controlOf{nd: nd, svg: svg, paper: pdfPage(t, pdftoppm, pdf, 0), browser: startChromium(t, exe)}
+}
+
+// TestChromiumToneSeesAMissingPattern shows the tone comparison has
+// teeth: MW-1's SVG with its pattern references broken (a viewer that
+// cannot paint the fills draws nothing there) falls outside it.
+func TestChromiumToneSeesAMissingPattern(t *testing.T) {
+	c := controlSheet(t)
+	nd, svg, browser := c.nd, c.svg, c.browser
 	broken := bytes.ReplaceAll(svg, []byte("url(#tile-"), []byte("url(#missing-tile-"))
 	if bytes.Equal(broken, svg) {
 		t.Fatal("found no pattern fills to break: the SVG's pattern references changed")
 	}
 	web := browser.raster(t, broken, nd.doc.Pages[0])
 	look(t, nd.name+" no patterns", "chromium", web)
-	tone := comparePatternTone(planesOf(decodePNG(t, web)), planesOf(decodePNG(t, pdfPage(t, pdftoppm, pdf, 0))), patternRegions(nd.doc.Pages[0]), chromiumDPI)
+	tone := comparePatternTone(planesOf(decodePNG(t, web)), planesOf(decodePNG(t, c.paper)), patternRegions(nd.doc.Pages[0]), chromiumDPI)
 	t.Logf("%s without its pattern fills: worst tone %.1f over %d cells", nd.name, tone.worst, tone.cells)
 	if tone.worst <= maxTone {
 		t.Errorf("the tone comparison did not see the missing fills (worst cell %.1f, max %.0f)", tone.worst, maxTone)
@@ -179,18 +197,8 @@ func comparePatternTone(a, b planes, fills []draw.Rect, dpi float64) patternTone
 // the same sheet with its text set in a face the SVG does not carry (as a
 // viewer that ignores embedded fonts would) falls outside the tolerance.
 func TestChromiumComparisonSeesAFallbackFont(t *testing.T) {
-	exe := tool(t, "Chromium-vs-PDF raster test", "chromium", "chromium", "chromium-browser", "google-chrome")
-	pdftoppm := tool(t, "Chromium-vs-PDF raster test", "poppler-utils", "pdftoppm")
-	browser := startChromium(t, exe)
-	nd := demoDocs(t)[1] // MW-1
-	svg, err := out.SVG(nd.doc, 0)
-	if err != nil {
-		t.Fatal(err)
-	}
-	pdf, err := out.PDF(nd.doc)
-	if err != nil {
-		t.Fatal(err)
-	}
+	c := controlSheet(t)
+	nd, svg, browser := c.nd, c.svg, c.browser
 	// Name a family no machine has in every text style, in place of the
 	// whole stack (the embedded face, the installed Go fonts, the
 	// generic family): Chromium then falls back to its default face, as
@@ -202,7 +210,7 @@ func TestChromiumComparisonSeesAFallbackFont(t *testing.T) {
 	if bytes.Equal(swapped, svg) {
 		t.Fatal("found no font names to swap: the SVG's text styles changed")
 	}
-	paper := pdfPage(t, pdftoppm, pdf, 0)
+	paper := c.paper
 	web := browser.raster(t, swapped, nd.doc.Pages[0])
 	look(t, nd.name+" substitute", "chromium", web)
 	look(t, nd.name+" substitute", "pdf", paper)

@@ -82,8 +82,7 @@ func withoutText(items []draw.Item) []draw.Item {
 // overlaps names each text whose fully covered pixels lie on the ink of
 // the bare sheet, or in another text's box, and what it overlaps.
 func (ip *inkedPage) overlaps(img image.Image, bare inkMask) []string {
-	n := nrgba(img)
-	w, h := n.Bounds().Dx(), n.Bounds().Dy()
+	w, h := img.Bounds().Dx(), img.Bounds().Dy()
 	if w != bare.w || h != bare.h {
 		return []string{fmt.Sprintf("the text raster is %d × %d, the bare sheet's %d × %d", w, h, bare.w, bare.h)}
 	}
@@ -108,32 +107,21 @@ func (ip *inkedPage) overlaps(img image.Image, bare inkMask) []string {
 	onText := make([]int, len(ip.boxes)+1)
 	other := make([]int, len(ip.boxes)+1) // a text overlapped, by number
 	at := make([]draw.Point, len(ip.boxes)+1)
-	for y := 0; y < h; y++ {
-		row := n.Pix[y*n.Stride:]
-		for x := 0; x < w; x++ {
-			p := row[4*x : 4*x+4]
-			if p[3] != 255 {
-				continue
-			}
-			t, ok := indexOf(p[0], p[1], p[2])
-			if !ok || t > len(ip.boxes) {
-				continue
-			}
-			i := y*w + x
-			if bare.ink[i] {
-				onInk[t]++
-				at[t] = draw.Point{X: (float64(x) + 0.5) / k, Y: (float64(y) + 0.5) / k}
-			}
-			if c := cover[i]; c >= 2 || c == 1 && int(who[i]) != t {
-				onText[t]++
-				if int(who[i]) != t {
-					other[t] = int(who[i])
-				} else {
-					other[t] = ip.boxAt(x, y, t)
-				}
+	eachTextPixel(img, len(ip.boxes), func(x, y, t int) {
+		i := y*w + x
+		if bare.ink[i] {
+			onInk[t]++
+			at[t] = draw.Point{X: (float64(x) + 0.5) / k, Y: (float64(y) + 0.5) / k}
+		}
+		if c := cover[i]; c >= 2 || c == 1 && int(who[i]) != t {
+			onText[t]++
+			if int(who[i]) != t {
+				other[t] = int(who[i])
+			} else {
+				other[t] = ip.boxAt(x, y, t)
 			}
 		}
-	}
+	})
 	var out []string
 	for t := 1; t <= len(ip.boxes); t++ {
 		if onInk[t] >= 3 {

@@ -40,6 +40,9 @@ const rsvgDPI = 200
 // is checked in the mode that must hold, text where the Go fonts are
 // installed, else outlines, and the demo's BR-1 and MW-1 in both.
 func TestRsvgTextStaysInItsBox(t *testing.T) {
+	// Run beside the other viewer test: each mostly waits on its
+	// renderer's processes.
+	t.Parallel()
 	rsvg := tool(t, "rsvg-convert text-box test", "librsvg2-bin", "rsvg-convert")
 	sheets := viewerSheets(t)
 	installed, why := installedGoFonts(t, sheets)
@@ -328,31 +331,18 @@ const slackPt = 72.0/rsvgDPI + 0.25
 // escapes names each text with fully covered pixels outside its box,
 // with how far the furthest lies.
 func (ip *inkedPage) escapes(img image.Image) []string {
-	n := nrgba(img)
-	w, h := n.Bounds().Dx(), n.Bounds().Dy()
 	far := make([]float64, len(ip.boxes)+1)
 	count := make([]int, len(ip.boxes)+1)
-	for y := 0; y < h; y++ {
-		row := n.Pix[y*n.Stride:]
-		for x := 0; x < w; x++ {
-			p := row[4*x : 4*x+4]
-			if p[3] != 255 {
-				continue
-			}
-			k, ok := indexOf(p[0], p[1], p[2])
-			if !ok || k > len(ip.boxes) {
-				continue
-			}
-			box := ip.boxes[k-1].r
-			px := (float64(x) + 0.5) * 72 / rsvgDPI
-			py := (float64(y) + 0.5) * 72 / rsvgDPI
-			d := math.Max(math.Max(box.X-px, px-box.Right()), math.Max(box.Y-py, py-box.Bottom()))
-			if d > slackPt {
-				count[k]++
-				far[k] = math.Max(far[k], d)
-			}
+	eachTextPixel(img, len(ip.boxes), func(x, y, k int) {
+		box := ip.boxes[k-1].r
+		px := (float64(x) + 0.5) * 72 / rsvgDPI
+		py := (float64(y) + 0.5) * 72 / rsvgDPI
+		d := math.Max(math.Max(box.X-px, px-box.Right()), math.Max(box.Y-py, py-box.Bottom()))
+		if d > slackPt {
+			count[k]++
+			far[k] = math.Max(far[k], d)
 		}
-	}
+	})
 	var out []string
 	for k := 1; k < len(count); k++ {
 		if count[k] >= 3 { // a stray pixel or two is rounding

@@ -316,3 +316,22 @@ func nrgba(img image.Image) *image.NRGBA {
 	}
 	return n
 }
+
+// eachTextPixel calls f with every fully covered pixel of an inked
+// page's raster and the number (from 1) of the text whose colour it has.
+func eachTextPixel(img image.Image, texts int, f func(x, y, k int)) {
+	n := nrgba(img)
+	w, h := n.Bounds().Dx(), n.Bounds().Dy()
+	for y := 0; y < h; y++ {
+		row := n.Pix[y*n.Stride:]
+		for x := 0; x < w; x++ {
+			p := row[4*x : 4*x+4]
+			if p[3] != 255 {
+				continue
+			}
+			if k, ok := indexOf(p[0], p[1], p[2]); ok && k <= texts {
+				f(x, y, k)
+			}
+		}
+	}
+}

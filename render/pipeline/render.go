@@ -44,6 +44,9 @@ type Rendered struct {
 	Outcome batch.Outcome // Done, Skipped (unchanged) or Failed
 	Refused bool          // Strict (or Issue) and blocking: nothing written
 	Issue   bool          // drawn, or refused, as the issued set
+	// FitNotes is set when --scale fit drew the well on one sheet but its
+	// notes still need notes sheets: the command says so (not an error).
+	FitNotes *FitNotes
 	// Err is why the well was not drawn: an *OutputError when a file
 	// could not be written, else an input error.
 	Err error
@@ -185,10 +188,12 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 // the well's old outputs as they were, none of them mixed with new ones.
 func (r *Run) draw(rd *Rendered, base string, cache *incremental.Cache, opt RenderOptions) error {
 	w := rd.Well
-	doc, err := w.Layout(LayoutOptions{Scale: opt.Scale, Date: r.SourceDate, Issue: rd.Issue})
+	lo := LayoutOptions{Scale: opt.Scale, Date: r.SourceDate, Issue: rd.Issue}
+	doc, econ, err := w.LayoutReport(lo)
 	if err != nil {
 		return err
 	}
+	rd.FitNotes = w.fitNotes(lo, econ)
 	rd.Sheets = len(doc.Pages)
 	docs := []outputDoc{{doc: doc, base: base, several: "-sheet"}}
 	pw, ph := portrait(w.Setting.Page)

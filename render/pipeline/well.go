@@ -132,16 +132,82 @@ func (w *Well) SheetOptions(opt LayoutOptions) sheet.Options {
 // Layout lays a prepared well out on its setting's page with its
 // project's title block and logo.
 func (w *Well) Layout(opt LayoutOptions) (*draw.Document, error) {
+	doc, _, err := w.LayoutReport(opt)
+	return doc, err
+}
+
+// LayoutReport lays the well out as Layout does and says how its sheets
+// were spent.
+func (w *Well) LayoutReport(opt LayoutOptions) (*draw.Document, sheet.Economy, error) {
 	if w.Well == nil {
-		return nil, fmt.Errorf("%s: no well to draw", w.Path)
+		return nil, sheet.Economy{}, fmt.Errorf("%s: no well to draw", w.Path)
 	}
 	in, err := w.SheetInputs()
 	if err != nil {
-		return nil, err
+		return nil, sheet.Economy{}, err
 	}
-	doc, err := sheet.Layout(w.Well, in, w.SheetOptions(opt))
+	doc, econ, err := sheet.LayoutReport(w.Well, in, w.SheetOptions(opt))
 	if err != nil {
-		return nil, fmt.Errorf("%s: %w", w.Path, err)
+		return nil, sheet.Economy{}, fmt.Errorf("%s: %w", w.Path, err)
 	}
-	return doc, nil
+	return doc, econ, nil
+}
+
+// FitNotes says of a well drawn with --scale fit that its notes still
+// need notes sheets: how many, why, and what a larger page would do.
+type FitNotes struct {
+	ID      string
+	Economy sheet.Economy
+	// Larger is the next larger page's name ("" when there is none) and
+	// LargerNotes the notes sheets the well needs on it.
+	Larger      string
+	LargerNotes int
+}
+
+// String is the message the command prints.
+func (f FitNotes) String() string {
+	s := fmt.Sprintf("%s: %s", f.ID, f.Economy)
+	switch {
+	case f.Larger == "":
+	case f.LargerNotes == 0:
+		s += fmt.Sprintf("; a larger page (%s) holds them on its drawing", f.Larger)
+	default:
+		s += fmt.Sprintf("; a larger page (%s) holds them on %d", f.Larger, f.LargerNotes)
+	}
+	return s
+}
+
+// largerPage is the page one size up in its series: Tabloid for Letter,
+// A3 for A4.
+var largerPage = map[string]string{"letter": "tabloid", "a4": "a3"}
+
+// fitNotes is the FitNotes of a well drawn with --scale fit that keeps
+// notes sheets, or nil.
+func (w *Well) fitNotes(opt LayoutOptions, econ sheet.Economy) *FitNotes {
+	if opt.Scale == nil || !opt.Scale.Fit || econ.NotesSheets == 0 {
+		return nil
+	}
+	f := &FitNotes{ID: w.Well.ID, Economy: econ}
+	name := w.Setting.PageName
+	if name == "" {
+		name = "letter"
+	}
+	big, ok := largerPage[name]
+	if !ok {
+		return f
+	}
+	pg, err := PageFor(big, w.Setting.Landscape)
+	if err != nil {
+		return f
+	}
+	in, err := w.SheetInputs()
+	if err != nil {
+		return f
+	}
+	so := w.SheetOptions(opt)
+	so.Page = pg
+	if e, err := sheet.Plan(w.Well, in, so); err == nil {
+		f.Larger, f.LargerNotes = big, e.NotesSheets
+	}
+	return f
 }

@@ -443,14 +443,15 @@ func (l *layout) amountRows() [][]string {
 func (l *layout) amountCells(row []string, w float64, font draw.FontStyle) ([][]string, float64) {
 	cells := make([][]string, len(row))
 	n := 1
+	fracs := l.amountFracs(w)
 	for i, s := range row {
-		cw := amountCols[i].frac*w - 3
+		cw := fracs[i]*w - 3
 		if draw.TextWidth(font, sizeTiny, s) > cw {
 			// A range too wide for its cell breaks after its dash, never
 			// inside a number ("12.6–" / "12.9 m").
 			s = strings.ReplaceAll(s, "–", "– ")
 		}
-		cells[i] = draw.Wrap(font, sizeTiny, s, cw)
+		cells[i] = wrapAmount(font, sizeTiny, s, cw)
 		n = max(n, len(cells[i]))
 	}
 	return cells, float64(n)*lineGap(sizeTiny) + 2
@@ -527,6 +528,7 @@ func (l *layout) amountBox(r draw.Rect, title string, rows [][]string, foot bool
 		text(r.X+bandPad, r.Y+9, title, draw.Bold, sizeHeading, draw.Start, ink, "")}
 	inner := r.W - 2*bandPad
 	y := r.Y + bandHeadH + bandPad
+	fracs := l.amountFracs(inner)
 	drawRow := func(row []string, font draw.FontStyle, role string) {
 		cells, rh := l.amountCells(row, inner, font)
 		x := r.X + bandPad
@@ -536,7 +538,7 @@ func (l *layout) amountBox(r draw.Rect, title string, rows [][]string, foot bool
 				items = append(items, text(x, ty, s, font, sizeTiny, draw.Start, ink, role))
 				ty += lineGap(sizeTiny)
 			}
-			x += amountCols[i].frac * inner
+			x += fracs[i] * inner
 		}
 		y += rh
 		items = append(items, line(r.X+bandPad, y-1, r.Right()-bandPad, y-1, 0.3, lightGrey, ""))

@@ -1,6 +1,7 @@
 package sheet
 
 import (
+	"math"
 	"strings"
 
 	"github.com/tremie-dev/tremie/render/draw"
@@ -67,26 +68,35 @@ func (cp centralizerPart) legend(l *layout, v window) []symbol {
 func (cp centralizerPart) paint(p *painter) []draw.Item {
 	role, x, d, at, _ := cp.pipe(p.l)
 	var items []draw.Item
-	r := float64(d) / 2 * p.l.hz.ppmm
 	sym := partSymbol(symbols.Centralizer)
 	for _, z := range at {
 		if !p.visible(z) {
 			continue
 		}
-		hole := float64(p.l.holeAt(z)) / 2 * p.l.hz.ppmm
-		reach := max(hole-r-0.8, 2.0)
+		bw := bowSpan(p.l, x, d, z)
 		y := p.y(z)
-		// The collars span the box's inner 56 %, the bows bulge 22 % beyond:
-		// size the box so the collars meet the pipe and the bows the reach.
-		bw := max(2*(r+reach), 2*r/0.56)
-		if hole > r {
-			bw = min(bw, 2*hole-1.2) // the bows stay inside the hole wall
-		}
 		rect := draw.Rect{X: x - bw/2, Y: y - 5, W: bw, H: 10}
 		items = append(items, box(rect, draw.Color{}, 0, draw.Color{}, role))
 		items = append(items, sym.paint(rect)...)
 	}
 	return items
+}
+
+// bowSpan is the width of the centralizer's box at depth z around a pipe
+// of outside diameter d on the axis x: the collars span the box's inner
+// 56 %, the bows bulge 22 % beyond, so the box is sized for the collars
+// to meet the pipe and the bows to reach just inside the hole wall, the
+// nearer wall for a string off the hole's axis (a nested well's), so
+// that no bow crosses it.
+func bowSpan(l *layout, x float64, d schema.Diameter, z schema.Length) float64 {
+	r := float64(d) / 2 * l.hz.ppmm
+	hole := float64(l.holeAt(z)) / 2 * l.hz.ppmm
+	reach := max(hole-r-0.8, 2.0)
+	bw := max(2*(r+reach), 2*r/0.56)
+	if room := hole - math.Abs(x-l.hz.cx); room > r {
+		bw = min(bw, 2*room-1.2)
+	}
+	return bw
 }
 
 func (cp centralizerPart) callouts(l *layout) []callout {
@@ -96,9 +106,7 @@ func (cp centralizerPart) callouts(l *layout) []callout {
 		ds[i] = schema.TrimFloat(z.In(l.u.Depth), 2)
 	}
 	first := at[0]
-	r := float64(d) / 2 * l.hz.ppmm
-	hole := float64(l.holeAt(first)) / 2 * l.hz.ppmm
-	tip := x + r + max(hole-r-0.8, 2)
+	tip := x + bowSpan(l, x, d, first)/2
 	title := "Centralizers"
 	if len(at) == 1 {
 		title = "Centralizer"

@@ -78,8 +78,17 @@ func oneLine(label string, width float64) (head, rest string) {
 	for n < len(words) && draw.TextWidth(draw.Regular, sizeSmall, strings.Join(words[:n+1], " ")) <= room {
 		n++
 	}
+	// A line does not end on a word that leads into the next ("GRAVEL
+	// with (D81)"): that word goes to the note with what it leads to.
+	for n > 1 && leadWords[strings.ToLower(words[n-1])] {
+		n--
+	}
 	return strings.TrimRight(strings.Join(words[:n], " "), ",;:"), strings.Join(words[n:], " ")
 }
+
+// leadWords are the words that lead into the next: a line cut after one
+// reads as unfinished.
+var leadWords = map[string]bool{"with": true, "and": true, "or": true, "of": true, "to": true, "in": true, "at": true, "on": true, "the": true, "a": true, "an": true, "from": true, "into": true, "some": true, "trace": true}
 
 // setForm sets an entry's block in a form; mark "" keeps room for the
 // widest mark.
@@ -191,18 +200,32 @@ func (l *layout) planDescriptions(noteW float64) [][]noteBlock {
 	next := 1
 	l.sheetDescs = make([][]descEntry, len(l.sheets))
 	notes := make([][]noteBlock, len(l.sheets))
+	// A layer across a match line shows on both sheets: when the words
+	// left off are the same, the second keeps the first's mark and note.
+	type noted struct{ mark, rest string }
+	prev := map[int]noted{}
 	for i, sp := range l.sheets {
 		p := l.painter(sp, i == 0, i == len(l.sheets)-1)
 		lo, hi := p.descBounds()
 		es := p.descEntries()
 		fitDescs(es, width, lo, hi)
+		cur := map[int]noted{}
 		for k := range es {
 			e := &es[k]
 			if e.rest == "" {
 				continue
 			}
+			if n, ok := prev[e.layer]; ok && n.rest == e.rest {
+				e.mark = n.mark
+				if e.form != descNoted {
+					e.setForm(e.form, width, e.mark)
+				}
+				cur[e.layer] = n
+				continue
+			}
 			e.mark = fmt.Sprintf("D%d", next)
 			next++
+			cur[e.layer] = noted{e.mark, e.rest}
 			ly := l.w.Lithology[e.layer]
 			var b textBlock
 			if e.form == descNoted {
@@ -215,6 +238,7 @@ func (l *layout) planDescriptions(noteW float64) [][]noteBlock {
 		}
 		placeDescs(es, lo, hi)
 		l.sheetDescs[i] = es
+		prev = cur
 	}
 	return notes
 }

@@ -3,7 +3,10 @@ package sheet
 import (
 	"fmt"
 	"strings"
+	"unicode"
+	"unicode/utf8"
 
+	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/quantity"
 )
@@ -169,9 +172,9 @@ func (l *layout) yield(r quantity.Row) string {
 	if !r.HasYield || r.Yield.Volume <= 0 {
 		return "—"
 	}
-	s := l.volume(r.Yield.Volume) + "/bag"
+	s := l.volume(r.Yield.Volume) + " per bag"
 	if r.Yield.BagMass > 0 {
-		s = fmt.Sprintf("%s/%s %s", l.volume(r.Yield.Volume), schema.TrimFloat(r.Yield.BagMass.In(l.u.Mass), 1), l.u.Mass)
+		s = fmt.Sprintf("%s per %s %s", l.volume(r.Yield.Volume), schema.TrimFloat(r.Yield.BagMass.In(l.u.Mass), 1), l.u.Mass)
 	}
 	return s
 }
@@ -188,4 +191,108 @@ func plural(n int, one, many string) string {
 		return one
 	}
 	return many
+}
+
+// amountFracs are the amounts table's column widths in a box of inner
+// width w, as fractions of it: the columns' shares (amountCols; a
+// design's "To order" holds a few words, "14 bags", and gives room to
+// its yield, "0.500 ft³ per 50 lb"), widened where a column's widest
+// word or number with its unit would not fit, at the expense of the
+// others' room beyond theirs.
+func (l *layout) amountFracs(w float64) []float64 {
+	fr := make([]float64, len(amountCols))
+	for i, c := range amountCols {
+		fr[i] = c.frac
+	}
+	if l.w.IsPlanned() {
+		fr = []float64{0.17, 0.21, 0.22, 0.15, 0.25}
+	}
+	least := make([]float64, len(fr))
+	widest := func(i int, font draw.FontStyle, s string) {
+		for _, g := range amountGroups(strings.ReplaceAll(s, "–", "– ")) {
+			least[i] = max(least[i], draw.TextWidth(font, sizeTiny, g)+3.5)
+		}
+	}
+	for i, h := range l.amountHead() {
+		least[i] = draw.TextWidth(draw.Bold, sizeTiny, h) + 3.5 // a head on one line
+	}
+	if l.in.Quantities != nil {
+		for _, row := range l.amountRows() {
+			for i, s := range row {
+				widest(i, draw.Regular, s)
+			}
+		}
+	}
+	need, spare := 0.0, 0.0
+	for i := range fr {
+		need += max(least[i]-fr[i]*w, 0)
+		spare += max(fr[i]*w-least[i], 0)
+	}
+	if need == 0 || need > spare {
+		return fr
+	}
+	for i := range fr {
+		if least[i] > fr[i]*w {
+			fr[i] = least[i] / w
+		} else {
+			fr[i] -= (fr[i]*w - least[i]) / spare * need / w
+		}
+	}
+	return fr
+}
+
+// amountGroups splits an amount into the words a line may break
+// between, each number kept with the unit after it ("9.709 L", "(1
+// bag)", "0.500 ft³").
+func amountGroups(s string) []string {
+	var groups []string
+	for _, tok := range strings.Fields(s) {
+		if k := len(groups) - 1; k >= 0 && endsInDigit(groups[k]) && startsAUnit(tok) {
+			groups[k] += " " + tok
+			continue
+		}
+		groups = append(groups, tok)
+	}
+	return groups
+}
+
+// wrapAmount wraps an amount to width keeping each number with the unit
+// after it ("9.709 L" / "(1 bag)", never "(1" / "bag)"); a number and
+// unit wider than the width on their own are wrapped as words.
+func wrapAmount(font draw.FontStyle, size float64, s string, width float64) []string {
+	var lines []string
+	line := ""
+	for _, g := range amountGroups(s) {
+		if line != "" && draw.TextWidth(font, size, line+" "+g) <= width {
+			line += " " + g
+			continue
+		}
+		if line != "" {
+			lines = append(lines, line)
+			line = ""
+		}
+		if draw.TextWidth(font, size, g) <= width {
+			line = g
+			continue
+		}
+		parts := draw.Wrap(font, size, g, width)
+		lines = append(lines, parts[:len(parts)-1]...)
+		line = parts[len(parts)-1]
+	}
+	if line != "" {
+		lines = append(lines, line)
+	}
+	return lines
+}
+
+func endsInDigit(s string) bool {
+	r, _ := utf8.DecodeLastRuneInString(s)
+	return unicode.IsDigit(r)
+}
+
+// startsAUnit tells a word that names the unit of the number before it:
+// "bags)", "ft³", "L", "lb", "%".
+func startsAUnit(s string) bool {
+	r, _ := utf8.DecodeRuneInString(s)
+	return unicode.IsLetter(r) || r == '%'
 }

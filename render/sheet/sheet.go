@@ -66,6 +66,31 @@ const NotFinal = "NOT FINAL — check findings"
 
 // Layout draws a well on one or more sheets.
 func Layout(w *schema.Well, in Inputs, opt Options) (*draw.Document, error) {
+	doc, _, err := LayoutReport(w, in, opt)
+	return doc, err
+}
+
+// LayoutReport draws a well as Layout does and says how its sheets were
+// spent.
+func LayoutReport(w *schema.Well, in Inputs, opt Options) (*draw.Document, Economy, error) {
+	l, err := planned(w, in, opt)
+	if err != nil {
+		return nil, Economy{}, err
+	}
+	doc := &draw.Document{
+		Title:   fmt.Sprintf("%s %s", w.ID, strings.ToLower(l.sheetTitle())),
+		Subject: joinNonEmpty(" · ", w.Project, w.Site),
+		Author:  joinNonEmpty(", ", in.TitleBlock.Consultant, w.LoggedBy),
+		Date:    documentDate(w, opt.Date),
+	}
+	for i := 0; i < l.sheetCount(); i++ {
+		doc.Pages = append(doc.Pages, l.page(i))
+	}
+	return doc, l.economy(), nil
+}
+
+// planned checks the page and the issue and plans the well's sheets.
+func planned(w *schema.Well, in Inputs, opt Options) (*layout, error) {
 	if w == nil {
 		return nil, fmt.Errorf("sheet: no well")
 	}
@@ -84,16 +109,7 @@ func Layout(w *schema.Well, in Inputs, opt Options) (*draw.Document, error) {
 	if err := l.plan(); err != nil {
 		return nil, fmt.Errorf("sheet %s: %w", w.ID, err)
 	}
-	doc := &draw.Document{
-		Title:   fmt.Sprintf("%s %s", w.ID, strings.ToLower(l.sheetTitle())),
-		Subject: joinNonEmpty(" · ", w.Project, w.Site),
-		Author:  joinNonEmpty(", ", in.TitleBlock.Consultant, w.LoggedBy),
-		Date:    documentDate(w, opt.Date),
-	}
-	for i := 0; i < l.sheetCount(); i++ {
-		doc.Pages = append(doc.Pages, l.page(i))
-	}
-	return doc, nil
+	return l, nil
 }
 
 // documentDate is the given date, or the well's completed (else drilled)

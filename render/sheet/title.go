@@ -184,7 +184,10 @@ func (l *layout) coordinates() string {
 		return "not recorded"
 	}
 	s := strings.Join(parts, "; ")
-	if loc.System != "" {
+	switch {
+	case strings.ContainsAny(loc.System, "()"):
+		s += "; " + loc.System // never "(WGS 84 (invented location))"
+	case loc.System != "":
 		s += " (" + loc.System + ")"
 	}
 	return s

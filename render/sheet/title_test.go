@@ -94,3 +94,14 @@ func checkTitleBlock(t *testing.T, tag string, p *draw.Page, issue bool) {
 		}
 	}
 }
+
+// A coordinate system named with words in brackets is not bracketed
+// again ("(WGS 84 geographic (invented location))"): BR-3 of the gallery.
+func TestCoordinatesNoNestedBrackets(t *testing.T) {
+	for _, c := range demoAndGallery(t) {
+		l := newLayout(c.w, c.in, Options{}, Letter)
+		if s := l.coordinates(); strings.Contains(s, "))") || strings.Count(s, "(") > 1 {
+			t.Errorf("%s: coordinates %q", c.name, s)
+		}
+	}
+}
