@@ -134,6 +134,48 @@ func (l *layout) notesInTheBody() {
 	l.freeBoxes, l.freeRs, l.notesPages = here, areas, pages
 }
 
+// roomForNotes spares notes sheets where the automatic scale leaves the
+// drawing no room for the notes: a less detailed round scale, at most
+// twice as small and within twice the readable limit (economicalScale's
+// bound), frees the foot of the body for them. It takes the most
+// detailed such scale that keeps every note on the drawing sheets (no
+// more of them, every description and label still fitting), else the
+// most detailed that at least spares a sheet.
+func (l *layout) roomForNotes() {
+	if len(l.notesPages) == 0 || l.opt.Scale != nil || l.autoAt.Ratio > 0 {
+		return
+	}
+	limit := imperialReadable * 12 * 2
+	if !l.u.Imperial() {
+		limit = metricReadable * 2
+	}
+	var spares *layout
+	for _, s := range allSteps(l.u.Imperial()) {
+		if s.Ratio <= l.scale.Ratio || s.Ratio > min(limit, 3*l.scale.Ratio) {
+			continue
+		}
+		alt := newLayout(l.w, l.in, l.opt, l.pg)
+		alt.autoAt = s
+		if alt.planOnce() != nil || len(alt.sheets) > len(l.sheets) || !alt.textFits() {
+			continue
+		}
+		alt.notesInTheBody()
+		if alt.sheetCount() >= l.sheetCount() {
+			continue
+		}
+		if len(alt.notesPages) == 0 {
+			*l = *alt
+			return
+		}
+		if spares == nil {
+			spares = alt
+		}
+	}
+	if spares != nil {
+		*l = *spares
+	}
+}
+
 // setInRooms sets rows and notes in the rooms, then on notes sheets: it
 // returns the rooms' boxes, the notes sheets' and how many notes did not
 // find room. The amounts rows stand whole, at the band's table width, in
