@@ -48,6 +48,7 @@ func runServe(args []string, stdout, stderr io.Writer) int {
 	// each change that alters them.
 	reportProblems(stderr, srv.Problems(), false)
 	srv.OnProblems = func(problems []error) { reportProblems(stderr, problems, true) }
+	stopNote = "" // the server stops at once, and says "stopped"
 	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt, syscall.SIGTERM)
 	defer stop()
 	err = srv.Serve(ctx, *addr, func(a string) {
