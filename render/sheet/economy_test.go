@@ -119,18 +119,23 @@ func TestSplitNoteKeepsEveryWord(t *testing.T) {
 	}
 	// Notes kept on the drawing: DS-1200 with --scale fit on Letter sets
 	// the first of its notes under the log, the findings split over the
-	// rooms under the lithology and the well columns.
+	// rooms under the lithology and the well columns; on Tabloid too;
+	// every text stays in its region and box.
 	for _, c := range galleryWells(t) {
 		if c.name != "DS-1200.toml" {
 			continue
 		}
 		fit := Fitted
-		l := newLayout(c.w, c.in, Options{Page: Letter, Scale: &fit}, Letter)
-		if err := l.plan(); err != nil {
-			t.Fatal(err)
-		}
-		if len(l.sheets) != 1 || len(l.freeBoxes) < 2 {
-			t.Errorf("DS-1200 fit: %d drawing sheets, %d boxes of notes on it; want 1 and 2", len(l.sheets), len(l.freeBoxes))
+		for _, pg := range []Page{Letter, Tabloid} {
+			opt := Options{Page: pg, Scale: &fit}
+			l := newLayout(c.w, c.in, opt, pg)
+			if err := l.plan(); err != nil {
+				t.Fatal(err)
+			}
+			if len(l.sheets) != 1 || len(l.freeBoxes) < 2 {
+				t.Errorf("DS-1200 fit on %s: %d drawing sheets, %d boxes of notes on it; want 1 and 2", pg.Name, len(l.sheets), len(l.freeBoxes))
+			}
+			checkRegions(t, "DS-1200 fit on "+pg.Name, l, layoutOf(t, c.w, c.in, opt))
 		}
 	}
 }
