@@ -83,6 +83,18 @@ func oneLine(label string, width float64) (head, rest string) {
 	for n > 1 && leadWords[strings.ToLower(words[n-1])] {
 		n--
 	}
+	// A cut description keeps whole clauses when it can: descriptions
+	// run name first, then comma-separated descriptors (ASTM D2488's
+	// order), so "SANDSTONE, coarse (D9)" with "grained, ..." in the note
+	// would split a descriptor in two where "SANDSTONE (D9)" does not.
+	if n < len(words) {
+		for j := n; j >= 1; j-- {
+			if strings.HasSuffix(words[j-1], ",") || strings.HasSuffix(words[j-1], ";") {
+				n = j
+				break
+			}
+		}
+	}
 	return strings.TrimRight(strings.Join(words[:n], " "), ",;:"), strings.Join(words[n:], " ")
 }
 
