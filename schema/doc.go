@@ -23,9 +23,21 @@ type Doc struct {
 // and record any error; see Doc.
 type Table = table
 
-// decode parses TOML text into its tree, or the syntax error with its
-// position.
-func decode(name, src string) (map[string]any, error) {
+// DecodeTOML parses an input file's TOML bytes into its tree, or returns
+// the error with its position as an ErrorList. Every reader of TOML
+// bytes goes through it, so that the nesting depth is checked
+// (CheckNesting) before the TOML library sees the text: the library
+// recurses once per level, and a small file nested ten thousand deep
+// would take it minutes and gigabytes.
+func DecodeTOML(name string, data []byte) (map[string]any, error) {
+	return decode(name, data, string(data))
+}
+
+// decode is DecodeTOML for a caller that keeps src, the text of data.
+func decode(name string, data []byte, src string) (map[string]any, error) {
+	if e := CheckNesting(name, data, MaxNesting); e != nil {
+		return nil, ErrorList{e}
+	}
 	// Decoding into a bare interface hands over the parser's own tree;
 	// a map[string]any target would be copied key by key.
 	var tree any
@@ -49,7 +61,7 @@ func decode(name, src string) (map[string]any, error) {
 // ErrorList.
 func ParseDoc(name string, data []byte, spec *TableSpec) (*Doc, error) {
 	src := string(data)
-	raw, err := decode(name, src)
+	raw, err := decode(name, data, src)
 	if err != nil {
 		return nil, err
 	}

@@ -19,13 +19,8 @@ func LoadFile(path string) (*Well, error) {
 
 // Load parses a well file's bytes; name is used in positions.
 func Load(name string, data []byte) (*Well, error) {
-	// Decoding into a bare interface hands over the parser's own tree;
-	// a map[string]any target would be copied key by key.
-	if e := CheckNesting(name, data, MaxNesting); e != nil {
-		return nil, ErrorList{e}
-	}
 	src := string(data)
-	raw, err := decode(name, src)
+	raw, err := decode(name, data, src)
 	if err != nil {
 		return nil, err
 	}

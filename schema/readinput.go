@@ -116,7 +116,7 @@ func CheckNesting(name string, data []byte, max int) *Error {
 		case '[', '{':
 			depth++
 			if depth > max {
-				return &Error{File: name, Line: line, Col: col, Msg: fmt.Sprintf("arrays and inline tables nest more than %d deep here; no well file needs that", max)}
+				return &Error{File: name, Line: line, Col: col, Msg: fmt.Sprintf("arrays and inline tables nest more than %d deep here; no tremie input file needs that", max)}
 			}
 		case ']', '}':
 			if depth > 0 {

@@ -270,7 +270,7 @@ func mixLine(row quantity.Row, u schema.Units) string {
 	want, unit := schema.SlurryDensityIn(d, u)
 	s := fmt.Sprintf("expected %.2f %s", want, unit)
 	if row.Yield.Water > 0 {
-		water, wunit := waterPerBag(row.Yield, u)
+		water, wunit := quantity.WaterPerBagIn(row.Yield, u)
 		s = fmt.Sprintf("%s %s water per %s, %s", quantity.Number(water), wunit, quantity.FormatBag(row.Yield.BagMass, u), s)
 	}
 	if row.Yield.Stated > 0 {
@@ -281,15 +281,6 @@ func mixLine(row quantity.Row, u schema.Units) string {
 		s += fmt.Sprintf("; measured %s %s (%+.1f %%)", schema.TrimFloat(got, 2), unit, (row.Fill.Density/d-1)*100)
 	}
 	return s
-}
-
-// waterPerBag is a grout's mix water per bag, in gallons, or litres in a
-// well in metres.
-func waterPerBag(y quantity.Yield, u schema.Units) (float64, string) {
-	if u.Imperial() {
-		return y.Water.In(schema.USGallons), "gal"
-	}
-	return y.Water.In(schema.Litres), "L"
 }
 
 // screenFlowLine is a supply well's screen arithmetic at its pumping
@@ -633,14 +624,12 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 		jw := jsonWell{File: wq.File, Well: r.Well.ID, DepthUnit: string(u.Depth), VolumeUnit: string(p), VolumeUnit2: string(s), MassUnit: string(mu),
 			Fills: []jsonFill{}, Pipes: []jsonPipe{}, WellVolumes: []jsonWellVolume{}, CollapseLoads: []jsonCollapse{}}
 		for _, c := range wq.Collapse {
-			k, unit := 1/quantity.PsiPa, "psi"
-			if !u.Imperial() {
-				k, unit = 1e-3, "kPa"
-			}
+			pressure := func(pa float64) float64 { v, _ := quantity.PressureIn(pa, u); return r4(v) }
+			_, unit := quantity.PressureIn(0, u)
 			jw.CollapseLoads = append(jw.CollapseLoads, jsonCollapse{Fill: fillNumber(r.Well, c.Fills[len(c.Fills)-1]),
 				Top: r4(c.Top.In(u.Depth)), Bottom: r4(c.Bottom.In(u.Depth)), At: r4(c.At.In(u.Depth)), Pipe: c.Pipe.Label(),
-				Outside: r4(c.Outside * k), Inside: r4(c.Inside * k), WaterStated: c.WaterStated, Differential: r4(c.Differential() * k),
-				Rating: r4(c.Rating * k), Fraction: r4(c.Fraction()), Unit: unit})
+				Outside: pressure(c.Outside), Inside: pressure(c.Inside), WaterStated: c.WaterStated, Differential: pressure(c.Differential()),
+				Rating: pressure(c.Rating), Fraction: r4(c.Fraction()), Unit: unit})
 		}
 		designs := map[int]quantity.PackDesign{}
 		for _, d := range quantity.PackDesigns(r.Well) {
@@ -691,7 +680,7 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 				}
 			}
 			if d, ok := row.Yield.Density(); ok && row.HasYield && f.Yield <= 0 {
-				water, wunit := waterPerBag(row.Yield, u)
+				water, wunit := quantity.WaterPerBagIn(row.Yield, u)
 				m := &jsonMix{Water: r4(water), WaterUnit: wunit, Stated: row.Yield.Stated > 0}
 				var want float64
 				want, m.DensityUnit = schema.SlurryDensityIn(d, u)
@@ -711,11 +700,8 @@ func writeQuantitiesJSON(w io.Writer, wells []wellQuantities, order *quantity.Or
 		}
 		for _, pv := range r.Pipes {
 			jp := jsonPipe{Name: pv.Name, Kind: pv.Kind, Path: pv.Path, Top: r4(pv.Interval.Top.In(u.Depth)), Bottom: r4(pv.Interval.Bottom.In(u.Depth))}
-			if u.Imperial() {
-				jp.Inside, jp.Unit = r4(pv.Inside.GallonsPerFoot()), "gal/ft"
-			} else {
-				jp.Inside, jp.Unit = r4(pv.Inside.LitresPerMetre()), "L/m"
-			}
+			inside, unit := quantity.PerLengthIn(pv.Inside, u)
+			jp.Inside, jp.Unit = r4(inside), unit
 			jw.Pipes = append(jw.Pipes, jp)
 		}
 		out.Wells = append(out.Wells, jw)

@@ -94,7 +94,10 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 		bp := bandPlan{legendW: lw, amountW: amountW, noteW: nw, amountsIn: nRows}
 		h := l.legendHeight(legend, lw)
 		if amountW > 0 {
-			h = max(h, l.amountsHeight(amountW))
+			// The table takes what it needs, but for a body of at
+			// least amountsBodyMin above it.
+			room := l.caution.Y - 4 - (l.header.Bottom() + 6) - 6 - amountsBodyMin
+			bp.amountsIn, h = l.amountsWithin(amountW, max(h, limit, room), h)
 		}
 		notes := l.noteBlocks(nw - 2*bandPad)
 		nh := bandHeadH + bandPad + notesHeight(notes)
@@ -109,6 +112,28 @@ func (l *layout) planBand(legend []symbol) bandPlan {
 		}
 	}
 	return best
+}
+
+// amountsBodyMin is the body a bottom band's amounts table leaves at
+// least (common practice: a third of a Letter page's height for the
+// drawing).
+const amountsBodyMin = 240.0
+
+// amountsWithin is how many amounts rows a bottom band's table of width
+// w shows, and the band's height with them beside a legend h high: all
+// of them when the table is no taller than limit (or the legend), else
+// as many as fit limit with the line saying where the rest continue, so
+// that a well of many fills keeps a drawing above its band.
+func (l *layout) amountsWithin(w, limit, h float64) (int, float64) {
+	rows := l.amountRows()
+	if full := l.amountsBoxHeight(w, rows, true, false); full <= limit {
+		return len(rows), max(h, full)
+	}
+	k := len(rows) - 1
+	for k > 0 && l.amountsBoxHeight(w, rows[:k], false, true) > limit {
+		k--
+	}
+	return k, max(h, l.amountsBoxHeight(w, rows[:k], false, true))
 }
 
 // planSideBand stacks the legend, the amounts and the notes in a column

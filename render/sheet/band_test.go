@@ -75,79 +75,57 @@ func itemRect(it draw.Item) (draw.Rect, string, bool) {
 // one of its boxes, and the boxes do not overlap (common practice: a
 // drafted sheet draws nothing over its frame or off its body).
 func TestBandStaysInItsRegion(t *testing.T) {
-	type well struct {
-		name string
-		w    *schema.Well
-		in   Inputs
-	}
-	var wells []well
-	for n, d := range demoWells(t) {
-		wells = append(wells, well{n, d.w, d.in})
-	}
+	wells := demoAndGallery(t)
 	cw, cin := crowdedWell()
-	wells = append(wells, well{"crowded", cw, cin})
-	for _, name := range []string{"letter", "tabloid", "a4", "a3"} {
-		for _, land := range []bool{false, true} {
-			tpl, err := templates.Load(name, land)
-			if err != nil {
-				t.Fatal(err)
-			}
-			pg := FromTemplate(tpl)
-			for _, c := range wells {
-				tag := fmt.Sprintf("%s on %s landscape=%v", c.name, name, land)
-				opt := Options{Page: pg}
-				l := newLayout(c.w, c.in, opt, pg)
-				if err := l.plan(); err != nil {
-					t.Fatalf("%s: %v", tag, err)
-				}
-				doc := layoutOf(t, c.w, c.in, opt)
-				if len(doc.Pages) != l.sheetCount() {
-					t.Fatalf("%s: %d pages, %d planned", tag, len(doc.Pages), l.sheetCount())
-				}
-				for i, p := range doc.Pages {
-					region := l.band
-					if i >= len(l.sheets) {
-						region = draw.Rect{X: l.content.X, Y: l.header.Bottom(), W: l.content.W, H: l.caution.Y - l.header.Bottom()}
-					}
-					// notes kept on a drawing stand in its strip (fitstrip.go) or its free room (freespace.go)
-					inRegion := func(r draw.Rect) bool {
-						return within(r, region) || l.keptOnDrawing(i, r)
-					}
-					blocks := boxes(p, "band:")
-					if len(blocks) == 0 {
-						t.Errorf("%s sheet %d: no band boxes", tag, i+1)
-					}
-					for j, b := range blocks {
-						if !inRegion(b.Rect) {
-							t.Errorf("%s sheet %d: %s box %+v outside the region %+v", tag, i+1, b.Role, b.Rect, region)
-						}
-						for _, o := range blocks[j+1:] {
-							if b.Rect.Intersects(o.Rect) {
-								t.Errorf("%s sheet %d: %s %+v overlaps %s %+v", tag, i+1, b.Role, b.Rect, o.Role, o.Rect)
-							}
-						}
-					}
-					p.Walk(func(it draw.Item) {
-						r, role, ok := itemRect(it)
-						if !ok || !isBandRole(role) {
-							return
-						}
-						if !inRegion(r) {
-							t.Errorf("%s sheet %d: %s %v at %+v outside the region %+v", tag, i+1, role, it, r, region)
-							return
-						}
-						in := false
-						for _, b := range blocks {
-							in = in || within(r, b.Rect)
-						}
-						if !in {
-							t.Errorf("%s sheet %d: %s %v at %+v in no band box", tag, i+1, role, it, r)
-						}
-					})
-				}
-			}
+	wells = append(wells, corpusWell{"crowded", cw, cin})
+	eachSetup(t, wells, true, func(s setup) {
+		l, tag := s.l, s.tag
+		doc := layoutOf(t, s.well.w, s.well.in, s.opt)
+		if len(doc.Pages) != l.sheetCount() {
+			t.Fatalf("%s: %d pages, %d planned", tag, len(doc.Pages), l.sheetCount())
 		}
-	}
+		for i, p := range doc.Pages {
+			region := l.band
+			if i >= len(l.sheets) {
+				region = draw.Rect{X: l.content.X, Y: l.header.Bottom(), W: l.content.W, H: l.caution.Y - l.header.Bottom()}
+			}
+			// notes kept on a drawing stand in its strip (fitstrip.go) or its free room (freespace.go)
+			inRegion := func(r draw.Rect) bool {
+				return within(r, region) || l.keptOnDrawing(i, r)
+			}
+			blocks := boxes(p, "band:")
+			if len(blocks) == 0 {
+				t.Errorf("%s sheet %d: no band boxes", tag, i+1)
+			}
+			for j, b := range blocks {
+				if !inRegion(b.Rect) {
+					t.Errorf("%s sheet %d: %s box %+v outside the region %+v", tag, i+1, b.Role, b.Rect, region)
+				}
+				for _, o := range blocks[j+1:] {
+					if b.Rect.Intersects(o.Rect) {
+						t.Errorf("%s sheet %d: %s %+v overlaps %s %+v", tag, i+1, b.Role, b.Rect, o.Role, o.Rect)
+					}
+				}
+			}
+			p.Walk(func(it draw.Item) {
+				r, role, ok := itemRect(it)
+				if !ok || !isBandRole(role) {
+					return
+				}
+				if !inRegion(r) {
+					t.Errorf("%s sheet %d: %s %v at %+v outside the region %+v", tag, i+1, role, it, r, region)
+					return
+				}
+				in := false
+				for _, b := range blocks {
+					in = in || within(r, b.Rect)
+				}
+				if !in {
+					t.Errorf("%s sheet %d: %s %v at %+v in no band box", tag, i+1, role, it, r)
+				}
+			})
+		}
+	})
 }
 
 // What the band cannot hold continues, and nothing is lost: every

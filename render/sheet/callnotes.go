@@ -76,8 +76,7 @@ func (l *layout) planCallouts() {
 			l.sheetNotes[i] = append([]noteBlock{head(title)}, entries[:k]...)
 		}
 		if k < len(entries) {
-			n, _ := l.number(i)
-			l.calloutOverflow = append(l.calloutOverflow, head(fmt.Sprintf("%s ON SHEET %d, CONTINUED", strings.TrimSuffix(title, ", CONTINUED"), n)))
+			l.calloutOverflow = append(l.calloutOverflow, head(l.overflowTitle(i, title, k > 0)))
 			l.calloutOverflow = append(l.calloutOverflow, entries[k:]...)
 		}
 	}
@@ -86,6 +85,23 @@ func (l *layout) planCallouts() {
 		// notes sheet, leaving room for the line that points to it.
 		l.bandPlan.notes, l.bandPlan.overflow = notesThatFit(l.bandPlan.notes, r.H-bandHeadH-bandPad-reserve)
 	}
+}
+
+// overflowTitle heads the notes of drawing sheet i that continue past
+// its notes box (whose title is boxTitle, and which holds some of them
+// when begun): on a set of several drawings it names the sheet, on one
+// it names the notes plainly.
+func (l *layout) overflowTitle(i int, boxTitle string, begun bool) string {
+	what := strings.TrimSuffix(boxTitle, ", CONTINUED")
+	if len(l.sheets) > 1 {
+		n, _ := l.number(i)
+		return fmt.Sprintf("%s ON SHEET %d, CONTINUED", what, n)
+	}
+	plain := map[string]string{"COMPONENTS": "COMPONENT NOTES", "DESCRIPTIONS": "DESCRIPTION NOTES", "DESCRIPTIONS AND COMPONENTS": "DESCRIPTION AND COMPONENT NOTES"}[what]
+	if begun {
+		plain += ", CONTINUED"
+	}
+	return plain
 }
 
 // notesHeight is the height noteItems gives blocks.

@@ -14,6 +14,10 @@ import (
 // freeGap keeps the notes clear of the drawing and the body's frame.
 const freeGap = 3.0
 
+// minNotesW is the narrowest room a column of notes is set in (common
+// practice: some 35 characters of 6.5-pt text a line).
+const minNotesW = 120.0
+
 // underDepth is the height under the deepest depth drawn that its marks
 // may still take: the total-depth label (a 6.5-pt line set 8 pt down),
 // the axes' ticks in the sheet's bottom pad and a depth label there.
@@ -61,7 +65,7 @@ func (l *layout) freeRooms() [][]draw.Rect {
 		}
 		x0, x1 := groups[a].x0+freeGap, groups[b].x1-freeGap
 		r := draw.Rect{X: x0, Y: top + freeGap, W: x1 - x0, H: bottom - (top + freeGap)}
-		return r, r.W >= 100 && r.H >= bandPad+2*continueLineH+bandPad
+		return r, r.W >= minNotesW && r.H >= bandPad+2*continueLineH+bandPad
 	}
 	var ways [][]draw.Rect
 	n := len(groups)
@@ -130,40 +134,120 @@ func (l *layout) notesInTheBody() {
 	l.freeBoxes, l.freeRs, l.notesPages = here, areas, pages
 }
 
+// roomForNotes spares notes sheets where the automatic scale leaves the
+// drawing no room for the notes: a less detailed round scale, at most
+// twice as small and within twice the readable limit (economicalScale's
+// bound), frees the foot of the body for them. It takes the most
+// detailed such scale that keeps every note on the drawing sheets (no
+// more of them, every description and label still fitting), else the
+// most detailed that at least spares a sheet.
+func (l *layout) roomForNotes() {
+	if len(l.notesPages) == 0 || l.opt.Scale != nil || l.autoAt.Ratio > 0 {
+		return
+	}
+	limit := imperialReadable * 12 * 2
+	if !l.u.Imperial() {
+		limit = metricReadable * 2
+	}
+	var spares *layout
+	for _, s := range allSteps(l.u.Imperial()) {
+		if s.Ratio <= l.scale.Ratio || s.Ratio > min(limit, 3*l.scale.Ratio) {
+			continue
+		}
+		alt := newLayout(l.w, l.in, l.opt, l.pg)
+		alt.autoAt = s
+		if alt.planOnce() != nil || len(alt.sheets) > len(l.sheets) || !alt.textFits() {
+			continue
+		}
+		alt.notesInTheBody()
+		if alt.sheetCount() >= l.sheetCount() {
+			continue
+		}
+		if len(alt.notesPages) == 0 {
+			*l = *alt
+			return
+		}
+		if spares == nil {
+			spares = alt
+		}
+	}
+	if spares != nil {
+		*l = *spares
+	}
+}
+
 // setInRooms sets rows and notes in the rooms, then on notes sheets: it
 // returns the rooms' boxes, the notes sheets' and how many notes did not
-// find room (rows flow in the band's widths, and count none).
+// find room. The amounts rows stand whole, at the band's table width, in
+// the first room wide and tall enough, the notes beside them in what the
+// room has left and in the other rooms; rows that find no room open the
+// notes sheets, before the notes that find none.
 func (l *layout) setInRooms(rooms []draw.Rect, rows [][]string, notes []noteBlock) ([]sheetBox, [][]sheetBox, int) {
 	var here []sheetBox
+	rooms = append([]draw.Rect(nil), rooms...)
 	if len(rows) > 0 {
-		all := l.flowNotesInto(rooms, l.notesArea(), rows, notes)
-		for _, p := range all[:len(rooms)] {
-			here = append(here, p...)
+		w := l.bandPlan.amountW
+		for i, a := range rooms {
+			h := l.amountsBoxHeight(w, rows, true, false)
+			if a.W < w-1e-9 || h > a.H+1e-9 {
+				continue
+			}
+			here = append(here, sheetBox{r: draw.Rect{X: a.X, Y: a.Bottom() - h, W: w, H: h}, amounts: rows, foot: true, cont: -1, last: true})
+			rows = nil
+			rest := draw.Rect{X: a.X + w + sheetColGap, Y: a.Y, W: a.Right() - (a.X + w + sheetColGap), H: a.H}
+			if rest.W >= minNotesW {
+				rooms[i] = rest
+			} else {
+				rooms = append(rooms[:i], rooms[i+1:]...)
+			}
+			break
 		}
-		return here, all[len(rooms):], 0
 	}
 	for _, a := range rooms {
+		if len(notes) == 0 {
+			break
+		}
 		box, rest := l.columnsIn(a, notes)
 		if box == nil {
 			continue
 		}
 		notes = rest
 		here = append(here, *box)
-		if len(notes) == 0 {
-			break
-		}
 	}
 	if len(here) == 0 {
 		return nil, nil, len(notes)
 	}
 	var pages [][]sheetBox
-	if len(notes) > 0 {
-		pages = l.flowNotes(l.notesArea(), nil, notes)
-		here[len(here)-1].cont = 0
-	} else {
-		here[len(here)-1].last = true
+	if len(rows) > 0 || len(notes) > 0 {
+		pages = l.flowNotes(l.notesArea(), rows, notes)
+	}
+	// The last box of notes says where they go on: the first notes
+	// sheet holding notes, or nowhere.
+	for i := len(here) - 1; i >= 0; i-- {
+		if here[i].amounts != nil {
+			continue
+		}
+		if len(notes) > 0 {
+			here[i].cont = firstNotes(pages)
+		} else {
+			here[i].last = true
+		}
+		break
 	}
 	return here, pages, len(notes)
+}
+
+// firstNotes is the index of the first of pages holding notes (not only
+// amounts).
+func firstNotes(pages [][]sheetBox) int {
+	for p, boxes := range pages {
+		for _, b := range boxes {
+			if b.amounts == nil {
+				return p
+			}
+		}
+	}
+	return 0
 }
 
 // within reports whether r lies inside o.

@@ -92,13 +92,3 @@ func eachPage(t *testing.T, f func(name string, pg Page)) {
 		}
 	}
 }
-
-// demoAndGallery are the demo's wells, with the inputs tremie render
-// gives them, and the gallery's.
-func demoAndGallery(t *testing.T) []corpusWell {
-	var wells []corpusWell
-	for n, d := range demoWells(t) {
-		wells = append(wells, corpusWell{n, d.w, d.in})
-	}
-	return append(wells, galleryWells(t)...)
-}

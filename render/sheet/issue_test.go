@@ -64,14 +64,7 @@ func TestIssuedSet(t *testing.T) {
 	}
 	// MW-3 with its errors waived is issued, the waivers in plain words.
 	d := wells["MW-3.toml"]
-	in := d.in
-	in.Findings = nil
-	for _, f := range d.in.Findings {
-		if f.Blocking() {
-			f.Waived, f.Waiver = true, &rules.Waiver{Reason: "accepted by the county for this site", ApprovedBy: "R. Vasquez, PG"}
-		}
-		in.Findings = append(in.Findings, f)
-	}
+	in := waived(d.in)
 	opt := d.opt
 	opt.Issue = true
 	doc, err := Layout(d.w, in, opt)

@@ -29,6 +29,9 @@ type layout struct {
 	// drawing sheet's body (see freespace.go).
 	freeBoxes []sheetBox
 	freeRs    []draw.Rect
+	// autoAt, when set, is the scale the automatic choice tries instead
+	// of its own (roomForNotes, freespace.go).
+	autoAt Scale
 
 	secs *schema.Sections // what stands in the hole at each depth
 
@@ -98,6 +101,7 @@ func (l *layout) plan() error {
 	}
 	l.notesInTheBody()
 	l.notesOnTheSheet()
+	l.roomForNotes()
 	return nil
 }
 
@@ -162,6 +166,8 @@ func (l *layout) planOnce() error {
 		}
 		l.scale = *l.opt.Scale
 		l.fitsOne = l.scale.Points(l.bot-l.top) <= usable
+	case l.autoAt.Ratio > 0:
+		l.scale, l.fitsOne = l.autoAt, l.autoAt.Points(l.bot-l.top) <= usable
 	default:
 		l.scale, l.fitsOne = autoScale(l.u.Imperial(), l.bot-l.top, usable)
 		if s, ok := l.economicalScale(usable); ok {
@@ -171,7 +177,7 @@ func (l *layout) planOnce() error {
 	if err := l.paginateAt(l.scale, usable); err != nil {
 		return err
 	}
-	if l.opt.Scale == nil {
+	if l.opt.Scale == nil && l.autoAt.Ratio == 0 {
 		// The automatic scale weighs the text too: where a sheet's
 		// descriptions do not fit even one line each, or its labels run
 		// off the drawing, a more detailed scale gives them room.

@@ -114,11 +114,20 @@ func (l *layout) flowNotesInto(first []draw.Rect, rest draw.Rect, rows [][]strin
 		for k < len(rows) && l.amountsBoxHeight(aw, rows[:k+1], false, true) <= free {
 			k++
 		}
+		if k == len(rows) {
+			// Every row fits but not the table's foot: the last row goes
+			// on with it, so the table ends where its foot note is.
+			k--
+		}
 		if k == 0 && (y > area.Y || bounded()) {
 			nextCol()
 			continue
 		}
 		k = max(k, 1) // a row taller than a column: give it one anyway
+		if k == len(rows) {
+			add(sheetBox{r: draw.Rect{X: x(), Y: y, W: aw, H: l.amountsBoxHeight(aw, rows, true, false)}, amounts: rows, foot: true, cont: -1, last: true})
+			break
+		}
 		add(sheetBox{r: draw.Rect{X: x(), Y: y, W: aw, H: l.amountsBoxHeight(aw, rows[:k], false, true)}, amounts: rows[:k], cont: -1})
 		rows = rows[k:]
 		nextCol()
@@ -205,13 +214,4 @@ func (l *layout) boxItems(boxes []sheetBox) []draw.Item {
 
 // firstNotesPage is the index of the first notes sheet holding notes (not
 // only amounts).
-func (l *layout) firstNotesPage() int {
-	for p, boxes := range l.notesPages {
-		for _, b := range boxes {
-			if b.amounts == nil {
-				return p
-			}
-		}
-	}
-	return 0
-}
+func (l *layout) firstNotesPage() int { return firstNotes(l.notesPages) }

@@ -2,8 +2,6 @@ package sheet
 
 import (
 	"fmt"
-	"os"
-	"path/filepath"
 	"strings"
 	"testing"
 
@@ -13,36 +11,6 @@ import (
 	"github.com/tremie-dev/tremie/schema/rules"
 	"github.com/tremie-dev/tremie/templates"
 )
-
-// corpusWell is a well with its inputs, for the tests over every kind.
-type corpusWell struct {
-	name string
-	w    *schema.Well
-	in   Inputs
-}
-
-// galleryWells reads every well of testdata/gallery with its findings
-// and quantities.
-func galleryWells(t testing.TB) []corpusWell {
-	t.Helper()
-	files, err := filepath.Glob("../../testdata/gallery/*.toml")
-	if err != nil || len(files) == 0 {
-		t.Fatalf("gallery: %v (%d files)", err, len(files))
-	}
-	var out []corpusWell
-	for _, f := range files {
-		data, err := os.ReadFile(f)
-		if err != nil {
-			t.Fatal(err)
-		}
-		w, err := schema.Load(f, data)
-		if err != nil {
-			t.Fatalf("%s: %v", f, err)
-		}
-		out = append(out, corpusWell{filepath.Base(f), w, Inputs{Findings: rules.Check(w, nil), Quantities: quantity.Compute(w, nil)}})
-	}
-	return out
-}
 
 // textRegion is where a text of a role must lie on a drawing sheet: its
 // column of the body, the title block, the band or the caution.
@@ -79,70 +47,54 @@ func (l *layout) textRegion(role string) (draw.Rect, bool) {
 // one column (common practice: a drafted sheet writes nothing across its
 // rules or off its frame).
 func TestEveryTextInsideItsRegion(t *testing.T) {
-	var wells []corpusWell
-	for n, d := range demoWells(t) {
-		wells = append(wells, corpusWell{n, d.w, d.in})
-	}
-	wells = append(wells, galleryWells(t)...)
+	wells := demoAndGallery(t)
 	cw, cin := crowdedWell()
 	wells = append(wells, corpusWell{"crowded", cw, cin})
 	wells = append(wells, absurdWells(t)...)
-	for _, name := range []string{"letter", "tabloid", "a4", "a3"} {
-		for _, land := range []bool{false, true} {
-			tpl, err := templates.Load(name, land)
-			if err != nil {
-				t.Fatal(err)
-			}
-			pg := FromTemplate(tpl)
-			for _, c := range wells {
-				tag := fmt.Sprintf("%s on %s landscape=%v", c.name, name, land)
-				opt := Options{Page: pg}
-				l := newLayout(c.w, c.in, opt, pg)
-				if err := l.plan(); err != nil {
-					t.Fatalf("%s: %v", tag, err)
+	eachSetup(t, wells, true, func(s setup) {
+		l, tag := s.l, s.tag
+		doc := layoutOf(t, s.well.w, s.well.in, s.opt)
+		bad := 0
+		for i, p := range doc.Pages {
+			notesSheet := i >= len(l.sheets)
+			var placed []draw.Text
+			p.Walk(func(it draw.Item) {
+				tx, ok := it.(draw.Text)
+				if !ok || bad > 5 {
+					return
 				}
-				doc := layoutOf(t, c.w, c.in, opt)
-				bad := 0
-				for i, p := range doc.Pages {
-					notesSheet := i >= len(l.sheets)
-					var placed []draw.Text
-					p.Walk(func(it draw.Item) {
-						tx, ok := it.(draw.Text)
-						if !ok || bad > 5 {
-							return
-						}
-						placed = append(placed, tx)
-						r := textRect(tx)
-						region, known := l.textRegion(tx.Role)
-						if notesSheet && known && region != l.header && region != l.caution {
-							region = draw.Rect{X: l.content.X, Y: l.header.Bottom(), W: l.content.W, H: l.caution.Y - l.header.Bottom()}
-						}
-						if isBandRole(tx.Role) && l.keptOnDrawing(i, r) {
-							region = r // notes kept on the drawing (fitstrip.go, freespace.go)
-						}
-						if !within(r, region) {
-							bad++
-							t.Errorf("%s sheet %d: %s %q at %+v outside %+v", tag, i+1, tx.Role, tx.S, r, region)
-						}
-						if tx.Role == "column-head" && !notesSheet {
-							in := false
-							for _, c := range []xRange{l.cols.depth, l.cols.elev, l.cols.lith, l.cols.uscs, l.cols.desc, l.cols.feat, l.cols.well, l.cols.call} {
-								in = in || (r.X >= c.X-0.01 && r.Right() <= c.Right()+0.01)
-							}
-							if !in {
-								bad++
-								t.Errorf("%s sheet %d: column head %q at %+v crosses a column rule", tag, i+1, tx.S, r)
-							}
-						}
-					})
-					for _, o := range overlappingContinueLines(placed) {
-						bad++
-						t.Errorf("%s sheet %d: %s", tag, i+1, o)
+				placed = append(placed, tx)
+				r := textRect(tx)
+				region, known := l.textRegion(tx.Role)
+				if notesSheet && known && region != l.header && region != l.caution {
+					region = draw.Rect{X: l.content.X, Y: l.header.Bottom(), W: l.content.W, H: l.caution.Y - l.header.Bottom()}
+				}
+				if isBandRole(tx.Role) {
+					if b, ok := l.keptBox(i, r); ok {
+						region = b // notes kept on the drawing (fitstrip.go, freespace.go), inside their box
 					}
 				}
+				if !within(r, region) {
+					bad++
+					t.Errorf("%s sheet %d: %s %q at %+v outside %+v", tag, i+1, tx.Role, tx.S, r, region)
+				}
+				if tx.Role == "column-head" && !notesSheet {
+					in := false
+					for _, c := range []xRange{l.cols.depth, l.cols.elev, l.cols.lith, l.cols.uscs, l.cols.desc, l.cols.feat, l.cols.well, l.cols.call} {
+						in = in || (r.X >= c.X-0.01 && r.Right() <= c.Right()+0.01)
+					}
+					if !in {
+						bad++
+						t.Errorf("%s sheet %d: column head %q at %+v crosses a column rule", tag, i+1, tx.S, r)
+					}
+				}
+			})
+			for _, o := range overlappingContinueLines(placed) {
+				bad++
+				t.Errorf("%s sheet %d: %s", tag, i+1, o)
 			}
 		}
-	}
+	})
 }
 
 // keptOnDrawing reports whether r lies where drawing sheet i keeps
@@ -162,6 +114,31 @@ func (l *layout) keptOnDrawing(i int, r draw.Rect) bool {
 		}
 	}
 	return false
+}
+
+// keptBox is the box of notes kept on drawing sheet i (the strip,
+// fitstrip.go, or the free room of the last sheet, freespace.go) that
+// holds r, when there is one and it lies in its strip or room.
+func (l *layout) keptBox(i int, r draw.Rect) (draw.Rect, bool) {
+	if i >= len(l.sheets) {
+		return draw.Rect{}, false
+	}
+	for _, b := range l.stripBoxes {
+		if within(r, b.r) && within(b.r, l.stripArea()) {
+			return b.r, true
+		}
+	}
+	if i != len(l.sheets)-1 {
+		return draw.Rect{}, false
+	}
+	for _, b := range l.freeBoxes {
+		for _, f := range l.freeRs {
+			if within(r, b.r) && within(b.r, f) {
+				return b.r, true
+			}
+		}
+	}
+	return draw.Rect{}, false
 }
 
 // absurdWells are the demo's MW-1 with a borehole diameter that a slip of

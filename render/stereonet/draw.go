@@ -68,27 +68,10 @@ func Net(c draw.Point, r float64, poles []Plotted, d *Density) []draw.Item {
 	for _, p := range poles {
 		at := Point(c, r, p.Axis)
 		for _, it := range p.Mark(at) {
-			items = append(items, withRole(it, p.Role))
+			items = append(items, draw.WithRole(it, p.Role))
 		}
 	}
 	return items
-}
-
-// withRole names the first shape of a mark.
-func withRole(it draw.Item, role string) draw.Item {
-	switch v := it.(type) {
-	case draw.Circle:
-		if v.Role == "" {
-			v.Role = role
-		}
-		return v
-	case draw.Shape:
-		if v.Role == "" {
-			v.Role = role
-		}
-		return v
-	}
-	return it
 }
 
 // Rose draws counts per bin of width degrees as petals from c, the

@@ -8,8 +8,6 @@ import (
 	"strings"
 	"time"
 
-	"github.com/BurntSushi/toml"
-
 	"github.com/tremie-dev/tremie/schema"
 )
 
@@ -41,9 +39,9 @@ func Layout(files []string) (*Workbook, error) {
 		if err != nil {
 			return nil, err
 		}
-		var tree map[string]any
-		if _, err := toml.Decode(string(data), &tree); err != nil {
-			return nil, fmt.Errorf("%s: %v", f, err)
+		tree, err := schema.DecodeTOML(f, data)
+		if err != nil {
+			return nil, err
 		}
 		if err := b.add(tree); err != nil {
 			return nil, fmt.Errorf("%s: %v", f, err)

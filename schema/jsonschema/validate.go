@@ -7,8 +7,8 @@ import (
 	"sync"
 	"time"
 
-	"github.com/BurntSushi/toml"
 	validator "github.com/santhosh-tekuri/jsonschema/v6"
+	"github.com/tremie-dev/tremie/schema"
 )
 
 // compiled holds each kind's schema compiled once by the validator.
@@ -65,8 +65,8 @@ func schemaOf(kind string) (*validator.Schema, error) {
 
 // Instance is a TOML document as JSON Schema sees it.
 func Instance(src []byte) (any, error) {
-	var tree map[string]any
-	if _, err := toml.Decode(string(src), &tree); err != nil {
+	tree, err := schema.DecodeTOML("input", src)
+	if err != nil {
 		return nil, err
 	}
 	b, err := json.Marshal(jsonable(tree))

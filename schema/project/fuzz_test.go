@@ -18,9 +18,13 @@ func FuzzParse(f *testing.F) {
 	f.Add([]byte("x = " + strings.Repeat("{a=", 200) + "1" + strings.Repeat("}", 200)))
 	f.Add([]byte("[project]\nname = \"x\"\nextra.thing = 1\n[nope]\n"))
 	// Issue 15: a broken file (every command exits 2 on it), an empty one,
-	// terminal escapes, a 10,000-byte name.
+	// nesting 10,000 and 100,000 deep, terminal escapes, a 10,000-byte name.
 	f.Add([]byte("[project]\nname = \"x\"\nunits = \"ft\"\nbogus = = 1\n"))
 	f.Add([]byte{})
+	for _, deep := range []int{10000, 100000} {
+		f.Add([]byte("x = " + strings.Repeat("{a=", deep) + "1" + strings.Repeat("}", deep)))
+		f.Add([]byte("x = " + strings.Repeat("[", deep) + strings.Repeat("]", deep)))
+	}
 	f.Add([]byte("[project]\nname = \"\\u001b]0;x\\u0007\"\nlogo = \"/dev/zero\"\n"))
 	f.Add([]byte("[project]\nname = \"" + strings.Repeat("N", 10000) + "\"\n"))
 	dir := f.TempDir()

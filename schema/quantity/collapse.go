@@ -247,13 +247,25 @@ func groutColumns(w *schema.Well) [][]*schema.Fill {
 	return out
 }
 
-// FormatPressure writes a pressure in the well's units: psi in a file in
-// feet, kPa in one in metres.
-func FormatPressure(pa float64, u schema.Units) string {
+// PressureIn is a pressure (Pa) in the unit a well's reports give it in,
+// with the unit's name: psi in a file in feet, kPa in one in metres. The
+// text, CSV and JSON reports all take the unit from here.
+func PressureIn(pa float64, u schema.Units) (float64, string) {
 	if u.Imperial() {
-		return schema.TrimFloat(pa/PsiPa, 1) + " psi"
+		return pa / PsiPa, "psi"
 	}
-	return schema.TrimFloat(pa/1000, 0) + " kPa"
+	return pa / 1000, "kPa"
+}
+
+// FormatPressure writes a pressure in the well's units: "146.2 psi" (to a
+// tenth) or "1008 kPa" (whole).
+func FormatPressure(pa float64, u schema.Units) string {
+	v, unit := PressureIn(pa, u)
+	decimals := 0
+	if u.Imperial() {
+		decimals = 1
+	}
+	return schema.TrimFloat(v, decimals) + " " + unit
 }
 
 // Describe says what a load is made of, for reports: `neat cement 0–180 ft

@@ -93,3 +93,24 @@ func TestCollapseLoadStacked(t *testing.T) {
 		t.Errorf("steel casing: %d loads", n)
 	}
 }
+
+// Reports give pressures in the well's units. One standard atmosphere,
+// 101 325 Pa, is 14.695 95 psi and 101.325 kPa (NIST SP 811, appendix B).
+func TestPressureIn(t *testing.T) {
+	psi, unit := PressureIn(101325, schema.Units{Depth: schema.Feet})
+	if unit != "psi" {
+		t.Errorf("feet: unit %q, want psi", unit)
+	}
+	near(t, "1 atm in psi", psi, 14.69595, 1e-6)
+	kpa, unit := PressureIn(101325, schema.Units{Depth: schema.Metres})
+	if unit != "kPa" {
+		t.Errorf("metres: unit %q, want kPa", unit)
+	}
+	near(t, "1 atm in kPa", kpa, 101.325, 1e-9)
+	if got := FormatPressure(101325, schema.Units{Depth: schema.Feet}); got != "14.7 psi" {
+		t.Errorf("FormatPressure feet = %q", got)
+	}
+	if got := FormatPressure(101325, schema.Units{Depth: schema.Metres}); got != "101 kPa" {
+		t.Errorf("FormatPressure metres = %q", got)
+	}
+}

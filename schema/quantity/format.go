@@ -38,13 +38,31 @@ func FormatVolume(v schema.Volume, u schema.Units) string {
 	return fmt.Sprintf("%s %s (%s %s)", Number(v.In(p)), p.Symbol(), Number(v.In(s)), s.Symbol())
 }
 
+// PerLengthIn is a volume per length in the unit a well's reports give
+// it in, with the unit's name: US gal/ft for a file in feet, L/m for one
+// in metres.
+func PerLengthIn(v VolumePerLength, u schema.Units) (float64, string) {
+	if u.Imperial() {
+		return v.GallonsPerFoot(), "gal/ft"
+	}
+	return v.LitresPerMetre(), "L/m"
+}
+
 // FormatPerLength writes a volume per length: "0.163 gal/ft" for a file
 // in feet, "2.027 L/m" for one in metres.
 func FormatPerLength(v VolumePerLength, u schema.Units) string {
+	n, unit := PerLengthIn(v, u)
+	return Number(n) + " " + unit
+}
+
+// WaterPerBagIn is a grout's mix water per bag in the unit a well's
+// reports give it in, with the unit's name: US gallons for a file in
+// feet, litres for one in metres.
+func WaterPerBagIn(y Yield, u schema.Units) (float64, string) {
 	if u.Imperial() {
-		return Number(v.GallonsPerFoot()) + " gal/ft"
+		return y.Water.In(schema.USGallons), "gal"
 	}
-	return Number(v.LitresPerMetre()) + " L/m"
+	return y.Water.In(schema.Litres), "L"
 }
 
 // MassUnit is the unit bag masses are reported in: the file's, or pounds

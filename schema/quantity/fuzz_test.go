@@ -2,6 +2,7 @@ package quantity
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"github.com/tremie-dev/tremie/schema"
@@ -75,7 +76,11 @@ func FuzzParseYields(f *testing.F) {
 	f.Add([]byte("yields = 3\n"))
 	f.Add([]byte("[yields.fine-sand]\nyield = nan\nbag_mass = inf\n"))
 	f.Add([]byte("[yields.neat-cement]\nyield = -1\n"))
-	// Issue 15: a broken and an empty file.
+	// Issue 15: nesting 10,000 and 100,000 deep, a broken and an empty file.
+	for _, deep := range []int{10000, 100000} {
+		f.Add([]byte("x = " + strings.Repeat("{a=", deep) + "1" + strings.Repeat("}", deep)))
+		f.Add([]byte("x = " + strings.Repeat("[", deep) + strings.Repeat("]", deep)))
+	}
 	f.Add([]byte("[yields]\nvolume = = 1\n"))
 	f.Add([]byte{})
 	f.Fuzz(func(t *testing.T, b []byte) {

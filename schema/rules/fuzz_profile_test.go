@@ -18,7 +18,11 @@ func FuzzParseProfile(f *testing.F) {
 	}
 	f.Add([]byte("[profile]\nname = \"county\"\n[thresholds]\n\"SEAL-THICKNESS\".min = 3.0\n"))
 	f.Add([]byte("x = " + strings.Repeat("[", 500) + strings.Repeat("]", 500)))
-	// Issue 15: a broken and an empty file.
+	// Issue 15: nesting 10,000 and 100,000 deep, a broken and an empty file.
+	for _, deep := range []int{10000, 100000} {
+		f.Add([]byte("x = " + strings.Repeat("{a=", deep) + "1" + strings.Repeat("}", deep)))
+		f.Add([]byte("x = " + strings.Repeat("[", deep) + strings.Repeat("]", deep)))
+	}
 	f.Add([]byte("[profile]\nname = = 1\n"))
 	f.Add([]byte{})
 	f.Add([]byte("[profile]\nname = \"county \U0001F6B0\"\nextra.thing = 1\n"))

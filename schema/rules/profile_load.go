@@ -46,11 +46,13 @@ type profileReader struct {
 
 func (r *profileReader) read(file string, root *schema.Table) *Profile {
 	prof := &Profile{
-		Name:       profileNameOf(file),
-		File:       file,
-		Values:     map[string]map[string]float64{},
-		Severities: map[string]Severity{},
-		Off:        map[string]bool{},
+		Name: profileNameOf(file),
+		File: file,
+		overrides: overrides{
+			Values:     map[string]map[string]float64{},
+			Severities: map[string]Severity{},
+			Off:        map[string]bool{},
+		},
 	}
 	unitsWritten := false
 	if h := root.Sub("profile"); h != nil {
@@ -90,43 +92,55 @@ func (r *profileReader) read(file string, root *schema.Table) *Profile {
 	return prof
 }
 
-// rule reads [rule.ID]: a severity, the rule's parameters, and for some
-// purposes [rule.ID.PURPOSE] tables or, for a rule of one parameter,
-// PURPOSE = N.
+// rule reads [rule.ID]: a severity and the rule's parameters for every
+// well, and for some purposes [rule.ID.PURPOSE] tables or, for a rule of
+// one parameter, PURPOSE = N.
 func (r *profileReader) rule(prof *Profile, rl *Rule, t *schema.Table) {
+	own := []*overrides{&prof.overrides}
+	r.settings(prof, rl, t, func(string, string) []*overrides { return own }, func(k string) {
+		if !r.isPurposeOrGroup(k) {
+			return // not read: Done names it
+		}
+		if v, _ := t.Raw(k); isTable(v) || len(rl.Params) != 1 {
+			if sub := t.Sub(k); sub != nil {
+				r.purposeTable(prof, rl, k, sub)
+			}
+			return
+		}
+		// [rule.X] purpose = N: the rule's one parameter, for those purposes
+		prm := rl.Params[0]
+		if f, ok := r.number(t, k, prm); ok {
+			r.setForPurposes(prof, rl, k, prm, f, t.Path()+"."+k)
+		}
+	})
+}
+
+// settings is the one reader of a rule's table, [rule.ID] and
+// [rule.ID.PURPOSE] alike: its severity and parameters go to the overrides
+// into returns for each key (written at key path kp); any other key goes
+// to rest, or is left for Done to name when rest is nil.
+func (r *profileReader) settings(prof *Profile, rl *Rule, t *schema.Table, into func(key, kp string) []*overrides, rest func(key string)) {
 	for _, k := range t.Keys() {
+		kp := t.Path() + "." + k
 		if k == "severity" {
 			if sev, off, ok := r.severity(t); ok {
-				if off {
-					prof.Off[rl.ID] = true
-				} else {
-					prof.Severities[rl.ID] = sev
+				for _, o := range into(k, kp) {
+					o.setSeverity(rl.ID, sev, off)
 				}
 			}
 			continue
 		}
 		if prm, ok := rl.param(k); ok {
 			if f, ok := r.number(t, k, prm); ok {
-				if prof.Values[rl.ID] == nil {
-					prof.Values[rl.ID] = map[string]float64{}
+				v := prof.toModel(prm.Kind, f)
+				for _, o := range into(k, kp) {
+					o.setValue(rl.ID, k, v)
 				}
-				prof.Values[rl.ID][k] = prof.toModel(prm.Kind, f)
 			}
 			continue
 		}
-		if !r.isPurposeOrGroup(k) {
-			continue // not read: Done names it
-		}
-		if v, _ := t.Raw(k); isTable(v) || len(rl.Params) != 1 {
-			if sub := t.Sub(k); sub != nil {
-				r.purposeTable(prof, rl, k, sub)
-			}
-			continue
-		}
-		// [rule.X] purpose = N: the rule's one parameter, for those purposes
-		prm := rl.Params[0]
-		if f, ok := r.number(t, k, prm); ok {
-			r.setForPurposes(prof, rl, k, prm, f, t.Path()+"."+k)
+		if rest != nil {
+			rest(k)
 		}
 	}
 	t.Done()

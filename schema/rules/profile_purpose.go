@@ -45,15 +45,8 @@ var PurposeGroups = []PurposeGroup{
 	{"production", productionWells, "high-capacity supply wells: public-supply, industrial, irrigation"},
 }
 
-// purposeOverrides are what a profile sets for one purpose.
-type purposeOverrides struct {
-	Values     map[string]map[string]float64 // rule ID -> param -> model units
-	Severities map[string]Severity           // rule ID -> severity (also switches a rule on)
-	Off        map[string]bool               // rule ID -> off for this purpose
-}
-
 // ForPurpose returns what the profile sets for one purpose, or nil.
-func (p *Profile) forPurpose(pu schema.Purpose) *purposeOverrides {
+func (p *Profile) forPurpose(pu schema.Purpose) *overrides {
 	if p == nil || pu == "" {
 		return nil
 	}
@@ -61,13 +54,13 @@ func (p *Profile) forPurpose(pu schema.Purpose) *purposeOverrides {
 }
 
 // overridesOf returns (making it) the overrides of one purpose.
-func (p *Profile) overridesOf(pu schema.Purpose) *purposeOverrides {
+func (p *Profile) overridesOf(pu schema.Purpose) *overrides {
 	if p.ByPurpose == nil {
-		p.ByPurpose = map[schema.Purpose]*purposeOverrides{}
+		p.ByPurpose = map[schema.Purpose]*overrides{}
 	}
 	o := p.ByPurpose[pu]
 	if o == nil {
-		o = &purposeOverrides{Values: map[string]map[string]float64{}, Severities: map[string]Severity{}, Off: map[string]bool{}}
+		o = &overrides{}
 		p.ByPurpose[pu] = o
 	}
 	return o
@@ -202,53 +195,31 @@ type setting struct {
 // purposeTable reads [rule.ID.NAME]: NAME is a purpose or a group; its keys
 // are the rule's parameters and severity, for those purposes only.
 func (r *profileReader) purposeTable(prof *Profile, rl *Rule, name string, t *schema.Table) {
-	targets, exact := r.purposesOf(name)
-	for _, k := range t.Keys() {
-		kp := t.Path() + "." + k
-		if k == "severity" {
-			sev, off, ok := r.severity(t)
-			if !ok {
-				continue
-			}
-			for _, pu := range targets {
-				if !r.claim(rl.ID, pu, "severity", kp, exact) {
-					continue
-				}
-				o := prof.overridesOf(pu)
-				if off {
-					o.Off[rl.ID] = true
-					delete(o.Severities, rl.ID)
-				} else {
-					o.Severities[rl.ID] = sev
-					delete(o.Off, rl.ID)
-				}
-			}
-			continue
-		}
-		prm, ok := rl.param(k)
-		if !ok {
-			continue // not read: Done names it
-		}
-		if f, ok := r.number(t, k, prm); ok {
-			r.setForPurposes(prof, rl, name, prm, f, kp)
-		}
-	}
-	t.Done()
+	r.settings(prof, rl, t, func(k, kp string) []*overrides {
+		return r.claimed(prof, rl, name, k, kp)
+	}, nil)
 }
 
 // setForPurposes sets parameter prm of a rule to f (profile units) for the
 // purposes of a purpose or group name, written at key path kp.
 func (r *profileReader) setForPurposes(prof *Profile, rl *Rule, name string, prm Param, f float64, kp string) {
+	v := prof.toModel(prm.Kind, f)
+	for _, o := range r.claimed(prof, rl, name, prm.Name, kp) {
+		o.setValue(rl.ID, prm.Name, v)
+	}
+}
+
+// claimed returns the overrides of the purposes of a purpose or group name
+// that take key k of a rule from key path kp (see claim).
+func (r *profileReader) claimed(prof *Profile, rl *Rule, name, k, kp string) []*overrides {
 	targets, exact := r.purposesOf(name)
+	var os []*overrides
 	for _, pu := range targets {
-		if r.claim(rl.ID, pu, prm.Name, kp, exact) {
-			o := prof.overridesOf(pu)
-			if o.Values[rl.ID] == nil {
-				o.Values[rl.ID] = map[string]float64{}
-			}
-			o.Values[rl.ID][prm.Name] = prof.toModel(prm.Kind, f)
+		if r.claim(rl.ID, pu, k, kp, exact) {
+			os = append(os, prof.overridesOf(pu))
 		}
 	}
+	return os
 }
 
 // claim records that key path kp sets (rule, purpose, key); a purpose's
