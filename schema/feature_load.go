@@ -224,6 +224,8 @@ func (r *reader) tracePoints(t *table, u Units) []TracePoint {
 			}
 			return nil
 		}
+		// 1e6 (ft or m), far beyond any real borehole's depth, only keeps
+		// an absurd number out of the trace's arithmetic
 		if !(nums[0] >= 0 && nums[0] <= 360) || !(nums[1] >= 0 && nums[1] < 1e6) {
 			r.errAt(t.keyPath(k), "points[%d] = [%v, %v]: azimuth must be 0..360 degrees and depth at or below ground", i, nums[0], nums[1])
 			return nil

@@ -101,7 +101,8 @@ func FitSinusoid(pts []TracePoint) (Sinusoid, error) {
 	}
 	det := det3(m)
 	// The determinant of the normal matrix is n³/4 for points evenly
-	// spread; far below that, the azimuths do not fix the curve.
+	// spread; far below that (a millionth of it: common practice for a
+	// near-singular 3x3 system), the azimuths do not fix the curve.
 	n := float64(len(pts))
 	if !(math.Abs(det) > 1e-6*n*n*n) {
 		return Sinusoid{}, ErrFewAzimuths

@@ -2,6 +2,7 @@ package main
 
 import (
 	"context"
+	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -9,6 +10,7 @@ import (
 	"syscall"
 
 	"github.com/tremie-dev/tremie/render/live"
+	"github.com/tremie-dev/tremie/schema"
 )
 
 func init() {
@@ -40,6 +42,13 @@ func runServe(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie serve: %v\n", err)
 		return exitInput
 	}
+	// A broken file does not stop the server: the page lists its problems
+	// and follows the files, so the user fixes them and watches the
+	// sheets come back. The terminal says the same, at start and after
+	// each change that alters them.
+	reportProblems(stderr, srv.Problems(), false)
+	srv.OnProblems = func(problems []error) { reportProblems(stderr, problems, true) }
+	stopNote = "" // the server stops at once, and says "stopped"
 	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt, syscall.SIGTERM)
 	defer stop()
 	err = srv.Serve(ctx, *addr, func(a string) {
@@ -51,4 +60,26 @@ func runServe(args []string, stdout, stderr io.Writer) int {
 	}
 	fmt.Fprintln(stdout, "stopped")
 	return exitOK
+}
+
+// reportProblems prints the input problems of a served project, each with
+// its file and line; changed says they follow a change of the files, when
+// none left is news too.
+func reportProblems(stderr io.Writer, problems []error, changed bool) {
+	n := 0
+	for _, e := range problems {
+		printErr(stderr, "serve", e)
+		var list schema.ErrorList
+		if errors.As(e, &list) {
+			n += len(list)
+		} else {
+			n++
+		}
+	}
+	switch {
+	case n > 0:
+		fmt.Fprintf(stderr, "tremie serve: %d %s in the project's files; the page shows them too and follows the files as you fix them\n", n, plural(n, "problem", "problems"))
+	case changed:
+		fmt.Fprintln(stderr, "tremie serve: the project's files read without problems now")
+	}
 }

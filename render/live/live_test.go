@@ -284,3 +284,49 @@ func TestWallImageRedrawsItsWell(t *testing.T) {
 		}
 	}
 }
+
+// TestProblemsReported: a broken project file does not stop the server;
+// its problems, with file and line, are there at start (the command
+// prints them), and OnProblems hears of each change to them: fixed, a
+// well file broken, the same problems again (no call).
+func TestProblemsReported(t *testing.T) {
+	dir := demoProject(t)
+	proj := filepath.Join(dir, "project.toml")
+	good, err := os.ReadFile(proj)
+	if err != nil {
+		t.Fatal(err)
+	}
+	lines := strings.Count(string(good), "\n")
+	if err := os.WriteFile(proj, append(slices.Clone(good), "bogus = = 1\n"...), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	s, err := New(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := fmt.Sprintf("project.toml:%d:9: TOML syntax", lines+1)
+	if p := s.Problems(); len(p) != 1 || !strings.Contains(p[0].Error(), want) {
+		t.Fatalf("at start: %v, want one problem %q", p, want)
+	}
+	var heard [][]error
+	s.OnProblems = func(p []error) { heard = append(heard, p) }
+	if err := os.WriteFile(proj, good, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	s.Refresh()
+	if len(heard) != 1 || len(heard[0]) != 0 || len(s.Problems()) != 0 {
+		t.Fatalf("after the fix: heard %v, problems %v", heard, s.Problems())
+	}
+	s.Refresh()
+	if len(heard) != 1 {
+		t.Fatalf("nothing changed, yet heard %v", heard[1:])
+	}
+	well := filepath.Join(dir, "wells", "MW-2.toml")
+	if err := os.WriteFile(well, []byte("[well]\nid = \"MW-2\"\nbogus = = 1\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	s.Refresh()
+	if len(heard) != 2 || len(heard[1]) != 1 || !strings.HasPrefix(heard[1][0].Error(), "wells/MW-2.toml:3:9: TOML syntax") {
+		t.Fatalf("a broken well: heard %v", heard[1:])
+	}
+}

@@ -24,10 +24,16 @@ type Server struct {
 	problems []error // project-level problems: listing, settings
 	version  uint64  // bumped on every change the page shows
 	waiters  map[chan struct{}]bool
+	reported string // the input problems as last told to OnProblems
 
 	// Prepared is called after every refresh with the number of wells
 	// prepared again (tests wait on it); may be nil.
 	Prepared func(redrawn int)
+	// OnProblems is called after a refresh whose input problems (Problems)
+	// differ from those of the refresh before, with the new ones (none
+	// once all are fixed), so that the terminal that started the server
+	// shows what the page shows; may be nil.
+	OnProblems func(problems []error)
 }
 
 // New prepares every well of the project in dir (a directory holding
@@ -77,10 +83,36 @@ func (s *Server) Refresh() {
 			}
 		}
 	}
+	all := s.problemsLocked()
+	text := errText(all)
+	report := text != s.reported
+	s.reported = text
 	s.mu.Unlock()
+	if report && s.OnProblems != nil {
+		s.OnProblems(all)
+	}
 	if s.Prepared != nil {
 		s.Prepared(redrawn)
 	}
+}
+
+// Problems is every problem of the project's input files as last read:
+// those of the project, profile and yields files, then each well file's
+// (named relative to the project), each with its file and line.
+func (s *Server) Problems() []error {
+	s.mu.Lock()
+	defer s.mu.Unlock()
+	return s.problemsLocked()
+}
+
+func (s *Server) problemsLocked() []error {
+	all := append([]error(nil), s.problems...)
+	for _, w := range s.wells {
+		for _, e := range w.Problems {
+			all = append(all, e)
+		}
+	}
+	return all
 }
 
 func errText(errs []error) string {

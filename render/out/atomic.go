@@ -1,11 +1,13 @@
 package out
 
 import (
+	"errors"
 	"fmt"
 	"os"
 	"path/filepath"
 	"regexp"
 	"strconv"
+	"sync"
 )
 
 // WriteFileAtomic writes data to path so that path holds either its old
@@ -32,7 +34,7 @@ func Stage(path string, data []byte) (s *Staged, err error) {
 	if dir == "" {
 		dir = "."
 	}
-	tmp, err := os.CreateTemp(dir, "."+base+".tmp-"+strconv.Itoa(os.Getpid())+"-*")
+	tmp, err := createStaged(dir, "."+base+".tmp-"+strconv.Itoa(os.Getpid())+"-*")
 	if err != nil {
 		return nil, fmt.Errorf("write %s: %w", path, err)
 	}
@@ -40,6 +42,7 @@ func Stage(path string, data []byte) (s *Staged, err error) {
 		if err != nil {
 			tmp.Close()
 			os.Remove(tmp.Name())
+			release(tmp.Name())
 		}
 	}()
 	if _, err = tmp.Write(data); err != nil {
@@ -58,8 +61,57 @@ func Stage(path string, data []byte) (s *Staged, err error) {
 	return &Staged{tmp: tmp.Name(), dst: path}, nil
 }
 
+// pending holds the temporary files of this process not yet renamed or
+// removed, for RemoveStaged; closed, once RemoveStaged has run, refuses
+// new ones.
+var pending struct {
+	sync.Mutex
+	names  map[string]bool
+	closed bool
+}
+
+// createStaged makes a temporary file in dir and records it as pending,
+// in one step under the lock, so that none is made after RemoveStaged.
+func createStaged(dir, pattern string) (*os.File, error) {
+	pending.Lock()
+	defer pending.Unlock()
+	if pending.closed {
+		return nil, errors.New("the run is stopping")
+	}
+	f, err := os.CreateTemp(dir, pattern)
+	if err != nil {
+		return nil, err
+	}
+	if pending.names == nil {
+		pending.names = map[string]bool{}
+	}
+	pending.names[f.Name()] = true
+	return f, nil
+}
+
+// release forgets a pending temporary file: put in place or removed.
+func release(name string) {
+	pending.Lock()
+	defer pending.Unlock()
+	delete(pending.names, name)
+}
+
+// RemoveStaged removes every temporary file this process has staged and
+// not yet put in place, and makes no more: a run stopped at once (a
+// second Ctrl-C) leaves no temporary file behind. The destinations are
+// untouched.
+func RemoveStaged() {
+	pending.Lock()
+	defer pending.Unlock()
+	for name := range pending.names {
+		os.Remove(name)
+	}
+	pending.names, pending.closed = nil, true
+}
+
 // Commit renames the staged file over its destination.
 func (s *Staged) Commit() error {
+	defer release(s.tmp)
 	if err := os.Rename(s.tmp, s.dst); err != nil {
 		os.Remove(s.tmp)
 		return fmt.Errorf("write %s: %w", s.dst, err)
@@ -79,7 +131,10 @@ func syncDir(dir string) {
 }
 
 // Abort removes the staged file, leaving the destination as it was.
-func (s *Staged) Abort() { os.Remove(s.tmp) }
+func (s *Staged) Abort() {
+	os.Remove(s.tmp)
+	release(s.tmp)
+}
 
 // CommitAll puts every staged file in place, or none: each destination
 // that exists is first kept under a second name (a hard link, or where
@@ -93,6 +148,11 @@ func CommitAll(staged []*Staged) error {
 		name  string // "" where the destination was new
 		moved bool   // moved aside rather than linked: put back on failure
 	}
+	defer func() {
+		for _, s := range staged {
+			release(s.tmp)
+		}
+	}()
 	kept := make([]old, len(staged))
 	undo := func(renamed int) {
 		for i := range staged {

@@ -136,11 +136,11 @@ func (l *layout) notesInTheBody() {
 
 // roomForNotes spares notes sheets where the automatic scale leaves the
 // drawing no room for the notes: a less detailed round scale, at most
-// twice as small and within twice the readable limit (economicalScale's
-// bound), frees the foot of the body for them. It takes the most
-// detailed such scale that keeps every note on the drawing sheets (no
-// more of them, every description and label still fitting), else the
-// most detailed that at least spares a sheet.
+// three times less detailed and within twice the readable limit
+// (economicalScale's bound), frees the foot of the body for them. Of the
+// scales that spare a sheet (no more drawing sheets, every description
+// and label still fitting) it takes the one that gives the fewest
+// sheets, the most detailed of those.
 func (l *layout) roomForNotes() {
 	if len(l.notesPages) == 0 || l.opt.Scale != nil || l.autoAt.Ratio > 0 {
 		return
@@ -149,7 +149,7 @@ func (l *layout) roomForNotes() {
 	if !l.u.Imperial() {
 		limit = metricReadable * 2
 	}
-	var spares *layout
+	best := l
 	for _, s := range allSteps(l.u.Imperial()) {
 		if s.Ratio <= l.scale.Ratio || s.Ratio > min(limit, 3*l.scale.Ratio) {
 			continue
@@ -160,20 +160,11 @@ func (l *layout) roomForNotes() {
 			continue
 		}
 		alt.notesInTheBody()
-		if alt.sheetCount() >= l.sheetCount() {
-			continue
-		}
-		if len(alt.notesPages) == 0 {
-			*l = *alt
-			return
-		}
-		if spares == nil {
-			spares = alt
+		if alt.sheetCount() < best.sheetCount() {
+			best = alt
 		}
 	}
-	if spares != nil {
-		*l = *spares
-	}
+	*l = *best
 }
 
 // setInRooms sets rows and notes in the rooms, then on notes sheets: it

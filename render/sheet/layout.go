@@ -32,6 +32,8 @@ type layout struct {
 	// autoAt, when set, is the scale the automatic choice tries instead
 	// of its own (roomForNotes, freespace.go).
 	autoAt Scale
+	// even spreads the depth evenly over the drawing sheets (balance).
+	even bool
 
 	secs *schema.Sections // what stands in the hole at each depth
 
@@ -102,7 +104,29 @@ func (l *layout) plan() error {
 	l.notesInTheBody()
 	l.notesOnTheSheet()
 	l.roomForNotes()
+	l.balance()
 	return nil
+}
+
+// balance spreads the depth evenly over several drawing sheets where the
+// last would otherwise stand more than a third empty with nothing in its
+// free room (common practice: no sheet of a set left a third blank when
+// the set can share its depth): same scale, same sheets, the match lines
+// still on the axis ticks. A scale the user gave keeps full sheets.
+func (l *layout) balance() {
+	if len(l.sheets) < 2 || l.even || l.opt.Scale != nil || l.strip > 0 || l.lastUsed() >= 2.0/3 {
+		return
+	}
+	alt := newLayout(l.w, l.in, l.opt, l.pg)
+	alt.even, alt.autoAt = true, l.scale
+	if alt.planOnce() != nil || alt.scale != l.scale || len(alt.sheets) != len(l.sheets) || !alt.textFits() {
+		return
+	}
+	alt.notesInTheBody()
+	if alt.sheetCount() > l.sheetCount() {
+		return
+	}
+	*l = *alt
 }
 
 // planOnce plans the sheets with the strip as set.
@@ -268,7 +292,12 @@ func (l *layout) economicalScale(usable float64) (Scale, bool) {
 // sheetsAt is how paginateAt would divide the depth range at scale s.
 func (l *layout) sheetsAt(s Scale, usable float64) []span {
 	per := schema.Length(usable / s.PointsPerMetre())
-	return paginate(l.top, l.bot, per, schema.LengthFrom(l.majorStepAt(s), l.u.Depth))
+	step := schema.LengthFrom(l.majorStepAt(s), l.u.Depth)
+	pages := paginate(l.top, l.bot, per, step)
+	if l.even && len(pages) > 1 {
+		return paginateEven(l.top, l.bot, per, step, len(pages))
+	}
+	return pages
 }
 
 // paginateAt divides the depth range into sheets at a scale.
@@ -349,6 +378,37 @@ func paginate(top, bot, per, step schema.Length) []span {
 		s = e
 	}
 	return out
+}
+
+// lastUsed is the part of the last drawing sheet's body in use: its
+// drawing, and the notes standing at its foot (freespace.go).
+func (l *layout) lastUsed() float64 {
+	usable := l.plot.H - plotPadTop - plotPadBottom
+	last := l.sheets[len(l.sheets)-1]
+	drawn := l.scale.Points(last.Bottom - last.Top)
+	used := drawn / usable
+	for _, b := range l.freeBoxes {
+		used = max(used, 1-(b.r.Y-(l.plot.Y+plotPadTop+drawn))/usable)
+	}
+	return used
+}
+
+// paginateEven cuts [top, bot] into n sheets of at most per metres
+// each, as nearly equal as the match lines on the nearest ticks (of
+// step) allow.
+func paginateEven(top, bot, per, step schema.Length, n int) []span {
+	var out []span
+	s := top
+	for k := 1; k < n; k++ {
+		e := top + (bot-top)*schema.Length(k)/schema.Length(n)
+		if r := roundDown(e+step/2, step); r > s && r-s <= per && bot-r <= per*schema.Length(n-k) {
+			e = r
+		}
+		e = min(e, s+per)
+		out = append(out, span{s, e})
+		s = e
+	}
+	return append(out, span{s, bot})
 }
 
 // roundDown is the largest multiple of step not above v (with a little

@@ -214,3 +214,20 @@ func TestFigure(t *testing.T) {
 		}
 	}
 }
+
+// A set of sheets shares its depth evenly, the match lines on ticks:
+// TW-7's 625 ft at 400 ft a sheet and 50-ft ticks go 0-300 and 300-625
+// (each 75 % and 81 % used), not 0-400 and 400-625 (the last 56 %).
+// (common practice: no sheet of a set left a third blank)
+func TestPaginateEven(t *testing.T) {
+	got := paginateEven(0, ft(625), ft(400), ft(50), 2)
+	want := []span{{0, ft(300)}, {ft(300), ft(625)}}
+	if len(got) != 2 || math.Abs(float64(got[0].Bottom-want[0].Bottom)) > 1e-9 || got[1] != (span{got[0].Bottom, want[1].Bottom}) {
+		t.Errorf("paginateEven: %v, want %v", got, want)
+	}
+	// Three sheets of 100 m for 250 m, 10-m ticks: 80, 80, 90.
+	got = paginateEven(0, 250, 100, 10, 3)
+	if len(got) != 3 || got[0].Bottom != 80 || got[1].Bottom != 170 || got[2].Bottom != 250 {
+		t.Errorf("paginateEven: %v, want 0-80, 80-170, 170-250", got)
+	}
+}

@@ -19,6 +19,8 @@ func tomlValue(text string, t valueType) (string, error) {
 		return number(s)
 	case tInteger:
 		v, err := strconv.ParseFloat(s, 64)
+		// a billion is far above any count a well table holds, and well
+		// inside int64 and exact in a float64
 		if err != nil || v != math.Trunc(v) || math.Abs(v) > 1e9 {
 			return "", fmt.Errorf("%q is not a whole number", s)
 		}
@@ -113,7 +115,7 @@ func number(s string) (string, error) {
 // formatNumber writes a number for a cell's text: as short as it reads
 // back exactly, no decimal point on a whole number.
 func formatNumber(v float64) string {
-	if v == math.Trunc(v) && math.Abs(v) < 1e15 {
+	if v == math.Trunc(v) && math.Abs(v) < 1e15 { // below 2^53: every whole number is exact, and fits int64
 		return strconv.FormatInt(int64(v), 10)
 	}
 	return strconv.FormatFloat(v, 'f', -1, 64)

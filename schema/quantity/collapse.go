@@ -166,6 +166,8 @@ func CollapseLoads(w *schema.Well, y *Yields) []CollapseLoad {
 				c := CollapseLoad{Fills: col, Top: col[0].Top, Bottom: low.Bottom, At: at, Pipe: p,
 					Outside: outside, Inside: inside, WaterStated: low.HasWaterInside, WaterTop: low.WaterInside, Rating: rating,
 					Density: dens[len(dens)-1].kgm3, Measured: dens[len(dens)-1].measured}
+				// a pipe must be worse by more than round-off to replace the
+				// first found, so that equal loads keep the listing order
 				if !found || c.Fraction() > best.Fraction()+1e-12 {
 					best, found = c, true
 				}
@@ -227,7 +229,7 @@ func groutColumns(w *schema.Well) [][]*schema.Fill {
 		}
 		byWithin[f.Within] = append(byWithin[f.Within], f)
 	}
-	const touch = 1e-6 // m
+	const touch = 1e-6 // m: fills meeting within a micrometre (unit round-off) are one column
 	var out [][]*schema.Fill
 	for _, within := range order {
 		fs := byWithin[within]

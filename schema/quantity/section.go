@@ -49,7 +49,7 @@ func Area(cs schema.CrossSection, r Region, u schema.Units) (float64, error) {
 		area -= circle(p.OD)
 		names = append(names, p.Label())
 	}
-	if area < -1e-12 {
+	if area < -1e-12 { // m²: pipes exactly filling the bore are not "more", whatever the round-off
 		return 0, fmt.Errorf("the pipes in %s (%s) take more than its %s bore", what, strings.Join(names, ", "), u.FormatDiameter(outer))
 	}
 	return math.Max(area, 0), nil

@@ -96,7 +96,7 @@ func runAnnularSpace(p *Pass) {
 				need = minPack
 			}
 			space := (outerD - sumOD(inner)) / schema.Diameter(len(inner)+1)
-			if space <= 0 || space >= need-1e-9 {
+			if space <= 0 || space >= need-roundOff {
 				continue // a pipe that does not fit is PIPE-FITS-HOLE's or CASING-CLEARANCE's finding
 			}
 			outer := "the " + p.Dia(cs.Hole) + " hole"

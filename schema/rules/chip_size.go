@@ -37,7 +37,7 @@ func runChipSize(p *Pass) {
 				narrowest, at = space, seg
 			}
 		}
-		if narrowest <= 0 || float64(f.Size) <= frac*float64(narrowest)+1e-9 {
+		if narrowest <= 0 || float64(f.Size) <= frac*float64(narrowest)+roundOff {
 			continue
 		}
 		p.Reportf(key(f.Path, "size"), depths(at), "%s of %s are larger than %s of the %s radial annular space at %s (at most %s)",

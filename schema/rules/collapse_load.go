@@ -37,7 +37,7 @@ func init() {
 func runCollapseLoad(p *Pass) {
 	depth, frac := p.Length("depth"), p.Param("max_fraction")
 	for _, c := range quantity.CollapseLoads(p.Well, p.Profile().Yields) {
-		if c.Bottom <= depth+eps || c.Differential() <= frac*c.Rating*(1+1e-9) {
+		if c.Bottom <= depth+eps || c.Differential() <= frac*c.Rating*(1+roundOff) {
 			continue
 		}
 		low := c.Fills[len(c.Fills)-1]

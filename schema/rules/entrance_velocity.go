@@ -38,7 +38,7 @@ func runEntranceVelocity(p *Pass) {
 		return
 	}
 	limit := p.Param("limit") // m/s
-	if f.Velocity <= limit*(1+1e-9) {
+	if f.Velocity <= limit*(1+roundOff) {
 		return
 	}
 	rate, unit := schema.FlowIn(f.Rate, w.Units)

@@ -26,6 +26,14 @@ import (
 // above the rounding of a foot-to-metre conversion.
 const eps schema.Length = 1e-6
 
+// roundOff is the slack a computed figure gets against its threshold
+// (absolute on a fraction or a diameter in mm, relative where multiplied
+// in): a figure equal to the threshold as written (2 in of space against
+// 2 in, after inch-to-mm conversions) passes despite float round-off,
+// about 1e-16 relative; 1e-9 is far below any difference that matters.
+// Common practice.
+const roundOff = 1e-9
+
 // boreholeAnnulus names the annulus between the borehole wall and the
 // outermost pipe (a Fill with Within == "").
 const boreholeAnnulus = ""

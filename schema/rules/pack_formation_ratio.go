@@ -50,7 +50,7 @@ func runPackFormationRatio(p *Pass) {
 			}
 			for _, s := range samples {
 				ratio := schema.PackFormationRatio(f, s)
-				if ratio == 0 || (ratio >= lo-1e-9 && ratio <= hi+1e-9) {
+				if ratio == 0 || (ratio >= lo-roundOff && ratio <= hi+roundOff) {
 					continue
 				}
 				why := "too fine: it slows the water entering the well"

@@ -69,7 +69,7 @@ func runSlotRetainsPack(p *Pass) {
 				continue
 			}
 			kept := retainedFraction(sec.Slot, f.GrainMin, f.GrainMax)
-			if kept >= need-1e-9 {
+			if kept >= need-roundOff {
 				continue
 			}
 			pack := material(f.Material)
@@ -122,7 +122,8 @@ func retainedByCurve(slot schema.Diameter, f *schema.Fill) (lo, hi float64) {
 		}
 	}
 	// coarser than the last point known: strictly less is retained than
-	// at that point
+	// at that point, so the bound sits a millionth (well above roundOff)
+	// below it and a need of exactly that share is not met
 	return 0, 1 - pts[len(pts)-1].passing - 1e-6
 }
 
@@ -130,7 +131,7 @@ func retainedByCurve(slot schema.Diameter, f *schema.Fill) (lo, hi float64) {
 func (p *Pass) slotAgainstCurve(sc schema.StringSection, f *schema.Fill, need float64) {
 	sec := sc.Section
 	lo, hi := retainedByCurve(sec.Slot, f)
-	if hi >= need-1e-9 {
+	if hi >= need-roundOff {
 		return // retains enough, or may: the curve says no less
 	}
 	slotKey := key(sec.Path, "slot")

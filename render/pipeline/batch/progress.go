@@ -38,7 +38,7 @@ func newProgress(w io.Writer, label string, n int) *progress {
 		progressbar.OptionSetDescription(label),
 		progressbar.OptionShowCount(),
 		progressbar.OptionSetWidth(30),
-		progressbar.OptionThrottle(100*time.Millisecond),
+		progressbar.OptionThrottle(100*time.Millisecond), // redraw at most ten times a second: smooth to the eye, cheap on a slow terminal (common practice)
 		progressbar.OptionClearOnFinish(),
 		progressbar.OptionSetPredictTime(false),
 	)}

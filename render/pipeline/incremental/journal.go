@@ -15,6 +15,12 @@ import (
 // run replays it, so that only what was missing is drawn again.
 const JournalName = ".tremie-cache.journal"
 
+// maxJournalLine bounds one record as replayed: a well's record is a few
+// hundred bytes per output, so 16 MiB holds any real well many times
+// over, and a longer (damaged) line ends the replay instead of growing
+// the buffer without limit.
+const maxJournalLine = 16 << 20
+
 // journalLine is one well's record as drawn, or as forgotten (Forget
 // journals the entry with its hash cleared).
 type journalLine struct {
@@ -56,7 +62,7 @@ func (c *Cache) replayJournal() {
 		return
 	}
 	sc := bufio.NewScanner(bytes.NewReader(data))
-	sc.Buffer(make([]byte, 0, 64*1024), 16<<20)
+	sc.Buffer(make([]byte, 0, 64<<10), maxJournalLine)
 	for sc.Scan() {
 		var l journalLine
 		if json.Unmarshal(sc.Bytes(), &l) != nil || l.Key == "" || l.Entry == nil {
