@@ -128,8 +128,9 @@ func paramDefault(kind rules.ParamKind, def, defFt float64) string {
 	return schema.TrimFloat(def, 3)
 }
 
-// wrap writes text in lines of at most 78 columns, the first prefixed
-// with lead and the rest indented to match.
+// wrap writes text in lines of at most 78 columns (an 80-column terminal
+// with room to spare), the first prefixed with lead and the rest indented
+// to match.
 func wrap(b *strings.Builder, text, lead string) {
 	indent := strings.Repeat(" ", len(lead))
 	line := lead

@@ -36,6 +36,9 @@ func typesetFront(in Input, pl *plan) ([]byte, error) {
 	return buf.Bytes(), nil
 }
 
+// cover lays out the first page. Positions are in mm from the page's top
+// left: text starts 20 mm in, the logo fits 50 x 30 mm, the caution box
+// sits 26 mm above the foot; a plain composition of our own.
 func cover(f *doc, in Input) {
 	p := in.Project
 	tb := p.TitleBlock

@@ -14,6 +14,20 @@ type gridCol struct {
 	whole []string
 }
 
+// Cell geometry of a typeset table, in mm.
+const (
+	cellPadX    = 0.8 // text inset from a cell's left and right rules
+	cellPadY    = 0.6 // text inset from a cell's top rule (and as much below)
+	wordSlack   = 0.2 // a margin of safety beside a title's longest word, so that it never just fails to fit
+	footerSpace = 8   // kept free above the bottom margin for the page footer
+	// mmPerPt is a point in mm, 25.4/72 rounded to the four places the
+	// tables have always been laid out with.
+	mmPerPt = 0.3528
+	// leading is the line pitch over the font size: 1.25, common practice
+	// for small table text.
+	leading = 1.25
+)
+
 // grid typesets rows that wrap within their cells, breaking pages and
 // repeating the header on each.
 type grid struct {
@@ -31,7 +45,7 @@ type grid struct {
 func newGrid(f *doc, heading string, cols []gridCol, size float64) *grid {
 	pw, ph := f.GetPageSize()
 	l, _, r, b := f.GetMargins()
-	g := &grid{f: f, cols: cols, size: size, lineH: size * 0.3528 * 1.25, heading: heading, bottom: ph - b - 8}
+	g := &grid{f: f, cols: cols, size: size, lineH: size * mmPerPt * leading, heading: heading, bottom: ph - b - footerSpace}
 	g.widths = fitWidths(f, cols, size, pw-l-r)
 	return g
 }
@@ -46,8 +60,8 @@ func fitWidths(f *doc, cols []gridCol, size, avail float64) []float64 {
 	for i, c := range cols {
 		for _, word := range strings.Fields(c.title) {
 			// SplitText, which breaks the cells, also keeps fpdf's cell
-			// margin clear on both sides of the 1.6 mm padding.
-			if w := f.GetStringWidth(word) + 1.6 + 2*f.GetCellMargin() + 0.2; w > minW[i] {
+			// margin clear on both sides of the padding.
+			if w := f.GetStringWidth(word) + 2*cellPadX + 2*f.GetCellMargin() + wordSlack; w > minW[i] {
 				minW[i] = w
 			}
 		}
@@ -56,7 +70,7 @@ func fitWidths(f *doc, cols []gridCol, size, avail float64) []float64 {
 	f.SetFont(family, "", size)
 	for i, c := range cols {
 		for _, word := range c.whole {
-			if w := f.GetStringWidth(word) + 1.6 + 2*f.GetCellMargin() + 0.2; w > minW[i] {
+			if w := f.GetStringWidth(word) + 2*cellPadX + 2*f.GetCellMargin() + wordSlack; w > minW[i] {
 				minW[i] = w
 			}
 		}
@@ -141,11 +155,11 @@ func (g *grid) row(cells []string) {
 func (g *grid) height(cells []string) float64 {
 	lines := 1
 	for i, s := range cells {
-		if n := len(g.f.SplitText(s, g.widths[i]-1.6)); n > lines {
+		if n := len(g.f.SplitText(s, g.widths[i]-2*cellPadX)); n > lines {
 			lines = n
 		}
 	}
-	return float64(lines)*g.lineH + 1.2
+	return float64(lines)*g.lineH + 2*cellPadY
 }
 
 func (g *grid) cells(cells []string, fill bool) {
@@ -165,9 +179,9 @@ func (g *grid) cells(cells []string, fill bool) {
 		if g.cols[i].right {
 			align = "R"
 		}
-		for j, line := range f.SplitText(s, g.widths[i]-1.6) {
-			f.SetXY(x+0.8, y0+0.6+float64(j)*g.lineH)
-			f.CellFormat(g.widths[i]-1.6, g.lineH, line, "", 0, align, false, 0, "")
+		for j, line := range f.SplitText(s, g.widths[i]-2*cellPadX) {
+			f.SetXY(x+cellPadX, y0+cellPadY+float64(j)*g.lineH)
+			f.CellFormat(g.widths[i]-2*cellPadX, g.lineH, line, "", 0, align, false, 0, "")
 		}
 		x += g.widths[i]
 	}

@@ -21,6 +21,7 @@ import (
 type fontSet struct {
 	fonts [4]*canvas.Font
 	lines map[lineKey]*canvas.Text
+	masks glyphMasks // the glyphs' coverage on rasters (rasterglyph.go)
 }
 
 // lineKey names a shaped line: the same string in the same face, size and

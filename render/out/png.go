@@ -32,19 +32,10 @@ func PNG(doc *draw.Document, i int, dpi float64) ([]byte, error) {
 	if math.IsNaN(dpi) || dpi <= 0 || dpi > 2400 {
 		return nil, fmt.Errorf("png: resolution %g dpi is outside 0–2400", dpi)
 	}
-	w, h := PixelSize(p, dpi)
-	if w < 1 || h < 1 || float64(w)*float64(h) > maxPixels {
-		return nil, fmt.Errorf("png page %d: %d × %d pixels at %g dpi is outside 1 pixel to %d megapixels", i+1, w, h, dpi, maxPixels/1_000_000)
-	}
-	img := image.NewRGBA(image.Rect(0, 0, w, h))
-	imagedraw.Draw(img, img.Bounds(), image.White, image.Point{}, imagedraw.Src)
-	r := newPNGRenderer(img, canvas.DPI(dpi))
-	fonts := takeFonts()
-	defer fonts.giveBack()
-	if err := paintPage(r, p, fonts, TextAsText, &rasterPatterns{}); err != nil {
+	img, err := raster(p, dpi, true)
+	if err != nil {
 		return nil, fmt.Errorf("png page %d: %w", i+1, err)
 	}
-	r.Close()
 	if b, ok := encodeOpaquePNG(img); ok {
 		return b, nil
 	}
@@ -54,4 +45,27 @@ func PNG(doc *draw.Document, i int, dpi float64) ([]byte, error) {
 		return nil, fmt.Errorf("png page %d: encode: %w", i+1, err)
 	}
 	return buf.Bytes(), nil
+}
+
+// raster paints page p at dpi on a white ground; masked draws text from
+// glyph masks (rasterglyph.go), as PNG does, where false draws every
+// glyph from its outline.
+func raster(p *draw.Page, dpi float64, masked bool) (*image.RGBA, error) {
+	w, h := PixelSize(p, dpi)
+	if w < 1 || h < 1 || float64(w)*float64(h) > maxPixels {
+		return nil, fmt.Errorf("%d × %d pixels at %g dpi is outside 1 pixel to %d megapixels", w, h, dpi, maxPixels/1_000_000)
+	}
+	img := image.NewRGBA(image.Rect(0, 0, w, h))
+	imagedraw.Draw(img, img.Bounds(), image.White, image.Point{}, imagedraw.Src)
+	r := newPNGRenderer(img, canvas.DPI(dpi))
+	fonts := takeFonts()
+	defer fonts.giveBack()
+	if masked {
+		r.masks = &fonts.masks
+	}
+	if err := paintPage(r, p, fonts, TextAsText, &rasterPatterns{}); err != nil {
+		return nil, err
+	}
+	r.Close()
+	return img, nil
 }

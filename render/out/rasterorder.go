@@ -21,6 +21,11 @@ type pngRenderer struct {
 	res   canvas.Resolution
 	order []subpathAt // reused between paths
 	rings map[[2]float64]*canvas.Path
+
+	img    *image.RGBA
+	masks  *glyphMasks   // the font set's, for text (rasterglyph.go); nil: outlines
+	placed []placedGlyph // reused between texts
+	sum    []uint16      // reused between texts
 }
 
 type subpathAt struct {
@@ -29,7 +34,7 @@ type subpathAt struct {
 }
 
 func newPNGRenderer(img *image.RGBA, res canvas.Resolution) *pngRenderer {
-	return &pngRenderer{Rasterizer: rasterizer.FromImage(img, res, canvas.DefaultColorSpace), res: res}
+	return &pngRenderer{Rasterizer: rasterizer.FromImage(img, res, canvas.DefaultColorSpace), res: res, img: img}
 }
 
 // RenderPath draws path's fill, then its stroke, as canvas's rasterizer
@@ -71,9 +76,12 @@ func (r *pngRenderer) renderPath(path *canvas.Path, style canvas.Style, m canvas
 	}
 }
 
-// RenderText draws text as glyph outlines through RenderPath above.
+// RenderText draws text from glyph masks (rasterglyph.go) or, where it
+// cannot, as glyph outlines through RenderPath above.
 func (r *pngRenderer) RenderText(text *canvas.Text, m canvas.Matrix) {
-	text.RenderAsPath(r, m, r.res)
+	if !r.maskedText(text, m) {
+		text.RenderAsPath(r, m, r.res)
+	}
 }
 
 // fill hands p (already placed) to the scanner, rightmost subpath first.

@@ -27,7 +27,7 @@ type namedDoc struct {
 }
 
 // demoDocs lays out every well of the demo project as tremie render does.
-func demoDocs(t *testing.T) []namedDoc {
+func demoDocs(t testing.TB) []namedDoc {
 	t.Helper()
 	dir := t.TempDir()
 	if err := demo.Write(dir, false); err != nil {
@@ -37,7 +37,7 @@ func demoDocs(t *testing.T) []namedDoc {
 }
 
 // projectDocs lays out every well under dir, sorted by file name.
-func projectDocs(t *testing.T, dir string) []namedDoc {
+func projectDocs(t testing.TB, dir string) []namedDoc {
 	t.Helper()
 	run, err := pipeline.Resolve([]string{dir}, pipeline.Options{Quiet: true})
 	if err != nil {

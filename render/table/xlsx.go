@@ -88,6 +88,8 @@ func (t *Table) XLSX(title string, date time.Time) ([]byte, error) {
 	if err := f.SetCellStr(NotesSheet, "A1", t.caution()); err != nil {
 		return nil, fmt.Errorf("xlsx: %w", err)
 	}
+	// widths in characters: the notes read as one wide column; 14 holds a
+	// date, an elevation or a two-word title without a resize
 	if err := f.SetColWidth(NotesSheet, "A", "A", 120); err != nil {
 		return nil, fmt.Errorf("xlsx: %w", err)
 	}
