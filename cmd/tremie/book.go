@@ -19,7 +19,7 @@ func init() {
 
 func runBook(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("book", stdout, stderr)
-	outFile := fset.String("o", "", "output PDF `file` (default OUTPUT/book.pdf, which replaces only a book tremie wrote)")
+	outFile := fset.String("o", "", "output PDF `file`, - for standard output (default OUTPUT/book.pdf, which replaces only a book tremie wrote)")
 	force := fset.Bool("force", false, "replace OUTPUT/book.pdf even if tremie did not write it")
 	issue := fset.Bool("issue", false, "bind the issued set: no rule IDs or file lines; refused while any well has unwaived error findings")
 	rest, code, ok := fset.parse(args)
@@ -50,6 +50,10 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie book: %v\n", err)
 		return exitOutput
+	}
+	if *outFile == stdoutName {
+		fmt.Fprintf(stderr, "tremie book: %d wells bound (%s)\n", len(wells), strings.Join(run.ProfileLabels(), "; "))
+		return worse(code, toStdout("book", stdout, stderr, pdf, true))
 	}
 	dst, err := writeProjectOutput(*outFile, run.OutDir, "book.pdf", pdf, *force)
 	if err != nil {

@@ -10,6 +10,7 @@ import (
 	"testing"
 
 	"github.com/tremie-dev/tremie/schema/rules"
+	"github.com/tremie-dev/tremie/schema/schematest"
 )
 
 // runTremie runs the command function as main would.
@@ -23,47 +24,11 @@ func runTremie(args ...string) (code int, stdout, stderr string) {
 // 2-in Sch 40 PVC (OD 2.375 in, ASTM D1785) in an 8.25-in hole, pack 2 ft
 // above the screen (US EPA 1992), 3 ft of chips (TI 814-01: 2 ft or more),
 // sealed to 23 ft (DWR 74-81: 20 ft for monitoring).
-const sealedWell = `[units]
-depth = "ft"
-[well]
-id = "OK-1"
-purpose = "monitoring"
-total_depth = 36.0
-[[borehole]]
-top = 0.0
-bottom = 36.0
-diameter = 8.25
-[[string]]
-bottom_cap = "plug"
-[[string.section]]
-kind = "riser"
-top = -2.5
-bottom = 25.0
-size = "2"
-schedule = "40"
-[[string.section]]
-kind = "screen"
-top = 25.0
-bottom = 35.0
-slot_number = 10
-[[fill]]
-top = 23.0
-bottom = 36.0
-material = "filter-pack"
-gradation = "20/40"
-[[fill]]
-top = 20.0
-bottom = 23.0
-material = "bentonite-chips"
-[[fill]]
-top = 0.0
-bottom = 20.0
-material = "neat-cement"
-[[lithology]]
-top = 0.0
-bottom = 36.0
-uscs = "SP"
-`
+var sealedWell = schematest.MonitoringWell("OK-1", "ft", "8.25", "36.0",
+	schematest.Fill("23.0", "36.0", "filter-pack")+"gradation = \"20/40\"\n"+
+		schematest.Fill("20.0", "23.0", "bentonite-chips")+
+		schematest.Fill("0.0", "20.0", "neat-cement")+
+		"[[lithology]]\ntop = 0.0\nbottom = 36.0\nuscs = \"SP\"\n")
 
 // unsealedWell (BAD-1) has grout straight on the pack (line 31: the
 // grout's bottom).

@@ -39,7 +39,7 @@ var demoSteps = []struct {
 
 func runDemo(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("demo", stdout, stderr)
-	outDir := fset.String("o", "tremie-demo", "`directory` to write the demo project into")
+	outDir := fset.dir("o", "tremie-demo", "`directory` to write the demo project into")
 	force := fset.Bool("force", false, "write into DIR even if it is not empty, replacing the demo's files and outputs there")
 	rest, code, ok := fset.parse(args)
 	if !ok {

@@ -23,7 +23,7 @@ func init() {
 func runExport(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("export", stdout, stderr)
 	format := fset.choice("format", "geojson", []string{"geojson", "csv"}, "`format`: geojson (RFC 7946, WGS 84) or csv")
-	outFile := fset.String("o", "", "output `file` (default: stdout)")
+	outFile := fset.String("o", "", "output `file`, - for standard output (default: standard output)")
 	rest, code, ok := fset.parse(args)
 	if !ok {
 		return code
@@ -46,7 +46,7 @@ func runExport(args []string, stdout, stderr io.Writer) int {
 		}
 	}
 	dir := "."
-	if *outFile != "" {
+	if *outFile != "" && *outFile != stdoutName {
 		dir = filepath.Dir(*outFile)
 	}
 	names := pipeline.AssignNames(wells)
@@ -69,11 +69,8 @@ func runExport(args []string, stdout, stderr io.Writer) int {
 	} else {
 		data = x.GeoJSON()
 	}
-	if *outFile == "" {
-		if _, err := stdout.Write(data); err != nil {
-			return exitOutput
-		}
-		return code
+	if *outFile == "" || *outFile == stdoutName {
+		return worse(code, toStdout("export", stdout, stderr, data, false))
 	}
 	if err := pipeline.WriteFile(*outFile, data); err != nil {
 		fmt.Fprintf(stderr, "tremie export: %v\n", err)

@@ -20,6 +20,7 @@ type cmdFlags struct {
 	cmd    *command
 	stdout io.Writer
 	stderr io.Writer
+	dirs   map[string]*string // flags naming a directory (see dir)
 }
 
 // newFlags starts a command's flags; --quiet is among them.
@@ -60,6 +61,37 @@ func (f *cmdFlags) choice(name, def string, choices []string, usage string) *str
 	return s
 }
 
+// stdoutName is the output file name that means standard output
+// ("-o -"), as in most command-line tools.
+const stdoutName = "-"
+
+// dir declares a string flag naming a directory of outputs, which "-"
+// (standard output: one stream) cannot be; parse refuses it.
+func (f *cmdFlags) dir(name, def, usage string) *string {
+	s := f.String(name, def, usage)
+	if f.dirs == nil {
+		f.dirs = map[string]*string{}
+	}
+	f.dirs[name] = s
+	return s
+}
+
+// toStdout writes a command's one document to standard output, the
+// stream of "-o -"; a binary one (PDF, workbook) is refused on a
+// terminal, where it would only scramble the screen. It returns the exit
+// code.
+func toStdout(cmd string, stdout, stderr io.Writer, data []byte, binary bool) int {
+	if _, terminal := stdout.(textGuard); terminal && binary {
+		fmt.Fprintf(stderr, "tremie %s: standard output is a terminal, where a binary file would only scramble the screen; redirect it to a file or a program (> FILE, | PROGRAM), or name a file with -o\n", cmd)
+		return exitOutput
+	}
+	if _, err := stdout.Write(data); err != nil {
+		fmt.Fprintf(stderr, "tremie %s: writing to standard output: %v\n", cmd, err)
+		return exitOutput
+	}
+	return exitOK
+}
+
 // twoDashes finds a long flag written with one dash in the flag
 // package's messages ("-format"), to show it as it is documented.
 var twoDashes = regexp.MustCompile(`(^|\s)-([a-z][a-z0-9-]+)`)
@@ -88,11 +120,16 @@ func (f *cmdFlags) parse(args []string) (operands []string, code int, ok bool) {
 			return nil, exitUsage, false
 		}
 		args = f.Args()
-		if len(args) == 0 {
+		if len(args) == 0 || args[0] == "--" {
+			if len(args) > 0 {
+				operands = append(operands, args[1:]...)
+			}
+			for name, v := range f.dirs {
+				if *v == stdoutName {
+					return nil, f.usageError("-%s names a directory for the files %s writes; - (standard output) cannot hold them (write ./- for a directory named -)", name, f.cmd.name), false
+				}
+			}
 			return operands, exitOK, true
-		}
-		if args[0] == "--" {
-			return append(operands, args[1:]...), exitOK, true
 		}
 		operands = append(operands, args[0])
 		args = args[1:]

@@ -24,8 +24,8 @@ func init() {
 
 func runImport(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("import", stdout, stderr)
-	outDir := fset.String("o", "", "`directory` for the well files (required)")
-	template := fset.String("template", "", "write an empty workbook in the import layout, with an example well, to this `file`")
+	outDir := fset.dir("o", "", "`directory` for the well files (required)")
+	template := fset.String("template", "", "write an empty workbook in the import layout, with an example well, to this `file` (- for standard output)")
 	force := fset.Bool("force", false, "overwrite well files that already exist")
 	rest, code, ok := fset.parse(args)
 	if !ok {
@@ -35,11 +35,14 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 		if len(rest) != 0 || *outDir != "" {
 			return fset.usageError("--template takes only the file to write")
 		}
-		if _, err := os.Stat(*template); err == nil && !*force {
+		if _, err := os.Stat(*template); err == nil && !*force && *template != stdoutName {
 			fmt.Fprintf(stderr, "tremie import: %s exists; --force overwrites it\n", *template)
 			return exitOutput
 		}
 		data, err := exchange.Template(templateDate())
+		if err == nil && *template == stdoutName {
+			return toStdout("import", stdout, stderr, data, true)
+		}
 		if err == nil {
 			err = pipeline.WriteFile(*template, data)
 		}

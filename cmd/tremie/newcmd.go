@@ -25,7 +25,7 @@ func runNew(args []string, stdout, stderr io.Writer) int {
 	purpose := fset.String("purpose", "", "well `purpose` (default: the kind's usual one)")
 	units := fset.String("units", "ft", "`units` of the file: ft (feet, inches) or m (metres, millimetres)")
 	kind := fset.String("kind", "monitoring", "`kind` of well: "+strings.Join(starter.Kinds, ", "))
-	dir := fset.String("o", ".", "`folder` to write ID.toml in")
+	dir := fset.dir("o", ".", "`folder` to write ID.toml in")
 	pos, code, ok := fset.parse(args)
 	if !ok {
 		return code

@@ -26,7 +26,7 @@ func init() {
 
 func runRender(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("render", stdout, stderr)
-	outDir := fset.String("o", "", "output `directory` (default: the project's output directory)")
+	outDir := fset.dir("o", "", "output `directory` (default: the project's output directory)")
 	formats := fset.String("format", "svg,pdf,png", "comma-separated output `formats`: "+strings.Join(out.FormatNames(), ", "))
 	pageName := fset.choice("page", "", templates.Names(), "page `size`: letter, tabloid, a4 or a3 (default letter, or the project's)")
 	landscape := fset.Bool("landscape", false, "turn the page to landscape")

@@ -22,7 +22,7 @@ func init() {
 
 func runSection(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("section", stdout, stderr)
-	outDir := fset.String("o", "", "output `directory` (default the project's output directory)")
+	outDir := fset.dir("o", "", "output `directory` (default the project's output directory)")
 	wellList := fset.String("wells", "", "draw a line through these `wells`, in order: A,B,C")
 	formats := fset.String("format", "svg,pdf,png", "output `formats`: "+strings.Join(out.FormatNames(), ", "))
 	pageName := fset.String("page", "tabloid", "page `template` (landscape)")

@@ -25,7 +25,7 @@ func init() {
 func runTable(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("table", stdout, stderr)
 	format := fset.choice("format", "csv", []string{"csv", "xlsx", "md", "import-xlsx"}, "table `format`: csv, xlsx, md, or import-xlsx (the wells in tremie import's layout)")
-	outFile := fset.String("o", "", "output `file` (default: stdout for csv and md, OUTPUT/summary.xlsx for xlsx, OUTPUT/import.xlsx for import-xlsx)")
+	outFile := fset.String("o", "", "output `file`, - for standard output (default: standard output for csv and md, OUTPUT/summary.xlsx for xlsx, OUTPUT/import.xlsx for import-xlsx)")
 	force := fset.Bool("force", false, "replace the default output file even if tremie did not write it")
 	rest, code, ok := fset.parse(args)
 	if !ok {
@@ -83,12 +83,9 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintln(stderr, table.Caution)
 	}
 	checked := strings.Join(run.ProfileLabels(), "; ") // the check status column's thresholds
-	if *outFile == "" && defaultName == "" {
+	if *outFile == "" && defaultName == "" || *outFile == stdoutName {
 		fmt.Fprintf(stderr, "tremie table: wells checked with %s\n", checked)
-		if _, err := stdout.Write(buf.Bytes()); err != nil {
-			return exitOutput
-		}
-		return code
+		return worse(code, toStdout("table", stdout, stderr, buf.Bytes(), defaultName != ""))
 	}
 	dst, err := writeProjectOutput(*outFile, run.OutDir, defaultName, buf.Bytes(), *force)
 	if err != nil {

@@ -24,6 +24,20 @@ const (
 	// tileDecimals is the precision of tile geometry written to files:
 	// a thousandth of a point.
 	tileDecimals = 3
+	// maxFillCopies bounds the mark copies one raster fill lays (cells ×
+	// marks), which page size and tile size alone leave at 200 million
+	// (a 1 pt tile over the largest page). The fullest fill of our
+	// symbol tables, the weathered-rock tile (58 marks in 24 × 20 pt)
+	// over a whole Tabloid sheet, lays about 117,000. Past the bound the
+	// fill is reported, not drawn; under it, a fill takes a second or two
+	// at most (500,000 dots: 2 s on a busy 2-core machine).
+	maxFillCopies = 500_000
+	// maxTileCopies bounds the copies of marks one tile holds, a mark
+	// reaching past its cell being copied into every cell it reaches (see
+	// wrapCopies), which the marks' extent alone leaves unbounded. Our
+	// symbols hold at most 58 marks, each reaching one neighbour or
+	// three: a few hundred copies.
+	maxTileCopies = 10_000
 )
 
 // tileMarks is a tile's marks as paths, checked once per document: every
@@ -32,6 +46,7 @@ const (
 type tileMarks struct {
 	paths []draw.Path
 	ink   draw.Rect
+	count int // subpaths and circles
 }
 
 // marksOf checks a tile and converts its marks.
@@ -88,7 +103,31 @@ func marksOf(t *draw.Tile) (tileMarks, error) {
 	if x0 <= x1 {
 		m.ink = draw.Rect{X: x0, Y: y0, W: x1 - x0, H: y1 - y0}
 	}
+	copies := 0.0
+	for _, g := range m.paths {
+		m.count += len(g.Subpaths) + len(g.Circles)
+		reach := markReach(g.Style)
+		for _, sp := range g.Subpaths {
+			if len(sp.Points) > 0 {
+				copies += wrapCount(t, subpathBounds(sp.Points, reach))
+			}
+		}
+		for _, c := range g.Circles {
+			copies += wrapCount(t, draw.Rect{X: c.Center.X - c.R - reach, Y: c.Center.Y - c.R - reach, W: 2 * (c.R + reach), H: 2 * (c.R + reach)})
+		}
+	}
+	if copies > maxTileCopies {
+		return m, fmt.Errorf("tile %q: its marks reach so far past its %g × %g pt cell that it would hold %.0f copies of them, more than %d", t.ID, t.W, t.H, copies, maxTileCopies)
+	}
 	return m, nil
+}
+
+// wrapCount is at most how many offsets wrapCopies tries for a mark with
+// bounds b, counted without trying them.
+func wrapCount(t *draw.Tile, b draw.Rect) float64 {
+	na := math.Ceil((t.W-b.X)/t.W) - math.Floor(-b.Right()/t.W) - 1
+	nc := math.Ceil((t.H-b.Y)/t.H) - math.Floor(-b.Bottom()/t.H) - 1
+	return max(na, 0) * max(nc, 0)
 }
 
 // markReach is how far a style's ink reaches past a mark's outline: half
@@ -182,6 +221,10 @@ func (rp *rasterPatterns) fill(p *painter, t *draw.Tile, area draw.Rect, path st
 		return
 	}
 	i0, i1, j0, j1 := cellsOver(t, m.ink, area)
+	if copies := float64(i1-i0+1) * float64(j1-j0+1) * float64(m.count); copies > maxFillCopies {
+		p.fail(path, "pattern %q over %g × %g pt would lay %.0f copies of its marks on the raster, more than %d", t.ID, area.W, area.H, copies, maxFillCopies)
+		return
+	}
 	for _, g := range m.paths {
 		c := p.newCompound(g.Style, &area)
 		if c == nil {

@@ -193,6 +193,60 @@ func TestPatternBoundedByThePage(t *testing.T) {
 	}
 }
 
+// TestAbsurdFillsStayBounded: a 1 pt tile of 20 marks over a page 3,000
+// pt square would lay 180 million mark copies on the raster; the raster
+// reports it (maxFillCopies) where SVG and PDF fill it with one path, and
+// a mark reaching 5,000 pt past its 1 pt cell (which every vector tile
+// would copy 20,000 times) is reported by all three (maxTileCopies), each
+// at once. A fill near the bound still draws, within seconds.
+func TestAbsurdFillsStayBounded(t *testing.T) {
+	fine := &draw.Tile{ID: "fine", W: 1, H: 1}
+	for k := 0; k < 20; k++ {
+		fine.Items = append(fine.Items, draw.Circle{Style: draw.Style{Fill: draw.Black}, Center: draw.Point{X: float64(k) / 20, Y: 0.5}, R: 0.02})
+	}
+	long := &draw.Tile{ID: "long", W: 1, H: 1, Items: []draw.Item{
+		draw.Shape{Style: draw.Style{Stroke: draw.Black, StrokeWidth: 0.1}, Points: []draw.Point{{X: -5000, Y: 0.5}, {X: 5000, Y: 0.5}}},
+	}}
+	page := func(side float64, tile *draw.Tile) *draw.Document {
+		return &draw.Document{Pages: []*draw.Page{{Width: side, Height: side, Items: []draw.Item{
+			draw.Pattern{Rect: draw.Rect{W: side, H: side}, Tile: tile},
+		}}}}
+	}
+	start := time.Now()
+	huge := page(3000, fine)
+	if _, err := PNG(huge, 0, 10); err == nil || !strings.Contains(err.Error(), "copies of its marks") {
+		t.Errorf("PNG of 180 million mark copies: %v", err)
+	}
+	if _, err := SVG(huge, 0); err != nil {
+		t.Errorf("SVG: %v", err)
+	}
+	if _, err := PDF(huge); err != nil {
+		t.Errorf("PDF: %v", err)
+	}
+	wide := page(100, long)
+	if _, err := PNG(wide, 0, 10); err == nil || !strings.Contains(err.Error(), "copies of them") {
+		t.Errorf("PNG of a mark reaching 5,000 cells: %v", err)
+	}
+	if _, err := SVG(wide, 0); err == nil || !strings.Contains(err.Error(), "copies of them") {
+		t.Errorf("SVG of a mark reaching 5,000 cells: %v", err)
+	}
+	if _, err := PDF(wide); err == nil || !strings.Contains(err.Error(), "copies of them") {
+		t.Errorf("PDF of a mark reaching 5,000 cells: %v", err)
+	}
+	t.Logf("refused in %v", time.Since(start))
+	if d := time.Since(start); d > 5*time.Second {
+		t.Errorf("absurd fills took %v", d)
+	}
+	start = time.Now()
+	// 150 × 150 cells of 20 marks: 450,000 copies, under the bound.
+	if _, err := PNG(page(149, fine), 0, 10); err != nil {
+		t.Errorf("a fill under the bound: %v", err)
+	}
+	if d := time.Since(start); d > 10*time.Second {
+		t.Errorf("a fill under the bound took %v", d)
+	}
+}
+
 // TestBadTiles: a tile too small, not finite, or holding what cannot be
 // a mark is reported, not drawn.
 func TestBadTiles(t *testing.T) {

@@ -5,6 +5,7 @@ import (
 	"testing"
 
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/schematest"
 )
 
 // A pack with d10 0.45, d30 1.2, d60 1.4 mm beside a screen at 25-35 ft.
@@ -12,46 +13,10 @@ import (
 // the sample at 30 ft = 1.2/0.25 = 4.8 (ASTM D5092's design ratio); the
 // sample at 10 ft lies above the screen and is not compared.
 func TestPackDesigns(t *testing.T) {
-	src := `[units]
-depth = "ft"
-[well]
-id = "PD-1"
-purpose = "monitoring"
-total_depth = 36.0
-[[borehole]]
-top = 0.0
-bottom = 36.0
-diameter = 8.25
-[[string]]
-[[string.section]]
-kind = "riser"
-top = -2.5
-bottom = 25.0
-size = "2"
-schedule = "40"
-[[string.section]]
-kind = "screen"
-top = 25.0
-bottom = 35.0
-slot_number = 10
-[[fill]]
-top = 23.0
-bottom = 36.0
-material = "filter-pack"
-d10 = 0.45
-d30 = 1.2
-d60 = 1.4
-[[fill]]
-top = 0.0
-bottom = 23.0
-material = "neat-cement"
-[[sample]]
-depth = 10.0
-d30 = 0.05
-[[sample]]
-depth = 30.0
-d30 = 0.25
-`
+	src := schematest.MonitoringWell("PD-1", "ft", "8.25", "36.0",
+		schematest.Fill("23.0", "36.0", "filter-pack")+"d10 = 0.45\nd30 = 1.2\nd60 = 1.4\n"+
+			schematest.Fill("0.0", "23.0", "neat-cement")+
+			"[[sample]]\ndepth = 10.0\nd30 = 0.05\n[[sample]]\ndepth = 30.0\nd30 = 0.25\n")
 	w, err := schema.Load("PD-1.toml", []byte(src))
 	if err != nil {
 		t.Fatal(err)

@@ -8,6 +8,7 @@ import (
 	"testing"
 
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/schematest"
 )
 
 // Worked numbers against the sources the rules name.
@@ -32,44 +33,14 @@ func findings(w *schema.Well, prof *Profile, id string) []Finding {
 	return out
 }
 
-// monitoringWell is a 2-in PVC monitoring well (OD 2.375 in, ASTM D1785)
-// whose fills are given; depths in the unit named.
+// monitoringWell is schematest's standard 2-in PVC monitoring well (OD
+// 2.375 in, ASTM D1785), well "W", whose fills are given; depths in the
+// unit named.
 func monitoringWell(unit, hole, td, fills string) string {
-	riser, screen := "-0.75, 7.5", "7.5, 10.5"
-	if unit == "ft" {
-		riser, screen = "-2.5, 25.0", "25.0, 35.0"
-	}
-	r := strings.Split(riser, ", ")
-	s := strings.Split(screen, ", ")
-	return `[units]
-depth = "` + unit + `"
-[well]
-id = "W"
-purpose = "monitoring"
-total_depth = ` + td + `
-[[borehole]]
-top = 0.0
-bottom = ` + td + `
-diameter = ` + hole + `
-[[string]]
-bottom_cap = "plug"
-[[string.section]]
-kind = "riser"
-top = ` + r[0] + `
-bottom = ` + r[1] + `
-size = "2"
-schedule = "40"
-[[string.section]]
-kind = "screen"
-top = ` + s[0] + `
-bottom = ` + s[1] + `
-slot_number = 10
-` + fills
+	return schematest.MonitoringWell("W", unit, hole, td, fills)
 }
 
-func fill(top, bottom, mat string) string {
-	return "[[fill]]\ntop = " + top + "\nbottom = " + bottom + "\nmaterial = \"" + mat + "\"\n"
-}
+var fill = schematest.Fill
 
 // Defaults that read "2 ft / 0.6 m" stay round in each unit: a well in
 // feet gets 2 ft = 0.6096 m exactly (NIST SP 811: 1 ft = 0.3048 m), a
@@ -417,13 +388,9 @@ func TestWaiver(t *testing.T) {
 // The annulus inside an outer casing is checked like the borehole's:
 // here nothing fills it from 5 to 10 ft.
 func TestAnnulusGapInsideCasing(t *testing.T) {
-	src := `[units]
-depth = "ft"
-[well]
-id = "W"
-purpose = "monitoring"
-total_depth = 36.0
-[[borehole]]
+	well := monitoringWell("ft", "8.25", "36.0", fill("23.0", "36.0", "filter-pack")+fill("20.0", "23.0", "bentonite-chips")+fill("0.0", "20.0", "neat-cement")+
+		"[[fill]]\ntop = 0.0\nbottom = 5.0\nmaterial = \"neat-cement\"\nwithin = \"conductor\"\n")
+	src := strings.Replace(well, "[[borehole]]\ntop = 0.0\nbottom = 36.0\ndiameter = 8.25\n", `[[borehole]]
 top = 0.0
 bottom = 10.0
 diameter = 14.0
@@ -437,21 +404,7 @@ top = 0.0
 bottom = 10.0
 size = "8"
 schedule = "40"
-[[string]]
-bottom_cap = "plug"
-[[string.section]]
-kind = "riser"
-top = -2.5
-bottom = 25.0
-size = "2"
-schedule = "40"
-[[string.section]]
-kind = "screen"
-top = 25.0
-bottom = 35.0
-slot_number = 10
-` + fill("23.0", "36.0", "filter-pack") + fill("20.0", "23.0", "bentonite-chips") + fill("0.0", "20.0", "neat-cement") +
-		"[[fill]]\ntop = 0.0\nbottom = 5.0\nmaterial = \"neat-cement\"\nwithin = \"conductor\"\n"
+`, 1)
 	fs := findings(load(t, src), nil, "ANNULUS-GAP")
 	if len(fs) != 1 || !strings.Contains(fs[0].Message, "inside casing \"conductor\" at 5–10 ft") {
 		t.Errorf("gap inside the conductor: %+v", fs)
