@@ -257,7 +257,7 @@ func TestRenderFitSaysNotesSheetsRemain(t *testing.T) {
 		t.Fatalf("exit %d, want %d\nstdout:\n%s\nstderr:\n%s", code, exitOK, stdout.String(), stderr.String())
 	}
 	msg := stderr.String()
-	for _, want := range []string{"DS-1200: drawn on 1 sheet at 1 in = 300 ft", "148 description notes", "continue on 3 notes sheets", "a larger page (tabloid) holds them on 1"} {
+	for _, want := range []string{"DS-1200: drawn on 1 sheet at 1 in = 300 ft", "147 description notes", "continue on 3 notes sheets", "a larger page (tabloid) holds them on 1"} {
 		if !strings.Contains(msg, want) {
 			t.Errorf("stderr lacks %q:\n%s", want, msg)
 		}

@@ -4,9 +4,9 @@ import (
 	"bytes"
 	"fmt"
 	"image"
-	imagedraw "image/draw"
 	"image/png"
 	"math"
+	"sync"
 
 	"github.com/tdewolff/canvas"
 
@@ -36,6 +36,7 @@ func PNG(doc *draw.Document, i int, dpi float64) ([]byte, error) {
 	if err != nil {
 		return nil, fmt.Errorf("png page %d: %w", i+1, err)
 	}
+	defer giveRaster(img)
 	if b, ok := encodeOpaquePNG(img); ok {
 		return b, nil
 	}
@@ -55,8 +56,7 @@ func raster(p *draw.Page, dpi float64, masked bool) (*image.RGBA, error) {
 	if w < 1 || h < 1 || float64(w)*float64(h) > maxPixels {
 		return nil, fmt.Errorf("%d × %d pixels at %g dpi is outside 1 pixel to %d megapixels", w, h, dpi, maxPixels/1_000_000)
 	}
-	img := image.NewRGBA(image.Rect(0, 0, w, h))
-	imagedraw.Draw(img, img.Bounds(), image.White, image.Point{}, imagedraw.Src)
+	img := takeRaster(w, h)
 	r := newPNGRenderer(img, canvas.DPI(dpi))
 	fonts := takeFonts()
 	defer fonts.giveBack()
@@ -68,4 +68,30 @@ func raster(p *draw.Page, dpi float64, masked bool) (*image.RGBA, error) {
 	}
 	r.Close()
 	return img, nil
+}
+
+// rasters keeps the pixels of sheets already written, for the next sheet
+// to paint on: a sheet's raster is megabytes that would be zeroed by the
+// allocator, then painted white, then left to the collector.
+var rasters sync.Pool
+
+// takeRaster returns a white w × h raster.
+func takeRaster(w, h int) *image.RGBA {
+	n := 4 * w * h
+	var pix []byte
+	if b, ok := rasters.Get().(*[]byte); ok && cap(*b) >= n {
+		pix = (*b)[:n]
+	} else {
+		pix = make([]byte, n)
+	}
+	pix[0] = 0xff
+	for k := 1; k < n; k *= 2 {
+		copy(pix[k:], pix[:k]) // white, doubling the filled part each time
+	}
+	return &image.RGBA{Pix: pix, Stride: 4 * w, Rect: image.Rect(0, 0, w, h)}
+}
+
+// giveRaster hands img's pixels back once nothing refers to them.
+func giveRaster(img *image.RGBA) {
+	rasters.Put(&img.Pix)
 }

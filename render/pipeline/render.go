@@ -143,6 +143,9 @@ func (r *Run) Render(opt RenderOptions) (*RenderReport, error) {
 				for _, o := range outs {
 					rd.Outputs = append(rd.Outputs, filepath.Join(r.OutDir, filepath.FromSlash(o)))
 				}
+				// The sheets stand as drawn: --scale fit still says what
+				// went on notes sheets (a plan, nothing drawn).
+				rd.FitNotes = w.plannedFitNotes(LayoutOptions{Scale: opt.Scale, Date: r.SourceDate, Issue: w.Setting.Issue(opt.Issue)})
 				w.Well, w.Quantities = nil, nil
 				return rd, batch.Skipped, nil
 			}

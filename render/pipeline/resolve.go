@@ -342,28 +342,28 @@ func (r *Run) setting(p *project.Project) *Setting {
 
 // profile reads a rule profile once per run.
 func (r *Run) profile(path string) (*rules.Profile, error) {
-	if p, ok := r.profiles[path]; ok {
-		return p, nil
-	}
-	p, err := rules.LoadProfile(path)
-	if err != nil {
-		return nil, err
-	}
-	r.profiles[path] = p
-	return p, nil
+	return loadOnce(r.profiles, path, rules.LoadProfile)
 }
 
 // yieldsFile reads a yields file once per run.
 func (r *Run) yieldsFile(path string) (*quantity.Yields, error) {
-	if y, ok := r.yields[path]; ok {
-		return y, nil
+	return loadOnce(r.yields, path, quantity.LoadYields)
+}
+
+// loadOnce reads the file at path with load unless cache holds it: a file
+// read well is kept; one that fails is read (and reported) again wherever
+// it is named again.
+func loadOnce[T any](cache map[string]T, path string, load func(string) (T, error)) (T, error) {
+	if v, ok := cache[path]; ok {
+		return v, nil
 	}
-	y, err := quantity.LoadYields(path)
+	v, err := load(path)
 	if err != nil {
-		return nil, err
+		var none T
+		return none, err
 	}
-	r.yields[path] = y
-	return y, nil
+	cache[path] = v
+	return v, nil
 }
 
 // ProfileLabels names the profiles in force in this run, each once, in

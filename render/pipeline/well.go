@@ -172,9 +172,27 @@ func (f FitNotes) String() string {
 	case f.LargerNotes == 0:
 		s += fmt.Sprintf("; a larger page (%s) holds them on its drawing", f.Larger)
 	default:
-		s += fmt.Sprintf("; a larger page (%s) holds them on %d", f.Larger, f.LargerNotes)
+		s += fmt.Sprintf("; a larger page (%s) holds them on %d notes %s", f.Larger, f.LargerNotes, map[bool]string{true: "sheet", false: "sheets"}[f.LargerNotes == 1])
 	}
 	return s
+}
+
+// plannedFitNotes is the FitNotes of a well whose sheets are not drawn
+// again (the render cache found them unchanged): its sheets are planned,
+// not drawn, and only with --scale fit.
+func (w *Well) plannedFitNotes(opt LayoutOptions) *FitNotes {
+	if opt.Scale == nil || !opt.Scale.Fit || w.Well == nil {
+		return nil
+	}
+	in, err := w.SheetInputs()
+	if err != nil {
+		return nil
+	}
+	econ, err := sheet.Plan(w.Well, in, w.SheetOptions(opt))
+	if err != nil {
+		return nil
+	}
+	return w.fitNotes(opt, econ)
 }
 
 // largerPage is the page one size up in its series: Tabloid for Letter,

@@ -36,6 +36,9 @@ type noteBlock struct {
 	// same facts, so it is the one note a sheet may leave off rather
 	// than open a notes sheet for it alone (see notesWithout).
 	standard bool
+	// tail marks the rest of a note split at the foot of a column
+	// (splitNote): it opens with the note's mark and "continued".
+	tail bool
 }
 
 const (

@@ -56,7 +56,9 @@ func (l *layout) economy() Economy {
 	return e
 }
 
-// String says it in a sentence, naming the well.
+// String says it in a sentence: where notes sheets remain, how much
+// text they carry against what one sheet holds, so that a reader sees
+// whether any scale could have kept them on the drawing.
 func (e Economy) String() string {
 	s := fmt.Sprintf("drawn on %d %s at %v", e.Drawings, plural(e.Drawings, "sheet", "sheets"), e.Scale)
 	if e.NotesSheets == 0 {
@@ -66,6 +68,10 @@ func (e Economy) String() string {
 	if e.OtherNotes > 0 {
 		what += fmt.Sprintf(" and %d other %s", e.OtherNotes, plural(e.OtherNotes, "note", "notes"))
 	}
-	return fmt.Sprintf("%s; %s continue on %d notes %s: they need %.0f pt of %.1f-pt text in %.0f-pt columns, a notes sheet holds %.0f",
-		s, what, e.NotesSheets, plural(e.NotesSheets, "sheet", "sheets"), e.Need, sizeSmall, e.ColW, e.Holds)
+	why := "more than the drawing leaves free"
+	if e.Need > e.Holds {
+		why = "more than a whole sheet holds, so no scale keeps them on the drawing's sheet at a legible size"
+	}
+	return fmt.Sprintf("%s, but %s continue on %d notes %s: they need %.0f pt of %.1f-pt text in %.0f-pt columns, and a sheet of such columns holds %.0f pt: %s",
+		s, what, e.NotesSheets, plural(e.NotesSheets, "sheet", "sheets"), e.Need, sizeSmall, e.ColW, e.Holds, why)
 }

@@ -2,6 +2,7 @@ package sheet
 
 import (
 	"math"
+	"strings"
 	"testing"
 )
 
@@ -84,6 +85,56 @@ func TestSheetEconomy(t *testing.T) {
 	for tag := range economyKnown {
 		if !seen[tag] {
 			t.Errorf("%s: listed in economyKnown but keeps no notes sheet and no blank sheet now: take it off the list", tag)
+		}
+	}
+}
+
+// A note too tall for the foot of a column goes on in the next: its
+// first lines stay, the rest opens with its mark and "continued", and
+// no word is lost or doubled (common practice: a continued paragraph is
+// marked where it resumes).
+func TestSplitNoteKeepsEveryWord(t *testing.T) {
+	text := "Well-graded SAND with gravel, fine to coarse, subrounded, light brown, dense, wet; thin clay partings at the base, driller notes a loss of circulation near the bottom of the interval"
+	var b textBlock
+	b.addLead("D3.", text, sizeSmall, 100)
+	n := noteBlock{block: b, color: ink, role: "description-note"}
+	if len(b.lines) < 5 {
+		t.Fatalf("the note wraps into %d lines; want at least 5", len(b.lines))
+	}
+	cols, rest, _ := fillColumns([]noteBlock{n}, 4, 3*lineGap(sizeSmall)+1.5, 100, true)
+	if len(cols) < 2 || len(rest) != 0 {
+		t.Fatalf("%d columns, %d left; want the note over two columns or more", len(cols), len(rest))
+	}
+	var words []string
+	for i, col := range cols {
+		part := col[0]
+		if len(col) != 1 || len(part.block.lines) > 3 {
+			t.Errorf("column %d: %d blocks, %d lines; want one block of at most 3", i+1, len(col), len(part.block.lines))
+		}
+		if lead := part.block.lines[0].lead; i > 0 && (lead != "D3, continued:" || !part.tail) {
+			t.Errorf("column %d opens with %q", i+1, lead)
+		}
+		for _, ln := range part.block.lines {
+			words = append(words, strings.Fields(ln.s)...)
+		}
+	}
+	if got := strings.Join(words, " "); got != text {
+		t.Errorf("split note reads %q, want %q", got, text)
+	}
+	// Notes kept on the drawing: DS-1200 with --scale fit on Letter sets
+	// the first of its notes under the log, the findings split over the
+	// rooms under the lithology and the well columns.
+	for _, c := range galleryWells(t) {
+		if c.name != "DS-1200.toml" {
+			continue
+		}
+		fit := Fitted
+		l := newLayout(c.w, c.in, Options{Page: Letter, Scale: &fit}, Letter)
+		if err := l.plan(); err != nil {
+			t.Fatal(err)
+		}
+		if len(l.sheets) != 1 || len(l.freeBoxes) < 2 {
+			t.Errorf("DS-1200 fit: %d drawing sheets, %d boxes of notes on it; want 1 and 2", len(l.sheets), len(l.freeBoxes))
 		}
 	}
 }

@@ -1,6 +1,8 @@
 package sheet
 
 import (
+	"strings"
+
 	"github.com/tremie-dev/tremie/render/draw"
 )
 
@@ -15,8 +17,9 @@ import (
 const freeGap = 3.0
 
 // minNotesW is the narrowest room a column of notes is set in (common
-// practice: some 35 characters of 6.5-pt text a line).
-const minNotesW = 120.0
+// practice: some 28 characters of 6.5-pt text a line, a newspaper
+// column's measure).
+const minNotesW = 100.0
 
 // underDepth is the height under the deepest depth drawn that its marks
 // may still take: the total-depth label (a 6.5-pt line set 8 pt down),
@@ -104,13 +107,13 @@ func (l *layout) notesInTheBody() {
 	var here []sheetBox
 	var pages [][]sheetBox
 	var areas []draw.Rect
-	left := 0
+	left := 0.0
 	for _, way := range l.freeRooms() {
 		h, p, n := l.setInRooms(way, rows, notes)
 		if len(h) == 0 {
 			continue
 		}
-		if here == nil || len(p) < len(pages) || (len(p) == len(pages) && (n < left || (n == left && len(h) < len(here)))) {
+		if here == nil || len(p) < len(pages) || (len(p) == len(pages) && (n < left-1e-9 || (n < left+1e-9 && len(h) < len(here)))) {
 			here, pages, left, areas = h, p, n, way
 		}
 	}
@@ -168,12 +171,12 @@ func (l *layout) roomForNotes() {
 }
 
 // setInRooms sets rows and notes in the rooms, then on notes sheets: it
-// returns the rooms' boxes, the notes sheets' and how many notes did not
-// find room. The amounts rows stand whole, at the band's table width, in
+// returns the rooms' boxes, the notes sheets' and the height of the
+// notes that did not find room. The amounts rows stand whole, at the band's table width, in
 // the first room wide and tall enough, the notes beside them in what the
 // room has left and in the other rooms; rows that find no room open the
 // notes sheets, before the notes that find none.
-func (l *layout) setInRooms(rooms []draw.Rect, rows [][]string, notes []noteBlock) ([]sheetBox, [][]sheetBox, int) {
+func (l *layout) setInRooms(rooms []draw.Rect, rows [][]string, notes []noteBlock) ([]sheetBox, [][]sheetBox, float64) {
 	var here []sheetBox
 	rooms = append([]draw.Rect(nil), rooms...)
 	if len(rows) > 0 {
@@ -206,7 +209,7 @@ func (l *layout) setInRooms(rooms []draw.Rect, rows [][]string, notes []noteBloc
 		here = append(here, *box)
 	}
 	if len(here) == 0 {
-		return nil, nil, len(notes)
+		return nil, nil, notesHeight(notes)
 	}
 	var pages [][]sheetBox
 	if len(rows) > 0 || len(notes) > 0 {
@@ -225,7 +228,7 @@ func (l *layout) setInRooms(rooms []draw.Rect, rows [][]string, notes []noteBloc
 		}
 		break
 	}
-	return here, pages, len(notes)
+	return here, pages, notesHeight(notes)
 }
 
 // firstNotes is the index of the first of pages holding notes (not only
@@ -250,18 +253,20 @@ func within(r, o draw.Rect) bool {
 // columnsIn sets the first of notes in one box at the foot of area, in
 // as many columns as the area holds at the band's note width or wider
 // (fewer when that is lower), each note wrapped again to its column and
-// the columns balanced. It returns the box, nil when not one note fits,
-// and the notes left over, as they were.
+// the columns balanced; a note that does not fit the rest of the last
+// column is split there, and continues after. It returns the box, nil
+// when not one line fits, and the notes left over, as they were but for
+// the rest of a split note.
 func (l *layout) columnsIn(area draw.Rect, notes []noteBlock) (*sheetBox, []noteBlock) {
-	// A box opening with a heading of its own ("COMPONENTS ON SHEET 1,
-	// CONTINUED") needs no title above it.
+	// A box opening with a heading of its own ("COMPONENT NOTES") needs
+	// no title above it.
 	head := bandHeadH
-	if len(notes) > 0 && notes[0].heading {
-		head = 0
+	if len(notes) > 0 && (notes[0].heading || notes[0].tail) {
+		head = 0 // nor does the rest of a note split before it
 	}
 	most := max(1, int((area.W-2*bandPad+sheetColGap)/(l.bandPlan.noteW-2*bandPad+sheetColGap)+1e-9))
 	var best *sheetBox
-	placed := 0
+	var left []noteBlock
 	for k := most; k >= 1; k-- {
 		cw := (area.W - 2*bandPad - float64(k-1)*sheetColGap) / float64(k)
 		wrapped := make([]noteBlock, len(notes))
@@ -270,59 +275,127 @@ func (l *layout) columnsIn(area draw.Rect, notes []noteBlock) (*sheetBox, []note
 			wrapped[i].block = n.block.rewrapped(cw)
 		}
 		text := area.H - head - 2*bandPad
-		cols, n, h := balance(wrapped, k, text)
-		if n < len(notes) {
-			cols, n, h = balance(wrapped, k, text-continueLineH)
+		cols, rest, h := balance(wrapped, k, text, cw)
+		if len(rest) > 0 {
+			cols, rest, h = balance(wrapped, k, text-continueLineH, cw)
 			h += continueLineH
 		}
-		if n == 0 {
+		if len(cols) == 0 {
 			continue
 		}
 		b := &sheetBox{r: draw.Rect{X: area.X, W: area.W, H: head + bandPad + h + bandPad}, columns: cols, colW: cw, untitled: head == 0, cont: -1}
 		b.r.Y = area.Bottom() - b.r.H
-		if n > placed || (n == placed && best != nil && b.r.H < best.r.H-1e-9) {
-			best, placed = b, n
+		if best == nil || notesHeight(rest) < notesHeight(left)-1e-9 || (len(rest) == len(left) && b.r.H < best.r.H-1e-9) {
+			best, left = b, rest
 		}
 	}
-	return best, notes[placed:]
+	if best == nil {
+		return nil, notes
+	}
+	// What is left goes on as it was wrapped for the notes sheets; the
+	// rest of a split note is wrapped again to their width.
+	out := append([]noteBlock(nil), notes[len(notes)-len(left):]...)
+	if len(left) > 0 && left[0].tail {
+		out[0] = left[0]
+		out[0].block = left[0].block.rewrapped(l.bandPlan.noteW - 2*bandPad)
+	}
+	return best, out
 }
 
-// balance fills up to k columns with the first blocks, each column at
-// most height h, as low as they can be: it returns the columns, the
-// number of blocks set and the fullest column's height. A heading never
-// ends a column.
-func balance(blocks []noteBlock, k int, h float64) ([][]noteBlock, int, float64) {
-	fill := func(limit float64) ([][]noteBlock, int, float64) {
-		var cols [][]noteBlock
-		i, tallest := 0, 0.0
-		for c := 0; c < k && i < len(blocks); c++ {
-			j := i
-			for j < len(blocks) && notesHeight(blocks[i:j+1]) <= limit {
-				j++
-			}
-			for j > i && blocks[j-1].heading && j < len(blocks) {
-				j--
-			}
-			if j == i {
-				break
-			}
-			cols = append(cols, blocks[i:j])
-			tallest = max(tallest, notesHeight(blocks[i:j]))
-			i = j
-		}
-		return cols, i, tallest
+// balance fills up to k columns of width w with the first blocks, each
+// column at most height h, as low as they can be: it returns the
+// columns, the blocks left (the first of them the rest of a block split
+// at the foot of the last column) and the fullest column's height.
+func balance(blocks []noteBlock, k int, h, w float64) ([][]noteBlock, []noteBlock, float64) {
+	cols, rest, tallest := fillColumns(blocks, k, h, w, true)
+	if len(rest) > 0 {
+		return cols, rest, tallest
 	}
-	cols, n, tallest := fill(h)
-	if n < len(blocks) {
-		return cols, n, tallest
-	}
-	// All fit: lower the limit while they still do.
+	// All fit: lower the limit while they still do, whole.
 	for limit := notesHeight(blocks) / float64(k); limit < h; limit += 1 {
-		if c, m, t := fill(limit); m == len(blocks) {
-			return c, m, t
+		if c, r, t := fillColumns(blocks, k, limit, w, false); len(r) == 0 {
+			return c, r, t
 		}
 	}
-	return cols, n, tallest
+	return cols, rest, tallest
+}
+
+// fillColumns sets blocks down up to k columns, each at most limit
+// high. With split, a block that does not fit the rest of a column
+// continues at the head of the next, cut after a whole line when two of
+// its lines fit (splitNote). A heading never ends a column.
+func fillColumns(blocks []noteBlock, k int, limit, w float64, split bool) ([][]noteBlock, []noteBlock, float64) {
+	var cols [][]noteBlock
+	rest := blocks
+	tallest := 0.0
+	for c := 0; c < k && len(rest) > 0; c++ {
+		var col []noteBlock
+		for len(rest) > 0 {
+			if notesHeight(append(col, rest[0])) <= limit {
+				col, rest = append(col, rest[0]), rest[1:]
+				continue
+			}
+			if split {
+				if first, more, ok := splitNote(rest[0], limit-notesHeight(col), w); ok {
+					col = append(col, first)
+					rest = append([]noteBlock{more}, rest[1:]...)
+				}
+			}
+			break
+		}
+		for len(col) > 0 && col[len(col)-1].heading && len(rest) > 0 {
+			rest = append([]noteBlock{col[len(col)-1]}, rest...)
+			col = col[:len(col)-1]
+		}
+		if len(col) == 0 {
+			break
+		}
+		cols = append(cols, col)
+		tallest = max(tallest, notesHeight(col))
+	}
+	return cols, rest, tallest
+}
+
+// splitNote cuts a note after the lines that fit height h, when two of
+// them do and one is left: the rest, wrapped again to width w, opens
+// with its mark and "continued" in bold ("D12, continued:"), or with
+// "Continued:" for a note without a mark.
+func splitNote(n noteBlock, h, w float64) (first, rest noteBlock, ok bool) {
+	lines := n.block.lines
+	if n.heading || len(lines) < 3 {
+		return n, n, false
+	}
+	k, used := 0, 1.5 // notesHeight's gap under a block
+	for k < len(lines) && used+lineGap(lines[k].size) <= h {
+		used += lineGap(lines[k].size)
+		k++
+	}
+	if k < 2 || k >= len(lines) {
+		return n, n, false
+	}
+	var words []string
+	for _, ln := range lines[k:] {
+		if ln.lead != "" || ln.font != lines[k].font || ln.size != lines[k].size {
+			return n, n, false // not one paragraph
+		}
+		words = append(words, strings.TrimSpace(ln.s))
+	}
+	first, rest = n, n
+	first.block = textBlock{lines: lines[:k]}
+	for _, ln := range first.block.lines {
+		first.block.width = max(first.block.width, draw.TextWidth(ln.font, ln.size, ln.lead+ln.s))
+	}
+	lead := "Continued:"
+	switch m := strings.TrimSuffix(strings.TrimSpace(lines[0].lead), "."); {
+	case n.tail:
+		lead = lines[0].lead // a rest split again keeps its mark
+	case m != "":
+		lead = m + ", continued:"
+	}
+	rest.block = textBlock{}
+	rest.block.addLead(lead, strings.Join(words, " "), lines[k].size, w)
+	rest.tail = true
+	return first, rest, true
 }
 
 // freeItems draws the notes in the body's free rooms, each box on a

@@ -6,18 +6,10 @@ import (
 	"github.com/tremie-dev/tremie/schema"
 )
 
-var yieldsFile struct {
-	once sync.Once
-	spec *schema.TableSpec
-}
-
 // YieldsFile is the key table of a yields file: the units, then one table
-// per fill material of schema.Materials. The reader checks keys against
-// it.
-func YieldsFile() *schema.TableSpec {
-	yieldsFile.once.Do(func() { yieldsFile.spec = yieldsSpec() })
-	return yieldsFile.spec
-}
+// per fill material of schema.Materials, made once. The reader checks
+// keys against it.
+var YieldsFile = sync.OnceValue(yieldsSpec)
 
 // groutEntry is a grout's yield with its mix.
 var groutEntry = &schema.TableSpec{Doc: "The yield of one grout, overriding the built-in figure, with its mix.", Keys: append(append([]schema.KeySpec{}, yieldEntry.Keys...),

@@ -15,18 +15,10 @@ const (
 	profileVelocity = "ft/s with a ft profile, m/s with a m profile"
 )
 
-var profileFile struct {
-	once sync.Once
-	spec *schema.TableSpec
-}
-
-// ProfileFile is the key table of a rule profile, made from the rule
+// ProfileFile is the key table of a rule profile, made once from the rule
 // registry (each rule's parameters) and schema.Purposes, the same
 // definitions the profile reader checks keys against.
-func ProfileFile() *schema.TableSpec {
-	profileFile.once.Do(func() { profileFile.spec = profileSpec() })
-	return profileFile.spec
-}
+var ProfileFile = sync.OnceValue(profileSpec)
 
 func profileSpec() *schema.TableSpec {
 	header := &schema.TableSpec{Doc: "What the profile is and the units its numbers are in.", Keys: []schema.KeySpec{
