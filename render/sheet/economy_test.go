@@ -1,9 +1,12 @@
 package sheet
 
 import (
+	"fmt"
 	"math"
 	"strings"
 	"testing"
+
+	"github.com/tremie-dev/tremie/templates"
 )
 
 // economyKnown are the setups of the sweep below that still keep a notes
@@ -123,18 +126,51 @@ func TestSplitNoteKeepsEveryWord(t *testing.T) {
 	}
 	// Notes kept on the drawing: DS-1200 with --scale fit on Letter sets
 	// the first of its notes under the log, the findings split over the
-	// rooms under the lithology and the well columns.
+	// rooms under the lithology and the well columns; on Tabloid too;
+	// every text stays in its region and box.
 	for _, c := range galleryWells(t) {
 		if c.name != "DS-1200.toml" {
 			continue
 		}
 		fit := Fitted
-		l := newLayout(c.w, c.in, Options{Page: Letter, Scale: &fit}, Letter)
+		for _, pg := range []Page{Letter, Tabloid} {
+			opt := Options{Page: pg, Scale: &fit}
+			l := newLayout(c.w, c.in, opt, pg)
+			if err := l.plan(); err != nil {
+				t.Fatal(err)
+			}
+			if len(l.sheets) != 1 || len(l.freeBoxes) < 2 {
+				t.Errorf("DS-1200 fit on %s: %d drawing sheets, %d boxes of notes on it; want 1 and 2", pg.Name, len(l.sheets), len(l.freeBoxes))
+			}
+			checkRegions(t, "DS-1200 fit on "+pg.Name, l, layoutOf(t, c.w, c.in, opt))
+		}
+	}
+}
+
+// A note taller than a whole column of a notes sheet goes on in the
+// next column rather than past the sheet's foot (common practice: a
+// drafted sheet writes nothing off its frame).
+func TestTallNoteSplitsOnNotesSheet(t *testing.T) {
+	w, in := crowdedWell()
+	w.Notes = append([]string{strings.Repeat("A remark from the field that runs on and on, as a driller's daily log pasted whole may. ", 60)}, w.Notes...)
+	for _, land := range []bool{false, true} {
+		tpl, err := templates.Load("letter", land)
+		if err != nil {
+			t.Fatal(err)
+		}
+		opt := Options{Page: FromTemplate(tpl)}
+		l := newLayout(w, in, opt, opt.Page)
 		if err := l.plan(); err != nil {
 			t.Fatal(err)
 		}
-		if len(l.sheets) != 1 || len(l.freeBoxes) < 2 {
-			t.Errorf("DS-1200 fit: %d drawing sheets, %d boxes of notes on it; want 1 and 2", len(l.sheets), len(l.freeBoxes))
+		checkRegions(t, fmt.Sprintf("a long note, landscape=%v", land), l, layoutOf(t, w, in, opt))
+		a := l.notesArea()
+		for p, boxes := range l.notesPages {
+			for _, b := range boxes {
+				if !within(b.r, a) {
+					t.Errorf("landscape=%v notes sheet %d: box %+v past the notes area %+v", land, p+1, b.r, a)
+				}
+			}
 		}
 	}
 }
