@@ -87,9 +87,12 @@ func oneLine(label string, width float64) (head, rest string) {
 	// run name first, then comma-separated descriptors (ASTM D2488's
 	// order), so "SANDSTONE, coarse (D9)" with "grained, ..." in the note
 	// would split a descriptor in two where "SANDSTONE (D9)" does not.
+	// A clause ending on a lead word ("cobbles to 4 in,") would read as
+	// unfinished once its comma goes: the cut takes the clause before.
 	if n < len(words) {
 		for j := n; j >= 1; j-- {
-			if strings.HasSuffix(words[j-1], ",") || strings.HasSuffix(words[j-1], ";") {
+			w := words[j-1]
+			if (strings.HasSuffix(w, ",") || strings.HasSuffix(w, ";")) && !leadWords[strings.ToLower(strings.TrimRight(w, ",;"))] {
 				n = j
 				break
 			}

@@ -62,6 +62,9 @@ func TestOneLineCutsAtAClause(t *testing.T) {
 			"SANDSTONE", "coarse grained, weakly cemented, tan; cuttings with shell fragments"},
 		{"SP-SM: SAND with silt, fine to medium, grey, wet, dense; occasional thin interbeds", "SP-SM: SAND with silt, fine to",
 			"SP-SM: SAND with silt", "fine to medium, grey, wet, dense; occasional thin interbeds"},
+		// "in" here is inches, but a line ending "to 4 in (D21)" reads as unfinished.
+		{"Poorly graded GRAVEL, wet, dense, cobbles to 4 in, subrounded", "Poorly graded GRAVEL, wet, dense, cobbles to 4 in,",
+			"Poorly graded GRAVEL, wet, dense", "cobbles to 4 in, subrounded"},
 		// No comma within the line: the cut stays at a word.
 		{"Weathered granitic saprolite keeping relict structure grading downward", "Weathered granitic saprolite",
 			"Weathered granitic saprolite", "keeping relict structure grading downward"},
