@@ -165,7 +165,7 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 	p, s := quantity.VolumeUnits(u)
 	fmt.Fprintf(w, "%s  %s\n", r.Well.ID, wq.File)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "  #\tmaterial\tinterval %s\tcalculated %s\t%s\tyield %s per bag\tbags needed\tbags placed\tplaced %s\tratio\n", u.Depth, p, s, p, p)
+	fmt.Fprintf(tw, "  #\tmaterial\tinterval %s\tcalculated %s\t%s\tyield %s per bag\tbags needed\tbags placed\tplaced %s\tratio\n", u.Depth, p.Symbol(), s.Symbol(), p.Symbol(), p.Symbol())
 	for _, row := range r.AllRows() {
 		f := row.Fill
 		iv := schema.TrimFloat(f.Top.In(u.Depth), 2) + "–" + schema.TrimFloat(f.Bottom.In(u.Depth), 2)

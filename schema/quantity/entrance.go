@@ -26,13 +26,13 @@ func EntranceLimit(u schema.Units) float64 {
 }
 
 // OpenAreaIn is a screen open area (m2) in the unit a well's reports give
-// it in, with the unit's name: ft2 for a file in feet, m2 for one in
+// it in, with the unit's name: ft² for a file in feet, m² for one in
 // metres.
 func OpenAreaIn(a float64, u schema.Units) (float64, string) {
 	if u.Imperial() {
-		return a / (schema.MetresPerFoot * schema.MetresPerFoot), "ft2"
+		return a / (schema.MetresPerFoot * schema.MetresPerFoot), "ft²"
 	}
-	return a, "m2"
+	return a, "m²"
 }
 
 // VelocityIn is an entrance velocity (m/s) in the unit a well's reports

@@ -19,7 +19,7 @@ func TestScreenFlowUnits(t *testing.T) {
 	}
 	a, unit := OpenAreaIn(1, ft)
 	near(t, "1 m2 in ft2", a, 10.76391, 1e-6)
-	if unit != "ft2" {
+	if unit != "ft²" {
 		t.Errorf("unit %q", unit)
 	}
 }
