@@ -165,7 +165,7 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 	p, s := quantity.VolumeUnits(u)
 	fmt.Fprintf(w, "%s  %s\n", r.Well.ID, wq.File)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "  #\tmaterial\tinterval %s\tcalculated %s\t%s\tyield %s per bag\tbags needed\tbags placed\tplaced %s\tratio\n", u.Depth, p, s, p, p)
+	fmt.Fprintf(tw, "  #\tmaterial\tinterval %s\tcalculated %s\t%s\tyield %s per bag\tbags needed\tbags placed\tplaced %s\tratio\n", u.Depth, p.Symbol(), s.Symbol(), p.Symbol(), p.Symbol())
 	for _, row := range r.AllRows() {
 		f := row.Fill
 		iv := schema.TrimFloat(f.Top.In(u.Depth), 2) + "–" + schema.TrimFloat(f.Bottom.In(u.Depth), 2)
@@ -289,10 +289,10 @@ func screenFlowLine(wl *schema.Well) string {
 	u := wl.Units
 	var parts []string
 	if f, ok := quantity.Entrance(wl); ok {
-		area, aunit := f.OpenArea/(schema.MetresPerFoot*schema.MetresPerFoot), "ft2"
+		area, aunit := f.OpenArea/(schema.MetresPerFoot*schema.MetresPerFoot), "ft²"
 		vel, vunit := f.Velocity/schema.MetresPerFoot, "ft/s"
 		if !u.Imperial() {
-			area, aunit, vel, vunit = f.OpenArea, "m2", f.Velocity*100, "cm/s"
+			area, aunit, vel, vunit = f.OpenArea, "m²", f.Velocity*100, "cm/s"
 		}
 		capacity, qunit := schema.FlowIn(f.Capacity, u)
 		rate, _ := schema.FlowIn(f.Rate, u)

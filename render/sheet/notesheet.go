@@ -156,6 +156,13 @@ func (l *layout) flowNotesInto(first []draw.Rect, rest draw.Rect, rows [][]strin
 			nextCol()
 			continue
 		}
+		if k == 0 {
+			// A note taller than a whole column: its lines that fit
+			// stand here, the rest opens the next column.
+			if first, more, ok := splitNote(notes[0], free-head-continueLineH, w-2*bandPad); ok {
+				notes = append([]noteBlock{first, more}, notes[1:]...)
+			}
+		}
 		k = max(k, 1)
 		add(sheetBox{r: draw.Rect{X: x(), Y: y, W: w, H: head + notesHeight(notes[:k]) + continueLineH}, notes: notes[:k], cont: -1})
 		notes = notes[k:]

@@ -42,8 +42,10 @@ func (l *layout) textRegion(role string) (draw.Rect, bool) {
 
 // Every text of every sheet lies inside its region (its column of the
 // body, the title block, the band, the caution line), on every page size
-// and orientation, for the demo wells, the gallery (a 1,200-ft well with
-// 150 intervals among them) and a crowded well; a column head lies within
+// and orientation, as a draft and as an issued set, for the demo wells,
+// the gallery (a 1,200-ft well with 150 intervals among them) and a
+// crowded well; a note kept on a drawing lies in its box, the box in its
+// room or strip; a column head lies within
 // one column (common practice: a drafted sheet writes nothing across its
 // rules or off its frame).
 func TestEveryTextInsideItsRegion(t *testing.T) {
@@ -52,49 +54,54 @@ func TestEveryTextInsideItsRegion(t *testing.T) {
 	wells = append(wells, corpusWell{"crowded", cw, cin})
 	wells = append(wells, absurdWells(t)...)
 	eachSetup(t, wells, true, func(s setup) {
-		l, tag := s.l, s.tag
-		doc := layoutOf(t, s.well.w, s.well.in, s.opt)
-		bad := 0
-		for i, p := range doc.Pages {
-			notesSheet := i >= len(l.sheets)
-			var placed []draw.Text
-			p.Walk(func(it draw.Item) {
-				tx, ok := it.(draw.Text)
-				if !ok || bad > 5 {
-					return
-				}
-				placed = append(placed, tx)
-				r := textRect(tx)
-				region, known := l.textRegion(tx.Role)
-				if notesSheet && known && region != l.header && region != l.caution {
-					region = draw.Rect{X: l.content.X, Y: l.header.Bottom(), W: l.content.W, H: l.caution.Y - l.header.Bottom()}
-				}
-				if isBandRole(tx.Role) {
-					if b, ok := l.keptBox(i, r); ok {
-						region = b // notes kept on the drawing (fitstrip.go, freespace.go), inside their box
-					}
-				}
-				if !within(r, region) {
-					bad++
-					t.Errorf("%s sheet %d: %s %q at %+v outside %+v", tag, i+1, tx.Role, tx.S, r, region)
-				}
-				if tx.Role == "column-head" && !notesSheet {
-					in := false
-					for _, c := range []xRange{l.cols.depth, l.cols.elev, l.cols.lith, l.cols.uscs, l.cols.desc, l.cols.feat, l.cols.well, l.cols.call} {
-						in = in || (r.X >= c.X-0.01 && r.Right() <= c.Right()+0.01)
-					}
-					if !in {
-						bad++
-						t.Errorf("%s sheet %d: column head %q at %+v crosses a column rule", tag, i+1, tx.S, r)
-					}
-				}
-			})
-			for _, o := range overlappingContinueLines(placed) {
-				bad++
-				t.Errorf("%s sheet %d: %s", tag, i+1, o)
-			}
-		}
+		checkRegions(t, s.tag, s.l, layoutOf(t, s.well.w, s.well.in, s.opt))
 	})
+}
+
+// checkRegions reports every text of doc, planned as l, outside its
+// region, and every continue line touching another text.
+func checkRegions(t *testing.T, tag string, l *layout, doc *draw.Document) {
+	t.Helper()
+	bad := 0
+	for i, p := range doc.Pages {
+		notesSheet := i >= len(l.sheets)
+		var placed []draw.Text
+		p.Walk(func(it draw.Item) {
+			tx, ok := it.(draw.Text)
+			if !ok || bad > 5 {
+				return
+			}
+			placed = append(placed, tx)
+			r := textRect(tx)
+			region, known := l.textRegion(tx.Role)
+			if notesSheet && known && region != l.header && region != l.caution {
+				region = draw.Rect{X: l.content.X, Y: l.header.Bottom(), W: l.content.W, H: l.caution.Y - l.header.Bottom()}
+			}
+			if isBandRole(tx.Role) {
+				if b, ok := l.keptBox(i, r); ok {
+					region = b // notes kept on the drawing (fitstrip.go, freespace.go), inside their box
+				}
+			}
+			if !within(r, region) {
+				bad++
+				t.Errorf("%s sheet %d: %s %q at %+v outside %+v", tag, i+1, tx.Role, tx.S, r, region)
+			}
+			if tx.Role == "column-head" && !notesSheet {
+				in := false
+				for _, c := range []xRange{l.cols.depth, l.cols.elev, l.cols.lith, l.cols.uscs, l.cols.desc, l.cols.feat, l.cols.well, l.cols.call} {
+					in = in || (r.X >= c.X-0.01 && r.Right() <= c.Right()+0.01)
+				}
+				if !in {
+					bad++
+					t.Errorf("%s sheet %d: column head %q at %+v crosses a column rule", tag, i+1, tx.S, r)
+				}
+			}
+		})
+		for _, o := range overlappingContinueLines(placed) {
+			bad++
+			t.Errorf("%s sheet %d: %s", tag, i+1, o)
+		}
+	}
 }
 
 // keptOnDrawing reports whether r lies where drawing sheet i keeps
