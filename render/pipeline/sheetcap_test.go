@@ -14,7 +14,7 @@ import (
 // TestSheetsPerWellBounded: a well within every count and text limit
 // whose notes would still fill more than MaxNotesSheets (30 notes of
 // 3,900 bytes on a 36-ft well), and the 1,200-ft gallery well at
-// 1in=5ft (49 log sheets), are refused at layout, quickly and naming the
+// 1in=5ft (about 50 log sheets), are refused at layout, quickly and naming the
 // file, instead of drawn on dozens of sheets; the gallery well at
 // 1in=10ft (27 sheets) is drawn.
 func TestSheetsPerWellBounded(t *testing.T) {
@@ -44,7 +44,7 @@ func TestSheetsPerWellBounded(t *testing.T) {
 		want  string // "" when drawn
 	}{
 		{wordy, nil, "notes sheets, more than the 10 one well may have"},
-		{"../../testdata/gallery/DS-1200.toml", scale("1in=5ft"), "needs 49 sheets (more than 30)"},
+		{"../../testdata/gallery/DS-1200.toml", scale("1in=5ft"), "sheets (more than 30); choose a smaller scale"},
 		{"../../testdata/gallery/DS-1200.toml", scale("1in=10ft"), ""},
 	} {
 		run, err := Resolve([]string{c.file}, Options{Quiet: true})
