@@ -289,21 +289,16 @@ func screenFlowLine(wl *schema.Well) string {
 	u := wl.Units
 	var parts []string
 	if f, ok := quantity.Entrance(wl); ok {
-		area, aunit := f.OpenArea/(schema.MetresPerFoot*schema.MetresPerFoot), "ft²"
-		vel, vunit := f.Velocity/schema.MetresPerFoot, "ft/s"
-		if !u.Imperial() {
-			area, aunit, vel, vunit = f.OpenArea, "m²", f.Velocity*100, "cm/s"
-		}
+		area, aunit := quantity.OpenAreaIn(f.OpenArea, u)
+		vel, vunit := quantity.VelocityIn(f.Velocity, u)
 		capacity, qunit := schema.FlowIn(f.Capacity, u)
 		rate, _ := schema.FlowIn(f.Rate, u)
 		which := "tested"
 		if f.Design {
 			which = "design"
 		}
-		limit := "0.1 ft/s"
-		if !u.Imperial() {
-			limit = "3 cm/s"
-		}
+		lim, _ := quantity.VelocityIn(quantity.EntranceLimit(u), u)
+		limit := schema.TrimFloat(lim, 2) + " " + vunit
 		parts = append(parts, fmt.Sprintf("open area %s %s (half of it effective), transmitting %s %s at %s (Driscoll 1986); entrance velocity %s %s at the %s rate of %s %s",
 			quantity.Number(area), aunit, quantity.Number(capacity), qunit, limit, quantity.Number(vel), vunit, which, schema.TrimFloat(rate, 1), qunit))
 	}

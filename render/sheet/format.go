@@ -98,7 +98,7 @@ func (l *layout) slot(sec schema.Section) string {
 
 // materialName is a fill class in words: "Filter pack", "Bentonite chips".
 func materialName(m schema.Material) string {
-	s := strings.ReplaceAll(string(m), "-", " ")
+	s := m.Words()
 	if s == "" {
 		return "Fill"
 	}
