@@ -63,7 +63,7 @@ func TestSheetsPerWellBounded(t *testing.T) {
 			t.Errorf("%s: %v", c.file, err)
 		case c.want != "" && (err == nil || !strings.HasPrefix(err.Error(), c.file+": ") || !strings.Contains(err.Error(), c.want)):
 			t.Errorf("%s: %v, want %q", c.file, err, c.want)
-		case took > 5*time.Second:
+		case took > 30*time.Second: // about 1 s alone; minutes before the limits; room for a loaded machine
 			t.Errorf("%s: %v to lay out", c.file, took)
 		}
 	}
