@@ -135,6 +135,18 @@ func VolumeFrom(v float64, u VolumeUnit) Volume {
 	}
 }
 
+// Symbol is the unit as a reader sees it: "ft³" and "m³" with their
+// superscript (the well file and the machine outputs write "ft3", "m3").
+func (u VolumeUnit) Symbol() string {
+	switch u {
+	case CubicFeet:
+		return "ft³"
+	case CubicMetres:
+		return "m³"
+	}
+	return string(u)
+}
+
 // In converts a volume to u.
 func (v Volume) In(u VolumeUnit) float64 {
 	switch u {

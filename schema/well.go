@@ -6,6 +6,7 @@
 package schema
 
 import (
+	"strings"
 	"sync"
 	"time"
 )
@@ -423,6 +424,10 @@ func (m Material) Group() Group {
 		return BackfillGroup
 	}
 }
+
+// Words names the material as a reader writes it, without the file's
+// hyphens: "filter pack", "cement bentonite".
+func (m Material) Words() string { return strings.ReplaceAll(string(m), "-", " ") }
 
 // IsSeal reports whether the material seals the annulus (bentonite, grout
 // or concrete), as opposed to a pack or a backfill.

@@ -165,7 +165,7 @@ func writeWellText(w io.Writer, wq wellQuantities) {
 	p, s := quantity.VolumeUnits(u)
 	fmt.Fprintf(w, "%s  %s\n", r.Well.ID, wq.File)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
-	fmt.Fprintf(tw, "  #\tmaterial\tinterval %s\tcalculated %s\t%s\tyield %s per bag\tbags needed\tbags placed\tplaced %s\tratio\n", u.Depth, p, s, p, p)
+	fmt.Fprintf(tw, "  #\tmaterial\tinterval %s\tcalculated %s\t%s\tyield %s per bag\tbags needed\tbags placed\tplaced %s\tratio\n", u.Depth, p.Symbol(), s.Symbol(), p.Symbol(), p.Symbol())
 	for _, row := range r.AllRows() {
 		f := row.Fill
 		iv := schema.TrimFloat(f.Top.In(u.Depth), 2) + "–" + schema.TrimFloat(f.Bottom.In(u.Depth), 2)
@@ -289,21 +289,16 @@ func screenFlowLine(wl *schema.Well) string {
 	u := wl.Units
 	var parts []string
 	if f, ok := quantity.Entrance(wl); ok {
-		area, aunit := f.OpenArea/(schema.MetresPerFoot*schema.MetresPerFoot), "ft2"
-		vel, vunit := f.Velocity/schema.MetresPerFoot, "ft/s"
-		if !u.Imperial() {
-			area, aunit, vel, vunit = f.OpenArea, "m2", f.Velocity*100, "cm/s"
-		}
+		area, aunit := quantity.OpenAreaIn(f.OpenArea, u)
+		vel, vunit := quantity.VelocityIn(f.Velocity, u)
 		capacity, qunit := schema.FlowIn(f.Capacity, u)
 		rate, _ := schema.FlowIn(f.Rate, u)
 		which := "tested"
 		if f.Design {
 			which = "design"
 		}
-		limit := "0.1 ft/s"
-		if !u.Imperial() {
-			limit = "3 cm/s"
-		}
+		lim, _ := quantity.VelocityIn(quantity.EntranceLimit(u), u)
+		limit := schema.TrimFloat(lim, 2) + " " + vunit
 		parts = append(parts, fmt.Sprintf("open area %s %s (half of it effective), transmitting %s %s at %s (Driscoll 1986); entrance velocity %s %s at the %s rate of %s %s",
 			quantity.Number(area), aunit, quantity.Number(capacity), qunit, limit, quantity.Number(vel), vunit, which, schema.TrimFloat(rate, 1), qunit))
 	}

@@ -401,13 +401,13 @@ func TestQuantitiesPurgeAndMix(t *testing.T) {
 			t.Errorf("no well volume for %s", id)
 		}
 	}
-	for _, s := range []string{"1.651 gal) of water in the well; purge 3 well volumes = 0.662 ft3 (4.952 gal)",
+	for _, s := range []string{"1.651 gal) of water in the well; purge 3 well volumes = 0.662 ft³ (4.952 gal)",
 		"5.200 gal water per 94-lb bag, expected 15.5", "measured 15.3 lb/gal", "(161.87 gal) of water in the well",
 		// PW-1: 94 ft of 10.75-in OD screen, 28 % open: pi x 10.75/12 x 94 x
 		// 0.28 = 74.07 ft2; half effective x 0.1 ft/s = 3.704 ft3/s = 1662.3
 		// gal/min (Driscoll 1986); 350 gal/min / 448.83 / 37.04 = 0.021
 		// ft/s; 400 gal/min over 192 - 161.5 = 30.5 ft: 13.11 gal/min/ft
-		"open area 74.07 ft2 (half of it effective), transmitting 1662.3 gal/min", "entrance velocity 0.021 ft/s at the design rate of 350",
+		"open area 74.07 ft² (half of it effective), transmitting 1662.3 gal/min", "entrance velocity 0.021 ft/s at the design rate of 350",
 		"specific capacity 13.11 gal/min per ft"} {
 		if !strings.Contains(out, s) {
 			t.Errorf("output lacks %q", s)
@@ -496,7 +496,7 @@ func TestQuantitiesDemoOrderHasPad(t *testing.T) {
 	}
 	order := out[strings.Index(out, "Order for the planned wells MW-4"):]
 	order = order[:strings.Index(order, "\n\n")]
-	if !regexp.MustCompile(`concrete\s+0\.600 ft3 per 80-lb bag \(from memory\)\s+2\s+3\.080 ft3 \(23\.04 gal\)\s+6\s+7`).MatchString(order) {
+	if !regexp.MustCompile(`concrete\s+0\.600 ft³ per 80-lb bag \(from memory\)\s+2\s+3\.080 ft³ \(23\.04 gal\)\s+6\s+7`).MatchString(order) {
 		t.Errorf("the order's concrete line lacks MW-4's pad:\n%s", order)
 	}
 }

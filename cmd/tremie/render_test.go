@@ -245,9 +245,9 @@ func TestRenderIssueRefusesUnwaivedErrors(t *testing.T) {
 }
 
 // render --scale fit of the 1,200-ft gallery well draws one sheet and
-// says on stderr, without failing (exit 0: the well is clean but for a
-// waiver), that its description notes still take notes sheets, with the
-// figures and what Tabloid would do.
+// says on stderr, without failing (exit 0: the well is clean), that its
+// description notes still take notes sheets, with the figures and what
+// Tabloid would do.
 func TestRenderFitSaysNotesSheetsRemain(t *testing.T) {
 	t.Setenv("SOURCE_DATE_EPOCH", "1780000000")
 	outDir := t.TempDir()
@@ -257,7 +257,7 @@ func TestRenderFitSaysNotesSheetsRemain(t *testing.T) {
 		t.Fatalf("exit %d, want %d\nstdout:\n%s\nstderr:\n%s", code, exitOK, stdout.String(), stderr.String())
 	}
 	msg := stderr.String()
-	for _, want := range []string{"DS-1200: drawn on 1 sheet at 1 in = 300 ft", "150 description notes", "continue on 3 notes sheets", "a larger page (tabloid) holds them on 1"} {
+	for _, want := range []string{"DS-1200: drawn on 1 sheet at 1 in = 300 ft", "147 description notes", "continue on 3 notes sheets", "a larger page (tabloid) holds them on 1"} {
 		if !strings.Contains(msg, want) {
 			t.Errorf("stderr lacks %q:\n%s", want, msg)
 		}

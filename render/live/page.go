@@ -21,7 +21,7 @@ func quantityRows(r *quantity.Report) []qrow {
 	u := r.Well.Units
 	var out []qrow
 	for _, row := range r.AllRows() {
-		q := qrow{Label: row.Label(), Material: string(row.Fill.Material), Interval: u.FormatInterval(row.Fill.Top, row.Fill.Bottom)}
+		q := qrow{Label: row.Label(), Material: row.Fill.Material.Words(), Interval: u.FormatInterval(row.Fill.Top, row.Fill.Bottom)}
 		if row.IsPad() {
 			q.Material = "concrete pad"
 		}

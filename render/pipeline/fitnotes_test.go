@@ -11,12 +11,12 @@ import (
 )
 
 // The 1,200-ft gallery well drawn with --scale fit on Letter: one
-// drawing sheet, and its 150 description notes on notes sheets, which
-// the run reports as data (the command prints it, exit 0) with the
-// figures and what Tabloid would do. On Tabloid the drawing's free room
-// keeps 21 of them and one notes sheet is left (docs/gallery.md states
-// the same counts). On Letter the notes need more than a whole sheet
-// holds (4,136 pt against 1,756 pt), and the message says that no scale
+// drawing sheet, and 147 of its 150 description notes on notes sheets
+// (the drawing's free room keeps 3), which the run reports as data (the
+// command prints it, exit 0) with the figures and what Tabloid would do.
+// On Tabloid the drawing's free room keeps 26 of them and one notes sheet
+// is left (docs/gallery.md states the same counts). On Letter the notes
+// need more than a whole sheet holds (3,986 pt against 1,756 pt), and the message says that no scale
 // would keep them on the drawing.
 func TestFitReportsNotesSheets(t *testing.T) {
 	fit := sheet.Fitted
@@ -25,7 +25,7 @@ func TestFitReportsNotesSheets(t *testing.T) {
 		notes, larger int
 		largerName    string
 		described     int // description notes on the notes sheets
-	}{{"letter", 3, 1, "tabloid", 150}, {"tabloid", 1, 0, "", 129}} {
+	}{{"letter", 3, 1, "tabloid", 147}, {"tabloid", 1, 0, "", 124}} {
 		run, err := Resolve([]string{"../../testdata/gallery/DS-1200.toml"}, Options{Quiet: true, Page: c.page, PageSet: true})
 		if err != nil {
 			t.Fatal(err)

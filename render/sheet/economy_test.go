@@ -30,6 +30,8 @@ func init() {
 			}
 		}
 	}
+	// Issued on Tabloid landscape its notes fit on the drawings (4 at 1 in = 50 ft).
+	delete(economyKnown, "DS-1200.toml tabloid landscape=true issued")
 }
 
 // Sheet economy over the demo and the gallery on Letter, Tabloid, A4 and
@@ -72,8 +74,10 @@ func TestSheetEconomy(t *testing.T) {
 				t.Errorf("%s: %d sheets at %v; want two at 1 in = 80 ft", tag, len(l.sheets), l.scale)
 			}
 		case "TW-7.toml letter landscape=false":
-			if len(l.sheets) != 2 || l.scale != Imperial(80) || math.Abs(float64(l.sheets[0].Bottom-ft(300))) > 1e-9 {
-				t.Errorf("%s: %d sheets at %v, %v; want two at 1 in = 80 ft sharing the depth at 300 ft", tag, len(l.sheets), l.scale, l.sheets)
+			// 1 in = 60 ft since the band lost a false finding's waiver
+			// (1 in = 80 ft before): still two sheets, parted at 300 ft
+			if len(l.sheets) != 2 || l.scale != Imperial(60) || math.Abs(float64(l.sheets[0].Bottom-ft(300))) > 1e-9 {
+				t.Errorf("%s: %d sheets at %v, %v; want two at 1 in = 60 ft sharing the depth at 300 ft", tag, len(l.sheets), l.scale, l.sheets)
 			}
 		case "TW-7.toml letter landscape=true":
 			if l.sheetCount() != 2 || len(l.freeBoxes) == 0 {

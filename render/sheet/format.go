@@ -22,17 +22,7 @@ func (l *layout) diameter(d schema.Diameter) string { return l.u.FormatDiameter(
 // volume writes a volume in the well's primary report unit, as printed.
 func (l *layout) volume(v schema.Volume) string {
 	p, _ := quantity.VolumeUnits(l.u)
-	return quantity.Number(v.In(p)) + " " + unitText(p)
-}
-
-func unitText(u schema.VolumeUnit) string {
-	switch u {
-	case schema.CubicFeet:
-		return "ft³"
-	case schema.CubicMetres:
-		return "m³"
-	}
-	return string(u)
+	return quantity.Number(v.In(p)) + " " + p.Symbol()
 }
 
 // pipeSpec writes a pipe as a drafter labels it: "2-in Sch 40 PVC,
@@ -108,7 +98,7 @@ func (l *layout) slot(sec schema.Section) string {
 
 // materialName is a fill class in words: "Filter pack", "Bentonite chips".
 func materialName(m schema.Material) string {
-	s := strings.ReplaceAll(string(m), "-", " ")
+	s := m.Words()
 	if s == "" {
 		return "Fill"
 	}

@@ -13,6 +13,7 @@ import (
 
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/schema"
+	"github.com/tremie-dev/tremie/schema/quantity"
 )
 
 // field is one title-block cell.
@@ -71,11 +72,8 @@ func (l *layout) titleFields() titleBlock {
 	if w.Drilling.Licence != "" {
 		contractor = joinNonEmpty(", ", contractor, "licence "+w.Drilling.Licence)
 	}
-	volUnit := "ft³"
-	if !l.u.Imperial() {
-		volUnit = "L"
-	}
-	units := fmt.Sprintf("depth %s below ground; diameter %s; volume %s", l.u.Depth, l.u.Diameter, volUnit)
+	volUnit, _ := quantity.VolumeUnits(l.u)
+	units := fmt.Sprintf("depth %s below ground; diameter %s; volume %s", l.u.Depth, l.u.Diameter, volUnit.Symbol())
 	rows := [][]field{
 		{{label: "Project", value: dash(w.Project)}, {label: "Client", value: dash(w.Client)}, {label: "Site", value: dash(w.Site)}, {label: "Purpose", value: dash(purpose)}, {label: "Permit", value: dash(w.Permit)}},
 		{{label: "Location", value: dash(w.Location.Description)}, {label: "Coordinates", value: l.coordinates()}, {label: "Ground elevation", value: ground}, {label: "Measuring point elevation", value: elev(w.Elevation.MeasuringPoint)}, {label: "Total depth", value: l.depth(w.TotalDepth)}},

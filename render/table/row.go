@@ -355,7 +355,7 @@ func fills(w *schema.Well, u schema.DepthUnit) (pack, seal, grout string) {
 		for _, f := range fs {
 			s := interval(f.Top, f.Bottom, u)
 			if mixed {
-				s += " " + string(f.Material)
+				s += " " + f.Material.Words()
 			}
 			if f.Within != "" {
 				s += " (in " + f.Within + ")"

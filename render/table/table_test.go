@@ -518,3 +518,18 @@ func TestInertField(t *testing.T) {
 		}
 	}
 }
+
+// TestFillColumnsInWords: a column mixing materials names each as the
+// sheet does, in words ("cement bentonite"), not by the well file's
+// hyphenated value: the demo's MW-1 has concrete over cement-bentonite
+// grout, and fine sand over filter pack (its well file).
+func TestFillColumnsInWords(t *testing.T) {
+	w, err := schema.Load("MW-1.toml", mustRead(t, "wells/MW-1.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := Build([]Entry{{Well: w}}, "").Rows[0]
+	if r.Grout != "0–1.5 concrete; 1.5–18.5 cement bentonite" || r.Pack != "21.5–23 fine sand; 23–36 filter pack" {
+		t.Errorf("fills %q | %q", r.Pack, r.Grout)
+	}
+}

@@ -284,7 +284,7 @@ func (c CollapseLoad) Describe(u schema.Units) string {
 	if c.WaterStated {
 		water = "less " + FormatPressure(c.Inside, u) + " of water inside from " + u.FormatDepth(c.WaterTop)
 	}
-	return strings.ReplaceAll(string(low.Material), "-", " ") + " " + u.FormatInterval(c.Top, c.Bottom) +
+	return low.Material.Words() + " " + u.FormatInterval(c.Top, c.Bottom) +
 		" at " + schema.TrimFloat(d, 2) + " " + unit + " (" + basis + "), on " + c.Pipe.Label() + " (" + c.PipeMaterial() +
 		", rated " + FormatPressure(c.Rating, u) + ") at " + u.FormatDepth(c.At) + ": " + FormatPressure(c.Outside, u) +
 		" outside, " + water

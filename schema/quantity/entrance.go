@@ -25,6 +25,26 @@ func EntranceLimit(u schema.Units) float64 {
 	return EntranceVelocityLimitMetric
 }
 
+// OpenAreaIn is a screen open area (m2) in the unit a well's reports give
+// it in, with the unit's name: ft² for a file in feet, m² for one in
+// metres.
+func OpenAreaIn(a float64, u schema.Units) (float64, string) {
+	if u.Imperial() {
+		return a / (schema.MetresPerFoot * schema.MetresPerFoot), "ft²"
+	}
+	return a, "m²"
+}
+
+// VelocityIn is an entrance velocity (m/s) in the unit a well's reports
+// give it in, with the unit's name: ft/s for a file in feet, cm/s (the
+// unit of the 3 cm/s limit) for one in metres.
+func VelocityIn(v float64, u schema.Units) (float64, string) {
+	if u.Imperial() {
+		return v / schema.MetresPerFoot, "ft/s"
+	}
+	return v * 100, "cm/s"
+}
+
 // EffectiveOpenFraction is the share of a screen's open area that passes
 // water once the pack grains lie against it: about half (Driscoll,
 // Groundwater and Wells, chapter 13; from memory).

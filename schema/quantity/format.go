@@ -32,10 +32,10 @@ func Number(v float64) string {
 }
 
 // FormatVolume writes a volume in the well's two report units:
-// "6.228 ft3 (46.59 gal)" or "176.4 L (0.176 m3)".
+// "6.228 ft³ (46.59 gal)" or "176.4 L (0.176 m³)".
 func FormatVolume(v schema.Volume, u schema.Units) string {
 	p, s := VolumeUnits(u)
-	return fmt.Sprintf("%s %s (%s %s)", Number(v.In(p)), p, Number(v.In(s)), s)
+	return fmt.Sprintf("%s %s (%s %s)", Number(v.In(p)), p.Symbol(), Number(v.In(s)), s.Symbol())
 }
 
 // PerLengthIn is a volume per length in the unit a well's reports give
@@ -87,8 +87,23 @@ func FormatBag(m schema.Mass, u schema.Units) string {
 	return fmt.Sprintf("%s-%s bag", schema.TrimFloat(m.In(mu), 1), mu)
 }
 
-// FormatYield writes a yield: "0.500 ft3 per 50-lb bag (common practice)".
+// FormatBags writes a count of bags: "5 × 50-lb bags", "1 × 25-kg bag",
+// "2.5 bags" when their mass is unknown.
+func FormatBags(n float64, m schema.Mass, u schema.Units) string {
+	count := schema.TrimFloat(n, 2)
+	bag := "bag"
+	if m > 0 {
+		bag = FormatBag(m, u)
+		count += " ×"
+	}
+	if n != 1 {
+		bag += "s"
+	}
+	return count + " " + bag
+}
+
+// FormatYield writes a yield: "0.500 ft³ per 50-lb bag (common practice)".
 func FormatYield(y Yield, u schema.Units) string {
 	p, _ := VolumeUnits(u)
-	return fmt.Sprintf("%s %s per %s (%s)", Number(y.Volume.In(p)), p, FormatBag(y.BagMass, u), y.Basis)
+	return fmt.Sprintf("%s %s per %s (%s)", Number(y.Volume.In(p)), p.Symbol(), FormatBag(y.BagMass, u), y.Basis)
 }

@@ -116,15 +116,38 @@ func TestFormat(t *testing.T) {
 	w := imperial()
 	v := schema.VolumeFrom(1, schema.CubicFeet)
 	// 1 ft3 = 7.48052 US gal (NIST Handbook 44)
-	if got := FormatVolume(v, w.Units); got != "1.000 ft3 (7.481 gal)" {
+	if got := FormatVolume(v, w.Units); got != "1.000 ft³ (7.481 gal)" {
 		t.Errorf("imperial: %q", got)
 	}
 	// 1 ft3 = 0.3048^3 m3 = 28.317 L
-	if got := FormatVolume(v, metric().Units); got != "28.32 L (0.028 m3)" {
+	if got := FormatVolume(v, metric().Units); got != "28.32 L (0.028 m³)" {
 		t.Errorf("metric: %q", got)
 	}
 	if got := FormatBag(schema.MassFrom(50, schema.Pounds), w.Units); got != "50-lb bag" {
 		t.Errorf("bag: %q", got)
+	}
+}
+
+// TestUnitTypography: what a person reads writes units as a drafter does,
+// powers as superscripts (ft³, m³) and a count of bags with the
+// multiplication cross, never "ft3" or "5 x 50-lb bag" (NIST SP 811,
+// Guide for the Use of the SI, 2008: unit symbols with exponents, and the
+// cross for multiplying numbers; from memory for the section numbers).
+func TestUnitTypography(t *testing.T) {
+	w, m := imperial(), metric()
+	y := Yield{Volume: schema.VolumeFrom(0.5, schema.CubicFeet), BagMass: schema.MassFrom(50, schema.Pounds), Basis: CommonPractice}
+	for _, c := range []struct{ got, want string }{
+		{FormatYield(y, w.Units), "0.500 ft³ per 50-lb bag (common practice)"},
+		// 1 m3 = 1000 L (SI definition of the litre)
+		{FormatVolume(schema.VolumeFrom(1, schema.CubicMetres), m.Units), "1000.0 L (1.000 m³)"},
+		{FormatBags(5, schema.MassFrom(50, schema.Pounds), w.Units), "5 × 50-lb bags"},
+		{FormatBags(1, schema.MassFrom(25, schema.Kilograms), m.Units), "1 × 25-kg bag"},
+		{FormatBags(2.5, 0, w.Units), "2.5 bags"},
+		{schema.CubicFeet.Symbol() + " " + schema.CubicMetres.Symbol() + " " + schema.Litres.Symbol() + " " + schema.USGallons.Symbol(), "ft³ m³ L gal"},
+	} {
+		if c.got != c.want {
+			t.Errorf("got %q, want %q", c.got, c.want)
+		}
 	}
 }
 

@@ -169,17 +169,17 @@ func absolute(lb, sg float64) float64 { return lb / (sg * waterLbPerFt3) }
 func DefaultYields() *Yields {
 	y := &Yields{}
 	sand := Yield{Volume: ft3(0.5), BagMass: lb(50), Basis: CommonPractice,
-		Note: "50-lb bag of dry silica sand at about 100 lb/ft3 loose"}
+		Note: "50-lb bag of dry silica sand at about 100 lb/ft³ loose"}
 	y.Set(schema.FilterPack, sand)
 	y.Set(schema.FineSand, sand)
 	// 50 lb / 72 lb/ft3 = 0.694 ft3
 	y.Set(schema.BentoniteChips, Yield{Volume: ft3(50.0 / 72), BagMass: lb(50), Basis: FromMemory,
-		Note: "50-lb bag of chips at about 72 lb/ft3 bulk (0.68 to 0.70 ft3 per bag)"})
+		Note: "50-lb bag of chips at about 72 lb/ft³ bulk (0.68 to 0.70 ft³ per bag)"})
 	y.Set(schema.BentonitePellets, Yield{Volume: ft3(50.0 / 72), BagMass: lb(50), Basis: FromMemory,
-		Note: "50-lb pail or bag of pellets at about 72 lb/ft3 bulk"})
+		Note: "50-lb pail or bag of pellets at about 72 lb/ft³ bulk"})
 	// 28 ft3 per short ton: 2000 / 28 = 71.4 lb/ft3, 50 lb = 0.700 ft3
 	y.Set(schema.BentoniteGranular, Yield{Volume: ft3(50 * 28 / 2000.0), BagMass: lb(50), Basis: CommonPractice,
-		Note: "50-lb bag of granular bentonite at 28 ft3 per short ton (71.4 lb/ft3)"})
+		Note: "50-lb bag of granular bentonite at 28 ft³ per short ton (71.4 lb/ft³)"})
 	// 50 lb / (2.6 x 62.4 lb/ft3) + 24 gal / 7.48052 gal/ft3 = 0.31 + 3.21
 	y.Set(schema.BentoniteGrout, Yield{Volume: ft3(3.5), BagMass: lb(50), Basis: FromMemory,
 		Note: "50-lb bag of grout-grade bentonite with about 24 US gal water (20% solids)", Water: gal(24), Solids: lb(50)})

@@ -13,7 +13,6 @@ package rules
 
 import (
 	"fmt"
-	"strings"
 
 	"github.com/tremie-dev/tremie/schema"
 )
@@ -39,7 +38,7 @@ func (p *Pass) span(iv schema.Interval) string { return p.Iv(iv.Top, iv.Bottom) 
 func depths(iv schema.Interval) []schema.Length { return []schema.Length{iv.Top, iv.Bottom} }
 
 // material names a fill class for messages.
-func material(m schema.Material) string { return strings.ReplaceAll(string(m), "-", " ") }
+func material(m schema.Material) string { return m.Words() }
 
 // annulusLabel names an annulus for messages.
 func annulusLabel(name string) string {

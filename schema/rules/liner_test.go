@@ -2,6 +2,7 @@ package rules
 
 import (
 	"os"
+	"regexp"
 	"strings"
 	"testing"
 
@@ -31,6 +32,26 @@ func TestTelescopedWellWithLiner(t *testing.T) {
 		return out
 	}
 	src := string(data)
+	t.Run("pack under the production casing's shoe", func(t *testing.T) {
+		// The cement stands in the 22-in hole outside the 16-in casing
+		// down to its shoe at 360 ft; below, the hole was drilled out at
+		// 15 in, narrower than the casing's outside, and packed. The
+		// cement's ring (8 to 11 in from the axis) lies over the
+		// formation's shelf, not over the pack's (4.3 to 7.5 in): no
+		// grout rests on the pack, so no waiver is needed
+		// (geometry of the file; common practice for a telescoped well).
+		nowaiver := regexp.MustCompile(`(?s)\[\[waiver\]\]\nrule = "SEAL-ABOVE-PACK".*?\n\n`).ReplaceAllString(src, "")
+		if f := check(t, nowaiver)["SEAL-ABOVE-PACK"]; len(f) > 0 {
+			t.Errorf("SEAL-ABOVE-PACK: %s", f[0].Message)
+		}
+		// Reamed to 18 in below the shoe, the pack's ring reaches out to
+		// 9 in, under the cement: the cement then rests on the pack.
+		reamed := strings.Replace(nowaiver, "diameter = 15.0", "diameter = 18.0", 1)
+		f := check(t, reamed)["SEAL-ABOVE-PACK"]
+		if len(f) != 1 || !strings.Contains(f[0].Message, "rests directly on the pack (top at 360 ft)") {
+			t.Errorf("want the cement on the pack at 360 ft reported, got %v", f)
+		}
+	})
 	t.Run("as built", func(t *testing.T) {
 		got := check(t, src)
 		for _, id := range []string{"ANNULUS-GAP", "ELEVATION-STICKUP"} {

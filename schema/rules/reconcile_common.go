@@ -4,8 +4,6 @@ package rules
 // the well under check and how to describe them.
 
 import (
-	"fmt"
-
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/quantity"
 )
@@ -26,13 +24,13 @@ func reconciling(run reconcileRun) func(*Pass) {
 	return func(p *Pass) { run(p, p.quantities()) }
 }
 
-// placedText says how much went in: "5 x 50-lb bag = 2.500 ft3 (18.70 gal)"
-// or "5.000 ft3 (37.40 gal)" for a recorded volume.
+// placedText says how much went in: "5 × 50-lb bags = 2.500 ft³ (18.70 gal)"
+// or "5.000 ft³ (37.40 gal)" for a recorded volume.
 func placedText(u schema.Units, r quantity.Row) string {
 	if r.Fill.Placed > 0 {
 		return quantity.FormatVolume(r.Placed, u)
 	}
-	return fmt.Sprintf("%s x %s = %s", schema.TrimFloat(r.BagsPlaced, 2), quantity.FormatBag(r.Yield.BagMass, u), quantity.FormatVolume(r.Placed, u))
+	return quantity.FormatBags(r.BagsPlaced, r.Yield.BagMass, u) + " = " + quantity.FormatVolume(r.Placed, u)
 }
 
 // amountKey is the key that records the amount placed, for the line.

@@ -28,7 +28,7 @@ func TestReconcileMessages(t *testing.T) {
 		return b.String()
 	}
 	low := msgs("PLACED-VOLUME-LOW")
-	for _, s := range []string{"filter pack at 23–36 ft", "possible bridge", "56 %", "2.500 ft3", "4.457 ft3"} {
+	for _, s := range []string{"filter pack at 23–36 ft", "possible bridge", "56 %", "5 × 50-lb bags", "2.500 ft³", "4.457 ft³"} {
 		if !strings.Contains(low, s) {
 			t.Errorf("PLACED-VOLUME-LOW message lacks %q:\n%s", s, low)
 		}

@@ -119,7 +119,6 @@ func Deep(td float64, n int) []byte {
 	}
 	packVol += ann(19, 12.75)*(screenTop-prod) + math.Pi/4*19*19/144*(td-sumpBot)
 	p("\n[[fill]]\ntop = %s\nbottom = %s\nmaterial = \"filter-pack\"\nproduct = \"rounded silica gravel\"\ngradation = \"6/12\"\nmethod = \"tremie\"\nvolume = %s", f(prod), f(td), f(math.Round(packVol)))
-	p("\n[[waiver]]\nrule = \"SEAL-ABOVE-PACK\"\nreason = \"The production casing was cemented and the cement set before the hole below was drilled and packed.\"\napproved_by = \"N. Achterberg, PE 61204\"\ndate = 2026-03-22")
 
 	// Lithology: n intervals of varied thickness; soils above the
 	// production casing's shoe, permeable sands, gravels and sandstone

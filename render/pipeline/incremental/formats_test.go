@@ -7,14 +7,11 @@ import (
 	"testing"
 )
 
-// A well drawn as SVG and PDF, then as SVG alone (render --format svg):
-// its PDF is still its last drawing in that format, not a stale output
-// of a well that is gone, and stays tremie's to replace. A name the well
-// no longer draws in a format it did draw (one sheet, then two) is stale.
-func TestFewerFormatsLeaveNoStaleOutput(t *testing.T) {
-	dir := t.TempDir()
-	src := filepath.Join(dir, "MW-1.toml")
-	for _, f := range []string{"MW-1.toml", "MW-1.svg", "MW-1.pdf", "MW-1-sheet1.svg", "MW-1-sheet2.svg"} {
+// cacheAmong writes the named files (one byte each) into dir and loads
+// the cache there.
+func cacheAmong(t *testing.T, dir string, files ...string) *Cache {
+	t.Helper()
+	for _, f := range files {
 		if err := os.WriteFile(filepath.Join(dir, f), []byte("x"), 0o644); err != nil {
 			t.Fatal(err)
 		}
@@ -23,6 +20,17 @@ func TestFewerFormatsLeaveNoStaleOutput(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
+	return c
+}
+
+// A well drawn as SVG and PDF, then as SVG alone (render --format svg):
+// its PDF is still its last drawing in that format, not a stale output
+// of a well that is gone, and stays tremie's to replace. A name the well
+// no longer draws in a format it did draw (one sheet, then two) is stale.
+func TestFewerFormatsLeaveNoStaleOutput(t *testing.T) {
+	dir := t.TempDir()
+	src := filepath.Join(dir, "MW-1.toml")
+	c := cacheAmong(t, dir, "MW-1.toml", "MW-1.svg", "MW-1.pdf", "MW-1-sheet1.svg", "MW-1-sheet2.svg")
 	c.RecordFrom("MW-1", src, "h1", []string{"MW-1.svg", "MW-1.pdf"})
 	c.RecordFrom("MW-1", src, "h2", []string{"MW-1.svg"})
 	if s := c.Stale([]string{"MW-1"}); len(s) != 0 {
@@ -42,15 +50,7 @@ func TestFewerFormatsLeaveNoStaleOutput(t *testing.T) {
 func TestKeptFormatIsStaleWhenTheWellIsGone(t *testing.T) {
 	dir := t.TempDir()
 	src := filepath.Join(dir, "MW-1.toml")
-	for _, f := range []string{"MW-1.toml", "MW-1.svg", "MW-1.pdf"} {
-		if err := os.WriteFile(filepath.Join(dir, f), []byte("x"), 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
-	c, err := Load(dir)
-	if err != nil {
-		t.Fatal(err)
-	}
+	c := cacheAmong(t, dir, "MW-1.toml", "MW-1.svg", "MW-1.pdf")
 	c.RecordFrom("MW-1", src, "h1", []string{"MW-1.svg", "MW-1.pdf"})
 	c.RecordFrom("MW-1", src, "h2", []string{"MW-1.svg"})
 	if err := os.Remove(src); err != nil {
