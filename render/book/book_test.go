@@ -251,3 +251,15 @@ func FuzzBookText(f *testing.F) {
 		}
 	})
 }
+
+// TestTallyReadsAsWords: the findings page counts the demo's wells in
+// words, one status each (the seven demo wells: four clean, MW-3 with
+// errors, MW-2 waived, MW-4 planned; and the test's unreadable file),
+// never "1 errors".
+func TestTallyReadsAsWords(t *testing.T) {
+	in, _ := demoInput(t)
+	got := tally(in)
+	if !strings.HasPrefix(got, "8 wells: 4 clean, 1 with errors, 1 waived, 1 planned, 1 unreadable.") {
+		t.Errorf("tally %q", got)
+	}
+}

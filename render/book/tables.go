@@ -117,6 +117,11 @@ func typesetTables(in Input, first int) ([]byte, int, int, error) {
 	return buf.Bytes(), f.PageNo(), findingsAt, nil
 }
 
+// statusWords is a status as the count of wells reads it: "1 with errors",
+// not "1 errors".
+var statusWords = map[table.Status]string{table.Clean: "clean", table.Warnings: "with warnings", table.Errors: "with errors",
+	table.Waived: "waived", table.Planned: "planned", table.Unreadable: "unreadable"}
+
 // tally counts the wells by check status.
 func tally(in Input) string {
 	counts := map[table.Status]int{}
@@ -128,7 +133,7 @@ func tally(in Input) string {
 	var parts []string
 	for _, s := range []table.Status{table.Clean, table.Warnings, table.Errors, table.Waived, table.Planned, table.Unreadable} {
 		if counts[s] > 0 {
-			parts = append(parts, fmt.Sprintf("%d %s", counts[s], s))
+			parts = append(parts, fmt.Sprintf("%d %s", counts[s], statusWords[s]))
 		}
 	}
 	return fmt.Sprintf("%d wells: %s.", in.Table.Wells(), strings.Join(parts, ", ")) + " Wells without findings are not listed. A waived finding is listed with its waiver and no longer fails the check."

@@ -83,6 +83,21 @@ func oneLine(label string, width float64) (head, rest string) {
 	for n > 1 && leadWords[strings.ToLower(words[n-1])] {
 		n--
 	}
+	// A cut description keeps whole clauses when it can: descriptions
+	// run name first, then comma-separated descriptors (ASTM D2488's
+	// order), so "SANDSTONE, coarse (D9)" with "grained, ..." in the note
+	// would split a descriptor in two where "SANDSTONE (D9)" does not.
+	// A clause ending on a lead word ("cobbles to 4 in,") would read as
+	// unfinished once its comma goes: the cut takes the clause before.
+	if n < len(words) {
+		for j := n; j >= 1; j-- {
+			w := words[j-1]
+			if (strings.HasSuffix(w, ",") || strings.HasSuffix(w, ";")) && !leadWords[strings.ToLower(strings.TrimRight(w, ",;"))] {
+				n = j
+				break
+			}
+		}
+	}
 	return strings.TrimRight(strings.Join(words[:n], " "), ",;:"), strings.Join(words[n:], " ")
 }
 

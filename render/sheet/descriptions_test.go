@@ -51,3 +51,29 @@ func TestDescriptionNotesOncePerLayer(t *testing.T) {
 		}
 	})
 }
+
+// A description cut to one line keeps whole clauses: the group name and
+// its descriptors are separated by commas in the order of ASTM D2488
+// (group name first), so the cut falls at a comma when the line holds one
+// (common practice for abbreviated logs).
+func TestOneLineCutsAtAClause(t *testing.T) {
+	cases := []struct{ label, fits, head, rest string }{
+		{"SANDSTONE, coarse grained, weakly cemented, tan; cuttings with shell fragments", "SANDSTONE, coarse",
+			"SANDSTONE", "coarse grained, weakly cemented, tan; cuttings with shell fragments"},
+		{"SP-SM: SAND with silt, fine to medium, grey, wet, dense; occasional thin interbeds", "SP-SM: SAND with silt, fine to",
+			"SP-SM: SAND with silt", "fine to medium, grey, wet, dense; occasional thin interbeds"},
+		// "in" here is inches, but a line ending "to 4 in (D21)" reads as unfinished.
+		{"Poorly graded GRAVEL, wet, dense, cobbles to 4 in, subrounded", "Poorly graded GRAVEL, wet, dense, cobbles to 4 in,",
+			"Poorly graded GRAVEL, wet, dense", "cobbles to 4 in, subrounded"},
+		// No comma within the line: the cut stays at a word.
+		{"Weathered granitic saprolite keeping relict structure grading downward", "Weathered granitic saprolite",
+			"Weathered granitic saprolite", "keeping relict structure grading downward"},
+	}
+	for _, c := range cases {
+		width := draw.TextWidth(draw.Regular, sizeSmall, c.fits+descMarkRoom) + 0.5
+		head, rest := oneLine(c.label, width)
+		if head != c.head || rest != c.rest {
+			t.Errorf("%q:\n got head %q rest %q\nwant head %q rest %q", c.label, head, rest, c.head, c.rest)
+		}
+	}
+}
