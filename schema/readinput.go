@@ -15,13 +15,57 @@ const (
 	MaxTextFile  = 8 << 20  // a well, project, profile or yields file
 	MaxImageFile = 64 << 20 // a wall image or logo, before its own checks
 	MaxNesting   = 64       // arrays and inline tables inside each other
-	// MaxEntries bounds each list of a well ([[lithology]], [[fill]],
-	// [[fill.tag]], [[water_level]], [[feature]]...): a 1,200-ft well
-	// logged foot by foot has 1,200 intervals.
-	MaxEntries = 2000
+)
+
+// Count and text limits of one well, each far above any real well and
+// low enough that the worst well they admit is checked and drawn
+// (SVG, PDF and PNG) in a few seconds: tags, water levels and notes each
+// become a row on the sheet's notes (and warnings of their own), and
+// notes past the drawings' room fill notes sheets, each as costly to
+// draw as a log sheet. The figures measured are in schema/FORMAT.md,
+// Limits.
+const (
+	// MaxEntries bounds each list of intervals ([[lithology]], [[fill]],
+	// [[borehole]], [[string.section]], [[sample]]...): a 1,000-ft hole
+	// logged foot by foot; the 1,200-ft gallery well has 150 layers.
+	MaxEntries = 1000
+	// MaxTags bounds [[fill.tag]] over every fill of a well: a weighted
+	// tape tag every few bags gives tens of tags in a deep well.
+	MaxTags = 200
+	// MaxWaterLevels bounds [[water_level]]: a construction log records
+	// levels while drilling, developing and first gauging, some tens; a
+	// monitoring history belongs in a monitoring database.
+	MaxWaterLevels = 200
+	// MaxFeatures bounds [[feature]]: an acoustic or optical televiewer log
+	// picks some hundreds of fractures and contacts in a rock well's open
+	// hole.
+	MaxFeatures = 1000
+	// MaxValues bounds the values of one array (centralizers, a list of
+	// wells): a centralizer every 20 ft of a 3,000-ft string is 150.
+	MaxValues = 1000
+	// MaxNotes bounds the notes of a well (notes = [...]).
+	MaxNotes = 50
 	// MaxText bounds one text value (an ID, a description, a note).
 	MaxText = 4000
+	// MaxFileText bounds the text values of one file together: the
+	// 1,200-ft gallery well holds 20 KB of text; laying text out costs
+	// about 10 ms a kilobyte.
+	MaxFileText = 128 << 10
 )
+
+// entryLimit is the most tables of one kind ("fill.tag", "water_level")
+// a file may hold.
+func entryLimit(kind string) int {
+	switch kind {
+	case "fill.tag":
+		return MaxTags
+	case "water_level":
+		return MaxWaterLevels
+	case "feature":
+		return MaxFeatures
+	}
+	return MaxEntries
+}
 
 // ErrNotRegular is wrapped by ReadInput's error for a FIFO, device,
 // socket or directory named as an input.

@@ -94,8 +94,8 @@ func TestCountAndTextLimits(t *testing.T) {
 		b.WriteString("[[water_level]]\ndepth = 5.0\n")
 	}
 	_, err := Load("many.toml", []byte(b.String()))
-	// The 2,001st [[water_level]] opens line 12 + 2 x 2000.
-	if err == nil || !strings.Contains(err.Error(), "many.toml:4012") || !strings.Contains(err.Error(), "more than 2000 [[water_level]]") {
+	// The 201st [[water_level]] opens line 12 + 2 x 200.
+	if err == nil || !strings.Contains(err.Error(), "many.toml:412:") || !strings.Contains(err.Error(), "more than 200 [[water_level]]") {
 		t.Errorf("10,000 water levels: %v", err)
 	}
 	long := strings.Replace(head, "id = \"A\"", "id = \""+strings.Repeat("W", 10000)+"\"", 1)
@@ -106,26 +106,49 @@ func TestCountAndTextLimits(t *testing.T) {
 	if strings.Contains(err.Error(), "must not be empty") {
 		t.Errorf("a too-long ID is also called empty: %v", err)
 	}
-	// The bound is per well: 4 fills of 800 tags are 3,200 tags, and the
-	// 2,001st (the 401st of the third fill) is refused where it stands,
+	// The bound is per well: 4 fills of 80 tags are 320 tags, and the
+	// 201st (the 41st of the third fill) is refused where it stands,
 	// once.
 	// Unbounded, 100 fills of 2,000 tags took minutes to check.
 	b.Reset()
 	b.WriteString(head)
 	for f := 0; f < 4; f++ {
 		fmt.Fprintf(&b, "[[fill]]\ntop = %d.0\nbottom = %d.0\nmaterial = \"filter-pack\"\n", f, f+1)
-		for i := 0; i < 800; i++ {
+		for i := 0; i < 80; i++ {
 			b.WriteString("[[fill.tag]]\nafter_bags = 1\ndepth = 1.0\n")
 		}
 	}
 	start := time.Now()
 	_, err = Load("tags.toml", []byte(b.String()))
-	// Line 12 + 2 x (4 + 2,400) + 4 opens the third fill's tags; its 401st
-	// tag is 400 x 3 lines further.
-	wantLine := fmt.Sprintf("tags.toml:%d", 12+2*(4+2400)+4+400*3)
-	if err == nil || !strings.Contains(err.Error(), wantLine) || !strings.Contains(err.Error(), "more than 2000 [[fill.tag]] tables in the well") || time.Since(start) > 5*time.Second {
-		t.Errorf("3,200 tags over 4 fills (want %s): %v after %v", wantLine, err, time.Since(start))
-	} else if n := strings.Count(err.Error(), "more than 2000"); n != 1 {
+	// Line 12 + 2 x (4 + 240) + 4 opens the third fill's tags; its 41st
+	// tag is 40 x 3 lines further.
+	wantLine := fmt.Sprintf("tags.toml:%d:", 12+2*(4+240)+4+40*3)
+	if err == nil || !strings.Contains(err.Error(), wantLine) || !strings.Contains(err.Error(), "more than 200 [[fill.tag]] tables in the well") || time.Since(start) > 5*time.Second {
+		t.Errorf("320 tags over 4 fills (want %s): %v after %v", wantLine, err, time.Since(start))
+	} else if n := strings.Count(err.Error(), "more than 200 "); n != 1 {
 		t.Errorf("the limit is reported %d times, want once: %v", n, err)
+	}
+}
+
+// TestValueAndFileTextLimits: an array of a hundred thousand centralizers
+// (which took minutes and 800 MB to draw), 51 notes, and a file whose
+// text values together pass MaxFileText are each refused with a
+// position, at once.
+func TestValueAndFileTextLimits(t *testing.T) {
+	head := "[units]\ndepth = \"ft\"\ndiameter = \"in\"\n[well]\nid = \"A\"\npurpose = \"monitoring\"\ntotal_depth = 10.0\n%s\n[[borehole]]\ntop = 0.0\nbottom = 10.0\ndiameter = 8.0\n"
+	many := func(n int, v string) string { return strings.TrimSuffix(strings.Repeat(v+", ", n), ", ") }
+	for _, c := range []struct{ name, well, want string }{
+		{"100,000 centralizers", fmt.Sprintf(head, "") + "[[casing]]\ntop = 0.0\nbottom = 10.0\nsize = \"2\"\nmaterial = \"PVC\"\ncentralizers = [" + many(100000, "5.0") + "]\n",
+			"w.toml:18:16: centralizers holds 100000 values; at most 1000"},
+		{"51 notes", fmt.Sprintf(head, "notes = ["+many(51, `"n"`)+"]"), "w.toml:8:9: notes holds 51 values; at most 50"},
+		// 40 lithology descriptions of 3,900 bytes pass 128 KiB at the 34th.
+		{"text past MaxFileText", fmt.Sprintf(head, "") + strings.Repeat("[[lithology]]\ntop = 0.0\nbottom = 10.0\nuscs = \"SM\"\ndescription = \""+strings.Repeat("d", 3900)+"\"\n", 40),
+			fmt.Sprintf("w.toml:%d:15: the text values of the file pass 131072 bytes here", 13+33*5+4)},
+	} {
+		start := time.Now()
+		_, err := Load("w.toml", []byte(c.well))
+		if err == nil || !strings.Contains(err.Error(), c.want) || time.Since(start) > 2*time.Second {
+			t.Errorf("%s: %v after %v\nwant %s", c.name, err, time.Since(start), c.want)
+		}
 	}
 }

@@ -133,6 +133,9 @@ func (d Date) Time() time.Time { return time.Date(d.Year, d.Month, d.Day, 0, 0, 
 // depend on it.
 type Purpose string
 
+// Words names the purpose as a reader writes it: "public supply".
+func (p Purpose) Words() string { return strings.ReplaceAll(string(p), "-", " ") }
+
 const (
 	Monitoring   Purpose = "monitoring"
 	Piezometer   Purpose = "piezometer"

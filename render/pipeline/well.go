@@ -150,8 +150,27 @@ func (w *Well) LayoutReport(opt LayoutOptions) (*draw.Document, sheet.Economy, e
 	if err != nil {
 		return nil, sheet.Economy{}, fmt.Errorf("%s: %w", w.Path, err)
 	}
+	if n := len(doc.Pages); n > MaxSheets {
+		return nil, sheet.Economy{}, fmt.Errorf("%s: %s would take %d sheets (%d log and %d notes sheets), more than the %d one well may have; draw at a smaller scale (--scale), on a larger page (--page), or shorten its notes", w.Path, w.Well.ID, n, econ.Drawings, econ.NotesSheets, MaxSheets)
+	}
+	if econ.NotesSheets > MaxNotesSheets {
+		return nil, sheet.Economy{}, fmt.Errorf("%s: %s: its notes, descriptions, water levels, tags and findings would fill %d notes sheets, more than the %d one well may have; shorten them, or draw at a larger scale (--scale) or on a larger page (--page)", w.Path, w.Well.ID, econ.NotesSheets, MaxNotesSheets)
+	}
 	return doc, econ, nil
 }
+
+// MaxNotesSheets bounds the notes sheets of one well: each costs as much
+// to draw as a log sheet, and the wells of the demo and the gallery need
+// none (the 1,200-ft, 150-layer well fits on 8 log sheets), so that a
+// well of valid but absurd notes (within schema's count and text limits)
+// is refused instead of drawn on dozens of sheets for a minute.
+const MaxNotesSheets = 10
+
+// MaxSheets bounds all the sheets of one well, log and notes sheets
+// together (render/sheet bounds the log sheets alone at 30 too): the
+// 1,200-ft gallery well's 25 sheets at 1in=10ft take 2.3 s in SVG, PDF
+// and PNG, so the worst well accepted draws in a few seconds.
+const MaxSheets = 30
 
 // FitNotes says of a well drawn with --scale fit that its notes still
 // need notes sheets: how many, why, and what a larger page would do.

@@ -48,19 +48,8 @@ func (l *layout) page(i int) *draw.Page {
 	pg.Add(p.calloutItems(l.sheetCallouts[i])...)
 	pg.Add(l.matchLines(p, i)...)
 
-	pg.Add(l.legendItems(l.legendOf(p.window()))...)
-	pg.Add(l.amountItems(i)...)
-	more := ""
-	where := l.continuesWhere(i, false)
-	switch {
-	case len(l.bandPlan.overflow) > 0:
-		more = fmt.Sprintf("Notes and findings continue %s.", where)
-	case len(l.calloutOverflow) > 0:
-		more = fmt.Sprintf("Notes continue %s.", where)
-	}
-	notes := append(append([]noteBlock(nil), l.bandPlan.notes...), l.sheetNotes[i]...)
-	pg.Add(l.noteItems(notes, l.bandPlan.noteR, more)...)
-	pg.Add(l.boxItems(l.stripBoxes)...)
+	pg.Add(l.bandItems(p, i)...)
+	pg.Add(l.boxItems(l.stripBoxes, l.bandHoldsNotes())...)
 	if last {
 		pg.Add(l.freeItems()...)
 	}

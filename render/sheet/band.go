@@ -421,9 +421,57 @@ func (l *layout) legendHeight(syms []symbol, w float64) float64 {
 
 func legendCols(w float64) int { return max(1, int((w-2*bandPad)/legendColW+1e-9)) }
 
-// legendItems draws the symbols of one sheet in the band's first box.
-func (l *layout) legendItems(syms []symbol) []draw.Item {
-	r := l.bandPlan.legendR
+// bandItems draws the band of drawing sheet i (p its painter): the
+// legend, the amounts and the notes box. A notes box that would hold no
+// note, only the line saying where they continue, is left out, and its
+// room goes to the box beside or above it: an empty box pointing
+// elsewhere is not what a drafter hands over.
+func (l *layout) bandItems(p *painter, i int) []draw.Item {
+	bp := l.bandPlan
+	notes := append(append([]noteBlock(nil), bp.notes...), l.sheetNotes[i]...)
+	legendR, amountR := bp.legendR, bp.amountR
+	if len(notes) == 0 {
+		grow := &legendR
+		if bp.amountW > 0 {
+			grow = &amountR
+		}
+		if l.pg.LegendRight > 0 {
+			grow.H = bp.noteR.Bottom() - grow.Y
+		} else {
+			grow.W = bp.noteR.Right() - grow.X
+		}
+	}
+	items := append(l.legendItems(legendR, l.legendOf(p.window())), l.amountItems(amountR, i)...)
+	if len(notes) == 0 {
+		return items
+	}
+	more := ""
+	where := l.continuesWhere(i, false)
+	switch {
+	case len(bp.overflow) > 0:
+		more = fmt.Sprintf("Notes and findings continue %s.", where)
+	case len(l.calloutOverflow) > 0:
+		more = fmt.Sprintf("Notes continue %s.", where)
+	}
+	return append(items, l.noteItems(notes, bp.noteR, "NOTES", more)...)
+}
+
+// bandHoldsNotes reports whether the band's notes box holds notes on
+// some drawing sheet: boxes elsewhere then continue its run.
+func (l *layout) bandHoldsNotes() bool {
+	if len(l.bandPlan.notes) > 0 {
+		return true
+	}
+	for _, n := range l.sheetNotes {
+		if len(n) > 0 {
+			return true
+		}
+	}
+	return false
+}
+
+// legendItems draws the symbols of one sheet in the band's box r.
+func (l *layout) legendItems(r draw.Rect, syms []symbol) []draw.Item {
 	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, "band:legend"),
 		text(r.X+bandPad, r.Y+9, "LEGEND", draw.Bold, sizeHeading, draw.Start, ink, "")}
 	pos, labels, _ := legendLayout(syms, r.W)
@@ -535,8 +583,9 @@ func (l *layout) amountHead() []string {
 	return h
 }
 
-// amountItems draws the band's table of calculated and placed amounts.
-func (l *layout) amountItems(i int) []draw.Item {
+// amountItems draws the band's table of calculated and placed amounts
+// in its box r on drawing sheet i.
+func (l *layout) amountItems(r draw.Rect, i int) []draw.Item {
 	if l.bandPlan.amountW == 0 {
 		return nil
 	}
@@ -546,7 +595,7 @@ func (l *layout) amountItems(i int) []draw.Item {
 		rows = rows[:k]
 		more = fmt.Sprintf("Amounts continue %s.", l.continuesWhere(i, true))
 	}
-	return l.amountBox(l.bandPlan.amountR, "AMOUNTS PER FILL INTERVAL", rows, more == "", more)
+	return l.amountBox(r, "AMOUNTS PER FILL INTERVAL", rows, more == "", more)
 }
 
 // amountBox draws a table of amounts rows in r, ending with the table's
@@ -610,10 +659,10 @@ func noteBlockItems(blocks []noteBlock, x, y float64) ([]draw.Item, float64) {
 	return items, y
 }
 
-// noteItems draws the notes and findings box.
-func (l *layout) noteItems(blocks []noteBlock, r draw.Rect, more string) []draw.Item {
+// noteItems draws a box of notes and findings under its title.
+func (l *layout) noteItems(blocks []noteBlock, r draw.Rect, title, more string) []draw.Item {
 	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, "band:notes"),
-		text(r.X+bandPad, r.Y+9, "NOTES", draw.Bold, sizeHeading, draw.Start, ink, "")}
+		text(r.X+bandPad, r.Y+9, title, draw.Bold, sizeHeading, draw.Start, ink, "")}
 	blockItems, y := noteBlockItems(blocks, r.X+bandPad, r.Y+bandHeadH+bandPad)
 	items = append(items, blockItems...)
 	if more != "" {

@@ -2,7 +2,6 @@ package sheet
 
 import (
 	"fmt"
-	"strings"
 
 	"github.com/tremie-dev/tremie/render/draw"
 )
@@ -57,12 +56,12 @@ func (l *layout) planCallouts() {
 			b.add(s, draw.Bold, sizeSmall, noteW)
 			return noteBlock{heading: true, block: b, color: ink, role: "callout-note-head"}
 		}
-		title := "COMPONENTS, CONTINUED"
+		title := "COMPONENT NOTES"
 		switch {
 		case len(descNotes[i]) == len(entries):
-			title = "DESCRIPTIONS, CONTINUED"
+			title = "DESCRIPTION NOTES"
 		case len(descNotes[i]) > 0:
-			title = "DESCRIPTIONS AND COMPONENTS, CONTINUED"
+			title = "DESCRIPTION AND COMPONENT NOTES"
 		}
 		k := 0
 		if len(l.bandPlan.overflow) == 0 {
@@ -89,19 +88,18 @@ func (l *layout) planCallouts() {
 
 // overflowTitle heads the notes of drawing sheet i that continue past
 // its notes box (whose title is boxTitle, and which holds some of them
-// when begun): on a set of several drawings it names the sheet, on one
-// it names the notes plainly.
+// when begun): the same plain title, naming the sheet on a set of
+// several drawings, and saying CONTINUED only where the box began them.
 func (l *layout) overflowTitle(i int, boxTitle string, begun bool) string {
-	what := strings.TrimSuffix(boxTitle, ", CONTINUED")
+	title := boxTitle
 	if len(l.sheets) > 1 {
 		n, _ := l.number(i)
-		return fmt.Sprintf("%s ON SHEET %d, CONTINUED", what, n)
+		title = fmt.Sprintf("%s FOR SHEET %d", boxTitle, n)
 	}
-	plain := map[string]string{"COMPONENTS": "COMPONENT NOTES", "DESCRIPTIONS": "DESCRIPTION NOTES", "DESCRIPTIONS AND COMPONENTS": "DESCRIPTION AND COMPONENT NOTES"}[what]
 	if begun {
-		plain += ", CONTINUED"
+		title += ", CONTINUED"
 	}
-	return plain
+	return title
 }
 
 // notesHeight is the height noteItems gives blocks.

@@ -415,16 +415,16 @@ func (l *layout) freeItems() []draw.Item {
 		y0 := b.r.Y - g
 		items = append(items, box(draw.Rect{X: x0, Y: y0, W: x1 - x0, H: l.body.Bottom() - 0.5 - y0}, draw.Color{}, 0, draw.White, "ground:notes"))
 	}
-	return append(items, l.boxItems(l.freeBoxes)...)
+	return append(items, l.boxItems(l.freeBoxes, l.bandHoldsNotes() || hasNotesBox(l.stripBoxes))...)
 }
 
-// columnItems draws a box of notes set in columns.
-func (l *layout) columnItems(b sheetBox, more string) []draw.Item {
+// columnItems draws a box of notes set in columns, under its title.
+func (l *layout) columnItems(b sheetBox, title, more string) []draw.Item {
 	r := b.r
 	items := []draw.Item{box(r, ink, 0.6, draw.Color{}, "band:notes")}
 	top := r.Y + bandPad
 	if !b.untitled {
-		items = append(items, text(r.X+bandPad, r.Y+9, "NOTES", draw.Bold, sizeHeading, draw.Start, ink, ""))
+		items = append(items, text(r.X+bandPad, r.Y+9, title, draw.Bold, sizeHeading, draw.Start, ink, ""))
 		top += bandHeadH
 	}
 	low := top

@@ -191,14 +191,36 @@ func (l *layout) flowNotesInto(first []draw.Rect, rest draw.Rect, rows [][]strin
 // notesSheet draws notes sheet k (0-based) as page n of m.
 func (l *layout) notesSheet(pg *draw.Page, k, n, m int) {
 	pg.Add(l.headerItems(n, m, "Notes and check findings, continued")...)
-	pg.Add(l.boxItems(l.notesPages[k])...)
+	opened := l.bandHoldsNotes() || hasNotesBox(l.freeBoxes) || hasNotesBox(l.stripBoxes)
+	for _, page := range l.notesPages[:k] {
+		opened = opened || hasNotesBox(page)
+	}
+	pg.Add(l.boxItems(l.notesPages[k], opened)...)
 	pg.Add(l.cautionItems()...)
 }
 
-// boxItems draws the boxes of a notes sheet or of a drawing's strip.
-func (l *layout) boxItems(boxes []sheetBox) []draw.Item {
+// hasNotesBox reports whether boxes hold a box of notes.
+func hasNotesBox(boxes []sheetBox) bool {
+	for _, b := range boxes {
+		if b.amounts == nil {
+			return true
+		}
+	}
+	return false
+}
+
+// boxItems draws the boxes of a notes sheet, of a drawing's strip or of
+// its free room. Opened tells that an earlier box (the band's, or one
+// before these) began the notes: the titles of these then say that the
+// notes continue, so that a sheet never shows two boxes both titled
+// NOTES.
+func (l *layout) boxItems(boxes []sheetBox, opened bool) []draw.Item {
 	var items []draw.Item
 	for _, b := range boxes {
+		title := "NOTES"
+		if opened {
+			title = "NOTES, CONTINUED"
+		}
 		more := ""
 		if b.cont >= 0 {
 			next, _ := l.number(len(l.sheets) + b.cont)
@@ -210,11 +232,12 @@ func (l *layout) boxItems(boxes []sheetBox) []draw.Item {
 			items = append(items, l.amountBox(b.r, "AMOUNTS, CONTINUED", b.amounts, b.foot, more)...)
 			continue
 		}
+		opened = true
 		if b.columns != nil {
-			items = append(items, l.columnItems(b, more)...)
+			items = append(items, l.columnItems(b, title, more)...)
 			continue
 		}
-		items = append(items, l.noteItems(b.notes, b.r, more)...)
+		items = append(items, l.noteItems(b.notes, b.r, title, more)...)
 	}
 	return items
 }

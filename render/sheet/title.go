@@ -50,7 +50,7 @@ func (l *layout) titleFields() titleBlock {
 		}
 		return s
 	}
-	purpose := upperFirst(strings.ReplaceAll(string(w.Purpose), "-", " "))
+	purpose := upperFirst(w.Purpose.Words())
 	if w.Status != "" {
 		purpose += " (" + w.Status + ")"
 	}

@@ -196,7 +196,7 @@ func rowOf(e Entry, u schema.DepthUnit) Row {
 	r := Row{
 		File:      e.File,
 		ID:        w.ID,
-		Purpose:   string(w.Purpose),
+		Purpose:   w.Purpose.Words(),
 		Easting:   w.Location.Easting,
 		Northing:  w.Location.Northing,
 		Latitude:  w.Location.Latitude,

@@ -532,4 +532,13 @@ func TestFillColumnsInWords(t *testing.T) {
 	if r.Grout != "0–1.5 concrete; 1.5–18.5 cement bentonite" || r.Pack != "21.5–23 fine sand; 23–36 filter pack" {
 		t.Errorf("fills %q | %q", r.Pack, r.Grout)
 	}
+	// and the purpose as the sheet's title block does: PW-1 is a
+	// public-supply well in its file, "public supply" to a reader
+	pw, err := schema.Load("PW-1.toml", mustRead(t, "wells/PW-1.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := Build([]Entry{{Well: pw}}, "").Rows[0].Purpose; got != "public supply" {
+		t.Errorf("purpose %q", got)
+	}
 }
