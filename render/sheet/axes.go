@@ -83,10 +83,11 @@ func (p *painter) elevationAxis() []draw.Item {
 }
 
 // axisLabelFits says whether an axis label centred on y stays within the
-// body; a tick at its very foot goes unlabelled rather than cross it.
+// scaled part of the body: a tick at its very foot, or at its top just
+// under the column heads, goes unlabelled rather than cross the rule.
 func (l *layout) axisLabelFits(y float64) bool {
 	base := y + draw.CapHeight(draw.Regular, sizeSmall)/2
-	return base-draw.Ascent(draw.Regular, sizeSmall) >= l.body.Y && base+draw.Descent(draw.Regular, sizeSmall) <= l.body.Bottom()
+	return base-draw.Ascent(draw.Regular, sizeSmall) >= l.plot.Y && base+draw.Descent(draw.Regular, sizeSmall) <= l.body.Bottom()
 }
 
 // minorStep divides a major interval into fifths, or quarters of a 2.
