@@ -16,7 +16,7 @@ import (
 // 3,900 bytes on a 36-ft well), and the 1,200-ft gallery well at
 // 1in=5ft (about 50 log sheets), are refused at layout, quickly and naming the
 // file, instead of drawn on dozens of sheets; the gallery well at
-// 1in=10ft (27 sheets) is drawn.
+// 1in=10ft (25 sheets) is drawn.
 func TestSheetsPerWellBounded(t *testing.T) {
 	mw1, err := os.ReadFile("../../cmd/tremie/demo/wells/MW-1.toml")
 	if err != nil {

@@ -168,7 +168,7 @@ const MaxNotesSheets = 10
 
 // MaxSheets bounds all the sheets of one well, log and notes sheets
 // together (render/sheet bounds the log sheets alone at 30 too): the
-// 1,200-ft gallery well's 27 sheets at 1in=10ft take 2.3 s in SVG, PDF
+// 1,200-ft gallery well's 25 sheets at 1in=10ft take 2.3 s in SVG, PDF
 // and PNG, so the worst well accepted draws in a few seconds.
 const MaxSheets = 30
 

@@ -83,9 +83,10 @@ const (
 	columnHeadH   = 22.0
 	// maxSheets bounds the log sheets of one well, at a scale given or
 	// chosen (the automatic scale turns more detailed for text only up to
-	// it): the 1,200-ft gallery well takes 8 at the automatic scale and 27
-	// at 1in=10ft (2.3 s for SVG, PDF and PNG on 2 busy cores), and 49 at
-	// 1in=5ft are refused, so that no well takes more than a few seconds.
+	// it): the 1,200-ft gallery well takes 8 at the automatic scale and 25
+	// at 1in=10ft (2.3 s for SVG, PDF and PNG on 2 busy cores), and about
+	// 50 at 1in=5ft are refused, so that no well takes more than a few
+	// seconds.
 	maxSheets = 30
 )
 

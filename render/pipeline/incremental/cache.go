@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"errors"
 	"fmt"
+	"github.com/tremie-dev/tremie/schema"
 	"io/fs"
 	"os"
 	"path"
@@ -101,7 +102,7 @@ type fileData struct {
 func Load(outdir string) (*Cache, error) {
 	c := &Cache{dir: outdir, entries: map[string]entry{}, orphans: map[string]bool{}, files: map[string]bool{}}
 	path := filepath.Join(outdir, FileName)
-	data, err := os.ReadFile(path)
+	data, err := schema.ReadInput(path, maxCacheFile)
 	if errors.Is(err, fs.ErrNotExist) {
 		c.replayJournal() // a first run that was interrupted
 		return c, nil

@@ -4,6 +4,7 @@ import (
 	"bufio"
 	"bytes"
 	"encoding/json"
+	"github.com/tremie-dev/tremie/schema"
 	"os"
 	"path/filepath"
 )
@@ -20,6 +21,13 @@ const JournalName = ".tremie-cache.journal"
 // over, and a longer (damaged) line ends the replay instead of growing
 // the buffer without limit.
 const maxJournalLine = 16 << 20
+
+// maxCacheFile bounds the cache file and the journal as read, and they
+// are read only as regular files (schema.ReadInput): a FIFO or a device
+// left under the cache's name must not hang or exhaust a run. A record
+// is a few hundred bytes, so 256 MiB is about a million wells; past it
+// the cache counts as damaged and every well is drawn again.
+const maxCacheFile = 256 << 20
 
 // journalLine is one well's record as drawn, or as forgotten (Forget
 // journals the entry with its hash cleared).
@@ -57,7 +65,7 @@ func (c *Cache) appendJournal(l journalLine) {
 // replayJournal applies a journal left by an interrupted run; a torn
 // last line (the run died while writing it) is ignored.
 func (c *Cache) replayJournal() {
-	data, err := os.ReadFile(filepath.Join(c.dir, JournalName))
+	data, err := schema.ReadInput(filepath.Join(c.dir, JournalName), maxCacheFile)
 	if err != nil || len(data) == 0 {
 		return
 	}
