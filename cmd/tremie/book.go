@@ -29,7 +29,7 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 	if len(rest) != 1 {
 		return fset.usageError("name one project directory")
 	}
-	run, p, wells, code := prepareProject(rest[0], stderr)
+	run, p, wells, code := prepareProject("book", rest[0], stderr)
 	if p == nil {
 		return code
 	}

@@ -34,7 +34,7 @@ func runExport(args []string, stdout, stderr io.Writer) int {
 	if *format != "geojson" && *format != "csv" {
 		return fset.usageError("--format must be geojson or csv, not %q", *format)
 	}
-	_, p, wells, code := prepareProject(rest[0], stderr)
+	_, p, wells, code := prepareProject("export", rest[0], stderr)
 	if p == nil {
 		return code
 	}

@@ -87,3 +87,30 @@ func TestEveryCSVIsInert(t *testing.T) {
 		}
 	}
 }
+
+// TestProjectCommandsNameThemselves: a project command's messages start
+// with its own name (they once all said "tremie project:"), a section
+// asked of a folder without project.toml names the folder, and --wells
+// with one well is a usage error (exit 3), not the project file's.
+func TestProjectCommandsNameThemselves(t *testing.T) {
+	missing := filepath.Join(t.TempDir(), "nosuch")
+	for _, cmd := range []string{"book", "table", "export", "section"} {
+		code, _, errb := runTremie(cmd, missing)
+		if code != exitInput || !strings.HasPrefix(errb, "tremie "+cmd+": ") {
+			t.Errorf("%s on a missing folder: exit %d, stderr %q", cmd, code, errb)
+		}
+	}
+	dir := t.TempDir()
+	os.MkdirAll(filepath.Join(dir, "wells"), 0o755)
+	if err := os.WriteFile(filepath.Join(dir, "wells", "MW-1.toml"), []byte(sealedWell), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	code, _, errb := runTremie("section", dir, "-o", t.TempDir())
+	if code != exitInput || !strings.HasPrefix(errb, "tremie section: "+dir+": ") || !strings.Contains(errb, "--wells") {
+		t.Errorf("section without sections: exit %d, stderr %q", code, errb)
+	}
+	code, _, errb = runTremie("section", dir, "--wells", "MW-1", "-o", t.TempDir())
+	if code != exitUsage || !strings.Contains(errb, "at least two") {
+		t.Errorf("section --wells MW-1: exit %d, stderr %q", code, errb)
+	}
+}

@@ -44,6 +44,9 @@ func runSection(args []string, stdout, stderr io.Writer) int {
 			ids = append(ids, id)
 		}
 	}
+	if len(ids) == 1 {
+		return fset.usageError("--wells names the wells a section joins: at least two, as A,B")
+	}
 	fmts, err := out.ParseFormats(*formats)
 	if err != nil {
 		return fset.usageError("--format: %v", err)
@@ -51,14 +54,18 @@ func runSection(args []string, stdout, stderr io.Writer) int {
 	if _, err := pipeline.PageFor(*pageName, true); err != nil {
 		return fset.usageError("--page: %v", err)
 	}
-	run, p, wells, code := prepareProject(rest[0], stderr)
+	run, p, wells, code := prepareProject("section", rest[0], stderr)
 	if p == nil {
 		return code
 	}
 	code = exitOK // a flawed well still stands in a section
 	docs, inputs, err := pipeline.Sections(p, wells, name, ids, *pageName, run.ProjectDate(p, wells).Format(time.RFC3339))
 	if err != nil {
-		fmt.Fprintf(stderr, "%s: %v\n", p.File, err)
+		where := p.File // the project file whose sections are wrong
+		if where == "" {
+			where = "tremie section: " + rest[0]
+		}
+		fmt.Fprintf(stderr, "%s: %v\n", where, err)
 		code = exitInput
 	}
 	dir := *outDir

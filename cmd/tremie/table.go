@@ -37,7 +37,7 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 	if *format != "csv" && *format != "xlsx" && *format != "md" && *format != "import-xlsx" {
 		return fset.usageError("--format must be csv, xlsx, md or import-xlsx, not %q", *format)
 	}
-	run, p, wells, code := prepareProject(rest[0], stderr)
+	run, p, wells, code := prepareProject("table", rest[0], stderr)
 	if p == nil {
 		return code
 	}
@@ -99,14 +99,14 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 // prepareProject resolves one project directory and prepares its wells,
 // printing every problem; p is nil when nothing can be done, and code is
 // the exit code the wells call for.
-func prepareProject(dir string, stderr io.Writer) (run *pipeline.Run, p *project.Project, wells []*pipeline.Well, code int) {
+func prepareProject(cmd, dir string, stderr io.Writer) (run *pipeline.Run, p *project.Project, wells []*pipeline.Well, code int) {
 	run, p, err := pipeline.ResolveProject(dir, pipeline.Options{Quiet: quiet})
 	if err != nil {
-		printErr(stderr, "project", err)
+		printErr(stderr, cmd, err)
 		return nil, nil, nil, exitInput
 	}
 	for _, e := range run.Problems {
-		printErr(stderr, "project", e)
+		printErr(stderr, cmd, e)
 	}
 	if p == nil || len(run.Inputs) == 0 {
 		return nil, nil, nil, exitInput
@@ -114,7 +114,7 @@ func prepareProject(dir string, stderr io.Writer) (run *pipeline.Run, p *project
 	wells = run.PrepareAll(pipeline.AllRules, "checking")
 	for _, w := range wells {
 		if w.Err != nil {
-			printErr(stderr, "project", w.Err)
+			printErr(stderr, cmd, w.Err)
 		}
 	}
 	return run, p, wells, exitFor(wells, len(run.Problems) > 0)
