@@ -18,15 +18,15 @@ func init() {
 		summary: "make well files from a workbook or CSV files in tremie's import layout (--template FILE.xlsx writes the layout)",
 		run:     runImport,
 		args:    "TABLE.xlsx|WELLS.csv [INTERVALS.csv]",
-		about:   "tremie import --template FILE.xlsx writes the layout.",
+		about:   "Every bad cell is named as file:Sheet!B12 and then nothing is written; an existing well file is\nkept unless --force. The layout is described in docs/import.md.",
 	})
 }
 
 func runImport(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("import", stdout, stderr)
 	outDir := fset.dir("o", "", "`directory` for the well files (required)")
-	template := fset.String("template", "", "write an empty workbook in the import layout, with an example well, to this `file` (- for standard output)")
-	force := fset.Bool("force", false, "overwrite well files that already exist")
+	template := fset.String("template", "", "write the import layout as a workbook, with example well EX-1, to this `file` (- for standard output)")
+	force := fset.Bool("force", false, "overwrite well files (or the --template file) that already exist")
 	rest, code, ok := fset.parse(args)
 	if !ok {
 		return code
@@ -61,7 +61,7 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintln(stderr, e)
 	}
 	if len(errs) > 0 {
-		fmt.Fprintf(stderr, "tremie import: %d problems; nothing written\n", len(errs))
+		fmt.Fprintf(stderr, "tremie import: %d %s; nothing written\n", len(errs), plural(len(errs), "problem", "problems"))
 		return exitInput
 	}
 	paths, existing := exchange.Destinations(*outDir, files)
@@ -69,7 +69,7 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 		for _, p := range existing {
 			fmt.Fprintf(stderr, "%s: exists; --force overwrites it\n", p)
 		}
-		fmt.Fprintf(stderr, "tremie import: %d well files exist; nothing written\n", len(existing))
+		fmt.Fprintf(stderr, "tremie import: %d %s; nothing written\n", len(existing), plural(len(existing), "well file exists", "well files exist"))
 		return exitOutput
 	}
 	if err := os.MkdirAll(*outDir, 0o755); err != nil {

@@ -191,3 +191,29 @@ func TestImportBadCellWritesNothing(t *testing.T) {
 		t.Error("the wells directory was made despite the errors")
 	}
 }
+
+// TestImportCountsInWords: the closing line counts in words that agree
+// with the count ("1 problem", "1 well file exists"), and an existing
+// file is kept (exit 4) until --force.
+func TestImportCountsInWords(t *testing.T) {
+	dir := t.TempDir()
+	out := filepath.Join(dir, "wells")
+	tmpl := filepath.Join(dir, "t.xlsx")
+	if code, _, errb := runTremie("import", "--template", tmpl); code != exitOK {
+		t.Fatalf("template: exit %d %s", code, errb)
+	}
+	if code, _, errb := runTremie("import", tmpl, "-o", out); code != exitOK {
+		t.Fatalf("import: exit %d %s", code, errb)
+	}
+	code, _, errb := runTremie("import", tmpl, "-o", out)
+	if code != exitOutput || !strings.Contains(errb, "tremie import: 1 well file exists; nothing written") {
+		t.Errorf("second import: exit %d\n%s", code, errb)
+	}
+	wells, intervals := filepath.Join(dir, "w.csv"), filepath.Join(dir, "i.csv")
+	os.WriteFile(wells, []byte("well_id,purpose,depth_unit,total_depth\nB-1,monitoring,ft,10\n"), 0o644)
+	os.WriteFile(intervals, []byte("well_id,kind,top,bottom,diameter\nB-1,borehole,0,10,wide\n"), 0o644)
+	code, _, errb = runTremie("import", wells, intervals, "-o", filepath.Join(dir, "other"))
+	if code != exitInput || !strings.Contains(errb, "tremie import: 1 problem; nothing written") {
+		t.Errorf("one bad cell: exit %d\n%s", code, errb)
+	}
+}

@@ -35,7 +35,7 @@ func runRender(args []string, stdout, stderr io.Writer) int {
 	issue := fset.Bool("issue", false, "draw the issued set: no rule IDs or file lines, a revision block and a seal space; wells with unwaived error findings are refused")
 	profilePath := fset.String("profile", "", "rule profile TOML `file` (default: the project's, else the defaults)")
 	yieldsPath := fset.String("yields", "", "TOML `file` with a [yields] table overriding the yields (default: the project's)")
-	textMode := fset.choice("text", "text", []string{"text", "outlines"}, "how SVG and PDF write words: `mode` text (searchable) or outlines (for viewers that ignore embedded fonts)")
+	textMode := fset.choice("text", "text", []string{"text", "outlines"}, "how SVG and PDF write words (`mode`): text, searchable, or outlines, for viewers that ignore embedded fonts")
 	dpi := fset.Float64("dpi", 150, "PNG resolution in `dots` per inch")
 	force := fset.Bool("force", false, "redraw every well, even those unchanged, and replace files tremie did not write")
 	paths, code, ok := fset.parse(args)
