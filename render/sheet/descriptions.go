@@ -59,8 +59,8 @@ func (p *painter) descEntries() []descEntry {
 			continue
 		}
 		label := describe(ly)
-		if _, _, shown := l.columnSymbol(ly, y1-y0); !shown && ly.USCS != "" {
-			label = ly.USCS + ": " + label
+		if sym, _, shown := l.columnSymbol(ly, y1-y0); !shown && sym != "" {
+			label = sym + ": " + label // the group or rock label the column had no room for
 		}
 		var b textBlock
 		b.add(label, draw.Regular, sizeSmall, width)

@@ -94,7 +94,7 @@ func (l *layout) columnSymbol(ly schema.Layer, h float64) (string, float64, bool
 	uc := l.cols.uscs
 	sym := ly.USCS
 	if sym == "" {
-		sym = rockAbbrev(ly.Rock)
+		sym = rockAbbrev(ly)
 	}
 	size := sizeSmall
 	if draw.TextWidth(draw.Bold, size, sym) > uc.W-2 {
@@ -128,18 +128,14 @@ func describe(ly schema.Layer) string {
 // after it, in capitals (granite GRNT, gneiss GNSS, sandstone SNDS), with
 // a lower-case w before it for weathered rock (wGNS). The notes explain
 // every one the sheet uses (rockKey).
-func rockAbbrev(rock string) string {
-	f := strings.Fields(strings.ToLower(rock))
-	if len(f) == 0 {
-		return ""
-	}
+func rockAbbrev(ly schema.Layer) string {
+	name, weathered := rockNaming(ly)
 	prefix, n := "", 4
-	if f[0] == "weathered" && len(f) > 1 {
-		prefix, n, f = "w", 3, f[1:]
+	if weathered {
+		prefix, n = "w", 3
 	}
-	name := strings.Join(f, "")
 	var b []rune
-	for k, r := range name {
+	for k, r := range strings.ReplaceAll(name, " ", "") {
 		if len(b) == n {
 			break
 		}
@@ -147,7 +143,22 @@ func rockAbbrev(rock string) string {
 			b = append(b, r)
 		}
 	}
+	if len(b) == 0 {
+		return ""
+	}
 	return prefix + strings.ToUpper(string(b))
+}
+
+// rockNaming is a layer's rock name without its weathering words and
+// whether the rock is weathered: a qualifier written before the name
+// ("highly weathered granite", "decomposed gneiss") or a weathering
+// grade, any but fresh (the weathering key, when given, over the words).
+func rockNaming(ly schema.Layer) (name string, weathered bool) {
+	name, grade, _ := schema.ParseRock(ly.Rock)
+	if ly.Weathering != "" {
+		grade = ly.Weathering
+	}
+	return name, grade != "" && grade != schema.Fresh
 }
 
 // rockKey explains the rock abbreviations the well's log uses, for the
@@ -156,11 +167,16 @@ func (l *layout) rockKey() string {
 	seen := map[string]bool{}
 	var parts []string
 	for _, ly := range l.w.Lithology {
-		if ly.Rock == "" || seen[ly.Rock] {
+		abbrev := rockAbbrev(ly)
+		if ly.Rock == "" || abbrev == "" || seen[abbrev] {
 			continue
 		}
-		seen[ly.Rock] = true
-		parts = append(parts, rockAbbrev(ly.Rock)+" "+strings.ToLower(ly.Rock))
+		seen[abbrev] = true
+		name, weathered := rockNaming(ly)
+		if weathered {
+			name = "weathered " + name
+		}
+		parts = append(parts, abbrev+" "+name)
 	}
 	if len(parts) == 0 {
 		return ""
