@@ -62,3 +62,29 @@ func TestAmountCellsKeepUnitsWithNumbers(t *testing.T) {
 		t.Fatal("no amounts drawn")
 	}
 }
+
+// TestAmountsNameTheCasingAFillIsIn: a fill placed inside an outer
+// casing says so in the amounts table, as in its component label: TW-7
+// has cement behind its conductor and cement inside it over the same
+// 0–50 ft, which the table once listed as two rows alike but for the
+// material.
+func TestAmountsNameTheCasingAFillIsIn(t *testing.T) {
+	for _, c := range galleryWells(t) {
+		if c.name != "TW-7.toml" {
+			continue
+		}
+		doc := layoutOf(t, c.w, c.in, Options{})
+		var rows []string
+		doc.Pages[0].Walk(func(it draw.Item) {
+			if tx, ok := it.(draw.Text); ok && tx.Role == "amounts-row" {
+				rows = append(rows, tx.S)
+			}
+		})
+		all := strings.Join(rows, " ")
+		if !strings.Contains(all, "in conductor") {
+			t.Errorf("TW-7's amounts do not name the conductor the neat cement is in: %q", all)
+		}
+		return
+	}
+	t.Fatal("no TW-7 among the gallery wells")
+}

@@ -507,6 +507,9 @@ func (l *layout) amountRows() [][]string {
 		if r.Fill.Gradation != "" {
 			name += " " + r.Fill.Gradation
 		}
+		if r.Fill.Within != "" {
+			name += " in " + r.Fill.Within // else two rows may read "0–50 ft Neat cement"
+		}
 		if l.w.IsPlanned() {
 			rows = append(rows, []string{l.interval(r.Fill.Interval), name, l.calculated(r), l.toOrder(r), l.yield(r)})
 			continue
