@@ -281,3 +281,35 @@ func TestDeterministic(t *testing.T) {
 		t.Error("two layouts of one section differ")
 	}
 }
+
+// TestWaterLineStopsShortOfTheFigures: the dashed line joining the day's
+// levels ends before the next well's mark and elevation, which once sat
+// on the line and were struck through (the demo's 381.0 and 371.7).
+func TestWaterLineStopsShortOfTheFigures(t *testing.T) {
+	a := wellAt(t, "A", 0, 0, 100)
+	b := wellAt(t, "B", 300, 400, 90)
+	for _, c := range []struct {
+		w     *schema.Well
+		depth float64
+	}{{a, 20}, {b, 15}} {
+		c.w.WaterLevels = append(c.w.WaterLevels, schema.WaterLevel{Kind: schema.Static, Depth: schema.LengthFrom(c.depth, schema.Feet), Measured: schema.Date{Year: 2026, Month: 3, Day: 20}.Time()})
+	}
+	pg := layoutOf(t, project.Section{Name: "A-A'"}, a, b).Pages[0]
+	var line *draw.Shape
+	pg.Walk(func(it draw.Item) {
+		if s, ok := it.(draw.Shape); ok && s.Role == "section-water-line" {
+			line = &s
+		}
+	})
+	if line == nil {
+		t.Fatal("no water line")
+	}
+	label := texts(pg, "section-water:B")
+	if len(label) != 1 || label[0].S != "75.0" {
+		t.Fatalf("B's water label: %v, want 75.0 (90 - 15 ft)", label)
+	}
+	end := line.Points[len(line.Points)-1]
+	if left := label[0].At.X - draw.TextWidth(draw.Regular, label[0].Size, label[0].S); end.X >= left {
+		t.Errorf("the water line ends at x = %.1f, on B's label %q (from x = %.1f)", end.X, label[0].S, left)
+	}
+}

@@ -77,12 +77,18 @@ func (l *layout) waterItems() []draw.Item {
 		z, ok := l.water.levelOn(p)
 		if ok {
 			y := l.y(z)
-			if prev != nil {
-				items = append(items, draw.Shape{Points: []draw.Point{{X: prev.x + colWidth/2, Y: l.y(prevZ)}, {X: p.x - colWidth/2 - unitBarWidth, Y: y}},
+			// The mark and its elevation stand left of the column; the
+			// line from the neighbour stops short of them, never through
+			// the figures.
+			left := p.x - colWidth/2 - unitBarWidth
+			label := l.elev(z)
+			labelLeft := left - 11 - draw.TextWidth(draw.Regular, sizeSmall, label)
+			if x0, x1 := prev.xRight(), labelLeft-2; prev != nil && x1 > x0 {
+				items = append(items, draw.Shape{Points: []draw.Point{{X: x0, Y: l.y(prevZ)}, {X: x1, Y: y}},
 					Style: draw.Style{Stroke: waterInk, StrokeWidth: 0.9, Dash: []float64{5, 2}}, Role: "section-water-line"})
 			}
-			items = append(items, l.paint(mark, draw.Rect{X: p.x - colWidth/2 - unitBarWidth - 10, Y: y - 5, W: 9, H: 10})...)
-			items = append(items, draw.Text{At: draw.Point{X: p.x - colWidth/2 - unitBarWidth - 11, Y: y - 1}, S: l.elev(z), Size: sizeSmall, Anchor: draw.End, Color: waterInk, Role: "section-water:" + p.w.ID})
+			items = append(items, l.paint(mark, draw.Rect{X: left - 10, Y: y - 5, W: 9, H: 10})...)
+			items = append(items, draw.Text{At: draw.Point{X: left - 11, Y: y - 1}, S: label, Size: sizeSmall, Anchor: draw.End, Color: waterInk, Role: "section-water:" + p.w.ID})
 			prev, prevZ = p, z
 			l.used.waterLine = true
 		} else {
@@ -98,6 +104,15 @@ func (l *layout) waterItems() []draw.Item {
 		}
 	}
 	return items
+}
+
+// xRight is the right edge of a well's column, where the water line to
+// its right neighbour starts; 0 for no well.
+func (p *placed) xRight() float64 {
+	if p == nil {
+		return 0
+	}
+	return p.x + colWidth/2
 }
 
 // otherLevelMark is a small open triangle, apex on the level: a static
