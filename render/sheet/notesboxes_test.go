@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"github.com/tremie-dev/tremie/render/draw"
+	"github.com/tremie-dev/tremie/schema/rules"
 )
 
 // componentHeads are the plain headings of component and description
@@ -84,4 +85,38 @@ func headings(all []draw.Text) []string {
 		prev = tx
 	}
 	return out
+}
+
+// TestNotesSheetSubtitleSaysWhatItHolds: a notes sheet of a well without
+// findings is titled "Notes, continued"; it once announced "Notes and
+// check findings" on the 1,200-ft gallery well, which has none.
+func TestNotesSheetSubtitleSaysWhatItHolds(t *testing.T) {
+	for _, c := range galleryWells(t) {
+		if c.name != "DS-1200.toml" {
+			continue
+		}
+		subtitleOfLast := func(in Inputs) string {
+			doc := layoutOf(t, c.w, in, Options{})
+			var all []string
+			doc.Pages[len(doc.Pages)-1].Walk(func(it draw.Item) {
+				if tx, ok := it.(draw.Text); ok && strings.HasSuffix(tx.S, ", continued") {
+					all = append(all, tx.S)
+				}
+			})
+			return strings.Join(all, " | ")
+		}
+		if len(c.in.Findings) != 0 {
+			t.Fatalf("DS-1200 has %d findings; the test wants a clean well", len(c.in.Findings))
+		}
+		if got := subtitleOfLast(c.in); !strings.Contains(got, "Notes, continued") || strings.Contains(got, "findings") {
+			t.Errorf("clean well's notes sheet: %q, want \"Notes, continued\"", got)
+		}
+		with := c.in
+		with.Findings = []rules.Finding{{Rule: "BOTTOM-CAP", Severity: rules.Warning, Line: 1, WellID: c.w.ID, Message: "no bottom cap recorded"}}
+		if got := subtitleOfLast(with); !strings.Contains(got, "Notes and check findings, continued") {
+			t.Errorf("notes sheet of a well with a finding: %q", got)
+		}
+		return
+	}
+	t.Fatal("no DS-1200 in the gallery")
 }

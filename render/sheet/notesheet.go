@@ -190,7 +190,11 @@ func (l *layout) flowNotesInto(first []draw.Rect, rest draw.Rect, rows [][]strin
 
 // notesSheet draws notes sheet k (0-based) as page n of m.
 func (l *layout) notesSheet(pg *draw.Page, k, n, m int) {
-	pg.Add(l.headerItems(n, m, "Notes and check findings, continued")...)
+	subtitle := "Notes and check findings, continued"
+	if len(l.in.Findings) == 0 { // a clean well's notes sheet holds no findings to announce
+		subtitle = "Notes, continued"
+	}
+	pg.Add(l.headerItems(n, m, subtitle)...)
 	opened := l.bandHoldsNotes() || hasNotesBox(l.freeBoxes) || hasNotesBox(l.stripBoxes)
 	for _, page := range l.notesPages[:k] {
 		opened = opened || hasNotesBox(page)
