@@ -257,3 +257,20 @@ func TestOptionalTables(t *testing.T) {
 		}
 	})
 }
+
+// TestMetricStartersSpeakMetres: the text values of a starter in metres
+// give their distances in metres (the location once read "15 ft east of
+// gate 2" in a file whose every number is metric).
+func TestMetricStartersSpeakMetres(t *testing.T) {
+	imperial := regexp.MustCompile(`^[a-z_]+ = "[^"]*\b\d+(\.\d+)?[ -]?(ft|feet|in|inch)\b`)
+	each(t, func(t *testing.T, o Options, src []byte) {
+		if o.Units != schema.Metres {
+			return
+		}
+		for i, l := range strings.Split(string(src), "\n") {
+			if imperial.MatchString(l) {
+				t.Errorf("line %d gives feet or inches in a metric starter: %s", i+1, l)
+			}
+		}
+	})
+}

@@ -52,7 +52,7 @@ func drillingPart(method string) part {
 
 func locationPart() part {
 	return part{path: "location", vals: []value{
-		same("description", "north fence line, 15 ft east of gate 2", fill),
+		per("description", "north fence line, 15 ft east of gate 2", "north fence line, 5 m east of gate 2", fill),
 		same("latitude", 37.7000, fill),
 		same("longitude", -121.5800, fill),
 	}}
@@ -148,7 +148,7 @@ func monitoringParts(o Options, planned bool) []part {
 			with([]value{same("material", "fine-sand", keep), same("gradation", "30/70", fill), same("method", "poured", fill)},
 				amounts(bags(1, 1, 50, 25)...)...)...)},
 		{path: "fill", array: true, note: "The bentonite seal above the pack.", vals: with(iv(18.5, 21.5, 5.6, 6.55),
-			with([]value{same("material", "bentonite-chips", keep), same("product", "3/8-in chips, hydrated in lifts", fill), same("method", "poured", fill)},
+			with([]value{same("material", "bentonite-chips", keep), per("product", "3/8-in chips, hydrated in lifts", "10 mm chips, hydrated in lifts", fill), same("method", "poured", fill)},
 				amounts(bags(2, 2, 50, 25)...)...)...)},
 		{path: "fill", array: true, note: "Grout from the seal to below the pad.", vals: with(iv(1.5, 18.5, 0.45, 5.6),
 			with([]value{same("material", "cement-bentonite", keep), same("method", "tremie", fill)},
@@ -158,7 +158,7 @@ func monitoringParts(o Options, planned bool) []part {
 	}
 	parts = append(parts, lithologyParts(
 		with(iv(0, 17, 0, 5.2), same("uscs", "SM", fill), same("description", "Silty SAND, fine, light olive brown, moist", fill)),
-		with(iv(17, 36, 5.2, 11.0), same("uscs", "SP", fill), same("description", "Poorly graded SAND, fine to medium, grey, wet below 26 ft", fill)),
+		with(iv(17, 36, 5.2, 11.0), same("uscs", "SP", fill), per("description", "Poorly graded SAND, fine to medium, grey, wet below 26 ft", "Poorly graded SAND, fine to medium, grey, wet below 8 m", fill)),
 	)...)
 	if !planned {
 		parts = append(parts, part{path: "water_level", array: true, vals: []value{
@@ -257,7 +257,7 @@ func supplyWell(o Options) []part {
 		drillingPart("mud rotary"),
 		locationPart(),
 		elevationPart(415.0, 416.5, 126.5, 126.95),
-		{path: "borehole", array: true, vals: with(iv(0, 120, 0, 36.0), per("diameter", 14.0, 356.0, fill), same("method", "mud rotary, 14-in bit", fill))},
+		{path: "borehole", array: true, vals: with(iv(0, 120, 0, 36.0), per("diameter", 14.0, 356.0, fill), per("method", "mud rotary, 14-in bit", "mud rotary, 356 mm bit", fill))},
 		{path: "string", array: true, vals: []value{same("name", o.ID, keep), same("top_cap", "sanitary well seal with vent", fill), same("bottom_cap", "welded steel bottom plate", fill)}},
 		{path: "string.section", array: true, note: "The casing (riser), from its stick-up down to the screen.", vals: with([]value{same("kind", "riser", keep)},
 			with(iv(-1.5, 80, -0.45, 24.0), same("material", "carbon steel", fill), per("size", "6", "DN150", fill), same("schedule", "40", fill), same("joint", "welded", fill))...)},
