@@ -448,8 +448,10 @@ func (l *layout) bandItems(p *painter, i int) []draw.Item {
 	more := ""
 	where := l.continuesWhere(i, false)
 	switch {
-	case len(bp.overflow) > 0:
+	case len(bp.overflow) > 0 && len(l.in.Findings) > 0:
 		more = fmt.Sprintf("Notes and findings continue %s.", where)
+	case len(bp.overflow) > 0:
+		more = fmt.Sprintf("Notes continue %s.", where) // no findings to announce
 	case len(l.calloutOverflow) > 0:
 		more = fmt.Sprintf("Notes continue %s.", where)
 	}
