@@ -100,7 +100,11 @@ func (s *summary) newPage(n int) *draw.Page {
 	}
 	width := in.Width - 2*m
 	pg.Add(txt(m, m+24, fitText(sub, sizeText, width), draw.Regular, sizeText, draw.Start, grey, "summary:subtitle"))
-	pg.Add(txt(m, m+33, fitText(joinNonEmpty(" · ", count, north, "each hole taken as vertical"), sizeText, width), draw.Regular, sizeText, draw.Start, grey, "summary:subtitle"))
+	vertical := "the hole taken as vertical"
+	if len(wells) > 1 {
+		vertical = "each hole taken as vertical"
+	}
+	pg.Add(txt(m, m+33, fitText(joinNonEmpty(" · ", count, north, vertical), sizeText, width), draw.Regular, sizeText, draw.Start, grey, "summary:subtitle"))
 	pg.Add(draw.Shape{Style: draw.Style{Stroke: ink, StrokeWidth: 0.8}, Points: []draw.Point{{X: m, Y: m + 38}, {X: in.Width - m, Y: m + 38}}})
 	lines := draw.Wrap(draw.Italic, 6, Caution+" Figures and checks are from the well files as written.", in.Width-2*m)
 	for i, l := range lines {

@@ -131,3 +131,29 @@ func TestLookSummary(t *testing.T) {
 	}
 	os.WriteFile(filepath.Join(dir, "BR-1-features.png"), png, 0o644)
 }
+
+// TestSummarySubtitleCountsHoles: the page of one well takes "the hole"
+// as vertical, a project's page "each hole" (the one well's page once
+// read "each hole taken as vertical").
+func TestSummarySubtitleCountsHoles(t *testing.T) {
+	rows, w := demoRows(t)
+	subtitle := func(in SummaryInput) string {
+		var s []string
+		Summary(in).Pages[0].Walk(func(it draw.Item) {
+			if v, ok := it.(draw.Text); ok && v.Role == "summary:subtitle" {
+				s = append(s, v.S)
+			}
+		})
+		return strings.Join(s, " | ")
+	}
+	if got := subtitle(SummaryInput{Title: w.ID, Rows: rows}); !strings.Contains(got, "the hole taken as vertical") {
+		t.Errorf("one well: %q", got)
+	}
+	other := append([]Row(nil), rows...)
+	for i := range other {
+		other[i].WellID = "BR-9"
+	}
+	if got := subtitle(SummaryInput{Title: "site", Rows: append(rows, other...), Project: true}); !strings.Contains(got, "in 2 wells") || !strings.Contains(got, "each hole taken as vertical") {
+		t.Errorf("two wells: %q", got)
+	}
+}
