@@ -70,9 +70,10 @@ func (l *layout) axes() []draw.Item {
 		if v < -1e-9 {
 			continue
 		}
+
 		items = append(items,
 			draw.Shape{Points: []draw.Point{{X: x, Y: by}, {X: x, Y: by + 4}}, Style: draw.Style{Stroke: ink, StrokeWidth: 0.5}},
-			draw.Text{At: draw.Point{X: x, Y: by + 4 + sizeLabel}, S: schema.TrimFloat(v, 0), Size: sizeLabel, Anchor: draw.Middle, Color: ink, Role: "section-dist-tick"},
+			draw.Text{At: draw.Point{X: x, Y: by + 4 + sizeLabel}, S: distanceLabel(v), Size: sizeLabel, Anchor: draw.Middle, Color: ink, Role: "section-dist-tick"},
 		)
 	}
 	items = append(items, draw.Text{At: draw.Point{X: l.plot.X + l.plot.W/2, Y: by + footHeight - 8}, S: "Distance along section, " + string(l.u), Size: sizeLabel, Anchor: draw.Middle, Color: ink, Role: "section-dist-title"})
@@ -84,6 +85,16 @@ func (l *layout) axes() []draw.Item {
 		)
 	}
 	return items
+}
+
+// distanceLabel writes a round distance, 0 as "0": the first tick of an
+// axis that starts just left of the first well is the ceiling of a small
+// negative number, a negative zero that would read "-0".
+func distanceLabel(v float64) string {
+	if math.Abs(v) < 1e-9 {
+		v = 0
+	}
+	return schema.TrimFloat(v, 0)
 }
 
 // endLetters splits a name such as "A-A'" or "B–B′" into its two ends.

@@ -69,6 +69,33 @@ func Layout(in Input) (*draw.Document, error) {
 	return &draw.Document{Title: title, Subject: "Hydrogeological cross-section", Date: in.Date, Pages: []*draw.Page{page}}, nil
 }
 
+// differing names, when the wells give more than one value of a key
+// (case and spaces aside; wells without one are taken to agree), each
+// value with its wells: "DHHN2016: EU-2; NAVD88: NW-3, PL-4"; else "".
+func differing(wells []*schema.Well, key func(*schema.Well) string) string {
+	var order []string
+	ids := map[string][]string{}
+	for _, w := range wells {
+		v := strings.TrimSpace(key(w))
+		if v == "" {
+			continue
+		}
+		k := strings.ToUpper(strings.Join(strings.Fields(v), ""))
+		if _, ok := ids[k]; !ok {
+			order = append(order, v)
+		}
+		ids[k] = append(ids[k], w.ID)
+	}
+	if len(order) < 2 {
+		return ""
+	}
+	var parts []string
+	for _, v := range order {
+		parts = append(parts, v+": "+strings.Join(ids[strings.ToUpper(strings.Join(strings.Fields(v), ""))], ", "))
+	}
+	return strings.Join(parts, "; ")
+}
+
 // place finds each well's plan position, its distance along the line
 // and its offset, refusing wells without a ground elevation or
 // coordinates (all of them named at once).
@@ -103,6 +130,16 @@ func place(in Input) ([]*placed, polyline, string, error) {
 	}
 	if len(msgs) == 0 && !allEN && !allLL {
 		msgs = append(msgs, "some wells give only easting/northing and others only latitude/longitude; give every well of a section the same kind")
+	}
+	// One elevation axis and one plan need one vertical datum and, for
+	// easting/northing, one reference system.
+	if d := differing(in.Wells, func(w *schema.Well) string { return w.Elevation.Datum }); d != "" {
+		msgs = append(msgs, "the wells' elevations are above different datums ("+d+"); a section hangs them on one axis")
+	}
+	if allEN {
+		if d := differing(in.Wells, func(w *schema.Well) string { return w.Location.CRS }); d != "" {
+			msgs = append(msgs, "the wells' easting/northing are in different reference systems ("+d+"); a section measures distances on one")
+		}
 	}
 	if len(msgs) > 0 {
 		return nil, nil, "", fmt.Errorf("%w: %s", ErrUnplaceable, strings.Join(msgs, "; "))

@@ -313,3 +313,47 @@ func TestWaterLineStopsShortOfTheFigures(t *testing.T) {
 		t.Errorf("the water line ends at x = %.1f, on B's label %q (from x = %.1f)", end.X, label[0].S, left)
 	}
 }
+
+// TestRefusesMixedDatumsAndSystems: wells whose elevations stand on
+// different vertical datums, or whose easting/northing are in different
+// reference systems, are not hung on one axis or measured on one plan
+// (a metric well on DHHN2016 was once drawn 100,000 ft from two on
+// NAVD88, under the axis "Elevation, ft NAVD88"); one spelling of a
+// datum in other case or spacing still agrees.
+func TestRefusesMixedDatumsAndSystems(t *testing.T) {
+	a := wellAt(t, "A", 0, 0, 100)
+	b := wellAt(t, "B", 300, 400, 90)
+	c := wellAt(t, "C", 600, 800, 95)
+	a.Elevation.Datum, b.Elevation.Datum, c.Elevation.Datum = "NAVD88", "navd 88", "DHHN2016"
+	a.Location.CRS, b.Location.CRS, c.Location.CRS = "EPSG:2227", "EPSG:2227", "EPSG:32611"
+	_, err := Layout(Input{Section: project.Section{Name: "X", Wells: []string{"A", "B", "C"}, CoordinateUnit: "ft"}, Wells: []*schema.Well{a, b, c}})
+	if !errors.Is(err, ErrUnplaceable) {
+		t.Fatalf("err = %v, want ErrUnplaceable", err)
+	}
+	for _, want := range []string{"different datums (NAVD88: A, B; DHHN2016: C)", "different reference systems (EPSG:2227: A, B; EPSG:32611: C)"} {
+		if !strings.Contains(err.Error(), want) {
+			t.Errorf("error %q lacks %q", err, want)
+		}
+	}
+	c.Elevation.Datum, c.Location.CRS = "", "epsg:2227"
+	if _, err := Layout(Input{Section: project.Section{Name: "X", Wells: []string{"A", "B", "C"}, CoordinateUnit: "ft"}, Wells: []*schema.Well{a, b, c}}); err != nil {
+		t.Errorf("one datum and one system: %v", err)
+	}
+}
+
+// TestDistanceAxisWritesNoMinusZero: the first round distance of an axis
+// starting just left of the first well, math.Ceil of a small negative
+// number times the step, is a negative zero; it is written "0" (a
+// section of the gallery's NW-3, PL-4 and EU-2 once showed "-0").
+func TestDistanceAxisWritesNoMinusZero(t *testing.T) {
+	negZero := math.Ceil(-0.4) * 10000
+	if got := distanceLabel(negZero); got != "0" {
+		t.Errorf("distanceLabel(%v) = %q, want \"0\"", negZero, got)
+	}
+	if got := distanceLabel(-1e-12); got != "0" {
+		t.Errorf("distanceLabel(-1e-12) = %q", got)
+	}
+	if got := distanceLabel(2500); got != "2500" {
+		t.Errorf("distanceLabel(2500) = %q", got)
+	}
+}
