@@ -263,3 +263,54 @@ func TestTallyReadsAsWords(t *testing.T) {
 		t.Errorf("tally %q", got)
 	}
 }
+
+// TestCleanBookSaysNoFindings: a book of wells without findings says so
+// under "Findings and waivers" instead of printing the table's head over
+// no rows.
+func TestCleanBookSaysNoFindings(t *testing.T) {
+	bin, err := exec.LookPath("pdftotext")
+	if err != nil {
+		t.Skip("pdftotext not installed")
+	}
+	in, _ := demoInput(t)
+	var wells []Well
+	var entries []table.Entry
+	for _, w := range in.Wells {
+		if len(w.Findings) > 0 || w.Problem != "" {
+			continue
+		}
+		data, err := demo.FS.ReadFile(w.File)
+		if err != nil {
+			t.Fatal(err)
+		}
+		sw, err := schema.Load(w.File, data)
+		if err != nil {
+			t.Fatal(err)
+		}
+		project.Apply(in.Project, sw)
+		wells = append(wells, w)
+		entries = append(entries, table.Entry{File: w.File, Well: sw})
+	}
+	if len(wells) < 2 {
+		t.Fatalf("%d clean demo wells", len(wells))
+	}
+	in.Wells = wells
+	in.Table = table.Build(entries, in.Project.Units)
+	pdf, err := Build(in)
+	if err != nil {
+		t.Fatal(err)
+	}
+	path := filepath.Join(t.TempDir(), "book.pdf")
+	os.WriteFile(path, pdf, 0o644)
+	out, err := exec.Command(bin, "-layout", path, "-").Output()
+	if err != nil {
+		t.Fatal(err)
+	}
+	text := strings.Join(strings.Fields(string(out)), " ")
+	if !strings.Contains(text, "Findings and waivers") || !strings.Contains(text, "No well has a finding, and none is waived.") {
+		t.Errorf("the findings page does not say there are none:\n%s", text)
+	}
+	if strings.Contains(text, "Line Finding") || strings.Contains(text, "not listed") {
+		t.Errorf("the findings page prints a table head or says what it leaves out of no rows:\n%s", text)
+	}
+}

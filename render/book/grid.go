@@ -40,6 +40,7 @@ type grid struct {
 	intro   string    // printed under the heading on the first page
 	bottom  float64   // lowest y a row may reach
 	shade   bool
+	bare    bool // no rows to come: the page has no column header
 }
 
 func newGrid(f *doc, heading string, cols []gridCol, size float64) *grid {
@@ -121,6 +122,9 @@ func (g *grid) page(continued bool) {
 		f.MultiCell(0, 4, g.intro, "", "L", false)
 	}
 	f.Ln(1)
+	if g.bare {
+		return
+	}
 	f.SetFont(family, "B", g.size)
 	f.SetFillColor(225, 230, 236)
 	g.cells(titles(g.cols), true)

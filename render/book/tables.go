@@ -81,6 +81,11 @@ func typesetTables(in Input, first int) ([]byte, int, int, error) {
 	}
 	fg := newGrid(f, "Findings and waivers", fcols, 7)
 	fg.intro = tally(in)
+	if !anyFindingRows(in) {
+		// A table head over no rows reads as if rows went missing.
+		fg.intro = countWells(in) + " No well has a finding, and none is waived."
+		fg.bare = true
+	}
 	fg.page(false)
 	for _, w := range in.Wells {
 		if w.Problem != "" && w.Sheets == nil {
@@ -122,8 +127,15 @@ func typesetTables(in Input, first int) ([]byte, int, int, error) {
 var statusWords = map[table.Status]string{table.Clean: "clean", table.Warnings: "with warnings", table.Errors: "with errors",
 	table.Waived: "waived", table.Planned: "planned", table.Unreadable: "unreadable"}
 
-// tally counts the wells by check status.
+// tally counts the wells by check status and says what the findings
+// table lists.
 func tally(in Input) string {
+	return countWells(in) + " Wells without findings are not listed. A waived finding is listed with its waiver and no longer fails the check."
+}
+
+// countWells counts the wells by check status: "8 wells: 4 clean, 1 with
+// errors, ...".
+func countWells(in Input) string {
 	counts := map[table.Status]int{}
 	for i, r := range in.Table.Rows {
 		if in.Table.FirstOfWell(i) {
@@ -136,7 +148,18 @@ func tally(in Input) string {
 			parts = append(parts, fmt.Sprintf("%d %s", counts[s], statusWords[s]))
 		}
 	}
-	return fmt.Sprintf("%d wells: %s.", in.Table.Wells(), strings.Join(parts, ", ")) + " Wells without findings are not listed. A waived finding is listed with its waiver and no longer fails the check."
+	return fmt.Sprintf("%d wells: %s.", in.Table.Wells(), strings.Join(parts, ", "))
+}
+
+// anyFindingRows reports whether the findings table has a row: a
+// finding, or a well that could not be drawn.
+func anyFindingRows(in Input) bool {
+	for _, w := range in.Wells {
+		if len(w.Findings) > 0 || (w.Problem != "" && w.Sheets == nil) {
+			return true
+		}
+	}
+	return false
 }
 
 // footer numbers pages from first and names the project.
