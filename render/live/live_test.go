@@ -142,7 +142,7 @@ func TestRefreshIsIncremental(t *testing.T) {
 			m = w
 		}
 	}
-	if m == nil || !strings.Contains(string(m.Sheets[0]), "reddish") {
+	if m == nil || !strings.Contains(string(m.Sheets[0].SVG), "reddish") {
 		t.Fatal("MW-1 not redrawn with the change")
 	}
 	os.WriteFile(mw1, append([]byte(strings.Replace(string(src), "dark brown", "reddish brown", 1)), "x = = 1\n"...), 0o644)
@@ -235,7 +235,7 @@ func TestWallImageRedrawsItsWell(t *testing.T) {
 			if len(w.Images) != 1 {
 				t.Fatalf("BR-1 names %v as its images, want its one wall image", w.Images)
 			}
-			before = w.Sheets[0]
+			before = w.Sheets[0].SVG
 		}
 	}
 	img := filepath.Join(dir, "wells", "BR-1-wall.png")
@@ -271,7 +271,7 @@ func TestWallImageRedrawsItsWell(t *testing.T) {
 		t.Errorf("wells redrawn per refresh %v, want [0 1]", redrawn)
 	}
 	for _, w := range s.wells {
-		if w.ID == "BR-1" && bytes.Equal(w.Sheets[0], before) {
+		if w.ID == "BR-1" && bytes.Equal(w.Sheets[0].SVG, before) {
 			t.Error("BR-1's sheet is the same after its wall image changed")
 		}
 	}

@@ -36,7 +36,7 @@ func quantityRows(r *quantity.Report) []qrow {
 		if row.Recorded {
 			q.Placed = quantity.FormatVolume(row.Placed, u)
 			if row.BagsPlaced > 0 {
-				q.Placed = strconv.FormatFloat(row.BagsPlaced, 'f', -1, 64) + " bags, " + q.Placed
+				q.Placed = bagsText(row.BagsPlaced) + ", " + q.Placed
 			}
 		}
 		if row.Ratio > 0 {
@@ -47,9 +47,18 @@ func quantityRows(r *quantity.Report) []qrow {
 	return out
 }
 
+// bagsText counts bags: "1 bag", "1.5 bags", "9 bags".
+func bagsText(n float64) string {
+	if n == 1 {
+		return "1 bag"
+	}
+	return strconv.FormatFloat(n, 'f', -1, 64) + " bags"
+}
+
 var pageTemplate = template.Must(template.New("page").Funcs(template.FuncMap{
 	"qrows": quantityRows,
 	"base":  filepath.Base,
+	"inc":   func(n int) int { return n + 1 },
 }).Parse(pageHTML))
 
 const pageHTML = `<!doctype html>
@@ -66,7 +75,7 @@ td,th{padding:.15em .6em;text-align:left;border-bottom:1px solid #ddd}
 .st{display:inline-block;padding:0 .5em;border-radius:.8em;font-size:.85em;font-weight:600}
 .st.clean{background:#d7efd9;color:#1b5e20}.st.warnings{background:#fff1c9;color:#7a5300}
 .st.errors{background:#fbd5d1;color:#8c1d18}.st.planned{background:#dde7f6;color:#1f3f77}
-section.well{background:#fff;margin:1.2em 0;padding:.6em 1em;border-radius:6px;box-shadow:0 1px 3px #0002}
+section.well{scroll-margin-top:3em;background:#fff;margin:1.2em 0;padding:.6em 1em;border-radius:6px;box-shadow:0 1px 3px #0002}
 section.well h2{margin:.2em 0}section.well h2 small{font-weight:normal;color:#777;font-size:.6em}
 li.error code,li.warning code,li.waived code{color:#555}
 li.error b{color:#8c1d18}li.warning b{color:#7a5300}li.waived b{color:#666}
@@ -110,12 +119,12 @@ li.error b{color:#8c1d18}li.warning b{color:#7a5300}li.waived b{color:#666}
 {{define "body"}}<div id="body" data-version="{{.Version}}">
 {{range .Problems}}<div class="problem"><code>{{.}}</code></div>{{end}}
 <table class="index"><tr><th>well</th><th>status</th><th>file</th><th>findings</th></tr>
-{{range $i, $w := .Wells}}<tr><td><a href="#w{{$i}}">{{or $w.ID $w.Key}}</a></td><td><span class="st {{$w.Status}}">{{$w.Status}}</span></td><td>{{$w.Key}}</td><td>{{if $w.Problems}}cannot read{{else}}{{len $w.Findings}}{{end}}</td></tr>
+{{range $i, $w := .Wells}}<tr><td><a href="#w{{$i}}">{{or $w.ID $w.Key}}</a></td><td><span class="st {{$w.Status}}">{{$w.Status}}</span></td><td>{{$w.Key}}</td><td>{{if $w.Problems}}input error{{else}}{{len $w.Findings}}{{end}}</td></tr>
 {{end}}</table>
 {{range $i, $w := .Wells}}
 <section class="well" id="w{{$i}}" data-key="{{$w.Key}}" data-v="{{$w.Version}}" data-id="{{$w.ID}}">
 <h2>{{or $w.ID $w.Key}} <span class="st {{$w.Status}}">{{$w.Status}}</span> <small>{{$w.Key}}</small></h2>
-{{if $w.Problems}}<div class="problems"><b>This file cannot be read; the sheet returns when it is fixed.</b>
+{{if $w.Problems}}<div class="problems"><b>This well cannot be checked or drawn; its sheet returns when this is fixed.</b>
 <ul>{{range $w.Problems}}<li><code>{{.Error}}</code></li>{{end}}</ul></div>
 {{else}}
 <h3>Findings</h3>
@@ -124,7 +133,7 @@ li.error b{color:#8c1d18}li.warning b{color:#7a5300}li.waived b{color:#666}
 {{with qrows $w.Quantities}}<h3>Quantities</h3>
 <table class="qty"><tr><th>#</th><th>material</th><th>interval</th><th>calculated</th><th>bags needed</th><th>placed</th><th>placed / calculated</th></tr>
 {{range .}}<tr><td>{{.Label}}</td><td>{{.Material}}</td><td>{{.Interval}}</td><td>{{.Calculated}}</td><td>{{.Needed}}</td><td>{{.Placed}}</td><td>{{.Ratio}}</td></tr>{{end}}</table>{{end}}
-<div class="sheets">{{range $n, $_ := $w.Sheets}}<img src="/sheet/{{$i}}/{{$n}}.svg?v={{$w.Version}}" alt="sheet {{$n}} of {{$w.ID}}" style="aspect-ratio: {{$.Aspect}}" loading="lazy">{{end}}</div>
+<div class="sheets">{{$count := len $w.Sheets}}{{range $n, $sh := $w.Sheets}}<img src="/sheet/{{$i}}/{{$n}}.svg?v={{$w.Version}}" alt="{{$w.ID}}, sheet {{inc $n}} of {{$count}}" style="aspect-ratio: {{$sh.Aspect}}" loading="lazy">{{end}}</div>
 {{end}}
 </section>
 {{end}}

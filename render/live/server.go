@@ -11,6 +11,8 @@ import (
 	"strings"
 	"sync"
 	"time"
+
+	"github.com/tremie-dev/tremie/render/pipeline"
 )
 
 // Server holds a project's wells as last prepared and the pages watching
@@ -57,6 +59,9 @@ func (s *Server) Refresh() {
 	s.mu.Lock()
 	prev := map[string]*Well{}
 	for _, w := range s.wells {
+		if w.prepared != nil {
+			w = w.prepared
+		}
 		prev[w.Path] = w
 	}
 	s.mu.Unlock()
@@ -64,6 +69,7 @@ func (s *Server) Refresh() {
 	redrawn := 0
 	if st.run != nil {
 		for _, in := range st.run.Inputs {
+			in.Key = s.keyOf(in)
 			w := prepare(st, in, prev[in.Path])
 			if w != prev[in.Path] {
 				redrawn++
@@ -71,6 +77,7 @@ func (s *Server) Refresh() {
 			wells = append(wells, w)
 		}
 	}
+	markDuplicateIDs(wells)
 	s.mu.Lock()
 	changed := redrawn > 0 || len(wells) != len(s.wells) || errText(problems) != errText(s.problems)
 	s.settings, s.wells, s.problems = st, wells, problems
@@ -94,6 +101,18 @@ func (s *Server) Refresh() {
 	if s.Prepared != nil {
 		s.Prepared(redrawn)
 	}
+}
+
+// keyOf names a well file as the page shows it: relative to its project
+// (the pipeline's key), or for a folder of wells without a project file,
+// relative to the folder served rather than by its full path.
+func (s *Server) keyOf(in pipeline.Input) string {
+	if filepath.IsAbs(filepath.FromSlash(in.Key)) {
+		if rel, err := filepath.Rel(s.dir, in.Path); err == nil && filepath.IsLocal(rel) {
+			return filepath.ToSlash(rel)
+		}
+	}
+	return in.Key
 }
 
 // Problems is every problem of the project's input files as last read:
@@ -129,19 +148,12 @@ type snapshot struct {
 	Version  uint64
 	Wells    []*Well
 	Problems []error
-	Aspect   string // the sheets' width / height, to hold their place while they load
 }
 
 func (s *Server) snapshot() snapshot {
 	s.mu.Lock()
 	defer s.mu.Unlock()
-	snap := snapshot{Dir: s.dir, Version: s.version, Wells: s.wells, Problems: s.problems, Aspect: "8.5 / 11"}
-	if st := s.settings; st != nil && st.run != nil && len(st.run.Settings) > 0 {
-		if pg := st.run.Settings[0].Page; pg.Width > 0 && pg.Height > 0 {
-			snap.Aspect = fmt.Sprintf("%g / %g", pg.Width, pg.Height)
-		}
-	}
-	return snap
+	return snapshot{Dir: s.dir, Version: s.version, Wells: s.wells, Problems: s.problems}
 }
 
 // Handler serves the page, its parts and the sheets. Every path it
@@ -184,7 +196,7 @@ func (s *Server) serveSheet(w http.ResponseWriter, r *http.Request) {
 	w.Header().Set("Content-Type", "image/svg+xml")
 	w.Header().Set("Cache-Control", "no-cache")
 	w.Header().Set("ETag", `"`+snap.Wells[i].Version+`"`)
-	w.Write(snap.Wells[i].Sheets[n])
+	w.Write(snap.Wells[i].Sheets[n].SVG)
 }
 
 // serveEvents streams one event per change to an open page.

@@ -11,6 +11,7 @@ import (
 	"crypto/sha256"
 	"errors"
 	"fmt"
+	"html/template"
 	"strings"
 
 	"github.com/tremie-dev/tremie/render/out"
@@ -40,7 +41,7 @@ type Well struct {
 	Problems   schema.ErrorList // why it could not be read or parsed; then no sheet
 	Findings   []rules.Finding
 	Quantities *quantity.Report
-	Sheets     [][]byte // SVG, one per sheet
+	Sheets     []Sheet
 	// Thresholds names the rule thresholds the well was checked with:
 	// the defaults, or the profile in force with its file and code.
 	Thresholds string
@@ -49,6 +50,19 @@ type Well struct {
 	// Version, so that a changed image redraws the sheet, and their
 	// folders are watched.
 	Images []string
+	// idLine is the line of well.id, for the error naming a well that
+	// shares its ID; prepared is the well as drawn when this is such an
+	// error laid over it, kept so that an unchanged file is not drawn again.
+	idLine   int
+	prepared *Well
+}
+
+// Sheet is one drawn sheet.
+type Sheet struct {
+	SVG []byte
+	// Aspect is the sheet's "width / height", to hold its place on the
+	// page while it loads (a number pair, safe as CSS).
+	Aspect template.CSS
 }
 
 // settings reads the project through the pipeline: its wells, each with
@@ -122,6 +136,7 @@ func prepare(st *settings, in pipeline.Input, prev *Well) *Well {
 	w.Images = wallimage.Paths(in.Path, pw.Well)
 	w.Version = versionOf(w.Images)
 	w.ID = pw.ID
+	w.idLine = pw.Well.Line("well.id")
 	note := in.Setting.Profile.ThresholdNote() // "rule thresholds ..."
 	w.Thresholds = strings.ToUpper(note[:1]) + note[1:]
 	w.Quantities = pw.Quantities
@@ -143,7 +158,8 @@ func prepare(st *settings, in pipeline.Input, prev *Well) *Well {
 			w.Problems = problemsOf(err, in)
 			return w
 		}
-		w.Sheets = append(w.Sheets, svg)
+		pg := doc.Pages[i]
+		w.Sheets = append(w.Sheets, Sheet{SVG: svg, Aspect: template.CSS(fmt.Sprintf("%g / %g", pg.Width, pg.Height))})
 	}
 	return w
 }
@@ -169,6 +185,28 @@ func problemsOf(err error, in pipeline.Input) schema.ErrorList {
 		out[i] = &c
 	}
 	return out
+}
+
+// markDuplicateIDs shows every well sharing its ID with another as an
+// input error naming the others (pipeline.DuplicateIDs), as every other
+// command does; the wells as drawn are kept beneath for the next refresh.
+func markDuplicateIDs(wells []*Well) {
+	var ids []pipeline.IDAt
+	var of []int
+	for i, w := range wells {
+		if w.Problems == nil && w.ID != "" {
+			ids = append(ids, pipeline.IDAt{File: w.Key, ID: w.ID, Line: w.idLine})
+			of = append(of, i)
+		}
+	}
+	for k, e := range pipeline.DuplicateIDs(ids) {
+		if e == nil {
+			continue
+		}
+		w := wells[of[k]]
+		wells[of[k]] = &Well{Key: w.Key, Path: w.Path, ID: w.ID, Status: Errors, Problems: schema.ErrorList{e},
+			Version: fmt.Sprintf("%.16x", sha256.Sum256([]byte(w.Version+e.Error()))), Images: w.Images, prepared: w}
+	}
 }
 
 func statusOf(w *schema.Well, findings []rules.Finding) Status {

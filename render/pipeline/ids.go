@@ -7,46 +7,67 @@ import (
 	"github.com/tremie-dev/tremie/schema"
 )
 
-// markDuplicateIDs turns every well whose ID another well of the run
-// also has (compared without case, as file names are) into an input
-// error naming each file and line: a backup copy left beside a well file
-// must not take over its sheets or enter the tables twice. None of them
-// is judged, since which is the true one is the user's call.
-func markDuplicateIDs(wells []*Well) {
-	byID := map[string][]*Well{}
+// IDAt is a well's ID where its file gives it.
+type IDAt struct {
+	File string // as the error should name it
+	ID   string
+	Line int // of well.id
+}
+
+// DuplicateIDs gives, for each well whose ID another of the list also
+// has (compared without case, as file names are), the input error naming
+// each other file and line; nil for a well whose ID is its own. A backup
+// copy left beside a well file must not take over its sheets or enter the
+// tables twice, and which is the true one is the user's call.
+func DuplicateIDs(ids []IDAt) []*schema.Error {
+	errs := make([]*schema.Error, len(ids))
+	byID := map[string][]int{}
 	var order []string
-	for _, w := range wells {
-		if w.Err != nil || w.Well == nil {
-			continue
-		}
-		k := strings.ToLower(strings.TrimSpace(w.Well.ID))
+	for i, x := range ids {
+		k := strings.ToLower(strings.TrimSpace(x.ID))
 		if k == "" {
 			continue
 		}
 		if _, ok := byID[k]; !ok {
 			order = append(order, k)
 		}
-		byID[k] = append(byID[k], w)
+		byID[k] = append(byID[k], i)
 	}
 	for _, k := range order {
 		same := byID[k]
 		if len(same) < 2 {
 			continue
 		}
-		lines := make([]int, len(same))
-		for i, w := range same {
-			lines[i] = w.Well.Line("well.id")
-		}
-		for i, w := range same {
+		for _, i := range same {
 			var others []string
-			for j, o := range same {
+			for _, j := range same {
 				if j != i {
-					others = append(others, fmt.Sprintf("%s:%d", o.Path, lines[j]))
+					others = append(others, fmt.Sprintf("%s:%d", ids[j].File, ids[j].Line))
 				}
 			}
-			w.Err = schema.ErrorList{&schema.Error{File: w.Path, Line: lines[i], Key: "well.id",
-				Msg: fmt.Sprintf("well ID %q is also the ID of %s: each well needs its own ID (rename or move the copy)", w.Well.ID, strings.Join(others, ", "))}}
-			w.Well = nil
+			errs[i] = &schema.Error{File: ids[i].File, Line: ids[i].Line, Key: "well.id",
+				Msg: fmt.Sprintf("well ID %q is also the ID of %s: each well needs its own ID (rename or move the copy)", ids[i].ID, strings.Join(others, ", "))}
+		}
+	}
+	return errs
+}
+
+// markDuplicateIDs turns every well sharing its ID with another well of
+// the run into an input error (DuplicateIDs); none of them is judged.
+func markDuplicateIDs(wells []*Well) {
+	var ids []IDAt
+	var of []*Well
+	for _, w := range wells {
+		if w.Err != nil || w.Well == nil {
+			continue
+		}
+		ids = append(ids, IDAt{File: w.Path, ID: w.Well.ID, Line: w.Well.Line("well.id")})
+		of = append(of, w)
+	}
+	for i, e := range DuplicateIDs(ids) {
+		if e != nil {
+			of[i].Err = schema.ErrorList{e}
+			of[i].Well = nil
 		}
 	}
 }
