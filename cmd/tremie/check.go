@@ -21,10 +21,6 @@ func init() {
 	})
 }
 
-// checkCaution closes every text report: the check supports, and never
-// replaces, a professional's review under the local well code.
-const checkCaution = "These checks support, and never replace, review by a licensed professional under the governing local well code; thresholds are defaults to set to the local rules."
-
 // fileResult is the outcome of checking one file: its findings, or the
 // errors that kept it from being read.
 type fileResult struct {
@@ -149,7 +145,7 @@ func checkExit(results []fileResult, missing bool) int {
 }
 
 // writeCheckText writes the findings, the tally and, for each profile in
-// force, its caution (checkCaution for the defaults).
+// force, its caution.
 func writeCheckText(w io.Writer, results []fileResult, profiles, cautions []string) error {
 	var b strings.Builder
 	var errs, warns, waived, bad, clean int
@@ -203,23 +199,20 @@ func checkCount(n int, word string) string {
 	return fmt.Sprintf("%d %ss", n, word)
 }
 
-// checkCautions are the closing cautions of a check: checkCaution under
-// the defaults, else the caution naming each profile in force.
+// checkCautions are the closing cautions of a check, the words every
+// sheet, book and report closes with: one for each profile in force,
+// naming it, or the defaults'.
 func checkCautions(run *pipeline.Run) []string {
 	var out []string
 	seen := map[string]bool{}
 	for _, s := range run.Settings {
-		c := checkCaution
-		if !s.Profile.IsDefault() {
-			c = rules.Caution(s.Profile) // names the profile, not "defaults"
-		}
-		if !seen[c] {
+		if c := rules.Caution(s.Profile); !seen[c] {
 			seen[c] = true
 			out = append(out, c)
 		}
 	}
 	if len(out) == 0 {
-		out = append(out, checkCaution)
+		out = append(out, rules.Caution(nil))
 	}
 	return out
 }

@@ -258,3 +258,17 @@ func TestRulesListing(t *testing.T) {
 		t.Errorf("unknown purpose: exit %d, want %d", code, exitUsage)
 	}
 }
+
+// TestCheckClosesWithTheSheetsCaution: tremie check and tremie rules
+// close with the caution every sheet and book carries (check once had
+// words of its own for the defaults).
+func TestCheckClosesWithTheSheetsCaution(t *testing.T) {
+	code, out, errb := runTremie("check", "../../testdata/gallery")
+	if code != exitOK || !strings.Contains(out, rules.Caution(nil)) {
+		t.Errorf("check: exit %d\n%s\n%s", code, out, errb)
+	}
+	_, out, _ = runTremie("rules")
+	if !strings.Contains(strings.Join(strings.Fields(out), " "), rules.Caution(nil)) {
+		t.Errorf("rules does not carry the caution:\n%.400s", out)
+	}
+}

@@ -45,7 +45,7 @@ func runRules(args []string, stdout, stderr io.Writer) int {
 	var b strings.Builder
 	wrap(&b, "Rules of practice applied by tremie check. Thresholds are defaults, each with its source: "+
 		"set them to the governing local well code in a profile (tremie check --profile FILE; see schema/rules/PROFILE.md).", "")
-	wrap(&b, checkCaution, "")
+	wrap(&b, rules.Caution(nil), "")
 	if pu != "" {
 		wrap(&b, fmt.Sprintf("Thresholds for %s wells, each with its source.", pu), "")
 	}

@@ -57,7 +57,7 @@ func (l *layout) column(p *placed) []draw.Item {
 		draw.Shape{Points: []draw.Point{{X: x0, Y: yd(td)}, {X: x0 + colWidth, Y: yd(td)}}, Style: draw.Style{Stroke: ink, StrokeWidth: 1}, Role: "section-td:" + w.ID},
 		draw.Text{At: draw.Point{X: p.x, Y: yd(td) + sizeSmall + 2}, S: "TD " + l.elev(g-float64(td)), Size: sizeSmall, Anchor: draw.Middle, Color: ink, Role: "section-td-label:" + w.ID},
 	)
-	items = append(items, l.screenLabels(p, yd)...)
+	items = append(items, l.screenLabels(p)...)
 	return items
 }
 
@@ -112,16 +112,20 @@ func (l *layout) pipe(x, wd, wall, y0, y1 float64, part, role string) []draw.Ite
 	return items
 }
 
-// screenLabels writes each screen's top and bottom elevations beside the
-// column, turned to run along it; a label that would overlap the one
-// above it moves to the other side.
-func (l *layout) screenLabels(p *placed, yd func(schema.Length) float64) []draw.Item {
-	type lab struct {
-		s      string
-		y0, y1 float64
-	}
-	var labs []lab
+// screenLabel is one screen's label beside a column: its text, turned
+// to read up the page with its baseline at x, from y0 to y1.
+type screenLabel struct {
+	s         string
+	x, y0, y1 float64
+}
+
+// screenLabelPlaces places each screen's label, with its top and bottom
+// elevations, beside the column; a label that would overlap the one above
+// it moves to the other side, then to a second row on the right.
+func (l *layout) screenLabelPlaces(p *placed) []screenLabel {
+	var labs []screenLabel
 	g := float64(p.ground)
+	yd := func(d schema.Length) float64 { return l.y(g - float64(d)) }
 	for _, s := range p.w.Strings {
 		for _, sec := range s.Screens() {
 			txt := "screen " + l.elev(g-float64(sec.Top)) + " to " + l.elev(g-float64(sec.Bottom))
@@ -133,13 +137,12 @@ func (l *layout) screenLabels(p *placed, yd func(schema.Length) float64) []draw.
 			}
 			mid := (yd(sec.Top) + yd(sec.Bottom)) / 2
 			half := draw.TextWidth(draw.Regular, sizeSmall, txt) / 2
-			labs = append(labs, lab{txt, mid - half, mid + half})
+			labs = append(labs, screenLabel{s: txt, y0: mid - half, y1: mid + half})
 		}
 	}
 	sort.Slice(labs, func(i, j int) bool { return labs[i].y0 < labs[j].y0 })
-	var items []draw.Item
 	lastRight, lastLeft := -1e9, -1e9
-	for _, lb := range labs {
+	for i, lb := range labs {
 		x := p.x + colWidth/2 + sizeSmall + 1
 		if lb.y0 < lastRight+2 {
 			if lb.y0 >= lastLeft+2 {
@@ -152,7 +155,17 @@ func (l *layout) screenLabels(p *placed, yd func(schema.Length) float64) []draw.
 		} else {
 			lastRight = lb.y1
 		}
-		items = append(items, draw.Text{At: draw.Point{X: x, Y: (lb.y0 + lb.y1) / 2}, S: lb.s, Size: sizeSmall, Anchor: draw.Middle, Color: ink, Rotate: 90, Role: "section-screen-label:" + p.w.ID})
+		labs[i].x = x
+	}
+	return labs
+}
+
+// screenLabels writes the column's screen labels where
+// screenLabelPlaces puts them.
+func (l *layout) screenLabels(p *placed) []draw.Item {
+	var items []draw.Item
+	for _, lb := range l.screenLabelPlaces(p) {
+		items = append(items, draw.Text{At: draw.Point{X: lb.x, Y: (lb.y0 + lb.y1) / 2}, S: lb.s, Size: sizeSmall, Anchor: draw.Middle, Color: ink, Rotate: 90, Role: "section-screen-label:" + p.w.ID})
 	}
 	return items
 }

@@ -357,3 +357,77 @@ func TestDistanceAxisWritesNoMinusZero(t *testing.T) {
 		t.Errorf("distanceLabel(2500) = %q", got)
 	}
 }
+
+// TestUnitLabelStandsOffTheWaterLine: a joined unit's name moves off the
+// day's water line that crosses its band (the demo's "Upper aquifer"
+// between NW-1 and MW-3 was struck through), staying inside the band.
+func TestUnitLabelStandsOffTheWaterLine(t *testing.T) {
+	a := wellAt(t, "A", 0, 0, 100, "U", "U", "U")
+	b := wellAt(t, "B", 300, 400, 90, "U", "U", "U")
+	for _, c := range []struct {
+		w     *schema.Well
+		depth float64
+	}{{a, 20}, {b, 10}} { // both at elevation 80, the band's middle
+		c.w.WaterLevels = append(c.w.WaterLevels, schema.WaterLevel{Kind: schema.Static, Depth: schema.LengthFrom(c.depth, schema.Feet), Measured: schema.Date{Year: 2026, Month: 3, Day: 20}.Time()})
+	}
+	pg := layoutOf(t, project.Section{Name: "A-A'"}, a, b).Pages[0]
+	labels := texts(pg, "section-unit-label:U")
+	if len(labels) != 1 {
+		t.Fatalf("%d labels of unit U", len(labels))
+	}
+	lb := labels[0]
+	waterY := shapeY(t, pg, "section-water-line") // level: both ends at 80
+	top, bottom := lb.At.Y-0.75*lb.Size, lb.At.Y+0.25*lb.Size
+	if waterY >= top-0.5 && waterY <= bottom+0.5 {
+		t.Errorf("the water line at y = %.1f crosses the unit label (%.1f to %.1f)", waterY, top, bottom)
+	}
+	var band *draw.Shape
+	pg.Walk(func(it draw.Item) {
+		if s, ok := it.(draw.Shape); ok && strings.HasPrefix(s.Role, "section-unit:U:") {
+			band = &s
+		}
+	})
+	if band == nil {
+		t.Fatal("no band of unit U")
+	}
+	bandTop := (band.Points[0].Y + band.Points[1].Y) / 2
+	bandBottom := (band.Points[2].Y + band.Points[3].Y) / 2
+	if top < bandTop || bottom > bandBottom {
+		t.Errorf("the label (%.1f to %.1f) left its band (%.1f to %.1f)", top, bottom, bandTop, bandBottom)
+	}
+}
+
+// TestWaterLineStartsPastScreenLabels: a level within a well's screen
+// meets that screen's label, turned beside the column; the line to the
+// next well starts past the label instead of through its words (the
+// demo's MW-1 and NW-1 labels were crossed).
+func TestWaterLineStartsPastScreenLabels(t *testing.T) {
+	a := wellAt(t, "A", 0, 0, 100)
+	b := wellAt(t, "B", 300, 400, 90)
+	for _, c := range []struct {
+		w     *schema.Well
+		depth float64
+	}{{a, 45}, {b, 40}} { // A's level in its screen, 40-50 ft
+		c.w.WaterLevels = append(c.w.WaterLevels, schema.WaterLevel{Kind: schema.Static, Depth: schema.LengthFrom(c.depth, schema.Feet), Measured: schema.Date{Year: 2026, Month: 3, Day: 20}.Time()})
+	}
+	pg := layoutOf(t, project.Section{Name: "A-A'"}, a, b).Pages[0]
+	var line *draw.Shape
+	pg.Walk(func(it draw.Item) {
+		if s, ok := it.(draw.Shape); ok && s.Role == "section-water-line" {
+			line = &s
+		}
+	})
+	if line == nil {
+		t.Fatal("no water line")
+	}
+	labels := texts(pg, "section-screen-label:A")
+	if len(labels) != 1 {
+		t.Fatalf("%d screen labels of A", len(labels))
+	}
+	lb := labels[0]
+	// The label reads up the page: its letters stand left of the baseline
+	// x, its descenders up to a third of its size right of it.
+	if start := line.Points[0]; start.X <= lb.At.X+lb.Size/3 {
+		t.Errorf("the water line starts at x = %.1f, within A's screen label (baseline x = %.1f)", start.X, lb.At.X)
+	}
+}

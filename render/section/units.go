@@ -1,6 +1,7 @@
 package section
 
 import (
+	"math"
 	"strings"
 
 	"github.com/tremie-dev/tremie/render/draw"
@@ -107,10 +108,44 @@ func (l *layout) unitBands() []draw.Item {
 		midY := (pts[0].Y + pts[1].Y + pts[2].Y + pts[3].Y) / 4
 		thick := ((pts[3].Y - pts[0].Y) + (pts[2].Y - pts[1].Y)) / 2
 		if tw := draw.TextWidth(draw.Italic, sizeSmall, j.name); tw < xb-xa-8 && thick > sizeSmall+3 {
+			top, bottom := (pts[0].Y+pts[1].Y)/2, (pts[2].Y+pts[3].Y)/2
+			midY = l.clearOfWater(ws[j.left], ws[j.right], (xa+xb)/2, tw, midY, top, bottom)
 			items = append(items, draw.Text{At: draw.Point{X: (xa + xb) / 2, Y: midY + sizeSmall/3}, S: j.name, Size: sizeSmall, Font: draw.Italic, Anchor: draw.Middle, Color: ink, Role: "section-unit-label:" + j.name})
 		}
 	}
 	return items
+}
+
+// clearOfWater moves a unit's label, centred at (cx, midY) and tw wide,
+// off the water line the band's two wells join: to the middle of the
+// band's larger part above or below the line, when that part holds the
+// label; else, or when the line misses the label, midY stays.
+func (l *layout) clearOfWater(a, b *placed, cx, tw, midY, top, bottom float64) float64 {
+	from, to, ok := l.waterSegment(a, b)
+	if !ok {
+		return midY
+	}
+	at := func(x float64) float64 {
+		t := math.Max(0, math.Min(1, (x-from.X)/(to.X-from.X)))
+		return from.Y + t*(to.Y-from.Y)
+	}
+	x0, x1 := cx-tw/2-2, cx+tw/2+2
+	if x1 < from.X || x0 > to.X {
+		return midY
+	}
+	lo, hi := math.Min(at(x0), at(x1)), math.Max(at(x0), at(x1)) // the line's y under the label
+	half := sizeSmall/2 + 2.5                                    // a line just under the descenders crowds them too
+	if hi < midY-half || lo > midY+half {
+		return midY
+	}
+	need := sizeSmall + 3
+	switch above, below := lo-top, bottom-hi; {
+	case above >= below && above > need:
+		return (top + lo) / 2
+	case below > need:
+		return (hi + bottom) / 2
+	}
+	return midY
 }
 
 // unitBar marks a well's units in a strip along the left of its

@@ -1,6 +1,8 @@
 package section
 
 import (
+	"math"
+
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/render/symbols"
 	"github.com/tremie-dev/tremie/schema"
@@ -72,7 +74,6 @@ func (l *layout) waterItems() []draw.Item {
 	ws := l.ordered
 	mark := symbols.MustPart(symbols.WaterLevel)
 	var prev *placed
-	var prevZ float64
 	for _, p := range ws {
 		z, ok := l.water.levelOn(p)
 		if ok {
@@ -81,15 +82,13 @@ func (l *layout) waterItems() []draw.Item {
 			// line from the neighbour stops short of them, never through
 			// the figures.
 			left := p.x - colWidth/2 - unitBarWidth
-			label := l.elev(z)
-			labelLeft := left - 11 - draw.TextWidth(draw.Regular, sizeSmall, label)
-			if x0, x1 := prev.xRight(), labelLeft-2; prev != nil && x1 > x0 {
-				items = append(items, draw.Shape{Points: []draw.Point{{X: x0, Y: l.y(prevZ)}, {X: x1, Y: y}},
+			if from, to, ok := l.waterSegment(prev, p); ok {
+				items = append(items, draw.Shape{Points: []draw.Point{from, to},
 					Style: draw.Style{Stroke: waterInk, StrokeWidth: 0.9, Dash: []float64{5, 2}}, Role: "section-water-line"})
 			}
 			items = append(items, l.paint(mark, draw.Rect{X: left - 10, Y: y - 5, W: 9, H: 10})...)
-			items = append(items, draw.Text{At: draw.Point{X: left - 11, Y: y - 1}, S: label, Size: sizeSmall, Anchor: draw.End, Color: waterInk, Role: "section-water:" + p.w.ID})
-			prev, prevZ = p, z
+			items = append(items, draw.Text{At: draw.Point{X: left - 11, Y: y - 1}, S: l.elev(z), Size: sizeSmall, Anchor: draw.End, Color: waterInk, Role: "section-water:" + p.w.ID})
+			prev = p
 			l.used.waterLine = true
 		} else {
 			prev = nil
@@ -106,13 +105,30 @@ func (l *layout) waterItems() []draw.Item {
 	return items
 }
 
-// xRight is the right edge of a well's column, where the water line to
-// its right neighbour starts; 0 for no well.
-func (p *placed) xRight() float64 {
-	if p == nil {
-		return 0
+// waterSegment is the dashed line joining two neighbours' levels on the
+// day: from the right edge of a's column to short of b's mark and
+// elevation, left of b's column. ok is false when either has no level
+// that day, or no room is left between them.
+func (l *layout) waterSegment(a, b *placed) (from, to draw.Point, ok bool) {
+	if a == nil || b == nil {
+		return from, to, false
 	}
-	return p.x + colWidth/2
+	za, okA := l.water.levelOn(a)
+	zb, okB := l.water.levelOn(b)
+	if !okA || !okB {
+		return from, to, false
+	}
+	labelLeft := b.x - colWidth/2 - unitBarWidth - 11 - draw.TextWidth(draw.Regular, sizeSmall, l.elev(zb))
+	from, to = draw.Point{X: a.x + colWidth/2, Y: l.y(za)}, draw.Point{X: labelLeft - 5, Y: l.y(zb)} // a gap, lest a dash read as a decimal point
+	// Past a's screen labels on its right that the level crosses: the
+	// text reads up the page, its letters left of the baseline x and the
+	// descenders right of it.
+	for _, lb := range l.screenLabelPlaces(a) {
+		if lb.x > a.x && from.Y >= lb.y0-1 && from.Y <= lb.y1+1 {
+			from.X = math.Max(from.X, lb.x+0.3*sizeSmall+1.5)
+		}
+	}
+	return from, to, to.X > from.X
 }
 
 // otherLevelMark is a small open triangle, apex on the level: a static
