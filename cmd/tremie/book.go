@@ -55,7 +55,7 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie book: %d wells bound (%s)\n", len(wells), strings.Join(run.ProfileLabels(), "; "))
 		return worse(code, toStdout("book", stdout, stderr, pdf, true))
 	}
-	dst, err := writeProjectOutput(*outFile, run.OutDir, "book.pdf", pdf, *force)
+	dst, err := writeProjectOutput(run, *outFile, "book.pdf", pdf, *force)
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie book: %v\n", err)
 		return exitOutput

@@ -34,7 +34,7 @@ func runExport(args []string, stdout, stderr io.Writer) int {
 	if *format != "geojson" && *format != "csv" {
 		return fset.usageError("--format must be geojson or csv, not %q", *format)
 	}
-	_, p, wells, code := prepareProject("export", rest[0], stderr)
+	run, p, wells, code := prepareProject("export", rest[0], stderr)
 	if p == nil {
 		return code
 	}
@@ -72,7 +72,7 @@ func runExport(args []string, stdout, stderr io.Writer) int {
 	if *outFile == "" || *outFile == stdoutName {
 		return worse(code, toStdout("export", stdout, stderr, data, false))
 	}
-	if err := pipeline.WriteFile(*outFile, data); err != nil {
+	if err := run.WriteNamed(*outFile, data); err != nil {
 		fmt.Fprintf(stderr, "tremie export: %v\n", err)
 		return exitOutput
 	}

@@ -87,7 +87,7 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie table: wells checked with %s\n", checked)
 		return worse(code, toStdout("table", stdout, stderr, buf.Bytes(), defaultName != ""))
 	}
-	dst, err := writeProjectOutput(*outFile, run.OutDir, defaultName, buf.Bytes(), *force)
+	dst, err := writeProjectOutput(run, *outFile, defaultName, buf.Bytes(), *force)
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie table: %v\n", err)
 		return exitOutput
@@ -121,14 +121,12 @@ func prepareProject(cmd, dir string, stderr io.Writer) (run *pipeline.Run, p *pr
 }
 
 // writeProjectOutput writes a project document to the file the user named
-// (they asked for it), else to name in the output directory, where it
-// replaces only a file tremie wrote unless force. It returns the path.
-func writeProjectOutput(named, outDir, name string, data []byte, force bool) (string, error) {
+// (they asked for it; never one the run reads), else to name in the
+// output directory, where it replaces only a file tremie wrote unless
+// force. It returns the path.
+func writeProjectOutput(run *pipeline.Run, named, name string, data []byte, force bool) (string, error) {
 	if named != "" {
-		if err := pipeline.WriteFile(named, data); err != nil {
-			return named, err
-		}
-		return named, nil
+		return named, run.WriteNamed(named, data)
 	}
-	return filepath.Join(outDir, name), pipeline.WriteOwned(outDir, name, data, force)
+	return filepath.Join(run.OutDir, name), pipeline.WriteOwned(run.OutDir, name, data, force)
 }

@@ -14,6 +14,9 @@ type IDAt struct {
 	Line int // of well.id
 }
 
+// maxOthersNamed is how many other files a duplicate ID's message names.
+const maxOthersNamed = 3
+
 // DuplicateIDs gives, for each well whose ID another of the list also
 // has (compared without case, as file names are), the input error naming
 // each other file and line; nil for a well whose ID is its own. A backup
@@ -44,6 +47,11 @@ func DuplicateIDs(ids []IDAt) []*schema.Error {
 				if j != i {
 					others = append(others, fmt.Sprintf("%s:%d", ids[j].File, ids[j].Line))
 				}
+			}
+			// Name a few: many copies would make every message as long
+			// as the list of files.
+			if n := len(others); n > maxOthersNamed {
+				others = append(others[:maxOthersNamed], fmt.Sprintf("%d other files", n-maxOthersNamed))
 			}
 			errs[i] = &schema.Error{File: ids[i].File, Line: ids[i].Line, Key: "well.id",
 				Msg: fmt.Sprintf("well ID %q is also the ID of %s: each well needs its own ID (rename or move the copy)", ids[i].ID, strings.Join(others, ", "))}

@@ -367,7 +367,7 @@ func kindNames() []string {
 // tableOrder is the order tables are written in, as schema/FORMAT.md
 // documents them; others follow in name order.
 var tableOrder = []string{"units", "well", "drilling", "location", "elevation", "measuring_point", "pump",
-	"borehole", "casing", "string", "fill", "open_hole", "lithology", "water_level",
+	"borehole", "casing", "string", "fill", "open_hole", "lithology", "water_level", "sample",
 	"surface", "surface.protective", "surface.vault", "surface.pad", "waiver", "orientation", "wall_image", "feature"}
 
 func rank(table string) int {

@@ -30,6 +30,12 @@ func createNew(path string, data []byte) error {
 		tmp.Close()
 		return err
 	}
+	// CreateTemp makes the file 0600; a project's files are shared
+	// documents, readable as any the user makes.
+	if err := tmp.Chmod(0o644); err != nil {
+		tmp.Close()
+		return err
+	}
 	if err := tmp.Close(); err != nil {
 		return err
 	}

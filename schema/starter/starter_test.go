@@ -149,6 +149,13 @@ func TestInitAndNew(t *testing.T) {
 	if len(wrote) != 7 {
 		t.Errorf("wrote %d files: %v", len(wrote), wrote)
 	}
+	// A project's files are shared documents: readable by the group and
+	// others, as os.WriteFile makes them (0644), not a temporary file's 0600.
+	for _, f := range wrote {
+		if st, err := os.Stat(f); err != nil || st.Mode().Perm() != 0o644 {
+			t.Errorf("%s: mode %v %v, want -rw-r--r--", f, st.Mode().Perm(), err)
+		}
+	}
 	p, err := project.Load(dir)
 	if err != nil {
 		t.Fatalf("project.toml does not load: %v", err)
@@ -182,6 +189,9 @@ func TestInitAndNew(t *testing.T) {
 	got, err := WriteWell(wells, Options{ID: "MW-9", Units: schema.Metres})
 	if err != nil || len(got) != 1 {
 		t.Fatalf("new: %v %v", got, err)
+	}
+	if st, err := os.Stat(got[0]); err != nil || st.Mode().Perm() != 0o644 {
+		t.Errorf("new well file: mode %v %v, want -rw-r--r--", st.Mode().Perm(), err)
 	}
 	src, _ := os.ReadFile(got[0])
 	if !strings.HasPrefix(string(src), "#:schema ../schemas/well.schema.json\n") {

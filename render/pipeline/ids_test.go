@@ -1,0 +1,35 @@
+package pipeline
+
+import (
+	"fmt"
+	"strings"
+	"testing"
+)
+
+// TestDuplicateIDsNameAFewOthers: wells sharing an ID (without case) each
+// get an error naming the others, at most three with a count of the rest,
+// so that many copies do not make every message a list of every file; a
+// well with its own ID gets none.
+func TestDuplicateIDsNameAFewOthers(t *testing.T) {
+	ids := []IDAt{{File: "own.toml", ID: "PW-1", Line: 3}, {File: "a.toml", ID: "MW-1", Line: 8}, {File: "b.toml", ID: "mw-1 ", Line: 9}}
+	errs := DuplicateIDs(ids)
+	if errs[0] != nil {
+		t.Errorf("a well with its own ID: %v", errs[0])
+	}
+	if errs[1] == nil || !strings.Contains(errs[1].Error(), `a.toml:8: well ID "MW-1" is also the ID of b.toml:9:`) {
+		t.Errorf("first copy: %v", errs[1])
+	}
+	if errs[2] == nil || !strings.Contains(errs[2].Error(), "is also the ID of a.toml:8:") {
+		t.Errorf("second copy: %v", errs[2])
+	}
+	ids = nil
+	for i := range 10 {
+		ids = append(ids, IDAt{File: fmt.Sprintf("w%d.toml", i), ID: "FX-1", Line: 7})
+	}
+	for i, e := range DuplicateIDs(ids) {
+		msg := e.Error()
+		if strings.Count(msg, ".toml:7") != 4 || !strings.Contains(msg, ", 6 other files:") {
+			t.Errorf("copy %d: %s", i, msg)
+		}
+	}
+}
