@@ -44,7 +44,10 @@ func TestSheetsPerWellBounded(t *testing.T) {
 		want  string // "" when drawn
 	}{
 		{wordy, nil, "notes sheets, more than the 10 one well may have"},
-		{"../../testdata/gallery/DS-1200.toml", scale("1in=5ft"), "sheets (more than 30); choose a smaller scale"},
+		// The scale suggested is the most detailed that draws: 1 in = 8 ft
+		// would take 31 sheets, 1 in = 10 ft draws (the next case).
+		{"../../testdata/gallery/DS-1200.toml", scale("1in=5ft"), "sheets (more than 30); choose a smaller scale, with more depth to the inch, such as 1 in = 10 ft"},
+		{"../../testdata/gallery/DS-1200.toml", scale("1in=8ft"), "31 sheets"},
 		{"../../testdata/gallery/DS-1200.toml", scale("1in=10ft"), ""},
 	} {
 		run, err := Resolve([]string{c.file}, Options{Quiet: true})

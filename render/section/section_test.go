@@ -288,22 +288,10 @@ func TestDeterministic(t *testing.T) {
 func TestWaterLineStopsShortOfTheFigures(t *testing.T) {
 	a := wellAt(t, "A", 0, 0, 100)
 	b := wellAt(t, "B", 300, 400, 90)
-	for _, c := range []struct {
-		w     *schema.Well
-		depth float64
-	}{{a, 20}, {b, 15}} {
-		c.w.WaterLevels = append(c.w.WaterLevels, schema.WaterLevel{Kind: schema.Static, Depth: schema.LengthFrom(c.depth, schema.Feet), Measured: schema.Date{Year: 2026, Month: 3, Day: 20}.Time()})
-	}
+	staticOn20March(a, 20)
+	staticOn20March(b, 15)
 	pg := layoutOf(t, project.Section{Name: "A-A'"}, a, b).Pages[0]
-	var line *draw.Shape
-	pg.Walk(func(it draw.Item) {
-		if s, ok := it.(draw.Shape); ok && s.Role == "section-water-line" {
-			line = &s
-		}
-	})
-	if line == nil {
-		t.Fatal("no water line")
-	}
+	line := shapeWithRole(t, pg, "section-water-line")
 	label := texts(pg, "section-water:B")
 	if len(label) != 1 || label[0].S != "75.0" {
 		t.Fatalf("B's water label: %v, want 75.0 (90 - 15 ft)", label)
@@ -364,12 +352,8 @@ func TestDistanceAxisWritesNoMinusZero(t *testing.T) {
 func TestUnitLabelStandsOffTheWaterLine(t *testing.T) {
 	a := wellAt(t, "A", 0, 0, 100, "U", "U", "U")
 	b := wellAt(t, "B", 300, 400, 90, "U", "U", "U")
-	for _, c := range []struct {
-		w     *schema.Well
-		depth float64
-	}{{a, 20}, {b, 10}} { // both at elevation 80, the band's middle
-		c.w.WaterLevels = append(c.w.WaterLevels, schema.WaterLevel{Kind: schema.Static, Depth: schema.LengthFrom(c.depth, schema.Feet), Measured: schema.Date{Year: 2026, Month: 3, Day: 20}.Time()})
-	}
+	staticOn20March(a, 20)
+	staticOn20March(b, 10) // both at elevation 80, the band's middle
 	pg := layoutOf(t, project.Section{Name: "A-A'"}, a, b).Pages[0]
 	labels := texts(pg, "section-unit-label:U")
 	if len(labels) != 1 {
@@ -404,22 +388,10 @@ func TestUnitLabelStandsOffTheWaterLine(t *testing.T) {
 func TestWaterLineStartsPastScreenLabels(t *testing.T) {
 	a := wellAt(t, "A", 0, 0, 100)
 	b := wellAt(t, "B", 300, 400, 90)
-	for _, c := range []struct {
-		w     *schema.Well
-		depth float64
-	}{{a, 45}, {b, 40}} { // A's level in its screen, 40-50 ft
-		c.w.WaterLevels = append(c.w.WaterLevels, schema.WaterLevel{Kind: schema.Static, Depth: schema.LengthFrom(c.depth, schema.Feet), Measured: schema.Date{Year: 2026, Month: 3, Day: 20}.Time()})
-	}
+	staticOn20March(a, 45)
+	staticOn20March(b, 40) // A's level in its screen, 40-50 ft
 	pg := layoutOf(t, project.Section{Name: "A-A'"}, a, b).Pages[0]
-	var line *draw.Shape
-	pg.Walk(func(it draw.Item) {
-		if s, ok := it.(draw.Shape); ok && s.Role == "section-water-line" {
-			line = &s
-		}
-	})
-	if line == nil {
-		t.Fatal("no water line")
-	}
+	line := shapeWithRole(t, pg, "section-water-line")
 	labels := texts(pg, "section-screen-label:A")
 	if len(labels) != 1 {
 		t.Fatalf("%d screen labels of A", len(labels))
@@ -430,4 +402,24 @@ func TestWaterLineStartsPastScreenLabels(t *testing.T) {
 	if start := line.Points[0]; start.X <= lb.At.X+lb.Size/3 {
 		t.Errorf("the water line starts at x = %.1f, within A's screen label (baseline x = %.1f)", start.X, lb.At.X)
 	}
+}
+
+// staticOn20March gives a well a static level on 2026-03-20, depth in ft.
+func staticOn20March(w *schema.Well, depth float64) {
+	w.WaterLevels = append(w.WaterLevels, schema.WaterLevel{Kind: schema.Static, Depth: schema.LengthFrom(depth, schema.Feet), Measured: schema.Date{Year: 2026, Month: 3, Day: 20}.Time()})
+}
+
+// shapeWithRole is the page's last shape with the role.
+func shapeWithRole(t *testing.T, pg *draw.Page, role string) draw.Shape {
+	t.Helper()
+	var got *draw.Shape
+	pg.Walk(func(it draw.Item) {
+		if s, ok := it.(draw.Shape); ok && s.Role == role {
+			got = &s
+		}
+	})
+	if got == nil {
+		t.Fatalf("no shape %q", role)
+	}
+	return *got
 }

@@ -1,6 +1,7 @@
 package sheet
 
 import (
+	"errors"
 	"fmt"
 	"math"
 
@@ -306,11 +307,30 @@ func (l *layout) sheetsAt(s Scale, usable float64) []span {
 	return pages
 }
 
+// withinSheetLimit is the most detailed round scale, less detailed than
+// s, at which the log takes no more than maxSheets sheets, to suggest
+// when s takes too many; false when none does.
+func (l *layout) withinSheetLimit(s Scale, usable float64) (Scale, bool) {
+	for _, c := range allSteps(s.Imperial) {
+		if c.Ratio <= s.Ratio || float64((l.bot-l.top)/schema.Length(usable/c.PointsPerMetre())) > maxSheets {
+			continue // as detailed, or too many sheets even before the round breaks
+		}
+		if len(l.sheetsAt(c, usable)) <= maxSheets {
+			return c, true
+		}
+	}
+	return Scale{}, false
+}
+
 // paginateAt divides the depth range into sheets at a scale.
 func (l *layout) paginateAt(s Scale, usable float64) error {
 	per := schema.Length(usable / s.PointsPerMetre())
 	if n := float64((l.bot - l.top) / per); n > maxSheets {
-		return fmt.Errorf("at %s the well needs %.0f sheets (more than %d); choose a smaller scale", s, math.Ceil(n), maxSheets)
+		msg := fmt.Sprintf("at %s the well needs %.0f sheets (more than %d); choose a smaller scale, with more depth to the inch", s, math.Ceil(n), maxSheets)
+		if fit, ok := l.withinSheetLimit(s, usable); ok {
+			msg += fmt.Sprintf(", such as %s", fit)
+		}
+		return errors.New(msg)
 	}
 	l.scaleFields()
 	l.sheets = l.sheetsAt(s, usable)

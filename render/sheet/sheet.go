@@ -103,11 +103,11 @@ func planned(w *schema.Well, in Inputs, opt Options) (*layout, error) {
 	}
 	if opt.Issue && rules.Blocking(in.Findings) {
 		n := rules.Count(in.Findings).Errors
-		return nil, fmt.Errorf("sheet %s: %w: %d unwaived error %s; resolve or waive them, or draw a draft without --issue", w.ID, ErrNotIssuable, n, plural(n, "finding", "findings"))
+		return nil, fmt.Errorf("well %s: %w: %d unwaived error %s; resolve or waive them, or draw a draft without --issue", w.ID, ErrNotIssuable, n, plural(n, "finding", "findings"))
 	}
 	l := newLayout(w, in, opt, pg)
 	if err := l.plan(); err != nil {
-		return nil, fmt.Errorf("sheet %s: %w", w.ID, err)
+		return nil, fmt.Errorf("well %s: %w", w.ID, err)
 	}
 	return l, nil
 }
