@@ -5,8 +5,10 @@ import (
 	"html/template"
 	"path/filepath"
 	"strconv"
+	"strings"
 
 	"github.com/tremie-dev/tremie/schema/quantity"
+	"github.com/tremie-dev/tremie/schema/rules"
 )
 
 // qrow is one quantities row as the page prints it.
@@ -47,6 +49,28 @@ func quantityRows(r *quantity.Report) []qrow {
 	return out
 }
 
+// tally says how many findings of each kind a well has: "none",
+// "4 errors, 2 warnings", "1 waived".
+func tally(fs []rules.Finding) string {
+	t := rules.Count(fs)
+	var parts []string
+	for _, c := range []struct {
+		n           int
+		one, plural string
+	}{{t.Errors, "error", "errors"}, {t.Warnings, "warning", "warnings"}, {t.Waived, "waived", "waived"}} {
+		switch {
+		case c.n == 1:
+			parts = append(parts, "1 "+c.one)
+		case c.n > 1:
+			parts = append(parts, strconv.Itoa(c.n)+" "+c.plural)
+		}
+	}
+	if parts == nil {
+		return "none"
+	}
+	return strings.Join(parts, ", ")
+}
+
 // bagsText counts bags: "1 bag", "1.5 bags", "9 bags".
 func bagsText(n float64) string {
 	if n == 1 {
@@ -56,9 +80,11 @@ func bagsText(n float64) string {
 }
 
 var pageTemplate = template.Must(template.New("page").Funcs(template.FuncMap{
-	"qrows": quantityRows,
-	"base":  filepath.Base,
-	"inc":   func(n int) int { return n + 1 },
+	"qrows":   quantityRows,
+	"base":    filepath.Base,
+	"inc":     func(n int) int { return n + 1 },
+	"tally":   tally,
+	"caution": rules.PlainCaution,
 }).Parse(pageHTML))
 
 const pageHTML = `<!doctype html>
@@ -80,12 +106,11 @@ section.well h2{margin:.2em 0}section.well h2 small{font-weight:normal;color:#77
 li.error code,li.warning code,li.waived code{color:#555}
 li.error b{color:#8c1d18}li.warning b{color:#7a5300}li.waived b{color:#666}
 .sheets img{display:block;width:100%;max-width:1000px;height:auto;margin:.6em 0;border:1px solid #ccc;background:#fff}
-.caution{color:#555;font-size:.85em;margin-top:2em}
+.caution{color:#555;font-size:.85em;font-style:italic;margin:.6em 0}
 </style></head>
 <body>
 <header><b>tremie serve</b> <small>{{.Dir}}</small> <small id="state">live</small></header>
 <main>{{template "body" .}}</main>
-<p class="caution">Figures and checks support, and never replace, the review of a licensed professional and the governing local well code.</p>
 <script>
 (function () {
   var busy = false, again = false;
@@ -119,8 +144,9 @@ li.error b{color:#8c1d18}li.warning b{color:#7a5300}li.waived b{color:#666}
 {{define "body"}}<div id="body" data-version="{{.Version}}">
 {{range .Problems}}<div class="problem"><code>{{.}}</code></div>{{end}}
 <table class="index"><tr><th>well</th><th>status</th><th>file</th><th>findings</th></tr>
-{{range $i, $w := .Wells}}<tr><td><a href="#w{{$i}}">{{or $w.ID $w.Key}}</a></td><td><span class="st {{$w.Status}}">{{$w.Status}}</span></td><td>{{$w.Key}}</td><td>{{if $w.Problems}}input error{{else}}{{len $w.Findings}}{{end}}</td></tr>
+{{range $i, $w := .Wells}}<tr><td><a href="#w{{$i}}">{{or $w.ID $w.Key}}</a></td><td><span class="st {{$w.Status}}">{{$w.Status}}</span></td><td>{{$w.Key}}</td><td>{{if $w.Problems}}input error{{else}}{{tally $w.Findings}}{{end}}</td></tr>
 {{end}}</table>
+<p class="caution">{{caution}}</p>
 {{range $i, $w := .Wells}}
 <section class="well" id="w{{$i}}" data-key="{{$w.Key}}" data-v="{{$w.Version}}" data-id="{{$w.ID}}">
 <h2>{{or $w.ID $w.Key}} <span class="st {{$w.Status}}">{{$w.Status}}</span> <small>{{$w.Key}}</small></h2>

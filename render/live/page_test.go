@@ -35,6 +35,18 @@ func TestPageHoldsEachSheetsPlace(t *testing.T) {
 	if !strings.Contains(body, `alt="MW-1, sheet 1 of 1"`) {
 		t.Error(`no sheet named "MW-1, sheet 1 of 1"`)
 	}
+	// The caution stands above the first well, where the page opens, and
+	// the index tallies each well's findings by kind: MW-3 has four
+	// errors and two warnings, MW-2 one waived finding.
+	caution := strings.Index(body, "never replace, the review of a licensed professional")
+	if caution < 0 || caution > strings.Index(body, `<section class="well"`) {
+		t.Error("no caution above the first well")
+	}
+	for _, want := range []string{"<td>4 errors, 2 warnings</td>", "<td>1 waived</td>", "<td>none</td>"} {
+		if !strings.Contains(body, want) {
+			t.Errorf("the index has no %s", want)
+		}
+	}
 	// MW-2 placed one bag of chips (its file: bags = 1).
 	if !strings.Contains(body, "<td>1 bag, 0.694 ft³") || strings.Contains(body, ">1 bags") {
 		t.Error(`one bag placed is not written "1 bag"`)

@@ -15,6 +15,10 @@ func Caution(prof *Profile) string {
 	return cautionBase + "; " + prof.ThresholdNote() + "."
 }
 
+// PlainCaution is the caution without the thresholds note, for a page
+// whose wells each name their own thresholds.
+func PlainCaution() string { return cautionBase + "." }
+
 // ThresholdNote says which thresholds were in force, for reports:
 // "rule thresholds are defaults to be set to the local rules" or
 // `rule thresholds from profile "County code" (county.profile.toml),
