@@ -52,7 +52,7 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 		return exitOutput
 	}
 	if *outFile == stdoutName {
-		fmt.Fprintf(stderr, "tremie book: %d wells bound (%s)\n", len(wells), strings.Join(run.ProfileLabels(), "; "))
+		fmt.Fprintf(stderr, "tremie book: %s bound (%s)\n", counted(len(wells), "well", "wells"), strings.Join(run.ProfileLabels(), "; "))
 		return worse(code, toStdout("book", stdout, stderr, pdf, true))
 	}
 	dst, err := writeProjectOutput(run, *outFile, "book.pdf", pdf, *force)
@@ -60,6 +60,6 @@ func runBook(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie book: %v\n", err)
 		return exitOutput
 	}
-	fmt.Fprintf(stdout, "tremie book: %d wells bound into %s (%s)\n", len(wells), dst, strings.Join(run.ProfileLabels(), "; "))
+	fmt.Fprintf(stdout, "tremie book: %s bound into %s (%s)\n", counted(len(wells), "well", "wells"), dst, strings.Join(run.ProfileLabels(), "; "))
 	return code
 }

@@ -76,7 +76,7 @@ func runExport(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "tremie export: %v\n", err)
 		return exitOutput
 	}
-	fmt.Fprintf(stdout, "tremie export: %s written to %s (%s left out)\n", checkCount(len(x.Points), "monitoring point"), *outFile, checkCount(len(x.Skipped), "well"))
+	fmt.Fprintf(stdout, "tremie export: %s written to %s (%s left out)\n", counted(len(x.Points), "monitoring point", "monitoring points"), *outFile, counted(len(x.Skipped), "well", "wells"))
 	return code
 }
 

@@ -48,3 +48,26 @@ func TestExportDemo(t *testing.T) {
 		t.Errorf("--format kml: exit %d", code)
 	}
 }
+
+// TestCountsAgreeWithTheirNouns: the closing lines of export, table and
+// book count in words that agree ("1 monitoring point", "1 well"; they
+// read "1 monitoring points", "1 wells").
+func TestCountsAgreeWithTheirNouns(t *testing.T) {
+	code, out, errb := runTremie("export", "../../testdata/gallery", "-o", filepath.Join(t.TempDir(), "g.json"))
+	if code != exitOK || !strings.Contains(out, "1 monitoring point written") || !strings.Contains(out, "(5 wells left out)") {
+		t.Errorf("export: exit %d\n%s%s", code, out, errb)
+	}
+	dir := t.TempDir()
+	os.MkdirAll(filepath.Join(dir, "wells"), 0o755)
+	if err := os.WriteFile(filepath.Join(dir, "wells", "MW-1.toml"), []byte(sealedWell), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	code, out, errb = runTremie("table", dir, "--format", "xlsx", "-o", filepath.Join(dir, "t.xlsx"))
+	if code > exitFindings || !strings.Contains(out, "1 monitoring point of 1 well written") {
+		t.Errorf("table: exit %d\n%s%s", code, out, errb)
+	}
+	code, out, errb = runTremie("book", dir, "-o", filepath.Join(dir, "b.pdf"))
+	if code > exitFindings || !strings.Contains(out, "tremie book: 1 well bound into") {
+		t.Errorf("book: exit %d\n%s%s", code, out, errb)
+	}
+}

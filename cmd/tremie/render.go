@@ -147,6 +147,9 @@ func worse(a, b int) int {
 	return a
 }
 
+// counted is n with its noun: "1 well", "2 wells".
+func counted(n int, one, many string) string { return fmt.Sprintf("%d %s", n, plural(n, one, many)) }
+
 func plural(n int, one, many string) string {
 	if n == 1 {
 		return one

@@ -45,7 +45,7 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 	var buf bytes.Buffer
 	var err error
 	defaultName := ""
-	what := fmt.Sprintf("%d monitoring points of %d wells", len(tb.Rows), tb.Wells())
+	what := counted(len(tb.Rows), "monitoring point", "monitoring points") + " of " + counted(tb.Wells(), "well", "wells")
 	switch *format {
 	case "csv":
 		err = tb.CSV(&buf)
@@ -67,7 +67,7 @@ func runTable(args []string, stdout, stderr io.Writer) int {
 		data, err = wb.XLSX(run.ProjectDate(p, wells))
 		buf.Write(data)
 		defaultName = "import.xlsx"
-		what = fmt.Sprintf("%d wells in the import layout", len(files))
+		what = counted(len(files), "well", "wells") + " in the import layout"
 	case "xlsx":
 		var data []byte
 		data, err = tb.XLSX(p.Name, run.ProjectDate(p, wells))

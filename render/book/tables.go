@@ -148,7 +148,11 @@ func countWells(in Input) string {
 			parts = append(parts, fmt.Sprintf("%d %s", counts[s], statusWords[s]))
 		}
 	}
-	return fmt.Sprintf("%d wells: %s.", in.Table.Wells(), strings.Join(parts, ", "))
+	wells := "wells"
+	if in.Table.Wells() == 1 {
+		wells = "well"
+	}
+	return fmt.Sprintf("%d %s: %s.", in.Table.Wells(), wells, strings.Join(parts, ", "))
 }
 
 // anyFindingRows reports whether the findings table has a row: a

@@ -90,9 +90,9 @@ func (s *summary) newPage(n int) *draw.Page {
 	for _, r := range in.Rows {
 		wells[r.File+"\x00"+r.WellID] = true
 	}
-	count := fmt.Sprintf("%d features", len(in.Rows))
+	count := counted(len(in.Rows), "feature", "features")
 	if in.Project {
-		count += fmt.Sprintf(" in %d wells", len(wells))
+		count += " in " + counted(len(wells), "well", "wells")
 	}
 	north := "azimuths from true north"
 	if refs := norths(in.Rows); len(refs) == 1 && refs[0] != "true north" {
@@ -304,6 +304,14 @@ func fitText(s string, size, width float64) string {
 		r = r[:len(r)-1]
 	}
 	return strings.TrimSpace(string(r)) + "…"
+}
+
+// counted is n with its noun: "1 feature", "13 features".
+func counted(n int, one, many string) string {
+	if n == 1 {
+		return "1 " + one
+	}
+	return fmt.Sprintf("%d %s", n, many)
 }
 
 func joinNonEmpty(sep string, parts ...string) string {
