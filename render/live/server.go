@@ -132,13 +132,15 @@ func (s *Server) relative(problems []error) []error {
 			out = append(out, p)
 			continue
 		}
-		for _, e := range el {
+		named := make(schema.ErrorList, len(el)) // a list, so that each keeps its hint
+		for i, e := range el {
 			c := *e
 			if rel, err := filepath.Rel(s.dir, c.File); err == nil && filepath.IsAbs(c.File) && filepath.IsLocal(rel) {
 				c.File = filepath.ToSlash(rel)
 			}
-			out = append(out, &c)
+			named[i] = &c
 		}
+		out = append(out, named)
 	}
 	return out
 }
