@@ -96,6 +96,7 @@ header{position:sticky;top:0;background:#2f3b45;color:#fff;padding:.5em 1em;z-in
 header small{opacity:.75}
 main{padding:0 1em 4em}
 .problem,.problems{background:#fde8e6;border-left:4px solid #b3261e;padding:.5em 1em;margin:1em 0}
+.problem code,.problems code{white-space:pre-wrap;overflow-wrap:anywhere}
 table{border-collapse:collapse}
 td,th{padding:.15em .6em;text-align:left;border-bottom:1px solid #ddd}
 .st{display:inline-block;padding:0 .5em;border-radius:.8em;font-size:.85em;font-weight:600}

@@ -225,7 +225,7 @@ func (im *importer) readWells(s *sheet) {
 				it = &item{table: t.table, head: c}
 				w.singles[t.table] = it
 			}
-			v, err := tomlValue(text, typeOf(t.table, t.key))
+			v, err := tomlValue(listed(t.table, t.key, text), typeOf(t.table, t.key))
 			if err != nil {
 				im.errAt(c, "%s: %v", s.header[ci], err)
 				im.fail(it.head, t.key)
@@ -299,7 +299,7 @@ func (im *importer) readIntervals(s *sheet) {
 				im.errAt(c, "%s is not a column of %s rows", s.header[ci], kind)
 				continue
 			}
-			v, err := tomlValue(text, typeOf(table, key))
+			v, err := tomlValue(listed(table, key, text), typeOf(table, key))
 			if err != nil {
 				im.errAt(c, "%s: %v", s.header[ci], err)
 				im.fail(it.head, key)

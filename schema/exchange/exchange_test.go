@@ -207,3 +207,38 @@ func TestSerialDates(t *testing.T) {
 		}
 	}
 }
+
+// A list value typed with capitals or spaces around it, as a spreadsheet
+// leaves it, is written as the list spells it; a word not in the list is
+// still named at its cell.
+func TestListValuesIgnoreCase(t *testing.T) {
+	p := workbook(t, map[string][][]any{
+		WellsSheet: {
+			wellsHeader,
+			{"A-1", " Monitoring ", "FT", 30, "2026-03-09"},
+		},
+		IntervalsSheet: {
+			intervalsHeader,
+			{"A-1", "Borehole", nil, 0, 30, 8.25},
+			{"A-1", "fill", nil, 0, 30, nil, "Cement-Bentonite"},
+			{"A-1", "fill", nil, 0, 30, nil, "cement bentonite"}, // G4: not the list's word
+		},
+	})
+	_, errs := Import(p)
+	if len(errs) != 1 || !strings.HasPrefix(errs[0].Error(), "wells.xlsx:Intervals!G4:") {
+		t.Fatalf("errors %v, want only G4", errs)
+	}
+	p = workbook(t, map[string][][]any{
+		WellsSheet:     {wellsHeader, {"A-1", " Monitoring ", "FT", 30, "2026-03-09"}},
+		IntervalsSheet: {intervalsHeader, {"A-1", "Borehole", nil, 0, 30, 8.25}, {"A-1", "fill", nil, 0, 30, nil, "Cement-Bentonite"}},
+	})
+	files, errs := Import(p)
+	if len(errs) > 0 || len(files) != 1 {
+		t.Fatalf("%v", errs)
+	}
+	for _, want := range []string{`purpose = "monitoring"`, `depth = "ft"`, `material = "cement-bentonite"`} {
+		if !strings.Contains(string(files[0].Data), want+"\n") {
+			t.Errorf("no %s in\n%s", want, files[0].Data)
+		}
+	}
+}

@@ -91,6 +91,23 @@ func tomlValue(text string, t valueType) (string, error) {
 	return quote(text), nil
 }
 
+// listed is a cell of a key with a list of values written as the list
+// spells it when it differs only in case or surrounding spaces
+// (" Monitoring " is monitoring): a spreadsheet capitalises what is
+// typed into a cell. Any other text is left for the loader to name.
+func listed(table, key, text string) string {
+	k := keySpec(table, key)
+	if k == nil {
+		return text
+	}
+	for _, v := range k.Enum {
+		if strings.EqualFold(strings.TrimSpace(text), v) {
+			return v
+		}
+	}
+	return text
+}
+
 func splitList(s string) []string {
 	var out []string
 	for _, f := range strings.FieldsFunc(s, func(r rune) bool { return r == ';' || r == ',' }) {
