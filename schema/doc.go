@@ -4,6 +4,7 @@ import (
 	"errors"
 	"sort"
 	"strings"
+	"unicode/utf8"
 
 	"github.com/BurntSushi/toml"
 )
@@ -44,7 +45,8 @@ func decode(name string, data []byte, src string) (map[string]any, error) {
 	if _, err := toml.Decode(src, &tree); err != nil {
 		var pe toml.ParseError
 		if errors.As(err, &pe) {
-			return nil, ErrorList{{File: name, Line: pe.Position.Line, Col: pe.Position.Col, Msg: "TOML syntax: " + pe.Message}}
+			line := newlineLine(src, pe.Position.Line, pe.Position.Col, pe.Message)
+			return nil, ErrorList{{File: name, Line: line, Col: pe.Position.Col, Msg: "TOML syntax: " + pe.Message}}
 		}
 		return nil, ErrorList{{File: name, Msg: "TOML: " + err.Error()}}
 	}
@@ -53,6 +55,28 @@ func decode(name string, data []byte, src string) (map[string]any, error) {
 		raw = map[string]any{}
 	}
 	return raw, nil
+}
+
+// newlineLine is the line of a syntax error that the parser met at a
+// line's end ("got '\n' instead"): the parser counts some such errors,
+// an unclosed table header among them ("[well"), on the next line, at the
+// column just past the end of the line before. The line whose end the
+// column stands at is the one to name; any other error keeps its line.
+func newlineLine(src string, line, col int, msg string) int {
+	if !strings.Contains(msg, `'\n'`) || line < 2 {
+		return line
+	}
+	lines := strings.Split(src, "\n")
+	width := func(n int) int { // characters of line n (1-based), without a CR
+		if n < 1 || n > len(lines) {
+			return -1
+		}
+		return utf8.RuneCountInString(strings.TrimSuffix(lines[n-1], "\r"))
+	}
+	if width(line) != col-1 && width(line-1) == col-1 {
+		return line - 1
+	}
+	return line
 }
 
 // ParseDoc parses a file's bytes; name is used in positions, spec is the

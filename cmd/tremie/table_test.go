@@ -87,7 +87,7 @@ func TestTableKeepsGoingPastBadWells(t *testing.T) {
 			t.Errorf("%s: %q, want %q", id, status[id], s)
 		}
 	}
-	for _, f := range []string{synth.FileName(1) + ":2:7: TOML syntax", synth.FileName(2) + ": cannot read"} {
+	for _, f := range []string{synth.FileName(1) + ":1:7: TOML syntax" /* "[units" unclosed on line 1 */, synth.FileName(2) + ": cannot read"} {
 		if !strings.Contains(stderr.String(), f) {
 			t.Errorf("stderr does not name %s:\n%s", f, stderr.String())
 		}
