@@ -305,9 +305,17 @@ func TestProblemsReported(t *testing.T) {
 		t.Fatal(err)
 	}
 	want := fmt.Sprintf("project.toml:%d:9: TOML syntax", lines+1)
-	if p := s.Problems(); len(p) != 1 || !strings.Contains(p[0].Error(), want) {
+	// named relative to the project, as its wells are
+	if p := s.Problems(); len(p) != 1 || !strings.HasPrefix(p[0].Error(), want) {
 		t.Fatalf("at start: %v, want one problem %q", p, want)
 	}
+	os.WriteFile(proj, append(slices.Clone(good), "titel = 1\n"...), 0o644)
+	s.Refresh()
+	if p := s.Problems(); len(p) != 1 || !strings.HasPrefix(p[0].Error(), "project.toml:") || !strings.Contains(p[0].Error(), " takes: ") {
+		t.Fatalf("an unknown key: %v, want one problem naming project.toml with its hint", p)
+	}
+	os.WriteFile(proj, append(slices.Clone(good), "bogus = = 1\n"...), 0o644)
+	s.Refresh()
 	var heard [][]error
 	s.OnProblems = func(p []error) { heard = append(heard, p) }
 	if err := os.WriteFile(proj, good, 0o644); err != nil {

@@ -13,6 +13,7 @@ import (
 	"time"
 
 	"github.com/tremie-dev/tremie/render/pipeline"
+	"github.com/tremie-dev/tremie/schema"
 )
 
 // Server holds a project's wells as last prepared and the pages watching
@@ -55,7 +56,7 @@ func New(dir string) (*Server, error) {
 // anything they show changed.
 func (s *Server) Refresh() {
 	st := loadSettings(s.dir)
-	problems := st.problems
+	problems := s.relative(st.problems)
 	s.mu.Lock()
 	prev := map[string]*Well{}
 	for _, w := range s.wells {
@@ -113,6 +114,35 @@ func (s *Server) keyOf(in pipeline.Input) string {
 		}
 	}
 	return in.Key
+}
+
+// relative names the files of the project's problems (its project file,
+// profile or yields file) relative to the project, as its wells are
+// named; a problem without a position, or outside the project, is kept.
+func (s *Server) relative(problems []error) []error {
+	var out []error
+	for _, p := range problems {
+		var el schema.ErrorList
+		var one *schema.Error
+		switch {
+		case errors.As(p, &el):
+		case errors.As(p, &one):
+			el = schema.ErrorList{one}
+		default:
+			out = append(out, p)
+			continue
+		}
+		named := make(schema.ErrorList, len(el)) // a list, so that each keeps its hint
+		for i, e := range el {
+			c := *e
+			if rel, err := filepath.Rel(s.dir, c.File); err == nil && filepath.IsAbs(c.File) && filepath.IsLocal(rel) {
+				c.File = filepath.ToSlash(rel)
+			}
+			named[i] = &c
+		}
+		out = append(out, named)
+	}
+	return out
 }
 
 // Problems is every problem of the project's input files as last read:
