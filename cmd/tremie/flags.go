@@ -82,7 +82,7 @@ func (f *cmdFlags) dir(name, def, usage string) *string {
 // code.
 func toStdout(cmd string, stdout, stderr io.Writer, data []byte, binary bool) int {
 	if _, terminal := stdout.(textGuard); terminal && binary {
-		fmt.Fprintf(stderr, "tremie %s: standard output is a terminal, where a binary file would only scramble the screen; redirect it to a file or a program (> FILE, | PROGRAM), or name a file with -o\n", cmd)
+		fmt.Fprintf(stderr, "tremie %s: standard output is a terminal, where a binary file would only scramble the screen; redirect it to a file or a program (> FILE, | PROGRAM), or name a file in place of -\n", cmd)
 		return exitOutput
 	}
 	if _, err := stdout.Write(data); err != nil {

@@ -45,7 +45,7 @@ func TestDashIsStandardOutput(t *testing.T) {
 		stderr.Reset()
 		code = run(c.args, textGuard{&screen}, &stderr)
 		binary := strings.HasPrefix(c.start, "PK") || strings.HasPrefix(c.start, "%PDF")
-		if binary && (code != exitOutput || screen.Len() > 0 || !strings.Contains(stderr.String(), "standard output is a terminal")) {
+		if binary && (code != exitOutput || screen.Len() > 0 || !strings.Contains(stderr.String(), "standard output is a terminal") || !strings.Contains(stderr.String(), "name a file in place of -")) {
 			t.Errorf("%v on a terminal: exit %d, %d bytes written, %s", c.args, code, screen.Len(), stderr.String())
 		}
 		if !binary && code != exitOK {
