@@ -314,6 +314,10 @@ func TestProblemsReported(t *testing.T) {
 	if p := s.Problems(); len(p) != 1 || !strings.HasPrefix(p[0].Error(), "project.toml:") || !strings.Contains(p[0].Error(), " takes: ") {
 		t.Fatalf("an unknown key: %v, want one problem naming project.toml with its hint", p)
 	}
+	// the page says why it shows no well, rather than an empty index
+	if _, body := get(t, s.Handler(), "/"); !strings.Contains(body, "No well to show until the problem above is fixed.") || strings.Contains(body, `class="index"`) {
+		t.Error("a page without wells does not say why")
+	}
 	os.WriteFile(proj, append(slices.Clone(good), "bogus = = 1\n"...), 0o644)
 	s.Refresh()
 	var heard [][]error

@@ -144,9 +144,10 @@ li.error b{color:#8c1d18}li.warning b{color:#7a5300}li.waived b{color:#666}
 </body></html>
 {{define "body"}}<div id="body" data-version="{{.Version}}">
 {{range .Problems}}<div class="problem"><code>{{.}}</code></div>{{end}}
+{{if not .Wells}}<p>No well to show{{if .Problems}} until the problem above is fixed{{end}}.</p>{{else}}
 <table class="index"><tr><th>well</th><th>status</th><th>file</th><th>findings</th></tr>
 {{range $i, $w := .Wells}}<tr><td><a href="#w{{$i}}">{{or $w.ID $w.Key}}</a></td><td><span class="st {{$w.Status}}">{{$w.Status}}</span></td><td>{{$w.Key}}</td><td>{{if $w.Problems}}input error{{else}}{{tally $w.Findings}}{{end}}</td></tr>
-{{end}}</table>
+{{end}}</table>{{end}}
 <p class="caution">{{caution}}</p>
 {{range $i, $w := .Wells}}
 <section class="well" id="w{{$i}}" data-key="{{$w.Key}}" data-v="{{$w.Version}}" data-id="{{$w.ID}}">

@@ -45,9 +45,11 @@ func Import(paths ...string) ([]WellFile, []error) {
 	}
 	im := &importer{byID: map[string]*wellRows{}}
 	for _, s := range wells {
+		im.strayCells(s)
 		im.readWells(s)
 	}
 	for _, s := range intervals {
+		im.strayCells(s)
 		im.readIntervals(s)
 	}
 	if len(im.order) == 0 && len(im.errs) == 0 {

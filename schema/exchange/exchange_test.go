@@ -198,6 +198,39 @@ func TestCSVPair(t *testing.T) {
 	}
 }
 
+// A CSV file saved where the comma is the decimal mark separates its
+// fields with semicolons: read so, whole rows keep their cells, and a
+// decimal comma is named at its cell.
+func TestSemicolonCSV(t *testing.T) {
+	dir := t.TempDir()
+	os.WriteFile(filepath.Join(dir, "w.csv"), []byte("\xef\xbb\xbfwell_id;purpose;depth_unit;total_depth\r\nC-1;piezometer;m;12.5\r\n"), 0o644)
+	os.WriteFile(filepath.Join(dir, "i.csv"), []byte("well_id;kind;top;bottom;diameter;uscs;description\nC-1;borehole;0;12.5;200;;\nC-1;lithology;0;12.5;;SP;Sand, fine; grey\n"), 0o644)
+	_, errs := Import(filepath.Join(dir, "w.csv"), filepath.Join(dir, "i.csv"))
+	// "Sand, fine; grey" unquoted splits at its semicolon: one cell too many, not a lost row
+	if len(errs) != 1 || !strings.HasPrefix(errs[0].Error(), `i.csv:Intervals!H3: " grey" stands under no column name`) {
+		t.Fatalf("an unquoted separator in a cell: %v, want H3 named", errs)
+	}
+	// the same with commas: "Sand, fine, grey" must not become "Sand"
+	os.WriteFile(filepath.Join(dir, "c.csv"), []byte("well_id,kind,top,bottom,diameter,uscs,description\nC-1,borehole,0,12.5,200,,\nC-1,lithology,0,12.5,,SP,Sand, fine, grey\n"), 0o644)
+	_, errs = Import(filepath.Join(dir, "w.csv"), filepath.Join(dir, "c.csv"))
+	if len(errs) != 2 || !strings.HasPrefix(errs[0].Error(), "c.csv:Intervals!H3:") || !strings.HasPrefix(errs[1].Error(), "c.csv:Intervals!I3:") {
+		t.Errorf("a comma CSV's split cell: %v, want H3 and I3 named", errs)
+	}
+	os.WriteFile(filepath.Join(dir, "i.csv"), []byte("well_id;kind;top;bottom;diameter;uscs;description\nC-1;borehole;0;12.5;200;;\nC-1;lithology;0;12.5;;SP;\"Sand, fine; grey\"\n"), 0o644)
+	files, errs := Import(filepath.Join(dir, "w.csv"), filepath.Join(dir, "i.csv"))
+	if len(errs) > 0 || len(files) != 1 {
+		t.Fatalf("%v", errs)
+	}
+	if w := files[0].Well; w.TotalDepth != 12.5 || len(w.Lithology) != 1 || w.Lithology[0].Description != "Sand, fine; grey" {
+		t.Errorf("C-1 read as %+v", w)
+	}
+	os.WriteFile(filepath.Join(dir, "w.csv"), []byte("well_id;purpose;depth_unit;total_depth\nC-1;piezometer;m;12,5\n"), 0o644)
+	_, errs = Import(filepath.Join(dir, "w.csv"), filepath.Join(dir, "i.csv"))
+	if len(errs) != 1 || !strings.HasPrefix(errs[0].Error(), "w.csv:Wells!D2: total_depth:") {
+		t.Errorf("decimal comma: %v", errs)
+	}
+}
+
 // Dates typed into a spreadsheet arrive as serial numbers.
 func TestSerialDates(t *testing.T) {
 	for in, want := range map[string]string{"46090": "2026-03-09", "46090.4444444444": "2026-03-09T10:40:00", "2026-03-09 10:40": "2026-03-09T10:40:00"} {

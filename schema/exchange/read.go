@@ -26,6 +26,24 @@ type sheet struct {
 	file, name string
 	header     []string
 	rows       [][]string // rows[i] is spreadsheet row i+2
+	csv        bool       // read from a CSV file: a field beyond the header is a split cell
+}
+
+// strayCells names every CSV field under no column name: a cell that held
+// the separator unquoted ("Sand, fine, grey") split into several, and
+// what followed the first would be lost. A spreadsheet's unnamed columns
+// are the user's margin and are left alone.
+func (im *importer) strayCells(s *sheet) {
+	if !s.csv {
+		return
+	}
+	for ri, row := range s.rows {
+		for ci, text := range row {
+			if strings.TrimSpace(text) != "" && (ci >= len(s.header) || strings.TrimSpace(s.header[ci]) == "") {
+				im.errAt(Cell{s.file, s.name, ri + 2, ci + 1}, "%q stands under no column name: a cell holding the separator needs quotes (\"Sand, fine, grey\")", text)
+			}
+		}
+	}
 }
 
 // Cell names a cell for messages: file:Sheet!B12.
@@ -107,7 +125,9 @@ func readWorkbook(path string, data []byte) ([]*sheet, error) {
 }
 
 func readCSV(path string, data []byte) (*sheet, error) {
-	r := csv.NewReader(bytes.NewReader(bytes.TrimPrefix(data, []byte("\xef\xbb\xbf"))))
+	data = bytes.TrimPrefix(data, []byte("\xef\xbb\xbf"))
+	r := csv.NewReader(bytes.NewReader(data))
+	r.Comma = separator(data)
 	r.FieldsPerRecord = -1
 	var rows [][]string
 	for {
@@ -131,7 +151,22 @@ func readCSV(path string, data []byte) (*sheet, error) {
 			}
 		}
 	}
-	return tableOf(filepath.Base(path), name, rows)
+	s, err := tableOf(filepath.Base(path), name, rows)
+	if s != nil {
+		s.csv = true
+	}
+	return s, err
+}
+
+// separator is the CSV file's field separator: a comma, or a semicolon
+// when the header row has semicolons and no comma, as spreadsheet
+// programs write CSV where the comma is the decimal mark.
+func separator(data []byte) rune {
+	header, _, _ := bytes.Cut(data, []byte("\n"))
+	if bytes.IndexByte(header, ';') >= 0 && bytes.IndexByte(header, ',') < 0 {
+		return ';'
+	}
+	return ','
 }
 
 func tableOf(file, name string, rows [][]string) (*sheet, error) {
