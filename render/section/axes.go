@@ -136,13 +136,22 @@ func (l *layout) groundLine() []draw.Item {
 	return items
 }
 
+// wellHead is a well's name over its column: its ID, and for a planned
+// well "(planned)", so that a design is not read as built.
+func wellHead(w *schema.Well) string {
+	if w.IsPlanned() {
+		return w.ID + " (planned)"
+	}
+	return w.ID
+}
+
 // wellLabels writes each well's ID and ground elevation above the plot,
 // over its column, with a thin guide down to the ground.
 func (l *layout) wellLabels() []draw.Item {
 	var items []draw.Item
 	for _, p := range l.wells {
 		items = append(items,
-			draw.Text{At: draw.Point{X: p.x, Y: l.plot.Y - 16}, S: p.w.ID, Size: sizeLabel + 0.5, Font: draw.Bold, Anchor: draw.Middle, Color: ink, Role: "section-well:" + p.w.ID},
+			draw.Text{At: draw.Point{X: p.x, Y: l.plot.Y - 16}, S: wellHead(p.w), Size: sizeLabel + 0.5, Font: draw.Bold, Anchor: draw.Middle, Color: ink, Role: "section-well:" + p.w.ID},
 			draw.Text{At: draw.Point{X: p.x, Y: l.plot.Y - 6}, S: "GS " + l.elev(float64(p.ground)), Size: sizeSmall, Anchor: draw.Middle, Color: ink, Role: "section-gs:" + p.w.ID},
 			draw.Shape{Points: []draw.Point{{X: p.x, Y: l.plot.Y}, {X: p.x, Y: l.y(float64(p.ground + stickUp(p.w)))}}, Style: draw.Style{Stroke: gridInk, StrokeWidth: 0.4, Dash: []float64{1.5, 1.5}}},
 		)

@@ -423,3 +423,18 @@ func shapeWithRole(t *testing.T, pg *draw.Page, role string) draw.Shape {
 	}
 	return *got
 }
+
+// TestPlannedWellSaysSo: a planned well's column is headed "(planned)",
+// so that a design standing among built wells is not read as built.
+func TestPlannedWellSaysSo(t *testing.T) {
+	a := wellAt(t, "A", 0, 0, 100)
+	b := wellAt(t, "B", 300, 400, 90)
+	b.Status = "planned"
+	pg := layoutOf(t, project.Section{Name: "A-A'"}, a, b).Pages[0]
+	if got := texts(pg, "section-well:B"); len(got) != 1 || got[0].S != "B (planned)" {
+		t.Errorf("B's head: %v, want \"B (planned)\"", got)
+	}
+	if got := texts(pg, "section-well:A"); len(got) != 1 || got[0].S != "A" {
+		t.Errorf("A's head: %v", got)
+	}
+}
