@@ -5,6 +5,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"net"
 	"os"
 	"os/signal"
 	"syscall"
@@ -52,7 +53,11 @@ func runServe(args []string, stdout, stderr io.Writer) int {
 	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt, syscall.SIGTERM)
 	defer stop()
 	err = srv.Serve(ctx, *addr, func(a string) {
-		fmt.Fprintf(stdout, "serving %s at http://%s/ (Ctrl-C stops)\n", dir, a)
+		url, open := pageURL(a)
+		fmt.Fprintf(stdout, "serving %s at %s (Ctrl-C stops)\n", dir, url)
+		if open {
+			fmt.Fprintln(stdout, "the page listens on every network interface: anyone who reaches this machine at that port sees it")
+		}
 	})
 	if err != nil {
 		fmt.Fprintf(stderr, "tremie serve: %v\n", err)
@@ -60,6 +65,17 @@ func runServe(args []string, stdout, stderr io.Writer) int {
 	}
 	fmt.Fprintln(stdout, "stopped")
 	return exitOK
+}
+
+// pageURL is the address a browser on this machine opens for the
+// listener at addr; open says it listens on every interface (0.0.0.0,
+// ::), where the loopback address reaches it and so do other machines.
+func pageURL(addr string) (url string, open bool) {
+	host, port, err := net.SplitHostPort(addr)
+	if ip := net.ParseIP(host); err == nil && ip != nil && ip.IsUnspecified() {
+		return "http://" + net.JoinHostPort("127.0.0.1", port) + "/", true
+	}
+	return "http://" + addr + "/", false
 }
 
 // reportProblems prints the input problems of a served project, each with
