@@ -294,7 +294,7 @@ func (t *table) oneOf(k string) string {
 			return s
 		}
 	}
-	t.r.errAt(t.keyPath(k), "%s = %q is not one of: %s", k, s, strings.Join(allowed, ", "))
+	t.r.errAt(t.keyPath(k), "%s = %q is not one of: %s%s", k, s, strings.Join(allowed, ", "), DidYouMean(s, allowed))
 	return ""
 }
 
