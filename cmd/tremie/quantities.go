@@ -16,6 +16,7 @@ func init() {
 	register(&command{
 		name:    "quantities",
 		summary: "annular volumes, bags needed and placed, ratios, project totals",
+		args:    "FILE|DIR...",
 		run:     runQuantities,
 	})
 }
@@ -24,7 +25,7 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 	fset := newFlags("quantities", stdout, stderr)
 	formats := quantities.Formats()
 	format := fset.choice("format", formats[0], formats, "output `format`: "+strings.Join(formats, ", "))
-	contingency := fset.Float64("contingency", quantity.DefaultContingency, "`percentage` added to each volume before it is rounded up to bags to order (default from "+quantity.DefaultContingencySource+")")
+	contingency := fset.Float64("contingency", quantity.DefaultContingency, "`percentage` added to each volume before it is rounded up to bags to order; the default follows "+quantity.DefaultContingencySource)
 	yieldsFile := fset.String("yields", "", "TOML `file` with a [yields] table overriding the yields (default: the project's)")
 	profileFile := fset.String("profile", "", "rule profile TOML `file` setting the reconciliation thresholds (default: the project's)")
 	porosity := fset.Float64("pack-porosity", 0, "`porosity` (0 to 1) of the saturated filter pack, to add its pore water to the well volume; 0 leaves it out")
@@ -63,6 +64,9 @@ func runQuantities(args []string, stdout, stderr io.Writer) int {
 	if err := quantities.Write(stdout, *format, rep); err != nil {
 		fmt.Fprintf(stderr, "tremie quantities: writing the report: %v\n", err)
 		return exitOutput
+	}
+	if code == exitOK && rep.Blocking() {
+		code = exitFindings
 	}
 	return code
 }

@@ -114,3 +114,20 @@ func TestQuantitiesProfile(t *testing.T) {
 		t.Errorf("missing profile: exit %d", code)
 	}
 }
+
+// An unwaived error among the reconciliation findings exits 1, as check
+// and render do (README's exit codes): the demo's MW-3 placed 56 % of its
+// pack's calculated volume (PLACED-VOLUME-LOW, error), and the report is
+// still written in full. The usage line names the operands.
+func TestQuantitiesExitsOneOnAnError(t *testing.T) {
+	code, out, errs := runQ(filepath.Join("demo", "wells", "MW-3.toml"))
+	if code != exitFindings {
+		t.Errorf("exit %d, want %d: %s", code, exitFindings, errs)
+	}
+	if !strings.Contains(out, "PLACED-VOLUME-LOW") || !strings.Contains(out, "licensed professional") {
+		t.Errorf("report not written in full:\n%s", out)
+	}
+	if code, out, _ := runQ("--help"); code != exitOK || !strings.Contains(out, "usage: tremie quantities [flags] FILE|DIR...") {
+		t.Errorf("--help: exit %d\n%s", code, out)
+	}
+}

@@ -35,6 +35,18 @@ type Report struct {
 	Caution  string
 }
 
+// Blocking reports whether some well's reconciliation found an unwaived
+// error (placed volume far short, a tag far off): the command exits 1 on
+// it, as check and render do.
+func (r *Report) Blocking() bool {
+	for _, w := range r.Wells {
+		if rules.Blocking(w.Findings) {
+			return true
+		}
+	}
+	return false
+}
+
 // Well is one readable well's quantities and reconciliation findings.
 type Well struct {
 	File       string

@@ -144,7 +144,7 @@ func writeOrderText(w io.Writer, o *quantity.Order) {
 		if o.Planned {
 			fmt.Fprintf(w, "Order for the planned wells %s\n", strings.Join(o.For, ", "))
 		} else {
-			fmt.Fprintf(w, "Order (no well is planned: ordering for all %d wells)\n", len(o.For))
+			fmt.Fprintf(w, "Order for %s\n", unplannedWells(len(o.For)))
 		}
 		fmt.Fprintf(w, "  bags to order add %s %% to each volume before rounding up to whole bags\n", schema.TrimFloat(o.Contingency, 2))
 		writeLinesText(w, o.Lines, true)
@@ -208,4 +208,16 @@ func (e *errWriter) Write(p []byte) (int, error) {
 	n, err := e.w.Write(p)
 	e.err = err
 	return n, err
+}
+
+// unplannedWells names the wells an order covers when none is planned,
+// so that the order counts every well: "all 7 wells (none is planned)".
+func unplannedWells(n int) string {
+	switch n {
+	case 1:
+		return "the one well (not a planned well)"
+	case 2:
+		return "both wells (neither is planned)"
+	}
+	return "all " + strconv.Itoa(n) + " wells (none is planned)"
 }

@@ -96,3 +96,13 @@ func TestTextDemoOrderHasPad(t *testing.T) {
 		t.Errorf("the order's concrete line lacks MW-4's pad:\n%s", order)
 	}
 }
+
+// TestOrderHeadlineCountsInWords: an order for wells none of which is
+// planned says how many it covers in words that agree with the count.
+func TestOrderHeadlineCountsInWords(t *testing.T) {
+	for n, want := range map[int]string{1: "the one well (not a planned well)", 2: "both wells (neither is planned)", 7: "all 7 wells (none is planned)"} {
+		if got := unplannedWells(n); got != want {
+			t.Errorf("%d wells: %q, want %q", n, got, want)
+		}
+	}
+}
