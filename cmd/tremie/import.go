@@ -65,6 +65,13 @@ func runImport(args []string, stdout, stderr io.Writer) int {
 		return exitInput
 	}
 	paths, existing := exchange.Destinations(*outDir, files)
+	if taken := exchange.Taken(*outDir, files, paths); len(taken) > 0 {
+		for _, e := range taken {
+			fmt.Fprintln(stderr, e)
+		}
+		fmt.Fprintf(stderr, "tremie import: %s; nothing written\n", counted(len(taken), "well ID already taken", "well IDs already taken"))
+		return exitInput
+	}
 	if len(existing) > 0 && !*force {
 		for _, p := range existing {
 			fmt.Fprintf(stderr, "%s: exists; --force overwrites it\n", p)

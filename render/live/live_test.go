@@ -90,6 +90,18 @@ func TestServesOnlyItsOwnOutputs(t *testing.T) {
 	}
 }
 
+// countingServer serves dir, recording how many wells each refresh drew.
+func countingServer(t *testing.T, dir string) (*Server, *[]int) {
+	t.Helper()
+	var redrawn []int
+	s, err := New(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	s.Prepared = func(n int) { redrawn = append(redrawn, n) }
+	return s, &redrawn
+}
+
 // tree lists every file under dir with its size and content hash.
 func tree(t *testing.T, dir string) string {
 	var b strings.Builder
@@ -115,12 +127,7 @@ func tree(t *testing.T, dir string) string {
 // is shown with file and line and recovers.
 func TestRefreshIsIncremental(t *testing.T) {
 	dir := demoProject(t)
-	var redrawn []int
-	s, err := New(dir)
-	if err != nil {
-		t.Fatal(err)
-	}
-	s.Prepared = func(n int) { redrawn = append(redrawn, n) }
+	s, redrawn := countingServer(t, dir)
 	if len(s.wells) != 7 {
 		t.Fatalf("%d wells", len(s.wells))
 	}
@@ -133,8 +140,8 @@ func TestRefreshIsIncremental(t *testing.T) {
 	psrc, _ := os.ReadFile(prj)
 	os.WriteFile(prj, []byte(strings.Replace(string(psrc), `revision = "0"`, `revision = "1"`, 1)), 0o644)
 	s.Refresh()
-	if want := []int{0, 1, 7}; len(redrawn) != 3 || redrawn[0] != want[0] || redrawn[1] != want[1] || redrawn[2] != want[2] {
-		t.Errorf("wells redrawn per refresh %v, want %v", redrawn, want)
+	if want := []int{0, 1, 7}; !slices.Equal(*redrawn, want) {
+		t.Errorf("wells redrawn per refresh %v, want %v", *redrawn, want)
 	}
 	var m *Well
 	for _, w := range s.wells {
@@ -223,12 +230,7 @@ func TestPageNamesTheProfile(t *testing.T) {
 // the watcher takes an image's events and watches its folder.
 func TestWallImageRedrawsItsWell(t *testing.T) {
 	dir := demoProject(t)
-	var redrawn []int
-	s, err := New(dir)
-	if err != nil {
-		t.Fatal(err)
-	}
-	s.Prepared = func(n int) { redrawn = append(redrawn, n) }
+	s, redrawn := countingServer(t, dir)
 	var before []byte
 	for _, w := range s.wells {
 		if w.ID == "BR-1" {
@@ -267,8 +269,8 @@ func TestWallImageRedrawsItsWell(t *testing.T) {
 	later := time.Now().Add(time.Second) // a time of its own, whatever the clock's grain
 	os.Chtimes(img, later, later)
 	s.Refresh()
-	if len(redrawn) != 2 || redrawn[0] != 0 || redrawn[1] != 1 {
-		t.Errorf("wells redrawn per refresh %v, want [0 1]", redrawn)
+	if !slices.Equal(*redrawn, []int{0, 1}) {
+		t.Errorf("wells redrawn per refresh %v, want [0 1]", *redrawn)
 	}
 	for _, w := range s.wells {
 		if w.ID == "BR-1" && bytes.Equal(w.Sheets[0].SVG, before) {

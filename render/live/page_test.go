@@ -4,6 +4,7 @@ import (
 	"os"
 	"path/filepath"
 	"regexp"
+	"slices"
 	"strings"
 	"testing"
 )
@@ -59,12 +60,7 @@ func TestPageHoldsEachSheetsPlace(t *testing.T) {
 // drawing it again.
 func TestDuplicateIDsAreInputErrors(t *testing.T) {
 	dir := demoProject(t)
-	var redrawn []int
-	s, err := New(dir)
-	if err != nil {
-		t.Fatal(err)
-	}
-	s.Prepared = func(n int) { redrawn = append(redrawn, n) }
+	s, redrawn := countingServer(t, dir)
 	src, err := os.ReadFile(filepath.Join(dir, "wells", "MW-2.toml"))
 	if err != nil {
 		t.Fatal(err)
@@ -103,8 +99,8 @@ func TestDuplicateIDsAreInputErrors(t *testing.T) {
 			t.Errorf("MW-2 after the copy went: %v", w.Problems)
 		}
 	}
-	if len(redrawn) != 2 || redrawn[0] != 1 || redrawn[1] != 0 {
-		t.Errorf("wells drawn per refresh %v, want [1 0]: only the copy, then none", redrawn)
+	if !slices.Equal(*redrawn, []int{1, 0}) {
+		t.Errorf("wells drawn per refresh %v, want [1 0]: only the copy, then none", *redrawn)
 	}
 }
 

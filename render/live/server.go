@@ -13,7 +13,6 @@ import (
 	"time"
 
 	"github.com/tremie-dev/tremie/render/pipeline"
-	"github.com/tremie-dev/tremie/schema"
 )
 
 // Server holds a project's wells as last prepared and the pages watching
@@ -122,25 +121,18 @@ func (s *Server) keyOf(in pipeline.Input) string {
 func (s *Server) relative(problems []error) []error {
 	var out []error
 	for _, p := range problems {
-		var el schema.ErrorList
-		var one *schema.Error
-		switch {
-		case errors.As(p, &el):
-		case errors.As(p, &one):
-			el = schema.ErrorList{one}
-		default:
+		el, ok := listOf(p)
+		if !ok {
 			out = append(out, p)
 			continue
 		}
-		named := make(schema.ErrorList, len(el)) // a list, so that each keeps its hint
-		for i, e := range el {
-			c := *e
-			if rel, err := filepath.Rel(s.dir, c.File); err == nil && filepath.IsAbs(c.File) && filepath.IsLocal(rel) {
-				c.File = filepath.ToSlash(rel)
+		// a list, so that each keeps its hint
+		out = append(out, renamed(el, func(file string) string {
+			if rel, err := filepath.Rel(s.dir, file); err == nil && filepath.IsAbs(file) && filepath.IsLocal(rel) {
+				return filepath.ToSlash(rel)
 			}
-			named[i] = &c
-		}
-		out = append(out, named)
+			return file
+		}))
 	}
 	return out
 }

@@ -167,21 +167,37 @@ func prepare(st *settings, in pipeline.Input, prev *Well) *Well {
 // problemsOf is an error as the page lists it, each position naming the
 // file relative to the project.
 func problemsOf(err error, in pipeline.Input) schema.ErrorList {
-	var el schema.ErrorList
+	el, ok := listOf(err)
+	if !ok {
+		el = schema.ErrorList{{File: in.Path, Msg: err.Error()}}
+	}
+	return renamed(el, func(file string) string {
+		if file == in.Path {
+			return in.Key
+		}
+		return file
+	})
+}
+
+// listOf is err as a list of errors with positions; ok is false for an
+// error without one.
+func listOf(err error) (el schema.ErrorList, ok bool) {
 	var one *schema.Error
 	switch {
 	case errors.As(err, &el):
+		return el, true
 	case errors.As(err, &one):
-		el = schema.ErrorList{one}
-	default:
-		el = schema.ErrorList{{File: in.Path, Msg: err.Error()}}
+		return schema.ErrorList{one}, true
 	}
+	return nil, false
+}
+
+// renamed is a copy of the list with each error's file named by name.
+func renamed(el schema.ErrorList, name func(file string) string) schema.ErrorList {
 	out := make(schema.ErrorList, len(el))
 	for i, e := range el {
 		c := *e
-		if c.File == in.Path {
-			c.File = in.Key
-		}
+		c.File = name(c.File)
 		out[i] = &c
 	}
 	return out

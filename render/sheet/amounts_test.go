@@ -88,3 +88,20 @@ func TestAmountsNameTheCasingAFillIsIn(t *testing.T) {
 	}
 	t.Fatal("no TW-7 among the gallery wells")
 }
+
+// TestCasingPhraseNamesAPipe: a casing named after its kind reads as a
+// pipe ("in surface casing"; DS-1200's amounts said "Neat cement in
+// surface"), while a name that already says what it is stays as written.
+func TestCasingPhraseNamesAPipe(t *testing.T) {
+	for name, want := range map[string]string{
+		"surface":      "surface casing",
+		"production":   "production casing",
+		"conductor":    "conductor",
+		"outer casing": "outer casing",
+		"14-in Liner":  "14-in Liner",
+	} {
+		if got := casingPhrase(name); got != want {
+			t.Errorf("casingPhrase(%q) = %q, want %q", name, got, want)
+		}
+	}
+}

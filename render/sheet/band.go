@@ -510,7 +510,7 @@ func (l *layout) amountRows() [][]string {
 			name += " " + r.Fill.Gradation
 		}
 		if r.Fill.Within != "" {
-			name += " in " + r.Fill.Within // else two rows may read "0–50 ft Neat cement"
+			name += " in " + casingPhrase(r.Fill.Within) // else two rows may read "0–50 ft Neat cement"
 		}
 		if l.w.IsPlanned() {
 			rows = append(rows, []string{l.interval(r.Fill.Interval), name, l.calculated(r), l.toOrder(r), l.yield(r)})

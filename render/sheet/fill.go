@@ -2,6 +2,7 @@ package sheet
 
 import (
 	"fmt"
+	"strings"
 
 	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/schema"
@@ -94,7 +95,7 @@ func (fp fillPart) callouts(l *layout) []callout {
 		where += ", " + string(f.Method)
 	}
 	if f.Within != "" {
-		where += ", inside " + f.Within
+		where += ", inside " + casingPhrase(f.Within)
 	}
 	whereAt := len(lines)
 	lines = append(lines, where)
@@ -135,4 +136,18 @@ func (l *layout) annulusX(f schema.Fill, d schema.Length) float64 {
 		return h.cx + inner
 	}
 	return h.cx + (inner+outer)/2
+}
+
+// casingPhrase names the casing a fill is in as a reader says it: a
+// casing named after its kind reads "surface casing", not "surface"; a
+// name that already says what the pipe is ("conductor", "14-in casing")
+// stays as written.
+func casingPhrase(name string) string {
+	low := strings.ToLower(name)
+	for _, w := range []string{"casing", "conductor", "liner", "pipe", "sleeve"} {
+		if strings.Contains(low, w) {
+			return name
+		}
+	}
+	return name + " casing"
 }

@@ -529,3 +529,38 @@ func sortedKeys(it *item) []entry {
 	})
 	return keys
 }
+
+// Taken names every well file already in dir (or a folder below it),
+// other than the paths the import writes, whose ID is that of an
+// imported well (compared without case): the two would be one well twice,
+// and every later command would refuse both. A file that does not load
+// is left to tremie check.
+func Taken(dir string, files []WellFile, paths []string) []error {
+	if _, err := os.Stat(dir); err != nil {
+		return nil // a new folder holds nothing yet
+	}
+	found, _ := schema.FindWells([]string{dir})
+	written := map[string]bool{}
+	for _, p := range paths {
+		if abs, err := filepath.Abs(p); err == nil {
+			written[abs] = true
+		}
+	}
+	var errs []error
+	for _, f := range found {
+		if abs, err := filepath.Abs(f); err != nil || written[abs] {
+			continue
+		}
+		w, err := schema.LoadFile(f)
+		if err != nil || w == nil {
+			continue
+		}
+		for _, im := range files {
+			if strings.EqualFold(strings.TrimSpace(w.ID), strings.TrimSpace(im.ID)) {
+				errs = append(errs, &schema.Error{File: f, Line: w.Line("well.id"), Key: "well.id",
+					Msg: fmt.Sprintf("well ID %q is already this file's: importing %s beside it would make two wells of one ID (rename one, or import into another folder)", w.ID, im.Name)})
+			}
+		}
+	}
+	return errs
+}

@@ -2,8 +2,9 @@
 // construction data (docs/import.md): a Wells sheet, one row per well, and
 // an Intervals sheet, one row per borehole section, casing, riser, screen,
 // sump, fill, tag reading, open hole, lithology interval, water level,
-// waiver or wall feature. Import turns a workbook (or CSV files) into well
-// files that the strict loader has accepted, naming every bad cell as
+// formation sample, waiver, wall image or wall feature. Import turns a
+// workbook (or CSV files) into well files that the strict loader has
+// accepted, naming every bad cell as
 // file:Sheet!B12; Layout writes wells back into the same layout, so a
 // project round-trips; Template writes an empty workbook with notes,
 // validation lists and one invented example well.

@@ -152,3 +152,27 @@ func TestDocsListTheLayout(t *testing.T) {
 		want(fmt.Sprintf("| `%s` | %s |", c.name, c.note))
 	}
 }
+
+// TestTakenIDs: importing into a folder where another file already has
+// one of the imported IDs (in other case too) names that file and line;
+// the file the import replaces is not counted, nor is a new folder.
+func TestTakenIDs(t *testing.T) {
+	dir := t.TempDir()
+	src, err := os.ReadFile(filepath.Join("..", "..", "testdata", "gallery", "BR-3.toml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	os.MkdirAll(filepath.Join(dir, "old"), 0o755)
+	os.WriteFile(filepath.Join(dir, "old", "br3-final.toml"), src, 0o644)
+	os.WriteFile(filepath.Join(dir, "BR-3.toml"), src, 0o644)
+	files := []WellFile{{ID: "br-3", Name: "BR-3.toml"}, {ID: "X-1", Name: "X-1.toml"}}
+	paths, _ := Destinations(dir, files)
+	errs := Taken(dir, files, paths)
+	want := filepath.Join(dir, "old", "br3-final.toml") + `:9: well ID "BR-3" is already this file's: importing BR-3.toml beside it`
+	if len(errs) != 1 || !strings.HasPrefix(errs[0].Error(), want) {
+		t.Errorf("%v, want one error starting %s", errs, want)
+	}
+	if errs := Taken(filepath.Join(dir, "new"), files, nil); errs != nil {
+		t.Errorf("a new folder: %v", errs)
+	}
+}
