@@ -2,6 +2,7 @@ package schema
 
 import (
 	"fmt"
+	"strconv"
 	"strings"
 
 	"github.com/tremie-dev/tremie/schema/crs"
@@ -519,18 +520,46 @@ func (r *reader) waterLevel(t *table, w *Well) WaterLevel {
 	if wl.Kind == "" {
 		wl.Kind = Static
 	}
+	var in *String
+	if wl.String = t.str("string"); wl.String != "" {
+		for i := range w.Strings {
+			if w.Strings[i].Name == wl.String {
+				in = &w.Strings[i]
+			}
+		}
+		if in == nil {
+			r.errAt(t.keyPath("string"), "string = %q names no [[string]]%s", wl.String, stringNames(w))
+		}
+	}
 	wl.Depth = wl.Written
 	if wl.Reference == FromMeasuringPoint {
-		wl.Depth = wl.Written - measuringPointHeight(w)
+		wl.Depth = wl.Written - measuringPointHeight(w, in)
 	}
 	return wl
 }
 
+// stringNames lists a well's string names for an error message.
+func stringNames(w *Well) string {
+	var names []string
+	for _, s := range w.Strings {
+		names = append(names, strconv.Quote(s.Name))
+	}
+	if len(names) == 0 {
+		return " (the well has none)"
+	}
+	return " (the well's strings: " + strings.Join(names, ", ") + ")"
+}
+
 // measuringPointHeight is the measuring point's height above ground: from
-// the surveyed elevations when both are given, else from the riser's top.
-func measuringPointHeight(w *Well) Length {
+// the surveyed elevations when both are given, else from the riser's top;
+// for a level measured in one string of a nested well, that string's
+// riser top unless the measuring point is given otherwise.
+func measuringPointHeight(w *Well, in *String) Length {
 	if e := w.Elevation; e.Ground != nil && e.MeasuringPoint != nil {
 		return *e.MeasuringPoint - *e.Ground
+	}
+	if m := w.MeasuringPoint; in != nil && in.Liner == nil && len(in.Sections) > 0 && m.Height == nil && m.Pipe == "" {
+		return -in.Top()
 	}
 	return w.StickUp()
 }

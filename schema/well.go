@@ -469,9 +469,17 @@ type WaterLevel struct {
 	Measured  time.Time // date and time (UTC if the file gave no offset)
 	HasTime   bool      // false when only a date was written
 	Kind      LevelKind
-	Pos       Pos
-	Path      string
+	// String is the name of the [[string]] the level was measured in, for
+	// a nested well whose strings each have their own head; "" when the
+	// level applies to the whole hole.
+	String string
+	Pos    Pos
+	Path   string
 }
+
+// In reports whether the level was measured in string s or applies to the
+// whole hole.
+func (l WaterLevel) In(s String) bool { return l.String == "" || l.String == s.Name }
 
 // LevelReference is what a water-level depth was measured from.
 type LevelReference string
@@ -676,9 +684,33 @@ func (s String) Label() string {
 // LatestLevel is the latest static water level (a reading of no stated
 // kind counts as static), or the latest of any kind when none is static.
 func (w *Well) LatestLevel() (WaterLevel, bool) {
+	return latestOf(w.WaterLevels)
+}
+
+// LatestLevelIn is LatestLevel for one string of the well: the latest of
+// the levels measured in that string, else of those of the whole hole.
+// In a nested well each string has its own head, so a level measured in
+// another string is never used.
+func (w *Well) LatestLevelIn(s String) (WaterLevel, bool) {
+	var own, hole []WaterLevel
+	for _, l := range w.WaterLevels {
+		switch {
+		case l.String == "":
+			hole = append(hole, l)
+		case l.String == s.Name:
+			own = append(own, l)
+		}
+	}
+	if len(own) > 0 {
+		return latestOf(own)
+	}
+	return latestOf(hole)
+}
+
+func latestOf(levels []WaterLevel) (WaterLevel, bool) {
 	var best WaterLevel
 	found, static := false, false
-	for _, l := range w.WaterLevels {
+	for _, l := range levels {
 		isStatic := l.Kind == Static || l.Kind == ""
 		switch {
 		case !found, isStatic && !static, isStatic == static && l.Measured.After(best.Measured):

@@ -166,6 +166,7 @@ func wellFile() *TableSpec {
 		{Name: "reference", Type: TypeString, Enum: []string{string(FromGround), string(FromMeasuringPoint)}, Doc: "What depth is measured from; default ground.", Example: "measuring-point"},
 		{Name: "measured", Type: TypeDateTime, Doc: "When measured: a date or a local date-time.", Example: "2026-03-20T08:15:00"},
 		{Name: "kind", Type: TypeString, Enum: []string{string(FirstEncountered), string(Static), string(Pumping)}, Doc: "What the level is; default static.", Example: "static"},
+		{Name: "string", Type: TypeString, Doc: "Name of the [[string]] the level was measured in, for a nested well whose strings each have their own head; omitted, the level applies to the whole hole.", Example: "MW-3"},
 	}}
 	sample := &TableSpec{Doc: "A sieve analysis of the formation at one depth (ASTM D6913), for filter-pack design.", Keys: []KeySpec{
 		{Name: "depth", Type: TypeNumber, Required: true, Bound: NonNegative, Unit: UnitDepth, Doc: "Depth the sample was taken at, below ground.", Example: 30.0},

@@ -6,10 +6,12 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"os"
 	"regexp"
 	"strings"
 	"testing"
 
+	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/symbols"
 	"github.com/tremie-dev/tremie/schema"
@@ -301,5 +303,44 @@ func TestWaterLevelKindsHaveTheirOwnMarks(t *testing.T) {
 	static := legendOf(schema.Static)
 	if static[symbols.FirstWater] || !static[symbols.WaterLevel] {
 		t.Errorf("static only, legend %v", static)
+	}
+}
+
+// In a nested well each string has its own head, so a level measured in
+// one string is drawn inside that string's pipe and its callout names the
+// string (common practice: a nested well's levels are read per
+// piezometer). The gallery's NW-3 has levels in S (21.4 ft), I (23.9 ft)
+// and D (27.2 ft), three 1-in strings side by side.
+func TestNestedLevelsDrawnInTheirStrings(t *testing.T) {
+	data, err := os.ReadFile("../../testdata/gallery/NW-3.toml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	w, err := schema.Load("NW-3.toml", data)
+	if err != nil {
+		t.Fatal(err)
+	}
+	doc := layoutOf(t, w, Inputs{}, Options{})
+	pg := doc.Pages[0]
+	var all []string
+	pg.Walk(func(it draw.Item) {
+		if tx, ok := it.(draw.Text); ok {
+			all = append(all, tx.S)
+		}
+	})
+	text := strings.Join(all, "\n")
+	for i, name := range []string{"S", "I", "D"} {
+		marks := boxes(pg, fmt.Sprintf("water:water_level[%d]", i))
+		bores := boxes(pg, "bore:riser:"+name+"[")
+		if len(marks) != 1 || len(bores) == 0 {
+			t.Fatalf("%s: %d marks, %d bores", name, len(marks), len(bores))
+		}
+		cx := marks[0].X + marks[0].W/2
+		if b := bores[0]; cx < b.X || cx > b.X+b.W {
+			t.Errorf("level of %s drawn at x=%.1f, outside its bore %.1f–%.1f", name, cx, b.X, b.X+b.W)
+		}
+		if !strings.Contains(text, "Static water level — "+name) {
+			t.Errorf("no callout names %s's level", name)
+		}
 	}
 }

@@ -34,14 +34,42 @@ func (wp waterPart) legend(l *layout, v window) []symbol {
 	return []symbol{wp.symbol(l)}
 }
 
-// x is the mark's centre: on the first string's axis, readings close
-// together set apart by a few points.
+// x is the mark's centre: on the axis of the string the level was
+// measured in (a nested well's strings each have their own head), else
+// of the first string; readings of one string set apart by a few points.
 func (wp waterPart) x(l *layout) float64 {
 	x := l.hz.cx
-	if len(l.hz.strX) > 0 {
-		x = l.hz.strX[0]
+	si := wp.stringIndex(l)
+	if si < len(l.hz.strX) {
+		x = l.hz.strX[si]
 	}
-	return x + float64(wp.i%3-1)*3.5
+	name := l.w.WaterLevels[wp.i].String
+	k, n := 0, 0
+	for i, o := range l.w.WaterLevels {
+		if o.String == name {
+			n++
+			if i < wp.i {
+				k++
+			}
+		}
+	}
+	if name != "" && n == 1 {
+		return x // a string's one reading stands on its axis, in its pipe
+	}
+	return x + float64(k%3-1)*3.5
+}
+
+// stringIndex is the index of the string the level names, 0 for a level
+// of the whole hole.
+func (wp waterPart) stringIndex(l *layout) int {
+	if name := l.w.WaterLevels[wp.i].String; name != "" {
+		for si, s := range l.w.Strings {
+			if s.Name == name {
+				return si
+			}
+		}
+	}
+	return 0
 }
 
 func (wp waterPart) paint(p *painter) []draw.Item {
@@ -62,6 +90,9 @@ func (wp waterPart) callouts(l *layout) []callout {
 	title := map[schema.LevelKind]string{schema.FirstEncountered: "Water first encountered", schema.Pumping: "Pumping water level"}[wl.Kind]
 	if title == "" {
 		title = "Static water level"
+	}
+	if wl.String != "" && len(w.Strings) > 1 {
+		title += " — " + wl.String // which head, in a nested well
 	}
 	line := l.depth(wl.Depth) + " below ground"
 	if wl.Reference == schema.FromMeasuringPoint {

@@ -6,6 +6,7 @@
 package table
 
 import (
+	"math"
 	"sort"
 	"strings"
 
@@ -151,19 +152,50 @@ func rowsOf(e Entry, u schema.DepthUnit) []Row {
 		sr.CasingSize, sr.CasingMaterial = casing(&one, u)
 		sr.ScreenTop, sr.ScreenBottom, sr.ScreenTopElev, sr.ScreenBottomElev, sr.Slot, sr.SlotText = nil, nil, nil, nil, nil, ""
 		screens(&one, &sr, u)
-		sr.Pack = packsOf(w, w.Strings[i], u)
+		sr.Pack = fillCell(packColumn(w, w.Strings[i]), u)
+		sr.WaterDepth, sr.WaterElev, sr.WaterKind, sr.WaterDate = nil, nil, "", ""
+		if wl, ok := w.LatestLevelIn(w.Strings[i]); ok {
+			water(w, &sr, wl, u)
+		}
 		out = append(out, sr)
 	}
 	return out
 }
 
-// packsOf lists the pack intervals that reach one string's screens.
-func packsOf(w *schema.Well, s schema.String, u schema.DepthUnit) string {
-	var parts []string
-	for _, f := range quantity.PacksAround(w, s) {
-		parts = append(parts, interval(f.Top, f.Bottom, u))
+// packColumn is the pack of one string of a nested well: the pack fills
+// that reach its screens and the pack fills (fine sand) stacked directly
+// on top of them, as a single well's pack cell shows its fine-sand collar.
+// The packs of the other strings, below a seal, are left out.
+func packColumn(w *schema.Well, s schema.String) []schema.Fill {
+	col := quantity.PacksAround(w, s)
+	for grown := true; grown; {
+		grown = false
+		for _, f := range w.Fills {
+			if f.Material.Group() != schema.PackGroup || holds(col, f) {
+				continue
+			}
+			for _, c := range col {
+				if math.Abs(float64(f.Bottom-c.Top)) < touching {
+					col, grown = append(col, f), true
+					break
+				}
+			}
+		}
 	}
-	return strings.Join(parts, "; ")
+	return col
+}
+
+// touching is how near two fills' ends lie to count as one on the other:
+// a micrometre, far below any depth a file writes.
+const touching = 1e-6
+
+func holds(fs []schema.Fill, f schema.Fill) bool {
+	for _, g := range fs {
+		if g.Pos == f.Pos && g.Interval == f.Interval && g.Material == f.Material {
+			return true
+		}
+	}
+	return false
 }
 
 func sharedUnit(entries []Entry) schema.DepthUnit {
@@ -208,15 +240,8 @@ func rowOf(e Entry, u schema.DepthUnit) Row {
 	if w.TotalDepth > 0 {
 		r.TotalDepth = in(w.TotalDepth)
 	}
-	ground := w.Elevation.Ground
-	elev := func(depth schema.Length) *float64 {
-		if ground == nil {
-			return nil
-		}
-		return in(*ground - depth)
-	}
-	if ground != nil {
-		r.Ground = in(*ground)
+	if g := w.Elevation.Ground; g != nil {
+		r.Ground = in(*g)
 	}
 	if mp := w.Elevation.MeasuringPoint; mp != nil {
 		r.MeasuringPoint = in(*mp)
@@ -224,19 +249,32 @@ func rowOf(e Entry, u schema.DepthUnit) Row {
 	r.CasingSize, r.CasingMaterial = casing(w, u)
 	screens(w, &r, u)
 	r.Pack, r.Seal, r.Grout = fills(w, u)
-	if wl, ok := w.LatestLevel(); ok {
-		r.WaterDepth = in(wl.Depth)
-		r.WaterElev = elev(wl.Depth)
-		r.WaterKind = string(wl.Kind)
-		if !wl.Measured.IsZero() {
-			r.WaterDate = wl.Measured.Format("2006-01-02")
-		}
+	wl, ok := w.LatestLevel()
+	if len(w.Strings) == 1 {
+		wl, ok = w.LatestLevelIn(w.Strings[0])
+	}
+	if ok {
+		water(w, &r, wl, u)
 	}
 	r.Status, r.Errors, r.Warnings, r.Waived = status(e.Findings)
 	if w.IsPlanned() && r.Status != Errors {
 		r.Status = Planned
 	}
 	return r
+}
+
+// water fills a row's water-level cells from one reading.
+func water(w *schema.Well, r *Row, wl schema.WaterLevel, u schema.DepthUnit) {
+	d := wl.Depth.In(u)
+	r.WaterDepth = &d
+	if g := w.Elevation.Ground; g != nil {
+		e := (*g - wl.Depth).In(u)
+		r.WaterElev = &e
+	}
+	r.WaterKind = string(wl.Kind)
+	if !wl.Measured.IsZero() {
+		r.WaterDate = wl.Measured.Format("2006-01-02")
+	}
 }
 
 // casing describes the riser of each string: "2 in Sch 40", "PVC"; a
@@ -344,27 +382,29 @@ func fills(w *schema.Well, u schema.DepthUnit) (pack, seal, grout string) {
 			groups[2] = append(groups[2], f)
 		}
 	}
-	out := [3]string{}
-	for g, fs := range groups {
-		sort.SliceStable(fs, func(i, j int) bool { return fs[i].Top < fs[j].Top })
-		mixed := false
-		for _, f := range fs {
-			mixed = mixed || f.Material != fs[0].Material
-		}
-		var parts []string
-		for _, f := range fs {
-			s := interval(f.Top, f.Bottom, u)
-			if mixed {
-				s += " " + f.Material.Words()
-			}
-			if f.Within != "" {
-				s += " (in " + f.Within + ")"
-			}
-			parts = append(parts, s)
-		}
-		out[g] = strings.Join(parts, "; ")
+	return fillCell(groups[0], u), fillCell(groups[1], u), fillCell(groups[2], u)
+}
+
+// fillCell lists fills top down, each material named when they differ.
+func fillCell(fs []schema.Fill, u schema.DepthUnit) string {
+	fs = append([]schema.Fill(nil), fs...)
+	sort.SliceStable(fs, func(i, j int) bool { return fs[i].Top < fs[j].Top })
+	mixed := false
+	for _, f := range fs {
+		mixed = mixed || f.Material != fs[0].Material
 	}
-	return out[0], out[1], out[2]
+	var parts []string
+	for _, f := range fs {
+		s := interval(f.Top, f.Bottom, u)
+		if mixed {
+			s += " " + f.Material.Words()
+		}
+		if f.Within != "" {
+			s += " (in " + f.Within + ")"
+		}
+		parts = append(parts, s)
+	}
+	return strings.Join(parts, "; ")
 }
 
 func interval(top, bot schema.Length, u schema.DepthUnit) string {

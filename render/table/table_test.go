@@ -94,30 +94,39 @@ func expected(s source) []map[string]float64 {
 	}
 	td, _ := num(sub(s.raw, "well"), "total_depth")
 	common["Total depth (ft)"] = td * toFt
-	// The latest static reading (dates in these files sort as text).
-	var latest map[string]any
-	latestAt := ""
-	for _, wl := range list(s.raw, "water_level") {
-		kind, _ := wl["kind"].(string)
-		if kind != "" && kind != "static" {
-			continue
+	// The latest static reading (dates in these files sort as text) of
+	// a string: of those measured in it, else of the whole hole's.
+	waterOf := func(row map[string]float64, name string) {
+		var latest map[string]any
+		latestAt := ""
+		own := false
+		for _, wl := range list(s.raw, "water_level") {
+			in, _ := wl["string"].(string)
+			own = own || (name != "" && in == name)
 		}
-		at := ""
-		if tm, ok := wl["measured"].(time.Time); ok {
-			at = tm.Format("2006-01-02T15:04:05")
+		for _, wl := range list(s.raw, "water_level") {
+			kind, _ := wl["kind"].(string)
+			in, _ := wl["string"].(string)
+			if kind != "" && kind != "static" || own && in != name || !own && in != "" {
+				continue
+			}
+			at := ""
+			if tm, ok := wl["measured"].(time.Time); ok {
+				at = tm.Format("2006-01-02T15:04:05")
+			}
+			if latest == nil || at > latestAt {
+				latest, latestAt = wl, at
+			}
 		}
-		if latest == nil || at > latestAt {
-			latest, latestAt = wl, at
-		}
-	}
-	if latest != nil {
-		d, _ := num(latest, "depth")
-		if latest["reference"] == "measuring-point" {
-			common["Water level elev. (ft)"] = (mp - d) * toFt
-			common["Water level (ft)"] = (d - (mp - ground)) * toFt
-		} else {
-			common["Water level elev. (ft)"] = (ground - d) * toFt
-			common["Water level (ft)"] = d * toFt
+		if latest != nil {
+			d, _ := num(latest, "depth")
+			if latest["reference"] == "measuring-point" {
+				row["Water level elev. (ft)"] = (mp - d) * toFt
+				row["Water level (ft)"] = (d - (mp - ground)) * toFt
+			} else {
+				row["Water level elev. (ft)"] = (ground - d) * toFt
+				row["Water level (ft)"] = d * toFt
+			}
 		}
 	}
 	strs := list(s.raw, "string")
@@ -130,6 +139,8 @@ func expected(s source) []map[string]float64 {
 		for k, v := range common {
 			row[k] = v
 		}
+		name, _ := st["name"].(string)
+		waterOf(row, name)
 		top, bot := math.Inf(1), math.Inf(-1)
 		for _, sec := range list(st, "section") {
 			if sec["kind"] == "screen" {
@@ -444,9 +455,16 @@ func TestSlotAndSizeUnits(t *testing.T) {
 	}
 }
 
-// A nested well gives a row per string with its own screen and the pack
-// around it: NW-1's strings are screened 30-40 and 70-80 ft (not one
-// envelope of 30-80), packed 28-43 and 67-82 ft (the demo file).
+// A nested well gives a row per string with its own screen, the pack
+// around it and its own water level: NW-1's strings are screened 30-40 and
+// 70-80 ft (not one envelope of 30-80), packed 28-43 and 67-82 ft with a
+// 1-ft fine-sand collar on each, 27-28 and 66-67 ft (the demo file). The
+// collar is part of the string's pack, as a single well's pack cell shows
+// it ("21.5–23 fine sand; 23–36 filter pack" for MW-1): this test once
+// pinned "28–43", which left out the fine sand on the shallow pack. The
+// packs of the other string, below a seal, stay out. Each string has its
+// head, 20.9 ft for NW-1S and 24.6 ft for NW-1D below the 401.94-ft
+// ground: elevations 381.04 and 377.34 ft.
 func TestNestedWellRowPerString(t *testing.T) {
 	w, err := schema.Load("NW-1.toml", mustRead(t, "wells/NW-1.toml"))
 	if err != nil {
@@ -457,14 +475,39 @@ func TestNestedWellRowPerString(t *testing.T) {
 		t.Fatalf("%d rows of %d wells", len(tb.Rows), tb.Wells())
 	}
 	for i, want := range []struct {
-		name     string
-		top, bot float64
-		pack     string
-	}{{"NW-1S", 30, 40, "28–43"}, {"NW-1D", 70, 80, "67–82"}} {
+		name        string
+		top, bot    float64
+		pack        string
+		water, elev float64
+		date        string
+	}{
+		{"NW-1S", 30, 40, "27–28 fine sand; 28–43 filter pack", 20.9, 381.04, "2026-03-20"},
+		{"NW-1D", 70, 80, "66–67 fine sand; 67–82 filter pack", 24.6, 377.34, "2026-03-20"},
+	} {
 		r := tb.Rows[i]
 		if r.ID != "NW-1" || r.String != want.name || *r.ScreenTop != want.top || *r.ScreenBottom != want.bot || r.Pack != want.pack {
 			t.Errorf("row %d: %s %s %v–%v pack %q; want %+v", i, r.ID, r.String, *r.ScreenTop, *r.ScreenBottom, r.Pack, want)
 		}
+		if r.WaterDepth == nil || math.Abs(*r.WaterDepth-want.water) > 1e-9 || r.WaterElev == nil || math.Abs(*r.WaterElev-want.elev) > 1e-9 || r.WaterDate != want.date {
+			t.Errorf("row %d %s: water %v elev %v on %q; want %+v", i, want.name, r.WaterDepth, r.WaterElev, r.WaterDate, want)
+		}
+	}
+	// A string with no level of its own shows the hole's level: with
+	// NW-1D's reading taken away, its row falls back to the first water
+	// met while drilling (26.5 ft, the only reading of the whole hole).
+	var kept []schema.WaterLevel
+	for _, l := range w.WaterLevels {
+		if l.String != "NW-1D" {
+			kept = append(kept, l)
+		}
+	}
+	w.WaterLevels = kept
+	tb = Build([]Entry{{File: "NW-1.toml", Well: w}}, schema.Feet)
+	if d := tb.Rows[1].WaterDepth; d == nil || math.Abs(*d-26.5) > 1e-9 || tb.Rows[1].WaterKind != "first-encountered" {
+		t.Errorf("NW-1D without its own level: %v %s, want the hole's 26.5 ft first-encountered", d, tb.Rows[1].WaterKind)
+	}
+	if d := tb.Rows[0].WaterDepth; d == nil || math.Abs(*d-20.9) > 1e-9 {
+		t.Errorf("NW-1S: %v, want its own 20.9 ft", d)
 	}
 }
 

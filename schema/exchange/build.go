@@ -290,7 +290,9 @@ func (im *importer) readIntervals(s *sheet) {
 			it.keys = append(it.keys, entry{"kind", quote(kind), kindCell})
 		}
 		for ci, text := range row {
-			if ci == idCol || ci == kindCol || ci == stringCol || ci >= len(names) || names[ci] == "" || strings.TrimSpace(text) == "" {
+			// The string column places a section in its string; a water
+			// level's is its own key, the string it was measured in.
+			if ci == idCol || ci == kindCol || ci == stringCol && table != "water_level" || ci >= len(names) || names[ci] == "" || strings.TrimSpace(text) == "" {
 				continue
 			}
 			c := Cell{s.file, s.name, rowNum, ci + 1}

@@ -198,6 +198,37 @@ func TestCSVPair(t *testing.T) {
 	}
 }
 
+// A water-level row of a nested well names the string it was measured in
+// in the string column, as a section row names its string; a name that is
+// not one of the well's strings is named at its cell.
+func TestWaterLevelRowNamesItsString(t *testing.T) {
+	dir := t.TempDir()
+	wells := "well_id,purpose,depth_unit,total_depth\nN-1,monitoring,ft,60\n"
+	intervals := "well_id,kind,string,top,bottom,depth,diameter,size,schedule,water_level_kind\n" +
+		"N-1,borehole,,0,60,,10,,,\n" +
+		"N-1,riser,N-1S,0,20,,,1,40,\nN-1,screen,N-1S,20,30,,,1,40,\n" +
+		"N-1,riser,N-1D,0,45,,,1,40,\nN-1,screen,N-1D,45,55,,,1,40,\n" +
+		"N-1,water-level,N-1S,,,18.2,,,,static\nN-1,water-level,N-1D,,,21.7,,,,static\nN-1,water-level,,,,25,,,,first-encountered\n"
+	os.WriteFile(filepath.Join(dir, "w.csv"), []byte(wells), 0o644)
+	os.WriteFile(filepath.Join(dir, "i.csv"), []byte(intervals), 0o644)
+	files, errs := Import(filepath.Join(dir, "w.csv"), filepath.Join(dir, "i.csv"))
+	if len(errs) > 0 || len(files) != 1 {
+		t.Fatalf("%v", errs)
+	}
+	var got []string
+	for _, l := range files[0].Well.WaterLevels {
+		got = append(got, l.String+"@"+schema.TrimFloat(l.Depth.In(schema.Feet), 2))
+	}
+	if want := []string{"N-1S@18.2", "N-1D@21.7", "@25"}; !slices.Equal(got, want) {
+		t.Errorf("levels %v, want %v", got, want)
+	}
+	os.WriteFile(filepath.Join(dir, "i.csv"), []byte(strings.Replace(intervals, "water-level,N-1D", "water-level,N-1X", 1)), 0o644)
+	_, errs = Import(filepath.Join(dir, "w.csv"), filepath.Join(dir, "i.csv"))
+	if len(errs) != 1 || !strings.HasPrefix(errs[0].Error(), "i.csv:Intervals!C8:") || !strings.Contains(errs[0].Error(), `"N-1X" names no [[string]]`) {
+		t.Errorf("unknown string: %v, want C8 named", errs)
+	}
+}
+
 // A CSV file saved where the comma is the decimal mark separates its
 // fields with semicolons: read so, whole rows keep their cells, and a
 // decimal comma is named at its cell.

@@ -2,8 +2,9 @@
 // construction data (docs/import.md): a Wells sheet, one row per well, and
 // an Intervals sheet, one row per borehole section, casing, riser, screen,
 // sump, fill, tag reading, open hole, lithology interval, water level,
-// waiver or wall feature. Import turns a workbook (or CSV files) into well
-// files that the strict loader has accepted, naming every bad cell as
+// formation sample, waiver, wall image or wall feature. Import turns a
+// workbook (or CSV files) into well files that the strict loader has
+// accepted, naming every bad cell as
 // file:Sheet!B12; Layout writes wells back into the same layout, so a
 // project round-trips; Template writes an empty workbook with notes,
 // validation lists and one invented example well.
@@ -95,7 +96,7 @@ var intervalKinds = []struct{ kind, table, note string }{
 	{"tag", "fill.tag", "A weighted-tape tag of the fill row above it: after_bags, depth."},
 	{"open-hole", "open_hole", "An uncased interval below the casing."},
 	{"lithology", "lithology", "A lithology interval: uscs or rock, description."},
-	{"water-level", "water_level", "A depth to water: depth, reference, measured, water_level_kind."},
+	{"water-level", "water_level", "A depth to water: depth, reference, measured, water_level_kind, and string for a level measured in one string of a nested well."},
 	{"sample", "sample", "A sieve analysis of the formation at one depth (ASTM D6913): depth, d10, d30, d60, note."},
 	{"waiver", "waiver", "Accepts a rule's finding for this well: rule, reason, approved_by, date."},
 	{"wall-image", "wall_image", "An oriented wall image of an open hole."},
@@ -134,7 +135,7 @@ func kindColumn(table string) string {
 var intervalColumns = []struct{ name, note string }{
 	{"well_id", "The Wells row this row belongs to (required)."},
 	{"kind", "What the row is (required); see the list."},
-	{"string", "riser, screen and sump rows: the name of their well string; blank for a well's only unnamed string."},
+	{"string", "riser, screen and sump rows: the name of their well string; blank for a well's only unnamed string. water-level rows: the string the level was measured in (nested wells); blank for the whole hole."},
 	{"name", "casing, string and wall-image rows: the name others refer to."},
 	{"top", "Depth of the top, in the well's depth unit; negative above ground."},
 	{"bottom", "Depth of the bottom; below top."},

@@ -142,7 +142,7 @@ func (wb *Workbook) XLSX(date time.Time) ([]byte, error) {
 	}
 	readMe := []string{
 		"tremie well import layout (docs/import.md)",
-		"Wells: one row per well. Intervals: one row per borehole section, casing, string part, fill, tag, lithology interval, water level or waiver, naming its well in well_id.",
+		"Wells: one row per well. Intervals: one row per borehole section, casing, string part, fill, tag, open hole, lithology interval, water level, formation sample, waiver, wall image or wall feature, naming its well in well_id.",
 		"Depths are below ground surface in the well's depth_unit; a height above ground is a negative depth. Dates as 2026-03-09.",
 		"Every column's header carries a note; the kind, purpose, unit and material columns offer lists (the Lists sheet).",
 		"Import with: tremie import FILE.xlsx -o WELLS_DIR",

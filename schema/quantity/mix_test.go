@@ -77,6 +77,35 @@ func TestWellVolumeUSGS(t *testing.T) {
 	}
 }
 
+// In a nested well each string has its own head (USGS NFM A4 purges the
+// water standing in the pipe sampled): two 2-in Sch 40 strings, S to 20
+// ft and D to 30 ft, with S's level at 12 ft and D's at 16 ft, hold
+// 0.0408 x 2.067^2 x 8 = 1.3946 gal and 0.0408 x 2.067^2 x 14 = 2.4405
+// gal. A level of the whole hole at 10 ft counts only for a string with
+// none of its own: 3.4864 gal for D (20 ft of water) without D's level.
+func TestWellVolumeNestedStrings(t *testing.T) {
+	w := imperial()
+	hole(w, 0, ft(30), in(10))
+	str(w, "S", ft(-2.5), ft(15), ft(20), sch40Two)
+	str(w, "D", ft(-2.5), ft(25), ft(30), sch40Two)
+	w.WaterLevels = []schema.WaterLevel{
+		{Depth: ft(10), Kind: schema.Static},
+		{Depth: ft(12), Kind: schema.Static, String: "S"},
+		{Depth: ft(16), Kind: schema.Static, String: "D"},
+	}
+	perFt := 0.0408 * 2.067 * 2.067
+	vs := WellVolumes(w, 0)
+	if len(vs) != 2 {
+		t.Fatalf("%d volumes", len(vs))
+	}
+	near(t, "S gal", vs[0].Casing.In(schema.USGallons), perFt*8, 1e-3)
+	near(t, "D gal", vs[1].Casing.In(schema.USGallons), perFt*14, 1e-3)
+	near(t, "S/D level ft", vs[1].Level.In(schema.Feet)-vs[0].Level.In(schema.Feet), 4, 1e-9)
+	w.WaterLevels = w.WaterLevels[:2]
+	vs = WellVolumes(w, 0)
+	near(t, "D gal on the hole's level", vs[1].Casing.In(schema.USGallons), perFt*20, 1e-3)
+}
+
 // Entrance velocity by hand (Driscoll, Groundwater and Wells, ch. 13:
 // at most 0.1 ft/s through the effective open area, taken as half the
 // screen's): 10 ft of 6-in screen (OD 6.625 in) with 10 % open area has

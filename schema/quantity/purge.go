@@ -33,17 +33,15 @@ func (v WellVolume) Well() schema.Volume { return v.Casing + v.Pack }
 func (v WellVolume) Purge() schema.Volume { return PurgeWellVolumes * v.Well() }
 
 // WellVolumes works out the volume of every string of a well that has a
-// static level, below that level. porosity (0 to 1) adds the saturated
+// static level, below that level: each string's own level in a nested
+// well (Well.LatestLevelIn). porosity (0 to 1) adds the saturated
 // pack's pore water around each string's screens; 0 leaves it out. A
 // level below a string's bottom gives no row for it.
 func WellVolumes(w *schema.Well, porosity float64) []WellVolume {
-	lvl, ok := w.LatestLevel()
-	if !ok {
-		return nil
-	}
 	var out []WellVolume
 	for _, s := range w.Strings {
-		if len(s.Sections) == 0 || s.Bottom() <= lvl.Depth {
+		lvl, ok := w.LatestLevelIn(s)
+		if !ok || len(s.Sections) == 0 || s.Bottom() <= lvl.Depth {
 			continue
 		}
 		v := WellVolume{String: s.Label(), Level: lvl.Depth, Bottom: s.Bottom(), Porosity: porosity}
@@ -58,7 +56,7 @@ func WellVolumes(w *schema.Well, porosity float64) []WellVolume {
 		}
 		out = append(out, v)
 	}
-	if len(w.Strings) == 0 && w.TotalDepth > lvl.Depth {
+	if lvl, ok := w.LatestLevel(); ok && len(w.Strings) == 0 && w.TotalDepth > lvl.Depth {
 		out = append(out, openWellVolume(w, lvl.Depth))
 	}
 	return out
