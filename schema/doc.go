@@ -46,7 +46,8 @@ func decode(name string, data []byte, src string) (map[string]any, error) {
 		var pe toml.ParseError
 		if errors.As(err, &pe) {
 			line := newlineLine(src, pe.Position.Line, pe.Position.Col, pe.Message)
-			return nil, ErrorList{{File: name, Line: line, Col: pe.Position.Col, Msg: "TOML syntax: " + pe.Message}}
+			col := offsetCol(src, line, pe.Position.Start, pe.Position.Col)
+			return nil, ErrorList{{File: name, Line: line, Col: col, Msg: "TOML syntax: " + pe.Message}}
 		}
 		return nil, ErrorList{{File: name, Msg: "TOML: " + err.Error()}}
 	}
@@ -77,6 +78,23 @@ func newlineLine(src string, line, col int, msg string) int {
 		return line - 1
 	}
 	return line
+}
+
+// offsetCol is the column of a syntax error counted from its byte offset
+// start, where that offset lies on the line named: the parser's own
+// column for a duplicate key counts from the line before ("total_depth =
+// 37.0" repeated on an 18-character line was named at column 28). Where
+// the offset lies on another line (an error met at a line's end, see
+// newlineLine) the parser's column stands.
+func offsetCol(src string, line, start, col int) int {
+	if start < 0 || start > len(src) {
+		return col
+	}
+	before := src[:start]
+	if strings.Count(before, "\n")+1 != line {
+		return col
+	}
+	return utf8.RuneCountInString(before[strings.LastIndexByte(before, '\n')+1:]) + 1
 }
 
 // ParseDoc parses a file's bytes; name is used in positions, spec is the
