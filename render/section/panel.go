@@ -171,7 +171,7 @@ func (l *layout) legend(r draw.Rect) []draw.Item {
 		}})
 	}
 	if l.used.otherLevels {
-		ents = append(ents, legendEntry{"Static water level, another day", func(r draw.Rect) []draw.Item {
+		ents = append(ents, legendEntry{"Static water level, another day or string", func(r draw.Rect) []draw.Item {
 			return []draw.Item{otherLevelMark(r.X+r.W/2-2.5, r.Y+r.H/2, "")}
 		}})
 	}

@@ -438,3 +438,54 @@ func TestPlannedWellSaysSo(t *testing.T) {
 		t.Errorf("A's head: %v", got)
 	}
 }
+
+// TestNestedWellJoinsTheStringInTheUnit: a nested well's strings each
+// have their own head, and a section's water line is one unit's head
+// (common practice: a potentiometric line is drawn for one aquifer). N's
+// shallow string S (screen 10-20 ft) lies in Upper, its deep string D
+// (40-50 ft) in Lower; S reads 12 ft, D 18 ft on 20 March, ground 100 ft.
+// Beside A, screened 40-50 ft in Lower, the line joins D's head, 100 - 18
+// = 82.0, and S's head (88) is marked apart; beside a well screened in
+// Upper it joins S's, 88.0.
+func TestNestedWellJoinsTheStringInTheUnit(t *testing.T) {
+	nested := func() *schema.Well {
+		var b strings.Builder
+		b.WriteString("[units]\ndepth = \"ft\"\ndiameter = \"in\"\n[well]\nid = \"N\"\npurpose = \"monitoring\"\ntotal_depth = 50.0\n")
+		b.WriteString("[location]\neasting = 300\nnorthing = 400\n[elevation]\nground = 100\n[[borehole]]\ntop = 0.0\nbottom = 50.0\ndiameter = 10\n")
+		for _, s := range []struct {
+			name     string
+			top, bot int
+		}{{"S", 10, 20}, {"D", 40, 50}} {
+			fmt.Fprintf(&b, "[[string]]\nname = %q\n[[string.section]]\nkind = \"riser\"\ntop = 0.0\nbottom = %d.0\nsize = \"1\"\nschedule = \"40\"\n", s.name, s.top)
+			fmt.Fprintf(&b, "[[string.section]]\nkind = \"screen\"\ntop = %d.0\nbottom = %d.0\nsize = \"1\"\nschedule = \"40\"\n", s.top, s.bot)
+		}
+		for i, u := range []string{"Upper", "Upper", "Aquitard", "Lower", "Lower"} {
+			fmt.Fprintf(&b, "[[lithology]]\ntop = %d.0\nbottom = %d.0\nuscs = \"SP\"\nunit = %q\n", i*10, i*10+10, u)
+		}
+		b.WriteString("[[water_level]]\nstring = \"S\"\ndepth = 12.0\nmeasured = 2026-03-20\n[[water_level]]\nstring = \"D\"\ndepth = 18.0\nmeasured = 2026-03-20\n")
+		w, err := schema.Load("N.toml", []byte(b.String()))
+		if err != nil {
+			t.Fatal(err)
+		}
+		return w
+	}
+	for _, c := range []struct {
+		aUnit, want string
+	}{{"Lower", "82.0"}, {"Upper", "88.0"}} {
+		a := wellAt(t, "A", 0, 0, 100, "", "", "", "", c.aUnit) // screened 40-50 ft
+		staticOn20March(a, 15)
+		pg := layoutOf(t, project.Section{Name: "A-A'"}, a, nested()).Pages[0]
+		if got := texts(pg, "section-water:N"); len(got) != 1 || got[0].S != c.want {
+			t.Errorf("A in %s: N's joined level %v, want %s", c.aUnit, got, c.want)
+		}
+		others := 0
+		pg.Walk(func(it draw.Item) {
+			if s, ok := it.(draw.Shape); ok && s.Role == "section-water-other:N" {
+				others++
+			}
+		})
+		if others != 1 {
+			t.Errorf("A in %s: %d other-head marks on N, want 1 (the other string's)", c.aUnit, others)
+		}
+	}
+}
