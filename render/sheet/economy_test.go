@@ -6,6 +6,7 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/tremie-dev/tremie/render/draw"
 	"github.com/tremie-dev/tremie/templates"
 )
 
@@ -143,6 +144,27 @@ func TestSplitNoteKeepsEveryWord(t *testing.T) {
 				t.Errorf("DS-1200 fit on %s: %d drawing sheets, %d boxes of notes on it; want 1 and 2", pg.Name, len(l.sheets), len(l.freeBoxes))
 			}
 			checkRegions(t, "DS-1200 fit on "+pg.Name, l, layoutOf(t, c.w, c.in, opt))
+		}
+	}
+}
+
+// A numbered note of the well (plain text "3. Depths are ...", no bold
+// mark) split over two columns resumes as "3, continued:", as a marked
+// note does: BR-1 in landscape resumed it as a bare "Continued:" beside
+// note 4, so that it read as part of no note.
+func TestSplitNumberedNoteKeepsItsNumber(t *testing.T) {
+	var b textBlock
+	b.add("3. Depths are below ground surface; elevations above NAVD88. Diameters are drawn to their own scale, wider than the depth scale (see horizontal exaggeration).", draw.Regular, sizeSmall, 150)
+	if len(b.lines) < 3 {
+		t.Fatalf("the note wraps into %d lines; want at least 3", len(b.lines))
+	}
+	_, rest, ok := splitNote(noteBlock{block: b, color: ink}, 2*lineGap(sizeSmall)+1.5, 150)
+	if !ok || rest.block.lines[0].lead != "3, continued:" {
+		t.Errorf("split %v; the rest opens with %q, want \"3, continued:\"", ok, rest.block.lines[0].lead)
+	}
+	for s, want := range map[string]string{"12. Casing seated": "12", "3.5 ft of sand": "", "Note 3. x": "", "": ""} {
+		if got := noteNumber(s); got != want {
+			t.Errorf("noteNumber(%q) = %q, want %q", s, got, want)
 		}
 	}
 }

@@ -391,11 +391,29 @@ func splitNote(n noteBlock, h, w float64) (first, rest noteBlock, ok bool) {
 		lead = lines[0].lead // a rest split again keeps its mark
 	case m != "":
 		lead = m + ", continued:"
+	case lines[0].lead == "":
+		if num := noteNumber(lines[0].s); num != "" {
+			lead = num + ", continued:" // a numbered note of the well ("3. Depths are ...")
+		}
 	}
 	rest.block = textBlock{}
 	rest.block.addLead(lead, strings.Join(words, " "), lines[k].size, w)
 	rest.tail = true
 	return first, rest, true
+}
+
+// noteNumber is the number a well's note opens with ("3" of "3. Depths
+// are below ..."), or "".
+func noteNumber(s string) string {
+	s = strings.TrimSpace(s)
+	i := 0
+	for i < len(s) && i < 4 && s[i] >= '0' && s[i] <= '9' {
+		i++
+	}
+	if i == 0 || !strings.HasPrefix(s[i:], ". ") {
+		return ""
+	}
+	return s[:i]
 }
 
 // freeItems draws the notes in the body's free rooms, each box on a
