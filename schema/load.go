@@ -521,7 +521,8 @@ func (r *reader) waterLevel(t *table, w *Well) WaterLevel {
 		wl.Kind = Static
 	}
 	var in *String
-	if wl.String = t.str("string"); wl.String != "" {
+	_, named := t.m["string"].(string) // a wrong type is reported by str
+	if wl.String = t.str("string"); named {
 		for i := range w.Strings {
 			if w.Strings[i].Name == wl.String {
 				in = &w.Strings[i]

@@ -480,3 +480,33 @@ func TestKeyPositionsOfNames(t *testing.T) {
 		}
 	}
 }
+
+// A water level names the string it was measured in: a name the file
+// does not give a string, the empty name too, is an error at the key; a
+// wrong type is reported once, as a type error. Measured from the
+// measuring point with no surveyed elevations, a named string's level is
+// read from that string's riser top: 12.5 ft below NW-9D's top, 2.5 ft
+// above ground, is 10 ft below ground (NW-9S's top is 0.5 ft up).
+func TestWaterLevelString(t *testing.T) {
+	base := "[units]\ndepth = \"ft\"\n[well]\nid = \"NW-9\"\npurpose = \"monitoring\"\ntotal_depth = 60.0\n" +
+		"[[borehole]]\ntop = 0.0\nbottom = 60.0\ndiameter = 10.0\n" +
+		"[[string]]\nname = \"NW-9S\"\n[[string.section]]\nkind = \"riser\"\ntop = -0.5\nbottom = 20.0\nsize = \"1\"\nschedule = \"40\"\n" +
+		"[[string]]\nname = \"NW-9D\"\n[[string.section]]\nkind = \"riser\"\ntop = -2.5\nbottom = 45.0\nsize = \"1\"\nschedule = \"40\"\n"
+	for level, want := range map[string]string{
+		"string = \"NW-9X\"\ndepth = 3.0": `28:10: string = "NW-9X" names no [[string]] (the well's strings: "NW-9S", "NW-9D")`,
+		"string = \"\"\ndepth = 3.0":      `28:10: string = "" names no [[string]]`,
+		"string = 9\ndepth = 3.0":         `28:10: string must be a string, not an integer`,
+	} {
+		_, err := Load("w.toml", []byte(base+"[[water_level]]\n"+level+"\n"))
+		if err == nil || !strings.Contains(err.Error(), want) || strings.Count(err.Error(), "w.toml:") != 1 {
+			t.Errorf("%q: got %v, want one error %s", level, err, want)
+		}
+	}
+	w, err := Load("w.toml", []byte(base+"[[water_level]]\nstring = \"NW-9D\"\nreference = \"measuring-point\"\ndepth = 12.5\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := w.WaterLevels[0].Depth.In(Feet); math.Abs(got-10) > 1e-9 || w.WaterLevels[0].String != "NW-9D" {
+		t.Errorf("level %v ft in %q, want 10 ft in NW-9D", got, w.WaterLevels[0].String)
+	}
+}
