@@ -1,7 +1,6 @@
 package features
 
 import (
-	"encoding/csv"
 	"encoding/json"
 	"fmt"
 	"io"
@@ -81,7 +80,7 @@ var csvHeader = []string{"file", "line", "well", "depth", "elevation", "depth_un
 	"pole_trend", "pole_plunge", "aperture", "diameter_unit", "inflow", "inflow_unit", "confidence", "method", "hole_diameter", "fit_residual", "file_north", "note"}
 
 func writeCSV(w io.Writer, rows []Row) error {
-	cw := csv.NewWriter(w)
+	cw := table.NewCSV(w)
 	cw.Write(csvHeader)
 	for _, r := range rows {
 		f := r.Feature

@@ -2,7 +2,6 @@ package gis
 
 import (
 	"bytes"
-	"encoding/csv"
 	"encoding/json"
 	"fmt"
 
@@ -115,7 +114,7 @@ func cellJSON(c table.Cell) []byte {
 // and the caution.
 func (x *Export) CSV() ([]byte, error) {
 	var b bytes.Buffer
-	w := csv.NewWriter(&b)
+	w := table.NewCSV(&b)
 	head := []string{pointTitle}
 	for _, c := range x.Columns {
 		head = append(head, c.Title())

@@ -1,7 +1,6 @@
 package quantities
 
 import (
-	"encoding/csv"
 	"io"
 	"strconv"
 	"strings"
@@ -82,7 +81,7 @@ var csvColumns = []csvColumn{
 // of every well, the order and as-built lists, then the profiles in force
 // and the caution. Fields are made inert against formula injection.
 func writeCSV(w io.Writer, rep *Report) error {
-	cw := csv.NewWriter(w)
+	cw := table.NewCSV(w)
 	header := make([]string, len(csvColumns))
 	for i, c := range csvColumns {
 		header[i] = c.Header

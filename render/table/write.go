@@ -2,7 +2,6 @@ package table
 
 import (
 	"bytes"
-	"encoding/csv"
 	"fmt"
 	"io"
 	"strings"
@@ -13,7 +12,7 @@ import (
 // as it is. The caution goes with the other forms (Markdown, XLSX, book)
 // and the command prints it.
 func (t *Table) CSV(w io.Writer) error {
-	cw := csv.NewWriter(w)
+	cw := NewCSV(w)
 	header := t.Header()
 	if err := cw.Write(header); err != nil {
 		return fmt.Errorf("csv: %w", err)
