@@ -216,6 +216,14 @@ func nestedWell(o Options) []part {
 		with(iv(45, 64, 13.7, 19.5), same("uscs", "CL", fill), same("description", "Lean CLAY, stiff", fill)),
 		with(iv(64, 82, 19.5, 25.0), same("uscs", "SW", fill), same("description", "Well-graded SAND with gravel, wet", fill)),
 	)...)
+	level := func(note, name string, ft, m float64, at string) part {
+		return part{path: "water_level", array: true, note: note, vals: []value{
+			same("string", name, keep), per("depth", ft, m, fill), same("reference", "ground", fill), same("kind", "static", fill), same("measured", at, fill),
+		}}
+	}
+	parts = append(parts,
+		level("Each well of the nest has its own head: name the string a level was measured in.", shallow, 26.1, 7.95, "2026-03-20T08:15:00"),
+		level("", deep, 29.4, 8.96, "2026-03-20T08:30:00"))
 	return append(parts, flushMount(12, 300)...)
 }
 
