@@ -101,7 +101,8 @@ table{border-collapse:collapse}
 td,th{padding:.15em .6em;text-align:left;border-bottom:1px solid #ddd}
 .st{display:inline-block;padding:0 .5em;border-radius:.8em;font-size:.85em;font-weight:600}
 .st.clean{background:#d7efd9;color:#1b5e20}.st.warnings{background:#fff1c9;color:#7a5300}
-.st.errors{background:#fbd5d1;color:#8c1d18}.st.planned{background:#dde7f6;color:#1f3f77}
+.st.errors,.st.unreadable{background:#fbd5d1;color:#8c1d18}.st.planned{background:#dde7f6;color:#1f3f77}
+.st.waived{background:#e4ebe4;color:#33503a}
 section.well{scroll-margin-top:3em;background:#fff;margin:1.2em 0;padding:.6em 1em;border-radius:6px;box-shadow:0 1px 3px #0002}
 section.well h2{margin:.2em 0}section.well h2 small{font-weight:normal;color:#777;font-size:.6em}
 li.error code,li.warning code,li.waived code{color:#555}

@@ -7,6 +7,8 @@ import (
 	"slices"
 	"strings"
 	"testing"
+
+	"github.com/tremie-dev/tremie/render/table"
 )
 
 // TestPageHoldsEachSheetsPlace: every sheet's img keeps the page's
@@ -76,7 +78,7 @@ func TestDuplicateIDsAreInputErrors(t *testing.T) {
 			continue
 		}
 		dups++
-		if w.Status != Errors || len(w.Problems) != 1 || len(w.Sheets) != 0 ||
+		if w.Status != table.Unreadable || len(w.Problems) != 1 || len(w.Sheets) != 0 ||
 			!strings.Contains(w.Problems[0].Error(), `well ID "MW-2" is also the ID of wells/MW-2`) {
 			t.Errorf("%s: %s %v, want an input error naming the other file", w.Key, w.Status, w.Problems)
 		}
@@ -126,5 +128,27 @@ func TestFolderWithoutProjectNamesFilesInIt(t *testing.T) {
 	}
 	if _, body := get(t, s.Handler(), "/"); strings.Contains(body, filepath.Join(dir, "north")) {
 		t.Error("the page names a well by its full path")
+	}
+}
+
+// TestStatusesAgreeWithTheBook: the page calls each demo well what the
+// summary table and the book call it; MW-2, whose one finding is
+// waived, is "waived" (the page once said "clean"), MW-4 "planned",
+// MW-3 "errors".
+func TestStatusesAgreeWithTheBook(t *testing.T) {
+	dir := demoProject(t)
+	s, _ := countingServer(t, dir)
+	want := map[string]table.Status{"MW-1": table.Clean, "MW-2": table.Waived, "MW-3": table.Errors, "MW-4": table.Planned}
+	for _, w := range s.wells {
+		if st, ok := want[w.ID]; ok && w.Status != st {
+			t.Errorf("%s: %s, want %s", w.ID, w.Status, st)
+		}
+		delete(want, w.ID)
+	}
+	if len(want) > 0 {
+		t.Errorf("wells not on the page: %v", want)
+	}
+	if _, body := get(t, s.Handler(), "/"); !strings.Contains(body, `<span class="st waived">waived</span>`) {
+		t.Error("the page shows no waived status")
 	}
 }

@@ -16,21 +16,16 @@ import (
 
 	"github.com/tremie-dev/tremie/render/out"
 	"github.com/tremie-dev/tremie/render/pipeline"
+	"github.com/tremie-dev/tremie/render/table"
 	"github.com/tremie-dev/tremie/render/wallimage"
 	"github.com/tremie-dev/tremie/schema"
 	"github.com/tremie-dev/tremie/schema/quantity"
 	"github.com/tremie-dev/tremie/schema/rules"
 )
 
-// Status is a well's standing on the page.
-type Status string
-
-const (
-	Clean    Status = "clean"
-	Warnings Status = "warnings"
-	Errors   Status = "errors" // an unwaived error finding, or the file could not be read
-	Planned  Status = "planned"
-)
+// Status is a well's standing on the page, in the words of the summary
+// table and the book (table.StatusOf).
+type Status = table.Status
 
 // Well is one well file as the page shows it.
 type Well struct {
@@ -127,7 +122,7 @@ func prepare(st *settings, in pipeline.Input, prev *Well) *Well {
 	if prev != nil && prev.Version == version && rerr == nil {
 		return prev
 	}
-	w := &Well{Key: in.Key, Path: in.Path, Version: versionOf(nil), Status: Errors}
+	w := &Well{Key: in.Key, Path: in.Path, Version: versionOf(nil), Status: table.Unreadable}
 	pw := pipeline.Prepare(in, pipeline.AllRules)
 	if pw.Err != nil {
 		w.Problems = problemsOf(pw.Err, in)
@@ -146,7 +141,7 @@ func prepare(st *settings, in pipeline.Input, prev *Well) *Well {
 			w.Findings[i].File = in.Key // name the file as the project does
 		}
 	}
-	w.Status = statusOf(pw.Well, w.Findings)
+	w.Status = table.StatusOf(pw.Well, w.Findings)
 	doc, err := pw.Layout(pipeline.LayoutOptions{})
 	if err != nil {
 		w.Problems = problemsOf(err, in)
@@ -220,22 +215,7 @@ func markDuplicateIDs(wells []*Well) {
 			continue
 		}
 		w := wells[of[k]]
-		wells[of[k]] = &Well{Key: w.Key, Path: w.Path, ID: w.ID, Status: Errors, Problems: schema.ErrorList{e},
+		wells[of[k]] = &Well{Key: w.Key, Path: w.Path, ID: w.ID, Status: table.Unreadable, Problems: schema.ErrorList{e},
 			Version: fmt.Sprintf("%.16x", sha256.Sum256([]byte(w.Version+e.Error()))), Images: w.Images, prepared: w}
 	}
-}
-
-func statusOf(w *schema.Well, findings []rules.Finding) Status {
-	if rules.Blocking(findings) {
-		return Errors
-	}
-	if strings.EqualFold(strings.TrimSpace(w.Status), "planned") {
-		return Planned
-	}
-	for _, f := range findings {
-		if !f.Waived {
-			return Warnings
-		}
-	}
-	return Clean
 }

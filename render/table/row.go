@@ -256,10 +256,8 @@ func rowOf(e Entry, u schema.DepthUnit) Row {
 	if ok {
 		water(w, &r, wl, u)
 	}
-	r.Status, r.Errors, r.Warnings, r.Waived = status(e.Findings)
-	if w.IsPlanned() && r.Status != Errors {
-		r.Status = Planned
-	}
+	_, r.Errors, r.Warnings, r.Waived = status(e.Findings)
+	r.Status = StatusOf(w, e.Findings)
 	return r
 }
 
@@ -409,6 +407,18 @@ func fillCell(fs []schema.Fill, u schema.DepthUnit) string {
 
 func interval(top, bot schema.Length, u schema.DepthUnit) string {
 	return schema.TrimFloat(top.In(u), 2) + "–" + schema.TrimFloat(bot.In(u), 2)
+}
+
+// StatusOf is a readable well's status, one rule for the table, the
+// book, the export and the live page: errors (an unwaived error finding)
+// before planned (a design: nothing placed to check yet), then warnings,
+// waived (every finding waived), clean.
+func StatusOf(w *schema.Well, fs []rules.Finding) Status {
+	s, _, _, _ := status(fs)
+	if w.IsPlanned() && s != Errors {
+		return Planned
+	}
+	return s
 }
 
 func status(fs []rules.Finding) (s Status, errs, warns, waived int) {
