@@ -35,7 +35,8 @@ func Template(date time.Time) ([]byte, error) {
 		return r
 	}
 	b.intervals = []map[string]value{
-		row("borehole", "top", 0, "bottom", 45, "diameter", 8.25, "method", "hollow-stem auger"),
+		row("borehole", "top", 0, "bottom", 1, "diameter", 16, "method", "post-hole auger, for the vault"),
+		row("borehole", "top", 1, "bottom", 45, "diameter", 8.25, "method", "hollow-stem auger"),
 		row("string", "name", "EX-1", "top_cap", "locking expansion plug", "bottom_cap", "threaded end plug"),
 		row("riser", "string", "EX-1", "top", 0.33, "bottom", 34, "material", "PVC", "size", "2", "schedule", "40", "joint", "flush-threaded"),
 		row("screen", "string", "EX-1", "top", 34, "bottom", 44, "material", "PVC", "size", "2", "schedule", "40", "slot_number", 10, "type", "slotted"),
