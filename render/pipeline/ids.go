@@ -12,6 +12,18 @@ type IDAt struct {
 	File string // as the error should name it
 	ID   string
 	Line int // of well.id
+	// Locate, when set and Line is 0, finds the line: only a duplicate's
+	// message needs it, and finding a key's line scans the whole file
+	// text, which checking a clean well never does (a tenth of check).
+	Locate func() int
+}
+
+// line is where x's ID stands.
+func (x IDAt) line() int {
+	if x.Line == 0 && x.Locate != nil {
+		return x.Locate()
+	}
+	return x.Line
 }
 
 // maxOthersNamed is how many other files a duplicate ID's message names.
@@ -45,7 +57,7 @@ func DuplicateIDs(ids []IDAt) []*schema.Error {
 			var others []string
 			for _, j := range same {
 				if j != i {
-					others = append(others, fmt.Sprintf("%s:%d", ids[j].File, ids[j].Line))
+					others = append(others, fmt.Sprintf("%s:%d", ids[j].File, ids[j].line()))
 				}
 			}
 			// Name a few: many copies would make every message as long
@@ -53,7 +65,7 @@ func DuplicateIDs(ids []IDAt) []*schema.Error {
 			if n := len(others); n > maxOthersNamed {
 				others = append(others[:maxOthersNamed], fmt.Sprintf("%d other files", n-maxOthersNamed))
 			}
-			errs[i] = &schema.Error{File: ids[i].File, Line: ids[i].Line, Key: "well.id",
+			errs[i] = &schema.Error{File: ids[i].File, Line: ids[i].line(), Key: "well.id",
 				Msg: fmt.Sprintf("well ID %q is also the ID of %s: each well needs its own ID (rename or move the copy)", ids[i].ID, strings.Join(others, ", "))}
 		}
 	}
@@ -69,7 +81,8 @@ func markDuplicateIDs(wells []*Well) {
 		if w.Err != nil || w.Well == nil {
 			continue
 		}
-		ids = append(ids, IDAt{File: w.Path, ID: w.Well.ID, Line: w.Well.Line("well.id")})
+		wl := w.Well
+		ids = append(ids, IDAt{File: w.Path, ID: wl.ID, Locate: func() int { return wl.Line("well.id") }})
 		of = append(of, w)
 	}
 	for i, e := range DuplicateIDs(ids) {
