@@ -45,10 +45,10 @@ type Well struct {
 	// Version, so that a changed image redraws the sheet, and their
 	// folders are watched.
 	Images []string
-	// idLine is the line of well.id, for the error naming a well that
-	// shares its ID; prepared is the well as drawn when this is such an
+	// idLine finds the line of well.id, for the error naming a well that
+	// shares its ID (only then: it scans the file's keys); prepared is the well as drawn when this is such an
 	// error laid over it, kept so that an unchanged file is not drawn again.
-	idLine   int
+	idLine   func() int
 	prepared *Well
 }
 
@@ -131,7 +131,8 @@ func prepare(st *settings, in pipeline.Input, prev *Well) *Well {
 	w.Images = wallimage.Paths(in.Path, pw.Well)
 	w.Version = versionOf(w.Images)
 	w.ID = pw.ID
-	w.idLine = pw.Well.Line("well.id")
+	wl := pw.Well
+	w.idLine = func() int { return wl.Line("well.id") }
 	note := in.Setting.Profile.ThresholdNote() // "rule thresholds ..."
 	w.Thresholds = strings.ToUpper(note[:1]) + note[1:]
 	w.Quantities = pw.Quantities
@@ -206,7 +207,7 @@ func markDuplicateIDs(wells []*Well) {
 	var of []int
 	for i, w := range wells {
 		if w.Problems == nil && w.ID != "" {
-			ids = append(ids, pipeline.IDAt{File: w.Key, ID: w.ID, Line: w.idLine})
+			ids = append(ids, pipeline.IDAt{File: w.Key, ID: w.ID, Locate: w.idLine})
 			of = append(of, i)
 		}
 	}

@@ -256,8 +256,9 @@ func rowOf(e Entry, u schema.DepthUnit) Row {
 	if ok {
 		water(w, &r, wl, u)
 	}
-	_, r.Errors, r.Warnings, r.Waived = status(e.Findings)
-	r.Status = StatusOf(w, e.Findings)
+	var s Status
+	s, r.Errors, r.Warnings, r.Waived = status(e.Findings)
+	r.Status = plannedOr(w, s)
 	return r
 }
 
@@ -415,6 +416,11 @@ func interval(top, bot schema.Length, u schema.DepthUnit) string {
 // waived (every finding waived), clean.
 func StatusOf(w *schema.Well, fs []rules.Finding) Status {
 	s, _, _, _ := status(fs)
+	return plannedOr(w, s)
+}
+
+// plannedOr is s, or planned for a design without an unwaived error.
+func plannedOr(w *schema.Well, s Status) Status {
 	if w.IsPlanned() && s != Errors {
 		return Planned
 	}
